@@ -1,0 +1,179 @@
+package units
+
+import (
+	"fmt"
+	"math"
+)
+
+// System is the unit system a job is written in.
+type System int
+
+const (
+	US System = iota // US customary: in, kip, ksi, in²
+	SI               // SI: mm, kN, MPa, mm²
+)
+
+// String returns the job-file spelling of the system.
+func (s System) String() string {
+	if s == SI {
+		return "si"
+	}
+	return "us"
+}
+
+// ParseSystem reads the job-file spelling of a unit system.
+func ParseSystem(s string) (System, error) {
+	switch s {
+	case "us":
+		return US, nil
+	case "si":
+		return SI, nil
+	}
+	return US, fmt.Errorf("unknown unit system %q (want us or si)", s)
+}
+
+// Dim is the physical dimension of a quantity.
+type Dim int
+
+const (
+	Dimensionless Dim = iota
+	DimLength
+	DimForce
+	DimStress
+	DimArea
+)
+
+// String names the dimension for error messages.
+func (d Dim) String() string {
+	switch d {
+	case DimLength:
+		return "length"
+	case DimForce:
+		return "force"
+	case DimStress:
+		return "stress"
+	case DimArea:
+		return "area"
+	}
+	return "number"
+}
+
+// Length is a length in millimetres.
+type Length float64
+
+// Force is a force in newtons.
+type Force float64
+
+// Stress is a stress in megapascals (N/mm²).
+type Stress float64
+
+// Area is an area in square millimetres.
+type Area float64
+
+// Exact conversion factors to the internal units.
+const (
+	Millimetre Length = 1
+	Metre      Length = 1000
+	Inch       Length = 25.4
+	Foot       Length = 12 * Inch
+
+	Newton     Force = 1
+	Kilonewton Force = 1000
+	Kip        Force = 4448.2216152605 // 1000 lbf
+
+	Megapascal Stress = 1
+	Ksi        Stress = 6.894757293168361 // kip/in²
+
+	SquareMillimetre Area = 1
+	SquareInch       Area = Area(Inch * Inch)
+)
+
+// In returns the length in inches.
+func (l Length) In() float64 { return float64(l / Inch) }
+
+// Mm returns the length in millimetres.
+func (l Length) Mm() float64 { return float64(l) }
+
+// Kip returns the force in kips.
+func (f Force) Kip() float64 { return float64(f / Kip) }
+
+// KN returns the force in kilonewtons.
+func (f Force) KN() float64 { return float64(f / Kilonewton) }
+
+// Ksi returns the stress in ksi.
+func (s Stress) Ksi() float64 { return float64(s / Ksi) }
+
+// Mul returns the area of a rectangle.
+func (l Length) Mul(m Length) Area { return Area(float64(l) * float64(m)) }
+
+// Times returns the force a stress produces on an area.
+func (s Stress) Times(a Area) Force { return Force(float64(s) * float64(a)) }
+
+// Labels are the unit names printed beside values of one system.
+type Labels struct {
+	Length string `json:"length"`
+	Force  string `json:"force"`
+	Stress string `json:"stress"`
+	Area   string `json:"area"`
+}
+
+// Labels returns the unit names used when printing values in s.
+func (s System) Labels() Labels {
+	if s == SI {
+		return Labels{Length: "mm", Force: "kN", Stress: "MPa", Area: "mm2"}
+	}
+	return Labels{Length: "in", Force: "kip", Stress: "ksi", Area: "in2"}
+}
+
+// Label returns the printed unit of dimension d in s ("" for numbers).
+func (s System) Label(d Dim) string {
+	l := s.Labels()
+	switch d {
+	case DimLength:
+		return l.Length
+	case DimForce:
+		return l.Force
+	case DimStress:
+		return l.Stress
+	case DimArea:
+		return l.Area
+	}
+	return ""
+}
+
+// scale is the internal value of one printed unit of dimension d in s.
+func (s System) scale(d Dim) float64 {
+	us := s == US
+	switch d {
+	case DimLength:
+		if us {
+			return float64(Inch)
+		}
+		return 1
+	case DimForce:
+		if us {
+			return float64(Kip)
+		}
+		return float64(Kilonewton)
+	case DimStress:
+		if us {
+			return float64(Ksi)
+		}
+		return 1
+	case DimArea:
+		if us {
+			return float64(SquareInch)
+		}
+		return 1
+	}
+	return 1
+}
+
+// ToJob converts an internal value of dimension d to the printed unit of s.
+func (s System) ToJob(v float64, d Dim) float64 { return v / s.scale(d) }
+
+// FromJob converts a value in the printed unit of s to the internal unit.
+func (s System) FromJob(v float64, d Dim) float64 { return v * s.scale(d) }
+
+// finite reports whether v is a usable number.
+func finite(v float64) bool { return !math.IsNaN(v) && !math.IsInf(v, 0) }
