@@ -1,0 +1,64 @@
+package detail
+
+import (
+	"fmt"
+
+	"gaugeline/engine"
+	"gaugeline/rules/units"
+)
+
+// InputError is bad input: it names the file, the field path and, for
+// YAML, the line. The command line maps it to exit code 2.
+type InputError struct {
+	File  string // path of the job or measured file
+	Line  int    // 1-based; 0 when unknown
+	Field string // dotted field path, e.g. "bolts.pitch" or "holes[2]"
+	Msg   string
+	Hint  string // optional advice printed as a hint line
+}
+
+func (e *InputError) Error() string {
+	loc := e.File
+	if e.Line > 0 {
+		loc = fmt.Sprintf("%s:%d", e.File, e.Line)
+	}
+	if e.Field != "" {
+		return fmt.Sprintf("%s: %s: %s", loc, e.Field, e.Msg)
+	}
+	return fmt.Sprintf("%s: %s", loc, e.Msg)
+}
+
+// MemberInfo is what the detailing checks need of the member beyond the
+// limit states' model.
+type MemberInfo struct {
+	Designation string       // "L4x4x1/2", "PL 6x1/2", for people
+	K           units.Length // angles: heel to the end of the fillet
+	Length      units.Length // unbraced length for slenderness; 0 = not given
+	Rmin        units.Length // least radius of gyration of the member
+	Weathering  bool         // unpainted weathering steel (A588)
+	Grade       string       // member steel grade name
+	PlateGrade  string       // plate steel grade name
+}
+
+// Design is a job resolved into the engine's model: ready to check.
+type Design struct {
+	Job  *Job
+	Conn engine.Connection
+	Info MemberInfo
+	// Combination names the governing load combination when the demand was
+	// combined from service loads ("" when given as required).
+	Combination string
+}
+
+// Finding is the outcome of one detailing check.
+type Finding struct {
+	ID       string // stable id, e.g. "edge.min"
+	Clause   string
+	Measured float64 // internal units of Dim
+	Limit    float64
+	Dim      units.Dim
+	// Pass is true when the rule is met; Advisory findings never fail a job.
+	Pass     bool
+	Advisory bool
+	Where    string // which holes or edge, e.g. "H1 to member end"
+}

@@ -1,0 +1,18 @@
+// Package engine computes the tension limit states of AISC 360 for a bolted
+// connection: pure functions of the geometry, the materials and a rule
+// edition. It knows nothing of job files or drawings.
+//
+// Units: the internal units of package units (mm, N, MPa, mm²).
+//
+// Axes: x runs along the member axis from the member's cut end (x = 0) into
+// the member; y runs across the connected leg from the heel (angles) or
+// across the width from one edge (flats). The member is pulled toward +x, so
+// its bolts bear toward the member end (−x). The plate's free edge lies at
+// x = last bolt + plate edge distance and the plate is pulled toward −x, so
+// its bolts bear toward that free edge (+x).
+//
+// Every limit state returns a Result carrying its id, the clause of the
+// edition in force, nominal and available strength, the demand, the ratio
+// and the intermediate values used, so that reports can quote them. A
+// failing limit state is a result, not an error.
+package engine

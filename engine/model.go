@@ -1,0 +1,117 @@
+package engine
+
+import (
+	"gaugeline/rules"
+	"gaugeline/rules/units"
+)
+
+// Shape is the cross-section of the tension member.
+type Shape int
+
+const (
+	Angle       Shape = iota // single angle, one leg bolted
+	DoubleAngle              // two angles back to back, both bolted through the plate
+	Flat                     // flat bar, bolted through its width
+)
+
+var shapeNames = [...]string{"angle", "double-angle", "flat"}
+
+// String returns the job-file spelling.
+func (s Shape) String() string { return shapeNames[s] }
+
+// Member is the tension member at its connected end.
+type Member struct {
+	Shape Shape
+	// Width is the connected leg of an angle (heel to toe) or the width of
+	// a flat: the part the holes lie in, y from 0 to Width.
+	Width units.Length
+	// Outstanding is the other leg of an angle (zero for flats).
+	Outstanding units.Length
+	// T is the thickness of one piece.
+	T units.Length
+	// Ag is the gross area of the whole member (both angles of a pair).
+	Ag units.Area
+	// Xbar is the connection eccentricity x̄ of one piece, measured from the
+	// faying face (zero for flats).
+	Xbar units.Length
+	// Pieces is 2 for a double angle, otherwise 1.
+	Pieces int
+	Fy, Fu units.Stress
+}
+
+// PlateKind is the role of the connecting plate.
+type PlateKind int
+
+const (
+	Gusset PlateKind = iota
+	Splice
+)
+
+// String returns the job-file spelling.
+func (k PlateKind) String() string {
+	if k == Splice {
+		return "splice"
+	}
+	return "gusset"
+}
+
+// Plate is the gusset or splice plate the member bolts to: a rectangle
+// Width across the load, centred in y on the bolt group, ending at its
+// free edge x = FreeEdge.
+type Plate struct {
+	Kind     PlateKind
+	T        units.Length
+	Width    units.Length
+	FreeEdge units.Length // x of the plate's free edge
+	YCentre  units.Length // y of the plate's centre line
+	Fy, Fu   units.Stress
+}
+
+// YMin and YMax are the plate's side edges in the member frame.
+func (p *Plate) YMin() units.Length { return p.YCentre - p.Width/2 }
+func (p *Plate) YMax() units.Length { return p.YCentre + p.Width/2 }
+
+// Bolt is the bolt specification shared by every hole.
+type Bolt struct {
+	D       units.Length
+	Grade   rules.BoltGrade
+	Threads rules.Threads
+	Joint   rules.Joint
+	Surface rules.SlipClass
+	Fillers int
+	// DeformationConsidered: deformation at the bolt hole at service load is
+	// a design consideration (J3.10(a) [J3.11(a)]).
+	DeformationConsidered bool
+}
+
+// Hole is one bolt hole through the member and the plate. Dx and Dy are the
+// hole's nominal extents along x and y: the diameter for a round hole; for a
+// slot, its length along its long axis and its width across it.
+type Hole struct {
+	ID     string
+	X, Y   units.Length
+	Type   rules.HoleType
+	Slot   rules.SlotDir
+	Dx, Dy units.Length
+}
+
+// Connection is everything the limit states need.
+type Connection struct {
+	Edition *rules.Edition
+	Method  rules.Method
+	Member  Member
+	Plate   *Plate // nil: the member alone is checked
+	Bolt    Bolt
+	Holes   []Hole
+	// Demand is the required strength: factored (LRFD) or service (ASD).
+	Demand units.Force
+}
+
+// ShearPlanes is the number of bolt shear planes (and slip planes): two
+// for a double angle on a plate between them, otherwise one.
+func (c *Connection) ShearPlanes() int {
+	if c.Member.Shape == DoubleAngle {
+		return 2
+	}
+	return 1
+}
