@@ -1,6 +1,9 @@
 package rules
 
 import (
+	"fmt"
+	"strings"
+
 	"gaugeline/rules/units"
 )
 
@@ -17,7 +20,16 @@ func Names() []string { return []string{"aisc360-22", "aisc360-16"} }
 
 // Lookup returns the named edition with its tables in the given unit system.
 func Lookup(name string, sys units.System) (*Edition, error) {
-	panic("rules: Lookup not implemented")
+	if sys != units.US && sys != units.SI {
+		return nil, fmt.Errorf("unknown unit system %d (want us or si)", int(sys))
+	}
+	switch name {
+	case "aisc360-22":
+		return &Edition{Name: name, Year: 2022, System: sys}, nil
+	case "aisc360-16":
+		return &Edition{Name: name, Year: 2016, System: sys}, nil
+	}
+	return nil, fmt.Errorf("unknown edition %q (want one of %s)", name, strings.Join(Names(), ", "))
 }
 
 // String names the edition and its unit system, e.g. "aisc360-22 (us)".
@@ -26,76 +38,83 @@ func (e *Edition) String() string { return e.Name + " (" + e.System.String() + "
 // Clause returns the label, in this edition, of the clause a 360-16 label
 // names: under 360-22 "J3.10" becomes "J3.11"; labels outside J3 (and table
 // names) are unchanged.
-func (e *Edition) Clause(label16 string) string { panic("rules: Clause not implemented") }
+func (e *Edition) Clause(label16 string) string { return e.clause(label16) }
 
 // Diameters lists the bolt diameters tabulated in this edition and system,
 // smallest first (us: 1/2 … 1-1/2 in; si: M12 (360-22 only) … M36).
-func (e *Edition) Diameters() []units.Length { panic("rules: not implemented") }
+func (e *Edition) Diameters() []units.Length {
+	tab := e.tableDiameters()
+	ds := make([]units.Length, len(tab))
+	for i, D := range tab {
+		ds[i] = units.Length(D) * e.unit()
+	}
+	return ds
+}
 
 // Hole returns the nominal hole size for bolt diameter d (Table J3.3 [J3.3M]).
 func (e *Edition) Hole(d units.Length, t HoleType) (HoleSize, error) {
-	panic("rules: not implemented")
+	return e.hole(d, t)
 }
 
 // HoleAllowance is what B4.3 adds to the nominal hole for net area:
 // 1/16 in (us) or 2 mm (si).
-func (e *Edition) HoleAllowance() units.Length { panic("rules: not implemented") }
+func (e *Edition) HoleAllowance() units.Length { return e.holeAllowance() }
 
 // MinEdge is the minimum distance from the centre of a standard hole to any
 // edge (Table J3.4 [J3.4M]).
-func (e *Edition) MinEdge(d units.Length) (units.Length, error) { panic("rules: not implemented") }
+func (e *Edition) MinEdge(d units.Length) (units.Length, error) { return e.minEdge(d) }
 
 // EdgeIncrement is C2 of Table J3.5 [J3.5M] for a hole of type t whose long
 // axis is perpendicular to the edge (0 for standard holes; callers pass
 // Standard for slots parallel to the edge).
 func (e *Edition) EdgeIncrement(d units.Length, t HoleType) (units.Length, error) {
-	panic("rules: not implemented")
+	return e.edgeIncrement(d, t)
 }
 
 // MinSpacing is 2-2/3·d, the least centre-to-centre spacing (J3.3 [J3.4]).
-func (e *Edition) MinSpacing(d units.Length) units.Length { panic("rules: not implemented") }
+func (e *Edition) MinSpacing(d units.Length) units.Length { return minSpacing(d) }
 
 // ClearSpacingRule reports whether the clear distance between holes must
 // also be at least d (360-22 only).
-func (e *Edition) ClearSpacingRule() bool { panic("rules: not implemented") }
+func (e *Edition) ClearSpacingRule() bool { return e.is22() }
 
 // MaxEdge is the largest distance from a bolt centre to the nearest edge of
 // a part of thickness t in contact: 12t, at most 6 in (150 mm) (J3.5 [J3.6]).
-func (e *Edition) MaxEdge(t units.Length) units.Length { panic("rules: not implemented") }
+func (e *Edition) MaxEdge(t units.Length) units.Length { return e.maxEdge(t) }
 
 // MaxSpacing is the largest longitudinal spacing for a plate and shape in
 // continuous contact, t the thinner part: 24t ≤ 12 in (360-16: 305 mm,
 // 360-22: 300 mm); unpainted weathering steel 14t ≤ 7 in (180 mm).
 func (e *Edition) MaxSpacing(t units.Length, weathering bool) units.Length {
-	panic("rules: not implemented")
+	return e.maxSpacing(t, weathering)
 }
 
 // Bolt returns a bolt grade by its job-file name (us: A307, A325, A490,
 // F1852, F2280 and the F3125 spellings; si: A325M, A490M).
-func (e *Edition) Bolt(name string) (BoltGrade, error) { panic("rules: not implemented") }
+func (e *Edition) Bolt(name string) (BoltGrade, error) { return e.bolt(name) }
 
 // BoltGrades lists the grade names Bolt accepts in this edition and system.
-func (e *Edition) BoltGrades() []string { panic("rules: not implemented") }
+func (e *Edition) BoltGrades() []string { return e.boltGrades() }
 
 // GroupName is the edition's name for a bolt group ("Group A" under
 // 360-16, "Group 120" under 360-22).
-func (e *Edition) GroupName(g BoltGroup) string { panic("rules: not implemented") }
+func (e *Edition) GroupName(g BoltGroup) string { return e.groupName(g) }
 
 // Pretension is the minimum bolt pretension Tb (Table J3.1 [J3.1M]).
 func (e *Edition) Pretension(b BoltGrade, d units.Length) (units.Force, error) {
-	panic("rules: not implemented")
+	return e.pretension(b, d)
 }
 
 // LongJoint returns the pattern length beyond which Fnv is reduced for
 // end-loaded joints (38 in, 950 mm) and the factor applied (0.833).
-func (e *Edition) LongJoint() (units.Length, float64) { panic("rules: not implemented") }
+func (e *Edition) LongJoint() (units.Length, float64) { return e.longJoint() }
 
 // Steel returns a steel grade by name: A36, A572-50, A992, A588, A529-50
 // (si values per the ASTM metric designations).
-func (e *Edition) Steel(name string) (Steel, error) { panic("rules: not implemented") }
+func (e *Edition) Steel(name string) (Steel, error) { return e.steel(name) }
 
 // SteelGrades lists the grade names Steel accepts.
-func (e *Edition) SteelGrades() []string { panic("rules: not implemented") }
+func (e *Edition) SteelGrades() []string { return steelGrades() }
 
 // Resistance factors of chapters D, J.
 func (e *Edition) YieldFactor() Factor   { return Factor{0.90, 1.67} }
@@ -108,31 +127,31 @@ func (e *Edition) BearingFactor() Factor    { return Factor{0.75, 2.00} }
 
 // SlipFactor is φ/Ω for slip by hole type and slot direction relative to
 // the load (J3.8 [J3.9]).
-func (e *Edition) SlipFactor(t HoleType, dir SlotDir) Factor { panic("rules: not implemented") }
+func (e *Edition) SlipFactor(t HoleType, dir SlotDir) Factor { return slipFactor(t, dir) }
 
 // Mu is the mean slip coefficient of a faying surface class.
-func (e *Edition) Mu(c SlipClass) float64 { panic("rules: not implemented") }
+func (e *Edition) Mu(c SlipClass) float64 { return mu(c) }
 
 // Du is the ratio of mean installed to specified minimum pretension (1.13).
 func (e *Edition) Du() float64 { return 1.13 }
 
 // Hf is the filler factor: 1.0 with no filler or one, 0.85 with two or more.
-func (e *Edition) Hf(fillers int) float64 { panic("rules: not implemented") }
+func (e *Edition) Hf(fillers int) float64 { return hf(fillers) }
 
 // BearingCoefficients returns the multipliers of d·t·Fu (bearing) and
 // lc·t·Fu (tearout) of J3.10 [J3.11]: 2.4 and 1.2 when deformation at
 // service load is a design consideration, 3.0 and 1.5 when it is not, 2.0
 // and 1.0 for long-slotted holes with the slot perpendicular to the force.
 func (e *Edition) BearingCoefficients(t HoleType, dir SlotDir, deformationConsidered bool) (bearing, tearout float64) {
-	panic("rules: not implemented")
+	return bearingCoefficients(t, dir, deformationConsidered)
 }
 
 // SplicePlateCap returns the cap on An/Ag for bolted splice plates and
 // whether the edition has it (360-16 J4.1(b): 0.85; 360-22: none).
-func (e *Edition) SplicePlateCap() (float64, bool) { panic("rules: not implemented") }
+func (e *Edition) SplicePlateCap() (float64, bool) { return e.splicePlateCap() }
 
 // HolePermitted says whether a hole type is permitted for the joint type
 // and slot direction (J3.2 [J3.3]); why explains a refusal.
 func (e *Edition) HolePermitted(t HoleType, dir SlotDir, j Joint) (ok bool, why string) {
-	panic("rules: not implemented")
+	return e.holePermitted(t, dir, j)
 }

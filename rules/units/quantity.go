@@ -177,3 +177,6 @@ func (s System) FromJob(v float64, d Dim) float64 { return v * s.scale(d) }
 
 // finite reports whether v is a usable number.
 func finite(v float64) bool { return !math.IsNaN(v) && !math.IsInf(v, 0) }
+
+// In2 returns the area in square inches.
+func (a Area) In2() float64 { return float64(a / SquareInch) }

@@ -1,0 +1,137 @@
+package engine
+
+import (
+	"fmt"
+	"math"
+
+	"gaugeline/rules"
+	"gaugeline/rules/units"
+)
+
+// BoltArea is the nominal unthreaded body area Ab = π·d²/4.
+func BoltArea(d units.Length) units.Area { return units.Area(math.Pi / 4 * float64(d*d)) }
+
+// patternLength is the extent of the bolt group along the load.
+func patternLength(holes []Hole) units.Length {
+	if len(holes) == 0 {
+		return 0
+	}
+	xmin, xmax := holes[0].X, holes[0].X
+	for _, h := range holes {
+		xmin, xmax = min(xmin, h.X), max(xmax, h.X)
+	}
+	return xmax - xmin
+}
+
+// boltShearFnv returns Fnv with the long-joint reduction applied and that
+// reduction (1 when none).
+func boltShearFnv(c *Connection) (units.Stress, float64) {
+	Fnv := c.Bolt.Grade.Fnv(c.Bolt.Threads)
+	limit, f := c.Edition.LongJoint()
+	if patternLength(c.Holes) > limit+eps {
+		return Fnv * units.Stress(f), f
+	}
+	return Fnv, 1
+}
+
+// BoltShear is the shear rupture of the bolts: Rn = Fnv·Ab per shear
+// plane, summed over the bolts; Fnv is reduced to 83.3 % when an
+// end-loaded pattern is longer than 38 in (950 mm).
+//
+// Clause: J3.6 [J3.7]
+func BoltShear(c *Connection) Result {
+	Fnv, f := boltShearFnv(c)
+	Ab := BoltArea(c.Bolt.D)
+	n, ns := len(c.Holes), c.ShearPlanes()
+	Rn := Fnv.Times(Ab) * units.Force(n*ns)
+	return finish(c, "bolts.shear", "J3.6", Rn, c.Edition.BoltShearFactor(), []Value{
+		{"Fnv", float64(Fnv), units.DimStress},
+		{"Ab", float64(Ab), units.DimArea},
+		{"n", float64(n), units.Dimensionless},
+		{"planes", float64(ns), units.Dimensionless},
+		{"long_joint_factor", f, units.Dimensionless},
+		{"pattern_length", float64(patternLength(c.Holes)), units.DimLength},
+	}, fmt.Sprintf("%d bolts × %d shear plane(s), threads %s", n, ns, c.Bolt.Threads))
+}
+
+// BoltSlip is the slip resistance of a slip-critical joint:
+// Rn = μ·Du·hf·Tb·ns per bolt, summed over the bolts; φ and Ω by hole
+// type (the most severe hole type present governs).
+//
+// Clause: J3.8 [J3.9]
+func BoltSlip(c *Connection) (Result, error) {
+	e := c.Edition
+	Tb, err := e.Pretension(c.Bolt.Grade, c.Bolt.D)
+	if err != nil {
+		return Result{}, err
+	}
+	mu, Du, hf := e.Mu(c.Bolt.Surface), e.Du(), e.Hf(c.Bolt.Fillers)
+	ns, n := c.ShearPlanes(), len(c.Holes)
+	f := rules.Factor{Phi: math.Inf(1)}
+	for _, h := range c.Holes {
+		if hf := e.SlipFactor(h.Type, h.Slot); hf.Phi < f.Phi {
+			f = hf
+		}
+	}
+	if n == 0 {
+		f = e.SlipFactor(rules.Standard, rules.Transverse)
+	}
+	Rn := units.Force(mu*Du*hf*float64(ns)*float64(n)) * Tb
+	return finish(c, "bolts.slip", "J3.8", Rn, f, []Value{
+		{"mu", mu, units.Dimensionless},
+		{"Du", Du, units.Dimensionless},
+		{"hf", hf, units.Dimensionless},
+		{"Tb", float64(Tb), units.DimForce},
+		{"ns", float64(ns), units.Dimensionless},
+		{"n", float64(n), units.Dimensionless},
+		{"phi", f.Phi, units.Dimensionless},
+		{"omega", f.Omega, units.Dimensionless},
+	}, fmt.Sprintf("class %s surface, %d slip plane(s)", c.Bolt.Surface, ns)), nil
+}
+
+// BoltGroup is the strength of the bolt group taken bolt by bolt: each
+// bolt gives the least of its shear strength and the bearing or tearout
+// strength of its hole in the member and in the plate, and the group is
+// the sum. It is never weaker than the separate sums and governs only when
+// a hole's tearout is below the bolt's shear strength while another's is
+// above it.
+//
+// Clause: J3.6, J3.10 [J3.7, J3.11]
+func BoltGroup(c *Connection, member, plate []BoltShare) Result {
+	Fnv, _ := boltShearFnv(c)
+	shear := Fnv.Times(BoltArea(c.Bolt.D)) * units.Force(c.ShearPlanes())
+	var Rn units.Force
+	governs := map[string]int{}
+	for i := range c.Holes {
+		rn, by := shear, "bolt shear"
+		if member[i].Rn < rn {
+			rn, by = member[i].Rn, "member "+member[i].Governed
+		}
+		if plate != nil && plate[i].Rn < rn {
+			rn, by = plate[i].Rn, "plate "+plate[i].Governed
+		}
+		governs[by]++
+		Rn += rn
+	}
+	// bolt shear and bearing share φ = 0.75 and Ω = 2.00 (J3.6, J3.10)
+	r := finish(c, "bolts.group", "J3.6", Rn, c.Edition.BoltShearFactor(), []Value{
+		{"rn_shear", float64(shear), units.DimForce},
+		{"n", float64(len(c.Holes)), units.Dimensionless},
+	}, fmt.Sprintf("per bolt the least of shear, member and plate bearing/tearout; %s", describeCounts(governs)))
+	r.Clause = c.Edition.Clause("J3.6") + ", " + c.Edition.Clause("J3.10")
+	return r
+}
+
+func describeCounts(m map[string]int) string {
+	keys := []string{"bolt shear", "member bearing", "member tearout", "plate bearing", "plate tearout"}
+	s := ""
+	for _, k := range keys {
+		if m[k] > 0 {
+			if s != "" {
+				s += ", "
+			}
+			s += fmt.Sprintf("%s governs %d", k, m[k])
+		}
+	}
+	return s
+}

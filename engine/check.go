@@ -1,0 +1,42 @@
+package engine
+
+import "gaugeline/rules"
+
+// Check computes every limit state of the connection, in a stable order:
+// the member's, the plate's (when there is one), then the bolts'. A
+// failing limit state is a result; the error reports a lookup the edition
+// cannot answer (e.g. the pretension of a bolt grade that has none).
+func Check(c *Connection) ([]Result, error) {
+	out := []Result{MemberYield(c), MemberRupture(c), MemberBlockShear(c)}
+	mb := MemberBearing(c)
+	out = append(out, mb)
+	var plateShares []BoltShare
+	if c.Plate != nil {
+		pb := PlateBearing(c)
+		plateShares = pb.PerBolt
+		out = append(out, PlateYield(c), PlateRupture(c), PlateBlockShear(c), pb)
+	}
+	out = append(out, BoltShear(c))
+	if c.Bolt.Joint == rules.SlipCritical {
+		s, err := BoltSlip(c)
+		if err != nil {
+			return nil, err
+		}
+		out = append(out, s)
+	}
+	out = append(out, BoltGroup(c, mb.PerBolt, plateShares))
+	return out, nil
+}
+
+// Governing returns the index of the result with the highest ratio; ties
+// go to the earlier result, so the bolt-group check governs only when it
+// is strictly stricter than the separate checks. It returns -1 for none.
+func Governing(rs []Result) int {
+	g := -1
+	for i, r := range rs {
+		if g < 0 || r.Ratio > rs[g].Ratio*(1+1e-9) {
+			g = i
+		}
+	}
+	return g
+}

@@ -1,0 +1,158 @@
+package engine
+
+import (
+	"testing"
+
+	"gaugeline/rules"
+	"gaugeline/rules/units"
+)
+
+func TestBlockShearAngleToeStrip(t *testing.T) {
+	// The D.2 angle (L4x4x1/2 A36, four 3/4-in bolts at 3 in, end 1-1/2 in,
+	// gage 2-1/2 in), toe strip, hand calculation per AISC 360-22 J4.3:
+	//   Agv = 10.5(0.5) = 5.25 in², Anv = (10.5 − 3.5(0.875))(0.5) = 3.719 in²,
+	//   Ant = (1.5 − 0.5(0.875))(0.5) = 0.5313 in², Ubs = 1,
+	//   Rn = min(0.6(58)(3.719) + 58(0.5313), 0.6(36)(5.25) + 58(0.5313))
+	//      = min(160.2, 144.2125) = 144.2125 kips; φRn = 108.16 kips.
+	const src = "hand calculation per AISC 360-22 J4.3, B4.3b"
+	c := designExampleD2(t, rules.LRFD)
+	r := MemberBlockShear(c)
+	near(t, "Agv", value(t, r, "Agv")/float64(units.SquareInch), 5.25, 1e-9, src)
+	near(t, "Anv", value(t, r, "Anv")/float64(units.SquareInch), 3.71875, 1e-9, src)
+	near(t, "Ant", value(t, r, "Ant")/float64(units.SquareInch), 0.53125, 1e-9, src)
+	near(t, "Rn", r.Nominal.Kip(), 144.2125, 1e-6, src)
+	near(t, "φRn", r.Available.Kip(), 0.75*144.2125, 1e-6, src)
+}
+
+func TestBlockShearFlatBlocks(t *testing.T) {
+	// A 6-in flat, two gage lines at 1.5 and 4.5 in, two 3/4-in bolts per
+	// line at 3 in, end 1-1/2 in, t = 1/2 in, A36. Hand calculation per
+	// AISC 360-22 J4.3 (dh = 7/8 in with the B4.3 allowance):
+	//   central block: Agv = 2(4.5)(0.5) = 4.5, Anv = 2(4.5 − 1.5(0.875))(0.5)
+	//   = 3.1875, Ant = (3 − 0.875)(0.5) = 1.0625;
+	//   Rn = min(0.6·58·3.1875 + 58·1.0625, 0.6·36·4.5 + 58·1.0625)
+	//      = min(172.55, 158.825) = 158.825 kips.
+	//   outer L-block: Agv = 2.25, Anv = 1.59375, Ant = (1.5 − 0.4375)(0.5)
+	//   = 0.53125; Rn = min(55.4625 + 30.8125, 48.6 + 30.8125) = 79.4125.
+	//   The outer block to the near edge plus the line beyond crosses both
+	//   lines: Ant = (4.5 − 0.875 − 0.4375)(0.5) = 1.59375, Agv = 2.25,
+	//   Rn = min(55.4625 + 92.4375, 48.6 + 92.4375) = 141.0375.
+	// The weakest is the outer L-block, 79.4125 kips.
+	const src = "hand calculation per AISC 360-22 J4.3"
+	e := edition(t, "aisc360-22", units.US)
+	grade, _ := e.Bolt("A325")
+	c := &Connection{
+		Edition: e, Method: rules.LRFD,
+		Member: Member{Shape: Flat, Width: in(6), T: in(0.5), Ag: in2(3), Pieces: 1, Fy: ksi(36), Fu: ksi(58)},
+		Bolt:   Bolt{D: in(0.75), Grade: grade, DeformationConsidered: true},
+		Holes: append(line(1, 2, in(1.5), in(3), in(1.5), in(13.0/16), in(13.0/16), rules.Standard),
+			line(3, 2, in(1.5), in(3), in(4.5), in(13.0/16), in(13.0/16), rules.Standard)...),
+	}
+	p := blockPart{t: in(0.5), Fy: ksi(36), Fu: ksi(58), high: in(6), hasHigh: true, hasLow: true, toward: -1, name: "member"}
+	blocks := p.blocks(c)
+	want := map[string]float64{
+		"member: between lines 1 and 2":   158.825,
+		"member: line 1 to the near edge": 79.4125,
+		"member: line 2 to the far edge":  79.4125,
+		"member: line 2 to the near edge": 141.0375,
+		"member: line 1 to the far edge":  141.0375,
+	}
+	if len(blocks) != len(want) {
+		t.Fatalf("got %d blocks, want %d", len(blocks), len(want))
+	}
+	for _, b := range blocks {
+		w, ok := want[b.desc]
+		if !ok {
+			t.Errorf("unexpected block %q", b.desc)
+			continue
+		}
+		near(t, b.desc, b.Rn.Kip(), w, 1e-9, src)
+	}
+	near(t, "governing", MemberBlockShear(c).Nominal.Kip(), 79.4125, 1e-9, src)
+}
+
+func TestBearingTearoutPerBolt(t *testing.T) {
+	// The D.2 angle: the end bolt tears out toward the member end with
+	// lc = 1.5 − 13/32 = 1.09375 in; inner bolts have lc = 3 − 13/16 =
+	// 2.1875 in, where bearing 2.4·d·t·Fu = 52.2 kips governs over tearout
+	// 1.2·2.1875·0.5·58 = 76.1 kips. End bolt: 1.2·1.09375·0.5·58 = 38.06 kips.
+	// Σ = 38.0625 + 3(52.2) = 194.6625 kips (hand calculation per AISC
+	// 360-22 J3.11(a)).
+	const src = "hand calculation per AISC 360-22 J3.11(a)"
+	c := designExampleD2(t, rules.LRFD)
+	r := MemberBearing(c)
+	near(t, "lc end", r.PerBolt[0].Lc.In(), 1.09375, 1e-12, src)
+	near(t, "lc inner", r.PerBolt[1].Lc.In(), 2.1875, 1e-12, src)
+	near(t, "Rn", r.Nominal.Kip(), 38.0625+3*52.2, 1e-9, src)
+	if r.PerBolt[0].Governed != "tearout" || r.PerBolt[1].Governed != "bearing" {
+		t.Errorf("governed: %s, %s", r.PerBolt[0].Governed, r.PerBolt[1].Governed)
+	}
+	// The plate (3/8 in A572-50, Fu = 65 ksi) tears out toward its free
+	// edge 1-1/2 in past the last bolt: the last bolt has lc = 1.09375 in.
+	c.Plate = &Plate{T: in(0.375), Width: in(8), YCentre: in(2.5), FreeEdge: in(12), Fy: ksi(50), Fu: ksi(65)}
+	pr := PlateBearing(c)
+	near(t, "plate lc last", pr.PerBolt[3].Lc.In(), 1.09375, 1e-12, src)
+	near(t, "plate lc first", pr.PerBolt[0].Lc.In(), 2.1875, 1e-12, src)
+}
+
+func TestWhitmoreWidth(t *testing.T) {
+	// One line of four bolts at 3 in: Lw = 2·9·tan 30° = 10.392 in, capped
+	// by a 8-in plate (AISC Manual Part 9 Whitmore section, common
+	// practice, no source).
+	c := designExampleD2(t, rules.LRFD)
+	c.Plate = &Plate{T: in(0.5), Width: in(12), YCentre: in(2.5), FreeEdge: in(12), Fy: ksi(50), Fu: ksi(65)}
+	near(t, "Lw", WhitmoreSection(c).Lw.In(), 10.392304845, 1e-9, "30° spread, common practice, no source")
+	c.Plate.Width = in(8)
+	near(t, "Lw capped", WhitmoreSection(c).Lw.In(), 8, 1e-12, "capped by the plate width, common practice, no source")
+	// Yielding φRn = 0.9·50·8·0.5 = 180 kips (AISC 360-22 J4.1(a), hand calculation).
+	near(t, "yield", PlateYield(c).Available.Kip(), 180, 1e-9, "AISC 360-22 J4.1(a), hand calculation")
+}
+
+func TestLongJointReduction(t *testing.T) {
+	// Fnv × 0.833 when the pattern is longer than 38 in (AISC 360-22 Table
+	// J3.2 note): 3/4-in A325-N, 15 bolts at 3 in (42 in) in single shear:
+	// Rn = 0.833·54·0.4418·15 = 298.1 kips.
+	c := designExampleD2(t, rules.LRFD)
+	c.Holes = line(1, 15, in(1.5), in(3), in(2.5), in(13.0/16), in(13.0/16), rules.Standard)
+	r := BoltShear(c)
+	near(t, "Rn", r.Nominal.Kip(), 0.833*54*BoltArea(in(0.75)).In2()*15, 1e-9, "AISC 360-22 Table J3.2 (long joints)")
+	near(t, "factor", value(t, r, "long_joint_factor"), 0.833, 0, "AISC 360-22 Table J3.2")
+}
+
+func TestDoubleAngleBoltsTwoPlanes(t *testing.T) {
+	// Bolts through a plate between two angles shear on two planes:
+	// 3/4-in A325-N, Fnv = 54 ksi: rn = 2·54·0.4418 = 47.7 kips per bolt
+	// (AISC Manual Table 7-1, double shear, 3/4-in Group A-N: φrn = 35.8 kips; from memory).
+	c := designExampleD2(t, rules.LRFD)
+	c.Member.Shape, c.Member.Pieces, c.Member.Ag = DoubleAngle, 2, in2(7.5)
+	r := BoltShear(c)
+	near(t, "φrn per bolt", r.Available.Kip()/4, 35.8, pubTol, "AISC Manual Table 7-1 (from memory)")
+}
+
+func TestCheckOrderAndGoverning(t *testing.T) {
+	c := designExampleD2(t, rules.LRFD)
+	c.Demand = kip(120)
+	c.Plate = &Plate{T: in(0.5), Width: in(12), YCentre: in(2.5), FreeEdge: in(12), Fy: ksi(50), Fu: ksi(65)}
+	rs, err := Check(c)
+	if err != nil {
+		t.Fatal(err)
+	}
+	ids := []string{"member.yield", "member.rupture", "member.block-shear", "member.bearing",
+		"plate.yield", "plate.rupture", "plate.block-shear", "plate.bearing", "bolts.shear", "bolts.group"}
+	if len(rs) != len(ids) {
+		t.Fatalf("got %d results, want %d", len(rs), len(ids))
+	}
+	for i, r := range rs {
+		if r.ID != ids[i] || r.Clause == "" {
+			t.Errorf("result %d: %q clause %q, want %q", i, r.ID, r.Clause, ids[i])
+		}
+	}
+	// Four 3/4-in A325-N bolts in single shear: φRn = 0.75·54·0.4418·4 =
+	// 71.6 kips < 120 kips: bolt shear governs and fails (AISC Manual
+	// Table 7-1 single shear 17.9 kips per bolt, from memory).
+	g := rs[Governing(rs)]
+	if g.ID != "bolts.shear" || g.Pass {
+		t.Errorf("governing %s pass=%v, want bolts.shear failing", g.ID, g.Pass)
+	}
+	near(t, "φRn", g.Available.Kip()/4, 17.9, pubTol, "AISC Manual Table 7-1 (from memory)")
+}

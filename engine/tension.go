@@ -1,0 +1,242 @@
+package engine
+
+import (
+	"math"
+	"sort"
+
+	"gaugeline/rules"
+	"gaugeline/rules/units"
+)
+
+// eps is the geometric tolerance in mm: holes closer than this in y are on
+// one gage line, in x in one row.
+const eps = 1e-6
+
+// PathHole is a hole as a net-section path sees it: its position along the
+// load (X), its position across the section (U: y in a flat part, or the
+// unfolded coordinate of an angle) and the width it removes (Dh: nominal
+// hole across the load plus the B4.3 allowance).
+type PathHole struct {
+	X, U, Dh units.Length
+}
+
+// UnfoldAngleHole returns the across-section coordinate of a hole in an
+// angle unfolded at its heel, so that the gage between a hole ga from the
+// heel in the connected leg and one gb from the heel in the outstanding leg
+// is ga + gb − t (B4.3b): connected-leg holes keep U = ga, outstanding-leg
+// holes get U = −(gb − t).
+func UnfoldAngleHole(g, t units.Length, outstanding bool) units.Length {
+	if outstanding {
+		return -(g - t)
+	}
+	return g
+}
+
+// NetWidthDeduction finds the worst straight or zig-zag path across the
+// section (B4.3b): the chain of holes, in increasing U, that maximises
+// Σ Dh − Σ s²/4g, where s is the spacing along the load and g the gage
+// between consecutive holes of the chain. It returns that deduction and
+// the indexes of the holes on the path. Holes on one gage line (g ≈ 0)
+// are never on one path.
+func NetWidthDeduction(holes []PathHole) (units.Length, []int) {
+	n := len(holes)
+	if n == 0 {
+		return 0, nil
+	}
+	order := make([]int, n)
+	for i := range order {
+		order[i] = i
+	}
+	sort.SliceStable(order, func(a, b int) bool { return holes[order[a]].U < holes[order[b]].U })
+	best := make([]float64, n) // best deduction of a chain ending at order[k]
+	prev := make([]int, n)
+	for k := 0; k < n; k++ {
+		hk := holes[order[k]]
+		best[k], prev[k] = float64(hk.Dh), -1
+		for j := 0; j < k; j++ {
+			hj := holes[order[j]]
+			g := float64(hk.U - hj.U)
+			if g <= eps {
+				continue
+			}
+			s := float64(hk.X - hj.X)
+			if d := best[j] - s*s/(4*g) + float64(hk.Dh); d > best[k] {
+				best[k], prev[k] = d, j
+			}
+		}
+	}
+	end := 0
+	for k := 1; k < n; k++ {
+		if best[k] > best[end] {
+			end = k
+		}
+	}
+	var path []int
+	for k := end; k >= 0; k = prev[k] {
+		path = append(path, order[k])
+	}
+	for i, j := 0, len(path)-1; i < j; i, j = i+1, j-1 {
+		path[i], path[j] = path[j], path[i]
+	}
+	return units.Length(best[end]), path
+}
+
+// pathHoles returns the member's holes for the net-section search.
+func pathHoles(c *Connection) []PathHole {
+	allow := c.Edition.HoleAllowance()
+	ph := make([]PathHole, len(c.Holes))
+	for i, h := range c.Holes {
+		ph[i] = PathHole{X: h.X, U: h.Y, Dh: h.Dy + allow}
+	}
+	return ph
+}
+
+// NetArea is An of the member over its worst path (B4.3b): Ag less the
+// worst path's deduction times the thickness of every piece.
+func NetArea(c *Connection) (An units.Area, deduction units.Length) {
+	m := c.Member
+	deduction, _ = NetWidthDeduction(pathHoles(c))
+	return m.Ag - units.Area(float64(m.Pieces)*float64(deduction)*float64(m.T)), deduction
+}
+
+// gageLines groups hole indexes by equal y (within eps), lines sorted by y
+// and holes of a line by x.
+func gageLines(holes []Hole) [][]int {
+	idx := make([]int, len(holes))
+	for i := range idx {
+		idx[i] = i
+	}
+	sort.SliceStable(idx, func(a, b int) bool {
+		ha, hb := holes[idx[a]], holes[idx[b]]
+		if math.Abs(float64(ha.Y-hb.Y)) > eps {
+			return ha.Y < hb.Y
+		}
+		return ha.X < hb.X
+	})
+	var lines [][]int
+	for _, i := range idx {
+		if n := len(lines); n > 0 && math.Abs(float64(holes[lines[n-1][0]].Y-holes[i].Y)) <= eps {
+			lines[n-1] = append(lines[n-1], i)
+			continue
+		}
+		lines = append(lines, []int{i})
+	}
+	return lines
+}
+
+// ShearLag is the shear lag factor U of D3 with the cases that gave it.
+type ShearLag struct {
+	U     float64
+	Case  string       // which case governs, e.g. "case 2", "case 8", "connected-element bound", "case 1"
+	L     units.Length // length of connection l
+	U2    float64      // case 2: 1 − x̄/l (0 when l = 0)
+	U8    float64      // case 8 for angles (0 when it does not apply)
+	Ucon  float64      // lower bound for open sections: connected elements' area / Ag
+	PerLn int          // bolts in the line with the most bolts
+}
+
+// ShearLagFactor is U of Table D3.1 for the member: 1.0 for a flat (case
+// 1, every element connected); for angles the largest of case 2
+// (U = 1 − x̄/l, l out to out of the fasteners along the load), case 8
+// (0.80 with four or more bolts per line, 0.60 with three) and the D3 bound
+// for open sections (the connected elements' gross area over Ag).
+func ShearLagFactor(c *Connection) ShearLag {
+	m := c.Member
+	if m.Shape == Flat {
+		return ShearLag{U: 1, Case: "case 1"}
+	}
+	var sl ShearLag
+	xmin, xmax := math.Inf(1), math.Inf(-1)
+	for _, h := range c.Holes {
+		xmin, xmax = math.Min(xmin, float64(h.X)), math.Max(xmax, float64(h.X))
+	}
+	if len(c.Holes) > 0 {
+		sl.L = units.Length(xmax - xmin)
+	}
+	for _, line := range gageLines(c.Holes) {
+		sl.PerLn = max(sl.PerLn, len(line))
+	}
+	if sl.L > eps {
+		sl.U2 = 1 - float64(m.Xbar/sl.L)
+	}
+	switch {
+	case sl.PerLn >= 4:
+		sl.U8 = 0.80
+	case sl.PerLn == 3:
+		sl.U8 = 0.60
+	}
+	sl.Ucon = float64(m.Pieces) * float64(m.Width) * float64(m.T) / float64(m.Ag)
+	sl.U, sl.Case = sl.U2, "case 2"
+	if sl.U8 > sl.U {
+		sl.U, sl.Case = sl.U8, "case 8"
+	}
+	if sl.Ucon > sl.U {
+		sl.U, sl.Case = sl.Ucon, "connected-element bound"
+	}
+	sl.U = math.Min(sl.U, 1)
+	return sl
+}
+
+// MemberYield is tensile yielding in the gross section: Pn = Fy·Ag.
+//
+// Clause: D2(a)
+func MemberYield(c *Connection) Result {
+	m := c.Member
+	Rn := m.Fy.Times(m.Ag)
+	return finish(c, "member.yield", "D2(a)", Rn, c.Edition.YieldFactor(), []Value{
+		{"Fy", float64(m.Fy), units.DimStress},
+		{"Ag", float64(m.Ag), units.DimArea},
+	}, "gross section of the member")
+}
+
+// MemberRupture is tensile rupture in the net section: Pn = Fu·Ae with
+// Ae = U·An, An over the worst straight or zig-zag path.
+//
+// Clause: D2(b)
+func MemberRupture(c *Connection) Result {
+	m := c.Member
+	An, ded := NetArea(c)
+	sl := ShearLagFactor(c)
+	Ae := units.Area(sl.U) * An
+	Rn := m.Fu.Times(Ae)
+	vals := []Value{
+		{"Fu", float64(m.Fu), units.DimStress},
+		{"Ag", float64(m.Ag), units.DimArea},
+		{"An", float64(An), units.DimArea},
+		{"U", sl.U, units.Dimensionless},
+		{"Ae", float64(Ae), units.DimArea},
+		{"deduction", float64(ded), units.DimLength},
+	}
+	if m.Shape != Flat {
+		vals = append(vals,
+			Value{"xbar", float64(m.Xbar), units.DimLength},
+			Value{"l", float64(sl.L), units.DimLength},
+			Value{"U_case2", sl.U2, units.Dimensionless},
+			Value{"U_case8", sl.U8, units.Dimensionless},
+			Value{"U_min", sl.Ucon, units.Dimensionless},
+		)
+	}
+	return finish(c, "member.rupture", "D2(b)", Rn, c.Edition.RuptureFactor(), vals,
+		"net section, worst path; U from Table D3.1 "+sl.Case)
+}
+
+// finish fills the common fields of a result.
+func finish(c *Connection, id, clause16 string, Rn units.Force, f rules.Factor, vals []Value, note string) Result {
+	avail := f.Available(c.Method, Rn)
+	r := Result{
+		ID:        id,
+		Clause:    c.Edition.Clause(clause16),
+		Nominal:   Rn,
+		Available: avail,
+		Demand:    c.Demand,
+		Values:    vals,
+		Note:      note,
+	}
+	if avail > 0 {
+		r.Ratio = float64(c.Demand / avail)
+	} else {
+		r.Ratio = math.Inf(1)
+	}
+	r.Pass = r.Ratio <= 1+1e-9
+	return r
+}

@@ -1,0 +1,101 @@
+package rules
+
+import (
+	"fmt"
+	"math"
+	"strconv"
+
+	"gaugeline/rules/units"
+)
+
+// Bolt diameters tabulated in Tables J3.1, J3.3 and J3.4, in inches.
+var diametersUS = [...]float64{
+	1.0 / 2, 5.0 / 8, 3.0 / 4, 7.0 / 8, 1,
+	1 + 1.0/8, 1 + 1.0/4, 1 + 3.0/8, 1 + 1.0/2,
+}
+
+// Bolt diameters tabulated in Tables J3.1M, J3.3M and J3.4M, in mm. M12 is
+// tabulated by 360-22 only.
+var diametersSI = [...]float64{12, 16, 20, 22, 24, 27, 30, 36}
+
+// diameterTol is how close a requested diameter must be to a tabulated one.
+const diameterTol = 1e-6 * units.Millimetre
+
+// unit is the length of one table unit: an inch (us) or a millimetre (si).
+func (e *Edition) unit() units.Length {
+	if e.System == units.SI {
+		return units.Millimetre
+	}
+	return units.Inch
+}
+
+// si reports whether the edition's tables are read in SI units.
+func (e *Edition) si() bool { return e.System == units.SI }
+
+// is22 reports whether the edition is 360-22.
+func (e *Edition) is22() bool { return e.Year >= 2022 }
+
+// tableDiameters are the tabulated diameters in the table's unit. The
+// result aliases package data and must not be written.
+func (e *Edition) tableDiameters() []float64 {
+	if !e.si() {
+		return diametersUS[:]
+	}
+	if e.is22() {
+		return diametersSI[:]
+	}
+	return diametersSI[1:]
+}
+
+// table names a table of this system: "Table J3.3" or "Table J3.3M".
+func (e *Edition) table(name string) string {
+	if e.si() {
+		return name + "M"
+	}
+	return name
+}
+
+// tabulated returns the tabulated diameter, in the table's unit, that d
+// matches, or a *NotTabulatedError naming the table asked.
+func (e *Edition) tabulated(d units.Length, table string) (float64, error) {
+	u := e.unit()
+	for _, D := range e.tableDiameters() {
+		if math.Abs(float64(units.Length(D)*u-d)) <= float64(diameterTol) {
+			return D, nil
+		}
+	}
+	return 0, &NotTabulatedError{Edition: e.String(), Table: e.table(table), Key: e.diameterKey(d)}
+}
+
+// diameterKey names a bolt diameter the way the system's tables do:
+// "M14", "d = 14.5 mm", "d = 1-3/4 in", "d = 0.8 in".
+func (e *Edition) diameterKey(d units.Length) string {
+	if e.si() {
+		mm := d.Mm()
+		if n := math.Round(mm); n > 0 && math.Abs(mm-n) <= 1e-6 {
+			return "M" + strconv.Itoa(int(n))
+		}
+		return fmt.Sprintf("d = %g mm", mm)
+	}
+	return "d = " + formatInches(d.In()) + " in"
+}
+
+// formatInches prints x as a fraction of 1/16 in when it is one
+// ("1-3/4", "5/8", "1") and as a decimal otherwise.
+func formatInches(x float64) string {
+	n := math.Round(x * 16)
+	if n <= 0 || math.Abs(x*16-n) > 1e-6 || n > 1e6 {
+		return strconv.FormatFloat(x, 'g', -1, 64)
+	}
+	whole, num, den := int(n)/16, int(n)%16, 16
+	for num != 0 && num%2 == 0 {
+		num, den = num/2, den/2
+	}
+	switch {
+	case num == 0:
+		return strconv.Itoa(whole)
+	case whole == 0:
+		return fmt.Sprintf("%d/%d", num, den)
+	}
+	return fmt.Sprintf("%d-%d/%d", whole, num, den)
+}
