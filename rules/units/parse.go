@@ -1,13 +1,80 @@
 package units
 
+import (
+	"fmt"
+	"math"
+	"strconv"
+	"strings"
+	"unicode"
+)
+
 // Parse reads a quantity written by a person ("3/4 in", "1-1/2 in",
 // `3'-6 1/2"`, "20 mm", "95 kip", "400 kN", "50 ksi", "345 MPa", "12 ft",
 // "3.2 m", "3.75 in2") and returns its internal value (mm, N, MPa, mm²).
 // A bare number is read in the default unit of sys for dimension want
 // (us: in, kip, ksi, in²; si: mm, kN, MPa, mm²). A unit of another
 // dimension, a missing number, NaN, Inf or trailing junk is an error.
+//
+// Numbers are decimals ("2.5", "1e3"), fractions ("3/4") or mixed numbers
+// ("1-1/2", "1 1/2"); units are case-insensitive. A leading sign applies to
+// the whole quantity, so "-3'-6\"" is -42 in. Parse does not judge sign.
 func Parse(s string, want Dim, sys System) (float64, error) {
-	panic("units: Parse not implemented")
+	if want < Dimensionless || want > DimArea {
+		panic(fmt.Sprintf("units: Parse: unknown dimension %d", int(want)))
+	}
+	t := strings.TrimSpace(normalizeMarks(s))
+	if t == "" {
+		return 0, fmt.Errorf("empty value, want %s", withArticle(want))
+	}
+	sign, body := 1.0, t
+	switch t[0] {
+	case '-':
+		sign, body = -1, t[1:]
+	case '+':
+		body = t[1:]
+	}
+	if w := leadingWord(body); w != "" {
+		switch strings.ToLower(w) {
+		case "nan":
+			return 0, fmt.Errorf("%q: NaN is not a number", s)
+		case "inf", "infinity":
+			return 0, fmt.Errorf("%q: infinity is not a number", s)
+		}
+	}
+
+	v, rest, err := scanNumber(body)
+	if err != nil {
+		return 0, numberError(s, err)
+	}
+	rest = strings.TrimLeftFunc(rest, unicode.IsSpace)
+
+	var dim Dim
+	var internal float64
+	if after, ok := cutFeet(rest); ok {
+		dim = DimLength
+		in, err := inchesAfterFeet(after)
+		if err != nil {
+			return 0, numberError(s, err)
+		}
+		// Sum in inches first: on the 1/16 in grid the sum is exact, so
+		// only the final conversion to mm rounds.
+		internal = (v*12 + in) * float64(Inch)
+	} else {
+		var factor float64
+		dim, factor, err = unitOf(rest, want, sys)
+		if err != nil {
+			return 0, unitError(s, rest, err)
+		}
+		internal = v * factor
+	}
+	if dim != want {
+		return 0, fmt.Errorf("%q is %s, not %s", s, withArticle(dim), withArticle(want))
+	}
+	internal *= sign
+	if !finite(internal) {
+		return 0, fmt.Errorf("%q: number out of range", s)
+	}
+	return internal, nil
 }
 
 // ParseLength reads a length; see Parse.
@@ -37,25 +104,383 @@ func ParseArea(s string, sys System) (Area, error) {
 // ParseBoltDiameter reads a bolt diameter: a length, or the metric
 // designation "M20" (20 mm).
 func ParseBoltDiameter(s string, sys System) (Length, error) {
-	panic("units: ParseBoltDiameter not implemented")
+	t := strings.TrimSpace(s)
+	if len(t) < 2 || (t[0] != 'M' && t[0] != 'm') {
+		return ParseLength(s, sys)
+	}
+	// "M" followed by a number is a metric designation whatever sys is;
+	// anything else starting with m (e.g. "mm") is left to Parse.
+	d := strings.TrimLeftFunc(t[1:], unicode.IsSpace)
+	if d == "" || !isDigit(d[0]) {
+		return ParseLength(s, sys)
+	}
+	end := spanDigits(d, 0)
+	if end < len(d) && d[end] == '.' {
+		if frac := spanDigits(d, end+1); frac > end+1 {
+			end = frac
+		}
+	}
+	if end != len(d) {
+		return 0, fmt.Errorf("%q is not a bolt diameter (want e.g. M20 or 3/4 in)", s)
+	}
+	v, err := strconv.ParseFloat(d, 64)
+	if err != nil || !finite(v) {
+		return 0, fmt.Errorf("%q: number out of range", s)
+	}
+	return Length(v) * Millimetre, nil
 }
 
 // FormatFeetInches formats a length for people in feet, inches and
 // sixteenths, rounded to the nearest 1/16 in: 1'-3 1/2", 3 1/4", 0'-0 3/4"
 // is written 3/4". Lengths of 12 in and more carry feet.
 func FormatFeetInches(l Length) string {
-	panic("units: FormatFeetInches not implemented")
+	in := l.In()
+	if !finite(in) {
+		return strconv.FormatFloat(in, 'g', -1, 64)
+	}
+	n := math.Round(math.Abs(in) * 16) // sixteenths
+	if n == 0 {
+		return `0"`
+	}
+	sign := ""
+	if in < 0 {
+		sign = "-"
+	}
+	rem := math.Mod(n, 12*16) // exact, and an integer in [0, 192)
+	feet := (n - rem) / (12 * 16)
+	whole, frac := int(rem)/16, int(rem)%16
+	if feet == 0 {
+		return sign + formatMixed(whole, frac, " ") + `"`
+	}
+	inches := formatMixed(whole, frac, " ")
+	if whole == 0 && frac != 0 {
+		inches = "0 " + inches // 1'-0 1/2", not 1'-1/2"
+	}
+	return sign + strconv.FormatFloat(feet, 'f', 0, 64) + "'-" + inches + `"`
 }
 
 // FormatJob formats a length the way a job file writes it, so that Parse
 // reads it back exactly when it lies on a 1/16 in (us) or 0.001 mm (si)
 // grid: "1-1/2 in", "3/4 in", "3 in", "20 mm", "22.5 mm".
 func FormatJob(l Length, sys System) string {
-	panic("units: FormatJob not implemented")
+	if sys == SI {
+		return trimDecimal(strconv.FormatFloat(l.Mm(), 'f', 3, 64)) + " mm"
+	}
+	in := l.In()
+	n := math.Round(in * 16)
+	if !finite(in) || math.Abs(in-n/16) > 1e-9 {
+		return trimDecimal(strconv.FormatFloat(in, 'f', 6, 64)) + " in"
+	}
+	if n == 0 {
+		return "0 in"
+	}
+	sign := ""
+	if n < 0 {
+		sign, n = "-", -n
+	}
+	rem := math.Mod(n, 16)
+	whole := strconv.FormatFloat((n-rem)/16, 'f', 0, 64)
+	if rem == 0 {
+		return sign + whole + " in"
+	}
+	frac := formatMixed(0, int(rem), "")
+	if whole == "0" {
+		return sign + frac + " in"
+	}
+	return sign + whole + "-" + frac + " in"
 }
 
 // FormatForPeople formats a length for a sheet or table: US as
 // FormatFeetInches, SI in whole millimetres ("65").
 func FormatForPeople(l Length, sys System) string {
-	panic("units: FormatForPeople not implemented")
+	if sys == SI {
+		return trimDecimal(strconv.FormatFloat(math.Round(l.Mm()), 'f', 0, 64))
+	}
+	return FormatFeetInches(l)
+}
+
+// parseError is a problem with the number itself; Parse prefixes the input.
+type parseError string
+
+func (e parseError) Error() string { return string(e) }
+
+const (
+	errNoNumber   parseError = "no number"
+	errFraction   parseError = "malformed fraction"
+	errDivZero    parseError = "division by zero"
+	errRange      parseError = "number out of range"
+	errFeetInches parseError = `want feet-inches like 3'-6 1/2"`
+	errUnknown    parseError = "unknown unit"
+	errJunk       parseError = "malformed number"
+)
+
+func numberError(s string, err error) error {
+	if err == errNoNumber {
+		return fmt.Errorf("%q is not a quantity", s)
+	}
+	return fmt.Errorf("%q: %v", s, err)
+}
+
+func unitError(s, unit string, err error) error {
+	if err == errUnknown {
+		return fmt.Errorf("%q: unknown unit %q", s, strings.TrimSpace(unit))
+	}
+	return fmt.Errorf("%q: %v", s, err)
+}
+
+// normalizeMarks maps typographic primes and quotes, and a doubled
+// apostrophe, to the ASCII foot and inch marks.
+func normalizeMarks(s string) string {
+	return strings.NewReplacer(
+		"′", "'", "’", "'", "″", `"`, "”", `"`, "''", `"`,
+	).Replace(s)
+}
+
+// scanNumber reads an unsigned decimal, fraction or mixed number at the
+// start of s and returns its value and what follows it.
+func scanNumber(s string) (float64, string, error) {
+	i := spanDigits(s, 0)
+	if i > 0 && i < len(s) && s[i] == '/' {
+		num, den, end, err := scanFraction(s, 0)
+		if err != nil {
+			return 0, "", err
+		}
+		return num / den, s[end:], nil
+	}
+	if i > 0 {
+		// A mixed number: whole, then "-" or spaces, then a proper fraction.
+		j := i
+		if j < len(s) && s[j] == '-' {
+			j++
+		} else {
+			j = spanSpace(s, j)
+		}
+		if k := spanDigits(s, j); j > i && k > j && k < len(s) && s[k] == '/' {
+			num, den, end, err := scanFraction(s, j)
+			if err != nil {
+				return 0, "", err
+			}
+			if num >= den {
+				return 0, "", errFraction
+			}
+			whole, err := parseFloat(s[:i])
+			if err != nil {
+				return 0, "", err
+			}
+			return whole + num/den, s[end:], nil
+		}
+	}
+	end := i
+	if end < len(s) && s[end] == '.' {
+		end = spanDigits(s, end+1)
+	}
+	if end == 0 || s[:end] == "." {
+		return 0, "", errNoNumber
+	}
+	if end < len(s) && (s[end] == 'e' || s[end] == 'E') {
+		j := end + 1
+		if j < len(s) && (s[j] == '+' || s[j] == '-') {
+			j++
+		}
+		if k := spanDigits(s, j); k > j {
+			end = k
+		}
+	}
+	v, err := parseFloat(s[:end])
+	return v, s[end:], err
+}
+
+// scanFraction reads digits/digits starting at i.
+func scanFraction(s string, i int) (num, den float64, end int, err error) {
+	slash := spanDigits(s, i)
+	end = spanDigits(s, slash+1)
+	if end == slash+1 || (end < len(s) && (s[end] == '/' || s[end] == '.')) {
+		return 0, 0, 0, errFraction
+	}
+	if num, err = parseFloat(s[i:slash]); err != nil {
+		return 0, 0, 0, err
+	}
+	if den, err = parseFloat(s[slash+1 : end]); err != nil {
+		return 0, 0, 0, err
+	}
+	if den == 0 {
+		return 0, 0, 0, errDivZero
+	}
+	return num, den, end, nil
+}
+
+// parseFloat parses a string scanNumber has already checked.
+func parseFloat(s string) (float64, error) {
+	v, err := strconv.ParseFloat(s, 64)
+	if err != nil && !math.IsInf(v, 0) {
+		// The scanner only passes well-formed digits; an underflow to 0 is fine.
+		if ne, ok := err.(*strconv.NumError); !ok || ne.Err != strconv.ErrRange {
+			panic("units: scanNumber passed a malformed number: " + s)
+		}
+	}
+	if math.IsInf(v, 0) {
+		return 0, errRange
+	}
+	return v, nil
+}
+
+// cutFeet reports whether rest starts with a foot mark or word, and returns
+// what follows it.
+func cutFeet(rest string) (string, bool) {
+	if strings.HasPrefix(rest, "'") {
+		return rest[1:], true
+	}
+	for _, w := range []string{"feet", "foot", "ft"} {
+		if len(rest) >= len(w) && strings.EqualFold(rest[:len(w)], w) {
+			after := rest[len(w):]
+			if after == "" || unicode.IsSpace(rune(after[0])) || after[0] == '-' {
+				return after, true
+			}
+		}
+	}
+	return "", false
+}
+
+// inchesAfterFeet reads the optional inch part of a feet-inches length:
+// "", `-6"`, ` 6-1/2"`, "-6 1/2 in".
+func inchesAfterFeet(s string) (float64, error) {
+	s = strings.TrimSpace(s)
+	if s == "" {
+		return 0, nil
+	}
+	if s[0] == '-' {
+		s = strings.TrimLeftFunc(s[1:], unicode.IsSpace)
+	}
+	v, rest, err := scanNumber(s)
+	if err == errNoNumber {
+		return 0, errFeetInches
+	}
+	if err != nil {
+		return 0, err
+	}
+	rest = strings.TrimSpace(rest)
+	if rest != `"` {
+		switch normalizeUnit(rest) {
+		case "in", "inch", "inches":
+		default:
+			return 0, errFeetInches
+		}
+	}
+	return v, nil
+}
+
+// unitOf returns the dimension of the unit written after a number and the
+// internal value of one of it. No unit means the default unit of sys.
+func unitOf(rest string, want Dim, sys System) (Dim, float64, error) {
+	if rest == "" {
+		return want, sys.scale(want), nil
+	}
+	switch c := rest[0]; {
+	case isDigit(c) || c == '.' || c == '/' || c == '-' || c == '+':
+		return 0, 0, errJunk
+	}
+	switch normalizeUnit(rest) {
+	case "mm", "millimeter", "millimeters", "millimetre", "millimetres":
+		return DimLength, float64(Millimetre), nil
+	case "cm", "centimeter", "centimeters", "centimetre", "centimetres":
+		return DimLength, float64(10 * Millimetre), nil
+	case "m", "meter", "meters", "metre", "metres":
+		return DimLength, float64(Metre), nil
+	case `"`, "in", "inch", "inches":
+		return DimLength, float64(Inch), nil
+
+	case "n", "newton", "newtons":
+		return DimForce, float64(Newton), nil
+	case "kn", "kilonewton", "kilonewtons":
+		return DimForce, float64(Kilonewton), nil
+	case "kip", "kips":
+		return DimForce, float64(Kip), nil
+	case "lb", "lbs", "lbf":
+		return DimForce, float64(Kip / 1000), nil
+
+	case "mpa", "n/mm2":
+		return DimStress, float64(Megapascal), nil
+	case "ksi":
+		return DimStress, float64(Ksi), nil
+	case "psi":
+		return DimStress, float64(Ksi / 1000), nil
+
+	case "mm2", "sq mm":
+		return DimArea, float64(SquareMillimetre), nil
+	case "cm2", "sq cm":
+		return DimArea, float64(100 * SquareMillimetre), nil
+	case "in2", "sq in":
+		return DimArea, float64(SquareInch), nil
+	}
+	return 0, 0, errUnknown
+}
+
+// normalizeUnit lowercases a unit and spells powers one way:
+// "in^2", "in²", "IN2" → "in2"; "sq  in" → "sq in".
+func normalizeUnit(u string) string {
+	u = strings.ToLower(strings.TrimSpace(u))
+	u = strings.NewReplacer("^", "", "²", "2").Replace(u)
+	return strings.Join(strings.Fields(u), " ")
+}
+
+// formatMixed writes whole and sixteenths as "3", "3/4", "3 1/2" (sep " ")
+// or "1-1/2" (sep "-"); sixteenths are reduced.
+func formatMixed(whole, sixteenths int, sep string) string {
+	w := strconv.Itoa(whole)
+	if sixteenths == 0 {
+		return w
+	}
+	den := 16
+	for sixteenths%2 == 0 {
+		sixteenths, den = sixteenths/2, den/2
+	}
+	frac := strconv.Itoa(sixteenths) + "/" + strconv.Itoa(den)
+	if whole == 0 {
+		return frac
+	}
+	return w + sep + frac
+}
+
+// trimDecimal drops trailing zeros and a trailing point, and a minus on zero.
+func trimDecimal(s string) string {
+	if strings.Contains(s, ".") {
+		s = strings.TrimRight(strings.TrimRight(s, "0"), ".")
+	}
+	if s == "-0" {
+		return "0"
+	}
+	return s
+}
+
+// leadingWord returns the ASCII letters at the start of s.
+func leadingWord(s string) string {
+	i := 0
+	for i < len(s) && (s[i] >= 'a' && s[i] <= 'z' || s[i] >= 'A' && s[i] <= 'Z') {
+		i++
+	}
+	return s[:i]
+}
+
+// withArticle names a dimension for an error message: "a length", "an area".
+func withArticle(d Dim) string {
+	if d == DimArea {
+		return "an " + d.String()
+	}
+	return "a " + d.String()
+}
+
+func isDigit(c byte) bool { return c >= '0' && c <= '9' }
+
+func spanDigits(s string, i int) int {
+	for i < len(s) && isDigit(s[i]) {
+		i++
+	}
+	return i
+}
+
+func spanSpace(s string, i int) int {
+	for i < len(s) && (s[i] == ' ' || s[i] == '\t') {
+		i++
+	}
+	return i
 }

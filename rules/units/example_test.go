@@ -1,0 +1,54 @@
+package units_test
+
+import (
+	"fmt"
+
+	"gaugeline/rules/units"
+)
+
+func ExampleParse() {
+	for _, s := range []string{"3/4 in", "1-1/2", `3'-6 1/2"`, "20 mm"} {
+		mm, err := units.Parse(s, units.DimLength, units.US)
+		if err != nil {
+			fmt.Println(err)
+			continue
+		}
+		fmt.Printf("%-11s = %.2f mm\n", s, mm)
+	}
+	kN, _ := units.Parse("400 kN", units.DimForce, units.US)
+	fmt.Printf("400 kN      = %.0f N\n", kN)
+
+	_, err := units.Parse("3 kip", units.DimLength, units.US)
+	fmt.Println(err)
+	// Output:
+	// 3/4 in      = 19.05 mm
+	// 1-1/2       = 38.10 mm
+	// 3'-6 1/2"   = 1079.50 mm
+	// 20 mm       = 20.00 mm
+	// 400 kN      = 400000 N
+	// "3 kip" is a force, not a length
+}
+
+func ExampleFormatFeetInches() {
+	for _, in := range []float64{0.75, 3.5, 11.99, 42.5, -15.5} {
+		fmt.Println(units.FormatFeetInches(units.Length(in) * units.Inch))
+	}
+	fmt.Println(units.FormatFeetInches(1000 * units.Millimetre))
+	// Output:
+	// 3/4"
+	// 3 1/2"
+	// 1'-0"
+	// 3'-6 1/2"
+	// -1'-3 1/2"
+	// 3'-3 3/8"
+}
+
+func ExampleFormatJob() {
+	fmt.Println(units.FormatJob(1.5*units.Inch, units.US))
+	fmt.Println(units.FormatJob(12.1875*units.Inch, units.US))
+	fmt.Println(units.FormatJob(22.5*units.Millimetre, units.SI))
+	// Output:
+	// 1-1/2 in
+	// 12-3/16 in
+	// 22.5 mm
+}
