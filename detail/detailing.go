@@ -1,0 +1,549 @@
+package detail
+
+import (
+	"cmp"
+	"fmt"
+	"math"
+	"slices"
+
+	"gaugeline/engine"
+	"gaugeline/rules"
+	"gaugeline/rules/units"
+)
+
+// tol is the slack of every detailing comparison, in mm: a layout exactly
+// at a limit passes although the limit was converted from inches, and of
+// the choice of the governing hole, so that ties go to the first hole.
+const tol = 1e-6
+
+// Clause labels of the checks that are not AISC 360 clauses.
+const commonPractice = "common practice"
+
+// Slenderness limit of the User Note to D1: L/r preferably ≤ 300.
+const maxSlenderness = 300
+
+// Detailing runs every detailing check of SPEC §5 on the connection and
+// returns every finding, passing or not, in a fixed order: hole.size,
+// hole.type, spacing.min, edge.min, edge.max, spacing.max, gage.workable,
+// slenderness. Within a check, findings follow hole types, edges and gage
+// lines in a fixed order, so the same connection always gives the same
+// list. A bolt diameter the edition does not tabulate gives a failing
+// finding naming the table, not an error.
+func Detailing(c *engine.Connection, info MemberInfo) []Finding {
+	if c == nil || c.Edition == nil {
+		panic("detail: Detailing needs a connection with an edition")
+	}
+	var fs []Finding
+	fs = append(fs, holeSizeFindings(c)...)
+	fs = append(fs, holeTypeFindings(c)...)
+	fs = append(fs, minSpacingFindings(c)...)
+	fs = append(fs, minEdgeFindings(c)...)
+	fs = append(fs, maxEdgeFindings(c)...)
+	fs = append(fs, maxSpacingFindings(c, info)...)
+	fs = append(fs, gageFindings(c, info)...)
+	fs = append(fs, slendernessFindings(c, info)...)
+	return fs
+}
+
+// Passes reports whether every finding that is not advisory passes.
+func Passes(fs []Finding) bool {
+	for _, f := range fs {
+		if !f.Pass && !f.Advisory {
+			return false
+		}
+	}
+	return true
+}
+
+// atLeast and atMost compare lengths with the tolerance tol.
+func atLeast(measured, limit units.Length) bool { return measured >= limit-tol }
+func atMost(measured, limit units.Length) bool  { return measured <= limit+tol }
+
+// holeName is the hole's id, or its 1-based position when it has none.
+func holeName(c *engine.Connection, i int) string {
+	if id := c.Holes[i].ID; id != "" {
+		return id
+	}
+	return fmt.Sprintf("H%d", i+1)
+}
+
+// table names a table of the edition in force: US tables as printed, SI
+// tables with their M suffix (Table J3.3M).
+func table(c *engine.Connection, name string) string {
+	if c.Edition.System == units.SI {
+		return name + "M"
+	}
+	return name
+}
+
+// untabulated is the failing finding of a check whose limit the edition
+// does not tabulate for this bolt.
+func untabulated(id, clause string, err error) Finding {
+	return Finding{ID: id, Clause: clause, Dim: units.Dimensionless, Where: err.Error()}
+}
+
+// lengthFinding builds a finding on a length.
+func lengthFinding(id, clause string, measured, limit units.Length, pass bool, where string) Finding {
+	return Finding{
+		ID: id, Clause: clause,
+		Measured: float64(measured), Limit: float64(limit), Dim: units.DimLength,
+		Pass: pass, Where: where,
+	}
+}
+
+// alongAcross returns a hole's extent along its long axis and across it,
+// as J3.3 tabulates slots (length × width); for a round hole both are its
+// larger extent.
+func alongAcross(h *engine.Hole) (along, across units.Length) {
+	if !h.Type.IsSlot() {
+		d := max(h.Dx, h.Dy)
+		return d, d
+	}
+	if h.Slot == rules.Longitudinal {
+		return h.Dx, h.Dy
+	}
+	return h.Dy, h.Dx
+}
+
+// holeTypesPresent lists the hole types of the connection in enum order.
+func holeTypesPresent(c *engine.Connection) []rules.HoleType {
+	var ts []rules.HoleType
+	for _, h := range c.Holes {
+		if !slices.Contains(ts, h.Type) {
+			ts = append(ts, h.Type)
+		}
+	}
+	slices.Sort(ts)
+	return ts
+}
+
+// holeSizeFindings is hole.size, J3.2 [J3.3] with Table J3.3 [J3.3M]: per
+// hole type present, the hole that most exceeds the nominal size (along or
+// across a slot) against that size. Design holes equal the table; measured
+// as-built holes may not.
+func holeSizeFindings(c *engine.Connection) []Finding {
+	const id = "hole.size"
+	clause := c.Edition.Clause("J3.2") + ", " + table(c, "Table J3.3")
+	var fs []Finding
+	for _, t := range holeTypesPresent(c) {
+		nominal, err := c.Edition.Hole(c.Bolt.D, t)
+		if err != nil {
+			fs = append(fs, untabulated(id, clause, err))
+			continue
+		}
+		best, bestExcess := Finding{}, units.Length(math.Inf(-1))
+		for i := range c.Holes {
+			h := &c.Holes[i]
+			if h.Type != t {
+				continue
+			}
+			along, across := alongAcross(h)
+			type extent struct {
+				measured, limit units.Length
+				dir             string
+			}
+			ext := []extent{{along, nominal.Width, ""}}
+			if t.IsSlot() {
+				ext = []extent{{along, nominal.Length, " along the slot"}, {across, nominal.Width, " across the slot"}}
+			}
+			for _, e := range ext {
+				if excess := e.measured - e.limit; excess > bestExcess+tol {
+					bestExcess = excess
+					where := fmt.Sprintf("%s%s (largest %s hole)", holeName(c, i), e.dir, t)
+					best = lengthFinding(id, clause, e.measured, e.limit, atMost(e.measured, e.limit), where)
+				}
+			}
+		}
+		fs = append(fs, best)
+	}
+	return fs
+}
+
+// holeTypeFindings is hole.type, J3.2 [J3.3]: per distinct hole type and
+// slot direction, whether the edition permits it in the joint; long slots
+// add an advisory that only one connected part at each faying surface may
+// have them.
+func holeTypeFindings(c *engine.Connection) []Finding {
+	const id = "hole.type"
+	clause := c.Edition.Clause("J3.2")
+	type kind struct {
+		t   rules.HoleType
+		dir rules.SlotDir
+	}
+	var kinds []kind
+	for _, h := range c.Holes {
+		k := kind{h.Type, h.Slot}
+		if !h.Type.IsSlot() {
+			k.dir = rules.Transverse // direction means nothing for a round hole
+		}
+		if !slices.Contains(kinds, k) {
+			kinds = append(kinds, k)
+		}
+	}
+	slices.SortFunc(kinds, func(a, b kind) int {
+		return cmp.Or(cmp.Compare(a.t, b.t), cmp.Compare(a.dir, b.dir))
+	})
+	var fs []Finding
+	long := false
+	for _, k := range kinds {
+		ok, why := c.Edition.HolePermitted(k.t, k.dir, c.Bolt.Joint)
+		what := k.t.String() + " holes"
+		if k.t.IsSlot() {
+			what = k.dir.String() + " " + what
+			long = long || k.t == rules.LongSlot
+		}
+		where := fmt.Sprintf("%s in a %s joint", what, c.Bolt.Joint) // bearing, pretensioned, slip-critical
+		if !ok && why != "" {
+			where += ": " + why
+		}
+		fs = append(fs, Finding{ID: id, Clause: clause, Dim: units.Dimensionless, Pass: ok, Where: where})
+	}
+	if long {
+		fs = append(fs, Finding{
+			ID: id, Clause: clause, Dim: units.Dimensionless, Pass: true, Advisory: true,
+			Where: "long-slot holes: " + clause + " permits long slots in only one connected part at each faying surface; make the other ply standard holes",
+		})
+	}
+	return fs
+}
+
+// minSpacingFindings is spacing.min, J3.3 [J3.4]: the least centre-to-centre
+// distance against 2-2/3·d and, under 360-22, the least clear distance
+// between hole outlines against d.
+func minSpacingFindings(c *engine.Connection) []Finding {
+	const id = "spacing.min"
+	if len(c.Holes) < 2 {
+		return nil
+	}
+	clause := c.Edition.Clause("J3.3")
+	d := c.Bolt.D
+	centre, clear := math.Inf(1), math.Inf(1)
+	var ci, cj, ki, kj int
+	for i := range c.Holes {
+		for j := i + 1; j < len(c.Holes); j++ {
+			a, b := &c.Holes[i], &c.Holes[j]
+			if s := math.Hypot(float64(a.X-b.X), float64(a.Y-b.Y)); s < centre-tol {
+				centre, ci, cj = s, i, j
+			}
+			if s := clearDistance(a, b); s < clear-tol {
+				clear, ki, kj = s, i, j
+			}
+		}
+	}
+	limit := c.Edition.MinSpacing(d)
+	fs := []Finding{lengthFinding(id, clause, units.Length(centre), limit,
+		atLeast(units.Length(centre), limit), holeName(c, ci)+"–"+holeName(c, cj))}
+	if c.Edition.ClearSpacingRule() {
+		fs = append(fs, lengthFinding(id, clause, units.Length(clear), d,
+			atLeast(units.Length(clear), d), holeName(c, ki)+"–"+holeName(c, kj)+" (clear distance)"))
+	}
+	return fs
+}
+
+// point is a point of the (x, y) plane in mm.
+type point struct{ x, y float64 }
+
+// stadium returns a hole's outline as a segment along its long axis, of
+// length |Dx − Dy|, swept by a circle of radius min(Dx, Dy)/2: a round hole
+// is a degenerate segment, a slot a stadium.
+func stadium(h *engine.Hole) (a, b point, r float64) {
+	cx, cy := float64(h.X), float64(h.Y)
+	dx, dy := float64(h.Dx), float64(h.Dy)
+	if dx >= dy {
+		half := (dx - dy) / 2
+		return point{cx - half, cy}, point{cx + half, cy}, dy / 2
+	}
+	half := (dy - dx) / 2
+	return point{cx, cy - half}, point{cx, cy + half}, dx / 2
+}
+
+// clearDistance is the least distance between the outlines of two holes
+// (negative when they overlap).
+func clearDistance(h1, h2 *engine.Hole) float64 {
+	a1, b1, r1 := stadium(h1)
+	a2, b2, r2 := stadium(h2)
+	return segmentDistance(a1, b1, a2, b2) - r1 - r2
+}
+
+// segmentDistance is the least distance between segments ab and cd.
+func segmentDistance(a, b, c, d point) float64 {
+	if segmentsCross(a, b, c, d) {
+		return 0
+	}
+	return min(pointSegment(a, c, d), pointSegment(b, c, d), pointSegment(c, a, b), pointSegment(d, a, b))
+}
+
+// cross is the z component of (a − o) × (b − o).
+func cross(o, a, b point) float64 { return (a.x-o.x)*(b.y-o.y) - (a.y-o.y)*(b.x-o.x) }
+
+// segmentsCross reports a proper crossing of ab and cd; touching and
+// collinear overlaps put an end point on the other segment, which
+// pointSegment already measures as zero.
+func segmentsCross(a, b, c, d point) bool {
+	d1, d2 := cross(c, d, a), cross(c, d, b)
+	d3, d4 := cross(a, b, c), cross(a, b, d)
+	return d1*d2 < 0 && d3*d4 < 0
+}
+
+// pointSegment is the distance from p to segment ab.
+func pointSegment(p, a, b point) float64 {
+	vx, vy := b.x-a.x, b.y-a.y
+	l2 := vx*vx + vy*vy
+	if l2 == 0 {
+		return math.Hypot(p.x-a.x, p.y-a.y)
+	}
+	s := ((p.x-a.x)*vx + (p.y-a.y)*vy) / l2
+	s = max(0, min(1, s))
+	return math.Hypot(p.x-(a.x+s*vx), p.y-(a.y+s*vy))
+}
+
+// edge is one edge of a part in contact, as seen from the holes.
+type edge struct {
+	name string // "member end", "plate free edge", …
+	// alongX: the edge runs along x (a side or toe), so a slot transverse
+	// to the load (long axis along y) points at it; otherwise it runs
+	// along y (an end) and longitudinal slots point at it.
+	alongX bool
+	dist   func(h *engine.Hole) units.Length
+	t      units.Length // thickness of the part, for the maximum
+	max    bool         // J3.5 [J3.6] maximum edge distance applies
+}
+
+// edges lists the edges the holes must clear, in a fixed order: member end,
+// member toe (angles; the heel is not an edge) or both sides (flats), plate
+// free edge, plate sides. Gusset sides take the minimum only.
+func edges(c *engine.Connection) []edge {
+	m := &c.Member
+	es := []edge{{name: "member end", dist: func(h *engine.Hole) units.Length { return h.X }, t: m.T, max: true}}
+	switch m.Shape {
+	case engine.Angle, engine.DoubleAngle:
+		es = append(es, edge{name: "member toe", alongX: true, t: m.T, max: true,
+			dist: func(h *engine.Hole) units.Length { return m.Width - h.Y }})
+	default:
+		es = append(es,
+			edge{name: "member edge (y = 0)", alongX: true, t: m.T, max: true,
+				dist: func(h *engine.Hole) units.Length { return h.Y }},
+			edge{name: "member edge (y = width)", alongX: true, t: m.T, max: true,
+				dist: func(h *engine.Hole) units.Length { return m.Width - h.Y }})
+	}
+	if p := c.Plate; p != nil {
+		es = append(es, edge{name: "plate free edge", t: p.T, max: true,
+			dist: func(h *engine.Hole) units.Length { return p.FreeEdge - h.X }})
+		if p.Width > 0 {
+			es = append(es,
+				edge{name: "plate side edge (low y)", alongX: true, t: p.T,
+					dist: func(h *engine.Hole) units.Length { return h.Y - p.YMin() }},
+				edge{name: "plate side edge (high y)", alongX: true, t: p.T,
+					dist: func(h *engine.Hole) units.Length { return p.YMax() - h.Y }})
+		}
+	}
+	return es
+}
+
+// incrementType is the hole type whose C2 (Table J3.5) applies at edge e:
+// oversized holes at every edge, slots whose long axis is perpendicular to
+// the edge, otherwise none (Standard). The reduction of C2 for slots
+// shorter than the maximum is not taken (conservative).
+func incrementType(h *engine.Hole, e edge) rules.HoleType {
+	switch {
+	case h.Type == rules.Oversized:
+		return h.Type
+	case h.Type.IsSlot() && (h.Slot == rules.Transverse) == e.alongX:
+		return h.Type
+	}
+	return rules.Standard
+}
+
+// minEdgeFindings is edge.min, J3.4 [J3.5] with Tables J3.4 and J3.5: per
+// edge, the hole with the least margin over its minimum, Table J3.4 plus
+// C2 where the hole's long axis is perpendicular to the edge.
+func minEdgeFindings(c *engine.Connection) []Finding {
+	const id = "edge.min"
+	clause := c.Edition.Clause("J3.4") + ", " + table(c, "Table J3.4")
+	if len(c.Holes) == 0 {
+		return nil
+	}
+	emin, err := c.Edition.MinEdge(c.Bolt.D)
+	if err != nil {
+		return []Finding{untabulated(id, clause, err)}
+	}
+	var fs []Finding
+	for _, e := range edges(c) {
+		var best Finding
+		margin := units.Length(math.Inf(1))
+		for i := range c.Holes {
+			h := &c.Holes[i]
+			c2, err := c.Edition.EdgeIncrement(c.Bolt.D, incrementType(h, e))
+			if err != nil {
+				return append(fs, untabulated(id, clause, err))
+			}
+			limit, measured := emin+c2, e.dist(h)
+			if measured-limit < margin-tol {
+				margin = measured - limit
+				cl := clause
+				if c2 > 0 {
+					cl += ", " + table(c, "Table J3.5")
+				}
+				best = lengthFinding(id, cl, measured, limit, atLeast(measured, limit), holeName(c, i)+" to "+e.name)
+			}
+		}
+		fs = append(fs, best)
+	}
+	return fs
+}
+
+// maxEdgeFindings is edge.max, J3.5 [J3.6]: per edge of a part in contact,
+// the hole nearest it against 12t ≤ 6 in (150 mm), t of that part.
+func maxEdgeFindings(c *engine.Connection) []Finding {
+	const id = "edge.max"
+	if len(c.Holes) == 0 {
+		return nil
+	}
+	clause := c.Edition.Clause("J3.5")
+	var fs []Finding
+	for _, e := range edges(c) {
+		if !e.max {
+			continue
+		}
+		near, nearest := 0, units.Length(math.Inf(1))
+		for i := range c.Holes {
+			if d := e.dist(&c.Holes[i]); d < nearest-tol {
+				near, nearest = i, d
+			}
+		}
+		limit := c.Edition.MaxEdge(e.t)
+		fs = append(fs, lengthFinding(id, clause, nearest, limit, atMost(nearest, limit), holeName(c, near)+" to "+e.name))
+	}
+	return fs
+}
+
+// gageLines groups hole indices into gage lines (equal y within tol),
+// lines by increasing y, holes in a line by increasing x.
+func gageLines(c *engine.Connection) [][]int {
+	idx := make([]int, len(c.Holes))
+	for i := range idx {
+		idx[i] = i
+	}
+	slices.SortStableFunc(idx, func(a, b int) int { return cmp.Compare(c.Holes[a].Y, c.Holes[b].Y) })
+	var lines [][]int
+	for k, i := range idx {
+		if k == 0 || c.Holes[i].Y-c.Holes[idx[k-1]].Y > tol {
+			lines = append(lines, nil)
+		}
+		lines[len(lines)-1] = append(lines[len(lines)-1], i)
+	}
+	for _, l := range lines {
+		slices.SortStableFunc(l, func(a, b int) int { return cmp.Compare(c.Holes[a].X, c.Holes[b].X) })
+	}
+	return lines
+}
+
+// maxSpacingFindings is spacing.max, J3.5 [J3.6]: per gage line of two or
+// more holes, the largest pitch against 24t ≤ 12 in (14t ≤ 7 in for
+// unpainted weathering steel), t the thinner part in contact.
+func maxSpacingFindings(c *engine.Connection, info MemberInfo) []Finding {
+	const id = "spacing.max"
+	clause := c.Edition.Clause("J3.5")
+	t := c.Member.T
+	if c.Plate != nil {
+		t = min(t, c.Plate.T)
+	}
+	limit := c.Edition.MaxSpacing(t, info.Weathering)
+	var fs []Finding
+	for n, line := range gageLines(c) {
+		if len(line) < 2 {
+			continue
+		}
+		pitch, at := units.Length(math.Inf(-1)), 0
+		for k := 1; k < len(line); k++ {
+			if s := c.Holes[line[k]].X - c.Holes[line[k-1]].X; s > pitch+tol {
+				pitch, at = s, k
+			}
+		}
+		where := fmt.Sprintf("%s–%s on gage line %d", holeName(c, line[at-1]), holeName(c, line[at]), n+1)
+		fs = append(fs, lengthFinding(id, clause, pitch, limit, atMost(pitch, limit), where))
+	}
+	return fs
+}
+
+// nutAcrossFlats is F, the width across flats of the heavy hex nut (and
+// heavy hex bolt head) of a structural bolt of diameter d. Common practice,
+// not AISC 360.
+//
+// US: F = 1.5·d + 1/8 in (ASME B18.2.6 heavy hex, from memory).
+// SI: the larger of ASME B18.2.4.6M heavy hex (A563M nuts on A325M/A490M
+// bolts) and EN 14399-4 HV, from memory: M12 22, M16 27, M20 34, M22 36,
+// M24 41, M27 46, M30 50, M36 60 mm; other sizes 1.5·d + 6 mm, which gives
+// M36 and runs at or above the table.
+func nutAcrossFlats(d units.Length, sys units.System) units.Length {
+	if sys == units.US {
+		return 1.5*d + units.Inch/8
+	}
+	table := [...]struct{ d, f units.Length }{
+		{12, 22}, {16, 27}, {20, 34}, {22, 36}, {24, 41}, {27, 46}, {30, 50}, {36, 60},
+	}
+	for _, r := range table {
+		if math.Abs(float64(d-r.d)) < tol {
+			return r.f
+		}
+	}
+	return 1.5*d + 6
+}
+
+// socketWall is w, the wall of an impact socket beyond the nut's corners:
+// 3/16 in (5 mm). Common practice, not AISC 360.
+func socketWall(sys units.System) units.Length {
+	if sys == units.US {
+		return 3 * units.Inch / 16
+	}
+	return 5
+}
+
+// wrenchClearance is the least distance from the bolt centre to the face
+// of an obstruction that lets a socket reach the nut: the nut's corner
+// radius F/√3 plus the socket wall w. Common practice, not AISC 360.
+func wrenchClearance(d units.Length, sys units.System) units.Length {
+	return nutAcrossFlats(d, sys)/units.Length(math.Sqrt(3)) + socketWall(sys)
+}
+
+// gageFindings is gage.workable (angles only; common practice): the hole
+// nearest the heel must clear the fillet, y − Dy/2 ≥ k, and leave room for
+// the socket beside the outstanding leg, y − t ≥ F/√3 + w.
+func gageFindings(c *engine.Connection, info MemberInfo) []Finding {
+	const id = "gage.workable"
+	if len(c.Holes) == 0 || (c.Member.Shape != engine.Angle && c.Member.Shape != engine.DoubleAngle) {
+		return nil
+	}
+	near := 0
+	for i := range c.Holes {
+		if c.Holes[i].Y < c.Holes[near].Y-tol {
+			near = i
+		}
+	}
+	h, name := &c.Holes[near], holeName(c, near)
+	fillet := h.Y - h.Dy/2
+	leg := h.Y - c.Member.T
+	wrench := wrenchClearance(c.Bolt.D, c.Edition.System)
+	return []Finding{
+		lengthFinding(id, commonPractice, fillet, info.K, atLeast(fillet, info.K), name+" to fillet (k)"),
+		lengthFinding(id, commonPractice, leg, wrench, atLeast(leg, wrench), name+" to outstanding leg (wrench clearance)"),
+	}
+}
+
+// slendernessFindings is slenderness, the User Note to D1: L/r preferably
+// ≤ 300. Advisory: it never fails a job.
+func slendernessFindings(c *engine.Connection, info MemberInfo) []Finding {
+	if info.Length <= 0 || info.Rmin <= 0 {
+		return nil
+	}
+	lr := float64(info.Length / info.Rmin)
+	where := "member L/r"
+	if info.Designation != "" {
+		where = info.Designation + " L/r"
+	}
+	return []Finding{{
+		ID: "slenderness", Clause: c.Edition.Clause("D1"),
+		Measured: lr, Limit: maxSlenderness, Dim: units.Dimensionless,
+		Pass: lr <= maxSlenderness, Advisory: true, Where: where,
+	}}
+}

@@ -1,0 +1,46 @@
+// Package section is the catalog of angle sizes and the section properties
+// computed from their geometry.
+//
+// Units: lengths in millimetres (units.Length), areas in mm² (units.Area),
+// second moments in mm⁴ (plain float64, there being no typed quantity for
+// them). US designations and dimensions are stored in exact inches (whole
+// sixteenths) and converted on lookup; SI ones in millimetres.
+//
+// Axes: the origin is at the heel, the outer corner of the angle. Leg A, the
+// connected leg, runs along +y; leg B, the outstanding leg, runs along +x;
+// both outer faces lie on the axes, so every coordinate in the section is
+// positive. Props.Xbar is the centroid's x, its distance from the outer face
+// of leg A: the shear-lag eccentricity x̄ of AISC 360 Table D3.1 when leg A
+// is bolted. Props.Ybar is the centroid's y. Iaa and Ibb are second moments
+// about the centroidal axes parallel to leg A and leg B (AISC's y-y and x-x
+// when leg A is vertical); Imin is the minor principal one (AISC z-z,
+// EN 10056-1 v-v). Second moments are positive; no sign convention arises
+// because the product of inertia is not exported.
+//
+// Geometry: an angle is two rectangles (leg A at full length, leg B beyond
+// leg A's thickness), plus the root fillet piece of area (1 − π/4)·R1² in
+// the inner corner, less a piece of area (1 − π/4)·R2² at the inner corner
+// of each toe. The corner pieces are computed exactly (square less quarter
+// disc, each with its own centroid and second moments), not as points.
+//
+// Catalogs:
+//
+//   - US: the common angle sizes of the AISC Steel Construction Manual,
+//     Table 1-7 (sizes, thicknesses and the values below from memory).
+//     Table 1-7 prints the area and x̄ of the plain two-rectangle section
+//     (L4x4x1/2: A = 3.75 in² = 4·½ + 3½·½; x̄ = 1.18 in, plain 1.183) but
+//     an rz of 0.776 in, 0.8 % below the plain 0.782, as fillet and toe
+//     radii would give. Radii that bring rz to the table (r1 = kdet − t =
+//     3/8 in, r2 ≈ 1/4 in) put x̄ 0.7 % low at 1.17 in; only an ad hoc pair
+//     fits all three within 0.5 %. Since x̄ drives U = 1 − x̄/l, the US
+//     catalog carries R1 = R2 = 0: A and x̄ match the table, rz runs up to
+//     about 1 % high (it matters only to the L/r ≤ 300 preference). K is
+//     the AISC detailing kdet, taken from memory as t + 3/8 in for legs of
+//     3 to 5 in (most sizes), t + 1/2 in for 6 and 7 in, t + 5/8 in for
+//     8 in and t + 1/4 in for 2 and 2½ in.
+//   - SI: EN 10056-1 equal and unequal angles with their root and toe radii
+//     r1, r2 (from memory); K = T + R1.
+//
+// Catalog order is the order of the source table: AISC lists large sizes
+// and thick plates first, EN 10056-1 small first.
+package section
