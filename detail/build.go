@@ -1,0 +1,405 @@
+package detail
+
+import (
+	"errors"
+	"fmt"
+	"math"
+	"strings"
+
+	"gaugeline/detail/section"
+	"gaugeline/engine"
+	"gaugeline/rules"
+	"gaugeline/rules/units"
+)
+
+// Build resolves the job into the engine's model: the section from the
+// catalog (or explicit dimensions and overrides), the grades and hole sizes
+// of the edition in force, the hole centres from the pattern (or the
+// explicit list), the plate and the demand. Geometry that cannot be made —
+// a hole outside the member or the plate, a bolt too big for the leg, two
+// holes at one centre — is an *InputError naming the field; a layout that
+// can be made but breaks a detailing rule is not (the checks report it).
+func (j *Job) Build() (*Design, error) {
+	ed, err := rules.Lookup(j.Standard, j.Units)
+	if err != nil {
+		return nil, j.inputErr("standard", err.Error(), "known standards: "+strings.Join(rules.Names(), ", "))
+	}
+	if err := j.CheckStock(ed); err != nil {
+		return nil, err
+	}
+	d := &Design{Job: j}
+	c := &d.Conn
+	c.Edition, c.Method = ed, j.Method
+
+	if err := j.buildMember(ed, d); err != nil {
+		return nil, err
+	}
+	if err := j.buildBolt(ed, c); err != nil {
+		return nil, err
+	}
+	if err := j.buildHoles(ed, c); err != nil {
+		return nil, err
+	}
+	if err := j.buildPlate(ed, d); err != nil {
+		return nil, err
+	}
+	if j.Load.Combined() {
+		c.Demand, d.Combination = engine.Combine(j.Method, j.Load.Service)
+	} else {
+		c.Demand = j.Load.Required
+	}
+	return d, nil
+}
+
+// CheckStock checks the propose stock against the edition: every grade and
+// diameter must be tabulated. A job without a stock block passes.
+func (j *Job) CheckStock(ed *rules.Edition) error {
+	for i, g := range j.Stock.Grades {
+		if _, err := ed.Bolt(g); err != nil {
+			path := fmt.Sprintf("stock.grades[%d]", i)
+			return j.inputErr(path, fmt.Sprintf("unknown bolt grade %q in %s", g, ed), "known grades: "+strings.Join(ed.BoltGrades(), ", "))
+		}
+	}
+	for i, dia := range j.Stock.Diameters {
+		if _, err := ed.Hole(dia, j.Bolts.Hole); err != nil {
+			path := fmt.Sprintf("stock.diameters[%d]", i)
+			return j.inputErr(path, tabulatedMsg(err), diametersHint(ed))
+		}
+	}
+	return nil
+}
+
+func tabulatedMsg(err error) string {
+	var nt *rules.NotTabulatedError
+	if errors.As(err, &nt) {
+		return fmt.Sprintf("%s has no hole size for %s in %s", nt.Table, nt.Key, nt.Edition)
+	}
+	return err.Error()
+}
+
+func diametersHint(ed *rules.Edition) string {
+	var ds []string
+	for _, d := range ed.Diameters() {
+		if ed.System == units.SI {
+			ds = append(ds, fmt.Sprintf("M%g", d.Mm()))
+		} else {
+			ds = append(ds, units.FormatJob(d, units.US))
+		}
+	}
+	return "tabulated diameters: " + strings.Join(ds, ", ")
+}
+
+// steel resolves a catalog grade or explicit Fy/Fu of the block at path.
+func (j *Job) steel(ed *rules.Edition, s SteelSpec, path string) (rules.Steel, error) {
+	if s.Grade == "" {
+		lab := j.Units.Label(units.DimStress)
+		name := fmt.Sprintf("Fy %g/Fu %g %s", j.Units.ToJob(float64(s.Fy), units.DimStress), j.Units.ToJob(float64(s.Fu), units.DimStress), lab)
+		return rules.Steel{Name: name, Fy: s.Fy, Fu: s.Fu}, nil
+	}
+	st, err := ed.Steel(s.Grade)
+	if err != nil {
+		return st, j.inputErr(path+".grade", fmt.Sprintf("unknown steel grade %q", s.Grade),
+			"known grades: "+strings.Join(ed.SteelGrades(), ", ")+"; or give fy and fu")
+	}
+	return st, nil
+}
+
+// compact writes a length the way a designation does: "1-1/2", "10".
+func compact(l units.Length, sys units.System) string {
+	s := units.FormatJob(l, sys)
+	return strings.TrimSuffix(strings.TrimSuffix(s, " in"), " mm")
+}
+
+// lookupAngle finds a catalog angle; a size written short leg first
+// (L4x6x1/2) connects the short leg of the catalog's L6x4x1/2.
+func lookupAngle(size string, sys units.System) (section.Angle, string, error) {
+	a, err := section.Lookup(size, sys)
+	if err == nil {
+		return a, a.Name, nil
+	}
+	var ua *section.UnknownAngleError
+	if !errors.As(err, &ua) {
+		return a, "", err
+	}
+	s := strings.ReplaceAll(strings.TrimSpace(size), "×", "x")
+	parts := strings.FieldsFunc(s[min(1, len(s)):], func(r rune) bool { return r == 'x' || r == 'X' })
+	if len(parts) == 3 {
+		if b, err2 := section.Lookup("L"+parts[1]+"x"+parts[0]+"x"+parts[2], sys); err2 == nil {
+			return b.Swapped(), swapName(b.Name), nil
+		}
+	}
+	return a, "", err
+}
+
+// swapName exchanges the legs of a designation: L6x4x1/2 → L4x6x1/2.
+func swapName(name string) string {
+	p := strings.Split(strings.TrimPrefix(name, "L"), "x")
+	if len(p) != 3 {
+		return name
+	}
+	return "L" + p[1] + "x" + p[0] + "x" + p[2]
+}
+
+// buildMember resolves the member section and steel into d.Conn.Member
+// and d.Info.
+func (j *Job) buildMember(ed *rules.Edition, d *Design) error {
+	m := j.Member
+	mem := &d.Conn.Member
+	info := &d.Info
+	mem.Shape = m.Shape
+	mem.Pieces = 1
+	info.Length = m.Length
+
+	switch m.Shape {
+	case engine.Flat:
+		mem.Width, mem.T = m.Width, m.Thickness
+		mem.Ag = m.Width.Mul(m.Thickness)
+		info.Designation = "PL " + compact(m.Width, j.Units) + "x" + compact(m.Thickness, j.Units)
+		info.Rmin = units.Length(float64(min(m.Width, m.Thickness)) / math.Sqrt(12))
+	default:
+		var a section.Angle
+		var err error
+		if m.Size != "" {
+			size := strings.TrimSpace(m.Size)
+			if m.Shape == engine.DoubleAngle {
+				size = strings.TrimPrefix(size, "2")
+			}
+			a, info.Designation, err = lookupAngle(size, j.Units)
+			if err != nil {
+				hint := "sizes are catalog designations such as L4x4x1/2 (us) or L100x100x10 (si); or give legs and thickness"
+				var ua *section.UnknownAngleError
+				msg := err.Error()
+				if errors.As(err, &ua) {
+					msg = fmt.Sprintf("no angle %q in the %s catalog", m.Size, j.Units)
+					if h := ua.Hint(); h != "" {
+						hint = h
+					}
+				} else {
+					msg = strings.TrimPrefix(msg, "section: ")
+				}
+				return j.inputErr("member.size", msg, hint)
+			}
+			info.K = a.K
+		} else {
+			a, err = section.Custom(m.Legs[0], m.Legs[1], m.Thickness)
+			if err != nil {
+				return j.inputErr("member.legs", strings.TrimPrefix(err.Error(), "section: "), "")
+			}
+			info.Designation = "L" + compact(m.Legs[0], j.Units) + "x" + compact(m.Legs[1], j.Units) + "x" + compact(m.Thickness, j.Units)
+			info.K = a.T
+		}
+		props := a.Properties()
+		mem.Width, mem.Outstanding, mem.T = a.A, a.B, a.T
+		area := props.Area
+		if m.Area > 0 {
+			area = m.Area
+		}
+		mem.Xbar = props.Xbar
+		if m.Xbar > 0 {
+			mem.Xbar = m.Xbar
+		}
+		info.Rmin = props.Rmin
+		if m.Shape == engine.DoubleAngle {
+			mem.Pieces = 2
+			info.Designation = "2" + info.Designation
+			info.Rmin = a.Double(j.gap()).Rmin
+		}
+		// An rmin override is of one angle: for a pair it is a lower bound
+		// on the pair's least r, so using it is conservative.
+		if m.Rmin > 0 {
+			info.Rmin = m.Rmin
+		}
+		mem.Ag = area * units.Area(mem.Pieces)
+	}
+
+	st, err := j.steel(ed, m.Steel, "member")
+	if err != nil {
+		return err
+	}
+	mem.Fy, mem.Fu = st.Fy, st.Fu
+	info.Grade = st.Name
+	info.Weathering = st.Weathering
+	return nil
+}
+
+// gap is the space between double angles: as given, else the plate's
+// thickness, else 3/8 in (10 mm) (common practice, no source).
+func (j *Job) gap() units.Length {
+	switch {
+	case j.Member.Gap > 0:
+		return j.Member.Gap
+	case j.Plate != nil && j.Plate.Thickness > 0:
+		return j.Plate.Thickness
+	case j.Units == units.SI:
+		return 10 * units.Millimetre
+	}
+	return units.Inch * 3 / 8
+}
+
+func (j *Job) buildBolt(ed *rules.Edition, c *engine.Connection) error {
+	b := j.Bolts
+	if b.Diameter == 0 {
+		return j.inputErr("bolts.diameter", "is required", `diameter: 3/4 in (us) or M20 (si)`)
+	}
+	if b.Grade == "" {
+		return j.inputErr("bolts.grade", "is required", "known grades: "+strings.Join(ed.BoltGrades(), ", "))
+	}
+	g, err := ed.Bolt(b.Grade)
+	if err != nil {
+		return j.inputErr("bolts.grade", fmt.Sprintf("unknown bolt grade %q in %s", b.Grade, ed), "known grades: "+strings.Join(ed.BoltGrades(), ", "))
+	}
+	c.Bolt = engine.Bolt{
+		D: b.Diameter, Grade: g, Threads: b.Threads, Joint: b.Joint, Surface: b.Surface,
+		Fillers: b.Fillers, DeformationConsidered: b.DeformationConsidered,
+	}
+	return nil
+}
+
+// holeExtent returns a hole's extents along x and y for its type and slot.
+func holeExtent(hs rules.HoleSize, t rules.HoleType, dir rules.SlotDir) (dx, dy units.Length) {
+	switch {
+	case !t.IsSlot():
+		return hs.Width, hs.Width
+	case dir == rules.Longitudinal:
+		return hs.Length, hs.Width
+	}
+	return hs.Width, hs.Length
+}
+
+// eps is the geometric tolerance of the fit checks, in mm.
+const eps = 1e-6
+
+func (j *Job) buildHoles(ed *rules.Edition, c *engine.Connection) error {
+	b := j.Bolts
+	hs, err := ed.Hole(b.Diameter, b.Hole)
+	if err != nil {
+		return j.inputErr("bolts.diameter", tabulatedMsg(err), diametersHint(ed))
+	}
+	slot := rules.Transverse
+	if b.Hole.IsSlot() {
+		slot = b.Slot
+	}
+	dx, dy := holeExtent(hs, b.Hole, slot)
+	w := c.Member.Width
+	room, part := w, "flat"
+	if c.Member.Shape != engine.Flat {
+		room, part = w-c.Member.T, "leg"
+	}
+	if dy > room+eps {
+		return j.inputErr("bolts.diameter", fmt.Sprintf("the %s hole (%s across) does not fit the %s (%s clear of the thickness)",
+			units.FormatJob(b.Diameter, j.Units), units.FormatJob(dy, j.Units), part, units.FormatJob(room, j.Units)),
+			"use a smaller bolt or a wider "+part)
+	}
+
+	// field names, for each hole, the input that placed it there.
+	type placed struct {
+		engine.Hole
+		xField, yField string
+	}
+	var hs2 []placed
+	if j.Holes != nil {
+		for i, h := range j.Holes {
+			f := fmt.Sprintf("holes[%d]", i)
+			hs2 = append(hs2, placed{engine.Hole{X: h.X, Y: h.Y}, f, f})
+		}
+	} else {
+		if b.PerLine == 0 {
+			return j.inputErr("bolts.per_line", "is required", "per_line: the number of bolts in each gage line")
+		}
+		if b.PerLine > 1 && b.Pitch == 0 {
+			return j.inputErr("bolts.pitch", "is required with more than one bolt per line", "pitch: 3 in")
+		}
+		if b.End == 0 {
+			return j.inputErr("bolts.end", "is required", "end: the first bolt to the member's end, e.g. 1-1/2 in")
+		}
+		if b.Gage == 0 {
+			return j.inputErr("bolts.gage", "is required", "gage: the first gage line from the heel or edge, e.g. 2-1/2 in")
+		}
+		if b.Lines > 1 && b.Gage2 == 0 {
+			return j.inputErr("bolts.gage2", "is required with more than one gage line", "gage2: spacing between gage lines")
+		}
+		if b.Lines*b.PerLine > maxHoles {
+			return j.inputErr("bolts.per_line", fmt.Sprintf("%d lines of %d make too many bolts (at most %d)", b.Lines, b.PerLine, maxHoles), "")
+		}
+		for i := range b.Lines {
+			y := b.Gage + units.Length(i)*b.Gage2
+			yField := "bolts.gage"
+			if i > 0 {
+				yField = "bolts.gage2"
+			}
+			for k := range b.PerLine {
+				x := b.End + units.Length(k)*b.Pitch
+				xField := "bolts.end"
+				if i%2 == 1 {
+					x += b.Stagger
+				}
+				hs2 = append(hs2, placed{engine.Hole{X: x, Y: y}, xField, yField})
+			}
+		}
+	}
+
+	c.Holes = make([]engine.Hole, len(hs2))
+	for i := range hs2 {
+		h := &hs2[i]
+		h.ID = fmt.Sprintf("H%d", i+1)
+		h.Type, h.Slot, h.Dx, h.Dy = b.Hole, slot, dx, dy
+		switch {
+		case h.X-dx/2 < -eps:
+			return j.inputErr(h.xField, fmt.Sprintf("hole %s at x = %s runs past the member end", h.ID, units.FormatJob(h.X, j.Units)),
+				"the hole's edge must be inside the member: x ≥ "+units.FormatJob(dx/2, j.Units))
+		case h.Y-dy/2 < -eps:
+			return j.inputErr(h.yField, fmt.Sprintf("hole %s at y = %s runs off the %s", h.ID, units.FormatJob(h.Y, j.Units), part),
+				"y is measured from the heel (angles) or one edge (flats)")
+		case h.Y+dy/2 > w+eps:
+			return j.inputErr(h.yField, fmt.Sprintf("hole %s at y = %s runs off the %s, which is %s wide",
+				h.ID, units.FormatJob(h.Y, j.Units), part, units.FormatJob(w, j.Units)),
+				"y is measured from the heel (angles) or one edge (flats)")
+		}
+		for k := range i {
+			o := &hs2[k]
+			if math.Abs(float64(o.X-h.X)) < eps && math.Abs(float64(o.Y-h.Y)) < eps {
+				return j.inputErr(h.xField, fmt.Sprintf("hole %s has the same centre as %s", h.ID, o.ID), "")
+			}
+		}
+		c.Holes[i] = h.Hole
+	}
+	return nil
+}
+
+func (j *Job) buildPlate(ed *rules.Edition, d *Design) error {
+	ps := j.Plate
+	if ps == nil {
+		return nil
+	}
+	if ps.AutoThickness {
+		return j.inputErr("plate.thickness", "auto is for propose", "give the plate thickness to check, or run gaugeline propose")
+	}
+	if ps.Edge == 0 {
+		return j.inputErr("plate.edge", "is required", "edge: the last bolt to the plate's free edge, e.g. 1-1/2 in")
+	}
+	st, err := j.steel(ed, ps.Steel, "plate")
+	if err != nil {
+		return err
+	}
+	c := &d.Conn
+	pl := &engine.Plate{Kind: ps.Kind, T: ps.Thickness, Width: ps.Width, Fy: st.Fy, Fu: st.Fu}
+	var xmax, ysum units.Length
+	for i, h := range c.Holes {
+		if i == 0 || h.X > xmax {
+			xmax = h.X
+		}
+		ysum += h.Y
+	}
+	pl.FreeEdge = xmax + ps.Edge
+	pl.YCentre = ysum / units.Length(len(c.Holes))
+	for _, h := range c.Holes {
+		if h.Y-h.Dy/2 < pl.YMin()-eps || h.Y+h.Dy/2 > pl.YMax()+eps {
+			return j.inputErr("plate.width", fmt.Sprintf("hole %s runs off the plate: the plate is %s wide", h.ID, units.FormatJob(ps.Width, j.Units)),
+				"the plate must be wider than the bolt group plus the hole")
+		}
+	}
+	c.Plate = pl
+	d.Info.PlateGrade = st.Name
+	d.Info.Weathering = d.Info.Weathering || st.Weathering
+	return nil
+}

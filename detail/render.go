@@ -1,0 +1,188 @@
+package detail
+
+import (
+	"fmt"
+	"io"
+	"strings"
+	"text/tabwriter"
+
+	"gaugeline/engine"
+	"gaugeline/rules/units"
+)
+
+// people formats internal values for a table a person reads, in the job's
+// units: forces to 0.1, US lengths in feet-inches-sixteenths, SI lengths to
+// 0.1 mm, areas to 3 (us) or 0 (si) decimals.
+type people struct{ sys units.System }
+
+func (p people) force(f units.Force) string {
+	return fmt.Sprintf("%.1f", p.sys.ToJob(float64(f), units.DimForce))
+}
+
+func (p people) length(l units.Length) string {
+	if p.sys == units.US {
+		return units.FormatFeetInches(l)
+	}
+	return fmt.Sprintf("%.1f mm", float64(l))
+}
+
+func (p people) value(v float64, d units.Dim) string {
+	switch d {
+	case units.DimLength:
+		return p.length(units.Length(v))
+	case units.DimArea:
+		if p.sys == units.US {
+			return fmt.Sprintf("%.3f in2", units.Area(v).In2())
+		}
+		return fmt.Sprintf("%.0f mm2", v)
+	case units.DimStress:
+		return fmt.Sprintf("%.1f %s", p.sys.ToJob(v, d), p.sys.Label(d))
+	case units.DimForce:
+		return fmt.Sprintf("%.1f %s", p.sys.ToJob(v, d), p.sys.Label(d))
+	}
+	return fmt.Sprintf("%.3g", v)
+}
+
+func ratio(r float64) string {
+	if r > 99.99 {
+		return ">99.99"
+	}
+	return fmt.Sprintf("%.3f", r)
+}
+
+func okFail(pass, advisory bool) string {
+	switch {
+	case pass:
+		return "ok"
+	case advisory:
+		return "note"
+	}
+	return "FAIL"
+}
+
+// Summary describes the connection in a few lines for people.
+func (d *Design) Summary() [][2]string {
+	p := people{d.Job.Units}
+	c := d.Conn
+	m := c.Member
+	member := fmt.Sprintf("%s %s, %s (Fy %s, Fu %s)", m.Shape, d.Info.Designation, d.Info.Grade,
+		p.value(float64(m.Fy), units.DimStress), p.value(float64(m.Fu), units.DimStress))
+	rows := [][2]string{{"member", member}}
+	if pl := c.Plate; pl != nil {
+		rows = append(rows, [2]string{"plate", fmt.Sprintf("%s %s %s, %s wide, free edge %s past the last bolt",
+			p.length(pl.T), d.Info.PlateGrade, pl.Kind, p.length(pl.Width), p.length(pl.FreeEdge-lastX(c.Holes)))})
+	}
+	b := c.Bolt
+	hole := "standard"
+	if len(c.Holes) > 0 {
+		hole = c.Holes[0].Type.String()
+		if c.Holes[0].Type.IsSlot() {
+			hole += " " + c.Holes[0].Slot.String()
+		}
+	}
+	rows = append(rows, [2]string{"bolts", fmt.Sprintf("%d × %s %s, threads %s, %s joint, %s holes",
+		len(c.Holes), boltSize(b.D, d.Job.Units), b.Grade.Name, b.Threads, b.Joint, hole)})
+	demand := fmt.Sprintf("%s %s (%s)", p.force(c.Demand), d.Job.Units.Labels().Force, c.Method)
+	if d.Combination != "" {
+		demand += ", " + d.Combination
+	}
+	rows = append(rows, [2]string{"demand", demand})
+	return rows
+}
+
+func lastX(hs []engine.Hole) units.Length {
+	var x units.Length
+	for _, h := range hs {
+		x = max(x, h.X)
+	}
+	return x
+}
+
+// boltSize names a bolt diameter: 3/4" or M20.
+func boltSize(d units.Length, sys units.System) string {
+	if sys == units.SI {
+		return fmt.Sprintf("M%g", float64(d))
+	}
+	return units.FormatFeetInches(d)
+}
+
+// WriteText writes the report as aligned tables for a terminal.
+func (r *Report) WriteText(w io.Writer) error {
+	d := r.Design
+	p := people{d.Job.Units}
+	lb := d.Job.Units.Labels()
+	var b strings.Builder
+	fmt.Fprintf(&b, "%s — %s, %s, %s units\n", d.Job.Mark, d.Conn.Edition.Name, strings.ToUpper(d.Conn.Method.String()), d.Job.Units)
+	tw := tabwriter.NewWriter(&b, 0, 0, 2, ' ', 0)
+	for _, row := range d.Summary() {
+		fmt.Fprintf(tw, "  %s\t%s\n", row[0], row[1])
+	}
+	tw.Flush()
+	fmt.Fprintf(&b, "\n")
+	tw = tabwriter.NewWriter(&b, 0, 0, 2, ' ', 0)
+	fmt.Fprintf(tw, "LIMIT STATE\tCLAUSE\tNOMINAL %s\tAVAILABLE %s\tRATIO\t\tWHAT\n", lb.Force, lb.Force)
+	for i, x := range r.Results {
+		mark := okFail(x.Pass, false)
+		if i == r.Governing {
+			mark += " <"
+		}
+		fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\t%s\t%s\n", x.ID, x.Clause, p.force(x.Nominal), p.force(x.Available), ratio(x.Ratio), mark, x.Note)
+	}
+	tw.Flush()
+	fmt.Fprintf(&b, "\n")
+	tw = tabwriter.NewWriter(&b, 0, 0, 2, ' ', 0)
+	fmt.Fprintf(tw, "DETAILING\tCLAUSE\tMEASURED\tLIMIT\t\tWHERE\n")
+	for _, f := range r.Findings {
+		fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\t%s\n", f.ID, f.Clause, p.value(f.Measured, f.Dim), p.value(f.Limit, f.Dim), okFail(f.Pass, f.Advisory), f.Where)
+	}
+	tw.Flush()
+	g := r.GoverningResult()
+	fmt.Fprintf(&b, "\nverdict: %s — governing %s (%s), ratio %s\n", strings.ToUpper(r.Verdict()), g.ID, g.Clause, ratio(g.Ratio))
+	for _, f := range r.Findings {
+		if !f.Pass && !f.Advisory {
+			fmt.Fprintf(&b, "  fails %s (%s): %s, measured %s, limit %s\n", f.ID, f.Clause, f.Where, p.value(f.Measured, f.Dim), p.value(f.Limit, f.Dim))
+		}
+	}
+	fmt.Fprintf(&b, "\n")
+	for _, c := range r.Cautions {
+		fmt.Fprintf(&b, "note: %s\n", c)
+	}
+	_, err := io.WriteString(w, b.String())
+	return err
+}
+
+// WriteMarkdown writes the report as Markdown tables for a calculation record.
+func (r *Report) WriteMarkdown(w io.Writer) error {
+	d := r.Design
+	p := people{d.Job.Units}
+	lb := d.Job.Units.Labels()
+	var b strings.Builder
+	fmt.Fprintf(&b, "# %s — tension connection check\n\n", d.Job.Mark)
+	fmt.Fprintf(&b, "%s, %s, %s units.\n\n", d.Conn.Edition.Name, strings.ToUpper(d.Conn.Method.String()), d.Job.Units)
+	for _, row := range d.Summary() {
+		fmt.Fprintf(&b, "- **%s**: %s\n", row[0], row[1])
+	}
+	fmt.Fprintf(&b, "\n## Limit states\n\n| id | clause | nominal (%s) | available (%s) | demand (%s) | ratio | result | what |\n|---|---|---:|---:|---:|---:|---|---|\n", lb.Force, lb.Force, lb.Force)
+	for i, x := range r.Results {
+		res := okFail(x.Pass, false)
+		id := x.ID
+		if i == r.Governing {
+			id = "**" + id + "**"
+			res += " (governs)"
+		}
+		fmt.Fprintf(&b, "| %s | %s | %s | %s | %s | %s | %s | %s |\n", id, x.Clause, p.force(x.Nominal), p.force(x.Available), p.force(x.Demand), ratio(x.Ratio), res, mdEscape(x.Note))
+	}
+	fmt.Fprintf(&b, "\n## Detailing\n\n| id | clause | measured | limit | result | where |\n|---|---|---:|---:|---|---|\n")
+	for _, f := range r.Findings {
+		fmt.Fprintf(&b, "| %s | %s | %s | %s | %s | %s |\n", f.ID, f.Clause, mdEscape(p.value(f.Measured, f.Dim)), mdEscape(p.value(f.Limit, f.Dim)), okFail(f.Pass, f.Advisory), mdEscape(f.Where))
+	}
+	g := r.GoverningResult()
+	fmt.Fprintf(&b, "\n**Verdict: %s** — governing %s (%s), ratio %s.\n\n", strings.ToUpper(r.Verdict()), g.ID, g.Clause, ratio(g.Ratio))
+	for _, c := range r.Cautions {
+		fmt.Fprintf(&b, "> %s\n>\n", c)
+	}
+	_, err := io.WriteString(w, strings.TrimSuffix(b.String(), ">\n"))
+	return err
+}
+
+func mdEscape(s string) string { return strings.ReplaceAll(s, "|", `\|`) }

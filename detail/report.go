@@ -1,0 +1,189 @@
+package detail
+
+import (
+	"bytes"
+	"encoding/json"
+	"fmt"
+	"math"
+
+	"gaugeline/engine"
+	"gaugeline/rules/units"
+)
+
+// Caution is printed on every report, sheet and README.
+const Caution = "Results must be checked against the governing code and approved by the engineer of record; " +
+	"local codes and licensed practice prevail. gaugeline is an aid, not a substitute for licensed practice."
+
+// Report is the outcome of checking one design: every limit state, every
+// detailing finding and the verdict.
+type Report struct {
+	Design    *Design
+	Results   []engine.Result
+	Findings  []Finding
+	Governing int // index of the governing limit state in Results
+	Pass      bool
+	Cautions  []string
+}
+
+// Check runs every limit state and every detailing check of the design.
+func Check(d *Design) (*Report, error) {
+	rs, err := engine.Check(&d.Conn)
+	if err != nil {
+		return nil, err
+	}
+	r := &Report{Design: d, Results: rs, Findings: Detailing(&d.Conn, d.Info), Governing: engine.Governing(rs)}
+	r.Pass = Passes(r.Findings)
+	for _, x := range rs {
+		r.Pass = r.Pass && x.Pass
+	}
+	r.Cautions = cautions(d)
+	return r, nil
+}
+
+// GoverningResult returns the limit state with the highest ratio.
+func (r *Report) GoverningResult() engine.Result { return r.Results[r.Governing] }
+
+// Verdict is "pass" or "fail".
+func (r *Report) Verdict() string {
+	if r.Pass {
+		return "pass"
+	}
+	return "fail"
+}
+
+// cautions lists the caution line and the assumptions the check made.
+func cautions(d *Design) []string {
+	c := []string{Caution}
+	if d.Conn.Plate != nil {
+		c = append(c, "The plate is taken as a rectangle of the given width centred on the bolt group; "+
+			"its side edges are free edges for block shear.")
+	}
+	c = append(c, "Block shear uses Ubs = 1.0 (uniform tension stress).")
+	if d.Conn.Member.Shape != engine.Flat {
+		c = append(c, "Shear lag: U is the largest of Table D3.1 case 2, case 8 and the D3 bound for open sections.")
+	}
+	return c
+}
+
+// jsonNum is a float that encodes non-finite values as null.
+type jsonNum float64
+
+func (n jsonNum) MarshalJSON() ([]byte, error) {
+	if math.IsNaN(float64(n)) || math.IsInf(float64(n), 0) {
+		return []byte("null"), nil
+	}
+	return json.Marshal(float64(n))
+}
+
+type jsonLimit struct {
+	ID        string             `json:"id"`
+	Clause    string             `json:"clause"`
+	Nominal   jsonNum            `json:"nominal"`
+	Available jsonNum            `json:"available"`
+	Demand    jsonNum            `json:"demand"`
+	Ratio     jsonNum            `json:"ratio"`
+	Pass      bool               `json:"pass"`
+	Values    map[string]jsonNum `json:"values"`
+	Note      string             `json:"note,omitempty"`
+	PerBolt   []jsonBolt         `json:"per_bolt,omitempty"`
+}
+
+type jsonBolt struct {
+	Hole     string  `json:"hole"`
+	Lc       jsonNum `json:"lc"`
+	Bearing  jsonNum `json:"bearing"`
+	Tearout  jsonNum `json:"tearout"`
+	Rn       jsonNum `json:"rn"`
+	Governed string  `json:"governs"`
+}
+
+type jsonFinding struct {
+	ID       string  `json:"id"`
+	Clause   string  `json:"clause"`
+	Measured jsonNum `json:"measured"`
+	Limit    jsonNum `json:"limit"`
+	Unit     string  `json:"unit"`
+	Pass     bool    `json:"pass"`
+	Advisory bool    `json:"advisory"`
+	Where    string  `json:"where"`
+}
+
+type jsonHole struct {
+	ID       string  `json:"id"`
+	X        jsonNum `json:"x"`
+	Y        jsonNum `json:"y"`
+	Diameter jsonNum `json:"diameter"`
+	Length   jsonNum `json:"length,omitempty"`
+	Type     string  `json:"type"`
+	Slot     string  `json:"slot,omitempty"`
+}
+
+type jsonReport struct {
+	Mark           string        `json:"mark"`
+	Standard       string        `json:"standard"`
+	Method         string        `json:"method"`
+	Units          string        `json:"units"`
+	UnitLabels     units.Labels  `json:"unit_labels"`
+	Demand         jsonNum       `json:"demand"`
+	Combination    string        `json:"combination,omitempty"`
+	Verdict        string        `json:"verdict"`
+	Governing      string        `json:"governing"`
+	GoverningRatio jsonNum       `json:"governing_ratio"`
+	LimitStates    []jsonLimit   `json:"limit_states"`
+	Detailing      []jsonFinding `json:"detailing"`
+	Holes          []jsonHole    `json:"holes"`
+	Cautions       []string      `json:"cautions"`
+}
+
+// document converts the report to the JSON contract of SPEC §9, every
+// value in the job's units.
+func (r *Report) document() jsonReport {
+	d := r.Design
+	sys := d.Job.Units
+	force := func(f units.Force) jsonNum { return jsonNum(sys.ToJob(float64(f), units.DimForce)) }
+	length := func(l units.Length) jsonNum { return jsonNum(sys.ToJob(float64(l), units.DimLength)) }
+	g := r.GoverningResult()
+	doc := jsonReport{
+		Mark: d.Job.Mark, Standard: d.Conn.Edition.Name, Method: d.Conn.Method.String(), Units: sys.String(),
+		UnitLabels: sys.Labels(), Demand: force(d.Conn.Demand), Combination: d.Combination,
+		Verdict: r.Verdict(), Governing: g.ID, GoverningRatio: jsonNum(g.Ratio),
+		LimitStates: []jsonLimit{}, Detailing: []jsonFinding{}, Holes: []jsonHole{}, Cautions: r.Cautions,
+	}
+	for _, x := range r.Results {
+		l := jsonLimit{ID: x.ID, Clause: x.Clause, Nominal: force(x.Nominal), Available: force(x.Available),
+			Demand: force(x.Demand), Ratio: jsonNum(x.Ratio), Pass: x.Pass, Values: map[string]jsonNum{}, Note: x.Note}
+		for _, v := range x.Values {
+			l.Values[v.Name] = jsonNum(sys.ToJob(v.V, v.Dim))
+		}
+		for _, b := range x.PerBolt {
+			l.PerBolt = append(l.PerBolt, jsonBolt{Hole: b.Hole, Lc: length(b.Lc), Bearing: force(b.Bearing),
+				Tearout: force(b.Tearout), Rn: force(b.Rn), Governed: b.Governed})
+		}
+		doc.LimitStates = append(doc.LimitStates, l)
+	}
+	for _, f := range r.Findings {
+		doc.Detailing = append(doc.Detailing, jsonFinding{ID: f.ID, Clause: f.Clause,
+			Measured: jsonNum(sys.ToJob(f.Measured, f.Dim)), Limit: jsonNum(sys.ToJob(f.Limit, f.Dim)),
+			Unit: sys.Label(f.Dim), Pass: f.Pass, Advisory: f.Advisory, Where: f.Where})
+	}
+	for _, h := range d.Conn.Holes {
+		jh := jsonHole{ID: h.ID, X: length(h.X), Y: length(h.Y), Diameter: length(min(h.Dx, h.Dy)), Type: h.Type.String()}
+		if h.Type.IsSlot() {
+			jh.Length = length(max(h.Dx, h.Dy))
+			jh.Slot = h.Slot.String()
+		}
+		doc.Holes = append(doc.Holes, jh)
+	}
+	return doc
+}
+
+// JSON returns the report as indented JSON (SPEC §9), ending in a newline.
+func (r *Report) JSON() ([]byte, error) {
+	var b bytes.Buffer
+	enc := json.NewEncoder(&b)
+	enc.SetIndent("", "  ")
+	if err := enc.Encode(r.document()); err != nil {
+		return nil, fmt.Errorf("detail: encoding report: %w", err)
+	}
+	return b.Bytes(), nil
+}
