@@ -80,13 +80,17 @@ func tabulatedMsg(err error) string {
 func diametersHint(ed *rules.Edition) string {
 	var ds []string
 	for _, d := range ed.Diameters() {
-		if ed.System == units.SI {
-			ds = append(ds, fmt.Sprintf("M%g", d.Mm()))
-		} else {
-			ds = append(ds, units.FormatJob(d, units.US))
-		}
+		ds = append(ds, boltName(d, ed.System))
 	}
 	return "tabulated diameters: " + strings.Join(ds, ", ")
+}
+
+// boltName writes a bolt diameter as a shop says it: "3/4 in", "M20".
+func boltName(d units.Length, sys units.System) string {
+	if sys == units.SI {
+		return fmt.Sprintf("M%g", d.Mm())
+	}
+	return units.FormatJob(d, units.US)
 }
 
 // steel resolves a catalog grade or explicit Fy/Fu of the block at path.
@@ -286,8 +290,12 @@ func (j *Job) buildHoles(ed *rules.Edition, c *engine.Connection) error {
 		room, part = w-c.Member.T, "leg"
 	}
 	if dy > room+eps {
-		return j.inputErr("bolts.diameter", fmt.Sprintf("the %s hole (%s across) does not fit the %s (%s clear of the thickness)",
-			units.FormatJob(b.Diameter, j.Units), units.FormatJob(dy, j.Units), part, units.FormatJob(room, j.Units)),
+		clear := " clear of the thickness"
+		if part == "flat" {
+			clear = " wide"
+		}
+		return j.inputErr("bolts.diameter", fmt.Sprintf("the hole of a %s bolt (%s across) does not fit the %s (%s%s)",
+			boltName(b.Diameter, j.Units), units.FormatJob(dy, j.Units), part, units.FormatJob(room, j.Units), clear),
 			"use a smaller bolt or a wider "+part)
 	}
 

@@ -475,7 +475,11 @@ func quantityHint(d units.Dim, sys units.System) string {
 		units.DimStress: `"50 ksi", "345 MPa"`,
 		units.DimArea:   `"3.75 in2", "2420 mm2"`,
 	}[d]
-	return fmt.Sprintf("write a %s such as %s, or a bare number in %s", d, ex, sys.Label(d))
+	article := "a"
+	if d == units.DimArea {
+		article = "an"
+	}
+	return fmt.Sprintf("write %s %s such as %s, or a bare number in %s", article, d, ex, sys.Label(d))
 }
 
 // lengthRule says which lengths a field accepts.

@@ -420,7 +420,7 @@ func TestJobParseErrors(t *testing.T) {
 		{"fu below fy", strings.Replace(minimalUS, "  grade: A36", "  fy: 50 ksi\n  fu: 50 ksi", 1), "member.fu", 8, "greater than fy", ""},
 		{"fy absurd", strings.Replace(minimalUS, "  grade: A36", "  fy: 5000 ksi\n  fu: 6000 ksi", 1), "member.fy", 7, "absurdly large", ""},
 		{"area zero", strings.Replace(minimalUS, "  grade: A36", "  grade: A36\n  area: 0 in2", 1), "member.area", 8, "greater than zero", ""},
-		{"area as a length", strings.Replace(minimalUS, "  grade: A36", "  grade: A36\n  area: 3 in", 1), "member.area", 8, "", "write a area"},
+		{"area as a length", strings.Replace(minimalUS, "  grade: A36", "  grade: A36\n  area: 3 in", 1), "member.area", 8, "", "write an area"},
 		{"plate without width", minimalUS + "plate:\n  thickness: 1/2 in\n  grade: A36\n", "plate.width", 8, "is required", ""},
 		{"plate kind", minimalUS + "plate:\n  kind: lap\n  thickness: 1/2 in\n  grade: A36\n  width: 9 in\n", "plate.kind", 9, "unknown plate kind", ""},
 		{"plate thickness negative", minimalUS + "plate:\n  thickness: -1/2 in\n  grade: A36\n  width: 9 in\n", "plate.thickness", 9, "greater than zero", ""},

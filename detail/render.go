@@ -28,6 +28,10 @@ func (p people) length(l units.Length) string {
 
 func (p people) value(v float64, d units.Dim) string {
 	switch d {
+	case units.Dimensionless:
+		if v == 0 {
+			return "-"
+		}
 	case units.DimLength:
 		return p.length(units.Length(v))
 	case units.DimArea:
@@ -67,6 +71,9 @@ func (d *Design) Summary() [][2]string {
 	m := c.Member
 	member := fmt.Sprintf("%s %s, %s (Fy %s, Fu %s)", m.Shape, d.Info.Designation, d.Info.Grade,
 		p.value(float64(m.Fy), units.DimStress), p.value(float64(m.Fu), units.DimStress))
+	if strings.HasPrefix(d.Info.Grade, "Fy") {
+		member = fmt.Sprintf("%s %s, %s", m.Shape, d.Info.Designation, d.Info.Grade)
+	}
 	rows := [][2]string{{"member", member}}
 	if pl := c.Plate; pl != nil {
 		rows = append(rows, [2]string{"plate", fmt.Sprintf("%s %s %s, %s wide, free edge %s past the last bolt",

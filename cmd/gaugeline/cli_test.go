@@ -239,3 +239,26 @@ func TestDemoAndRules(t *testing.T) {
 		}
 	}
 }
+
+// TestReadmeJobExample keeps the README's job-file example true: it is
+// extracted, written to a file and checked by the real binary.
+func TestReadmeJobExample(t *testing.T) {
+	b, err := os.ReadFile("../../README.md")
+	if err != nil {
+		t.Fatal(err)
+	}
+	s := string(b)
+	start := strings.Index(s, "```yaml\n")
+	if start < 0 {
+		t.Fatal("README has no yaml example")
+	}
+	s = s[start+len("```yaml\n"):]
+	job := filepath.Join(t.TempDir(), "readme.yaml")
+	if err := os.WriteFile(job, []byte(s[:strings.Index(s, "```")]), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	doc, r := checkJSON(t, job)
+	if r.code > 1 || doc.Mark != "BR-7" {
+		t.Errorf("README example: exit %d, mark %q\n%s", r.code, doc.Mark, r.stderr)
+	}
+}

@@ -1,0 +1,525 @@
+package detail
+
+import (
+	"errors"
+	"math"
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+
+	"gaugeline/detail/section"
+	"gaugeline/engine"
+	"gaugeline/rules"
+	"gaugeline/rules/units"
+)
+
+func mustBuild(t *testing.T, j *Job) *Design {
+	t.Helper()
+	d, err := j.Build()
+	if err != nil {
+		t.Fatalf("Build: %v", err)
+	}
+	return d
+}
+
+func buildErr(t *testing.T, src string) *InputError {
+	t.Helper()
+	j := mustParse(t, src)
+	_, err := j.Build()
+	var ie *InputError
+	if !errors.As(err, &ie) {
+		t.Fatalf("Build: %v (%T), want an *InputError", err, err)
+	}
+	return ie
+}
+
+type wantHole struct {
+	id     string
+	x, y   float64 // job units
+	dx, dy float64 // job units
+}
+
+func checkHoles(t *testing.T, got []engine.Hole, want []wantHole, unit units.Length) {
+	t.Helper()
+	if len(got) != len(want) {
+		t.Fatalf("%d holes, want %d: %+v", len(got), len(want), got)
+	}
+	u := float64(unit)
+	for i, w := range want {
+		g := got[i]
+		if g.ID != w.id || !closeTo(float64(g.X)/u, w.x, 1e-12) || !closeTo(float64(g.Y)/u, w.y, 1e-12) ||
+			!closeTo(float64(g.Dx)/u, w.dx, 1e-12) || !closeTo(float64(g.Dy)/u, w.dy, 1e-12) {
+			t.Errorf("hole %d = %s (%g, %g) %g×%g, want %s (%g, %g) %g×%g", i, g.ID,
+				float64(g.X)/u, float64(g.Y)/u, float64(g.Dx)/u, float64(g.Dy)/u, w.id, w.x, w.y, w.dx, w.dy)
+		}
+	}
+}
+
+// The US single angle of AISC Design Examples v15.0, Example D.2 (from
+// memory): L4x4x1/2 A36, one line of (4) 3/4-in bolts at 3 in.
+const usAngle = `mark: D2
+load:
+  dead: 20 kip
+  live: 60 kip
+member:
+  shape: angle
+  size: L4x4x1/2
+  grade: A36
+  length: 10 ft
+plate:
+  thickness: 1/2 in
+  grade: A572-50
+  width: 12 in
+  edge: 1-1/2 in
+bolts:
+  diameter: 3/4 in
+  grade: A325
+  per_line: 4
+  pitch: 3 in
+  end: 1-1/2 in
+  gage: 2-1/2 in
+`
+
+func TestBuildUSSingleAngle(t *testing.T) {
+	d := mustBuild(t, mustParse(t, usAngle))
+	c := d.Conn
+	// Holes: x = end + k·pitch, y = gage (SPEC §3); 13/16 in standard hole
+	// for a 3/4-in bolt (AISC 360-22 Table J3.3).
+	checkHoles(t, c.Holes, []wantHole{
+		{"H1", 1.5, 2.5, 13.0 / 16, 13.0 / 16},
+		{"H2", 4.5, 2.5, 13.0 / 16, 13.0 / 16},
+		{"H3", 7.5, 2.5, 13.0 / 16, 13.0 / 16},
+		{"H4", 10.5, 2.5, 13.0 / 16, 13.0 / 16},
+	}, units.Inch)
+	for _, h := range c.Holes {
+		if h.Type != rules.Standard {
+			t.Errorf("%s type %v", h.ID, h.Type)
+		}
+	}
+	m := c.Member
+	// Ag = 3.75 in², x̄ = 1.18 in: AISC Manual Table 1-7, L4x4x1/2 (from
+	// memory); 1 % for the table's rounding to 3 figures.
+	if ag := float64(m.Ag) / float64(units.SquareInch); !closeTo(ag, 3.75, 0.01) {
+		t.Errorf("Ag = %g in², want 3.75", ag)
+	}
+	if !closeTo(m.Xbar.In(), 1.18, 0.01) {
+		t.Errorf("x̄ = %g in, want 1.18", m.Xbar.In())
+	}
+	// Legs and thickness are the designation's (input read back).
+	if m.Shape != engine.Angle || m.Pieces != 1 || !closeTo(m.Width.In(), 4, readBack) ||
+		!closeTo(m.Outstanding.In(), 4, readBack) || !closeTo(m.T.In(), 0.5, readBack) {
+		t.Errorf("member = %+v", m)
+	}
+	// A36: Fy 36, Fu 58 ksi (AISC Manual Table 2-3, from memory).
+	if !closeTo(m.Fy.Ksi(), 36, 1e-9) || !closeTo(m.Fu.Ksi(), 58, 1e-9) {
+		t.Errorf("Fy, Fu = %g, %g ksi", m.Fy.Ksi(), m.Fu.Ksi())
+	}
+	// Pu = 1.2D + 1.6L = 120 kips (ASCE 7 2.3.1; Example D.2, from memory).
+	if !closeTo(c.Demand.Kip(), 120, 1e-9) || d.Combination == "" {
+		t.Errorf("demand %g kip by %q, want 120 kip", c.Demand.Kip(), d.Combination)
+	}
+	// Plate: free edge at last bolt + edge = 10.5 + 1.5 in, centred on the
+	// single gage line (SPEC §3).
+	p := c.Plate
+	if p == nil || !closeTo(p.FreeEdge.In(), 12, 1e-12) || !closeTo(p.YCentre.In(), 2.5, 1e-12) ||
+		p.Kind != engine.Gusset || !closeTo(p.T.In(), 0.5, readBack) || !closeTo(p.Width.In(), 12, readBack) {
+		t.Errorf("plate = %+v", p)
+	}
+	// A572 Gr 50: Fy 50, Fu 65 ksi (AISC Manual Table 2-3, from memory).
+	if !closeTo(p.Fy.Ksi(), 50, 1e-9) || !closeTo(p.Fu.Ksi(), 65, 1e-9) {
+		t.Errorf("plate Fy, Fu = %g, %g ksi", p.Fy.Ksi(), p.Fu.Ksi())
+	}
+	b := c.Bolt
+	if !closeTo(b.D.In(), 0.75, readBack) || b.Grade.Name == "" || b.Joint != rules.Bearing || !b.DeformationConsidered {
+		t.Errorf("bolt = %+v", b)
+	}
+	if c.Method != rules.LRFD || c.Edition == nil || c.Edition.Name != "aisc360-22" || d.Job == nil {
+		t.Errorf("method %v, edition %v", c.Method, c.Edition)
+	}
+	i := d.Info
+	a, _ := section.Lookup("L4x4x1/2", units.US)
+	if i.Designation != "L4x4x1/2" || i.K != a.K || i.Grade != "A36" || i.PlateGrade != "A572-50" || i.Weathering ||
+		!closeTo(i.Length.In(), 120, readBack) || i.Rmin != a.Properties().Rmin {
+		t.Errorf("info = %+v", i)
+	}
+	// rz = 0.776 in: AISC Manual Table 1-7 (from memory); the section
+	// package's plain section is up to about 1 % high (section/doc.go).
+	if !closeTo(i.Rmin.In(), 0.776, 0.015) {
+		t.Errorf("rmin = %g in, want 0.776", i.Rmin.In())
+	}
+}
+
+func TestBuildRequiredDemand(t *testing.T) {
+	src := strings.Replace(usAngle, "  dead: 20 kip\n  live: 60 kip", "  required: 95 kip", 1)
+	d := mustBuild(t, mustParse(t, src))
+	if !closeTo(d.Conn.Demand.Kip(), 95, 1e-12) || d.Combination != "" {
+		t.Errorf("demand %g kip by %q, want the 95 kip given", d.Conn.Demand.Kip(), d.Combination)
+	}
+}
+
+func TestBuildSwappedSize(t *testing.T) {
+	// L4x6x1/2: connect the 4-in leg of L6x4x1/2 (SPEC §3).
+	src := strings.Replace(usAngle, "L4x4x1/2", "L4x6x1/2", 1)
+	d := mustBuild(t, mustParse(t, src))
+	m := d.Conn.Member
+	if !closeTo(m.Width.In(), 4, readBack) || !closeTo(m.Outstanding.In(), 6, readBack) || d.Info.Designation != "L4x6x1/2" {
+		t.Errorf("member %+v, designation %q", m, d.Info.Designation)
+	}
+	// L6x4x1/2: A = 4.75 in², y = 1.99 in (the centroid from the 4-in leg's
+	// back, the eccentricity when that leg is bolted): AISC Manual Table
+	// 1-7 (from memory); 1 % for rounding.
+	if ag := float64(m.Ag) / float64(units.SquareInch); !closeTo(ag, 4.75, 0.01) {
+		t.Errorf("Ag = %g in², want 4.75", ag)
+	}
+	if !closeTo(m.Xbar.In(), 1.99, 0.01) {
+		t.Errorf("x̄ = %g in, want 1.99", m.Xbar.In())
+	}
+}
+
+func TestBuildSIDoubleAngle(t *testing.T) {
+	j, err := LoadJob(filepath.Join("..", "testdata", "jobs", "si-double-angle.yaml"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	d := mustBuild(t, j)
+	c := d.Conn
+	// M20: 22 mm standard hole (AISC 360-16 Table J3.3M).
+	checkHoles(t, c.Holes, []wantHole{
+		{"H1", 40, 55, 22, 22}, {"H2", 110, 55, 22, 22}, {"H3", 180, 55, 22, 22},
+	}, units.Millimetre)
+	m := c.Member
+	// L100x75x8: A = 13.5 cm² per angle (EN 10056-1, from memory), two
+	// angles; 1 % for rounding.
+	if m.Shape != engine.DoubleAngle || m.Pieces != 2 || !closeTo(float64(m.Ag), 2*1350, 0.01) {
+		t.Errorf("member = %+v", m)
+	}
+	if !closeTo(m.Width.Mm(), 100, readBack) || !closeTo(m.Outstanding.Mm(), 75, readBack) {
+		t.Errorf("legs %g, %g mm", m.Width.Mm(), m.Outstanding.Mm())
+	}
+	// Gap defaults to the plate thickness (SPEC §3).
+	a, _ := section.Lookup("L100x75x8", units.SI)
+	if d.Info.Rmin != a.Double(12).Rmin || d.Info.Designation != "2L100x75x8" {
+		t.Errorf("info = %+v", d.Info)
+	}
+	// A572 Gr 50 in SI: Fy 345, Fu 450 MPa (ASTM A572M Gr 345, from memory).
+	if !closeTo(float64(m.Fy), 345, 1e-9) || !closeTo(float64(m.Fu), 450, 1e-9) {
+		t.Errorf("Fy, Fu = %g, %g MPa", float64(m.Fy), float64(m.Fu))
+	}
+	// ASD, D = 60, L = 110, S = 35 kN: D + L = 170 kN governs over
+	// D + 0.75L + 0.75S = 168.75 (ASCE 7 2.4.1, arithmetic).
+	if !closeTo(c.Demand.KN(), 170, 1e-9) {
+		t.Errorf("demand = %g kN (%s), want 170", c.Demand.KN(), d.Combination)
+	}
+	if c.Method != rules.ASD || c.Edition.Name != "aisc360-16" || c.Bolt.Threads != rules.ThreadsExcluded {
+		t.Errorf("method %v, edition %s, threads %v", c.Method, c.Edition, c.Bolt.Threads)
+	}
+	if c.ShearPlanes() != 2 {
+		t.Errorf("shear planes %d", c.ShearPlanes())
+	}
+}
+
+func TestBuildDoubleAngleGapAndOverrides(t *testing.T) {
+	src := strings.Replace(usAngle, "shape: angle", "shape: double-angle", 1)
+	src = strings.Replace(src, "  length: 10 ft\n", "  length: 10 ft\n  area: 3.5 in2\n  xbar: 1.25 in\n", 1)
+	d := mustBuild(t, mustParse(t, src))
+	// Overrides are of one angle; the pair doubles the area (SPEC §3).
+	if !closeTo(float64(d.Conn.Member.Ag)/float64(units.SquareInch), 7, 1e-12) || !closeTo(d.Conn.Member.Xbar.In(), 1.25, 1e-12) {
+		t.Errorf("Ag %g in², x̄ %g in", float64(d.Conn.Member.Ag)/float64(units.SquareInch), d.Conn.Member.Xbar.In())
+	}
+	a, _ := section.Lookup("L4x4x1/2", units.US)
+	if d.Info.Rmin != a.Double(units.Inch/2).Rmin {
+		t.Errorf("rmin %g: want the pair's with the 1/2-in plate as gap", d.Info.Rmin.In())
+	}
+	// Without a plate the gap is 3/8 in (SPEC §3); with gap given, it.
+	noPlate := strings.Replace(src, "plate:\n  thickness: 1/2 in\n  grade: A572-50\n  width: 12 in\n  edge: 1-1/2 in\n", "", 1)
+	if d := mustBuild(t, mustParse(t, noPlate)); d.Info.Rmin != a.Double(units.Inch*3/8).Rmin || d.Conn.Plate != nil {
+		t.Errorf("no plate: rmin %g", d.Info.Rmin.In())
+	}
+	gap := strings.Replace(src, "  xbar: 1.25 in\n", "  xbar: 1.25 in\n  gap: 1 in\n", 1)
+	if d := mustBuild(t, mustParse(t, gap)); d.Info.Rmin != a.Double(units.Inch).Rmin {
+		t.Errorf("gap 1 in: rmin %g", d.Info.Rmin.In())
+	}
+}
+
+func TestBuildUSStaggeredFlat(t *testing.T) {
+	j, err := LoadJob(filepath.Join("..", "testdata", "jobs", "us-staggered-flat.yaml"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	d := mustBuild(t, j)
+	c := d.Conn
+	// Line i at y = gage + i·gage2, bolt k at end + k·pitch, odd lines
+	// shifted by the stagger (SPEC §3); 7/8-in bolt: 15/16 in hole (AISC
+	// 360-22 Table J3.3).
+	const h = 15.0 / 16
+	checkHoles(t, c.Holes, []wantHole{
+		{"H1", 2, 2, h, h}, {"H2", 5, 2, h, h}, {"H3", 8, 2, h, h},
+		{"H4", 3.5, 6, h, h}, {"H5", 6.5, 6, h, h}, {"H6", 9.5, 6, h, h},
+	}, units.Inch)
+	m := c.Member
+	// Ag = 8 × 5/8 = 5 in², x̄ = 0 for a flat (arithmetic).
+	if m.Shape != engine.Flat || !closeTo(float64(m.Ag)/float64(units.SquareInch), 5, 1e-12) || m.Xbar != 0 ||
+		!closeTo(m.Width.In(), 8, readBack) || m.Outstanding != 0 || m.Pieces != 1 {
+		t.Errorf("member = %+v", m)
+	}
+	// r of a rectangle about its minor axis = t/√12 (mechanics).
+	if !closeTo(d.Info.Rmin.In(), 0.625/math.Sqrt(12), 1e-12) || d.Info.Designation != "PL 8x5/8" || d.Info.K != 0 {
+		t.Errorf("info = %+v", d.Info)
+	}
+	// Explicit Fy/Fu: the input read back.
+	if !closeTo(m.Fy.Ksi(), 50, 1e-12) || !closeTo(m.Fu.Ksi(), 65, 1e-12) || !strings.Contains(d.Info.Grade, "50") {
+		t.Errorf("Fy %g Fu %g grade %q", m.Fy.Ksi(), m.Fu.Ksi(), d.Info.Grade)
+	}
+	// Plate: free edge 9.5 + 2 in, centred on the mean y = 4 in (SPEC §3).
+	p := c.Plate
+	if p.Kind != engine.Splice || !closeTo(p.FreeEdge.In(), 11.5, 1e-12) || !closeTo(p.YCentre.In(), 4, 1e-12) {
+		t.Errorf("plate = %+v", p)
+	}
+	if c.Bolt.Joint != rules.Pretensioned || !closeTo(c.Demand.Kip(), 240, 1e-12) {
+		t.Errorf("joint %v, demand %g", c.Bolt.Joint, c.Demand.Kip())
+	}
+}
+
+func TestBuildSISlotted(t *testing.T) {
+	j, err := LoadJob(filepath.Join("..", "testdata", "jobs", "si-slotted.yaml"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	d := mustBuild(t, j)
+	c := d.Conn
+	// M20 short slot 22 × 26 mm (AISC 360-22 Table J3.3M); transverse: the
+	// long axis runs across the load, along y.
+	checkHoles(t, c.Holes, []wantHole{
+		{"H1", 40, 65, 22, 26}, {"H2", 105, 65, 22, 26}, {"H3", 170, 65, 22, 26}, {"H4", 235, 65, 22, 26},
+	}, units.Millimetre)
+	for _, h := range c.Holes {
+		if h.Type != rules.ShortSlot || h.Slot != rules.Transverse {
+			t.Errorf("%s: %v %v", h.ID, h.Type, h.Slot)
+		}
+	}
+	b := c.Bolt
+	if b.Joint != rules.SlipCritical || b.Surface != rules.ClassB || b.Fillers != 1 || b.DeformationConsidered {
+		t.Errorf("bolt = %+v", b)
+	}
+	// L120x80x10: A = 19.1 cm² (EN 10056-1, from memory); 1 %.
+	if !closeTo(float64(c.Member.Ag), 1910, 0.01) || !closeTo(c.Member.Width.Mm(), 120, readBack) {
+		t.Errorf("member = %+v", c.Member)
+	}
+
+	// Longitudinal: the long axis along the load, along x.
+	j.Bolts.Slot = rules.Longitudinal
+	d = mustBuild(t, j)
+	if h := d.Conn.Holes[0]; h.Dx != 26 || h.Dy != 22 || h.Slot != rules.Longitudinal {
+		t.Errorf("longitudinal slot: %+v", h)
+	}
+	// A slot direction on a round hole is ignored.
+	j.Bolts.Hole = rules.Oversized
+	d = mustBuild(t, j)
+	// M20 oversized: 24 mm (AISC 360-22 Table J3.3M).
+	if h := d.Conn.Holes[0]; h.Dx != 24 || h.Dy != 24 || h.Slot != rules.Transverse {
+		t.Errorf("oversized: %+v", h)
+	}
+}
+
+func TestBuildExplicitHoles(t *testing.T) {
+	src := minimalUS + `bolts:
+  diameter: 3/4 in
+  grade: A325
+  hole: short-slot
+holes:
+  - [4.5 in, 2.5 in]
+  - [1.5 in, 2.5 in]
+  - [3 in, 1-1/4 in]
+`
+	d := mustBuild(t, mustParse(t, src))
+	// 3/4-in short slot 13/16 × 1 in (AISC 360-22 Table J3.3), transverse
+	// by default; ids follow the order given.
+	checkHoles(t, d.Conn.Holes, []wantHole{
+		{"H1", 4.5, 2.5, 13.0 / 16, 1}, {"H2", 1.5, 2.5, 13.0 / 16, 1}, {"H3", 3, 1.25, 13.0 / 16, 1},
+	}, units.Inch)
+	if d.Conn.Plate != nil || !closeTo(d.Conn.Demand.Kip(), 95, 1e-12) {
+		t.Errorf("plate %v, demand %g", d.Conn.Plate, d.Conn.Demand.Kip())
+	}
+}
+
+func TestBuildCustomAngle(t *testing.T) {
+	src := `mark: C1
+load: {required: 40 kip}
+member:
+  shape: angle
+  legs: [5 in, 3 in]
+  thickness: 3/8 in
+  fy: 50 ksi
+  fu: 65 ksi
+bolts: {diameter: 3/4 in, grade: A325, per_line: 3, pitch: 3 in, end: 1-1/2 in, gage: 3 in}
+`
+	d := mustBuild(t, mustParse(t, src))
+	m := d.Conn.Member
+	// Plain section: (5 + 3 − 3/8)·3/8 = 2.859 in² (arithmetic; AISC
+	// Manual Table 1-7 prints 2.86 for L5x3x3/8, from memory).
+	if !closeTo(float64(m.Ag)/float64(units.SquareInch), (5+3-0.375)*0.375, 1e-9) {
+		t.Errorf("Ag = %g in²", float64(m.Ag)/float64(units.SquareInch))
+	}
+	if d.Info.Designation != "L5x3x3/8" || d.Info.K != m.T || !closeTo(m.Width.In(), 5, readBack) {
+		t.Errorf("info %+v, member %+v", d.Info, m)
+	}
+}
+
+// A layout that can be made but breaks a detailing rule is a result, not
+// bad input: 3/4 in to the end is under Table J3.4's 1 in, yet the hole
+// (13/32 in radius) is inside the member.
+func TestBuildRuleBreakIsNotInputError(t *testing.T) {
+	src := strings.Replace(usAngle, "end: 1-1/2 in", "end: 3/4 in", 1)
+	src = strings.Replace(src, "pitch: 3 in", "pitch: 1 in", 1)
+	mustBuild(t, mustParse(t, src))
+}
+
+func TestBuildErrors(t *testing.T) {
+	cases := []struct {
+		name, src, field string
+		line             int
+		msg              string
+	}{
+		{"pitch missing", strings.Replace(usAngle, "  pitch: 3 in\n", "", 1), "bolts.pitch", 15, "is required"},
+		{"per_line missing", strings.Replace(usAngle, "  per_line: 4\n", "", 1), "bolts.per_line", 15, "is required"},
+		{"diameter missing", strings.Replace(usAngle, "  diameter: 3/4 in\n", "", 1), "bolts.diameter", 15, "is required"},
+		{"bolts missing", minimalUS, "bolts.diameter", 1, "is required"},
+		{"gage2 missing", strings.Replace(usAngle, "  gage: 2-1/2 in", "  gage: 1-1/4 in\n  lines: 2", 1), "bolts.gage2", 15, "is required"},
+		{"second line off the leg", strings.Replace(usAngle, "  gage: 2-1/2 in", "  gage: 1-1/4 in\n  lines: 2\n  gage2: 2-1/2 in", 1), "bolts.gage2", 23, "runs off the leg"},
+		{"plate edge missing", strings.Replace(usAngle, "  edge: 1-1/2 in\n", "", 1), "plate.edge", 10, "is required"},
+		{"hole off the flat", `mark: F
+load: {required: 10 kip}
+member: {shape: flat, width: 3 in, thickness: 1/2 in, grade: A36}
+bolts: {diameter: 3/4 in, grade: A325, per_line: 2, pitch: 3 in, end: 1-1/2 in, gage: 1/4 in}
+`, "bolts.gage", 4, "runs off the flat"},
+		{"bolt wider than the flat", `mark: F
+load: {required: 10 kip}
+member: {shape: flat, width: 1 in, thickness: 1/2 in, grade: A36}
+bolts: {diameter: 1 in, grade: A325, per_line: 2, pitch: 3 in, end: 1-1/2 in, gage: 1/2 in}
+`, "bolts.diameter", 4, "does not fit the flat"},
+		{"explicit hole past the end", minimalUS + "bolts: {diameter: 3/4 in, grade: A325}\nholes:\n  - [1.5 in, 2.5 in]\n  - [0.25 in, 2.5 in]\n", "holes[1]", 11, "past the member end"},
+		{"unknown plate grade", strings.Replace(usAngle, "A572-50", "S355", 1), "plate.grade", 12, "unknown steel grade"},
+		{"custom steel is fine but bolt grade is not", strings.Replace(usAngle, "grade: A325", "grade: 8.8", 1), "bolts.grade", 17, "unknown bolt grade"},
+		{"stock grade", usAngle + "stock:\n  grades: [A325, A999]\n", "stock.grades[1]", 23, "unknown bolt grade"},
+		{"stock diameter", usAngle + "stock:\n  diameters: [3/4 in, M14]\n", "stock.diameters[1]", 23, "no hole size"},
+	}
+	for _, c := range cases {
+		t.Run(c.name, func(t *testing.T) {
+			e := buildErr(t, c.src)
+			if e.Field != c.field || e.Line != c.line || !strings.Contains(e.Msg, c.msg) {
+				t.Errorf("got %s:%d %q, want %s:%d containing %q", e.Field, e.Line, e.Msg, c.field, c.line, c.msg)
+			}
+		})
+	}
+}
+
+// Good jobs under testdata/jobs build without error.
+func TestBuildGoodJobs(t *testing.T) {
+	files, err := filepath.Glob(filepath.Join("..", "testdata", "jobs", "*.yaml"))
+	if err != nil || len(files) < 4 {
+		t.Fatalf("good jobs: %v, %v", files, err)
+	}
+	for _, f := range files {
+		t.Run(filepath.Base(f), func(t *testing.T) {
+			j, err := LoadJob(f)
+			if err != nil {
+				t.Fatal(err)
+			}
+			d, err := j.Build()
+			if err != nil {
+				t.Fatal(err)
+			}
+			if len(d.Conn.Holes) == 0 || d.Conn.Demand <= 0 || d.Conn.Member.Ag <= 0 {
+				t.Errorf("incomplete design: %+v", d.Conn)
+			}
+		})
+	}
+}
+
+// Every bad job under testdata/bad is an *InputError naming the field and,
+// where the YAML has one, the line — whether parsing or Build finds it.
+func TestBuildBadJobs(t *testing.T) {
+	cases := []struct {
+		file  string
+		field string
+		line  int // 0: the file has no line to name; -1: any line > 0
+	}{
+		{"absurd-count.yaml", "bolts.per_line", 11},
+		{"absurd-lines.yaml", "bolts.lines", 13},
+		{"alias.yaml", "mark", 1},
+		{"bolt-too-big.yaml", "bolts.diameter", 10},
+		{"broken-yaml.yaml", "", -1},
+		{"comment-only.yaml", "", 0},
+		{"duplicate-key.yaml", "bolts.pitch", 15},
+		{"empty.yaml", "", 0},
+		{"explicit-duplicate.yaml", "holes[2]", 14},
+		{"explicit-off-member.yaml", "holes[2]", 14},
+		{"flat-with-size.yaml", "member.size", 6},
+		{"fu-below-fy.yaml", "member.fu", 8},
+		{"hole-not-a-pair.yaml", "holes[1]", 13},
+		{"hole-off-leg.yaml", "bolts.gage", 14},
+		{"hole-past-end.yaml", "bolts.end", 13},
+		{"holes-plus-pitch.yaml", "bolts.pitch", 11},
+		{"legs-bad-unit.yaml", "member.legs[1]", 6},
+		{"load-wrong-dimension.yaml", "load.required", 3},
+		{"m14-bolt.yaml", "bolts.diameter", 10},
+		{"missing-mark.yaml", "mark", 1},
+		{"nan.yaml", "bolts.end", 13},
+		{"negative-pitch.yaml", "bolts.pitch", 12},
+		{"not-a-mapping.yaml", "", 1},
+		{"plate-auto-in-check.yaml", "plate.thickness", 9},
+		{"plate-too-narrow.yaml", "plate.width", 12},
+		{"required-and-dead.yaml", "load.required", 3},
+		{"typo-key.yaml", "bolts.pich", 12},
+		{"unknown-bolt-grade.yaml", "bolts.grade", 10},
+		{"unknown-shape.yaml", "member.shape", 5},
+		{"unknown-size.yaml", "member.size", 6},
+		{"unknown-standard.yaml", "standard", 2},
+		{"unknown-steel-grade.yaml", "member.grade", 7},
+		{"unsafe-mark.yaml", "mark", 1},
+		{"wrong-dimension.yaml", "member.thickness", 7},
+		{"zero-quantity.yaml", "quantity", 2},
+	}
+	dir := filepath.Join("..", "testdata", "bad")
+	listed := map[string]bool{}
+	for _, c := range cases {
+		listed[c.file] = true
+		t.Run(c.file, func(t *testing.T) {
+			path := filepath.Join(dir, c.file)
+			j, err := LoadJob(path)
+			if err == nil {
+				_, err = j.Build()
+			}
+			var ie *InputError
+			if !errors.As(err, &ie) {
+				t.Fatalf("got %v (%T), want an *InputError", err, err)
+			}
+			if ie.File != path || ie.Field != c.field || ie.Msg == "" {
+				t.Errorf("got %q field %q (%v), want field %q", ie.File, ie.Field, ie, c.field)
+			}
+			if (c.line >= 0 && ie.Line != c.line) || (c.line < 0 && ie.Line <= 0) {
+				t.Errorf("line %d, want %d (%v)", ie.Line, c.line, ie)
+			}
+		})
+	}
+	entries, err := os.ReadDir(dir)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, e := range entries {
+		if !listed[e.Name()] {
+			t.Errorf("%s is not in the table", e.Name())
+		}
+	}
+}
+
+func TestBuildDoubleAngleSizePrefix(t *testing.T) {
+	// "2L4x4x1/2" is the usual way to write a pair (AISC Manual Table 1-15
+	// designations); the catalog size is L4x4x1/2.
+	src := strings.Replace(usAngle, "shape: angle\n  size: L4x4x1/2", "shape: double-angle\n  size: 2L4x4x1/2", 1)
+	d := mustBuild(t, mustParse(t, src))
+	if d.Info.Designation != "2L4x4x1/2" || d.Conn.Member.Pieces != 2 {
+		t.Errorf("designation %q, pieces %d", d.Info.Designation, d.Conn.Member.Pieces)
+	}
+}
