@@ -275,7 +275,7 @@ const eps = 1e-6
 
 func (j *Job) buildHoles(ed *rules.Edition, c *engine.Connection) error {
 	b := j.Bolts
-	hs, err := ed.Hole(b.Diameter, b.Hole)
+	size, err := ed.Hole(b.Diameter, b.Hole)
 	if err != nil {
 		return j.inputErr("bolts.diameter", tabulatedMsg(err), diametersHint(ed))
 	}
@@ -283,7 +283,7 @@ func (j *Job) buildHoles(ed *rules.Edition, c *engine.Connection) error {
 	if b.Hole.IsSlot() {
 		slot = b.Slot
 	}
-	dx, dy := holeExtent(hs, b.Hole, slot)
+	dx, dy := holeExtent(size, b.Hole, slot)
 	w := c.Member.Width
 	room, part := w, "flat"
 	if c.Member.Shape != engine.Flat {
@@ -299,16 +299,16 @@ func (j *Job) buildHoles(ed *rules.Edition, c *engine.Connection) error {
 			"use a smaller bolt or a wider "+part)
 	}
 
-	// field names, for each hole, the input that placed it there.
+	// placed is a hole with the fields of the input that put it there.
 	type placed struct {
 		engine.Hole
 		xField, yField string
 	}
-	var hs2 []placed
+	var holes []placed
 	if j.Holes != nil {
 		for i, h := range j.Holes {
 			f := fmt.Sprintf("holes[%d]", i)
-			hs2 = append(hs2, placed{engine.Hole{X: h.X, Y: h.Y}, f, f})
+			holes = append(holes, placed{engine.Hole{X: h.X, Y: h.Y}, f, f})
 		}
 	} else {
 		if b.PerLine == 0 {
@@ -341,14 +341,14 @@ func (j *Job) buildHoles(ed *rules.Edition, c *engine.Connection) error {
 				if i%2 == 1 {
 					x += b.Stagger
 				}
-				hs2 = append(hs2, placed{engine.Hole{X: x, Y: y}, xField, yField})
+				holes = append(holes, placed{engine.Hole{X: x, Y: y}, xField, yField})
 			}
 		}
 	}
 
-	c.Holes = make([]engine.Hole, len(hs2))
-	for i := range hs2 {
-		h := &hs2[i]
+	c.Holes = make([]engine.Hole, len(holes))
+	for i := range holes {
+		h := &holes[i]
 		h.ID = fmt.Sprintf("H%d", i+1)
 		h.Type, h.Slot, h.Dx, h.Dy = b.Hole, slot, dx, dy
 		switch {
@@ -364,7 +364,7 @@ func (j *Job) buildHoles(ed *rules.Edition, c *engine.Connection) error {
 				"y is measured from the heel (angles) or one edge (flats)")
 		}
 		for k := range i {
-			o := &hs2[k]
+			o := &holes[k]
 			if math.Abs(float64(o.X-h.X)) < eps && math.Abs(float64(o.Y-h.Y)) < eps {
 				return j.inputErr(h.xField, fmt.Sprintf("hole %s has the same centre as %s", h.ID, o.ID), "")
 			}

@@ -400,7 +400,7 @@ bolts: {diameter: 1 in, grade: A325, per_line: 2, pitch: 3 in, end: 1-1/2 in, ga
 `, "bolts.diameter", 4, "does not fit the flat"},
 		{"explicit hole past the end", minimalUS + "bolts: {diameter: 3/4 in, grade: A325}\nholes:\n  - [1.5 in, 2.5 in]\n  - [0.25 in, 2.5 in]\n", "holes[1]", 11, "past the member end"},
 		{"unknown plate grade", strings.Replace(usAngle, "A572-50", "S355", 1), "plate.grade", 12, "unknown steel grade"},
-		{"custom steel is fine but bolt grade is not", strings.Replace(usAngle, "grade: A325", "grade: 8.8", 1), "bolts.grade", 17, "unknown bolt grade"},
+		{"unknown bolt grade", strings.Replace(usAngle, "grade: A325", "grade: 8.8", 1), "bolts.grade", 17, "unknown bolt grade"},
 		{"stock grade", usAngle + "stock:\n  grades: [A325, A999]\n", "stock.grades[1]", 23, "unknown bolt grade"},
 		{"stock diameter", usAngle + "stock:\n  diameters: [3/4 in, M14]\n", "stock.diameters[1]", 23, "no hole size"},
 	}
