@@ -77,25 +77,5 @@ func (e *Edition) diameterKey(d units.Length) string {
 		}
 		return fmt.Sprintf("d = %g mm", mm)
 	}
-	return "d = " + formatInches(d.In()) + " in"
-}
-
-// formatInches prints x as a fraction of 1/16 in when it is one
-// ("1-3/4", "5/8", "1") and as a decimal otherwise.
-func formatInches(x float64) string {
-	n := math.Round(x * 16)
-	if n <= 0 || math.Abs(x*16-n) > 1e-6 || n > 1e6 {
-		return strconv.FormatFloat(x, 'g', -1, 64)
-	}
-	whole, num, den := int(n)/16, int(n)%16, 16
-	for num != 0 && num%2 == 0 {
-		num, den = num/2, den/2
-	}
-	switch {
-	case num == 0:
-		return strconv.Itoa(whole)
-	case whole == 0:
-		return fmt.Sprintf("%d/%d", num, den)
-	}
-	return fmt.Sprintf("%d-%d/%d", whole, num, den)
+	return "d = " + units.InchFraction(d) + " in"
 }

@@ -94,19 +94,7 @@ func sixteenths(n int) units.Length { return units.Length(n) * units.Inch / 16 }
 
 // inches prints sixteenths of an inch the way designations do: "3-1/2",
 // "1/2", "1-1/8", "4".
-func inches(n int) string {
-	whole, num, den := n/16, n%16, 16
-	for num != 0 && num%2 == 0 {
-		num, den = num/2, den/2
-	}
-	switch {
-	case num == 0:
-		return strconv.Itoa(whole)
-	case whole == 0:
-		return fmt.Sprintf("%d/%d", num, den)
-	}
-	return fmt.Sprintf("%d-%d/%d", whole, num, den)
-}
+func inches(n int) string { return units.InchFraction(sixteenths(n)) }
 
 // family is one leg pair of a catalog: its "L4x4" prefix and its angles.
 type family struct {

@@ -190,6 +190,11 @@ func FormatJob(l Length, sys System) string {
 	return sign + whole + "-" + frac + " in"
 }
 
+// InchFraction writes a length in inches the way designations and job
+// files do, without a unit: "3-1/2", "1/2", "4", or a decimal ("0.8") off
+// the 1/16 in grid.
+func InchFraction(l Length) string { return strings.TrimSuffix(FormatJob(l, US), " in") }
+
 // FormatForPeople formats a length for a sheet or table: US as
 // FormatFeetInches, SI in whole millimetres ("65").
 func FormatForPeople(l Length, sys System) string {
