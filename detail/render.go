@@ -146,7 +146,11 @@ func (r *Report) WriteText(w io.Writer) error {
 	g := r.GoverningResult()
 	fmt.Fprintf(&b, "\nverdict: %s — governing %s (%s), ratio %s\n", strings.ToUpper(r.Verdict()), g.ID, g.Clause, ratio(g.Ratio))
 	for _, f := range r.Findings {
-		if !f.Pass && !f.Advisory {
+		switch {
+		case f.Pass || f.Advisory:
+		case f.Dim == units.Dimensionless && f.Measured == 0 && f.Limit == 0:
+			fmt.Fprintf(&b, "  fails %s (%s): %s\n", f.ID, f.Clause, f.Where)
+		default:
 			fmt.Fprintf(&b, "  fails %s (%s): %s, measured %s, limit %s\n", f.ID, f.Clause, f.Where, p.value(f.Measured, f.Dim), p.value(f.Limit, f.Dim))
 		}
 	}
