@@ -252,6 +252,13 @@ func (j *Job) buildBolt(ed *rules.Edition, c *engine.Connection) error {
 	if err != nil {
 		return j.inputErr("bolts.grade", fmt.Sprintf("unknown bolt grade %q in %s", b.Grade, ed), "known grades: "+strings.Join(ed.BoltGrades(), ", "))
 	}
+	if b.Joint != rules.Bearing {
+		// pretensioned and slip-critical joints need a tabulated pretension
+		if _, err := ed.Pretension(g, b.Diameter); err != nil {
+			return j.inputErr("bolts.grade", fmt.Sprintf("%s bolts cannot be used in a %s joint: %v", g.Name, b.Joint, err),
+				"use a high-strength grade (Group A or B) or a bearing joint")
+		}
+	}
 	c.Bolt = engine.Bolt{
 		D: b.Diameter, Grade: g, Threads: b.Threads, Joint: b.Joint, Surface: b.Surface,
 		Fillers: b.Fillers, DeformationConsidered: b.DeformationConsidered,

@@ -477,6 +477,7 @@ func TestBuildBadJobs(t *testing.T) {
 		{"unknown-size.yaml", "member.size", 6},
 		{"unknown-standard.yaml", "standard", 2},
 		{"unknown-steel-grade.yaml", "member.grade", 7},
+		{"a307-slip-critical.yaml", "bolts.grade", 11},
 		{"unsafe-mark.yaml", "mark", 1},
 		{"wrong-dimension.yaml", "member.thickness", 7},
 		{"zero-quantity.yaml", "quantity", 2},
