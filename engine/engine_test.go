@@ -241,3 +241,23 @@ func TestNetWidthStaggered(t *testing.T) {
 	gb := UnfoldAngleHole(in(2.5), in(0.5), true)
 	near(t, "heel gage", (ga - gb).In(), 4.5, 1e-12, "AISC 360-22 B4.3b")
 }
+
+func TestSeguiStaggeredPlate(t *testing.T) {
+	// W. T. Segui, Steel Design, Example 3.6 (from memory): a 16 x 3/4 in
+	// plate, 1-in bolts, holes taken as 1-1/8 in, gage lines 5 in apart,
+	// the middle line staggered 3 in. Path abde: wn = 16 − 2(1.125) =
+	// 13.75 in; path abcde: wn = 16 − 3(1.125) + 2(3²)/(4·5) = 13.52 in,
+	// which governs: An = 0.75(13.52) = 10.14 in².
+	const src = "Segui, Steel Design, Example 3.6 (from memory)"
+	holes := []PathHole{
+		{X: 0, U: in(3), Dh: in(1.125)},
+		{X: in(3), U: in(8), Dh: in(1.125)},
+		{X: 0, U: in(13), Dh: in(1.125)},
+	}
+	d, path := NetWidthDeduction(holes)
+	near(t, "wn", (in(16) - d).In(), 13.52, pubTol, src)
+	near(t, "An", (in(16)-d).In()*0.75, 10.14, pubTol, src)
+	if len(path) != 3 {
+		t.Errorf("worst path %v, want a-b-c-d-e through all three holes", path)
+	}
+}
