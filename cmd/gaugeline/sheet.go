@@ -1,0 +1,126 @@
+package main
+
+import (
+	"context"
+	"errors"
+	"fmt"
+	"io"
+	"os"
+	"path/filepath"
+
+	"github.com/spf13/cobra"
+
+	"gaugeline/detail"
+	"gaugeline/dxfout"
+)
+
+type sheetOptions struct {
+	dir               string
+	notForFabrication bool
+}
+
+func newSheetCmd(o *rootOptions) *cobra.Command {
+	var so sheetOptions
+	cmd := &cobra.Command{
+		Use:   "sheet JOB.yaml -o DIR",
+		Short: "Write the DXF cut sheet and CAM files of a layout that passes",
+		Long: "sheet checks the job and writes, into DIR, the dimensioned cut sheet MARK.dxf and the\n" +
+			"geometry-only CAM files MARK-member.cam.dxf and MARK-plate.cam.dxf. A failing connection is\n" +
+			"refused (exit 1, nothing written) unless --not-for-fabrication, which writes the cut sheet alone,\n" +
+			"stamped NOT FOR FABRICATION on every view (exit 1 still: the connection fails). Bad input exits 2.",
+		Args: argsExactly(1, "one job file"),
+		RunE: func(cmd *cobra.Command, args []string) error {
+			return runSheet(cmd.Context(), o, so, args[0], o.stdout)
+		},
+	}
+	cmd.Flags().StringVarP(&so.dir, "output", "o", "", "directory to write the DXF files into (created if missing)")
+	cmd.Flags().BoolVar(&so.notForFabrication, "not-for-fabrication", false,
+		"write a stamped cut sheet (and no CAM file) even when the connection fails")
+	return cmd
+}
+
+func runSheet(_ context.Context, o *rootOptions, so sheetOptions, path string, out io.Writer) error {
+	if so.dir == "" {
+		return usageError{errors.New("-o DIR is required")}
+	}
+	job, err := detail.LoadJob(path)
+	if err != nil {
+		return err
+	}
+	d, err := job.Build()
+	if err != nil {
+		return err
+	}
+	r, err := detail.Check(d)
+	if err != nil {
+		return &detail.InputError{File: path, Msg: err.Error()}
+	}
+	if !r.Pass && !so.notForFabrication {
+		g := r.GoverningResult()
+		fmt.Fprintf(o.stderr, "gaugeline: error: %s: %s fails (governing %s, ratio %.3f): no sheet written\n", path, job.Mark, g.ID, g.Ratio)
+		fmt.Fprintf(o.stderr, "gaugeline: hint: run 'gaugeline check %s' for every failing rule; --not-for-fabrication writes a stamped sheet\n", path)
+		return exitError{exitFail}
+	}
+	s, err := detail.NewSheet(r, so.notForFabrication)
+	if err != nil {
+		return err
+	}
+	files, err := dxfout.Files(s)
+	if err != nil {
+		return err
+	}
+	if err := writeAll(so.dir, files); err != nil {
+		return err
+	}
+	for _, f := range files {
+		fmt.Fprintln(out, filepath.Join(so.dir, f.Name))
+	}
+	if so.notForFabrication {
+		fmt.Fprintf(o.stderr, "gaugeline: note: %s stamped %s; no CAM file written\n", files[0].Name, detail.Stamp)
+	}
+	if !r.Pass {
+		return exitError{exitFail}
+	}
+	return nil
+}
+
+// writeAll writes every file into dir, creating it if missing: each to a
+// temporary file in dir first, then all renamed into place, so that no
+// file is ever half-written.
+func writeAll(dir string, files []dxfout.File) error {
+	if err := os.MkdirAll(dir, 0o755); err != nil {
+		return fmt.Errorf("cannot create the output directory: %w", err)
+	}
+	var temps []string
+	clean := func() {
+		for _, t := range temps {
+			os.Remove(t)
+		}
+	}
+	for _, f := range files {
+		tmp, err := os.CreateTemp(dir, "."+f.Name+".*.tmp")
+		if err != nil {
+			clean()
+			return fmt.Errorf("cannot write into %s: %w", dir, err)
+		}
+		temps = append(temps, tmp.Name())
+		_, err = tmp.Write(f.Data)
+		if err == nil {
+			err = tmp.Chmod(0o644)
+		}
+		if cerr := tmp.Close(); err == nil {
+			err = cerr
+		}
+		if err != nil {
+			clean()
+			return fmt.Errorf("cannot write %s: %w", f.Name, err)
+		}
+	}
+	for i, f := range files {
+		if err := os.Rename(temps[i], filepath.Join(dir, f.Name)); err != nil {
+			clean()
+			return fmt.Errorf("cannot write %s: %w", f.Name, err)
+		}
+	}
+	return nil
+}

@@ -1,0 +1,761 @@
+package detail
+
+import (
+	"errors"
+	"fmt"
+	"math"
+	"slices"
+	"strings"
+
+	"gaugeline/engine"
+	"gaugeline/rules"
+	"gaugeline/rules/units"
+)
+
+// This file is the cut-sheet model: what a shop drawing of one connection
+// shows, as plain geometry and text. It knows nothing of files; package
+// dxfout draws it.
+//
+// Every coordinate of the model is a float64 in the job's units (inches
+// for us, millimetres for si): the drawing is 1:1 in those units. Angles
+// are in degrees, counter-clockwise from +x.
+//
+// Frames (SPEC §7):
+//
+//   - member: x from the member end along the member, y from the heel
+//     (angles) or one edge (flats) across the connected leg — the job's
+//     own frame. The view shows the connected leg (or the flat) from the
+//     end to ViewBeyond past the row farthest from the end; the far side
+//     of that outline is a break, not a cut.
+//   - plate: the rectangle of the job's width centred in y on the bolt
+//     group (engine.Plate.YMin..YMax), from its free edge back through the
+//     pattern and on ViewBeyond past the row farthest from the free edge.
+//     Its datum corner is the free edge at the member frame's YMax side,
+//     and the plate frame is the member frame turned half a turn about it:
+//     x' = FreeEdge − x, y' = YMax − y. The plate keeps its face (no
+//     mirror), the free edge is x' = 0 and every hole has x' > 0, y' > 0.
+
+// ViewBeyond is how far a view runs past the row of holes farthest from
+// its datum edge: the longer of the pattern's length along x and 6 in
+// (150 mm) (our choice, common sense: room for the Whitmore spread and
+// for a person to see where the part goes on).
+func ViewBeyond(pattern units.Length, sys units.System) units.Length {
+	least := 6 * units.Inch
+	if sys == units.SI {
+		least = 150 * units.Millimetre
+	}
+	return max(pattern, least)
+}
+
+// Layer is the drawing layer an item goes on: one per operation, so that
+// CAM can pick.
+type Layer int
+
+const (
+	LayerContour    Layer = iota // outer contours: cut
+	LayerHoles                   // holes and slots: punch or drill
+	LayerDimensions              // dimension lines, arrowheads and their text
+	LayerReference               // gage lines, heel line, Whitmore section
+	LayerNotes                   // view titles, hole schedule, stamps
+	LayerTitle                   // title block
+)
+
+var layerNames = [...]string{"contour", "holes", "dimensions", "reference", "notes", "title"}
+
+// String returns the layer's name in a drawing.
+func (l Layer) String() string { return layerNames[l] }
+
+// Layers lists every layer in drawing order.
+func Layers() []Layer {
+	return []Layer{LayerContour, LayerHoles, LayerDimensions, LayerReference, LayerNotes, LayerTitle}
+}
+
+// Point is a point in drawing units.
+type Point struct{ X, Y float64 }
+
+// Add returns p + q.
+func (p Point) Add(q Point) Point { return Point{p.X + q.X, p.Y + q.Y} }
+
+// Segment is a straight line on a layer.
+type Segment struct {
+	A, B  Point
+	Layer Layer
+}
+
+// Align is where a text's anchor point sits on the text. Only these
+// alignments are offered: DXF writers and readers agree on them (others
+// lose the alignment point in github.com/yofu/dxf).
+type Align int
+
+const (
+	AlignLeftBase Align = iota
+	AlignCenterBottom
+	AlignCenterMiddle
+	AlignCenterTop
+	AlignRightBottom
+	AlignRightMiddle
+	AlignRightTop
+)
+
+// Text is one line of text.
+type Text struct {
+	At       Point
+	Height   float64
+	Rotation float64 // degrees
+	Align    Align
+	Value    string // plain ASCII
+	Layer    Layer
+}
+
+// charWidth is the width of one character over the text height (the
+// height of capitals), taken generously: capitals of a wide sans-serif
+// font run to about 0.9. Layout and drawing extents use it, so that text
+// does not run into its neighbours.
+const charWidth = 0.9
+
+// Box returns the corners of a generous rectangle around the text.
+func (t Text) Box() (lo, hi Point) {
+	w := float64(len(t.Value)) * charWidth * t.Height
+	h := t.Height
+	var x0, y0 float64 // lower-left corner relative to the anchor, unrotated
+	switch t.Align {
+	case AlignCenterBottom, AlignCenterMiddle, AlignCenterTop:
+		x0 = -w / 2
+	case AlignRightBottom, AlignRightMiddle, AlignRightTop:
+		x0 = -w
+	}
+	switch t.Align {
+	case AlignLeftBase:
+		y0 = -0.3 * h // descenders
+	case AlignCenterMiddle, AlignRightMiddle:
+		y0 = -h / 2
+	case AlignCenterTop, AlignRightTop:
+		y0 = -h
+	}
+	h += 0.3 * h
+	s, c := math.Sincos(t.Rotation * math.Pi / 180)
+	lo = Point{math.Inf(1), math.Inf(1)}
+	hi = Point{math.Inf(-1), math.Inf(-1)}
+	for _, p := range []Point{{x0, y0}, {x0 + w, y0}, {x0, y0 + h}, {x0 + w, y0 + h}} {
+		q := Point{t.At.X + p.X*c - p.Y*s, t.At.Y + p.X*s + p.Y*c}
+		lo = Point{min(lo.X, q.X), min(lo.Y, q.Y)}
+		hi = Point{max(hi.X, q.X), max(hi.Y, q.Y)}
+	}
+	return lo, hi
+}
+
+// SheetHole is a hole in a part's frame. Dx and Dy are its extents along
+// the part's x and y: the diameter of a round hole; a slot's length along
+// its long axis and its width across it.
+type SheetHole struct {
+	ID     string // the job's hole id, H1…
+	Centre Point
+	Dx, Dy float64
+	Type   rules.HoleType
+}
+
+// Round reports whether the hole is drawn as a circle.
+func (h SheetHole) Round() bool { return !h.Type.IsSlot() }
+
+// Diameter is the hole's width: the diameter of a round hole, the width
+// of a slot.
+func (h SheetHole) Diameter() float64 { return min(h.Dx, h.Dy) }
+
+// SlotOutline returns the closed outline of a slot as four vertices and
+// the bulge of the segment leaving each: two straight sides and two
+// half-circle ends (bulge 1, counter-clockwise).
+func (h SheetHole) SlotOutline() ([]Point, []float64) {
+	c := h.Centre
+	r := h.Diameter() / 2
+	if h.Dy >= h.Dx { // long axis along y
+		a := h.Dy/2 - r
+		return []Point{{c.X + r, c.Y - a}, {c.X + r, c.Y + a}, {c.X - r, c.Y + a}, {c.X - r, c.Y - a}},
+			[]float64{0, 1, 0, 1}
+	}
+	a := h.Dx/2 - r
+	return []Point{{c.X - a, c.Y - r}, {c.X + a, c.Y - r}, {c.X + a, c.Y + r}, {c.X - a, c.Y + r}},
+		[]float64{0, 1, 0, 1}
+}
+
+// Part is one piece to cut: its closed outer contour and its holes, in the
+// part's frame (datum at the origin). A CAM file holds exactly this.
+type Part struct {
+	Name      string // "member" or "plate": the CAM file is MARK-NAME.cam.dxf
+	Contour   []Point
+	Holes     []SheetHole
+	Thickness float64
+	Pieces    int // pieces of this part per assembly (2 for a double angle)
+}
+
+// Bounds returns the corners of the part's contour.
+func (p *Part) Bounds() (lo, hi Point) {
+	lo = Point{math.Inf(1), math.Inf(1)}
+	hi = Point{math.Inf(-1), math.Inf(-1)}
+	for _, q := range p.Contour {
+		lo = Point{min(lo.X, q.X), min(lo.Y, q.Y)}
+		hi = Point{max(hi.X, q.X), max(hi.Y, q.Y)}
+	}
+	return lo, hi
+}
+
+// Axis is what a dimension measures.
+type Axis int
+
+const (
+	AlongX Axis = iota // horizontal dimension line
+	AlongY             // vertical dimension line
+)
+
+// Dimension is a linear dimension between two feature points, drawn as
+// extension lines, a dimension line at Offset (y for AlongX, x for
+// AlongY), two arrowheads and the text.
+type Dimension struct {
+	A, B   Point
+	Axis   Axis
+	Offset float64
+	Text   string
+}
+
+// View is a part placed on the cut sheet with its annotation. Everything
+// in it is in the part's frame; Origin places that frame on the sheet.
+type View struct {
+	Part   Part
+	Origin Point
+	Lines  []Segment
+	Dims   []Dimension
+	Texts  []Text
+}
+
+// Sheet is the cut sheet of one connection mark.
+type Sheet struct {
+	Mark  string
+	Units units.System
+	// NotForFabrication: every view is stamped so, and no CAM file is made.
+	NotForFabrication bool
+	TextHeight        float64 // of dimension text; arrowheads scale with it
+	Views             []View
+	// Schedule is the hole schedule as data: a header row, then one row
+	// per part (part, count, hole, type, made by).
+	Schedule [][]string
+	// Title is the title block as data: label and value, in order.
+	Title [][2]string
+	Lines []Segment // in the sheet's frame: the title block's rules
+	Texts []Text    // in the sheet's frame: schedule, title block
+}
+
+// Stamp is written on every view of a sheet not for fabrication.
+const Stamp = "NOT FOR FABRICATION"
+
+// ErrRefused is returned for a failing connection unless the sheet is
+// asked for not for fabrication.
+var ErrRefused = errors.New("detail: the connection fails; a sheet for fabrication is refused")
+
+// NewSheet lays out the cut sheet of a checked design. A connection that
+// fails is refused (ErrRefused) unless notForFabrication, which stamps
+// every view.
+func NewSheet(r *Report, notForFabrication bool) (*Sheet, error) {
+	if !r.Pass && !notForFabrication {
+		return nil, ErrRefused
+	}
+	d := r.Design
+	sys := d.Job.Units
+	s := &Sheet{Mark: d.Job.Mark, Units: sys, NotForFabrication: notForFabrication, TextHeight: textHeight(sys)}
+	l := sheetLayout{sys: sys, h: s.TextHeight}
+
+	member := l.memberView(d)
+	views := []View{member}
+	if d.Conn.Plate != nil {
+		views = append(views, l.plateView(d))
+	}
+	// Side by side, bottoms of the parts level, a gap of 8 text heights
+	// between one view's annotation and the next's.
+	x := 0.0
+	var bottom float64
+	for i := range views {
+		v := &views[i]
+		if notForFabrication {
+			// Above the view's title, clear of every hole and dimension.
+			_, top := v.extents()
+			_, phi := v.Part.Bounds()
+			v.Texts = append(v.Texts, Text{At: Point{phi.X / 2, top.Y + s.TextHeight}, Height: 2 * s.TextHeight,
+				Align: AlignCenterBottom, Value: Stamp, Layer: LayerNotes})
+		}
+		lo, hi := v.extents()
+		v.Origin = Point{x - lo.X, 0}
+		x += hi.X - lo.X + 8*s.TextHeight
+		bottom = min(bottom, lo.Y)
+	}
+	s.Views = views
+	top := bottom - 4*s.TextHeight
+	top = l.schedule(s, d, top)
+	l.titleBlock(s, r, top-3*s.TextHeight)
+	for i := range s.Texts {
+		s.Texts[i].Value = ascii(s.Texts[i].Value)
+	}
+	for i := range s.Views {
+		v := &s.Views[i]
+		for k := range v.Texts {
+			v.Texts[k].Value = ascii(v.Texts[k].Value)
+		}
+		for k := range v.Dims {
+			v.Dims[k].Text = ascii(v.Dims[k].Text)
+		}
+	}
+	return s, nil
+}
+
+// textHeight is the height of dimension text: 1/4 in (6 mm), so that a
+// sheet printed to fit a tabloid page still reads.
+func textHeight(sys units.System) float64 {
+	if sys == units.SI {
+		return 6
+	}
+	return 0.25
+}
+
+// extents returns the corners of everything in the view, in its frame.
+func (v *View) extents() (lo, hi Point) {
+	lo, hi = v.Part.Bounds()
+	grow := func(p Point) {
+		lo = Point{min(lo.X, p.X), min(lo.Y, p.Y)}
+		hi = Point{max(hi.X, p.X), max(hi.Y, p.Y)}
+	}
+	for _, s := range v.Lines {
+		grow(s.A)
+		grow(s.B)
+	}
+	for _, t := range v.Texts {
+		a, b := t.Box()
+		grow(a)
+		grow(b)
+	}
+	for _, d := range v.Dims {
+		grow(d.A)
+		grow(d.B)
+		for _, t := range DimensionText(d, 1) {
+			a, b := t.Box()
+			grow(a)
+			grow(b)
+		}
+		if d.Axis == AlongX {
+			grow(Point{d.A.X, d.Offset})
+		} else {
+			grow(Point{d.Offset, d.A.Y})
+		}
+	}
+	return lo, hi
+}
+
+// DimensionText returns the text of a dimension of text height h: centred
+// on its dimension line, above a horizontal line and left of a vertical
+// one (reading upward).
+func DimensionText(d Dimension, h float64) []Text {
+	if d.Axis == AlongX {
+		return []Text{{At: Point{(d.A.X + d.B.X) / 2, d.Offset + h/3}, Height: h, Align: AlignCenterBottom,
+			Value: d.Text, Layer: LayerDimensions}}
+	}
+	return []Text{{At: Point{d.Offset - h/3, (d.A.Y + d.B.Y) / 2}, Height: h, Rotation: 90, Align: AlignCenterBottom,
+		Value: d.Text, Layer: LayerDimensions}}
+}
+
+type sheetLayout struct {
+	sys units.System
+	h   float64
+}
+
+// len converts an internal length to drawing units, rounded to 1e-9 so
+// that lengths on the job's own grid are written as such (19.5, not
+// 19.4999999999999964); far below any tolerance.
+func (l sheetLayout) len(v units.Length) float64 {
+	return math.Round(l.sys.ToJob(float64(v), units.DimLength)*1e9) / 1e9
+}
+
+// people writes a length as a detailer reads it.
+func (l sheetLayout) people(v float64) string {
+	return units.FormatForPeople(units.Length(l.sys.FromJob(v, units.DimLength)), l.sys)
+}
+
+func (l sheetLayout) rect(w, h float64) []Point { return []Point{{0, 0}, {w, 0}, {w, h}, {0, h}} }
+
+// patternX returns the least and greatest hole x of the connection.
+func patternX(hs []engine.Hole) (lo, hi units.Length) {
+	lo, hi = hs[0].X, hs[0].X
+	for _, h := range hs {
+		lo, hi = min(lo, h.X), max(hi, h.X)
+	}
+	return lo, hi
+}
+
+func (l sheetLayout) memberView(d *Design) View {
+	c := &d.Conn
+	m := c.Member
+	xlo, xhi := patternX(c.Holes)
+	length := l.len(xhi + ViewBeyond(xhi-xlo, l.sys))
+	width := l.len(m.Width)
+	p := Part{Name: "member", Contour: l.rect(length, width), Thickness: l.len(m.T), Pieces: m.Pieces}
+	for _, h := range c.Holes {
+		p.Holes = append(p.Holes, SheetHole{ID: h.ID, Centre: Point{l.len(h.X), l.len(h.Y)}, Dx: l.len(h.Dx), Dy: l.len(h.Dy), Type: h.Type})
+	}
+	v := View{Part: p}
+	l.annotate(&v, false)
+	h := l.h
+	title := "MEMBER " + d.Info.Designation + " " + d.Info.Grade
+	if m.Shape == engine.Flat {
+		title += " - CONNECTION END"
+	} else {
+		title += " - CONNECTED LEG, CONNECTION END"
+	}
+	v.Texts = append(v.Texts, Text{At: Point{length / 2, width + 2*h}, Height: 1.4 * h, Align: AlignCenterBottom, Value: title, Layer: LayerNotes})
+	if m.Shape == engine.DoubleAngle {
+		v.Texts = append(v.Texts, Text{At: Point{length / 2, width + 0.8*h}, Height: h, Align: AlignCenterBottom,
+			Value: "2 ANGLES BACK TO BACK: MAKE 1 AS SHOWN AND 1 OPPOSITE HAND", Layer: LayerNotes})
+	}
+	if m.Shape != engine.Flat {
+		t := l.len(m.T)
+		v.Lines = append(v.Lines, Segment{Point{0, t}, Point{length, t}, LayerReference})
+		v.Texts = append(v.Texts,
+			Text{At: Point{length + 2.5*h, 0}, Height: h, Align: AlignLeftBase, Value: "HEEL", Layer: LayerNotes},
+			Text{At: Point{length + 2.5*h, width - h}, Height: h, Align: AlignLeftBase, Value: "TOE", Layer: LayerNotes})
+	}
+	// Rotated a quarter turn, the text stands left of its anchor: clear of
+	// the edge and of the gage lines' ends.
+	v.Texts = append(v.Texts, Text{At: Point{length + 2*h, width / 2}, Height: 0.8 * h, Rotation: 90, Align: AlignCenterBottom,
+		Value: "BREAK", Layer: LayerNotes})
+	return v
+}
+
+func (l sheetLayout) plateView(d *Design) View {
+	c := &d.Conn
+	pl := c.Plate
+	xlo, xhi := patternX(c.Holes)
+	length := l.len(pl.FreeEdge - xlo + ViewBeyond(xhi-xlo, l.sys))
+	width := l.len(pl.Width)
+	fe, ymax := l.len(pl.FreeEdge), l.len(pl.YMax())
+	// turn maps the member frame onto the plate frame (half a turn).
+	turn := func(x, y float64) Point { return Point{fe - x, ymax - y} }
+	p := Part{Name: "plate", Contour: l.rect(length, width), Thickness: l.len(pl.T), Pieces: 1}
+	for _, h := range c.Holes {
+		p.Holes = append(p.Holes, SheetHole{ID: h.ID, Centre: turn(l.len(h.X), l.len(h.Y)), Dx: l.len(h.Dx), Dy: l.len(h.Dy), Type: h.Type})
+	}
+	v := View{Part: p}
+	l.annotate(&v, true)
+	h := l.h
+
+	// Whitmore section: 30° each side from the row nearest the free edge
+	// to the row farthest from it, clipped to the plate.
+	w := engine.WhitmoreSection(c)
+	var ylo, yhi float64 = math.Inf(1), math.Inf(-1)
+	for _, hole := range c.Holes {
+		ylo, yhi = min(ylo, l.len(hole.Y)), max(yhi, l.len(hole.Y))
+	}
+	near, far := l.len(xhi), l.len(xlo)
+	spread := (near - far) * math.Tan(math.Pi/6)
+	ymin := l.len(pl.YMin())
+	for _, s := range []Segment{
+		{Point{near, ylo}, Point{far, ylo - spread}, LayerReference},
+		{Point{near, yhi}, Point{far, yhi + spread}, LayerReference},
+		{Point{far, ylo - spread}, Point{far, yhi + spread}, LayerReference},
+	} {
+		if a, b, ok := clipY(s.A, s.B, ymin, ymax); ok && a != b {
+			v.Lines = append(v.Lines, Segment{turn(a.X, a.Y), turn(b.X, b.Y), LayerReference})
+		}
+	}
+	// The label goes past the section, where there are no holes, near the
+	// top edge: holes keep at least an edge distance from it.
+	sec := fe - far
+	v.Texts = append(v.Texts, Text{At: Point{sec + h/2, width - 1.5*h}, Height: h, Align: AlignLeftBase,
+		Value: "WHITMORE Lw = " + l.people(l.len(w.Lw)), Layer: LayerReference})
+
+	title := fmt.Sprintf("PLATE %s x %s x %s %s %s - FREE EDGE AT LEFT", l.people(p.Thickness), l.people(width), l.people(length),
+		d.Info.PlateGrade, strings.ToUpper(pl.Kind.String()))
+	v.Texts = append(v.Texts,
+		Text{At: Point{length / 2, width + 2*h}, Height: 1.4 * h, Align: AlignCenterBottom, Value: title, Layer: LayerNotes})
+	return v
+}
+
+// clipY clips the segment a–b to lo ≤ y ≤ hi.
+func clipY(a, b Point, lo, hi float64) (Point, Point, bool) {
+	t0, t1 := 0.0, 1.0
+	dy := b.Y - a.Y
+	for _, e := range [][2]float64{{-dy, a.Y - lo}, {dy, hi - a.Y}} {
+		p, q := e[0], e[1]
+		if p == 0 {
+			if q < 0 {
+				return a, b, false
+			}
+			continue
+		}
+		r := q / p
+		if p < 0 {
+			t0 = max(t0, r)
+		} else {
+			t1 = min(t1, r)
+		}
+	}
+	if t0 >= t1 {
+		return a, b, false
+	}
+	at := func(t float64) Point { return Point{a.X + t*(b.X-a.X), a.Y + t*dy} }
+	return at(t0), at(t1), true
+}
+
+// distinct returns the sorted values, those within 1e-9 of the previous
+// one dropped.
+func distinct(vs []float64) []float64 {
+	vs = slices.Clone(vs)
+	slices.Sort(vs)
+	var out []float64
+	for _, v := range vs {
+		if len(out) == 0 || v-out[len(out)-1] > 1e-9 {
+			out = append(out, v)
+		}
+	}
+	return out
+}
+
+// annotate adds the dimensions and gage lines of a view: below the part, a
+// chain from the datum edge (x = 0) through every row of holes, then one
+// baseline dimension per further row from the datum; left of the part,
+// the chain from y = 0 through every gage line to the far edge, then the
+// baselines. The plate also gets its overall length.
+func (l sheetLayout) annotate(v *View, overallX bool) {
+	h := l.h
+	_, hi := v.Part.Bounds()
+	var xs, ys []float64
+	for _, hole := range v.Part.Holes {
+		xs = append(xs, hole.Centre.X)
+		ys = append(ys, hole.Centre.Y)
+	}
+	xs, ys = distinct(xs), distinct(ys)
+
+	// Along x: the chain, then baselines row by row.
+	row := -3 * h
+	prev := 0.0
+	for _, x := range xs {
+		v.Dims = append(v.Dims, l.dimX(prev, x, row))
+		prev = x
+	}
+	for _, x := range xs[1:] {
+		row -= 2.5 * h
+		v.Dims = append(v.Dims, l.dimX(0, x, row))
+	}
+	if overallX {
+		row -= 2.5 * h
+		v.Dims = append(v.Dims, l.dimX(0, hi.X, row))
+	}
+
+	// Along y: the chain to the far edge, then baselines column by column.
+	col := -3 * h
+	prev = 0
+	for _, y := range append(ys, hi.Y) {
+		v.Dims = append(v.Dims, l.dimY(prev, y, col))
+		prev = y
+	}
+	for _, y := range append(ys[1:], hi.Y) {
+		col -= 2.5 * h
+		v.Dims = append(v.Dims, l.dimY(0, y, col))
+	}
+
+	// Gage lines, a little past the part each way.
+	for _, y := range ys {
+		v.Lines = append(v.Lines, Segment{Point{-h, y}, Point{hi.X + h/2, y}, LayerReference})
+	}
+}
+
+func (l sheetLayout) dimX(a, b, at float64) Dimension {
+	return Dimension{A: Point{a, 0}, B: Point{b, 0}, Axis: AlongX, Offset: at, Text: l.people(b - a)}
+}
+
+func (l sheetLayout) dimY(a, b, at float64) Dimension {
+	return Dimension{A: Point{0, a}, B: Point{0, b}, Axis: AlongY, Offset: at, Text: l.people(b - a)}
+}
+
+// PunchLimit is the thickest material punched full size for a bolt of
+// diameter d: d + 1/8 in (d + 3 mm). Common practice, no source; thicker
+// material is drilled (or sub-punched and reamed).
+func PunchLimit(d units.Length, sys units.System) units.Length {
+	if sys == units.SI {
+		return d + 3*units.Millimetre
+	}
+	return d + units.Inch/8
+}
+
+// HowMade is "PUNCH" or "DRILL" for holes through material t thick.
+func HowMade(t, d units.Length, sys units.System) string {
+	if t <= PunchLimit(d, sys)+eps {
+		return "PUNCH"
+	}
+	return "DRILL"
+}
+
+// holeText names a hole's size: 13/16" DIA; 22 x 26 SLOT.
+func (l sheetLayout) holeText(h engine.Hole) string {
+	w := l.people(l.len(min(h.Dx, h.Dy)))
+	if !h.Type.IsSlot() {
+		return w + " DIA"
+	}
+	return w + " x " + l.people(l.len(max(h.Dx, h.Dy))) + " SLOT " + strings.ToUpper(h.Slot.String())
+}
+
+// schedule writes the hole schedule from the given top down and returns
+// the y below it.
+func (l sheetLayout) schedule(s *Sheet, d *Design, top float64) float64 {
+	h := l.h
+	c := &d.Conn
+	hole := c.Holes[0]
+	limit := l.people(l.len(PunchLimit(c.Bolt.D, l.sys)))
+	made := func(t units.Length) string {
+		return fmt.Sprintf("%s (t %s, punch limit %s)", HowMade(t, c.Bolt.D, l.sys), l.people(l.len(t)), limit)
+	}
+	part := "MEMBER"
+	if c.Member.Pieces > 1 {
+		part = fmt.Sprintf("MEMBER (EACH OF %d)", c.Member.Pieces)
+	}
+	rows := [][]string{
+		{"PART", "COUNT", "HOLE", "TYPE", "MADE BY"},
+		{part, fmt.Sprint(len(c.Holes)), l.holeText(hole), strings.ToUpper(hole.Type.String()), made(c.Member.T)},
+	}
+	if c.Plate != nil {
+		rows = append(rows, []string{"PLATE", fmt.Sprint(len(c.Holes)), l.holeText(hole), strings.ToUpper(hole.Type.String()), made(c.Plate.T)})
+	}
+	s.Schedule = rows
+	// Each column as wide as its widest entry, plus two text heights.
+	cols := make([]float64, len(rows[0]))
+	for i := 1; i < len(cols); i++ {
+		w := 0.0
+		for _, r := range rows {
+			lo, hi := Text{Height: h, Value: r[i-1]}.Box()
+			w = max(w, hi.X-lo.X)
+		}
+		cols[i] = cols[i-1] + w + 2*h
+	}
+	y := top - 1.4*h
+	s.Texts = append(s.Texts, Text{At: Point{0, y}, Height: 1.4 * h, Align: AlignLeftBase, Value: "HOLE SCHEDULE", Layer: LayerNotes})
+	y -= 0.4 * h
+	for _, r := range rows {
+		y -= 1.6 * h
+		for i, val := range r {
+			s.Texts = append(s.Texts, Text{At: Point{cols[i], y}, Height: h, Align: AlignLeftBase, Value: val, Layer: LayerNotes})
+		}
+	}
+	return y - h
+}
+
+// titleBlock writes the title block from the given top down: a framed box
+// of labelled fields and the caution line.
+func (l sheetLayout) titleBlock(s *Sheet, r *Report, top float64) {
+	h := l.h
+	d := r.Design
+	c := &d.Conn
+	j := d.Job
+	g := r.GoverningResult()
+	verdict := "PASS"
+	if !r.Pass {
+		verdict = "FAIL"
+	}
+	unitName := "INCHES"
+	if l.sys == units.SI {
+		unitName = "MILLIMETRES"
+	}
+	hole := c.Holes[0].Type.String()
+	if c.Holes[0].Type.IsSlot() {
+		hole += " " + c.Holes[0].Slot.String()
+	}
+	pieces := ""
+	if c.Member.Pieces > 1 {
+		pieces = fmt.Sprintf(" (%d pieces each)", c.Member.Pieces)
+	}
+	fields := [][2]string{
+		{"MARK", j.Mark},
+		{"QUANTITY", fmt.Sprintf("%d%s", j.Quantity, pieces)},
+		{"MEMBER", d.Info.Designation},
+		{"GRADE", "member " + d.Info.Grade},
+		{"THICKNESS", "member " + l.people(l.len(c.Member.T))},
+	}
+	if c.Plate != nil {
+		fields[3][1] += ", plate " + d.Info.PlateGrade
+		fields[4][1] += ", plate " + l.people(l.len(c.Plate.T))
+	}
+	fields = append(fields,
+		[2]string{"BOLTS", fmt.Sprintf("(%d) %s %s, threads %s, %s joint, %s holes", len(c.Holes),
+			boltSize(c.Bolt.D, l.sys), c.Bolt.Grade.Name, c.Bolt.Threads, c.Bolt.Joint, hole)},
+		[2]string{"STANDARD", fmt.Sprintf("AISC %s %s", strings.TrimPrefix(c.Edition.Name, "aisc"), strings.ToUpper(c.Method.String()))},
+		[2]string{"GOVERNING", fmt.Sprintf("%s (%s) ratio %s - %s", g.ID, g.Clause, ratio(g.Ratio), verdict)},
+		[2]string{"UNITS", unitName},
+	)
+	if s.NotForFabrication {
+		fields = append(fields, [2]string{"STATUS", Stamp})
+	}
+	for i := range fields {
+		fields[i][1] = ascii(fields[i][1])
+	}
+	s.Title = fields
+	width := 90 * h
+	y := top
+	var ruleYs []float64
+	ruleYs = append(ruleYs, y)
+	for _, f := range fields {
+		y -= 1.8 * h
+		s.Texts = append(s.Texts,
+			Text{At: Point{h, y + 0.5*h}, Height: h, Align: AlignLeftBase, Value: f[0], Layer: LayerTitle},
+			Text{At: Point{12 * h, y + 0.5*h}, Height: h, Align: AlignLeftBase, Value: ascii(f[1]), Layer: LayerTitle})
+		ruleYs = append(ruleYs, y)
+	}
+	for _, ln := range wrap(Caution, 100) {
+		y -= 1.4 * h
+		s.Texts = append(s.Texts, Text{At: Point{h, y + 0.4*h}, Height: 0.8 * h, Align: AlignLeftBase, Value: ascii(ln), Layer: LayerTitle})
+	}
+	y -= 0.6 * h
+	ruleYs = append(ruleYs, y)
+	for _, ry := range ruleYs {
+		s.Lines = append(s.Lines, Segment{Point{0, ry}, Point{width, ry}, LayerTitle})
+	}
+	s.Lines = append(s.Lines,
+		Segment{Point{0, top}, Point{0, y}, LayerTitle},
+		Segment{Point{width, top}, Point{width, y}, LayerTitle},
+		Segment{Point{11 * h, top}, Point{11 * h, ruleYs[len(fields)]}, LayerTitle})
+}
+
+// wrap breaks s into lines of at most n bytes at spaces.
+func wrap(s string, n int) []string {
+	var out []string
+	line := ""
+	for _, w := range strings.Fields(s) {
+		if line != "" && len(line)+1+len(w) > n {
+			out = append(out, line)
+			line = ""
+		}
+		if line != "" {
+			line += " "
+		}
+		line += w
+	}
+	if line != "" {
+		out = append(out, line)
+	}
+	return out
+}
+
+// ascii keeps a text to printable ASCII, the safe set of a DXF R2000 file
+// in any code page: a few typographic characters are spelled out, others
+// become '?'.
+func ascii(s string) string {
+	var b strings.Builder
+	for _, r := range s {
+		switch {
+		case r == '×':
+			b.WriteByte('x')
+		case r == '–' || r == '—' || r == '−':
+			b.WriteByte('-')
+		case r == '°':
+			b.WriteString(" deg")
+		case r == '·':
+			b.WriteByte('.')
+		case r >= 0x20 && r < 0x7f:
+			b.WriteRune(r)
+		default:
+			b.WriteByte('?')
+		}
+	}
+	return b.String()
+}

@@ -1,0 +1,220 @@
+package dxfout
+
+import (
+	"encoding/json"
+	"math"
+	"os"
+	"os/exec"
+	"path/filepath"
+	"strings"
+	"testing"
+)
+
+// python is Debian's interpreter, where python3-ezdxf installs; not
+// whatever python3 is first on PATH.
+const python = "/usr/bin/python3"
+
+// readBack loads each file with ezdxf, audits it and reports what a reader
+// independent of ours sees.
+const readBack = `
+import json, sys
+import ezdxf
+from ezdxf import bbox
+out = []
+for path in sys.argv[1:]:
+    doc = ezdxf.readfile(path)
+    auditor = doc.audit()
+    msp = doc.modelspace()
+    ents = []
+    for e in msp:
+        d = {"type": e.dxftype(), "layer": e.dxf.layer}
+        if e.dxftype() == "CIRCLE":
+            d["x"], d["y"], d["r"] = e.dxf.center.x, e.dxf.center.y, e.dxf.radius
+        elif e.dxftype() == "LWPOLYLINE":
+            d["closed"] = bool(e.closed)
+            d["points"] = [[p[0], p[1], p[4]] for p in e.get_points("xyseb")]
+        elif e.dxftype() == "TEXT":
+            d["text"] = e.dxf.text
+        ents.append(d)
+    box = bbox.extents(msp)
+    out.append({
+        "path": path,
+        "errors": [str(x.message) for x in auditor.errors],
+        "fixes": [str(x.message) for x in auditor.fixes],
+        "insunits": doc.header.get("$INSUNITS"),
+        "measurement": doc.header.get("$MEASUREMENT"),
+        "extmin": list(doc.header.get("$EXTMIN"))[:2],
+        "extmax": list(doc.header.get("$EXTMAX"))[:2],
+        "bbox": [box.extmin.x, box.extmin.y, box.extmax.x, box.extmax.y],
+        "entities": ents,
+    })
+json.dump(out, sys.stdout)
+`
+
+type ezFile struct {
+	Path        string     `json:"path"`
+	Errors      []string   `json:"errors"`
+	Fixes       []string   `json:"fixes"`
+	Insunits    int        `json:"insunits"`
+	Measurement int        `json:"measurement"`
+	Extmin      [2]float64 `json:"extmin"`
+	Extmax      [2]float64 `json:"extmax"`
+	Bbox        [4]float64 `json:"bbox"`
+	Entities    []struct {
+		Type   string       `json:"type"`
+		Layer  string       `json:"layer"`
+		X      float64      `json:"x"`
+		Y      float64      `json:"y"`
+		R      float64      `json:"r"`
+		Closed bool         `json:"closed"`
+		Points [][3]float64 `json:"points"`
+		Text   string       `json:"text"`
+	} `json:"entities"`
+}
+
+func haveEzdxf(t *testing.T) {
+	t.Helper()
+	if err := exec.Command(python, "-c", "import ezdxf").Run(); err != nil {
+		t.Skipf("skipping the independent read-back: %s cannot import ezdxf (%v); "+
+			"install Debian's python3-ezdxf (apt-get install -y python3-ezdxf) to run it", python, err)
+	}
+}
+
+// Every sheet and CAM file passes ezdxf's audit with nothing to fix and reads
+// back, through ezdxf, to the job's holes within 1e-6 with the right
+// $INSUNITS; a CAM file holds only the contour and the holes; the header
+// extents hold ezdxf's own bounding box of everything drawn.
+func TestEzdxfReadsBack(t *testing.T) {
+	haveEzdxf(t)
+	dir := t.TempDir()
+	type expect struct {
+		cam   bool
+		sys   int
+		holes []wantHole
+	}
+	want := map[string]expect{}
+	var paths []string
+	for _, job := range jobs {
+		r, s := sheet(t, job)
+		b, err := Sheet(s)
+		if err != nil {
+			t.Fatal(err)
+		}
+		ins, _ := wantUnits(s.Units)
+		var sheetHoles []wantHole
+		write := func(name string, data []byte, e expect) {
+			p := filepath.Join(dir, name)
+			if err := os.WriteFile(p, data, 0o644); err != nil {
+				t.Fatal(err)
+			}
+			paths = append(paths, p)
+			want[p] = e
+		}
+		for vi, v := range s.Views {
+			cb, err := CAM(&v.Part, s.Units)
+			if err != nil {
+				t.Fatal(err)
+			}
+			hs := jobHoles(r, vi == 1)
+			write(s.Mark+"-"+v.Part.Name+".cam.dxf", cb, expect{cam: true, sys: int(ins), holes: hs})
+			for _, h := range hs {
+				h.x, h.y = h.x+v.Origin.X, h.y+v.Origin.Y
+				sheetHoles = append(sheetHoles, h)
+			}
+		}
+		write(s.Mark+".dxf", b, expect{sys: int(ins), holes: sheetHoles})
+	}
+	out, err := exec.Command(python, append([]string{"-c", readBack}, paths...)...).Output()
+	if err != nil {
+		if ee, ok := err.(*exec.ExitError); ok {
+			t.Fatalf("ezdxf: %v\n%s", err, ee.Stderr)
+		}
+		t.Fatal(err)
+	}
+	var files []ezFile
+	if err := json.Unmarshal(out, &files); err != nil {
+		t.Fatal(err)
+	}
+	if len(files) != len(paths) {
+		t.Fatalf("ezdxf read %d files of %d", len(files), len(paths))
+	}
+	for _, f := range files {
+		w := want[f.Path]
+		name := filepath.Base(f.Path)
+		if len(f.Errors) > 0 || len(f.Fixes) > 0 {
+			t.Errorf("%s: audit errors %q, fixes %q", name, f.Errors, f.Fixes)
+		}
+		if f.Insunits != w.sys || f.Measurement != map[int]int{1: 0, 4: 1}[w.sys] {
+			t.Errorf("%s: $INSUNITS %d $MEASUREMENT %d", name, f.Insunits, f.Measurement)
+		}
+		// ezdxf measures text with real fonts: allow it a text height's
+		// slack (1/4 in, 6 mm) past our estimate.
+		slack := map[int]float64{1: 0.25, 4: 6}[w.sys]
+		if w.cam {
+			slack = 1e-6
+		}
+		if f.Bbox[0] < f.Extmin[0]-slack || f.Bbox[1] < f.Extmin[1]-slack || f.Bbox[2] > f.Extmax[0]+slack || f.Bbox[3] > f.Extmax[1]+slack {
+			t.Errorf("%s: ezdxf's bounding box %v lies outside $EXTMIN %v $EXTMAX %v", name, f.Bbox, f.Extmin, f.Extmax)
+		}
+		var holes []wantHole
+		for _, e := range f.Entities {
+			if w.cam && e.Layer != "contour" && e.Layer != "holes" {
+				t.Errorf("%s: a %s on layer %q", name, e.Type, e.Layer)
+			}
+			if w.cam && e.Layer == "contour" && (e.Type != "LWPOLYLINE" || !e.Closed) {
+				t.Errorf("%s: contour is a %s, closed %v", name, e.Type, e.Closed)
+			}
+			if e.Layer != "holes" {
+				continue
+			}
+			switch e.Type {
+			case "CIRCLE":
+				holes = append(holes, wantHole{x: e.X, y: e.Y, width: 2 * e.R})
+			case "LWPOLYLINE":
+				p := e.Points
+				if len(p) != 4 || !e.Closed {
+					t.Fatalf("%s: slot of %d points, closed %v", name, len(p), e.Closed)
+				}
+				side := math.Hypot(p[1][0]-p[0][0], p[1][1]-p[0][1])
+				width := math.Hypot(p[2][0]-p[1][0], p[2][1]-p[1][1])
+				holes = append(holes, wantHole{x: (p[0][0] + p[2][0]) / 2, y: (p[0][1] + p[2][1]) / 2,
+					width: width, length: side + width, alongY: p[1][0] == p[0][0]})
+			default:
+				t.Errorf("%s: a %s on the holes layer", name, e.Type)
+			}
+		}
+		sameHoles(t, name, holes, w.holes)
+	}
+}
+
+// ezdxf's renderer draws a sheet without complaint (it fails on malformed
+// TEXT): a smoke test, skipped without python3-matplotlib.
+func TestEzdxfDraws(t *testing.T) {
+	haveEzdxf(t)
+	if err := exec.Command(python, "-c", "import matplotlib").Run(); err != nil {
+		t.Skipf("skipping the render: %s cannot import matplotlib (%v); install python3-matplotlib", python, err)
+	}
+	_, s := sheet(t, "../testdata/jobs/si-slotted.yaml")
+	b, err := Sheet(s)
+	if err != nil {
+		t.Fatal(err)
+	}
+	dir := t.TempDir()
+	in, out := filepath.Join(dir, "KB-40.dxf"), filepath.Join(dir, "KB-40.png")
+	if err := os.WriteFile(in, b, 0o644); err != nil {
+		t.Fatal(err)
+	}
+	cmd := exec.Command(python, "-m", "ezdxf", "draw", in, "-o", out, "--dpi", "50")
+	cmd.Env = append(os.Environ(), "MPLBACKEND=Agg", "MPLCONFIGDIR="+dir)
+	if msg, err := cmd.CombinedOutput(); err != nil {
+		t.Fatalf("ezdxf draw: %v\n%s", err, lastLines(string(msg), 10))
+	}
+	if st, err := os.Stat(out); err != nil || st.Size() == 0 {
+		t.Fatalf("no PNG: %v", err)
+	}
+}
+
+func lastLines(s string, n int) string {
+	lines := strings.Split(strings.TrimSpace(s), "\n")
+	return strings.Join(lines[max(0, len(lines)-n):], "\n")
+}
