@@ -220,9 +220,15 @@ func TestGoodJobs(t *testing.T) {
 }
 
 func TestDemoAndRules(t *testing.T) {
-	r := gaugeline(t, ".", "demo")
+	out := t.TempDir()
+	r := gaugeline(t, ".", "demo", "-o", out)
 	if r.code != 0 || !strings.Contains(r.stdout, "verdict: PASS") || !strings.Contains(r.stdout, "engineer of record") {
 		t.Errorf("demo: exit %d\n%s%s", r.code, r.stdout, r.stderr)
+	}
+	for _, f := range []string{"PR-VB2.dxf", "PR-VB2-member.cam.dxf", "PR-VB2-plate.cam.dxf"} {
+		if _, err := os.Stat(filepath.Join(out, f)); err != nil || !strings.Contains(r.stdout, f) {
+			t.Errorf("demo did not write or name %s: %v", f, err)
+		}
 	}
 	for _, args := range [][]string{{"rules"}, {"rules", "--units", "si", "--standard", "aisc360-16"}} {
 		r := gaugeline(t, ".", args...)
