@@ -45,7 +45,7 @@ type blockPart struct {
 // blocks enumerates every block of the part and returns them all.
 func (p blockPart) blocks(c *Connection) []block {
 	allow := c.Edition.HoleAllowance()
-	lines := gageLines(c.Holes)
+	lines := GageLines(c)
 	nl := len(lines)
 	// innermost hole of each line: farthest from the tear-out edge
 	inner := make([]int, nl)

@@ -134,7 +134,7 @@ func TestPropertyWorstPathNotExceeded(t *testing.T) {
 		c := drawParams(rt).build(t)
 		ph := pathHoles(c)
 		worst, _ := NetWidthDeduction(ph)
-		lines := gageLines(c.Holes)
+		lines := GageLines(c)
 		// one hole from each of a run of consecutive lines
 		from := rapid.IntRange(0, len(lines)-1).Draw(rt, "from")
 		to := rapid.IntRange(from, len(lines)-1).Draw(rt, "to")

@@ -99,30 +99,35 @@ func NetArea(c *Connection) (An units.Area, deduction units.Length) {
 	return m.Ag - units.Area(float64(m.Pieces)*float64(deduction)*float64(m.T)), deduction
 }
 
-// gageLines groups hole indexes by equal y (within eps), lines sorted by y
-// and holes of a line by x.
-func gageLines(holes []Hole) [][]int {
+// GageLines groups hole indexes into gage lines: lines sorted by y, the
+// holes of a line by x. A hole within LineSlack in y of the previous one is
+// on the same line: a designed layout's lines are at least 2-2/3·d apart,
+// so the slack only matters for measured as-built holes, which never lie
+// exactly on their line.
+func GageLines(c *Connection) [][]int {
+	slack := float64(LineSlack(c.Bolt.D))
+	holes := c.Holes
 	idx := make([]int, len(holes))
 	for i := range idx {
 		idx[i] = i
 	}
-	sort.SliceStable(idx, func(a, b int) bool {
-		ha, hb := holes[idx[a]], holes[idx[b]]
-		if math.Abs(float64(ha.Y-hb.Y)) > eps {
-			return ha.Y < hb.Y
-		}
-		return ha.X < hb.X
-	})
+	sort.SliceStable(idx, func(a, b int) bool { return holes[idx[a]].Y < holes[idx[b]].Y })
 	var lines [][]int
-	for _, i := range idx {
-		if n := len(lines); n > 0 && math.Abs(float64(holes[lines[n-1][0]].Y-holes[i].Y)) <= eps {
-			lines[n-1] = append(lines[n-1], i)
-			continue
+	for k, i := range idx {
+		if k == 0 || float64(holes[i].Y-holes[idx[k-1]].Y) > slack {
+			lines = append(lines, nil)
 		}
-		lines = append(lines, []int{i})
+		lines[len(lines)-1] = append(lines[len(lines)-1], i)
+	}
+	for _, ln := range lines {
+		sort.SliceStable(ln, func(a, b int) bool { return holes[ln[a]].X < holes[ln[b]].X })
 	}
 	return lines
 }
+
+// LineSlack is how far apart in y two holes of one gage line may be: a
+// quarter of the bolt diameter (never less than the geometric tolerance).
+func LineSlack(d units.Length) units.Length { return max(d/4, eps) }
 
 // ShearLag is the shear lag factor U of D3 with the cases that gave it.
 type ShearLag struct {
@@ -153,7 +158,7 @@ func ShearLagFactor(c *Connection) ShearLag {
 	if len(c.Holes) > 0 {
 		sl.L = units.Length(xmax - xmin)
 	}
-	for _, line := range gageLines(c.Holes) {
+	for _, line := range GageLines(c) {
 		sl.PerLn = max(sl.PerLn, len(line))
 	}
 	if sl.L > eps {
