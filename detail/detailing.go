@@ -417,27 +417,6 @@ func maxEdgeFindings(c *engine.Connection) []Finding {
 	return fs
 }
 
-// gageLines groups hole indices into gage lines (equal y within tol),
-// lines by increasing y, holes in a line by increasing x.
-func gageLines(c *engine.Connection) [][]int {
-	idx := make([]int, len(c.Holes))
-	for i := range idx {
-		idx[i] = i
-	}
-	slices.SortStableFunc(idx, func(a, b int) int { return cmp.Compare(c.Holes[a].Y, c.Holes[b].Y) })
-	var lines [][]int
-	for k, i := range idx {
-		if k == 0 || c.Holes[i].Y-c.Holes[idx[k-1]].Y > tol {
-			lines = append(lines, nil)
-		}
-		lines[len(lines)-1] = append(lines[len(lines)-1], i)
-	}
-	for _, l := range lines {
-		slices.SortStableFunc(l, func(a, b int) int { return cmp.Compare(c.Holes[a].X, c.Holes[b].X) })
-	}
-	return lines
-}
-
 // maxSpacingFindings is spacing.max, J3.5 [J3.6]: per gage line of two or
 // more holes, the largest pitch against 24t ≤ 12 in (14t ≤ 7 in for
 // unpainted weathering steel), t the thinner part in contact.
@@ -450,7 +429,7 @@ func maxSpacingFindings(c *engine.Connection, info MemberInfo) []Finding {
 	}
 	limit := c.Edition.MaxSpacing(t, info.Weathering)
 	var fs []Finding
-	for n, line := range gageLines(c) {
+	for n, line := range engine.GageLines(c) {
 		if len(line) < 2 {
 			continue
 		}

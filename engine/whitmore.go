@@ -9,7 +9,7 @@ import (
 // Whitmore is the effective section of the plate: the bolt group's width
 // spread at 30° on each side from the row nearest the plate's free edge to
 // the row farthest from it, capped by the plate width, taken at that
-// farthest row.
+// farthest row (holes within LineSlack of it along the load are on it).
 type Whitmore struct {
 	Lw       units.Length // effective width
 	Spread   units.Length // width before the cap
@@ -33,8 +33,9 @@ func WhitmoreSection(c *Connection) Whitmore {
 	w.Spread = units.Length(ymax - ymin + 2*(xmax-xmin)*math.Tan(math.Pi/6))
 	w.Lw = min(w.Spread, c.Plate.Width)
 	allow := c.Edition.HoleAllowance()
+	slack := float64(LineSlack(c.Bolt.D))
 	for _, h := range c.Holes {
-		if math.Abs(float64(h.X)-xmin) <= eps {
+		if float64(h.X)-xmin <= slack {
 			w.Holes++
 			w.Deducted += h.Dy + allow
 		}

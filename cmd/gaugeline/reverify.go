@@ -1,0 +1,117 @@
+package main
+
+import (
+	"context"
+	"fmt"
+	"io"
+
+	"github.com/spf13/cobra"
+
+	"gaugeline/detail"
+	"gaugeline/rules/units"
+)
+
+type reverifyOptions struct {
+	measured string
+	layer    string
+	align    string
+	position string
+	diameter string
+	format   string
+}
+
+func newReverifyCmd(o *rootOptions) *cobra.Command {
+	var ro reverifyOptions
+	cmd := &cobra.Command{
+		Use:   "reverify JOB.yaml --measured FILE",
+		Short: "QA: check an as-fabricated part from its measured holes",
+		Long: "reverify matches the holes measured on a fabricated part (a CSV of x,y,diameter[,id] or a DXF of\n" +
+			"the part) to the design in the job, reports each hole's deviation against the fabrication\n" +
+			"tolerance, reclassifies enlarged holes, and recomputes every detailing rule and limit state on\n" +
+			"the as-built geometry. Exit 0 accept (within tolerance and passing), 3 review (out of tolerance\n" +
+			"but passing as built: engineer of record), 1 reject (fails as built, or holes missing), 2 bad input.",
+		Args: argsExactly(1, "one job file"),
+		RunE: func(cmd *cobra.Command, args []string) error {
+			return runReverify(cmd.Context(), o, ro, args[0], o.stdout)
+		},
+	}
+	f := cmd.Flags()
+	f.StringVar(&ro.measured, "measured", "", "measured holes: a .csv (x,y,diameter[,id]) or a .dxf of the part")
+	f.StringVar(&ro.layer, "layer", "", "DXF: take the circles on this layer (default: every circle inside the part's contour)")
+	f.StringVar(&ro.align, "align", "datum", "datum (trust the file's frame) or best-fit (fit shift and rotation)")
+	f.StringVar(&ro.position, "position", "", "position tolerance, radial (default: the job's tolerance, else 1/16 in or 2 mm)")
+	f.StringVar(&ro.diameter, "diameter", "", "diameter tolerance over nominal (default: the job's tolerance, else 1/32 in or 1 mm)")
+	f.StringVar(&ro.format, "format", "text", "output format: text, json or markdown")
+	return cmd
+}
+
+func runReverify(_ context.Context, _ *rootOptions, ro reverifyOptions, path string, out io.Writer) error {
+	switch ro.format {
+	case "text", "json", "markdown":
+	default:
+		return usageError{fmt.Errorf("--format: unknown format %q (want text, json or markdown)", ro.format)}
+	}
+	if ro.measured == "" {
+		return usageError{fmt.Errorf("--measured is required: the measured holes as .csv or .dxf")}
+	}
+	align, err := detail.ParseAlign(ro.align)
+	if err != nil {
+		return usageError{fmt.Errorf("--align: %w", err)}
+	}
+	job, err := detail.LoadJob(path)
+	if err != nil {
+		return err
+	}
+	opt := detail.ReverifyOptions{Align: align}
+	for _, t := range []struct {
+		flag, val string
+		dst       *units.Length
+	}{{"position", ro.position, &opt.Tolerance.Position}, {"diameter", ro.diameter, &opt.Tolerance.Diameter}} {
+		if t.val == "" {
+			continue
+		}
+		v, err := units.ParseLength(t.val, job.Units)
+		if err != nil || !(v > 0) || v > 100*units.Millimetre {
+			msg := "is not a tolerance"
+			if err != nil {
+				msg = err.Error()
+			}
+			return usageError{fmt.Errorf("--%s: %s", t.flag, msg)}
+		}
+		*t.dst = v
+	}
+	d, err := job.Build()
+	if err != nil {
+		return err
+	}
+	set, err := detail.LoadMeasured(ro.measured, job, ro.layer)
+	if err != nil {
+		return err
+	}
+	ab, err := detail.Reverify(d, set, opt)
+	if err != nil {
+		return &detail.InputError{File: path, Msg: err.Error()}
+	}
+	switch ro.format {
+	case "json":
+		b, err := ab.JSON()
+		if err != nil {
+			return err
+		}
+		if _, err := out.Write(b); err != nil {
+			return err
+		}
+	case "markdown":
+		if err := ab.WriteMarkdown(out); err != nil {
+			return err
+		}
+	default:
+		if err := ab.WriteText(out); err != nil {
+			return err
+		}
+	}
+	if code := ab.Exit(); code != exitOK {
+		return exitError{code}
+	}
+	return nil
+}

@@ -1,0 +1,1194 @@
+package detail
+
+import (
+	"bytes"
+	"cmp"
+	"encoding/json"
+	"errors"
+	"fmt"
+	"io"
+	"math"
+	"os"
+	"path/filepath"
+	"slices"
+	"strconv"
+	"strings"
+	"text/tabwriter"
+
+	"gaugeline/detail/measured"
+	"gaugeline/engine"
+	"gaugeline/rules"
+	"gaugeline/rules/units"
+)
+
+// Reverify (SPEC §8): measured holes matched to the design, per-hole
+// deviations against the fabrication tolerance, enlarged holes reclassified
+// to the hole type their size now is, and every detailing rule and limit
+// state recomputed on the as-built geometry.
+
+// AlignMode is how measured coordinates are brought into the design's frame.
+type AlignMode int
+
+const (
+	// AlignDatum trusts the file's frame: x from the member end, y from
+	// the heel or edge. A DXF contour's lower-left corner is the datum.
+	AlignDatum AlignMode = iota
+	// AlignBestFit finds the rigid shift and rotation that best matches the
+	// measured holes to the design (least squares over matched holes).
+	AlignBestFit
+)
+
+// String returns the flag spelling.
+func (a AlignMode) String() string {
+	if a == AlignBestFit {
+		return "best-fit"
+	}
+	return "datum"
+}
+
+// ParseAlign reads the --align flag.
+func ParseAlign(s string) (AlignMode, error) {
+	switch s {
+	case "datum":
+		return AlignDatum, nil
+	case "best-fit", "bestfit":
+		return AlignBestFit, nil
+	}
+	return AlignDatum, fmt.Errorf("unknown alignment %q (want datum or best-fit)", s)
+}
+
+// QAVerdict is the QA outcome of reverify.
+type QAVerdict int
+
+const (
+	Accept QAVerdict = iota // within tolerance and passing: exit 0
+	Review                  // out of tolerance, still passing as built: exit 3
+	Reject                  // fails as built, or holes missing: exit 1
+)
+
+var verdictNames = [...]string{"accept", "review", "reject"}
+
+// String returns the JSON spelling.
+func (v QAVerdict) String() string { return verdictNames[v] }
+
+// HoleStatus is one hole's outcome.
+type HoleStatus int
+
+const (
+	HoleOK             HoleStatus = iota // matched, within tolerance
+	HoleOutOfTolerance                   // matched, position or size out of tolerance
+	HoleMissing                          // a design hole with no measured hole
+	HoleExtra                            // a measured hole with no design hole
+)
+
+var holeStatusNames = [...]string{"ok", "out-of-tolerance", "missing", "extra"}
+
+// String returns the JSON spelling.
+func (s HoleStatus) String() string { return holeStatusNames[s] }
+
+// Deviation is one design hole and the measured hole matched to it, or a
+// missing or extra hole. Lengths are in mm, in the design's frame.
+type Deviation struct {
+	ID         string // design hole id; for an extra hole "X1", "X2", …
+	MeasuredID string // the hole's id in the measured file ("" when missing)
+	Line       int    // line of the measured hole in its file
+	Status     HoleStatus
+	Design     engine.Hole // zero for an extra hole
+	// Measured centre in the design's frame, and the deviations from the
+	// design centre (measured − design) and their resultant.
+	X, Y           units.Length
+	Dx, Dy, Radial units.Length
+	// Measured width (diameter of a round hole) and length (= width for a
+	// round hole), and the width's deviation from the design's nominal.
+	Width, Length units.Length
+	DDiameter     units.Length
+	// AsBuilt is the hole as the as-built check sees it: measured centre,
+	// type after reclassification, extents max(measured, nominal).
+	AsBuilt      engine.Hole
+	Reclassified bool
+	Why          []string // what is out of tolerance, for people
+}
+
+// Alignment is the transform found between the measured file's frame and
+// the design's: a measured point q is the design point R(Rotation)·p + Shift.
+type Alignment struct {
+	Mode       AlignMode
+	Shift      [2]units.Length
+	Rotation   float64      // radians, counter-clockwise
+	RMS        units.Length // root mean square of the matched holes' radial deviations
+	Iterations int
+	Note       string
+}
+
+// AsBuilt is the outcome of reverify.
+type AsBuilt struct {
+	Design       *Design
+	DesignReport *Report
+	Report       *Report // the as-built check
+	Measured     *measured.Set
+	Tolerance    Tolerance
+	Gate         units.Length
+	Alignment    Alignment
+	Deviations   []Deviation // design holes in order, then extra holes
+	Verdict      QAVerdict
+	Reasons      []string
+}
+
+// ReverifyOptions are the choices of the command line; a zero tolerance
+// field takes the job's (which defaults to common practice).
+type ReverifyOptions struct {
+	Align     AlignMode
+	Tolerance Tolerance
+}
+
+// LoadMeasured reads a measured CSV or DXF (by its extension, or its
+// content when the extension says neither), in the job's units unless the
+// file says otherwise. Every error is an *InputError.
+func LoadMeasured(path string, job *Job, layer string) (*measured.Set, error) {
+	f, err := os.Open(path)
+	if err != nil {
+		return nil, &InputError{File: path, Field: "--measured", Msg: "cannot read the measured file: " + pathErrText(err)}
+	}
+	defer f.Close()
+	def := measured.Inches
+	if job.Units == units.SI {
+		def = measured.Millimetres
+	}
+	var set *measured.Set
+	switch ext := strings.ToLower(filepath.Ext(path)); ext {
+	case ".dxf":
+		set, err = measured.ReadDXF(f, path, def, layer)
+	case ".csv", ".txt":
+		if layer != "" {
+			return nil, &InputError{File: path, Field: "--layer", Msg: "--layer is for DXF files", Hint: "a CSV lists the holes themselves"}
+		}
+		set, err = measured.ReadCSV(f, path, def)
+	default:
+		return nil, &InputError{File: path, Field: "--measured", Msg: fmt.Sprintf("unknown measured file type %q", ext),
+			Hint: "measured holes come as .csv (x,y,diameter[,id]) or .dxf"}
+	}
+	if err != nil {
+		var me *measured.Error
+		if errors.As(err, &me) {
+			return nil, &InputError{File: me.File, Line: me.Line, Field: me.Field, Msg: me.Msg, Hint: me.Hint}
+		}
+		return nil, &InputError{File: path, Msg: err.Error()}
+	}
+	return set, nil
+}
+
+// Reverify matches the measured holes to the design, reports deviations,
+// and checks the as-built geometry.
+func Reverify(d *Design, set *measured.Set, opt ReverifyOptions) (*AsBuilt, error) {
+	if d == nil || set == nil || len(set.Holes) == 0 {
+		panic("detail: Reverify needs a design and measured holes")
+	}
+	dr, err := Check(d)
+	if err != nil {
+		return nil, err
+	}
+	ab := &AsBuilt{Design: d, DesignReport: dr, Measured: set, Tolerance: d.Job.Tolerance}
+	if opt.Tolerance.Position > 0 {
+		ab.Tolerance.Position = opt.Tolerance.Position
+	}
+	if opt.Tolerance.Diameter > 0 {
+		ab.Tolerance.Diameter = opt.Tolerance.Diameter
+	}
+	ab.Gate = matchGate(&d.Conn, ab.Tolerance)
+
+	des := make([]abVec, len(d.Conn.Holes))
+	for i, h := range d.Conn.Holes {
+		des[i] = abVec{float64(h.X), float64(h.Y)}
+	}
+	mea := make([]abVec, len(set.Holes))
+	for i, h := range set.Holes {
+		mea[i] = abVec{h.X, h.Y}
+	}
+	var tf abRigid
+	var match []int
+	switch opt.Align {
+	case AlignBestFit:
+		tf, match, ab.Alignment.Iterations = bestFit(des, mea, float64(ab.Gate), set.Contour)
+		ab.Alignment.Note = "rigid shift and rotation fitted by least squares over the matched holes"
+	default:
+		if len(set.Contour) > 0 {
+			lo := contourMin(set.Contour)
+			tf.t = lo
+			if lo != (abVec{}) {
+				ab.Alignment.Note = "datum: the lower-left corner of the part's contour (member end, heel)"
+			}
+		}
+		match = assignHoles(des, tf.inverseAll(mea), float64(ab.Gate))
+	}
+	ab.Alignment.Mode = opt.Align
+	ab.Alignment.Shift = [2]units.Length{units.Length(tf.t.x), units.Length(tf.t.y)}
+	ab.Alignment.Rotation = tf.theta
+	if ab.Alignment.Note == "" {
+		ab.Alignment.Note = "datum: the file's frame as measured"
+	}
+	aligned := tf.inverseAll(mea)
+	if err := ab.deviations(aligned, match); err != nil {
+		return nil, err
+	}
+	var sum float64
+	n := 0
+	for _, dv := range ab.Deviations {
+		if dv.Status == HoleOK || dv.Status == HoleOutOfTolerance {
+			sum += float64(dv.Radial * dv.Radial)
+			n++
+		}
+	}
+	if n > 0 {
+		ab.Alignment.RMS = units.Length(math.Sqrt(sum / float64(n)))
+	}
+	if err := ab.check(); err != nil {
+		return nil, err
+	}
+	ab.decide()
+	return ab, nil
+}
+
+// matchGate is the farthest a measured hole may lie from a design hole and
+// still be that hole: the bolt diameter, or half the least design spacing
+// when that is less, but never under twice the position tolerance. A hole
+// beyond it is an extra hole (and the design hole missing).
+func matchGate(c *engine.Connection, tol Tolerance) units.Length {
+	g := c.Bolt.D
+	for i := range c.Holes {
+		for j := i + 1; j < len(c.Holes); j++ {
+			s := units.Length(math.Hypot(float64(c.Holes[i].X-c.Holes[j].X), float64(c.Holes[i].Y-c.Holes[j].Y)))
+			g = min(g, s/2)
+		}
+	}
+	return max(g, 2*tol.Position)
+}
+
+// deviations fills ab.Deviations from the matching (match[i] is the
+// measured hole of design hole i, or -1).
+func (ab *AsBuilt) deviations(aligned []abVec, match []int) error {
+	c := &ab.Design.Conn
+	set := ab.Measured
+	used := make([]bool, len(set.Holes))
+	tol := ab.Tolerance
+	sys := ab.Design.Job.Units
+	ql := func(l units.Length) string { return qaLength(l, sys) }
+	qt := func(l units.Length) string { return exactLength(l, sys) }
+	for i, h := range c.Holes {
+		dv := Deviation{ID: h.ID, Design: h}
+		k := match[i]
+		if k < 0 {
+			dv.Status = HoleMissing
+			dv.Why = []string{"missing"}
+			ab.Deviations = append(ab.Deviations, dv)
+			continue
+		}
+		used[k] = true
+		m := set.Holes[k]
+		dv.MeasuredID, dv.Line = m.ID, m.Line
+		dv.X, dv.Y = units.Length(aligned[k].x), units.Length(aligned[k].y)
+		dv.Dx, dv.Dy = dv.X-h.X, dv.Y-h.Y
+		dv.Radial = units.Length(math.Hypot(float64(dv.Dx), float64(dv.Dy)))
+		dv.Width, dv.Length = units.Length(m.Width), units.Length(m.Length)
+		dv.DDiameter = dv.Width - min(h.Dx, h.Dy)
+		hb, err := ab.classify(h, m, dv.X, dv.Y)
+		if err != nil {
+			return err
+		}
+		hb.ID = h.ID
+		dv.AsBuilt = hb
+		dv.Reclassified = hb.Type != h.Type || (hb.Type.IsSlot() && hb.Slot != h.Slot)
+		if dv.Radial > tol.Position+tolSlack {
+			dv.Why = append(dv.Why, fmt.Sprintf("position off by %s (tolerance %s)", ql(dv.Radial), qt(tol.Position)))
+		}
+		switch {
+		case dv.DDiameter > tol.Diameter+tolSlack:
+			dv.Why = append(dv.Why, fmt.Sprintf("%s over size (tolerance +%s)", ql(dv.DDiameter), qt(tol.Diameter)))
+		case dv.DDiameter < -tol.Diameter-tolSlack:
+			dv.Why = append(dv.Why, fmt.Sprintf("%s under size: ream to size (tolerance %s)", ql(-dv.DDiameter), qt(tol.Diameter)))
+		}
+		if h.Type.IsSlot() || m.Slot {
+			if dl := dv.Length - max(h.Dx, h.Dy); math.Abs(float64(dl)) > float64(tol.Diameter+tolSlack) {
+				dv.Why = append(dv.Why, fmt.Sprintf("length off by %s (tolerance %s)", ql(dl), qt(tol.Diameter)))
+			}
+		}
+		if dv.Reclassified {
+			what := hb.Type.String()
+			if hb.Type.IsSlot() {
+				what = hb.Slot.String() + " " + what
+			}
+			article := "a "
+			if strings.ContainsRune("aeiou", rune(what[0])) {
+				article = "an "
+			}
+			dv.Why = append(dv.Why, "now "+article+what+" hole")
+		}
+		dv.Status = HoleOK
+		if len(dv.Why) > 0 {
+			dv.Status = HoleOutOfTolerance
+		}
+		ab.Deviations = append(ab.Deviations, dv)
+	}
+	n := 0
+	for k, m := range set.Holes {
+		if used[k] {
+			continue
+		}
+		n++
+		dv := Deviation{ID: fmt.Sprintf("X%d", n), MeasuredID: m.ID, Line: m.Line, Status: HoleExtra,
+			X: units.Length(aligned[k].x), Y: units.Length(aligned[k].y),
+			Width: units.Length(m.Width), Length: units.Length(m.Length), Why: []string{"not in the design"}}
+		hb, err := ab.classify(engine.Hole{Type: rules.Standard}, m, dv.X, dv.Y)
+		if err != nil {
+			return err
+		}
+		hb.ID = dv.ID
+		dv.AsBuilt = hb
+		ab.Deviations = append(ab.Deviations, dv)
+	}
+	return nil
+}
+
+// tolSlack is the slack of tolerance comparisons, in mm: a deviation exactly
+// at the tolerance is within it although the tolerance was converted.
+const tolSlack = 1e-6
+
+// classify returns the as-built hole of a measured hole matched to design
+// hole h (an extra hole passes a standard h): a hole no larger than its
+// design type's nominal size plus the diameter tolerance keeps that type;
+// a larger one is the smallest type (standard, oversized; short, long
+// slot) whose nominal size plus tolerance holds it, or the largest when
+// none does (hole.size then fails). Its extents are the measured ones, but
+// never less than the type's nominal: an undersize hole is reamed to size.
+func (ab *AsBuilt) classify(h engine.Hole, m measured.Hole, x, y units.Length) (engine.Hole, error) {
+	c := &ab.Design.Conn
+	ed, D, tol := c.Edition, c.Bolt.D, ab.Tolerance.Diameter
+	w, l := units.Length(m.Width), units.Length(m.Length)
+	out := engine.Hole{X: x, Y: y}
+	if !m.Slot {
+		types := []rules.HoleType{rules.Standard, rules.Oversized}
+		start := 0
+		if h.Type == rules.Oversized {
+			start = 1
+		}
+		out.Type = types[len(types)-1]
+		for _, t := range types[start:] {
+			hs, err := ed.Hole(D, t)
+			if err != nil {
+				return out, err
+			}
+			if w <= hs.Width+tol+tolSlack {
+				out.Type = t
+				break
+			}
+		}
+		hs, err := ed.Hole(D, out.Type)
+		if err != nil {
+			return out, err
+		}
+		out.Slot = rules.Transverse
+		out.Dx = max(w, hs.Width)
+		out.Dy = out.Dx
+		return out, nil
+	}
+	// A slot: its direction from its axis in the design frame (the
+	// alignment's rotation is already out of the axis).
+	axis := m.Axis - ab.Alignment.Rotation
+	out.Slot = rules.Transverse
+	if math.Abs(math.Cos(axis)) >= math.Abs(math.Sin(axis)) {
+		out.Slot = rules.Longitudinal
+	}
+	out.Type = rules.LongSlot
+	short, err := ed.Hole(D, rules.ShortSlot)
+	if err != nil {
+		return out, err
+	}
+	if h.Type != rules.LongSlot && l <= short.Length+tol+tolSlack {
+		out.Type = rules.ShortSlot
+	}
+	hs, err := ed.Hole(D, out.Type)
+	if err != nil {
+		return out, err
+	}
+	along, across := max(l, hs.Length), max(w, hs.Width)
+	out.Dx, out.Dy = across, along
+	if out.Slot == rules.Longitudinal {
+		out.Dx, out.Dy = along, across
+	}
+	return out, nil
+}
+
+// check builds the as-built design and checks it: every limit state and
+// detailing rule on the measured hole centres and sizes, with hole.size
+// allowing the fabrication tolerance.
+func (ab *AsBuilt) check() error {
+	d := ab.Design
+	built := *d
+	built.Conn.Holes = nil
+	if d.Conn.Plate != nil {
+		pl := *d.Conn.Plate // the plate as designed: its free edge and centre line stay
+		built.Conn.Plate = &pl
+	}
+	for _, dv := range ab.Deviations {
+		if dv.Status != HoleMissing {
+			built.Conn.Holes = append(built.Conn.Holes, dv.AsBuilt)
+		}
+	}
+	// The engine groups holes into gage lines and rows with a slack of a
+	// quarter diameter, so the measured centres go in as they are.
+	model := built
+	rs, err := engine.Check(&model.Conn)
+	if err != nil {
+		return err
+	}
+	r := &Report{Design: &built, Results: rs, Findings: Detailing(&built.Conn, built.Info), Governing: engine.Governing(rs)}
+	for i := range r.Findings {
+		f := &r.Findings[i]
+		if f.ID == "hole.size" && f.Dim == units.DimLength {
+			f.Limit += float64(ab.Tolerance.Diameter)
+			f.Pass = f.Measured <= f.Limit+tol
+			f.Where += ", nominal + fabrication tolerance"
+		}
+	}
+	r.Pass = Passes(r.Findings)
+	for _, x := range rs {
+		r.Pass = r.Pass && x.Pass
+	}
+	r.Cautions = append(cautions(&built),
+		"As built: the plate is taken as designed (free edge and centre line); the measured holes are taken through both plies.",
+		"As built: holes within a quarter of the bolt diameter of one another across (along) the load are taken as one gage line (row).")
+	if ab.Alignment.Mode == AlignBestFit {
+		r.Cautions = append(r.Cautions, "Best-fit alignment places the hole group on the design: edge distances are checked as designed plus the holes' deviations within the group, not measured from the part's own edges; use --align datum to check them.")
+	}
+	ab.Report = r
+	return nil
+}
+
+// decide sets the verdict and its reasons.
+func (ab *AsBuilt) decide() {
+	var missing, extra, out []string
+	for _, dv := range ab.Deviations {
+		switch dv.Status {
+		case HoleMissing:
+			missing = append(missing, dv.ID)
+		case HoleExtra:
+			extra = append(extra, dv.MeasuredID)
+		case HoleOutOfTolerance:
+			out = append(out, dv.ID)
+		}
+	}
+	r := ab.Report
+	ab.Verdict = Accept
+	if len(out) > 0 || len(extra) > 0 {
+		ab.Verdict = Review
+	}
+	if len(out) > 0 {
+		ab.Reasons = append(ab.Reasons, "out of tolerance: "+strings.Join(out, ", "))
+	}
+	if len(extra) > 0 {
+		ab.Reasons = append(ab.Reasons, "holes not in the design: "+strings.Join(extra, ", "))
+	}
+	if len(missing) > 0 {
+		ab.Verdict = Reject
+		ab.Reasons = append(ab.Reasons, "missing holes: "+strings.Join(missing, ", "))
+	}
+	if !r.Pass {
+		ab.Verdict = Reject
+		var fails []string
+		for _, x := range r.Results {
+			if !x.Pass {
+				fails = append(fails, x.ID)
+			}
+		}
+		for _, f := range r.Findings {
+			if !f.Pass && !f.Advisory && !slices.Contains(fails, f.ID) {
+				fails = append(fails, f.ID)
+			}
+		}
+		ab.Reasons = append(ab.Reasons, "fails as built: "+strings.Join(fails, ", "))
+		if !ab.DesignReport.Pass {
+			ab.Reasons = append(ab.Reasons, "the design itself fails: "+ab.DesignReport.GoverningResult().ID+" governs")
+		}
+	}
+	if ab.Verdict == Review {
+		ab.Reasons = append(ab.Reasons, "every detailing rule and limit state passes as built: send to the engineer of record")
+	}
+}
+
+// Exit returns the exit code of the verdict (SPEC §2).
+func (ab *AsBuilt) Exit() int { return [...]int{0, 3, 1}[ab.Verdict] }
+
+// abVec is a point or vector of the plane, mm.
+type abVec struct{ x, y float64 }
+
+// abRigid maps a design point p to the measured frame: R(theta)·p + t.
+type abRigid struct {
+	theta float64
+	t     abVec
+}
+
+func (r abRigid) apply(p abVec) abVec {
+	c, s := math.Cos(r.theta), math.Sin(r.theta)
+	return abVec{c*p.x - s*p.y + r.t.x, s*p.x + c*p.y + r.t.y}
+}
+
+// inverse maps a measured point q to the design frame: Rᵀ·(q − t).
+func (r abRigid) inverse(q abVec) abVec {
+	c, s := math.Cos(r.theta), math.Sin(r.theta)
+	x, y := q.x-r.t.x, q.y-r.t.y
+	return abVec{c*x + s*y, -s*x + c*y}
+}
+
+func (r abRigid) inverseAll(qs []abVec) []abVec {
+	out := make([]abVec, len(qs))
+	for i, q := range qs {
+		out[i] = r.inverse(q)
+	}
+	return out
+}
+
+// fitRigid is the least-squares rigid transform taking ps onto qs (the
+// 2-D Kabsch/Procrustes solution): θ = atan2(Σ p′×q′, Σ p′·q′) over the
+// centred points, t = q̄ − R·p̄. One pair fixes only the shift.
+func fitRigid(ps, qs []abVec, keep float64) abRigid {
+	n := float64(len(ps))
+	var pc, qc abVec
+	for i := range ps {
+		pc.x, pc.y = pc.x+ps[i].x/n, pc.y+ps[i].y/n
+		qc.x, qc.y = qc.x+qs[i].x/n, qc.y+qs[i].y/n
+	}
+	var sc, ss float64
+	for i := range ps {
+		px, py := ps[i].x-pc.x, ps[i].y-pc.y
+		qx, qy := qs[i].x-qc.x, qs[i].y-qc.y
+		sc += px*qx + py*qy
+		ss += px*qy - py*qx
+	}
+	th := keep
+	if len(ps) > 1 && math.Hypot(sc, ss) > 1e-12 {
+		th = math.Atan2(ss, sc)
+	}
+	r := abRigid{theta: th}
+	rp := r.apply(pc)
+	r.t = abVec{qc.x - rp.x, qc.y - rp.y}
+	return r
+}
+
+// bestFit aligns the measured holes to the design: from several starts
+// (the centroids matched at the patterns' principal axes and at every 15°
+// — every quarter turn for large patterns —, and the design's longest
+// pairs of holes set on each measured pair as far apart) it alternates
+// optimal matching and the least-squares fit until the matching settles. The best
+// start matches the most holes, then has the least squared deviation;
+// among fits as good as each other (a symmetric pattern), the part's
+// contour decides (the start whose contour lies from the datum into +x and
+// +y), then the smallest rotation.
+func bestFit(des, mea []abVec, gate float64, contour []measured.Point) (abRigid, []int, int) {
+	dc, mc := abCentroid(des), abCentroid(mea)
+	var starts []abRigid
+	centred := func(th float64) abRigid {
+		tf := abRigid{theta: th}
+		p := tf.apply(dc)
+		tf.t = abVec{mc.x - p.x, mc.y - p.y}
+		return tf
+	}
+	// Centroids matched, at the principal axes and at every 15°.
+	if a, ok := principalAxis(des); ok {
+		if b, ok := principalAxis(mea); ok {
+			starts = append(starts, centred(b-a), centred(b-a+math.Pi))
+		}
+	}
+	step := math.Pi / 2
+	if len(des) <= 60 {
+		step = math.Pi / 12
+	}
+	for th := 0.0; th < 2*math.Pi-1e-9; th += step {
+		starts = append(starts, centred(math.Remainder(th, 2*math.Pi)))
+	}
+	// The design's longest pairs of holes set on every measured pair as
+	// far apart, both ways round: robust to missing and extra holes, which
+	// pull the centroids apart.
+	if n, m := len(des), len(mea); n >= 2 && n <= 40 && m >= 2 && m <= 200 {
+		type pair struct {
+			i, j int
+			d    float64
+		}
+		var dp []pair
+		for i := range des {
+			for j := i + 1; j < n; j++ {
+				dp = append(dp, pair{i, j, math.Hypot(des[j].x-des[i].x, des[j].y-des[i].y)})
+			}
+		}
+		slices.SortStableFunc(dp, func(a, b pair) int { return cmp.Compare(b.d, a.d) })
+		added := 0
+		for _, pr := range dp[:min(4, len(dp))] {
+			p, q := des[pr.i], des[pr.j]
+			for a := range mea {
+				for b := range mea {
+					if a == b || added >= 400 {
+						continue
+					}
+					ma, mb := mea[a], mea[b]
+					if math.Abs(math.Hypot(mb.x-ma.x, mb.y-ma.y)-pr.d) > gate {
+						continue
+					}
+					th := math.Atan2(mb.y-ma.y, mb.x-ma.x) - math.Atan2(q.y-p.y, q.x-p.x)
+					tf := abRigid{theta: math.Remainder(th, 2*math.Pi)}
+					rp := tf.apply(p)
+					tf.t = abVec{ma.x - rp.x, ma.y - rp.y}
+					starts = append(starts, tf)
+					added++
+				}
+			}
+		}
+	}
+	type fit struct {
+		tf      abRigid
+		match   []int
+		matched int
+		sse     float64
+		datum   float64
+		iters   int
+	}
+	var best *fit
+	for _, tf := range starts {
+		var match []int
+		iters := 0
+		for iters < 50 {
+			iters++
+			m := assignHoles(des, tf.inverseAll(mea), gate)
+			var ps, qs []abVec
+			for i, k := range m {
+				if k >= 0 {
+					ps, qs = append(ps, des[i]), append(qs, mea[k])
+				}
+			}
+			if len(ps) == 0 {
+				match = m
+				break
+			}
+			next := fitRigid(ps, qs, tf.theta)
+			settled := slices.Equal(m, match) && math.Abs(next.theta-tf.theta) < 1e-14 &&
+				math.Abs(next.t.x-tf.t.x) < 1e-10 && math.Abs(next.t.y-tf.t.y) < 1e-10
+			tf, match = next, m
+			if settled {
+				break
+			}
+		}
+		f := &fit{tf: tf, match: match, iters: iters}
+		al := tf.inverseAll(mea)
+		for i, k := range match {
+			if k >= 0 {
+				f.matched++
+				f.sse += abSq(al[k].x-des[i].x) + abSq(al[k].y-des[i].y)
+			}
+		}
+		f.tf.theta = math.Remainder(f.tf.theta, 2*math.Pi)
+		if len(contour) > 0 {
+			cs := make([]abVec, len(contour))
+			for i, p := range contour {
+				cs[i] = tf.inverse(abVec{p.X, p.Y})
+			}
+			lo := pointsMin(cs)
+			f.datum = math.Hypot(lo.x, lo.y)
+		}
+		if best == nil {
+			best = f
+			continue
+		}
+		scale := 1e-9 * (1 + best.sse)
+		switch {
+		case f.matched != best.matched:
+			if f.matched > best.matched {
+				best = f
+			}
+		case math.Abs(f.sse-best.sse) > max(scale, 1e-6):
+			if f.sse < best.sse {
+				best = f
+			}
+		case len(contour) > 0 && math.Abs(f.datum-best.datum) > 1e-3:
+			if f.datum < best.datum {
+				best = f
+			}
+		case math.Abs(f.tf.theta) < math.Abs(best.tf.theta)-1e-9:
+			best = f
+		}
+	}
+	return best.tf, best.match, best.iters
+}
+
+func abSq(v float64) float64 { return v * v }
+
+func abCentroid(ps []abVec) abVec {
+	var c abVec
+	for _, p := range ps {
+		c.x += p.x / float64(len(ps))
+		c.y += p.y / float64(len(ps))
+	}
+	return c
+}
+
+// principalAxis is the direction of the points' major axis of inertia; ok
+// is false when the points have none (one point, or a round cloud).
+func principalAxis(ps []abVec) (float64, bool) {
+	c := abCentroid(ps)
+	var sxx, syy, sxy float64
+	for _, p := range ps {
+		x, y := p.x-c.x, p.y-c.y
+		sxx, syy, sxy = sxx+x*x, syy+y*y, sxy+x*y
+	}
+	if math.Hypot(sxx-syy, 2*sxy) < 1e-9*(sxx+syy+1e-300) {
+		return 0, false
+	}
+	return 0.5 * math.Atan2(2*sxy, sxx-syy), true
+}
+
+func contourMin(ps []measured.Point) abVec {
+	lo := abVec{math.Inf(1), math.Inf(1)}
+	for _, p := range ps {
+		lo.x, lo.y = min(lo.x, p.X), min(lo.y, p.Y)
+	}
+	return lo
+}
+
+func pointsMin(ps []abVec) abVec {
+	lo := abVec{math.Inf(1), math.Inf(1)}
+	for _, p := range ps {
+		lo.x, lo.y = min(lo.x, p.x), min(lo.y, p.y)
+	}
+	return lo
+}
+
+// assignHoles matches design points to measured points by the optimal
+// assignment (least total squared distance, Hungarian method) with a gate:
+// a pair farther apart than gate is never matched, so a far-off hole is an
+// extra hole and its design hole missing. It returns, per design point,
+// the index of its measured point or -1.
+func assignHoles(des, mea []abVec, gate float64) []int {
+	out := make([]int, len(des))
+	for i := range out {
+		out[i] = -1
+	}
+	// Only measured points within the gate of some design point take part.
+	var cand []int
+	for k, q := range mea {
+		for _, p := range des {
+			if math.Hypot(q.x-p.x, q.y-p.y) <= gate {
+				cand = append(cand, k)
+				break
+			}
+		}
+	}
+	if len(cand) == 0 || len(des) == 0 {
+		return out
+	}
+	n, m := len(des), len(cand)
+	g2 := gate * gate
+	const never = 1e18
+	// Columns: the candidates, then one "missing" column per design point.
+	cost := make([][]float64, n)
+	for i, p := range des {
+		row := make([]float64, m+n)
+		for j, k := range cand {
+			q := mea[k]
+			d2 := abSq(q.x-p.x) + abSq(q.y-p.y)
+			row[j] = never
+			if d2 <= g2 {
+				row[j] = d2
+			}
+		}
+		for j := range n {
+			row[m+j] = never
+		}
+		row[m+i] = g2
+		cost[i] = row
+	}
+	col := hungarian(cost)
+	for i, j := range col {
+		if j < m && cost[i][j] < never {
+			out[i] = cand[j]
+		}
+	}
+	return out
+}
+
+// hungarian solves the rectangular assignment problem (rows ≤ columns):
+// the column of each row that minimises the total cost. O(n²·m), the
+// potentials form of the Hungarian method.
+func hungarian(cost [][]float64) []int {
+	n := len(cost)
+	m := len(cost[0])
+	u, v := make([]float64, n+1), make([]float64, m+1)
+	p, way := make([]int, m+1), make([]int, m+1)
+	minv := make([]float64, m+1)
+	used := make([]bool, m+1)
+	for i := 1; i <= n; i++ {
+		p[0] = i
+		j0 := 0
+		for j := range minv {
+			minv[j], used[j] = math.Inf(1), false
+		}
+		for {
+			used[j0] = true
+			i0, delta, j1 := p[j0], math.Inf(1), 0
+			for j := 1; j <= m; j++ {
+				if used[j] {
+					continue
+				}
+				if cur := cost[i0-1][j-1] - u[i0] - v[j]; cur < minv[j] {
+					minv[j], way[j] = cur, j0
+				}
+				if minv[j] < delta {
+					delta, j1 = minv[j], j
+				}
+			}
+			for j := 0; j <= m; j++ {
+				if used[j] {
+					u[p[j]] += delta
+					v[j] -= delta
+				} else {
+					minv[j] -= delta
+				}
+			}
+			j0 = j1
+			if p[j0] == 0 {
+				break
+			}
+		}
+		for j0 != 0 {
+			j1 := way[j0]
+			p[j0] = p[j1]
+			j0 = j1
+		}
+	}
+	col := make([]int, n)
+	for j := 1; j <= m; j++ {
+		if p[j] != 0 {
+			col[p[j]-1] = j - 1
+		}
+	}
+	return col
+}
+
+// JSON document of reverify (SPEC §9): the check document of the as-built
+// geometry, its verdict replaced by accept, review or reject.
+
+type jsonDeviation struct {
+	ID           string   `json:"id"`
+	MeasuredID   string   `json:"measured_id,omitempty"`
+	Line         int      `json:"line,omitempty"`
+	Status       string   `json:"status"`
+	DesignX      *jsonNum `json:"design_x,omitempty"`
+	DesignY      *jsonNum `json:"design_y,omitempty"`
+	X            *jsonNum `json:"x,omitempty"`
+	Y            *jsonNum `json:"y,omitempty"`
+	Dx           *jsonNum `json:"dx,omitempty"`
+	Dy           *jsonNum `json:"dy,omitempty"`
+	Radial       *jsonNum `json:"radial,omitempty"`
+	TruePosition *jsonNum `json:"true_position,omitempty"` // GD&T: the diameter of the zone, 2 × radial
+	Diameter     *jsonNum `json:"diameter,omitempty"`
+	Length       *jsonNum `json:"length,omitempty"`
+	DesignDia    *jsonNum `json:"design_diameter,omitempty"`
+	DDiameter    *jsonNum `json:"diameter_deviation,omitempty"`
+	DesignType   string   `json:"design_type,omitempty"`
+	Type         string   `json:"type,omitempty"`
+	Slot         string   `json:"slot,omitempty"`
+	Reclassified bool     `json:"reclassified"`
+	InTolerance  bool     `json:"within_tolerance"`
+	Why          []string `json:"why,omitempty"`
+}
+
+type jsonAlignment struct {
+	Mode        string  `json:"mode"`
+	ShiftX      jsonNum `json:"shift_x"`
+	ShiftY      jsonNum `json:"shift_y"`
+	RotationDeg jsonNum `json:"rotation_deg"`
+	RMS         jsonNum `json:"rms"`
+	Iterations  int     `json:"iterations,omitempty"`
+	Note        string  `json:"note"`
+}
+
+type jsonMeasured struct {
+	File   string   `json:"file"`
+	Format string   `json:"format"`
+	Units  string   `json:"units"`
+	Holes  int      `json:"holes"`
+	Notes  []string `json:"notes,omitempty"`
+}
+
+type jsonReverify struct {
+	jsonReport
+	Verdict         string             `json:"verdict"`
+	AsBuilt         string             `json:"as_built"`
+	DesignVerdict   string             `json:"design_verdict"`
+	Reasons         []string           `json:"reasons"`
+	Measured        jsonMeasured       `json:"measured"`
+	Tolerance       map[string]jsonNum `json:"tolerance"`
+	Gate            jsonNum            `json:"match_gate"`
+	Alignment       jsonAlignment      `json:"alignment"`
+	Deviations      []jsonDeviation    `json:"deviations"`
+	DesignGoverning string             `json:"design_governing"`
+	DesignRatios    map[string]jsonNum `json:"design_ratios"`
+	RatioChange     map[string]jsonNum `json:"ratio_change"`
+}
+
+func (ab *AsBuilt) document() jsonReverify {
+	sys := ab.Design.Job.Units
+	length := func(l units.Length) *jsonNum {
+		v := jsonNum(sys.ToJob(float64(l), units.DimLength))
+		return &v
+	}
+	doc := jsonReverify{
+		jsonReport: ab.Report.document(), Verdict: ab.Verdict.String(), AsBuilt: ab.Report.Verdict(),
+		DesignVerdict: ab.DesignReport.Verdict(), Reasons: ab.Reasons,
+		Measured: jsonMeasured{File: ab.Measured.File, Format: ab.Measured.Format, Units: ab.Measured.Units,
+			Holes: len(ab.Measured.Holes), Notes: ab.Measured.Notes},
+		Tolerance: map[string]jsonNum{"position": *length(ab.Tolerance.Position), "diameter": *length(ab.Tolerance.Diameter)},
+		Gate:      *length(ab.Gate),
+		Alignment: jsonAlignment{Mode: ab.Alignment.Mode.String(), ShiftX: *length(ab.Alignment.Shift[0]), ShiftY: *length(ab.Alignment.Shift[1]),
+			RotationDeg: jsonNum(ab.Alignment.Rotation * 180 / math.Pi), RMS: *length(ab.Alignment.RMS),
+			Iterations: ab.Alignment.Iterations, Note: ab.Alignment.Note},
+		Deviations:      []jsonDeviation{},
+		DesignGoverning: ab.DesignReport.GoverningResult().ID,
+		DesignRatios:    map[string]jsonNum{},
+		RatioChange:     map[string]jsonNum{},
+	}
+	if doc.Reasons == nil {
+		doc.Reasons = []string{}
+	}
+	for _, dv := range ab.Deviations {
+		j := jsonDeviation{ID: dv.ID, MeasuredID: dv.MeasuredID, Line: dv.Line, Status: dv.Status.String(),
+			Reclassified: dv.Reclassified, InTolerance: dv.Status == HoleOK, Why: dv.Why}
+		if dv.Status != HoleExtra {
+			j.DesignX, j.DesignY = length(dv.Design.X), length(dv.Design.Y)
+			j.DesignDia = length(min(dv.Design.Dx, dv.Design.Dy))
+			j.DesignType = dv.Design.Type.String()
+		}
+		if dv.Status != HoleMissing {
+			j.X, j.Y, j.Diameter = length(dv.X), length(dv.Y), length(dv.Width)
+			if dv.Length != dv.Width {
+				j.Length = length(dv.Length)
+			}
+			j.Type = dv.AsBuilt.Type.String()
+			if dv.AsBuilt.Type.IsSlot() {
+				j.Slot = dv.AsBuilt.Slot.String()
+			}
+		}
+		if dv.Status == HoleOK || dv.Status == HoleOutOfTolerance {
+			j.Dx, j.Dy, j.Radial, j.DDiameter = length(dv.Dx), length(dv.Dy), length(dv.Radial), length(dv.DDiameter)
+			j.TruePosition = length(2 * dv.Radial)
+		}
+		doc.Deviations = append(doc.Deviations, j)
+	}
+	design := map[string]float64{}
+	for _, x := range ab.DesignReport.Results {
+		doc.DesignRatios[x.ID] = jsonNum(x.Ratio)
+		design[x.ID] = x.Ratio
+	}
+	for _, x := range ab.Report.Results {
+		if dr, ok := design[x.ID]; ok {
+			doc.RatioChange[x.ID] = jsonNum(x.Ratio - dr)
+		}
+	}
+	return doc
+}
+
+// JSON returns the reverify document as indented JSON, ending in a newline.
+func (ab *AsBuilt) JSON() ([]byte, error) {
+	var b bytes.Buffer
+	enc := json.NewEncoder(&b)
+	enc.SetIndent("", "  ")
+	if err := enc.Encode(ab.document()); err != nil {
+		return nil, fmt.Errorf("detail: encoding reverify report: %w", err)
+	}
+	return b.Bytes(), nil
+}
+
+// qaLength writes a measured length for QA: decimals, as measuring
+// equipment reports them (inches to 0.0001, mm to 0.01).
+func qaLength(l units.Length, sys units.System) string {
+	if sys == units.US {
+		return fmt.Sprintf("%.4f in", l.In())
+	}
+	return fmt.Sprintf("%.2f mm", l.Mm())
+}
+
+// exactLength writes a length in the job's unit with the digits it needs
+// (1/32 in is 0.03125 in), to 1e-6.
+func exactLength(l units.Length, sys units.System) string {
+	v, unit := l.Mm(), "mm"
+	if sys == units.US {
+		v, unit = l.In(), "in"
+	}
+	return strconv.FormatFloat(math.Round(v*1e6)/1e6, 'f', -1, 64) + " " + unit
+}
+
+func qaSigned(l units.Length, sys units.System) string {
+	s := qaLength(l, sys)
+	if s[0] != '-' {
+		s = "+" + s
+	}
+	if strings.Trim(s, "+-0. inm") == "" {
+		s = strings.TrimLeft(s, "+-") // no sign on a zero
+	}
+	return s
+}
+
+// holeRow is one deviation as table cells for people.
+func (ab *AsBuilt) holeRow(dv Deviation) []string {
+	sys := ab.Design.Job.Units
+	l := func(v units.Length) string { return qaLength(v, sys) }
+	sg := func(v units.Length) string { return qaSigned(v, sys) }
+	dash := "-"
+	row := []string{dv.ID, dv.MeasuredID, dash, dash, dash, dash, dash, dash, dash, dash, dv.Status.String()}
+	if dv.MeasuredID == "" {
+		row[1] = dash
+	}
+	if dv.Status != HoleMissing {
+		row[2], row[3] = l(dv.X), l(dv.Y)
+		row[7] = l(dv.Width)
+		if dv.Length != dv.Width {
+			row[7] += " x " + l(dv.Length)
+		}
+		row[9] = dv.AsBuilt.Type.String()
+		if dv.AsBuilt.Type.IsSlot() {
+			row[9] = dv.AsBuilt.Slot.String() + " " + row[9]
+		}
+	}
+	if dv.Status == HoleOK || dv.Status == HoleOutOfTolerance {
+		row[4], row[5], row[6], row[8] = sg(dv.Dx), sg(dv.Dy), l(dv.Radial), sg(dv.DDiameter)
+	}
+	if dv.Status == HoleMissing {
+		row[2], row[3] = l(dv.Design.X), l(dv.Design.Y)
+		row[9] = dv.Design.Type.String()
+	}
+	return row
+}
+
+var holeHeader = []string{"HOLE", "MEASURED", "X", "Y", "DX", "DY", "RADIAL", "SIZE", "SIZE DEV", "TYPE", "STATUS"}
+
+// header lines shared by the text and Markdown reports.
+func (ab *AsBuilt) preamble() [][2]string {
+	sys := ab.Design.Job.Units
+	a := ab.Alignment
+	align := fmt.Sprintf("%s: shift x %s, y %s; rotation %.6f deg; rms %s (%s)", a.Mode, qaSigned(a.Shift[0], sys), qaSigned(a.Shift[1], sys),
+		a.Rotation*180/math.Pi, qaLength(a.RMS, sys), a.Note)
+	m := ab.Measured
+	return [][2]string{
+		{"measured", fmt.Sprintf("%s (%s, %s, %d holes)", m.File, m.Format, m.Units, len(m.Holes))},
+		{"tolerance", fmt.Sprintf("position %s radial, size +%s over nominal; holes farther than %s from a design hole are extra",
+			exactLength(ab.Tolerance.Position, sys), exactLength(ab.Tolerance.Diameter, sys), exactLength(ab.Gate, sys))},
+		{"alignment", align},
+	}
+}
+
+// ratioRows pairs each as-built limit state with the design's ratio.
+func (ab *AsBuilt) ratioRows() [][]string {
+	design := map[string]float64{}
+	for _, x := range ab.DesignReport.Results {
+		design[x.ID] = x.Ratio
+	}
+	var rows [][]string
+	for i, x := range ab.Report.Results {
+		dr, change := "-", "-"
+		if v, ok := design[x.ID]; ok {
+			dr, change = ratio(v), fmt.Sprintf("%+.3f", x.Ratio-v)
+			if math.Abs(x.Ratio-v) < 5e-4 {
+				change = "0.000"
+			}
+		}
+		mark := okFail(x.Pass, false)
+		if i == ab.Report.Governing {
+			mark += " <"
+		}
+		rows = append(rows, []string{x.ID, x.Clause, dr, ratio(x.Ratio), change, mark})
+	}
+	return rows
+}
+
+// WriteText writes the reverify report as aligned tables for a terminal.
+func (ab *AsBuilt) WriteText(w io.Writer) error {
+	d := ab.Design
+	p := people{d.Job.Units}
+	var b strings.Builder
+	fmt.Fprintf(&b, "%s — as-built re-verification, %s, %s, %s units\n", d.Job.Mark, d.Conn.Edition.Name, strings.ToUpper(d.Conn.Method.String()), d.Job.Units)
+	tw := tabwriter.NewWriter(&b, 0, 0, 2, ' ', 0)
+	for _, row := range append(d.Summary(), ab.preamble()...) {
+		fmt.Fprintf(tw, "  %s\t%s\n", row[0], row[1])
+	}
+	tw.Flush()
+	for _, n := range ab.Measured.Notes {
+		fmt.Fprintf(&b, "  file: %s\n", n)
+	}
+	b.WriteString("\n")
+	tw = tabwriter.NewWriter(&b, 0, 0, 2, ' ', 0)
+	fmt.Fprintln(tw, strings.Join(holeHeader, "\t")+"\tWHY")
+	for _, dv := range ab.Deviations {
+		fmt.Fprintln(tw, strings.Join(ab.holeRow(dv), "\t")+"\t"+strings.Join(dv.Why, "; "))
+	}
+	tw.Flush()
+	b.WriteString("\n")
+	tw = tabwriter.NewWriter(&b, 0, 0, 2, ' ', 0)
+	fmt.Fprintln(tw, "LIMIT STATE (AS BUILT)\tCLAUSE\tDESIGN RATIO\tAS-BUILT RATIO\tCHANGE\t")
+	for _, row := range ab.ratioRows() {
+		fmt.Fprintln(tw, strings.Join(row, "\t"))
+	}
+	tw.Flush()
+	b.WriteString("\n")
+	tw = tabwriter.NewWriter(&b, 0, 0, 2, ' ', 0)
+	fmt.Fprintf(tw, "DETAILING (AS BUILT)\tCLAUSE\tMEASURED\tLIMIT\t\tWHERE\n")
+	for _, f := range ab.Report.Findings {
+		fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\t%s\n", f.ID, f.Clause, p.value(f.Measured, f.Dim), p.value(f.Limit, f.Dim), okFail(f.Pass, f.Advisory), f.Where)
+	}
+	tw.Flush()
+	fmt.Fprintf(&b, "\nverdict: %s\n", strings.ToUpper(ab.Verdict.String()))
+	for _, r := range ab.Reasons {
+		fmt.Fprintf(&b, "  %s\n", r)
+	}
+	b.WriteString("\n")
+	for _, c := range ab.Report.Cautions {
+		fmt.Fprintf(&b, "note: %s\n", c)
+	}
+	_, err := io.WriteString(w, b.String())
+	return err
+}
+
+// WriteMarkdown writes the reverify report for the QA record.
+func (ab *AsBuilt) WriteMarkdown(w io.Writer) error {
+	d := ab.Design
+	p := people{d.Job.Units}
+	var b strings.Builder
+	fmt.Fprintf(&b, "# %s — as-built re-verification\n\n", d.Job.Mark)
+	fmt.Fprintf(&b, "%s, %s, %s units.\n\n", d.Conn.Edition.Name, strings.ToUpper(d.Conn.Method.String()), d.Job.Units)
+	for _, row := range append(d.Summary(), ab.preamble()...) {
+		fmt.Fprintf(&b, "- **%s**: %s\n", row[0], mdEscape(row[1]))
+	}
+	for _, n := range ab.Measured.Notes {
+		fmt.Fprintf(&b, "- file: %s\n", mdEscape(n))
+	}
+	fmt.Fprintf(&b, "\n**Verdict: %s**\n\n", strings.ToUpper(ab.Verdict.String()))
+	for _, r := range ab.Reasons {
+		fmt.Fprintf(&b, "- %s\n", mdEscape(r))
+	}
+	b.WriteString("\n## Holes\n\n| " + strings.ToLower(strings.Join(holeHeader, " | ")) + " | why |\n|" + strings.Repeat("---|", len(holeHeader)+1) + "\n")
+	for _, dv := range ab.Deviations {
+		row := ab.holeRow(dv)
+		for i := range row {
+			row[i] = mdEscape(row[i])
+		}
+		fmt.Fprintf(&b, "| %s | %s |\n", strings.Join(row, " | "), mdEscape(strings.Join(dv.Why, "; ")))
+	}
+	b.WriteString("\n## Limit states as built\n\n| id | clause | design ratio | as-built ratio | change | result |\n|---|---|---:|---:|---:|---|\n")
+	for _, row := range ab.ratioRows() {
+		fmt.Fprintf(&b, "| %s |\n", strings.Join(row, " | "))
+	}
+	b.WriteString("\n## Detailing as built\n\n| id | clause | measured | limit | result | where |\n|---|---|---:|---:|---|---|\n")
+	for _, f := range ab.Report.Findings {
+		fmt.Fprintf(&b, "| %s | %s | %s | %s | %s | %s |\n", f.ID, f.Clause, mdEscape(p.value(f.Measured, f.Dim)), mdEscape(p.value(f.Limit, f.Dim)), okFail(f.Pass, f.Advisory), mdEscape(f.Where))
+	}
+	b.WriteString("\n")
+	for _, c := range ab.Report.Cautions {
+		fmt.Fprintf(&b, "> %s\n>\n", c)
+	}
+	_, err := io.WriteString(w, strings.TrimSuffix(b.String(), ">\n"))
+	return err
+}

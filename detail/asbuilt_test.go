@@ -1,0 +1,489 @@
+package detail
+
+import (
+	"encoding/json"
+	"math"
+	"math/rand/v2"
+	"path/filepath"
+	"slices"
+	"strings"
+	"testing"
+
+	"gaugeline/detail/measured"
+	"gaugeline/rules"
+	"gaugeline/rules/units"
+)
+
+const measuredDir = "../testdata/measured"
+
+func buildJob(t *testing.T, path string) *Design {
+	t.Helper()
+	j, err := LoadJob(path)
+	if err != nil {
+		t.Fatal(err)
+	}
+	d, err := j.Build()
+	if err != nil {
+		t.Fatal(err)
+	}
+	return d
+}
+
+func reverifyFile(t *testing.T, job, file string, align AlignMode) *AsBuilt {
+	t.Helper()
+	d := buildJob(t, job)
+	set, err := LoadMeasured(file, d.Job, "")
+	if err != nil {
+		t.Fatal(err)
+	}
+	ab, err := Reverify(d, set, ReverifyOptions{Align: align})
+	if err != nil {
+		t.Fatal(err)
+	}
+	return ab
+}
+
+func statuses(ab *AsBuilt) []string {
+	var s []string
+	for _, dv := range ab.Deviations {
+		s = append(s, dv.ID+":"+dv.Status.String())
+	}
+	return s
+}
+
+// TestReverifyVerdicts runs the measured files written by
+// testdata/measured/make_fixtures.py (ezdxf) and the CSVs beside them.
+// The fabrication errors in them are inputs; each verdict follows from
+// the source named.
+func TestReverifyVerdicts(t *testing.T) {
+	us := filepath.Join(measuredDir, "hb-7-qa.yaml")
+	usFails := "../testdata/jobs/us-single-angle.yaml"
+	si := "../testdata/jobs/si-double-angle.yaml"
+	siSC := filepath.Join(measuredDir, "td-21-sc.yaml")
+	slotted := "../testdata/jobs/si-slotted.yaml"
+	tests := []struct {
+		name, job, file string
+		align           AlignMode
+		want            QAVerdict
+		status          []string
+		fails           []string // as-built checks that fail
+		src             string
+	}{
+		{"nominal csv, inches", us, "hb-7-qa-nominal.csv", AlignDatum, Accept, nil, nil,
+			"holes at the design centres and Table J3.3 sizes (AISC 360-22): nothing to report"},
+		{"nominal csv, mm header for an inch job", us, "hb-7-qa-mm.csv", AlignDatum, Accept, nil, nil,
+			"as above; 1 in = 25.4 mm (NIST SP 811), values rounded to 0.001 mm in the file"},
+		{"nominal R12, no $INSUNITS", us, "hb-7-qa-nominal-r12.dxf", AlignDatum, Accept, nil, nil, "as above"},
+		{"nominal R2000 in mm", us, "hb-7-qa-nominal-mm-r2000.dxf", AlignDatum, Accept, nil, nil, "as above"},
+		{"H2 0.1 in long: review", us, "hb-7-qa-shifted-r2018.dxf", AlignDatum, Review, []string{"H2:out-of-tolerance"}, nil,
+			"0.1 in > 1/16 in position tolerance (common practice, no source); every check still passes"},
+		{"H2 0.1 in long, csv", us, "hb-7-qa-shifted.csv", AlignDatum, Review, []string{"H2:out-of-tolerance"}, nil, "as above"},
+		{"end distance 0.9 in: reject", us, "hb-7-qa-end-short-r2000.dxf", AlignDatum, Reject, []string{"H1:out-of-tolerance"}, []string{"edge.min"},
+			"0.9 in < 1 in, AISC 360-22 Table J3.4 for a 3/4-in bolt"},
+		{"missing hole: reject", us, "hb-7-qa-missing-r12.dxf", AlignDatum, Reject, []string{"H3:missing"}, nil,
+			"SPEC §8: holes missing reject"},
+		{"enlarged in a bearing joint: reject", us, "hb-7-qa-enlarged-r2018.dxf", AlignDatum, Reject, []string{"H3:out-of-tolerance"}, []string{"hole.type"},
+			"0.900 in > 13/16 + 1/32 (common practice) is an oversized hole (15/16 in, Table J3.3); oversized holes are not permitted in bearing-type joints, AISC 360-22 J3.3"},
+		{"design that fails: reject", usFails, "hb-7-nominal-r2000.dxf", AlignDatum, Reject, nil, []string{"bolts.shear"},
+			"the job's own check fails bolts.shear (see gaugeline check)"},
+		{"SI nominal R2018, one hole mirrored", si, "td-21-nominal-r2018.dxf", AlignDatum, Accept, nil, nil, "holes at the design centres, Table J3.3M 22 mm"},
+		{"SI nominal R12 with bolt-head rings", si, "td-21-nominal-r12.dxf", AlignDatum, Accept, nil, nil, "as above"},
+		{"SI nominal csv without header", si, "td-21-nominal.csv", AlignDatum, Accept, nil, nil, "as above"},
+		{"SI enlarged, slip-critical: review", siSC, "td-21-sc-enlarged-r2000.dxf", AlignDatum, Review, []string{"H2:out-of-tolerance"}, nil,
+			"23.5 mm > 22 + 1 mm (common practice) is an oversized hole (24 mm, Table J3.3M), permitted in slip-critical joints (AISC 360-16 J3.2)"},
+		{"SI scanned, best fit", si, "td-21-scanned-r2018.dxf", AlignBestFit, Accept, nil, nil,
+			"the script rotated the part 2.5° and shifted it (123.4, −56.7) mm; a rigid fit takes that out"},
+		{"SI short slots as stadiums, R2018", slotted, "kb-40-slots-r2018.dxf", AlignDatum, Accept, nil, nil, "M20 short slot 22 × 26 mm, Table J3.3M"},
+		{"SI short slots as stadiums, R12", slotted, "kb-40-slots-r12.dxf", AlignDatum, Accept, nil, nil, "as above"},
+	}
+	for _, tt := range tests {
+		t.Run(tt.name, func(t *testing.T) {
+			ab := reverifyFile(t, tt.job, filepath.Join(measuredDir, tt.file), tt.align)
+			if ab.Verdict != tt.want {
+				t.Errorf("verdict %s, want %s (%s); reasons %q", ab.Verdict, tt.want, tt.src, ab.Reasons)
+			}
+			var odd []string
+			for _, s := range statuses(ab) {
+				if !strings.HasSuffix(s, ":ok") {
+					odd = append(odd, s)
+				}
+			}
+			if !slices.Equal(odd, tt.status) {
+				t.Errorf("holes not ok %q, want %q", odd, tt.status)
+			}
+			var fails []string
+			for _, x := range ab.Report.Results {
+				if !x.Pass {
+					fails = append(fails, x.ID)
+				}
+			}
+			for _, f := range ab.Report.Findings {
+				if !f.Pass && !f.Advisory {
+					fails = append(fails, f.ID)
+				}
+			}
+			for _, f := range tt.fails {
+				if !slices.Contains(fails, f) {
+					t.Errorf("%s does not fail as built (fails: %q)", f, fails)
+				}
+			}
+			if tt.fails == nil && ab.Verdict != Reject && len(fails) > 0 {
+				t.Errorf("fails as built: %q", fails)
+			}
+			if code := ab.Exit(); code != [...]int{0, 3, 1}[tt.want] {
+				t.Errorf("exit %d", code)
+			}
+		})
+	}
+}
+
+// synthetic returns measured holes at the design's centres with the
+// design's sizes, in mm.
+func synthetic(d *Design) *measured.Set {
+	s := &measured.Set{File: "synthetic", Format: "csv", Units: "mm"}
+	for i, h := range d.Conn.Holes {
+		w := float64(min(h.Dx, h.Dy))
+		s.Holes = append(s.Holes, measured.Hole{ID: h.ID, X: float64(h.X), Y: float64(h.Y), Width: w, Length: w, Line: i + 1})
+	}
+	return s
+}
+
+func TestReclassify(t *testing.T) {
+	in := float64(units.Inch)
+	tests := []struct {
+		name, job string
+		dia       float64 // mm, input
+		want      rules.HoleType
+		out       bool // out of tolerance
+		sizeOK    bool // hole.size passes as built
+		src       string
+	}{
+		{"13/16 in", "hb-7-qa.yaml", 13.0 / 16 * in, rules.Standard, false, true, "Table J3.3: 3/4-in bolt, standard 13/16"},
+		{"13/16 + 1/32 in: at the tolerance", "hb-7-qa.yaml", (13.0/16 + 1.0/32) * in, rules.Standard, false, true, "tolerance +1/32 in, common practice, no source"},
+		{"0.900 in: oversized", "hb-7-qa.yaml", 0.9 * in, rules.Oversized, true, true, "Table J3.3: oversized 15/16 ≥ 0.900"},
+		{"0.970 in: past oversized", "hb-7-qa.yaml", 0.97 * in, rules.Oversized, true, false, "Table J3.3: 15/16 + 1/32 = 0.96875 < 0.970"},
+		{"0.790 in: under size", "hb-7-qa.yaml", 0.79 * in, rules.Standard, true, true, "13/16 − 1/32 = 0.78125 > 0.790? no: 0.790 is within; see below"},
+		{"23 mm", "td-21-sc.yaml", 23, rules.Standard, false, true, "Table J3.3M: M20 standard 22 mm, +1 mm common practice"},
+		{"23.5 mm: oversized", "td-21-sc.yaml", 23.5, rules.Oversized, true, true, "Table J3.3M: M20 oversized 24 mm"},
+		{"25.5 mm: past oversized", "td-21-sc.yaml", 25.5, rules.Oversized, true, false, "Table J3.3M: 24 + 1 mm < 25.5"},
+	}
+	tests[4].out = false // 0.790 ≥ 13/16 − 1/32 = 0.78125: within the tolerance
+	tests[4].src = "13/16 − 1/32 = 0.78125 ≤ 0.790 (common practice tolerance, no source)"
+	for _, tt := range tests {
+		t.Run(tt.name, func(t *testing.T) {
+			d := buildJob(t, filepath.Join(measuredDir, tt.job))
+			set := synthetic(d)
+			set.Holes[1].Width, set.Holes[1].Length = tt.dia, tt.dia
+			ab, err := Reverify(d, set, ReverifyOptions{})
+			if err != nil {
+				t.Fatal(err)
+			}
+			dv := ab.Deviations[1]
+			if dv.AsBuilt.Type != tt.want || (dv.Status == HoleOutOfTolerance) != tt.out || dv.Reclassified != (tt.want != rules.Standard) {
+				t.Errorf("type %s, status %s, reclassified %v; want %s, out %v (%s)", dv.AsBuilt.Type, dv.Status, dv.Reclassified, tt.want, tt.out, tt.src)
+			}
+			sizeOK := true
+			for _, f := range ab.Report.Findings {
+				if f.ID == "hole.size" && !f.Pass {
+					sizeOK = false
+				}
+			}
+			if sizeOK != tt.sizeOK {
+				t.Errorf("hole.size passes %v, want %v (%s)", sizeOK, tt.sizeOK, tt.src)
+			}
+			// The as-built hole is never smaller than its type's nominal
+			// (an undersize hole is reamed to size) nor than measured.
+			hs, _ := d.Conn.Edition.Hole(d.Conn.Bolt.D, dv.AsBuilt.Type)
+			if want := units.Length(math.Max(tt.dia, float64(hs.Width))); math.Abs(float64(dv.AsBuilt.Dx-want)) > 1e-9 {
+				t.Errorf("as-built size %g mm, want %g", float64(dv.AsBuilt.Dx), float64(want))
+			}
+		})
+	}
+}
+
+// rotateSet moves a measured set by the rigid transform q = R(θ)·p + t.
+func rotateSet(s *measured.Set, theta, tx, ty float64) {
+	c, sn := math.Cos(theta), math.Sin(theta)
+	for i := range s.Holes {
+		h := &s.Holes[i]
+		h.X, h.Y = c*h.X-sn*h.Y+tx, sn*h.X+c*h.Y+ty
+	}
+	for i := range s.Contour {
+		p := &s.Contour[i]
+		p.X, p.Y = c*p.X-sn*p.Y+tx, sn*p.X+c*p.Y+ty
+	}
+}
+
+func TestBestFitRecoversRigidMotion(t *testing.T) {
+	// Inputs: the transform applied; the fit must return it within 1e-6
+	// (degrees and mm), as exact data admit an exact least-squares fit.
+	tests := []struct {
+		name    string
+		job     string
+		deg     float64
+		tx, ty  float64
+		contour bool
+		want    float64 // degrees recovered
+	}{
+		{"staggered flat, 7°", "../testdata/jobs/us-staggered-flat.yaml", 7, 40, -25, false, 7},
+		{"staggered flat, −31.5°", "../testdata/jobs/us-staggered-flat.yaml", -31.5, -1000, 2500, false, -31.5},
+		{"SI double angle, 2.5°", "../testdata/jobs/si-double-angle.yaml", 2.5, 123.4, -56.7, false, 2.5},
+		// One gage line is symmetric under a half turn: the contour says
+		// which way round the part lies.
+		{"single line turned round, contour", "measured/hb-7-qa.yaml", 183, 500, 80, true, -177},
+		{"single line turned round, no contour: the smaller turn", "measured/hb-7-qa.yaml", 183, 500, 80, false, 3},
+	}
+	for _, tt := range tests {
+		t.Run(tt.name, func(t *testing.T) {
+			d := buildJob(t, filepath.Join("..", "testdata", strings.TrimPrefix(tt.job, "../testdata/")))
+			set := synthetic(d)
+			if tt.contour {
+				w, l := float64(d.Conn.Member.Width), float64(lastX(d.Conn.Holes))+150
+				set.Contour = []measured.Point{{X: 0, Y: 0}, {X: l, Y: 0}, {X: l, Y: w}, {X: 0, Y: w}}
+			}
+			rotateSet(set, tt.deg*math.Pi/180, tt.tx, tt.ty)
+			ab, err := Reverify(d, set, ReverifyOptions{Align: AlignBestFit})
+			if err != nil {
+				t.Fatal(err)
+			}
+			a := ab.Alignment
+			if got := a.Rotation * 180 / math.Pi; math.Abs(got-tt.want) > 1e-6 {
+				t.Errorf("rotation %.9f°, want %g°", got, tt.want)
+			}
+			if tt.want == tt.deg && (math.Abs(float64(a.Shift[0])-tt.tx) > 1e-6 || math.Abs(float64(a.Shift[1])-tt.ty) > 1e-6) {
+				t.Errorf("shift (%g, %g), want (%g, %g)", float64(a.Shift[0]), float64(a.Shift[1]), tt.tx, tt.ty)
+			}
+			if tt.want == tt.deg || tt.contour {
+				for _, dv := range ab.Deviations {
+					if dv.Status != HoleOK {
+						t.Errorf("%s: %s %q", dv.ID, dv.Status, dv.Why)
+					}
+				}
+				if float64(a.RMS) > 1e-6 {
+					t.Errorf("rms %g mm", float64(a.RMS))
+				}
+			}
+		})
+	}
+}
+
+func TestBestFitWithMissingAndExtraHoles(t *testing.T) {
+	// Inputs: the staggered flat turned 30° and shifted (200, 100) mm,
+	// its first hole missing and a stray hole 300 mm away. The fit must
+	// still recover the motion within 1e-6 from the five holes left.
+	d := buildJob(t, "../testdata/jobs/us-staggered-flat.yaml")
+	set := synthetic(d)
+	set.Holes = append(set.Holes[1:], measured.Hole{ID: "S", X: 600, Y: -300, Width: 20, Length: 20})
+	rotateSet(set, 30*math.Pi/180, 200, 100)
+	ab, err := Reverify(d, set, ReverifyOptions{Align: AlignBestFit})
+	if err != nil {
+		t.Fatal(err)
+	}
+	a := ab.Alignment
+	if got := a.Rotation * 180 / math.Pi; math.Abs(got-30) > 1e-6 || math.Abs(float64(a.Shift[0])-200) > 1e-6 || math.Abs(float64(a.Shift[1])-100) > 1e-6 {
+		t.Errorf("rotation %.9f°, shift (%g, %g); want 30°, (200, 100)", got, float64(a.Shift[0]), float64(a.Shift[1]))
+	}
+	if got := statuses(ab); !slices.Equal(got, []string{"H1:missing", "H2:ok", "H3:ok", "H4:ok", "H5:ok", "H6:ok", "X1:extra"}) {
+		t.Errorf("statuses %q", got)
+	}
+}
+
+func TestAssignIsOptimalNotGreedy(t *testing.T) {
+	// Greedy nearest-first pairs d2–m1 (1.4) and leaves d1 and m2 4.5
+	// apart, past the gate of 2; the optimal assignment pairs d1–m1 (1.6)
+	// and d2–m2 (1.5). Inputs only; the answer is the definition.
+	des := []abVec{{0, 0}, {3, 0}}
+	mea := []abVec{{1.6, 0}, {4.5, 0}}
+	if got := assignHoles(des, mea, 2); !slices.Equal(got, []int{0, 1}) {
+		t.Errorf("assignment %v, want [0 1]", got)
+	}
+	// Past the gate a hole is extra and its design hole missing.
+	if got := assignHoles(des, []abVec{{0.1, 0}, {9, 9}}, 2); !slices.Equal(got, []int{0, -1}) {
+		t.Errorf("gated assignment %v, want [0 -1]", got)
+	}
+	// Against brute force over every injective partial matching.
+	rng := rand.New(rand.NewPCG(1, 2))
+	for trial := range 300 {
+		n, m := 1+rng.IntN(5), 1+rng.IntN(6)
+		des, mea := make([]abVec, n), make([]abVec, m)
+		for i := range des {
+			des[i] = abVec{rng.Float64() * 10, rng.Float64() * 10}
+		}
+		for i := range mea {
+			mea[i] = abVec{rng.Float64() * 10, rng.Float64() * 10}
+		}
+		gate := 1 + rng.Float64()*4
+		got := assignHoles(des, mea, gate)
+		if c, b := matchCost(des, mea, got, gate), bruteCost(des, mea, gate); math.Abs(c-b) > 1e-9 {
+			t.Fatalf("trial %d: cost %g, brute force %g (%v)", trial, c, b, got)
+		}
+	}
+}
+
+func matchCost(des, mea []abVec, match []int, gate float64) float64 {
+	var c float64
+	for i, k := range match {
+		if k < 0 {
+			c += gate * gate
+			continue
+		}
+		c += abSq(des[i].x-mea[k].x) + abSq(des[i].y-mea[k].y)
+	}
+	return c
+}
+
+func bruteCost(des, mea []abVec, gate float64) float64 {
+	best := math.Inf(1)
+	used := make([]bool, len(mea))
+	match := make([]int, len(des))
+	var rec func(i int)
+	rec = func(i int) {
+		if i == len(des) {
+			best = min(best, matchCost(des, mea, match, gate))
+			return
+		}
+		match[i] = -1
+		rec(i + 1)
+		for k := range mea {
+			if used[k] || math.Hypot(des[i].x-mea[k].x, des[i].y-mea[k].y) > gate {
+				continue
+			}
+			used[k], match[i] = true, k
+			rec(i + 1)
+			used[k] = false
+		}
+	}
+	rec(0)
+	return best
+}
+
+func TestReverifyExtraHoleAndLines(t *testing.T) {
+	d := buildJob(t, filepath.Join(measuredDir, "hb-7-qa.yaml"))
+	set := synthetic(d)
+	// Measured holes are never exactly on their line: 0.01 mm up and down.
+	for i := range set.Holes {
+		set.Holes[i].Y += 0.01 * float64(1-2*(i%2))
+	}
+	// An extra 13/16 hole 2 in along the line from H4, past the gate and
+	// past the plate's free edge (1-1/2 in beyond H4).
+	set.Holes = append(set.Holes, measured.Hole{ID: "E", X: float64(12.5 * units.Inch), Y: float64(2.5 * units.Inch), Width: 20.6375, Length: 20.6375})
+	ab, err := Reverify(d, set, ReverifyOptions{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if got := statuses(ab); !slices.Equal(got, []string{"H1:ok", "H2:ok", "H3:ok", "H4:ok", "X1:extra"}) {
+		t.Errorf("statuses %q", got)
+	}
+	// The holes keep one gage line: spacing.max is checked on it.
+	var lines []string
+	for _, f := range ab.Report.Findings {
+		if f.ID == "spacing.max" {
+			lines = append(lines, f.Where)
+		}
+	}
+	if len(lines) != 1 {
+		t.Errorf("spacing.max findings %q, want one gage line", lines)
+	}
+	// Shear lag sees one line of 5 (AISC 360-22 Table D3.1 case 8 needs 4
+	// or more per line): U8 = 0.80.
+	for _, x := range ab.Report.Results {
+		if x.ID != "member.rupture" {
+			continue
+		}
+		for _, v := range x.Values {
+			if v.Name == "U_case8" && v.V != 0.80 {
+				t.Errorf("U_case8 = %g, want 0.80 (Table D3.1 case 8)", v.V)
+			}
+		}
+	}
+	// 1/2 in to the plate's free edge < 1 in, AISC 360-22 Table J3.4.
+	if ab.Verdict != Reject || !strings.Contains(strings.Join(ab.Reasons, "|"), "fails as built: edge.min") {
+		t.Errorf("verdict %s, want reject on edge.min; reasons %q", ab.Verdict, ab.Reasons)
+	}
+}
+
+func TestReverifyJSONAndMarkdown(t *testing.T) {
+	ab := reverifyFile(t, filepath.Join(measuredDir, "hb-7-qa.yaml"), filepath.Join(measuredDir, "hb-7-qa-shifted.csv"), AlignDatum)
+	b, err := ab.JSON()
+	if err != nil {
+		t.Fatal(err)
+	}
+	var doc map[string]any
+	if err := json.Unmarshal(b, &doc); err != nil {
+		t.Fatal(err)
+	}
+	for _, k := range []string{"mark", "units", "unit_labels", "demand", "verdict", "governing", "limit_states", "detailing", "holes",
+		"cautions", "deviations", "design_ratios", "alignment", "tolerance"} {
+		if _, ok := doc[k]; !ok {
+			t.Errorf("JSON has no %q", k)
+		}
+	}
+	if doc["verdict"] != "review" {
+		t.Errorf("verdict %v", doc["verdict"])
+	}
+	devs := doc["deviations"].([]any)
+	h2 := devs[1].(map[string]any)
+	// 0.1 in is the fixture's input shift; values are in the job's inches.
+	if h2["id"] != "H2" || math.Abs(h2["dx"].(float64)-0.1) > 1e-9 || h2["status"] != "out-of-tolerance" {
+		t.Errorf("H2 deviation %v", h2)
+	}
+	dr := doc["design_ratios"].(map[string]any)
+	if _, ok := dr["member.rupture"]; !ok {
+		t.Errorf("design_ratios %v", dr)
+	}
+	var md strings.Builder
+	if err := ab.WriteMarkdown(&md); err != nil {
+		t.Fatal(err)
+	}
+	if !strings.Contains(md.String(), Caution) || !strings.Contains(md.String(), "**Verdict: REVIEW**") {
+		t.Errorf("markdown lacks the caution or the verdict:\n%s", md.String())
+	}
+	var txt strings.Builder
+	if err := ab.WriteText(&txt); err != nil {
+		t.Fatal(err)
+	}
+	if !strings.Contains(txt.String(), "verdict: REVIEW") || !strings.Contains(txt.String(), Caution) {
+		t.Errorf("text report:\n%s", txt.String())
+	}
+}
+
+// TestReverifyNeverPanics feeds random measured sets, near the design and
+// far from it, to every shipped job: reverify must always give a verdict.
+func TestReverifyNeverPanics(t *testing.T) {
+	jobs, _ := filepath.Glob("../testdata/jobs/*.yaml")
+	jobs = append(jobs, filepath.Join(measuredDir, "hb-7-qa.yaml"), filepath.Join(measuredDir, "td-21-sc.yaml"))
+	rng := rand.New(rand.NewPCG(3, 4))
+	for _, job := range jobs {
+		d := buildJob(t, job)
+		for trial := range 24 {
+			set := synthetic(d)
+			spread := []float64{0.5, 5, 50, 500}[trial%4]
+			for i := range set.Holes {
+				h := &set.Holes[i]
+				h.X += (rng.Float64()*2 - 1) * spread
+				h.Y += (rng.Float64()*2 - 1) * spread
+				h.Width *= 0.8 + rng.Float64()
+				h.Length = h.Width
+				if rng.IntN(5) == 0 {
+					h.Slot, h.Length, h.Axis = true, h.Width*1.5, rng.Float64()*math.Pi
+				}
+			}
+			if rng.IntN(3) == 0 && len(set.Holes) > 1 {
+				set.Holes = set.Holes[1:]
+			}
+			for _, align := range []AlignMode{AlignDatum, AlignBestFit} {
+				ab, err := Reverify(d, set, ReverifyOptions{Align: align})
+				if err != nil {
+					t.Fatalf("%s trial %d: %v", job, trial, err)
+				}
+				if _, err := ab.JSON(); err != nil {
+					t.Fatal(err)
+				}
+				var b strings.Builder
+				if err := ab.WriteText(&b); err != nil {
+					t.Fatal(err)
+				}
+			}
+		}
+	}
+}

@@ -1,0 +1,557 @@
+package measured
+
+import (
+	"bytes"
+	"fmt"
+	"io"
+	"math"
+	"strconv"
+	"strings"
+)
+
+// DXF reading: a small group-code reader that takes what reverify needs
+// and skips everything else. It reads ASCII DXF of any release from R12
+// on: the HEADER's $INSUNITS and, in the ENTITIES section only, CIRCLE,
+// ARC, LINE, LWPOLYLINE (bulges belong to the vertex they follow) and
+// POLYLINE/VERTEX/SEQEND. Block definitions, INSERTs, text, dimensions,
+// hatches and every other entity are skipped, as are entities in paper
+// space. Entities drawn with the extrusion (0, 0, −1) — mirrored by many
+// CAD programs — are mapped to world coordinates; other extrusions are
+// skipped with a note.
+
+// insUnits maps $INSUNITS codes that are lengths of a part to millimetres.
+var insUnits = map[int]Unit{
+	1: Inches, 2: {"ft", 304.8}, 4: Millimetres, 5: {"cm", 10}, 6: {"m", 1000},
+	8: {"µin", 25.4e-6}, 9: {"mil", 0.0254}, 10: {"yd", 914.4}, 13: {"µm", 1e-3}, 14: {"dm", 100},
+}
+
+// maxGroups caps the groups of one entity (an LWPOLYLINE of 100,000
+// vertices has about 300,000).
+const maxGroups = 1 << 20
+
+// wanted are the entities whose groups are kept; others are skipped.
+var wanted = map[string]bool{"CIRCLE": true, "ARC": true, "LINE": true, "LWPOLYLINE": true, "POLYLINE": true, "VERTEX": true, "SEQEND": true}
+
+// pair is one group: a code and its value, with the line of the code.
+type pair struct {
+	code int
+	val  string
+	line int
+}
+
+// dxfScanner yields the groups of an ASCII DXF.
+type dxfScanner struct {
+	file string
+	data []byte
+	pos  int
+	line int
+}
+
+func (s *dxfScanner) readLine() (string, bool) {
+	if s.pos >= len(s.data) {
+		return "", false
+	}
+	rest := s.data[s.pos:]
+	i := bytes.IndexByte(rest, '\n')
+	var l []byte
+	if i < 0 {
+		l, s.pos = rest, len(s.data)
+	} else {
+		l, s.pos = rest[:i], s.pos+i+1
+	}
+	s.line++
+	return strings.TrimSpace(string(bytes.TrimSuffix(l, []byte{'\r'}))), true
+}
+
+// next returns the next group; ok is false at the end of the data.
+func (s *dxfScanner) next() (p pair, ok bool, err error) {
+	c, ok := s.readLine()
+	for ok && c == "" && s.line <= 1 {
+		c, ok = s.readLine() // tolerate a leading blank line
+	}
+	if !ok {
+		return p, false, nil
+	}
+	p.line = s.line
+	code, cerr := strconv.Atoi(c)
+	if cerr != nil || code < 0 || code > 1071 {
+		return p, false, &Error{File: s.file, Line: s.line, Msg: fmt.Sprintf("group code %q is not a DXF group code", clip(c)),
+			Hint: "is this an ASCII DXF file?"}
+	}
+	p.code = code
+	v, ok := s.readLine()
+	if !ok {
+		return p, false, &Error{File: s.file, Line: p.line, Field: fmt.Sprintf("group %d", code), Msg: "the file ends before the group's value"}
+	}
+	p.val = v
+	return p, true, nil
+}
+
+func clip(s string) string {
+	if len(s) > 40 {
+		return s[:40] + "…"
+	}
+	return s
+}
+
+// entity is one entity's groups.
+type entity struct {
+	kind  string
+	line  int
+	pairs []pair
+}
+
+// drawing is what the reader keeps of a DXF, in the file's units.
+type drawing struct {
+	insUnits    int // -1: not given
+	measurement int // -1: not given
+	circles     []circle
+	loops       [][]seg // closed polylines
+	segs        []seg   // LINEs and ARCs, for chaining into loops
+	segLayers   []string
+	loopLayers  []string
+	skipped     map[string]int
+	oddExtruded int
+}
+
+type circle struct {
+	c     Point
+	r     float64
+	layer string
+	line  int
+}
+
+// seg is a straight or arc segment from a to b: bulge is tan(θ/4), θ the
+// included angle, positive counter-clockwise (0: straight).
+type seg struct {
+	a, b  Point
+	bulge float64
+	line  int
+}
+
+// ReadDXF reads the holes of a part from an ASCII DXF. layer, when not
+// empty, takes every circle on that layer (case-insensitive, as DXF layer
+// names are); otherwise every circle inside the largest closed contour is a
+// hole, or every circle when there is no closed contour. Closed loops
+// (polylines, or lines and arcs end to end) inside the contour (or on the
+// layer) are holes too when they are shaped as one: a stadium is a slotted
+// hole; two half circles, or a polygon of eight or more sides with its
+// corners on a circle, a round hole. Lengths are converted to millimetres
+// by $INSUNITS; without it the file is read in def, the job's unit.
+func ReadDXF(r io.Reader, file string, def Unit, layer string) (*Set, error) {
+	data, err := readCapped(r, file)
+	if err != nil {
+		return nil, err
+	}
+	if bytes.HasPrefix(data, []byte("AutoCAD Binary DXF")) {
+		return nil, &Error{File: file, Line: 1, Msg: "binary DXF is not supported", Hint: "save the drawing as ASCII DXF"}
+	}
+	d, err := parseDXF(file, data)
+	if err != nil {
+		return nil, err
+	}
+	return d.holes(file, def, layer)
+}
+
+// parseDXF reads the groups reverify needs.
+func parseDXF(file string, data []byte) (*drawing, error) {
+	s := &dxfScanner{file: file, data: data}
+	d := &drawing{insUnits: -1, measurement: -1, skipped: map[string]int{}}
+	section := ""
+	var cur *entity
+	var poly *entity // an open R12 POLYLINE collecting VERTEX entities
+	var verts []entity
+	count := 0
+	sawSection := false
+	headerVar := ""
+	flush := func() error {
+		if cur == nil {
+			return nil
+		}
+		e := cur
+		cur = nil
+		switch e.kind {
+		case "POLYLINE":
+			poly, verts = e, nil
+			return nil
+		case "VERTEX":
+			if poly != nil {
+				verts = append(verts, *e)
+			}
+			return nil
+		case "SEQEND":
+			if poly != nil {
+				err := d.addPolyline(file, poly, verts)
+				poly, verts = nil, nil
+				return err
+			}
+			return nil
+		}
+		if poly != nil { // a POLYLINE without its SEQEND
+			if err := d.addPolyline(file, poly, verts); err != nil {
+				return err
+			}
+			poly, verts = nil, nil
+		}
+		return d.addEntity(file, e)
+	}
+scan:
+	for {
+		p, ok, err := s.next()
+		if err != nil {
+			return nil, err
+		}
+		if !ok {
+			break
+		}
+		if p.code == 0 {
+			if err := flush(); err != nil {
+				return nil, err
+			}
+			switch p.val {
+			case "SECTION":
+				sawSection = true
+				n, ok, err := s.next()
+				if err != nil {
+					return nil, err
+				}
+				if !ok || n.code != 2 {
+					return nil, &Error{File: file, Line: p.line, Msg: "SECTION without its name (group 2)"}
+				}
+				section = strings.ToUpper(n.val)
+				continue
+			case "ENDSEC":
+				section = ""
+				if poly != nil {
+					if err := d.addPolyline(file, poly, verts); err != nil {
+						return nil, err
+					}
+					poly, verts = nil, nil
+				}
+				continue
+			case "EOF":
+				break scan
+			}
+			if section == "ENTITIES" {
+				count++
+				if count > MaxEntities {
+					return nil, &Error{File: file, Line: p.line, Msg: fmt.Sprintf("more than %d entities", MaxEntities),
+						Hint: "export only the part: its contour and holes"}
+				}
+				cur = &entity{kind: strings.ToUpper(p.val), line: p.line}
+			}
+			continue
+		}
+		switch section {
+		case "HEADER":
+			if p.code == 9 {
+				headerVar = strings.ToUpper(p.val)
+				continue
+			}
+			if p.code == 70 && (headerVar == "$INSUNITS" || headerVar == "$MEASUREMENT") {
+				v, err := strconv.Atoi(p.val)
+				if err != nil {
+					return nil, &Error{File: file, Line: p.line, Field: headerVar, Msg: fmt.Sprintf("%q is not an integer", clip(p.val))}
+				}
+				if headerVar == "$INSUNITS" {
+					d.insUnits = v
+				} else {
+					d.measurement = v
+				}
+			}
+		case "ENTITIES":
+			if cur != nil && wanted[cur.kind] {
+				if len(cur.pairs) >= maxGroups {
+					return nil, &Error{File: file, Line: cur.line, Field: cur.kind, Msg: fmt.Sprintf("more than %d groups in one entity", maxGroups)}
+				}
+				cur.pairs = append(cur.pairs, p)
+			}
+			if cur != nil && cur.kind == "LWPOLYLINE" && p.code == 10 {
+				count++ // vertices count toward the cap
+				if count > MaxEntities {
+					return nil, &Error{File: file, Line: p.line, Msg: fmt.Sprintf("more than %d entities and vertices", MaxEntities)}
+				}
+			}
+		}
+	}
+	if err := flush(); err != nil {
+		return nil, err
+	}
+	if poly != nil {
+		if err := d.addPolyline(file, poly, verts); err != nil {
+			return nil, err
+		}
+	}
+	if !sawSection {
+		return nil, &Error{File: file, Msg: "no DXF sections", Hint: "is this an ASCII DXF file?"}
+	}
+	return d, nil
+}
+
+// common holds the groups every entity shares.
+type common struct {
+	layer      string
+	mirror     bool // extrusion (0, 0, −1): OCS x is −WCS x
+	oddExtrude bool
+	paper      bool
+}
+
+func commonOf(e *entity) common {
+	c := common{layer: "0"}
+	var n [3]float64
+	n[2] = 1
+	for _, p := range e.pairs {
+		switch p.code {
+		case 8:
+			c.layer = p.val
+		case 67:
+			c.paper = strings.TrimSpace(p.val) == "1"
+		case 210, 220, 230:
+			if v, err := strconv.ParseFloat(p.val, 64); err == nil && finite(v) {
+				n[(p.code-210)/10] = v
+			}
+		}
+	}
+	const e6 = 1e-9
+	switch {
+	case math.Abs(n[0]) < e6 && math.Abs(n[1]) < e6 && n[2] > 0:
+	case math.Abs(n[0]) < e6 && math.Abs(n[1]) < e6 && n[2] < 0:
+		c.mirror = true
+	default:
+		c.oddExtrude = true
+	}
+	return c
+}
+
+// num reads a float group value of entity e.
+func num(file string, p pair) (float64, error) {
+	v, err := strconv.ParseFloat(p.val, 64)
+	if err != nil || !finite(v) || math.Abs(v) > 1e12 {
+		return 0, &Error{File: file, Line: p.line, Field: fmt.Sprintf("group %d", p.code), Msg: fmt.Sprintf("%q is not a number", clip(p.val))}
+	}
+	return v, nil
+}
+
+// fields reads the float groups named in codes (first occurrence each).
+func fields(file string, e *entity, codes ...int) (map[int]float64, error) {
+	out := map[int]float64{}
+	for _, p := range e.pairs {
+		for _, c := range codes {
+			if p.code == c {
+				if _, seen := out[c]; seen {
+					break
+				}
+				v, err := num(file, p)
+				if err != nil {
+					return nil, err
+				}
+				out[c] = v
+			}
+		}
+	}
+	return out, nil
+}
+
+func missing(file string, e *entity, code int) error {
+	return &Error{File: file, Line: e.line, Field: fmt.Sprintf("%s group %d", e.kind, code), Msg: "is missing"}
+}
+
+func (d *drawing) skip(kind string) { d.skipped[kind]++ }
+
+func (d *drawing) addEntity(file string, e *entity) error {
+	switch e.kind {
+	case "CIRCLE", "ARC", "LINE", "LWPOLYLINE":
+	default:
+		d.skip(e.kind)
+		return nil
+	}
+	c := commonOf(e)
+	if c.paper {
+		d.skip(e.kind + " (paper space)")
+		return nil
+	}
+	if c.oddExtrude && e.kind != "LINE" {
+		d.oddExtruded++
+		return nil
+	}
+	mir := func(p Point) Point {
+		if c.mirror && e.kind != "LINE" {
+			p.X = -p.X
+		}
+		return p
+	}
+	switch e.kind {
+	case "CIRCLE", "ARC":
+		f, err := fields(file, e, 10, 20, 40, 50, 51)
+		if err != nil {
+			return err
+		}
+		for _, k := range []int{10, 20, 40} {
+			if _, ok := f[k]; !ok {
+				return missing(file, e, k)
+			}
+		}
+		if !(f[40] > 0) {
+			return &Error{File: file, Line: e.line, Field: e.kind + " group 40", Msg: "radius is not positive"}
+		}
+		ctr := Point{f[10], f[20]}
+		if e.kind == "CIRCLE" {
+			d.circles = append(d.circles, circle{mir(ctr), f[40], c.layer, e.line})
+			return nil
+		}
+		a0, a1 := f[50]*math.Pi/180, f[51]*math.Pi/180
+		sweep := math.Mod(a1-a0, 2*math.Pi)
+		if sweep <= 0 {
+			sweep += 2 * math.Pi
+		}
+		s := seg{
+			a:     mir(Point{ctr.X + f[40]*math.Cos(a0), ctr.Y + f[40]*math.Sin(a0)}),
+			b:     mir(Point{ctr.X + f[40]*math.Cos(a0+sweep), ctr.Y + f[40]*math.Sin(a0+sweep)}),
+			bulge: math.Tan(sweep / 4), line: e.line,
+		}
+		if c.mirror {
+			s.bulge = -s.bulge
+		}
+		if sweep >= 2*math.Pi-1e-12 {
+			// a full-circle arc is a circle
+			d.circles = append(d.circles, circle{mir(ctr), f[40], c.layer, e.line})
+			return nil
+		}
+		d.segs = append(d.segs, s)
+		d.segLayers = append(d.segLayers, c.layer)
+	case "LINE":
+		f, err := fields(file, e, 10, 20, 11, 21)
+		if err != nil {
+			return err
+		}
+		for _, k := range []int{10, 20, 11, 21} {
+			if _, ok := f[k]; !ok {
+				return missing(file, e, k)
+			}
+		}
+		d.segs = append(d.segs, seg{a: Point{f[10], f[20]}, b: Point{f[11], f[21]}, line: e.line})
+		d.segLayers = append(d.segLayers, c.layer)
+	case "LWPOLYLINE":
+		type vtx struct {
+			p     Point
+			bulge float64
+			hasY  bool
+		}
+		var vs []vtx
+		flags := 0
+		for _, p := range e.pairs {
+			switch p.code {
+			case 70:
+				v, err := strconv.Atoi(p.val)
+				if err != nil {
+					return &Error{File: file, Line: p.line, Field: "LWPOLYLINE group 70", Msg: fmt.Sprintf("%q is not an integer", clip(p.val))}
+				}
+				flags = v
+			case 10, 20, 42:
+				v, err := num(file, p)
+				if err != nil {
+					return err
+				}
+				switch p.code {
+				case 10:
+					vs = append(vs, vtx{p: Point{X: v}})
+				case 20:
+					if len(vs) == 0 || vs[len(vs)-1].hasY {
+						return &Error{File: file, Line: p.line, Field: "LWPOLYLINE group 20", Msg: "y without its x (group 10)"}
+					}
+					vs[len(vs)-1].p.Y, vs[len(vs)-1].hasY = v, true
+				case 42:
+					// the bulge belongs to the vertex it follows: the
+					// segment from that vertex to the next
+					if len(vs) > 0 {
+						vs[len(vs)-1].bulge = v
+					}
+				}
+			}
+		}
+		pts := make([]Point, len(vs))
+		bul := make([]float64, len(vs))
+		for i, v := range vs {
+			if !v.hasY {
+				return &Error{File: file, Line: e.line, Field: "LWPOLYLINE group 20", Msg: fmt.Sprintf("vertex %d has no y", i+1)}
+			}
+			pts[i], bul[i] = mir(v.p), v.bulge
+			if c.mirror {
+				bul[i] = -bul[i]
+			}
+		}
+		d.addVertices(pts, bul, flags&1 == 1, c.layer, e.line)
+	}
+	return nil
+}
+
+// addPolyline turns an R12 POLYLINE and its VERTEX entities into a loop
+// (closed) or segments (open).
+func (d *drawing) addPolyline(file string, pl *entity, verts []entity) error {
+	c := commonOf(pl)
+	flags := 0
+	for _, p := range pl.pairs {
+		if p.code == 70 {
+			v, err := strconv.Atoi(p.val)
+			if err != nil {
+				return &Error{File: file, Line: p.line, Field: "POLYLINE group 70", Msg: fmt.Sprintf("%q is not an integer", clip(p.val))}
+			}
+			flags = v
+		}
+	}
+	if c.paper || flags&(8|16|64) != 0 || c.oddExtrude {
+		d.skip("POLYLINE (3D, mesh or paper space)")
+		return nil
+	}
+	var pts []Point
+	var bul []float64
+	for i := range verts {
+		v := &verts[i]
+		f, err := fields(file, v, 10, 20, 42, 70)
+		if err != nil {
+			return err
+		}
+		if int(f[70])&(16|128) != 0 {
+			continue // spline frame or face record
+		}
+		if _, ok := f[10]; !ok {
+			return missing(file, v, 10)
+		}
+		if _, ok := f[20]; !ok {
+			return missing(file, v, 20)
+		}
+		p, b := Point{f[10], f[20]}, f[42]
+		if c.mirror {
+			p.X, b = -p.X, -b
+		}
+		pts, bul = append(pts, p), append(bul, b)
+	}
+	d.addVertices(pts, bul, flags&1 == 1, c.layer, pl.line)
+	return nil
+}
+
+func (d *drawing) addVertices(pts []Point, bul []float64, closed bool, layer string, line int) {
+	n := len(pts)
+	if n < 2 {
+		return
+	}
+	var loop []seg
+	for i := 0; i+1 < n; i++ {
+		loop = append(loop, seg{pts[i], pts[i+1], bul[i], line})
+	}
+	// A polyline whose last vertex repeats the first is closed too.
+	if closed || dist(pts[0], pts[n-1]) < 1e-9*(1+math.Abs(pts[0].X)+math.Abs(pts[0].Y)) {
+		if dist(pts[0], pts[n-1]) > 0 {
+			loop = append(loop, seg{pts[n-1], pts[0], bul[n-1], line})
+		}
+		d.loops = append(d.loops, loop)
+		d.loopLayers = append(d.loopLayers, layer)
+		return
+	}
+	for _, s := range loop {
+		d.segs = append(d.segs, s)
+		d.segLayers = append(d.segLayers, layer)
+	}
+}
+
+func dist(a, b Point) float64 { return math.Hypot(a.X-b.X, a.Y-b.Y) }
