@@ -1,0 +1,87 @@
+package main
+
+import (
+	"context"
+	"errors"
+	"fmt"
+	"io"
+	"path/filepath"
+	"slices"
+	"strings"
+
+	"github.com/spf13/cobra"
+
+	"gaugeline/detail"
+	"gaugeline/detail/calc"
+	"gaugeline/dxfout"
+)
+
+type reportOptions struct {
+	out string
+}
+
+func newReportCmd(o *rootOptions) *cobra.Command {
+	var ro reportOptions
+	cmd := &cobra.Command{
+		Use:   "report JOB.yaml -o FILE.html",
+		Short: "Write the calculation report of a job as one self-contained HTML page",
+		Long: "report checks the job and writes its calculation report to FILE.html: the connection, a drawing\n" +
+			"of the layout from the cut-sheet model, every limit state with its formula, the values put into it,\n" +
+			"the result and the clause, the detailing findings, the verdict and the caution. The page needs no\n" +
+			"network. A failing connection gets its report too, then exits 1; bad input exits 2 and writes nothing.",
+		Args: argsExactly(1, "one job file"),
+		RunE: func(cmd *cobra.Command, args []string) error {
+			return runReport(cmd.Context(), o, ro, args[0], o.stdout)
+		},
+	}
+	cmd.Flags().StringVarP(&ro.out, "output", "o", "", "the HTML file to write (its directory is created if missing)")
+	return cmd
+}
+
+func runReport(_ context.Context, o *rootOptions, ro reportOptions, path string, out io.Writer) error {
+	if ro.out == "" {
+		return usageError{errors.New("-o FILE.html is required")}
+	}
+	job, err := detail.LoadJob(path)
+	if err != nil {
+		return err
+	}
+	d, err := job.Build()
+	if err != nil {
+		return err
+	}
+	r, err := detail.Check(d)
+	if err != nil {
+		return &detail.InputError{File: path, Msg: err.Error()}
+	}
+	page, err := calc.HTML(r)
+	if err != nil {
+		return err
+	}
+	if err := writeAll(filepath.Dir(ro.out), []dxfout.File{{Name: filepath.Base(ro.out), Data: page}}); err != nil {
+		return err
+	}
+	fmt.Fprintln(out, ro.out)
+	if !r.Pass {
+		fmt.Fprintf(o.stderr, "gaugeline: note: %s fails %s; the report shows why\n", job.Mark, strings.Join(failingIDs(r), ", "))
+		return exitError{exitFail}
+	}
+	return nil
+}
+
+// failingIDs names every limit state and non-advisory detailing rule that
+// fails, each once, in the report's order.
+func failingIDs(r *detail.Report) []string {
+	var ids []string
+	for _, x := range r.Results {
+		if !x.Pass {
+			ids = append(ids, x.ID)
+		}
+	}
+	for _, f := range r.Findings {
+		if !f.Pass && !f.Advisory && !slices.Contains(ids, f.ID) {
+			ids = append(ids, f.ID)
+		}
+	}
+	return ids
+}

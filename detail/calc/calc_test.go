@@ -1,0 +1,519 @@
+package calc
+
+import (
+	"bytes"
+	"math"
+	"path/filepath"
+	"regexp"
+	"strconv"
+	"strings"
+	"testing"
+
+	"golang.org/x/net/html"
+
+	"gaugeline/detail"
+	"gaugeline/engine"
+	"gaugeline/rules"
+	"gaugeline/rules/units"
+)
+
+// jobs are every shape in both unit systems, with and without a plate,
+// passing and failing: the testdata jobs, the published example and the
+// demo's job.
+func jobs(t *testing.T) []string {
+	t.Helper()
+	var out []string
+	for _, pat := range []string{"../../testdata/jobs/*.yaml", "../../testdata/examples/*.yaml", "../../cmd/gaugeline/demo/*.yaml"} {
+		m, err := filepath.Glob(pat)
+		if err != nil {
+			t.Fatal(err)
+		}
+		out = append(out, m...)
+	}
+	if len(out) < 5 {
+		t.Fatalf("found only %d jobs", len(out))
+	}
+	for _, name := range []string{"long-splice-asd.yaml", "si-flat-alone.yaml"} {
+		out = append(out, "inline:"+name)
+	}
+	return out
+}
+
+// inline are invented jobs for what the test data lacks: US ASD under
+// 360-16, a double angle into a splice plate (the 0.85·Ag cap applies),
+// slip-critical with oversized holes and a pattern long enough for the
+// long-joint reduction, failing an edge distance only; an SI flat bar
+// with no plate.
+var inline = map[string]string{
+	"long-splice-asd.yaml": `mark: LONG-1
+units: us
+standard: aisc360-16
+method: asd
+load:
+  required: 150 kip
+member:
+  shape: double-angle
+  size: L6x4x1/2
+  grade: A36
+plate:
+  kind: splice
+  thickness: 3/4 in
+  grade: A36
+  width: 20 in
+  edge: 2 in
+bolts:
+  diameter: 7/8 in
+  grade: A325
+  threads: excluded
+  joint: slip-critical
+  surface: A
+  hole: oversized
+  lines: 2
+  per_line: 12
+  pitch: 3-1/2 in
+  end: 2 in
+  gage: 2-1/2 in
+  gage2: 2-1/2 in
+`,
+	"si-flat-alone.yaml": `mark: SF-2
+units: si
+standard: aisc360-22
+method: lrfd
+load:
+  required: 400 kN
+member:
+  shape: flat
+  width: 150 mm
+  thickness: 12 mm
+  grade: A572-50
+bolts:
+  diameter: M20
+  grade: A325M
+  lines: 2
+  per_line: 3
+  pitch: 70 mm
+  end: 40 mm
+  gage: 40 mm
+  gage2: 70 mm
+`,
+}
+
+func check(t *testing.T, path string) *detail.Report {
+	t.Helper()
+	var j *detail.Job
+	var err error
+	if name, ok := strings.CutPrefix(path, "inline:"); ok {
+		j, err = detail.ParseJob(name, []byte(inline[name]))
+	} else {
+		j, err = detail.LoadJob(path)
+	}
+	if err != nil {
+		t.Fatal(err)
+	}
+	d, err := j.Build()
+	if err != nil {
+		t.Fatal(err)
+	}
+	r, err := detail.Check(d)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return r
+}
+
+func render(t *testing.T, r *detail.Report) (*html.Node, []byte) {
+	t.Helper()
+	b, err := HTML(r)
+	if err != nil {
+		t.Fatal(err)
+	}
+	doc, err := html.Parse(bytes.NewReader(b))
+	if err != nil {
+		t.Fatalf("the report does not parse as HTML: %v", err)
+	}
+	return doc, b
+}
+
+func attr(n *html.Node, key string) (string, bool) {
+	for _, a := range n.Attr {
+		if a.Key == key {
+			return a.Val, true
+		}
+	}
+	return "", false
+}
+
+// find returns every element for which keep is true, in document order.
+func find(n *html.Node, keep func(*html.Node) bool) []*html.Node {
+	var out []*html.Node
+	var walk func(*html.Node)
+	walk = func(n *html.Node) {
+		if n.Type == html.ElementNode && keep(n) {
+			out = append(out, n)
+		}
+		for c := n.FirstChild; c != nil; c = c.NextSibling {
+			walk(c)
+		}
+	}
+	walk(n)
+	return out
+}
+
+func text(n *html.Node) string {
+	var b strings.Builder
+	var walk func(*html.Node)
+	walk = func(n *html.Node) {
+		if n.Type == html.TextNode {
+			b.WriteString(n.Data)
+		}
+		for c := n.FirstChild; c != nil; c = c.NextSibling {
+			walk(c)
+		}
+	}
+	walk(n)
+	return b.String()
+}
+
+func byID(doc *html.Node, id string) *html.Node {
+	ns := find(doc, func(n *html.Node) bool { v, _ := attr(n, "id"); return v == id })
+	if len(ns) != 1 {
+		return nil
+	}
+	return ns[0]
+}
+
+// Every limit state of the check has its own section, which names its id
+// and clause and shows its formula, steps and result; the governing one is
+// marked; the caution is on the page, prominently and in the footer.
+func TestReportHasEveryLimitState(t *testing.T) {
+	for _, path := range jobs(t) {
+		t.Run(filepath.Base(path), func(t *testing.T) {
+			r := check(t, path)
+			doc, _ := render(t, r)
+			all := text(doc)
+			sections := find(doc, func(n *html.Node) bool { _, ok := attr(n, "data-id"); return n.Data == "section" && ok })
+			if len(sections) != len(r.Results) {
+				t.Fatalf("%d limit-state sections, want %d", len(sections), len(r.Results))
+			}
+			for i, x := range r.Results {
+				s := sections[i]
+				id, _ := attr(s, "data-id")
+				clause, _ := attr(s, "data-clause")
+				if id != x.ID || clause != x.Clause {
+					t.Errorf("section %d is %s (%s), want %s (%s)", i, id, clause, x.ID, x.Clause)
+				}
+				st := text(s)
+				for _, want := range []string{x.ID, x.Clause, "Formula", "Rn"} {
+					if !strings.Contains(st, want) {
+						t.Errorf("%s: section does not say %q", x.ID, want)
+					}
+				}
+				class, _ := attr(s, "class")
+				if gov := strings.Contains(class, "governs"); gov != (i == r.Governing) {
+					t.Errorf("%s: class %q, governing is %d", x.ID, class, r.Governing)
+				}
+				if x.PerBolt != nil {
+					tb := find(s, func(n *html.Node) bool { c, _ := attr(n, "class"); return n.Data == "table" && c == "perbolt" })
+					if len(tb) != 1 || !strings.Contains(text(tb[0]), x.PerBolt[0].Hole) {
+						t.Errorf("%s: no per-bolt table", x.ID)
+					}
+				}
+			}
+			for _, f := range r.Findings {
+				if !strings.Contains(all, f.ID) || !strings.Contains(all, f.Clause) {
+					t.Errorf("finding %s (%s) is not on the page", f.ID, f.Clause)
+				}
+			}
+			c := byID(doc, "caution")
+			if c == nil || !strings.Contains(text(c), detail.Caution) {
+				t.Error("the caution is not in its box")
+			}
+			v := byID(doc, "verdict")
+			if v == nil || (text(v) == "PASSES") != r.Pass {
+				t.Errorf("verdict box %q, pass %v", text(v), r.Pass)
+			}
+			g := r.GoverningResult()
+			if !strings.Contains(all, "Governing limit state: "+g.ID+" ("+g.Clause+")") {
+				t.Error("the governing limit state is not stated")
+			}
+		})
+	}
+}
+
+var translate = regexp.MustCompile(`^translate\(([-0-9.e]+) ([-0-9.e]+)\)$`)
+
+func num(t *testing.T, n *html.Node, key string) float64 {
+	t.Helper()
+	s, ok := attr(n, key)
+	if !ok {
+		t.Fatalf("<%s> has no %s", n.Data, key)
+	}
+	v, err := strconv.ParseFloat(s, 64)
+	if err != nil {
+		t.Fatalf("%s=%q: %v", key, s, err)
+	}
+	return v
+}
+
+// The drawing's holes are where the job puts them: in the member view at
+// the job's (x, y), in the plate view at (free edge − x, YMax − y) (the
+// plate frame of the sheet model), both in the job's units. Circles are
+// mapped back through the view's translate and the y flip; every hole also
+// carries its position as data. Tolerance 1e-6 of a drawing unit: the SVG
+// writes coordinates rounded to 1e-7.
+func TestDrawingHolesMatchTheJob(t *testing.T) {
+	const tol = 1e-6
+	for _, path := range jobs(t) {
+		t.Run(filepath.Base(path), func(t *testing.T) {
+			r := check(t, path)
+			doc, _ := render(t, r)
+			c := &r.Design.Conn
+			sys := r.Design.Job.Units
+			job := func(l units.Length) float64 { return sys.ToJob(float64(l), units.DimLength) }
+			want := map[string]map[string][2]float64{"member": {}}
+			for _, h := range c.Holes {
+				want["member"][h.ID] = [2]float64{job(h.X), job(h.Y)}
+			}
+			if pl := c.Plate; pl != nil {
+				want["plate"] = map[string][2]float64{}
+				for _, h := range c.Holes {
+					want["plate"][h.ID] = [2]float64{job(pl.FreeEdge) - job(h.X), job(pl.YMax()) - job(h.Y)}
+				}
+			}
+			svgs := find(doc, func(n *html.Node) bool { return n.Data == "svg" })
+			if len(svgs) != 1 {
+				t.Fatalf("%d svg elements, want 1", len(svgs))
+			}
+			vb, _ := attr(svgs[0], "viewBox")
+			box := strings.Fields(vb)
+			if len(box) != 4 || box[0] != "0" || box[1] != "0" {
+				t.Fatalf("viewBox %q", vb)
+			}
+			vw, _ := strconv.ParseFloat(box[2], 64)
+			vh, _ := strconv.ParseFloat(box[3], 64)
+			views := find(svgs[0], func(n *html.Node) bool { c, _ := attr(n, "class"); return n.Data == "g" && c == "view" })
+			if len(views) != len(want) {
+				t.Fatalf("%d views, want %d", len(views), len(want))
+			}
+			for _, v := range views {
+				part, _ := attr(v, "data-part")
+				tr, _ := attr(v, "transform")
+				m := translate.FindStringSubmatch(tr)
+				if m == nil {
+					t.Fatalf("view %s: transform %q", part, tr)
+				}
+				tx, _ := strconv.ParseFloat(m[1], 64)
+				ty, _ := strconv.ParseFloat(m[2], 64)
+				holes := find(v, func(n *html.Node) bool { _, ok := attr(n, "data-hole"); return ok })
+				if len(holes) != len(c.Holes) {
+					t.Fatalf("view %s: %d holes drawn, want %d", part, len(holes), len(c.Holes))
+				}
+				circles := 0
+				for _, h := range holes {
+					id, _ := attr(h, "data-hole")
+					w, ok := want[part][id]
+					if !ok {
+						t.Fatalf("view %s: unexpected hole %s", part, id)
+					}
+					if x, y := num(t, h, "data-x"), num(t, h, "data-y"); math.Abs(x-w[0]) > tol || math.Abs(y-w[1]) > tol {
+						t.Errorf("%s %s: data (%g, %g), want (%g, %g)", part, id, x, y, w[0], w[1])
+					}
+					if h.Data == "circle" {
+						circles++
+						// The view's group holds the part's frame flipped:
+						// (cx, cy) = (x, −y). Its translate puts the
+						// point on the page, which must show it.
+						cx, cy := num(t, h, "cx"), num(t, h, "cy")
+						if x, y := cx, -cy; math.Abs(x-w[0]) > tol || math.Abs(y-w[1]) > tol {
+							t.Errorf("%s %s: circle at (%g, %g), want (%g, %g)", part, id, x, y, w[0], w[1])
+						}
+						if px, py := cx+tx, cy+ty; px < 0 || px > vw || py < 0 || py > vh {
+							t.Errorf("%s %s: at (%g, %g) on the page, outside the viewBox %g × %g", part, id, px, py, vw, vh)
+						}
+						if d := 2 * num(t, h, "r"); math.Abs(d-job(min(c.Holes[0].Dx, c.Holes[0].Dy))) > tol {
+							t.Errorf("%s %s: diameter %g", part, id, d)
+						}
+					}
+				}
+				if c.Holes[0].Type.IsSlot() == (circles > 0) {
+					t.Errorf("view %s: %d circles for %s holes", part, circles, c.Holes[0].Type)
+				}
+			}
+		})
+	}
+}
+
+// The page is a pure function of the job: checked twice, rendered twice,
+// the same bytes.
+func TestReportIsDeterministic(t *testing.T) {
+	for _, path := range jobs(t) {
+		_, a := render(t, check(t, path))
+		_, b := render(t, check(t, path))
+		if !bytes.Equal(a, b) {
+			t.Errorf("%s: two renderings differ", filepath.Base(path))
+		}
+	}
+}
+
+// Self-contained: nothing is fetched, nothing runs.
+func TestReportIsSelfContained(t *testing.T) {
+	for _, path := range jobs(t) {
+		doc, b := render(t, check(t, path))
+		for _, tag := range []string{"script", "link", "img", "iframe", "object", "embed", "base"} {
+			if n := find(doc, func(n *html.Node) bool { return n.Data == tag }); len(n) > 0 {
+				t.Errorf("%s: has <%s>", filepath.Base(path), tag)
+			}
+		}
+		s := strings.ReplaceAll(string(b), `xmlns="http://www.w3.org/2000/svg"`, "")
+		for _, bad := range []string{"http:", "https:", "url(", "@import", "@font-face"} {
+			if strings.Contains(s, bad) {
+				t.Errorf("%s: contains %q", filepath.Base(path), bad)
+			}
+		}
+	}
+}
+
+// The φ and Ω the page prints are the ones the check used: φRn or Rn/Ω of
+// the printed factor gives the available strength. Exact to rounding.
+func TestPrintedFactorsGiveTheAvailableStrength(t *testing.T) {
+	for _, path := range jobs(t) {
+		r := check(t, path)
+		c := &r.Design.Conn
+		for _, x := range r.Results {
+			v := vals{m: map[string]engine.Value{}}
+			for _, val := range x.Values {
+				v.m[val.Name] = val
+			}
+			got := factorOf(c.Edition, x, v).Available(c.Method, x.Nominal)
+			if math.Abs(float64(got-x.Available)) > 1e-9*math.Max(1, math.Abs(float64(x.Available))) {
+				t.Errorf("%s %s: printed factor gives %g, the check %g", filepath.Base(path), x.ID, got, x.Available)
+			}
+		}
+	}
+}
+
+// Both methods: ASD pages print Ω and Rn/Ω, LRFD pages φ and φRn.
+func TestMethodWording(t *testing.T) {
+	for _, path := range jobs(t) {
+		r := check(t, path)
+		doc, _ := render(t, r)
+		s := text(doc)
+		asd := r.Design.Conn.Method == rules.ASD
+		if strings.Contains(s, "Safety factor Ω") != asd || strings.Contains(s, "Resistance factor φ") == asd {
+			t.Errorf("%s: wrong factor wording for %s", filepath.Base(path), r.Design.Conn.Method)
+		}
+	}
+}
+
+// Whatever a job's text holds, it reaches the page as text, not markup:
+// the mark is written into the HTML and, through the sheet model, into
+// the SVG.
+func TestTextIsEscaped(t *testing.T) {
+	r := check(t, "../../testdata/jobs/si-double-angle.yaml")
+	r.Design.Job.Mark = `<script>alert("x")</script>&`
+	doc, b := render(t, r)
+	if bytes.Contains(b, []byte("<script>")) {
+		t.Fatal("the mark was written as markup")
+	}
+	if find(doc, func(n *html.Node) bool { return n.Data == "script" }) != nil {
+		t.Fatal("a script element reached the page")
+	}
+	if h1 := find(doc, func(n *html.Node) bool { return n.Data == "h1" }); len(h1) != 1 || text(h1[0]) != r.Design.Job.Mark {
+		t.Error("the mark is not shown as text")
+	}
+}
+
+// A failing connection gets its report, its drawing stamped as its sheet
+// would be; a passing one is not stamped.
+func TestFailingConnectionIsStamped(t *testing.T) {
+	for _, path := range jobs(t) {
+		r := check(t, path)
+		doc, _ := render(t, r)
+		stamps := find(doc, func(n *html.Node) bool {
+			c, _ := attr(n, "class")
+			return n.Data == "text" && strings.Contains(c, "stamp")
+		})
+		if (len(stamps) > 0) == r.Pass {
+			t.Errorf("%s: pass %v, %d stamps", filepath.Base(path), r.Pass, len(stamps))
+		}
+	}
+}
+
+// The page substitutes each limit state's values into its formula and
+// prints the check's nominal strength as the result: the formula on the
+// page, worked from those values, must give that strength. Relative
+// tolerance 1e-9: the same arithmetic in another order.
+func TestFormulasOnThePageGiveTheNominalStrength(t *testing.T) {
+	for _, path := range jobs(t) {
+		r := check(t, path)
+		c := &r.Design.Conn
+		byID := map[string]engine.Result{}
+		for _, x := range r.Results {
+			byID[x.ID] = x
+		}
+		for _, x := range r.Results {
+			v := map[string]float64{}
+			for _, val := range x.Values {
+				v[val.Name] = val.V
+			}
+			var want float64
+			switch x.ID {
+			case "member.yield", "plate.yield":
+				want = v["Fy"] * v["Ag"]
+			case "member.rupture":
+				tsum := float64(c.Member.Pieces) * float64(c.Member.T)
+				if An := v["Ag"] - tsum*v["deduction"]; math.Abs(An-v["An"]) > 1e-9*v["Ag"] {
+					t.Errorf("%s: An = Ag − Σt·deduction gives %g, the check %g", x.ID, An, v["An"])
+				}
+				if c.Member.Shape != engine.Flat {
+					if U := min(1, max(v["U_case2"], v["U_case8"], v["U_min"])); U != v["U"] {
+						t.Errorf("%s: U = max(...) gives %g, the check %g", x.ID, U, v["U"])
+					}
+				}
+				want = v["Fu"] * v["U"] * v["An"]
+			case "member.block-shear", "plate.block-shear":
+				tension := v["Ubs"] * v["Fu"] * v["Ant"]
+				want = min(0.6*v["Fu"]*v["Anv"]+tension, 0.6*v["Fy"]*v["Agv"]+tension)
+			case "plate.rupture":
+				// The page writes An = (Lw − holes × dh)·t with dh read
+				// back from An: it must be the hole with its allowance.
+				if v["splice_cap_applied"] == 0 && v["An"] > 0 {
+					dh := (v["Lw"]*v["t"] - v["An"]) / (v["t"] * v["holes"])
+					if w := float64(c.Holes[0].Dy + c.Edition.HoleAllowance()); math.Abs(dh-w) > 1e-9*w {
+						t.Errorf("%s %s: dh read back %g, hole with allowance %g", filepath.Base(path), x.ID, dh, w)
+					}
+				}
+				want = v["Fu"] * v["An"]
+			case "bolts.shear":
+				want = v["Fnv"] * v["Ab"] * v["n"] * v["planes"]
+			case "bolts.slip":
+				want = v["mu"] * v["Du"] * v["hf"] * v["Tb"] * v["ns"] * v["n"]
+			case "member.bearing", "plate.bearing":
+				for _, b := range x.PerBolt {
+					bearing := v["bearing_coefficient"] * v["d"] * v["t"] * v["Fu"]
+					tearout := v["tearout_coefficient"] * max(float64(b.Lc), 0) * v["t"] * v["Fu"]
+					if math.Abs(bearing-float64(b.Bearing)) > 1e-9*bearing || math.Abs(tearout-float64(b.Tearout)) > 1e-9*max(tearout, 1) {
+						t.Errorf("%s %s %s: cb·d·t·Fu, ct·lc·t·Fu give %g, %g; the check %g, %g",
+							filepath.Base(path), x.ID, b.Hole, bearing, tearout, float64(b.Bearing), float64(b.Tearout))
+					}
+					want += float64(b.Rn)
+				}
+			case "bolts.group":
+				mb, pb := byID["member.bearing"], byID["plate.bearing"]
+				for i := range c.Holes {
+					rn := min(v["rn_shear"], float64(mb.PerBolt[i].Rn))
+					if pb.PerBolt != nil {
+						rn = min(rn, float64(pb.PerBolt[i].Rn))
+					}
+					want += rn
+				}
+			default:
+				t.Errorf("%s: the page has no formula for %s", filepath.Base(path), x.ID)
+				continue
+			}
+			if got := float64(x.Nominal); math.Abs(got-want) > 1e-9*math.Abs(want) {
+				t.Errorf("%s %s: the formula gives %g, the check %g", filepath.Base(path), x.ID, want, got)
+			}
+		}
+	}
+}
