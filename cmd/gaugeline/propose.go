@@ -1,0 +1,124 @@
+package main
+
+import (
+	"context"
+	"fmt"
+	"io"
+	"os"
+	"path/filepath"
+
+	"github.com/spf13/cobra"
+
+	"gaugeline/detail"
+)
+
+type proposeOptions struct {
+	format       string
+	alternatives int
+	exhaustive   bool
+	write        string
+}
+
+func newProposeCmd(o *rootOptions) *cobra.Command {
+	var po proposeOptions
+	cmd := &cobra.Command{
+		Use:   "propose JOB.yaml",
+		Short: "Find the best passing bolt layout within the job's stock",
+		Long: "propose searches the job's stock (diameters, grades, plate thicknesses, lines and bolts per line,\n" +
+			"pitch, end, gage and edge distances on the step grid) for the layout with the fewest bolts (or the\n" +
+			"shortest, with stock.objective: length) that passes every detailing rule and limit state, and prints\n" +
+			"its full check. Exit 0 when a layout is found, 1 when nothing in the stock passes (the message says\n" +
+			"what blocks and what would lift it), 2 on bad input.",
+		Args: argsExactly(1, "one job file"),
+		RunE: func(cmd *cobra.Command, args []string) error {
+			return runPropose(cmd.Context(), o, po, args[0], o.stdout)
+		},
+	}
+	cmd.Flags().StringVar(&po.format, "format", "text", "output format: text, json or markdown")
+	cmd.Flags().IntVar(&po.alternatives, "alternatives", 3, "how many other layouts to list")
+	cmd.Flags().BoolVar(&po.exhaustive, "exhaustive", false, "check every candidate (reference mode; slow)")
+	cmd.Flags().StringVar(&po.write, "write", "", "write the job with the chosen layout filled in to `FILE`")
+	return cmd
+}
+
+func runPropose(_ context.Context, o *rootOptions, po proposeOptions, path string, out io.Writer) error {
+	switch po.format {
+	case "text", "json", "markdown":
+	default:
+		return usageError{fmt.Errorf("--format: unknown format %q (want text, json or markdown)", po.format)}
+	}
+	if po.alternatives < 0 {
+		return usageError{fmt.Errorf("--alternatives: want 0 or more, not %d", po.alternatives)}
+	}
+	job, err := detail.LoadJob(path)
+	if err != nil {
+		return err
+	}
+	mode := detail.Pruned
+	if po.exhaustive {
+		mode = detail.Exhaustive
+	}
+	p, err := detail.Propose(job, detail.ProposeOptions{Mode: mode, Alternatives: po.alternatives})
+	if err != nil {
+		return err
+	}
+	if p.Found() && po.write != "" {
+		if err := writeAtomic(po.write, p.LayoutJob); err != nil {
+			return err
+		}
+	}
+	switch po.format {
+	case "json":
+		b, err := p.JSON(mode)
+		if err != nil {
+			return err
+		}
+		if _, err := out.Write(b); err != nil {
+			return err
+		}
+	case "markdown":
+		if err := p.WriteMarkdown(out, mode); err != nil {
+			return err
+		}
+	default:
+		if err := p.WriteText(out, mode); err != nil {
+			return err
+		}
+	}
+	if !p.Found() {
+		fmt.Fprintf(o.stderr, "gaugeline: no layout passes: %s\n", p.Summary)
+		return exitError{exitFail}
+	}
+	return nil
+}
+
+// writeAtomic writes data to path through a temporary file in the same
+// directory and a rename, so that path is never half-written.
+func writeAtomic(path string, data []byte) error {
+	fail := func(err error) error {
+		return &detail.InputError{File: path, Msg: "cannot write the job: " + err.Error()}
+	}
+	tmp, err := os.CreateTemp(filepath.Dir(path), "."+filepath.Base(path)+".*.tmp")
+	if err != nil {
+		return fail(err)
+	}
+	name := tmp.Name()
+	_, err = tmp.Write(data)
+	if err == nil {
+		err = tmp.Sync()
+	}
+	if cerr := tmp.Close(); err == nil {
+		err = cerr
+	}
+	if err == nil {
+		err = os.Chmod(name, 0o644)
+	}
+	if err == nil {
+		err = os.Rename(name, path)
+	}
+	if err != nil {
+		os.Remove(name)
+		return fail(err)
+	}
+	return nil
+}

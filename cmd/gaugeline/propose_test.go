@@ -1,0 +1,132 @@
+package main
+
+import (
+	"encoding/json"
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+)
+
+type proposeJSON struct {
+	jsonReport
+	Layout struct {
+		Diameter string `json:"diameter"`
+		Grade    string `json:"grade"`
+		Lines    int    `json:"lines"`
+		PerLine  int    `json:"per_line"`
+		Pitch    string `json:"pitch"`
+		End      string `json:"end"`
+		Gage     string `json:"gage"`
+	} `json:"layout"`
+	Bolts        int `json:"bolts"`
+	Alternatives []struct {
+		Bolts     int     `json:"bolts"`
+		Length    float64 `json:"length"`
+		Governing string  `json:"governing"`
+		Ratio     float64 `json:"ratio"`
+	} `json:"alternatives"`
+	Search struct {
+		Space     int `json:"space"`
+		Evaluated int `json:"evaluated"`
+	} `json:"search"`
+	Message string `json:"message"`
+}
+
+func proposeDoc(t *testing.T, r ran) proposeJSON {
+	t.Helper()
+	var doc proposeJSON
+	if err := json.Unmarshal([]byte(r.stdout), &doc); err != nil {
+		t.Fatalf("exit %d, output is not JSON: %v\n%s%s", r.code, err, r.stdout, r.stderr)
+	}
+	return doc
+}
+
+// TestProposeWriteThenCheck: every layout propose writes is a job that
+// check passes (exit 0), in both unit systems.
+func TestProposeWriteThenCheck(t *testing.T) {
+	for _, name := range []string{"us-angle-brace.yaml", "si-slotted-length.yaml", "us-staggered-flat.yaml", "si-double-angle-asd.yaml"} {
+		t.Run(name, func(t *testing.T) {
+			dir := t.TempDir()
+			job, _ := filepath.Abs(filepath.Join(testdata, "propose", name))
+			r := gaugeline(t, dir, "propose", job, "--format", "json", "--write", "out.yaml")
+			if r.code != 0 {
+				t.Fatalf("propose: exit %d\n%s", r.code, r.stderr)
+			}
+			doc := proposeDoc(t, r)
+			if doc.Verdict != "pass" || doc.Bolts != doc.Layout.Lines*doc.Layout.PerLine || doc.Layout.Diameter == "" {
+				t.Errorf("verdict %s, %d bolts, layout %+v", doc.Verdict, doc.Bolts, doc.Layout)
+			}
+			if doc.Search.Space == 0 || doc.Search.Evaluated == 0 || doc.Search.Evaluated > doc.Search.Space {
+				t.Errorf("search %+v", doc.Search)
+			}
+			entries, _ := os.ReadDir(dir)
+			if len(entries) != 1 || entries[0].Name() != "out.yaml" {
+				t.Errorf("files left: %v (want out.yaml alone: the write is a rename)", entries)
+			}
+			c := gaugeline(t, dir, "check", "out.yaml", "--format", "json")
+			if c.code != 0 {
+				t.Fatalf("check of the written job: exit %d\n%s%s", c.code, c.stdout, c.stderr)
+			}
+			var chk jsonReport
+			if err := json.Unmarshal([]byte(c.stdout), &chk); err != nil {
+				t.Fatal(err)
+			}
+			// check reads back the layout propose checked: same holes.
+			if len(chk.Holes) != len(doc.Holes) || chk.Governing != doc.Governing {
+				t.Errorf("check: %d holes governed by %s; propose: %d holes governed by %s", len(chk.Holes), chk.Governing, len(doc.Holes), doc.Governing)
+			}
+			text := gaugeline(t, dir, "propose", job)
+			if text.code != 0 || !strings.Contains(text.stdout, "bolts:\n  diameter: "+doc.Layout.Diameter) || !strings.Contains(text.stdout, "engineer of record") {
+				t.Errorf("text: exit %d\n%s", text.code, text.stdout)
+			}
+		})
+	}
+}
+
+func TestProposeExhaustiveAgrees(t *testing.T) {
+	// us-flat-shear: 6 bolts by hand (0.75 · 54 ksi · 0.4418 in² = 17.9
+	// kips per bolt, AISC 360-22 Table J3.2; 100 kips / 17.9 → 6).
+	job := filepath.Join(testdata, "propose", "us-flat-shear.yaml")
+	fast := proposeDoc(t, gaugeline(t, ".", "propose", job, "--format", "json", "--alternatives", "2"))
+	ex := proposeDoc(t, gaugeline(t, ".", "propose", job, "--format", "json", "--alternatives", "2", "--exhaustive"))
+	if fast.Layout != ex.Layout || fast.Bolts != 6 {
+		t.Errorf("pruned %+v (%d bolts), exhaustive %+v; want equal, 6 bolts (hand calculation)", fast.Layout, fast.Bolts, ex.Layout)
+	}
+	if len(fast.Alternatives) != len(ex.Alternatives) {
+		t.Errorf("%d alternatives vs %d", len(fast.Alternatives), len(ex.Alternatives))
+	}
+	if fast.Search.Space != ex.Search.Space || 20*fast.Search.Evaluated > ex.Search.Evaluated {
+		t.Errorf("pruned %+v, exhaustive %+v: want the same space and at most 1/20 checked", fast.Search, ex.Search)
+	}
+}
+
+func TestProposeExitCodes(t *testing.T) {
+	// L3x3x1/4 A36, Ag = 1.44 in²; 60 kips needs 60 / (0.9 · 36) = 1.85 in²
+	// (AISC 360-22 D2(a)): exit 1 naming member.yield and the area.
+	dir := t.TempDir()
+	job, _ := filepath.Abs(filepath.Join(testdata, "propose", "infeasible-yield.yaml"))
+	r := gaugeline(t, dir, "propose", job, "--write", "out.yaml")
+	if r.code != 1 || !strings.Contains(r.stderr, "member.yield needs Ag ≥ 1.85 in2") || !strings.Contains(r.stdout, "larger member") {
+		t.Errorf("infeasible: exit %d\nstdout %s\nstderr %s", r.code, r.stdout, r.stderr)
+	}
+	if entries, _ := os.ReadDir(dir); len(entries) != 0 {
+		t.Errorf("an infeasible job wrote %v", entries)
+	}
+	j := gaugeline(t, dir, "propose", job, "--format", "json")
+	if doc := proposeDoc(t, j); j.code != 1 || doc.Verdict != "infeasible" || !strings.Contains(doc.Message, "member.yield") {
+		t.Errorf("infeasible JSON: exit %d, verdict %s, message %q", j.code, doc.Verdict, doc.Message)
+	}
+
+	bad := filepath.Join(dir, "bad.yaml")
+	os.WriteFile(bad, []byte("mark: X\nload: {required: 10 kip}\nmember: {shape: flat, width: 6 in, thickness: 1/2 in, grade: A36}\nstock: {grades: [A325]}\n"), 0o644)
+	r = gaugeline(t, dir, "propose", bad)
+	if r.code != 2 || !strings.HasPrefix(r.stderr, "gaugeline: error: ") || !strings.Contains(r.stderr, "stock.diameters") {
+		t.Errorf("no diameters: exit %d, stderr %q; want 2 naming stock.diameters", r.code, r.stderr)
+	}
+	for _, args := range [][]string{{"propose"}, {"propose", bad, "--format", "xml"}, {"propose", bad, "--alternatives", "-1"}} {
+		if r := gaugeline(t, dir, args...); r.code != 2 {
+			t.Errorf("%v: exit %d, want 2", args, r.code)
+		}
+	}
+}

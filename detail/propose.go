@@ -1,0 +1,1789 @@
+package detail
+
+import (
+	"bytes"
+	"cmp"
+	"encoding/json"
+	"fmt"
+	"io"
+	"math"
+	"runtime"
+	"slices"
+	"strings"
+	"sync"
+	"text/tabwriter"
+
+	"gaugeline/engine"
+	"gaugeline/rules"
+	"gaugeline/rules/units"
+)
+
+// The layout search of SPEC §6.
+//
+// The space is stock diameters × grades × plate thicknesses × lines ×
+// bolts per line (a "group") × gage2 × gage × pitch × end × plate edge,
+// each length on the stock step grid. Alternatives are the best layouts
+// of other arrangements (diameter, grade, lines, bolts per line).
+// A candidate is feasible when its holes fit the parts and every limit
+// state and non-advisory detailing rule passes.
+//
+// Order (objective bolts): fewest bolts, shortest connection length
+// (end + pattern length + plate edge), smallest diameter, lowest governing
+// ratio (to 6 decimals), then grade in stock order, thinner plate, fewer
+// lines, smaller gage, gage2, end, pitch, edge. Objective length swaps the
+// first two.
+//
+// The pruned search returns exactly what the exhaustive enumeration
+// returns. It rests on three facts, each tested against the enumeration:
+//
+//   - Bounds: member yielding needs no layout; bolt shear (without the
+//     long-joint reduction), slip and the bearing cap of every bolt bound
+//     the bolt count from below; a group whose shortest layout is longer
+//     than the best found cannot win.
+//   - Monotonicity: with diameter, grade, plate, counts and gages fixed,
+//     more pitch, end or plate edge never lowers a strength (engine
+//     property test) and never breaks a detailing rule inside the searched
+//     ranges, as long as the pattern stays on one side of the long-joint
+//     limit and the stagger is not larger than the pitch. Feasibility is
+//     then an up-set of the (pitch, end, edge) grid: one failing layout
+//     rules out every smaller one, one passing layout admits every larger
+//     one, and the shortest passing layouts lie on its staircase.
+//   - Gage: where the gage lines sit across the member matters only to
+//     member block shear (its blocks reach the toe or the bar's edges)
+//     and to the gage and member-edge rules; the plate is centred on the
+//     bolt group and every other check sees distances between holes. So a
+//     pitch, end and edge that fail on another check fail at every gage,
+//     and the other checks' ratios bound the ratio at every gage from
+//     below. On angles moving the lines toward the toe only shrinks the
+//     toe block's tension area and the gage rules pass on an interval, so
+//     the smallest gage that passes them dominates every larger one.
+//
+// Ratios are compared to 6 decimals (closer ones are a tie, settled by
+// the tie-breaks), so that rounding in sums of grid values never decides.
+// The plate thickness is not in the objective before the ratio: at equal
+// bolts, length and diameter a thicker plate that lowers the governing
+// ratio wins, and a thinner one only on a tie.
+
+// SearchMode chooses how propose walks the space.
+type SearchMode int
+
+const (
+	// Pruned prunes with bounds and monotonicity (the default).
+	Pruned SearchMode = iota
+	// Exhaustive checks every candidate: the reference the pruned search
+	// must agree with.
+	Exhaustive
+)
+
+// ProposeOptions configure Propose.
+type ProposeOptions struct {
+	Mode SearchMode
+	// Alternatives is how many layouts besides the chosen one to report.
+	Alternatives int
+}
+
+// DefaultMaxPerLine is the most bolts per gage line propose tries when
+// stock.max_per_line is not given (common practice, no source).
+const DefaultMaxPerLine = 10
+
+// Layout is what propose chooses: the pattern keys of the bolts block and
+// the plate's thickness and edge.
+type Layout struct {
+	Diameter       units.Length
+	Grade          string
+	Lines, PerLine int
+	Pitch          units.Length // 0 with one bolt per line
+	End, Gage      units.Length
+	Gage2          units.Length // 0 with one line
+	Stagger        units.Length // as the job fixes it; 0 otherwise
+	PlateThickness units.Length // 0 without a plate
+	PlateEdge      units.Length // 0 without a plate
+
+	// spellings from the job file for the values chosen from the stock
+	diameterText, thicknessText string
+}
+
+// Bolts is the number of bolts of the layout.
+func (l Layout) Bolts() int { return l.Lines * l.PerLine }
+
+// Alternative is another passing layout, the best of its arrangement
+// (diameter, grade, lines and bolts per line).
+type Alternative struct {
+	Layout    Layout
+	Length    units.Length // end + pattern length + plate edge
+	Governing string
+	Ratio     float64
+}
+
+// Blocker is a limit state or detailing rule that fails in every
+// candidate, with what would lift it.
+type Blocker struct {
+	ID    string
+	Ratio float64 // least ratio over the strongest layouts (0 for detailing)
+	Text  string  // "member.yield needs Ag ≥ 2.9 in2 (has 2.48 in2)"
+	Lift  string  // "choose a larger member"
+}
+
+// Proposal is the outcome of Propose.
+type Proposal struct {
+	Job    *Job
+	Layout Layout
+	// Report is the check of the chosen layout (nil when nothing passes),
+	// built from LayoutJob exactly as `gaugeline check` builds it.
+	Report *Report
+	// LayoutJob is the job file with the layout filled in (nil when
+	// nothing passes).
+	LayoutJob    []byte
+	Length       units.Length
+	Alternatives []Alternative
+
+	Space     int // candidates in the space
+	Evaluated int // candidates fully checked to find the choice
+	// AltEvaluated and DiagEvaluated are further checks for the
+	// alternatives and for explaining an infeasible job.
+	AltEvaluated, DiagEvaluated int
+
+	// Blockers explain why nothing passes (empty when a layout was found).
+	Blockers []Blocker
+	Summary  string // one line for an infeasible job
+}
+
+// Found reports whether a passing layout was found.
+func (p *Proposal) Found() bool { return p.Report != nil }
+
+// Propose searches the job's stock for the best passing layout (SPEC §6).
+// Bad input (no diameters, an unknown grade, explicit holes) is an
+// *InputError; a job where nothing passes is a Proposal with Blockers.
+func Propose(j *Job, opt ProposeOptions) (*Proposal, error) {
+	p, err := newProblem(j)
+	if err != nil {
+		return nil, err
+	}
+	out := &Proposal{Job: j, Space: p.space()}
+	if b := p.yieldBlocker(); b != nil {
+		out.Blockers = []Blocker{*b}
+		out.Summary = b.Text + ": " + b.Lift
+		return out, nil
+	}
+	var tops []*cand
+	var other *cand
+	k := 1 + max(opt.Alternatives, 0)
+	if opt.Mode == Exhaustive {
+		var bests, others []*cand
+		bests, others = p.exhaustive()
+		out.Evaluated = p.evals
+		tops = firstN(bests, k)
+		if len(others) > 0 {
+			other = others[0]
+		}
+	} else {
+		p.cache = map[candKey]*Report{}
+		tops = p.bestPerGroup(p.obj, 1)
+		out.Evaluated = p.evals
+		if len(tops) > 0 && opt.Alternatives > 0 {
+			tops = p.bestPerGroup(p.obj, k)
+			if o := p.bestPerGroup(p.obj.other(), 1); len(o) > 0 {
+				other = o[0]
+			}
+			out.AltEvaluated = p.evals - out.Evaluated
+		}
+	}
+	if len(tops) == 0 {
+		before := p.evals
+		p.diagnose(out)
+		out.DiagEvaluated = p.evals - before
+		return out, nil
+	}
+	best := tops[0]
+	out.Layout = p.layout(best)
+	out.Length = best.length()
+	if opt.Alternatives > 0 {
+		out.Alternatives = p.alternatives(tops, other, opt.Alternatives)
+	}
+	data, err := j.WithLayout(out.Layout)
+	if err != nil {
+		return nil, err
+	}
+	lj, err := ParseJob(j.File, data)
+	if err != nil {
+		return nil, fmt.Errorf("detail: propose wrote a job it cannot read: %w", err)
+	}
+	d, err := lj.Build()
+	if err != nil {
+		return nil, fmt.Errorf("detail: propose wrote a job that does not build: %w", err)
+	}
+	r, err := Check(d)
+	if err != nil {
+		return nil, err
+	}
+	if !r.Pass {
+		panic("detail: propose chose a layout that fails its check")
+	}
+	if got, want := r.GoverningResult().Ratio, best.rep.GoverningResult().Ratio; math.Abs(got-want) > 1e-9*max(1, want) {
+		panic(fmt.Sprintf("detail: propose's model of the layout (ratio %v) differs from Build's (ratio %v)", want, got))
+	}
+	out.Report, out.LayoutJob = r, data
+	return out, nil
+}
+
+func firstN(cs []*cand, n int) []*cand {
+	if len(cs) > n {
+		return cs[:n]
+	}
+	return cs
+}
+
+// other is the other objective.
+func (o Objective) other() Objective {
+	if o == FewestBolts {
+		return ShortestLength
+	}
+	return FewestBolts
+}
+
+// ---------------------------------------------------------------------
+// The problem: groups and their ranges.
+
+type problem struct {
+	job    *Job
+	ed     *rules.Edition
+	step   units.Length
+	obj    Objective
+	groups []*group
+
+	diams  []option[units.Length]
+	grades []string
+	thick  []option[units.Length]
+
+	snapped map[int]units.Length // grid index → value
+
+	evals int
+	cache map[candKey]*Report // pruned search only; nil: no cache
+}
+
+// group is one arrangement: diameter, grade, plate thickness, lines and
+// bolts per line, with the ranges of the rest.
+type group struct {
+	idx            int
+	di, gi, ti     int
+	d              units.Length
+	tp             units.Length
+	lines, perLine int
+	nT             int
+	tmpl           *Design // member, bolt, plate steel, demand; no holes
+	hole           rules.HoleType
+	slot           rules.SlotDir
+	dx, dy         units.Length
+	fits           bool // the hole fits the leg or flat at all
+	viable         bool // not ruled out by the bounds
+
+	pitch, end, edge, gage2 []units.Length
+	stag                    units.Length // stagger applied (lines > 1)
+	segments                [][2]int     // pitch index runs with monotone feasibility
+
+	gages map[int][]units.Length // by gage2 index
+}
+
+type option[T any] struct {
+	v    T
+	text string // as written in the job
+}
+
+func newProblem(j *Job) (*problem, error) {
+	ed, err := rules.Lookup(j.Standard, j.Units)
+	if err != nil {
+		return nil, j.inputErr("standard", err.Error(), "known standards: "+strings.Join(rules.Names(), ", "))
+	}
+	if err := j.CheckStock(ed); err != nil {
+		return nil, err
+	}
+	if j.Holes != nil {
+		return nil, j.inputErr("holes", "propose lays out the bolts itself; explicit holes leave nothing to choose",
+			"remove the holes list, or run gaugeline check")
+	}
+	p := &problem{job: j, ed: ed, step: j.Stock.Step, obj: j.Stock.Objective, snapped: map[int]units.Length{}}
+
+	var diams []option[units.Length]
+	switch {
+	case j.Bolts.Diameter > 0:
+		diams = append(diams, option[units.Length]{j.Bolts.Diameter, j.Raw["bolts.diameter"]})
+	case len(j.Stock.Diameters) > 0:
+		for i, d := range j.Stock.Diameters {
+			diams = append(diams, option[units.Length]{d, j.Raw[fmt.Sprintf("stock.diameters[%d]", i)]})
+		}
+	default:
+		return nil, j.inputErr("stock.diameters", "propose needs the bolt diameters to try",
+			"give stock.diameters: [3/4 in, 7/8 in] (us) or [M20, M22] (si), or fix bolts.diameter")
+	}
+	var grades []string
+	switch {
+	case j.Bolts.Grade != "":
+		if _, err := ed.Bolt(j.Bolts.Grade); err != nil {
+			return nil, j.inputErr("bolts.grade", fmt.Sprintf("unknown bolt grade %q in %s", j.Bolts.Grade, ed), "known grades: "+strings.Join(ed.BoltGrades(), ", "))
+		}
+		grades = []string{j.Bolts.Grade}
+	case len(j.Stock.Grades) > 0:
+		grades = j.Stock.Grades
+	default:
+		return nil, j.inputErr("stock.grades", "propose needs the bolt grades to try",
+			"give stock.grades: [A325] (us) or [A325M] (si), or fix bolts.grade")
+	}
+	thick := []option[units.Length]{{0, ""}}
+	if pl := j.Plate; pl != nil {
+		switch {
+		case !pl.AutoThickness:
+			thick = []option[units.Length]{{pl.Thickness, j.Raw["plate.thickness"]}}
+		case len(j.Stock.Thicknesses) > 0:
+			thick = nil
+			for i, t := range j.Stock.Thicknesses {
+				thick = append(thick, option[units.Length]{t, j.Raw[fmt.Sprintf("stock.thicknesses[%d]", i)]})
+			}
+		default:
+			return nil, j.inputErr("stock.thicknesses", "plate.thickness is auto but the stock has no thicknesses",
+				"give stock.thicknesses: [3/8 in, 1/2 in, 5/8 in], or a plate thickness")
+		}
+	}
+	lines := []int{j.Bolts.Lines}
+	if !j.Given("bolts.lines") {
+		lines = nil
+		for l := 1; l <= max(j.Stock.MaxLines, 1); l++ {
+			lines = append(lines, l)
+		}
+	}
+	perLine := []int{j.Bolts.PerLine}
+	if !j.Given("bolts.per_line") {
+		perLine = nil
+		maxN := j.Stock.MaxPerLine
+		if maxN == 0 {
+			maxN = DefaultMaxPerLine
+		}
+		for n := 1; n <= maxN; n++ {
+			perLine = append(perLine, n)
+		}
+	}
+
+	// The member depends on the plate thickness only (the gap of a double
+	// angle); the bolt on diameter and grade.
+	members := make([]*Design, len(thick))
+	for ti, t := range thick {
+		if members[ti], err = j.template(ed, t.v); err != nil {
+			return nil, err
+		}
+	}
+	for di, d := range diams {
+		if _, err := ed.Hole(d.v, j.Bolts.Hole); err != nil {
+			return nil, j.inputErr("bolts.diameter", tabulatedMsg(err), diametersHint(ed))
+		}
+		for gi, gr := range grades {
+			for ti, t := range thick {
+				tmpl, err := members[ti].withBolt(ed, d.v, gr)
+				if err != nil {
+					return nil, err
+				}
+				b := p.perBolt(tmpl)
+				for _, l := range lines {
+					for _, n := range perLine {
+						g := &group{idx: len(p.groups), di: di, gi: gi, ti: ti, d: d.v, tp: t.v,
+							lines: l, perLine: n, nT: l * n, tmpl: tmpl}
+						p.ranges(g)
+						g.viable = g.fits && b.pass(n*l)
+						p.groups = append(p.groups, g)
+					}
+				}
+			}
+		}
+	}
+	p.diams, p.thick, p.grades = diams, thick, grades
+	return p, nil
+}
+
+// template resolves the member, the plate's steel and the demand for a
+// plate thickness: everything of a Design but the bolt and the holes.
+func (j *Job) template(ed *rules.Edition, tp units.Length) (*Design, error) {
+	jj := *j
+	if j.Plate != nil {
+		pl := *j.Plate
+		pl.Thickness, pl.AutoThickness = tp, false
+		jj.Plate = &pl
+	}
+	des := &Design{Job: &jj}
+	c := &des.Conn
+	c.Edition, c.Method = ed, j.Method
+	if err := jj.buildMember(ed, des); err != nil {
+		return nil, err
+	}
+	if ps := jj.Plate; ps != nil {
+		st, err := jj.steel(ed, ps.Steel, "plate")
+		if err != nil {
+			return nil, err
+		}
+		c.Plate = &engine.Plate{Kind: ps.Kind, T: ps.Thickness, Width: ps.Width, Fy: st.Fy, Fu: st.Fu}
+		des.Info.PlateGrade = st.Name
+		des.Info.Weathering = des.Info.Weathering || st.Weathering
+	}
+	if j.Load.Combined() {
+		c.Demand, des.Combination = engine.Combine(j.Method, j.Load.Service)
+	} else {
+		c.Demand = j.Load.Required
+	}
+	return des, nil
+}
+
+// withBolt returns a copy of the template with the bolt of diameter d and
+// grade resolved.
+func (t *Design) withBolt(ed *rules.Edition, d units.Length, grade string) (*Design, error) {
+	jj := *t.Job
+	jj.Bolts.Diameter, jj.Bolts.Grade = d, grade
+	out := *t
+	out.Job = &jj
+	if err := jj.buildBolt(ed, &out.Conn); err != nil {
+		return nil, err
+	}
+	return &out, nil
+}
+
+// gridUp and gridDown round a length up or down to the step grid.
+func (p *problem) gridUp(l units.Length) int   { return int(math.Ceil(float64(l/p.step) - 1e-9)) }
+func (p *problem) gridDown(l units.Length) int { return int(math.Floor(float64(l/p.step) + 1e-9)) }
+
+// grid lists k·step for k from lo to max(lo, hi).
+func (p *problem) grid(lo, hi int) []units.Length {
+	lo = max(lo, 1)
+	hi = max(hi, lo)
+	out := make([]units.Length, 0, hi-lo+1)
+	for k := lo; k <= hi; k++ {
+		v, ok := p.snapped[k]
+		if !ok {
+			v = p.snap(units.Length(k) * p.step)
+			p.snapped[k] = v
+		}
+		out = append(out, v)
+	}
+	return out
+}
+
+// snap replaces a grid value by what its job-file spelling reads back as
+// when that is within 1 nm (6 × 1/3 in is 2 in), so that a written layout
+// reads "2 in" and checks exactly as it was chosen.
+func (p *problem) snap(v units.Length) units.Length {
+	sys := p.job.Units
+	if back, err := units.ParseLength(units.FormatJob(v, sys), sys); err == nil && math.Abs(float64(back-v)) < 1e-6 {
+		return back
+	}
+	return v
+}
+
+// minEdgeTo is the Table J3.4 minimum plus C2 of Table J3.5 at an edge
+// running along x (a side or toe) or along y (an end).
+func (p *problem) minEdgeTo(g *group, alongX bool) units.Length {
+	emin, err := p.ed.MinEdge(g.d)
+	if err != nil {
+		return 0
+	}
+	h := engine.Hole{Type: g.hole, Slot: g.slot}
+	c2, err := p.ed.EdgeIncrement(g.d, incrementType(&h, edge{alongX: alongX}))
+	if err != nil {
+		return emin
+	}
+	return emin + c2
+}
+
+// ranges fills the group's hole size and the pitch, end, edge and gage2
+// ranges: from the rule minimum on the step grid up to the smaller of
+// the rule maximum and 4·d (SPEC §6); values the job fixes stay fixed.
+func (p *problem) ranges(g *group) {
+	j, ed := p.job, p.ed
+	c := &g.tmpl.Conn
+	m := &c.Member
+	g.hole = j.Bolts.Hole
+	g.slot = rules.Transverse
+	if g.hole.IsSlot() {
+		g.slot = j.Bolts.Slot
+	}
+	hs, _ := ed.Hole(g.d, g.hole) // tabulated: checked by newProblem
+	g.dx, g.dy = holeExtent(hs, g.hole, g.slot)
+	room := m.Width
+	if m.Shape != engine.Flat {
+		room = m.Width - m.T
+	}
+	g.fits = g.dy <= room+eps
+	g.gages = map[int][]units.Length{}
+	four := p.gridDown(4 * g.d)
+
+	tThin := m.T
+	if c.Plate != nil {
+		tThin = min(tThin, c.Plate.T)
+	}
+	switch {
+	case g.perLine == 1:
+		g.pitch = []units.Length{0}
+	case j.Given("bolts.pitch"):
+		g.pitch = []units.Length{j.Bolts.Pitch}
+	default:
+		lo := ed.MinSpacing(g.d)
+		if ed.ClearSpacingRule() {
+			lo = max(lo, g.d+g.dx)
+		}
+		g.pitch = p.grid(p.gridUp(lo), min(p.gridDown(ed.MaxSpacing(tThin, g.tmpl.Info.Weathering)), four))
+	}
+	if j.Given("bolts.end") {
+		g.end = []units.Length{j.Bolts.End}
+	} else {
+		g.end = p.grid(p.gridUp(p.minEdgeTo(g, false)), min(p.gridDown(ed.MaxEdge(m.T)), four))
+	}
+	switch {
+	case c.Plate == nil:
+		g.edge = []units.Length{0}
+	case j.Plate.Edge > 0:
+		g.edge = []units.Length{j.Plate.Edge}
+	default:
+		g.edge = p.grid(p.gridUp(p.minEdgeTo(g, false)), min(p.gridDown(ed.MaxEdge(c.Plate.T)), four))
+	}
+	switch {
+	case g.lines == 1:
+		g.gage2 = []units.Length{0}
+	case j.Given("bolts.gage2"):
+		g.gage2 = []units.Length{j.Bolts.Gage2}
+	default:
+		lo := ed.MinSpacing(g.d)
+		if ed.ClearSpacingRule() {
+			lo = max(lo, g.d+g.dy)
+		}
+		g.gage2 = p.grid(p.gridUp(lo), four)
+	}
+	if g.lines > 1 {
+		g.stag = j.Bolts.Stagger
+	}
+	g.segments = p.segments(g)
+	for i := range g.gage2 {
+		p.gagesFor(g, i) // filled now: the exhaustive workers only read
+	}
+}
+
+// gagesFor lists the first gage line's positions for gage2 index i: from
+// the smallest on-grid value that passes the gage and edge rules (angles:
+// clear of the fillet, wrench clearance, toe within 12t; flats: edge
+// distance) to the largest that keeps the toe or far edge distance.
+func (p *problem) gagesFor(g *group, i int) []units.Length {
+	if gs, ok := g.gages[i]; ok {
+		return gs
+	}
+	var gs []units.Length
+	switch {
+	case p.job.Given("bolts.gage"):
+		gs = []units.Length{p.job.Bolts.Gage}
+	default:
+		m := &g.tmpl.Conn.Member
+		span := units.Length(g.lines-1) * g.gage2[i]
+		side := p.minEdgeTo(g, true)
+		maxEdge := p.ed.MaxEdge(m.T)
+		var lo, hi units.Length
+		if m.Shape == engine.Flat {
+			lo = max(side, g.dy/2, m.Width-span-maxEdge)
+			hi = min(maxEdge, m.Width-span-side)
+		} else {
+			lo = max(g.tmpl.Info.K+g.dy/2, m.T+wrenchClearance(g.d, p.ed.System), g.dy/2, m.Width-span-maxEdge)
+			hi = m.Width - span - side
+		}
+		gs = p.grid(p.gridUp(lo), p.gridDown(hi))
+	}
+	g.gages[i] = gs
+	return gs
+}
+
+// segments splits the pitch range into runs where feasibility is monotone
+// in pitch: the long-joint reduction of Fnv starts past a pattern length,
+// and a pitch smaller than the stagger brings staggered holes closer as
+// it grows.
+func (p *problem) segments(g *group) [][2]int {
+	limit, _ := p.ed.LongJoint()
+	class := func(i int) int {
+		s := g.pitch[i]
+		if g.stag > 0 && s < g.stag-1e-9 && g.perLine > 1 {
+			return -1 - i // a run of its own
+		}
+		if units.Length(g.perLine-1)*s+g.stag > limit+1e-6 {
+			return 1
+		}
+		return 0
+	}
+	var segs [][2]int
+	for i := range g.pitch {
+		if n := len(segs); n > 0 && class(i) >= 0 && class(i) == class(segs[n-1][1]) {
+			segs[n-1][1] = i
+			continue
+		}
+		segs = append(segs, [2]int{i, i})
+	}
+	return segs
+}
+
+// boltBounds are the most one bolt can carry whatever the layout: its
+// shear strength without the long-joint reduction, its slip resistance,
+// and the bearing cap of its hole in the member and in the plate.
+type boltBounds struct {
+	demand units.Force
+	avail  []units.Force // available strength of one bolt, per limit state
+}
+
+// pass reports whether n bolts could reach the demand in every bound; a
+// strict test (ratio clearly over 1) so that rounding never prunes a
+// layout that passes.
+func (b boltBounds) pass(n int) bool {
+	for _, a := range b.avail {
+		if float64(b.demand) > float64(a)*float64(n)*(1+1e-6) {
+			return false
+		}
+	}
+	return true
+}
+
+// perBolt computes the bounds with the engine's own formulas on one hole
+// far from every edge.
+func (p *problem) perBolt(t *Design) boltBounds {
+	c := t.Conn
+	far := units.Length(1e7)
+	hs, _ := p.ed.Hole(c.Bolt.D, p.job.Bolts.Hole)
+	slot := rules.Transverse
+	if p.job.Bolts.Hole.IsSlot() {
+		slot = p.job.Bolts.Slot
+	}
+	dx, dy := holeExtent(hs, p.job.Bolts.Hole, slot)
+	c.Holes = []engine.Hole{{X: far, Y: dy, Type: p.job.Bolts.Hole, Slot: slot, Dx: dx, Dy: dy}}
+	b := boltBounds{demand: c.Demand}
+	b.avail = append(b.avail, engine.BoltShear(&c).Available, engine.MemberBearing(&c).Available)
+	if c.Bolt.Joint == rules.SlipCritical {
+		if s, err := engine.BoltSlip(&c); err == nil {
+			b.avail = append(b.avail, s.Available)
+		}
+	}
+	if c.Plate != nil {
+		pl := *c.Plate
+		pl.FreeEdge = 2 * far
+		c.Plate = &pl
+		b.avail = append(b.avail, engine.PlateBearing(&c).Available)
+	}
+	return b
+}
+
+// yieldBlocker returns member.yield when it fails: no layout helps.
+func (p *problem) yieldBlocker() *Blocker {
+	if len(p.groups) == 0 {
+		return nil
+	}
+	c := &p.groups[0].tmpl.Conn
+	r := engine.MemberYield(c)
+	if r.Pass {
+		return nil
+	}
+	sys := p.job.Units
+	need := c.Member.Ag * units.Area(r.Ratio)
+	return &Blocker{ID: r.ID, Ratio: r.Ratio,
+		Text: fmt.Sprintf("member.yield needs Ag ≥ %s (has %s)", areaText(need, sys), areaText(c.Member.Ag, sys)),
+		Lift: "choose a larger member or a stronger grade; no bolt layout changes gross yielding",
+	}
+}
+
+func areaText(a units.Area, sys units.System) string {
+	return fmt.Sprintf("%.3g %s", sys.ToJob(float64(a), units.DimArea), sys.Label(units.DimArea))
+}
+
+func forceText(f units.Force, sys units.System) string {
+	return fmt.Sprintf("%.1f %s", sys.ToJob(float64(f), units.DimForce), sys.Label(units.DimForce))
+}
+
+// space counts the candidates in the space.
+func (p *problem) space() int {
+	n := 0
+	for _, g := range p.groups {
+		per := len(g.pitch) * len(g.end) * len(g.edge)
+		for i := range g.gage2 {
+			n += per * len(p.gagesFor(g, i))
+		}
+	}
+	return n
+}
+
+// ---------------------------------------------------------------------
+// Candidates.
+
+// cand is one layout of a group: indexes into its ranges.
+type cand struct {
+	g       *group
+	g2i     int
+	g1      units.Length
+	i, j, k int // pitch, end, edge
+	lenNm   int64
+	rep     *Report
+	ratioB  int64
+}
+
+type candKey struct {
+	group, g2i int
+	g1         int64
+	i, j, k    int
+}
+
+func (c *cand) key() candKey {
+	return candKey{c.g.idx, c.g2i, int64(math.Round(float64(c.g1) * 1e6)), c.i, c.j, c.k}
+}
+
+func (c *cand) length() units.Length {
+	g := c.g
+	return g.end[c.j] + units.Length(g.perLine-1)*g.pitch[c.i] + g.stag + g.edge[c.k]
+}
+
+func (p *problem) newCand(g *group, g2i int, g1 units.Length, i, j, k int) *cand {
+	c := &cand{g: g, g2i: g2i, g1: g1, i: i, j: j, k: k}
+	c.lenNm = int64(math.Round(float64(c.length()) * 1e6)) // nm: exact ties
+	return c
+}
+
+// design builds the candidate's Design the way Build does, from the
+// group's template; false when a hole leaves the member or the plate.
+func (p *problem) design(c *cand) (*Design, bool) {
+	g := c.g
+	t := g.tmpl
+	d := &Design{Job: p.job, Conn: t.Conn, Info: t.Info, Combination: t.Combination}
+	conn := &d.Conn
+	w := conn.Member.Width
+	s, e, g2 := g.pitch[c.i], g.end[c.j], g.gage2[c.g2i]
+	conn.Holes = make([]engine.Hole, 0, g.nT)
+	for li := range g.lines {
+		y := c.g1 + units.Length(li)*g2
+		for k := range g.perLine {
+			x := e + units.Length(k)*s
+			if li%2 == 1 {
+				x += g.stag
+			}
+			if x-g.dx/2 < -eps || y-g.dy/2 < -eps || y+g.dy/2 > w+eps {
+				return nil, false
+			}
+			conn.Holes = append(conn.Holes, engine.Hole{ID: holeID(len(conn.Holes)), X: x, Y: y,
+				Type: g.hole, Slot: g.slot, Dx: g.dx, Dy: g.dy})
+		}
+	}
+	if t.Conn.Plate != nil {
+		pl := *t.Conn.Plate
+		var xmax, ysum units.Length
+		for i, h := range conn.Holes {
+			if i == 0 || h.X > xmax {
+				xmax = h.X
+			}
+			ysum += h.Y
+		}
+		pl.FreeEdge = xmax + g.edge[c.k]
+		pl.YCentre = ysum / units.Length(len(conn.Holes))
+		for _, h := range conn.Holes {
+			if h.Y-h.Dy/2 < pl.YMin()-eps || h.Y+h.Dy/2 > pl.YMax()+eps {
+				return nil, false
+			}
+		}
+		conn.Plate = &pl
+	}
+	return d, true
+}
+
+var holeIDs = func() []string {
+	ids := make([]string, maxHoles)
+	for i := range ids {
+		ids[i] = fmt.Sprintf("H%d", i+1)
+	}
+	return ids
+}()
+
+func holeID(i int) string { return holeIDs[i] }
+
+// eval checks the candidate, through the cache when there is one, and
+// counts the check; false when its holes leave a part.
+func (p *problem) eval(c *cand) bool {
+	if c.rep != nil {
+		return true
+	}
+	if p.cache != nil {
+		if r, ok := p.cache[c.key()]; ok {
+			c.setReport(r)
+			return r != nil
+		}
+	}
+	ok := p.check(c)
+	if ok {
+		p.evals++
+	}
+	if p.cache != nil {
+		p.cache[c.key()] = c.rep
+	}
+	return ok
+}
+
+// check builds and checks the candidate; false when its holes leave a
+// part. It changes nothing but c, so workers may call it at once.
+func (p *problem) check(c *cand) bool {
+	d, ok := p.design(c)
+	if !ok {
+		return false
+	}
+	r, err := Check(d)
+	if err != nil {
+		return false // a lookup the edition cannot answer: not a candidate
+	}
+	c.setReport(r)
+	return true
+}
+
+func (c *cand) setReport(r *Report) {
+	c.rep = r
+	if r != nil {
+		c.ratioB = ratioBucket(r.GoverningResult().Ratio)
+	}
+}
+
+// ratioBucket is a ratio to 6 decimals: ratios that close are a tie,
+// which the tie-breaks settle, so that rounding noise in sums of grid
+// values never decides.
+func ratioBucket(ratio float64) int64 {
+	if math.IsNaN(ratio) || ratio > 1e12 {
+		return math.MaxInt64
+	}
+	return int64(math.Round(ratio * 1e6))
+}
+
+func (c *cand) feasible() bool { return c.rep != nil && c.rep.Pass }
+
+// cmpPrefix orders by the objective's first three keys.
+func cmpPrefix(obj Objective, nA int, lenA int64, dA units.Length, nB int, lenB int64, dB units.Length) int {
+	if obj == ShortestLength {
+		return cmp.Or(cmp.Compare(lenA, lenB), cmp.Compare(nA, nB), cmp.Compare(dA, dB))
+	}
+	return cmp.Or(cmp.Compare(nA, nB), cmp.Compare(lenA, lenB), cmp.Compare(dA, dB))
+}
+
+// compare is the total order of SPEC §6 with its deterministic tie-breaks.
+func compare(obj Objective, a, b *cand) int {
+	ga, gb := a.g, b.g
+	return cmp.Or(
+		cmpPrefix(obj, ga.nT, a.lenNm, ga.d, gb.nT, b.lenNm, gb.d),
+		cmp.Compare(a.ratioB, b.ratioB),
+		tieBreak(a, b),
+	)
+}
+
+// tieBreak orders layouts of equal bolts, length, diameter and ratio.
+func tieBreak(a, b *cand) int {
+	ga, gb := a.g, b.g
+	return cmp.Or(
+		cmp.Compare(ga.gi, gb.gi),
+		cmp.Compare(ga.tp, gb.tp),
+		cmp.Compare(ga.lines, gb.lines),
+		cmp.Compare(ga.perLine, gb.perLine),
+		cmp.Compare(a.g1, b.g1),
+		cmp.Compare(ga.gage2[a.g2i], gb.gage2[b.g2i]),
+		cmp.Compare(ga.end[a.j], gb.end[b.j]),
+		cmp.Compare(ga.pitch[a.i], gb.pitch[b.i]),
+		cmp.Compare(ga.edge[a.k], gb.edge[b.k]),
+		cmp.Compare(ga.idx, gb.idx),
+	)
+}
+
+// ---------------------------------------------------------------------
+// Exhaustive enumeration: the reference.
+
+// exhaustive checks every candidate and returns the best of each
+// arrangement, best first, under the job's objective, and the best of
+// each group under the other one. Groups are shared out among the cores.
+func (p *problem) exhaustive() (bests, others []*cand) {
+	type result struct {
+		best  *cand
+		evals int
+	}
+	res := make([]result, len(p.groups))
+	next := make(chan int)
+	var wg sync.WaitGroup
+	for range max(1, runtime.GOMAXPROCS(0)) {
+		wg.Add(1)
+		go func() {
+			defer wg.Done()
+			for gi := range next {
+				res[gi].best, res[gi].evals = p.exhaustGroup(p.groups[gi])
+			}
+		}()
+	}
+	for gi := range p.groups {
+		next <- gi
+	}
+	close(next)
+	wg.Wait()
+	for _, r := range res {
+		p.evals += r.evals
+		if r.best != nil {
+			bests = append(bests, r.best)
+		}
+	}
+	others = slices.Clone(bests)
+	slices.SortFunc(bests, func(a, b *cand) int { return compare(p.obj, a, b) })
+	slices.SortFunc(others, func(a, b *cand) int { return compare(p.obj.other(), a, b) })
+	return onePerArrangement(bests), others
+}
+
+// exhaustGroup checks every candidate of one group and returns the best
+// and the number checked.
+func (p *problem) exhaustGroup(g *group) (best *cand, evals int) {
+	for g2i := range g.gage2 {
+		for _, g1 := range g.gages[g2i] {
+			for i := range g.pitch {
+				for j := range g.end {
+					for k := range g.edge {
+						c := p.newCand(g, g2i, g1, i, j, k)
+						if !p.check(c) {
+							continue
+						}
+						evals++
+						if !c.feasible() {
+							c.rep = nil // keep memory flat: only the best stay
+							continue
+						}
+						if best == nil || compare(p.obj, c, best) < 0 {
+							best = c
+						}
+					}
+				}
+			}
+		}
+	}
+	return best, evals
+}
+
+// arrangement is what alternatives are told apart by: diameter, grade,
+// lines and bolts per line (not the plate thickness).
+type arrangement struct{ di, gi, lines, perLine int }
+
+func (g *group) arrangement() arrangement { return arrangement{g.di, g.gi, g.lines, g.perLine} }
+
+// onePerArrangement keeps the first (best) layout of each arrangement of
+// a sorted list.
+func onePerArrangement(cs []*cand) []*cand {
+	seen := map[arrangement]bool{}
+	out := cs[:0:0]
+	for _, c := range cs {
+		if a := c.g.arrangement(); !seen[a] {
+			seen[a] = true
+			out = append(out, c)
+		}
+	}
+	return out
+}
+
+// ---------------------------------------------------------------------
+// Pruned search.
+
+// lowerLen is the shortest layout of a group, in nm.
+func (g *group) lowerLen() int64 {
+	l := g.end[0] + units.Length(g.perLine-1)*g.pitch[0] + g.stag + g.edge[0]
+	return int64(math.Round(float64(l) * 1e6))
+}
+
+// bestPerGroup returns the best layout of each of the k best arrangements
+// under obj, best first, pruning groups and layouts that cannot enter the
+// k best. (A group whose bound is the k-th best cannot improve on an
+// arrangement already among them either: that one is better still.)
+func (p *problem) bestPerGroup(obj Objective, k int) []*cand {
+	order := slices.Clone(p.groups)
+	slices.SortStableFunc(order, func(a, b *group) int {
+		return cmp.Or(cmpPrefix(obj, a.nT, a.lowerLen(), a.d, b.nT, b.lowerLen(), b.d), cmp.Compare(a.idx, b.idx))
+	})
+	var list []*cand
+	for _, g := range order {
+		if !g.viable {
+			continue
+		}
+		var bound *cand
+		if len(list) >= k {
+			bound = list[k-1]
+			if cmpPrefix(obj, g.nT, g.lowerLen(), g.d, bound.g.nT, bound.lenNm, bound.g.d) > 0 {
+				continue
+			}
+		}
+		s := &searcher{p: p, obj: obj, bound: bound}
+		s.group(g)
+		if s.best == nil {
+			continue
+		}
+		list = append(list, s.best)
+		slices.SortFunc(list, func(a, b *cand) int { return compare(obj, a, b) })
+		list = firstN(onePerArrangement(list), k)
+	}
+	return list
+}
+
+// searcher finds the best layout of one group that could beat bound.
+type searcher struct {
+	p     *problem
+	obj   Objective
+	bound *cand // nil: none
+	best  *cand // best in the group so far
+	// lastDead: the last run searched had no passing layout.
+	lastDead bool
+	// across holds, per gage2 index, layouts (pitch, end, edge) that fail
+	// for a reason that does not depend on where the gage lines sit across
+	// the member: they fail at every gage.
+	across map[int][]probe
+	// lowRatio holds, per gage2 index and pitch, end and edge, a lower
+	// bound of the governing ratio at any gage (bucketed as cand.ratioB):
+	// the highest ratio among the limit states that do not depend on the
+	// gage, from a layout checked at some gage.
+	lowRatio map[[4]int]int64
+}
+
+// allowed reports whether the layout c, whose governing ratio is at
+// least low (bucketed; -1: unknown), could still beat the bound and the
+// group's best. The ratio only matters at the same bolts, length and
+// diameter, the tie-breaks only at the same ratio.
+func (s *searcher) allowed(c *cand, low int64) bool {
+	// a layout at the same bolts, length and diameter as b whose ratio is
+	// at least low loses to b
+	loses := func(b *cand) bool { return low > b.ratioB || low == b.ratioB && tieBreak(c, b) > 0 }
+	if b := s.best; b != nil && (c.lenNm > b.lenNm || c.lenNm == b.lenNm && loses(b)) {
+		return false
+	}
+	if b := s.bound; b != nil {
+		g := c.g
+		p := cmpPrefix(s.obj, g.nT, c.lenNm, g.d, b.g.nT, b.lenNm, b.g.d)
+		if p > 0 || p == 0 && loses(b) {
+			return false
+		}
+	}
+	return true
+}
+
+// lowRatioOf returns the lower bound of the ratio of a layout, or -1.
+func (s *searcher) lowRatioOf(g2i, i, j, k int) int64 {
+	if v, ok := s.lowRatio[[4]int{g2i, i, j, k}]; ok {
+		return v
+	}
+	return -1
+}
+
+// noteRatio records the gage-independent part of a checked layout's
+// ratio for every gage.
+func (s *searcher) noteRatio(g2i, i, j, k int, r *Report) {
+	low := 0.0
+	for _, x := range r.Results {
+		if x.ID != "member.block-shear" {
+			low = max(low, x.Ratio)
+		}
+	}
+	if s.lowRatio == nil {
+		s.lowRatio = map[[4]int]int64{}
+	}
+	key := [4]int{g2i, i, j, k}
+	if b := ratioBucket(low); b > s.lowRatio[key] {
+		s.lowRatio[key] = b
+	}
+}
+
+func (s *searcher) offer(c *cand) {
+	if !c.feasible() {
+		return
+	}
+	if s.bound != nil && compare(s.obj, c, s.bound) >= 0 {
+		return
+	}
+	if s.best == nil || compare(s.obj, c, s.best) < 0 {
+		s.best = c
+	}
+}
+
+func (s *searcher) group(g *group) {
+	angle := g.tmpl.Conn.Member.Shape != engine.Flat
+	for g2i := range g.gage2 {
+		for _, g1 := range s.p.gagesFor(g, g2i) {
+			tried, gageOK := false, false
+			for _, seg := range g.segments {
+				t, ok := s.sub(g, g2i, g1, seg[0], seg[1])
+				tried = tried || t
+				gageOK = gageOK || ok
+			}
+			// Angles: the smallest gage that passes the gage rules
+			// dominates; with nothing tried, the bound cut every
+			// layout, whatever the gage.
+			if angle && (gageOK || !tried) {
+				break
+			}
+		}
+	}
+}
+
+// probe is a checked layout of a monotone run.
+type probe struct {
+	i, j, k int
+	feas    bool
+}
+
+// sub searches pitch indexes ia…ib of one gage position, where
+// feasibility is monotone in pitch, end and edge. It reports whether it
+// tried any layout (false: the bound cut them all) and whether a built
+// layout passes the gage rules.
+func (s *searcher) sub(g *group, g2i int, g1 units.Length, ia, ib int) (tried, gageOK bool) {
+	p := s.p
+	nE, nK := len(g.end), len(g.edge)
+	var known []probe
+	for _, q := range s.across[g2i] {
+		if q.i >= ia && q.i <= ib { // monotone within this run only
+			known = append(known, q)
+		}
+	}
+	cands := map[[3]int]*cand{}
+	get := func(i, j, k int) *cand {
+		c, ok := cands[[3]int{i, j, k}]
+		if !ok {
+			c = p.newCand(g, g2i, g1, i, j, k)
+			cands[[3]int{i, j, k}] = c
+		}
+		return c
+	}
+	check := func(c *cand) bool {
+		if c.rep == nil {
+			tried = true
+			if p.eval(c) {
+				gageOK = gageOK || gageRulesPass(c.rep)
+				s.noteRatio(g2i, c.i, c.j, c.k, c.rep)
+			}
+		}
+		return c.feasible()
+	}
+	feasible := func(i, j, k int) bool {
+		for _, q := range known {
+			if q.feas && q.i <= i && q.j <= j && q.k <= k {
+				return true
+			}
+			if !q.feas && q.i >= i && q.j >= j && q.k >= k {
+				return false
+			}
+		}
+		c := get(i, j, k)
+		f := check(c)
+		known = append(known, probe{i, j, k, f})
+		if !f && c.rep != nil && failsAtEveryGage(c.rep) {
+			if s.across == nil {
+				s.across = map[int][]probe{}
+			}
+			s.across[g2i] = append(s.across[g2i], probe{i, j, k, false})
+		}
+		return f
+	}
+	var mins [][3]int
+	var minLen int64 = math.MaxInt64
+	found := func(i, j, k int) {
+		l := get(i, j, k).lenNm
+		switch {
+		case l < minLen:
+			minLen, mins = l, [][3]int{{i, j, k}}
+		case l == minLen:
+			mins = append(mins, [3]int{i, j, k})
+		}
+	}
+	ok := func(i, j, k int) bool {
+		c := get(i, j, k)
+		return c.lenNm <= minLen && s.allowed(c, s.lowRatioOf(g2i, i, j, k))
+	}
+
+	if !ok(ia, 0, 0) {
+		return
+	}
+	// Probe the shortest layout first (when it passes it is the answer)
+	// unless the last run was dead, then the strongest (when it fails, so
+	// does every other). Either order is exact; this one checks less.
+	dead := false
+	if s.lastDead {
+		dead = !feasible(ib, nE-1, nK-1)
+	}
+	switch {
+	case dead:
+	case feasible(ia, 0, 0):
+		found(ia, 0, 0) // the only layout of least length
+	case !feasible(ib, nE-1, nK-1):
+		dead = true // the strongest layout fails: so does every other
+	default:
+		// Staircase: for each pitch, the least end that passes with the
+		// largest edge (binary search, monotone in end), then for each
+		// end the least passing edge, which never grows with end.
+		jTop := nE - 1
+		for i := ia; i <= ib && ok(i, 0, 0); i++ {
+			jmax := jTop
+			for jmax > 0 && !ok(i, jmax, 0) {
+				jmax--
+			}
+			if !feasible(i, jmax, nK-1) {
+				continue
+			}
+			lo, hi := 0, jmax
+			for lo < hi {
+				mid := (lo + hi) / 2
+				if feasible(i, mid, nK-1) {
+					hi = mid
+				} else {
+					lo = mid + 1
+				}
+			}
+			jTop = hi // never more with more pitch
+			kUp := nK - 1
+			for j := hi; j < nE && ok(i, j, 0); j++ {
+				kmax := kUp
+				for kmax >= 0 && !ok(i, j, kmax) {
+					kmax--
+				}
+				if kmax < 0 || !feasible(i, j, kmax) {
+					continue
+				}
+				lo, hi := 0, kmax
+				for lo < hi {
+					mid := (lo + hi) / 2
+					if feasible(i, j, mid) {
+						hi = mid
+					} else {
+						lo = mid + 1
+					}
+				}
+				found(i, j, hi)
+				kUp = hi
+				if hi == 0 {
+					break
+				}
+			}
+		}
+	}
+	s.lastDead = dead
+	for _, m := range mins {
+		c := get(m[0], m[1], m[2])
+		check(c)
+		s.offer(c)
+	}
+	return
+}
+
+// failsAtEveryGage reports whether a failing report fails only checks
+// that do not depend on where the gage lines sit across the member, so
+// that the same pitch, end and edge fail at every gage: everything but
+// member block shear (its blocks reach the member's edges), the gage
+// rules and the edge distances to the member's toe or sides. Plate
+// checks see the plate centred on the bolt group; net sections, Whitmore
+// sections, bearing and spacing see only distances between holes.
+func failsAtEveryGage(r *Report) bool {
+	failing := false
+	for _, x := range r.Results {
+		if x.Pass {
+			continue
+		}
+		if x.ID == "member.block-shear" {
+			return false
+		}
+		failing = true
+	}
+	for _, f := range r.Findings {
+		if f.Pass || f.Advisory {
+			continue
+		}
+		if isGageFinding(f) {
+			return false
+		}
+		failing = true
+	}
+	return failing
+}
+
+// isGageFinding: a detailing finding that depends on where the gage
+// lines sit across the member.
+func isGageFinding(f Finding) bool {
+	return f.ID == "gage.workable" || (f.ID == "edge.min" || f.ID == "edge.max") &&
+		(strings.HasSuffix(f.Where, "member toe") || strings.Contains(f.Where, "member edge (y"))
+}
+
+// gageRulesPass reports whether the rules that depend on where the gage
+// lines sit across an angle leg pass: gage.workable and the edge
+// distances to the member toe.
+func gageRulesPass(r *Report) bool {
+	for _, f := range r.Findings {
+		if !f.Pass && !f.Advisory && isGageFinding(f) {
+			return false
+		}
+	}
+	return true
+}
+
+// ---------------------------------------------------------------------
+// Results.
+
+func (p *problem) layout(c *cand) Layout {
+	g := c.g
+	return Layout{
+		Diameter: g.d, Grade: p.grades[g.gi], Lines: g.lines, PerLine: g.perLine,
+		Pitch: g.pitch[c.i], End: g.end[c.j], Gage: c.g1, Gage2: g.gage2[c.g2i], Stagger: g.stag,
+		PlateThickness: g.tp, PlateEdge: g.edge[c.k],
+		diameterText: p.diams[g.di].text, thicknessText: p.thick[g.ti].text,
+	}
+}
+
+// alternatives picks n layouts besides the choice tops[0]: the best of
+// the next best arrangements, with the best under the other objective
+// always among them when its arrangement differs.
+func (p *problem) alternatives(tops []*cand, other *cand, n int) []Alternative {
+	rest := slices.Clone(tops[1:])
+	same := func(c *cand) bool { return c.g.arrangement() == other.g.arrangement() }
+	if other != nil && !same(tops[0]) && !slices.ContainsFunc(rest, same) {
+		if len(rest) >= n {
+			rest = rest[:n-1]
+		}
+		rest = append(rest, other)
+		slices.SortFunc(rest, func(a, b *cand) int { return compare(p.obj, a, b) })
+	}
+	var out []Alternative
+	for _, c := range firstN(rest, n) {
+		g := c.rep.GoverningResult()
+		out = append(out, Alternative{Layout: p.layout(c), Length: c.length(), Governing: g.ID, Ratio: g.Ratio})
+	}
+	return out
+}
+
+// ---------------------------------------------------------------------
+// Infeasible jobs.
+
+// diagnose explains why nothing passes. It checks the strongest layout of
+// every monotone run (largest pitch, end and edge, every gage), so a limit
+// state that fails in all of them fails in every candidate; the numbers
+// come from the layout that does best in it.
+func (p *problem) diagnose(out *Proposal) {
+	sys := p.job.Units
+	var corners []*cand
+	maxBolts := 0
+	for _, g := range p.groups {
+		maxBolts = max(maxBolts, g.nT)
+		if !g.fits {
+			continue
+		}
+		for g2i := range g.gage2 {
+			for _, g1 := range p.gagesFor(g, g2i) {
+				for _, seg := range g.segments {
+					c := p.newCand(g, g2i, g1, seg[1], len(g.end)-1, len(g.edge)-1)
+					if p.eval(c) {
+						corners = append(corners, c)
+					}
+				}
+			}
+		}
+	}
+	if len(corners) == 0 {
+		b := Blocker{ID: "fit", Text: "no candidate fits: every layout puts a hole off the member or the plate",
+			Lift: "use a smaller bolt, a member with a wider connected leg, or a wider plate"}
+		out.Blockers, out.Summary = []Blocker{b}, b.Text+": "+b.Lift
+		return
+	}
+	type best struct {
+		x engine.Result
+		c *cand
+	}
+	var ids []string
+	bestOf := map[string]best{}
+	failsAll := map[string]bool{}
+	findingFailsAll := map[string]*Finding{}
+	for n, c := range corners {
+		for _, x := range c.rep.Results {
+			b, seen := bestOf[x.ID]
+			if !seen {
+				ids = append(ids, x.ID)
+				failsAll[x.ID] = true
+			}
+			if !seen || x.Ratio < b.x.Ratio {
+				bestOf[x.ID] = best{x, c}
+			}
+			failsAll[x.ID] = failsAll[x.ID] && !x.Pass
+		}
+		failing := map[string]*Finding{}
+		for i := range c.rep.Findings {
+			f := &c.rep.Findings[i]
+			if !f.Pass && !f.Advisory && failing[f.ID] == nil {
+				failing[f.ID] = f
+			}
+		}
+		if n == 0 {
+			findingFailsAll = failing
+			continue
+		}
+		for id := range findingFailsAll {
+			if failing[id] == nil {
+				delete(findingFailsAll, id)
+			}
+		}
+	}
+	for _, id := range ids {
+		if !failsAll[id] {
+			continue
+		}
+		b := bestOf[id]
+		text, lift := p.lift(b.x, b.c, maxBolts)
+		out.Blockers = append(out.Blockers, Blocker{ID: id, Ratio: b.x.Ratio, Text: text, Lift: lift})
+	}
+	slices.SortStableFunc(out.Blockers, func(a, b Blocker) int { return cmp.Compare(b.Ratio, a.Ratio) })
+	var fids []string
+	for id := range findingFailsAll {
+		fids = append(fids, id)
+	}
+	slices.Sort(fids)
+	for _, id := range fids {
+		f := findingFailsAll[id]
+		out.Blockers = append(out.Blockers, Blocker{ID: id,
+			Text: fmt.Sprintf("%s (%s) fails in every candidate: %s", id, f.Clause, f.Where),
+			Lift: findingLift(id)})
+	}
+	if len(out.Blockers) == 0 {
+		closest := corners[0]
+		for _, c := range corners[1:] {
+			if c.rep.GoverningResult().Ratio < closest.rep.GoverningResult().Ratio {
+				closest = c
+			}
+		}
+		g := closest.rep.GoverningResult()
+		out.Summary = fmt.Sprintf("no candidate passes every check, but no single check fails in all of them; the closest, %s, fails %s (ratio %.3f)",
+			p.layout(closest).describe(sys), g.ID, g.Ratio)
+		return
+	}
+	b := out.Blockers[0]
+	out.Summary = b.Text + ": " + b.Lift
+}
+
+// lift words what a failing limit state needs, with numbers from the
+// layout c that does best in it.
+func (p *problem) lift(x engine.Result, c *cand, maxBolts int) (text, lift string) {
+	sys := p.job.Units
+	val := func(name string) float64 {
+		for _, v := range x.Values {
+			if v.Name == name {
+				return v.V
+			}
+		}
+		return 0
+	}
+	text = fmt.Sprintf("%s fails in every candidate: at best %s available for %s (ratio %.3f)",
+		x.ID, forceText(x.Available, sys), forceText(x.Demand, sys), x.Ratio)
+	g := c.g
+	switch x.ID {
+	case "member.rupture":
+		Ae := units.Area(val("Ae"))
+		text = fmt.Sprintf("member.rupture needs Ae ≥ %s (best layout has %s; ratio %.3f)",
+			areaText(Ae*units.Area(x.Ratio), sys), areaText(Ae, sys), x.Ratio)
+		lift = "choose a larger member or a stronger grade"
+	case "member.block-shear", "member.bearing":
+		lift = fmt.Sprintf("choose a thicker member (about %s instead of %s) or a stronger grade",
+			units.FormatJob(thicknessUp(g.tmpl.Conn.Member.T*units.Length(x.Ratio), sys), sys), units.FormatJob(g.tmpl.Conn.Member.T, sys))
+	case "plate.yield", "plate.rupture", "plate.block-shear", "plate.bearing":
+		// strength is proportional to the plate thickness
+		need := thicknessUp(g.tp*units.Length(x.Ratio), sys)
+		text = fmt.Sprintf("%s needs a plate at least %s thick (the best layout, with %s, reaches ratio %.3f)",
+			x.ID, units.FormatJob(need, sys), units.FormatJob(g.tp, sys), x.Ratio)
+		lift = "choose a thicker plate or a stronger plate grade"
+		if x.ID == "plate.yield" || x.ID == "plate.rupture" {
+			lift = "choose a thicker or wider plate, or a stronger plate grade"
+		}
+	case "bolts.shear", "bolts.slip":
+		per := x.Available / units.Force(max(val("n"), 1))
+		need := int(math.Ceil(float64(x.Demand/per) - 1e-9))
+		text = fmt.Sprintf("%s needs at least %d bolts of %s %s (the stock allows %d; at best ratio %.3f)",
+			x.ID, need, boltSize(g.d, sys), p.grades[g.gi], maxBolts, x.Ratio)
+		lift = "allow more bolts (stock.max_per_line, stock.max_lines), a larger diameter or a stronger grade"
+		if x.ID == "bolts.slip" {
+			lift += ", or a class B faying surface"
+		}
+	case "bolts.group":
+		lift = "allow more bolts, or thicker parts"
+	default:
+		lift = "change the member, the plate or the stock"
+	}
+	return text, lift
+}
+
+// thicknessUp rounds a thickness up to the next 1/16 in (us) or 1 mm (si).
+func thicknessUp(t units.Length, sys units.System) units.Length {
+	unit := units.Inch / 16
+	if sys == units.SI {
+		unit = units.Millimetre
+	}
+	return units.Length(math.Ceil(float64(t/unit)-1e-9)) * unit
+}
+
+func findingLift(id string) string {
+	switch id {
+	case "hole.type":
+		return "use a hole type the joint permits"
+	case "gage.workable", "edge.min":
+		return "use a smaller bolt or a member with a longer connected leg"
+	case "edge.max", "spacing.max":
+		return "use thicker parts or a smaller step"
+	}
+	return "change the bolt size or the member"
+}
+
+// ---------------------------------------------------------------------
+// Output.
+
+// describe writes the layout in one line for people.
+func (l Layout) describe(sys units.System) string {
+	s := fmt.Sprintf("%d × %s %s", l.Bolts(), boltSize(l.Diameter, sys), l.Grade)
+	if l.Lines > 1 {
+		s += fmt.Sprintf(" in %d lines of %d, gage2 %s", l.Lines, l.PerLine, units.FormatJob(l.Gage2, sys))
+	}
+	if l.PerLine > 1 {
+		s += ", pitch " + units.FormatJob(l.Pitch, sys)
+	}
+	s += ", end " + units.FormatJob(l.End, sys) + ", gage " + units.FormatJob(l.Gage, sys)
+	if l.PlateThickness > 0 {
+		s += fmt.Sprintf(", plate %s with edge %s", units.FormatJob(l.PlateThickness, sys), units.FormatJob(l.PlateEdge, sys))
+	}
+	return s
+}
+
+// diameterValue is the diameter as the job file writes it.
+func (l Layout) diameterValue(sys units.System) string {
+	if l.diameterText != "" {
+		return l.diameterText
+	}
+	if sys == units.SI {
+		return fmt.Sprintf("M%g", l.Diameter.Mm())
+	}
+	return units.FormatJob(l.Diameter, sys)
+}
+
+func (l Layout) thicknessValue(sys units.System) string {
+	if l.thicknessText != "" {
+		return l.thicknessText
+	}
+	return units.FormatJob(l.PlateThickness, sys)
+}
+
+type jsonLayout struct {
+	Diameter string `json:"diameter"`
+	Grade    string `json:"grade"`
+	Lines    int    `json:"lines"`
+	PerLine  int    `json:"per_line"`
+	Pitch    string `json:"pitch,omitempty"`
+	End      string `json:"end"`
+	Gage     string `json:"gage"`
+	Gage2    string `json:"gage2,omitempty"`
+	Stagger  string `json:"stagger,omitempty"`
+}
+
+type jsonPlateLayout struct {
+	Thickness string `json:"thickness"`
+	Edge      string `json:"edge"`
+}
+
+func (l Layout) json(sys units.System) (jsonLayout, *jsonPlateLayout) {
+	f := func(v units.Length) string { return jobLength(v, sys) }
+	jl := jsonLayout{Diameter: l.diameterValue(sys), Grade: l.Grade, Lines: l.Lines, PerLine: l.PerLine,
+		End: f(l.End), Gage: f(l.Gage)}
+	if l.PerLine > 1 {
+		jl.Pitch = f(l.Pitch)
+	}
+	if l.Lines > 1 {
+		jl.Gage2 = f(l.Gage2)
+		if l.Stagger > 0 {
+			jl.Stagger = f(l.Stagger)
+		}
+	}
+	if l.PlateThickness == 0 {
+		return jl, nil
+	}
+	return jl, &jsonPlateLayout{Thickness: l.thicknessValue(sys), Edge: f(l.PlateEdge)}
+}
+
+// lengthJSON is a connection length in the job's units, rid of the
+// rounding noise of summing grid values (they lie on a 1e-9 grid).
+func lengthJSON(l units.Length, sys units.System) jsonNum {
+	return jsonNum(math.Round(sys.ToJob(float64(l), units.DimLength)*1e9) / 1e9)
+}
+
+type jsonAlternative struct {
+	Layout    jsonLayout       `json:"layout"`
+	Plate     *jsonPlateLayout `json:"plate,omitempty"`
+	Bolts     int              `json:"bolts"`
+	Length    jsonNum          `json:"length"`
+	Governing string           `json:"governing"`
+	Ratio     jsonNum          `json:"ratio"`
+}
+
+type jsonSearch struct {
+	Mode          string `json:"mode"`
+	Objective     string `json:"objective"`
+	Space         int    `json:"space"`
+	Evaluated     int    `json:"evaluated"`
+	AltEvaluated  int    `json:"evaluated_alternatives"`
+	DiagEvaluated int    `json:"evaluated_diagnosis,omitempty"`
+}
+
+type jsonProposal struct {
+	jsonReport
+	Layout       jsonLayout        `json:"layout"`
+	Plate        *jsonPlateLayout  `json:"plate,omitempty"`
+	Bolts        int               `json:"bolts"`
+	Length       jsonNum           `json:"length"`
+	Alternatives []jsonAlternative `json:"alternatives"`
+	Search       jsonSearch        `json:"search"`
+}
+
+type jsonBlocker struct {
+	ID    string  `json:"id"`
+	Ratio jsonNum `json:"ratio,omitempty"`
+	What  string  `json:"what"`
+	Lift  string  `json:"lift"`
+}
+
+type jsonInfeasible struct {
+	Mark       string        `json:"mark"`
+	Standard   string        `json:"standard"`
+	Method     string        `json:"method"`
+	Units      string        `json:"units"`
+	UnitLabels units.Labels  `json:"unit_labels"`
+	Verdict    string        `json:"verdict"`
+	Message    string        `json:"message"`
+	Blocking   []jsonBlocker `json:"blocking"`
+	Search     jsonSearch    `json:"search"`
+	Cautions   []string      `json:"cautions"`
+}
+
+func (p *Proposal) search(mode SearchMode) jsonSearch {
+	m := "pruned"
+	if mode == Exhaustive {
+		m = "exhaustive"
+	}
+	return jsonSearch{Mode: m, Objective: p.Job.Stock.Objective.String(), Space: p.Space, Evaluated: p.Evaluated,
+		AltEvaluated: p.AltEvaluated, DiagEvaluated: p.DiagEvaluated}
+}
+
+// JSON returns the proposal as indented JSON: the check JSON of the chosen
+// layout (SPEC §9) plus "layout", "plate", "alternatives" and "search";
+// or, when nothing passes, the verdict "infeasible" with what blocks.
+func (p *Proposal) JSON(mode SearchMode) ([]byte, error) {
+	sys := p.Job.Units
+	var doc any
+	if p.Found() {
+		jl, jp := p.Layout.json(sys)
+		d := jsonProposal{jsonReport: p.Report.document(), Layout: jl, Plate: jp, Bolts: p.Layout.Bolts(),
+			Length: lengthJSON(p.Length, sys), Alternatives: []jsonAlternative{},
+			Search: p.search(mode)}
+		for _, a := range p.Alternatives {
+			al, ap := a.Layout.json(sys)
+			d.Alternatives = append(d.Alternatives, jsonAlternative{Layout: al, Plate: ap, Bolts: a.Layout.Bolts(),
+				Length: lengthJSON(a.Length, sys), Governing: a.Governing, Ratio: jsonNum(a.Ratio)})
+		}
+		doc = d
+	} else {
+		d := jsonInfeasible{Mark: p.Job.Mark, Standard: p.Job.Standard, Method: p.Job.Method.String(), Units: sys.String(),
+			UnitLabels: sys.Labels(), Verdict: "infeasible", Message: p.Summary, Blocking: []jsonBlocker{},
+			Search: p.search(mode), Cautions: []string{Caution}}
+		for _, b := range p.Blockers {
+			d.Blocking = append(d.Blocking, jsonBlocker{ID: b.ID, Ratio: jsonNum(b.Ratio), What: b.Text, Lift: b.Lift})
+		}
+		doc = d
+	}
+	var b bytes.Buffer
+	enc := json.NewEncoder(&b)
+	enc.SetIndent("", "  ")
+	if err := enc.Encode(doc); err != nil {
+		return nil, fmt.Errorf("detail: encoding proposal: %w", err)
+	}
+	return b.Bytes(), nil
+}
+
+// writeHead writes the proposal's own part: the layout as a bolts block,
+// the search and the alternatives.
+func (p *Proposal) writeHead(b *strings.Builder, mode SearchMode, md bool) {
+	sys := p.Job.Units
+	s := p.search(mode)
+	obj := "fewest bolts, then shortest"
+	if p.Job.Stock.Objective == ShortestLength {
+		obj = "shortest, then fewest bolts"
+	}
+	if md {
+		fmt.Fprintf(b, "# %s — proposed layout\n\n", p.Job.Mark)
+	} else {
+		fmt.Fprintf(b, "%s — proposed layout\n", p.Job.Mark)
+	}
+	fmt.Fprintf(b, "objective: %s; %s search checked %d of %d candidates\n", obj, s.Mode, p.Evaluated, p.Space)
+	if !p.Found() {
+		fmt.Fprintf(b, "\nno layout passes: %s\n", p.Summary)
+		for _, bl := range p.Blockers[min(1, len(p.Blockers)):] {
+			fmt.Fprintf(b, "  also: %s: %s\n", bl.Text, bl.Lift)
+		}
+		return
+	}
+	jl, jp := p.Layout.json(sys)
+	fence := ""
+	if md {
+		fence = "```yaml\n"
+		b.WriteString("\n" + fence)
+	} else {
+		b.WriteString("\n")
+	}
+	fmt.Fprintf(b, "bolts:\n  diameter: %s\n  grade: %s\n  lines: %d\n  per_line: %d\n", jl.Diameter, jl.Grade, jl.Lines, jl.PerLine)
+	if jl.Pitch != "" {
+		fmt.Fprintf(b, "  pitch: %s\n", jl.Pitch)
+	}
+	fmt.Fprintf(b, "  end: %s\n  gage: %s\n", jl.End, jl.Gage)
+	if jl.Gage2 != "" {
+		fmt.Fprintf(b, "  gage2: %s\n", jl.Gage2)
+	}
+	if jl.Stagger != "" {
+		fmt.Fprintf(b, "  stagger: %s\n", jl.Stagger)
+	}
+	if jp != nil {
+		fmt.Fprintf(b, "plate:\n  thickness: %s\n  edge: %s\n", jp.Thickness, jp.Edge)
+	}
+	if md {
+		b.WriteString("```\n")
+	}
+	fmt.Fprintf(b, "\n%d bolts, connection length %s\n", p.Layout.Bolts(), units.FormatJob(p.Length, sys))
+	if len(p.Alternatives) > 0 {
+		if md {
+			b.WriteString("\n## Alternatives\n\n| bolts | length | layout | governing | ratio |\n|---:|---:|---|---|---:|\n")
+			for _, a := range p.Alternatives {
+				fmt.Fprintf(b, "| %d | %s | %s | %s | %.3f |\n", a.Layout.Bolts(), units.FormatJob(a.Length, sys), a.Layout.describe(sys), a.Governing, a.Ratio)
+			}
+		} else {
+			b.WriteString("\nalternatives:\n")
+			tw := tabwriter.NewWriter(b, 0, 0, 2, ' ', 0)
+			fmt.Fprintf(tw, "  BOLTS\tLENGTH\tLAYOUT\tGOVERNING\tRATIO\n")
+			for _, a := range p.Alternatives {
+				fmt.Fprintf(tw, "  %d\t%s\t%s\t%s\t%.3f\n", a.Layout.Bolts(), units.FormatJob(a.Length, sys), a.Layout.describe(sys), a.Governing, a.Ratio)
+			}
+			tw.Flush()
+		}
+	}
+	b.WriteString("\n")
+}
+
+// WriteText writes the proposal for a terminal: the layout, the
+// alternatives and the full check of the layout.
+func (p *Proposal) WriteText(w io.Writer, mode SearchMode) error {
+	var b strings.Builder
+	p.writeHead(&b, mode, false)
+	if _, err := io.WriteString(w, b.String()); err != nil {
+		return err
+	}
+	if p.Found() {
+		return p.Report.WriteText(w)
+	}
+	_, err := fmt.Fprintf(w, "\nnote: %s\n", Caution)
+	return err
+}
+
+// WriteMarkdown writes the proposal as Markdown.
+func (p *Proposal) WriteMarkdown(w io.Writer, mode SearchMode) error {
+	var b strings.Builder
+	p.writeHead(&b, mode, true)
+	if _, err := io.WriteString(w, b.String()); err != nil {
+		return err
+	}
+	if p.Found() {
+		return p.Report.WriteMarkdown(w)
+	}
+	_, err := fmt.Fprintf(w, "\n> %s\n", Caution)
+	return err
+}
