@@ -1443,7 +1443,7 @@ func (p *problem) diagnose(out *Proposal) {
 		}
 		g := closest.rep.GoverningResult()
 		out.Summary = fmt.Sprintf("no candidate passes every check, but no single check fails in all of them; the closest, %s, fails %s (ratio %.3f)",
-			p.layout(closest).describe(sys), g.ID, g.Ratio)
+			p.layout(closest).Describe(sys), g.ID, g.Ratio)
 		return
 	}
 	b := out.Blockers[0]
@@ -1524,8 +1524,8 @@ func findingLift(id string) string {
 // ---------------------------------------------------------------------
 // Output.
 
-// describe writes the layout in one line for people.
-func (l Layout) describe(sys units.System) string {
+// Describe writes the layout in one line for people.
+func (l Layout) Describe(sys units.System) string {
 	s := fmt.Sprintf("%d × %s %s", l.Bolts(), boltSize(l.Diameter, sys), l.Grade)
 	if l.Lines > 1 {
 		s += fmt.Sprintf(" in %d lines of %d, gage2 %s", l.Lines, l.PerLine, units.FormatJob(l.Gage2, sys))
@@ -1744,14 +1744,14 @@ func (p *Proposal) writeHead(b *strings.Builder, mode SearchMode, md bool) {
 		if md {
 			b.WriteString("\n## Alternatives\n\n| bolts | length | layout | governing | ratio |\n|---:|---:|---|---|---:|\n")
 			for _, a := range p.Alternatives {
-				fmt.Fprintf(b, "| %d | %s | %s | %s | %.3f |\n", a.Layout.Bolts(), units.FormatJob(a.Length, sys), a.Layout.describe(sys), a.Governing, a.Ratio)
+				fmt.Fprintf(b, "| %d | %s | %s | %s | %.3f |\n", a.Layout.Bolts(), units.FormatJob(a.Length, sys), a.Layout.Describe(sys), a.Governing, a.Ratio)
 			}
 		} else {
 			b.WriteString("\nalternatives:\n")
 			tw := tabwriter.NewWriter(b, 0, 0, 2, ' ', 0)
 			fmt.Fprintf(tw, "  BOLTS\tLENGTH\tLAYOUT\tGOVERNING\tRATIO\n")
 			for _, a := range p.Alternatives {
-				fmt.Fprintf(tw, "  %d\t%s\t%s\t%s\t%.3f\n", a.Layout.Bolts(), units.FormatJob(a.Length, sys), a.Layout.describe(sys), a.Governing, a.Ratio)
+				fmt.Fprintf(tw, "  %d\t%s\t%s\t%s\t%.3f\n", a.Layout.Bolts(), units.FormatJob(a.Length, sys), a.Layout.Describe(sys), a.Governing, a.Ratio)
 			}
 			tw.Flush()
 		}

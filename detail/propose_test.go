@@ -237,8 +237,8 @@ func TestProposeFastEqualsExhaustive(t *testing.T) {
 		found++
 		if !reflect.DeepEqual(fast.Layout, ex.Layout) || fast.Length != ex.Length {
 			rt.Fatalf("layouts differ:\npruned     %s (ratio %.6f)\nexhaustive %s (ratio %.6f)\n%s",
-				fast.Layout.describe(job.Units), fast.Report.GoverningResult().Ratio,
-				ex.Layout.describe(job.Units), ex.Report.GoverningResult().Ratio, src)
+				fast.Layout.Describe(job.Units), fast.Report.GoverningResult().Ratio,
+				ex.Layout.Describe(job.Units), ex.Report.GoverningResult().Ratio, src)
 		}
 		if !reflect.DeepEqual(fast.Alternatives, ex.Alternatives) {
 			rt.Fatalf("alternatives differ:\npruned     %+v\nexhaustive %+v\n%s", fast.Alternatives, ex.Alternatives, src)
@@ -289,7 +289,7 @@ func proposeFile(t *testing.T, name string, exhaustive bool) *Proposal {
 			t.Fatal(err)
 		}
 		if !reflect.DeepEqual(p.Layout, ex.Layout) || !reflect.DeepEqual(p.Alternatives, ex.Alternatives) || p.Summary != ex.Summary {
-			t.Fatalf("pruned and exhaustive differ:\n%s\n%s", p.Layout.describe(job.Units), ex.Layout.describe(job.Units))
+			t.Fatalf("pruned and exhaustive differ:\n%s\n%s", p.Layout.Describe(job.Units), ex.Layout.Describe(job.Units))
 		}
 		t.Logf("%s: checked %d of %d (exhaustive %d)", name, p.Evaluated, p.Space, ex.Evaluated)
 	}

@@ -20,7 +20,7 @@ var sheetJobs = []string{
 	"../testdata/jobs/us-staggered-flat.yaml",
 	"../testdata/jobs/si-double-angle.yaml",
 	"../testdata/jobs/si-slotted.yaml",
-	"../cmd/gaugeline/demo/pipe-rack-brace.yaml",
+	"../testdata/jobs/us-pipe-rack-brace.yaml",
 	"../testdata/examples/aisc-d2.yaml",
 }
 

@@ -22,7 +22,7 @@ var jobs = []string{
 	"../testdata/jobs/us-staggered-flat.yaml",
 	"../testdata/jobs/si-double-angle.yaml",
 	"../testdata/jobs/si-slotted.yaml",
-	"../cmd/gaugeline/demo/pipe-rack-brace.yaml",
+	"../testdata/jobs/us-pipe-rack-brace.yaml",
 	"../testdata/examples/aisc-d2.yaml",
 	"inline:long-slot.yaml",
 	"inline:oversized.yaml",
@@ -299,7 +299,7 @@ func TestSheetReadsBack(t *testing.T) {
 }
 
 func TestFilesNames(t *testing.T) {
-	_, s := sheet(t, "../cmd/gaugeline/demo/pipe-rack-brace.yaml")
+	_, s := sheet(t, "../testdata/jobs/us-pipe-rack-brace.yaml")
 	fs, err := Files(s)
 	if err != nil {
 		t.Fatal(err)

@@ -21,7 +21,7 @@ var goldenJobs = []string{
 	"../testdata/jobs/us-staggered-flat.yaml",
 	"../testdata/jobs/si-double-angle.yaml",
 	"../testdata/jobs/si-slotted.yaml",
-	"../cmd/gaugeline/demo/pipe-rack-brace.yaml",
+	"../testdata/jobs/us-pipe-rack-brace.yaml",
 }
 
 const goldenDir = "../testdata/golden"

@@ -7,15 +7,25 @@ import (
 	"os"
 	"path"
 	"path/filepath"
+	"strings"
 
 	"github.com/spf13/cobra"
 
 	"gaugeline/detail"
+	"gaugeline/detail/calc"
 	"gaugeline/dxfout"
+	"gaugeline/rules/units"
 )
 
+// The demo is a scenario of our own invention: three tension connections
+// of a small pipe rack, proposed, checked and drawn, and one part
+// re-verified from a measured file the demo makes up.
+//
 //go:embed demo/*.yaml
 var demoJobs embed.FS
+
+// demoQAMark is the part the demo re-verifies as fabricated.
+const demoQAMark = "PR-VB2"
 
 type demoOptions struct {
 	dir string
@@ -25,14 +35,18 @@ func newDemoCmd(o *rootOptions) *cobra.Command {
 	var do demoOptions
 	cmd := &cobra.Command{
 		Use:   "demo [-o DIR]",
-		Short: "Run the built-in demo: check an invented pipe-rack brace and write its cut sheet",
-		Args:  argsExactly(0, "no arguments"),
+		Short: "Run the built-in tour: propose, check, draw and re-verify an invented pipe rack's bracing",
+		Long: "demo walks the whole loop on three invented connections of a small pipe rack: it proposes a\n" +
+			"bolt layout for each, checks it, writes the filled-in job, the check as JSON, the DXF cut sheet,\n" +
+			"the CAM files and the HTML calculation report, then re-verifies one fabricated part from an\n" +
+			"invented measured file and prints the QA verdict.",
+		Args: argsExactly(0, "no arguments"),
 		RunE: func(cmd *cobra.Command, _ []string) error {
 			return runDemo(do, o.stdout)
 		},
 	}
 	cmd.Flags().StringVarP(&do.dir, "output", "o", filepath.Join(os.TempDir(), "gaugeline-demo"),
-		"directory for the demo's cut sheets and CAM files")
+		"directory for everything the demo writes")
 	return cmd
 }
 
@@ -41,47 +55,146 @@ func runDemo(do demoOptions, out io.Writer) error {
 	if err != nil {
 		return err
 	}
-	fmt.Fprintf(out, "gaugeline demo: an invented pipe-rack brace, checked and drawn.\n\n")
+	fmt.Fprintf(out, "gaugeline demo: pipe rack PR-3 (an invented scenario), three bolted tension connections.\n")
+	fmt.Fprintf(out, "Everything is written to %s\n\n", do.dir)
+	var qa *detail.Proposal
 	for _, e := range entries {
 		name := path.Join("demo", e.Name())
-		data, err := demoJobs.ReadFile(name)
+		p, err := demoPropose(name)
 		if err != nil {
 			return err
 		}
-		job, err := detail.ParseJob(name, data)
-		if err != nil {
+		if p.Job.Mark == demoQAMark {
+			qa = p
+		}
+		if err := demoWrite(p, do.dir, out); err != nil {
 			return err
 		}
-		d, err := job.Build()
-		if err != nil {
-			return err
-		}
-		r, err := detail.Check(d)
-		if err != nil {
-			return err
-		}
-		fmt.Fprintf(out, "$ gaugeline check %s\n", name)
-		if err := r.WriteText(out); err != nil {
-			return err
-		}
-		s, err := detail.NewSheet(r, !r.Pass)
-		if err != nil {
-			return err
-		}
-		files, err := dxfout.Files(s)
-		if err != nil {
-			return err
-		}
-		if err := writeAll(do.dir, files); err != nil {
-			return err
-		}
-		fmt.Fprintf(out, "\n$ gaugeline sheet %s -o %s\n", name, do.dir)
-		for _, f := range files {
-			fmt.Fprintf(out, "wrote %s\n", filepath.Join(do.dir, f.Name))
-		}
-		fmt.Fprintln(out)
 	}
-	fmt.Fprintf(out, "Open the .dxf cut sheet in any CAD viewer; the .cam.dxf files hold only contours and holes for CAM.\n")
-	fmt.Fprintf(out, "Try it on your own job: gaugeline check JOB.yaml (see README.md for the job file).\n")
+	if err := demoReverify(qa, do.dir, out); err != nil {
+		return err
+	}
+	fmt.Fprintf(out, "\nNext: open the .html reports in a browser and the .dxf sheets in a CAD viewer; run\n")
+	fmt.Fprintf(out, "'gaugeline check %s' to see a full check table. The README walks through each step.\n",
+		filepath.Join(do.dir, qa.Job.Mark+".yaml"))
+	fmt.Fprintf(out, "\n%s\n", detail.Caution)
+	return nil
+}
+
+func demoPropose(name string) (*detail.Proposal, error) {
+	data, err := demoJobs.ReadFile(name)
+	if err != nil {
+		return nil, err
+	}
+	job, err := detail.ParseJob(name, data)
+	if err != nil {
+		return nil, err
+	}
+	p, err := detail.Propose(job, detail.ProposeOptions{})
+	if err != nil {
+		return nil, err
+	}
+	if !p.Found() {
+		return nil, fmt.Errorf("demo: no layout for %s", job.Mark)
+	}
+	return p, nil
+}
+
+// demoWrite writes everything the loop makes of one proposal and says so.
+func demoWrite(p *detail.Proposal, dir string, out io.Writer) error {
+	r := p.Report
+	d := r.Design
+	mark := d.Job.Mark
+	js, err := r.JSON()
+	if err != nil {
+		return err
+	}
+	html, err := calc.HTML(r)
+	if err != nil {
+		return err
+	}
+	s, err := detail.NewSheet(r, !r.Pass)
+	if err != nil {
+		return err
+	}
+	dxfs, err := dxfout.Files(s)
+	if err != nil {
+		return err
+	}
+	files := append([]dxfout.File{
+		{Name: mark + ".yaml", Data: p.LayoutJob},
+		{Name: mark + ".json", Data: js},
+		{Name: mark + ".html", Data: html},
+	}, dxfs...)
+	if err := writeAll(dir, files); err != nil {
+		return err
+	}
+	g := r.GoverningResult()
+	fmt.Fprintf(out, "%s  %s %s, demand %.1f %s\n", mark, d.Conn.Member.Shape, d.Info.Designation,
+		d.Job.Units.ToJob(float64(d.Conn.Demand), units.DimForce), d.Job.Units.Labels().Force)
+	fmt.Fprintf(out, "  propose  %s (checked %d of %d candidates)\n", p.Layout.Describe(d.Job.Units), p.Evaluated, p.Space)
+	fmt.Fprintf(out, "  check    %s, governing %s (%s) at ratio %.3f\n", strings.ToUpper(r.Verdict()), g.ID, g.Clause, g.Ratio)
+	names := make([]string, len(files))
+	for i, f := range files {
+		names[i] = f.Name
+	}
+	fmt.Fprintf(out, "  wrote    %s\n\n", strings.Join(names, ", "))
+	return nil
+}
+
+// demoMeasured invents what a QA inspector measured on the first part:
+// every hole a little off, one of them past the 1/16 in position
+// tolerance, one drilled a little large but within tolerance.
+func demoMeasured(d *detail.Design) []byte {
+	var b strings.Builder
+	b.WriteString("# Invented measurements of a fabricated part (demo), inches from the member end and heel.\n")
+	b.WriteString("id,x,y,diameter\n")
+	for i, h := range d.Conn.Holes {
+		dx, dy, dd := 0.01*float64(i%2), -0.01, 0.0
+		switch i {
+		case 1:
+			dx = 0.09 // past the 1/16 in position tolerance
+		case 2:
+			dd = 0.02 // drilled large, within +1/32 in
+		}
+		fmt.Fprintf(&b, "M%d,%.4f,%.4f,%.4f\n", i+1, h.X.In()+dx, h.Y.In()+dy, h.Dx.In()+dd)
+	}
+	return []byte(b.String())
+}
+
+func demoReverify(p *detail.Proposal, dir string, out io.Writer) error {
+	d := p.Report.Design
+	mark := d.Job.Mark
+	csv := filepath.Join(dir, mark+"-measured.csv")
+	if err := writeAll(dir, []dxfout.File{{Name: filepath.Base(csv), Data: demoMeasured(d)}}); err != nil {
+		return err
+	}
+	set, err := detail.LoadMeasured(csv, d.Job, "")
+	if err != nil {
+		return err
+	}
+	ab, err := detail.Reverify(d, set, detail.ReverifyOptions{})
+	if err != nil {
+		return err
+	}
+	var md strings.Builder
+	if err := ab.WriteMarkdown(&md); err != nil {
+		return err
+	}
+	if err := writeAll(dir, []dxfout.File{{Name: mark + "-qa.md", Data: []byte(md.String())}}); err != nil {
+		return err
+	}
+	fmt.Fprintf(out, "QA  %s as fabricated, measured holes in %s\n", mark, csv)
+	fmt.Fprintf(out, "  reverify  verdict %s", strings.ToUpper(ab.Verdict.String()))
+	switch ab.Verdict {
+	case detail.Accept:
+		fmt.Fprintf(out, ": every hole within tolerance and everything passes\n")
+	case detail.Review:
+		fmt.Fprintf(out, ": a hole is out of tolerance but every rule and limit state passes as built;\n")
+		fmt.Fprintf(out, "            send it to the engineer of record (the command exits 3)\n")
+	default:
+		fmt.Fprintf(out, ": the part fails as built (the command exits 1)\n")
+	}
+	fmt.Fprintf(out, "  wrote     %s\n", mark+"-qa.md")
 	return nil
 }

@@ -117,7 +117,7 @@ func TestSheetTwiceIsByteIdentical(t *testing.T) {
 
 // The demo job passes and gets its three files; no temporary file is left.
 func TestSheetOfDemoJob(t *testing.T) {
-	job, _ := filepath.Abs(filepath.Join("demo", "pipe-rack-brace.yaml"))
+	job, _ := filepath.Abs(filepath.Join(testdata, "jobs", "us-pipe-rack-brace.yaml"))
 	dir := t.TempDir()
 	if r := gaugeline(t, ".", "sheet", job, "-o", dir); r.code != 0 {
 		t.Fatalf("exit %d: %s", r.code, r.stderr)
