@@ -23,7 +23,7 @@ import (
 func jobs(t *testing.T) []string {
 	t.Helper()
 	var out []string
-	for _, pat := range []string{"../../testdata/jobs/*.yaml", "../../testdata/examples/*.yaml", "../../cmd/gaugeline/demo/*.yaml"} {
+	for _, pat := range []string{"../../testdata/jobs/*.yaml", "../../testdata/examples/*.yaml"} {
 		m, err := filepath.Glob(pat)
 		if err != nil {
 			t.Fatal(err)
