@@ -4,12 +4,12 @@ import (
 	"context"
 	"fmt"
 	"io"
-	"os"
 	"path/filepath"
 
 	"github.com/spf13/cobra"
 
 	"gaugeline/detail"
+	"gaugeline/dxfout"
 )
 
 type proposeOptions struct {
@@ -93,32 +93,10 @@ func runPropose(_ context.Context, o *rootOptions, po proposeOptions, path strin
 }
 
 // writeAtomic writes data to path through a temporary file in the same
-// directory and a rename, so that path is never half-written.
+// directory and a rename (writeAll), so that path is never half-written.
 func writeAtomic(path string, data []byte) error {
-	fail := func(err error) error {
+	if err := writeAll(filepath.Dir(path), []dxfout.File{{Name: filepath.Base(path), Data: data}}); err != nil {
 		return &detail.InputError{File: path, Msg: "cannot write the job: " + err.Error()}
-	}
-	tmp, err := os.CreateTemp(filepath.Dir(path), "."+filepath.Base(path)+".*.tmp")
-	if err != nil {
-		return fail(err)
-	}
-	name := tmp.Name()
-	_, err = tmp.Write(data)
-	if err == nil {
-		err = tmp.Sync()
-	}
-	if cerr := tmp.Close(); err == nil {
-		err = cerr
-	}
-	if err == nil {
-		err = os.Chmod(name, 0o644)
-	}
-	if err == nil {
-		err = os.Rename(name, path)
-	}
-	if err != nil {
-		os.Remove(name)
-		return fail(err)
 	}
 	return nil
 }
