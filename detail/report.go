@@ -40,6 +40,24 @@ func Check(d *Design) (*Report, error) {
 	return r, nil
 }
 
+// CheckFile loads a job file, builds it and checks it: what `check`,
+// `sheet` and `report` all start with. Every error is an *InputError.
+func CheckFile(path string) (*Report, error) {
+	job, err := LoadJob(path)
+	if err != nil {
+		return nil, err
+	}
+	d, err := job.Build()
+	if err != nil {
+		return nil, err
+	}
+	r, err := Check(d)
+	if err != nil {
+		return nil, &InputError{File: path, Msg: err.Error()}
+	}
+	return r, nil
+}
+
 // GoverningResult returns the limit state with the highest ratio.
 func (r *Report) GoverningResult() engine.Result { return r.Results[r.Governing] }
 

@@ -36,17 +36,9 @@ func runCheck(_ context.Context, _ *rootOptions, co checkOptions, path string, o
 	if err != nil {
 		return err
 	}
-	job, err := detail.LoadJob(path)
+	r, err := detail.CheckFile(path)
 	if err != nil {
 		return err
-	}
-	d, err := job.Build()
-	if err != nil {
-		return err
-	}
-	r, err := detail.Check(d)
-	if err != nil {
-		return &detail.InputError{File: path, Msg: err.Error()}
 	}
 	if err := write(r, out); err != nil {
 		return err

@@ -42,17 +42,9 @@ func runReport(_ context.Context, o *rootOptions, ro reportOptions, path string,
 	if ro.out == "" {
 		return usageError{errors.New("-o FILE.html is required")}
 	}
-	job, err := detail.LoadJob(path)
+	r, err := detail.CheckFile(path)
 	if err != nil {
 		return err
-	}
-	d, err := job.Build()
-	if err != nil {
-		return err
-	}
-	r, err := detail.Check(d)
-	if err != nil {
-		return &detail.InputError{File: path, Msg: err.Error()}
 	}
 	page, err := calc.HTML(r)
 	if err != nil {
@@ -63,7 +55,7 @@ func runReport(_ context.Context, o *rootOptions, ro reportOptions, path string,
 	}
 	fmt.Fprintln(out, ro.out)
 	if !r.Pass {
-		fmt.Fprintf(o.stderr, "gaugeline: note: %s fails %s; the report shows why\n", job.Mark, strings.Join(failingIDs(r), ", "))
+		fmt.Fprintf(o.stderr, "gaugeline: note: %s fails %s; the report shows why\n", r.Design.Job.Mark, strings.Join(failingIDs(r), ", "))
 		return exitError{exitFail}
 	}
 	return nil

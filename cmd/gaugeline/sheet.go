@@ -42,21 +42,13 @@ func runSheet(_ context.Context, o *rootOptions, so sheetOptions, path string, o
 	if so.dir == "" {
 		return usageError{errors.New("-o DIR is required")}
 	}
-	job, err := detail.LoadJob(path)
+	r, err := detail.CheckFile(path)
 	if err != nil {
 		return err
-	}
-	d, err := job.Build()
-	if err != nil {
-		return err
-	}
-	r, err := detail.Check(d)
-	if err != nil {
-		return &detail.InputError{File: path, Msg: err.Error()}
 	}
 	if !r.Pass && !so.notForFabrication {
 		g := r.GoverningResult()
-		fmt.Fprintf(o.stderr, "gaugeline: error: %s: %s fails (governing %s, ratio %.3f): no sheet written\n", path, job.Mark, g.ID, g.Ratio)
+		fmt.Fprintf(o.stderr, "gaugeline: error: %s: %s fails (governing %s, ratio %.3f): no sheet written\n", path, r.Design.Job.Mark, g.ID, g.Ratio)
 		fmt.Fprintf(o.stderr, "gaugeline: hint: run 'gaugeline check %s' for every failing rule; --not-for-fabrication writes a stamped sheet\n", path)
 		return exitError{exitFail}
 	}
