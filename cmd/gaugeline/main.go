@@ -61,7 +61,7 @@ func newRootCmd(o *rootOptions) *cobra.Command {
 		SilenceUsage:  true,
 	}
 	root.SetFlagErrorFunc(func(_ *cobra.Command, err error) error { return usageError{err} })
-	root.AddCommand(newCheckCmd(o), newProposeCmd(o), newRulesCmd(o), newDemoCmd(o), newSheetCmd(o), newReverifyCmd(o), newReportCmd(o))
+	root.AddCommand(newCheckCmd(o), newProposeCmd(o), newRulesCmd(o), newDemoCmd(o), newSheetCmd(o), newReverifyCmd(o), newBatchCmd(o), newReportCmd(o))
 	return root
 }
 

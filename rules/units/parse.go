@@ -233,13 +233,13 @@ func unitError(s, unit string, err error) error {
 	return fmt.Errorf("%q: %v", s, err)
 }
 
-// normalizeMarks maps typographic primes and quotes, and a doubled
-// apostrophe, to the ASCII foot and inch marks.
-func normalizeMarks(s string) string {
-	return strings.NewReplacer(
-		"′", "'", "’", "'", "″", `"`, "”", `"`, "''", `"`,
-	).Replace(s)
-}
+// marks maps typographic primes and quotes, and a doubled apostrophe, to
+// the ASCII foot and inch marks. A Replacer is safe for concurrent use and
+// never changes after it is built; building it once keeps Parse cheap.
+var marks = strings.NewReplacer("′", "'", "’", "'", "″", `"`, "”", `"`, "''", `"`)
+
+// normalizeMarks applies marks.
+func normalizeMarks(s string) string { return marks.Replace(s) }
 
 // scanNumber reads an unsigned decimal, fraction or mixed number at the
 // start of s and returns its value and what follows it.

@@ -1,0 +1,649 @@
+package main
+
+import (
+	"bufio"
+	"bytes"
+	"context"
+	"encoding/csv"
+	"errors"
+	"fmt"
+	"io"
+	"io/fs"
+	"math"
+	"os"
+	"os/signal"
+	"path/filepath"
+	"runtime"
+	"slices"
+	"strconv"
+	"strings"
+	"sync"
+	"syscall"
+	"time"
+
+	"github.com/schollz/progressbar/v3"
+	"golang.org/x/term"
+
+	"gaugeline/detail"
+	"gaugeline/dxfout"
+)
+
+// The batch runner. Jobs run on a pool of workers; each job's files are
+// written (atomically, all of them or none) as soon as it finishes, so the
+// only thing a batch keeps is one summary row per job. Marks are claimed in
+// input order through a gate, so that which of two jobs with the same mark
+// is the duplicate never depends on scheduling.
+
+// batchVerdict is the outcome of one job of a batch.
+type batchVerdict int
+
+const (
+	batchPass  batchVerdict = iota
+	batchFail               // a limit state or rule fails, or no layout passes
+	batchError              // bad input: nothing written
+)
+
+func (v batchVerdict) String() string { return [...]string{"pass", "fail", "error"}[v] }
+
+// batchRow is one job's line of the summary.
+type batchRow struct {
+	File      string
+	Mark      string // "" when the job could not be read
+	Verdict   batchVerdict
+	Governing string  // limit state or rule id; "" when none
+	Ratio     float64 // governing ratio; NaN when none
+	Bolts     int     // 0 when none
+	Message   string  // the error, or what fails
+	Hint      string  // advice on an error
+	JSON      int     // files written: JSON and DXF
+	DXF       int
+}
+
+// batchConfig is what every job of a batch shares.
+type batchConfig struct {
+	out     string // output directory, existing
+	propose bool
+	sheets  bool
+	workers int
+}
+
+// maxListSize bounds a list file: 10,000 jobs take well under 1 MiB.
+const maxListSize = 16 << 20
+
+// batchInputs returns the job files of a folder (every *.yaml, sorted by
+// name, not recursive) or of a list file (one path per line, relative to
+// the list file; '#' starts a comment), in input order.
+func batchInputs(arg string) ([]string, error) {
+	fi, err := os.Stat(arg)
+	if err != nil {
+		return nil, &detail.InputError{File: arg, Msg: "cannot read the jobs: " + errText(err)}
+	}
+	if fi.IsDir() {
+		entries, err := os.ReadDir(arg) // sorted by name
+		if err != nil {
+			return nil, &detail.InputError{File: arg, Msg: "cannot read the folder: " + errText(err)}
+		}
+		var files []string
+		for _, e := range entries {
+			if !e.IsDir() && strings.HasSuffix(e.Name(), ".yaml") {
+				files = append(files, filepath.Join(arg, e.Name()))
+			}
+		}
+		if len(files) == 0 {
+			return nil, &detail.InputError{File: arg, Msg: "no *.yaml job in the folder",
+				Hint: "batch reads the *.yaml files of the folder itself, not of its subfolders"}
+		}
+		return files, nil
+	}
+	if ext := filepath.Ext(arg); ext == ".yaml" || ext == ".yml" {
+		return nil, usageError{fmt.Errorf("%s is a job, not a folder or a list of jobs (for one job, use 'gaugeline check')", arg)}
+	}
+	f, err := os.Open(arg)
+	if err != nil {
+		return nil, &detail.InputError{File: arg, Msg: "cannot read the list: " + errText(err)}
+	}
+	defer f.Close()
+	data, err := io.ReadAll(io.LimitReader(f, maxListSize+1))
+	if err != nil {
+		return nil, &detail.InputError{File: arg, Msg: "cannot read the list: " + errText(err)}
+	}
+	if len(data) > maxListSize {
+		return nil, &detail.InputError{File: arg, Msg: fmt.Sprintf("the list is larger than %d MiB", maxListSize>>20),
+			Hint: "a list holds one job path per line"}
+	}
+	base := filepath.Dir(arg)
+	var files []string
+	sc := bufio.NewScanner(bytes.NewReader(data))
+	sc.Buffer(nil, maxListSize)
+	for line := 1; sc.Scan(); line++ {
+		s := sc.Text()
+		if i := commentStart(s); i >= 0 {
+			s = s[:i]
+		}
+		s = strings.TrimSpace(s)
+		if s == "" {
+			continue
+		}
+		if strings.ContainsRune(s, 0) {
+			return nil, &detail.InputError{File: arg, Line: line, Msg: "not a list of job paths (binary data)"}
+		}
+		if !filepath.IsAbs(s) {
+			s = filepath.Join(base, s)
+		}
+		files = append(files, s)
+	}
+	if err := sc.Err(); err != nil {
+		return nil, &detail.InputError{File: arg, Msg: "cannot read the list: " + err.Error()}
+	}
+	if len(files) == 0 {
+		return nil, &detail.InputError{File: arg, Msg: "the list names no job",
+			Hint: "a list holds one job path per line, relative to the list; '#' starts a comment"}
+	}
+	return files, nil
+}
+
+// commentStart is the index of a '#' at the start of s or after a blank,
+// -1 when there is none: a path may contain '#' inside a name.
+func commentStart(s string) int {
+	for i := 0; i < len(s); i++ {
+		if s[i] == '#' && (i == 0 || s[i-1] == ' ' || s[i-1] == '\t') {
+			return i
+		}
+	}
+	return -1
+}
+
+// errText drops the path a *fs.PathError repeats.
+func errText(err error) string {
+	var pe *fs.PathError
+	if errors.As(err, &pe) {
+		return pe.Err.Error()
+	}
+	return err.Error()
+}
+
+// partNames are the parts a sheet draws, in the CAM file names
+// MARK-PART.cam.dxf (see detail.NewSheet).
+var partNames = []string{"member", "plate"}
+
+// markFiles are every file a job of this mark may write into the output
+// directory. A mark is already restricted to [A-Za-z0-9._-] by the job
+// parser; markFiles still refuses anything that is not a plain file name.
+func markFiles(mark string) ([]string, error) {
+	names := []string{mark + ".json", mark + ".dxf"}
+	for _, p := range partNames {
+		names = append(names, mark+"-"+p+".cam.dxf")
+	}
+	for _, n := range names {
+		if n != filepath.Base(n) || !filepath.IsLocal(n) || strings.ContainsAny(n, `/\:`) {
+			return nil, fmt.Errorf("mark %q does not make a safe file name", mark)
+		}
+	}
+	return names, nil
+}
+
+// summaryFiles are the batch's own files; no mark may claim them.
+var summaryFiles = []string{"summary.csv", "summary.md"}
+
+// markGate hands out output file names in input order. Job i waits at the
+// gate until jobs 0…i-1 have passed it. That never deadlocks: jobs are
+// dispatched in input order and each reaches the gate after reading its
+// own file only, so the lowest job not yet through is always running.
+type markGate struct {
+	mu     sync.Mutex
+	turn   *sync.Cond
+	next   int
+	owners map[string]markOwner // lower-cased file name → who writes it
+}
+
+type markOwner struct{ file, mark string }
+
+func newMarkGate() *markGate {
+	g := &markGate{owners: map[string]markOwner{}}
+	g.turn = sync.NewCond(&g.mu)
+	for _, n := range summaryFiles {
+		g.owners[n] = markOwner{file: "the batch summary"}
+	}
+	return g
+}
+
+// pass lets job i through the gate and claims the file names of its mark
+// ("" when the job could not be read). It returns why the names cannot be
+// had, "" when they are the job's. File names are compared without case:
+// on Windows and macOS file systems BR-1 and br-1 are one file.
+func (g *markGate) pass(i int, file, mark string) string {
+	g.mu.Lock()
+	defer g.mu.Unlock()
+	for g.next < i {
+		g.turn.Wait()
+	}
+	if g.next > i { // through already: a job that panicked in here
+		return ""
+	}
+	g.next++
+	g.turn.Broadcast()
+	if mark == "" {
+		return ""
+	}
+	names, err := markFiles(mark)
+	if err != nil {
+		return err.Error()
+	}
+	for _, n := range names {
+		if o, taken := g.owners[strings.ToLower(n)]; taken {
+			switch {
+			case o.mark == mark:
+				return fmt.Sprintf("duplicate mark %s, already used by %s", mark, o.file)
+			case strings.EqualFold(o.mark, mark):
+				return fmt.Sprintf("duplicate mark %s, already used as %s by %s (marks differing only in case name the same files on Windows and macOS)", mark, o.mark, o.file)
+			case o.mark == "":
+				return fmt.Sprintf("mark %s would write %s, which is %s", mark, n, o.file)
+			default:
+				return fmt.Sprintf("mark %s would write %s, which %s (mark %s) writes", mark, n, o.file, o.mark)
+			}
+		}
+	}
+	for _, n := range names {
+		g.owners[strings.ToLower(n)] = markOwner{file, mark}
+	}
+	return ""
+}
+
+// runJobs runs every job on cfg.workers workers and returns the summary
+// rows in input order. done is called (from this goroutine) as each job
+// finishes. Jobs not started when ctx ends are recorded as errors.
+func runJobs(ctx context.Context, cfg batchConfig, files []string, done func()) []batchRow {
+	rows := make([]batchRow, len(files))
+	gate := newMarkGate()
+	next := make(chan int)
+	go func() {
+		defer close(next)
+		for i := range files {
+			select {
+			case next <- i:
+			case <-ctx.Done():
+				return
+			}
+		}
+	}()
+	finished := make(chan int, cfg.workers)
+	var wg sync.WaitGroup
+	for range cfg.workers {
+		wg.Go(func() {
+			for i := range next {
+				rows[i] = runJob(cfg, gate, i, files[i])
+				finished <- i
+			}
+		})
+	}
+	go func() {
+		wg.Wait()
+		close(finished)
+	}()
+	ran := make([]bool, len(files))
+	for i := range finished {
+		ran[i] = true
+		done()
+	}
+	for i, ok := range ran {
+		if !ok {
+			rows[i] = batchRow{File: files[i], Verdict: batchError, Ratio: math.NaN(),
+				Message: files[i] + ": not run: the batch was interrupted"}
+		}
+	}
+	return rows
+}
+
+// runJob runs one job of the batch and writes its files.
+func runJob(cfg batchConfig, gate *markGate, i int, path string) (row batchRow) {
+	row = batchRow{File: path, Ratio: math.NaN()}
+	through := false
+	defer func() {
+		// A programmer's mistake in one job must not stop the others.
+		if r := recover(); r != nil {
+			row = batchRow{File: path, Mark: row.Mark, Verdict: batchError, Ratio: math.NaN(),
+				Message: fmt.Sprintf("%s: internal error, please report it: %v", path, r),
+				Hint:    "gaugeline check (or propose) on this job alone shows where it happens"}
+		}
+		if !through {
+			gate.pass(i, path, "")
+		}
+	}()
+	job, err := detail.LoadJob(path)
+	mark := ""
+	if err == nil {
+		mark = job.Mark
+	}
+	conflict := gate.pass(i, path, mark)
+	through = true
+	if err != nil {
+		return errorRow(row, path, err)
+	}
+	row.Mark = mark
+	if conflict != "" {
+		row.Verdict, row.Message = batchError, path+": "+conflict
+		return row // the names are another job's: touch nothing
+	}
+	files, err := jobFiles(cfg, job, &row)
+	if err == nil {
+		err = checkNames(mark, files)
+	}
+	if err == nil {
+		err = writeAll(cfg.out, files)
+	}
+	if err != nil {
+		files = nil
+		row = errorRow(row, path, err)
+	}
+	for _, f := range files {
+		if strings.HasSuffix(f.Name, ".json") {
+			row.JSON++
+		} else {
+			row.DXF++
+		}
+	}
+	if row.Verdict != batchPass {
+		removeStale(cfg.out, mark, files)
+	}
+	return row
+}
+
+// errorRow records err as the job's error, keeping file and mark.
+func errorRow(row batchRow, path string, err error) batchRow {
+	row.Verdict, row.Governing, row.Ratio, row.Bolts, row.Hint = batchError, "", math.NaN(), 0, ""
+	var ie *detail.InputError
+	if errors.As(err, &ie) {
+		row.Message, row.Hint = ie.Error(), ie.Hint
+		return row
+	}
+	row.Message = path + ": " + err.Error()
+	return row
+}
+
+// jobFiles checks (or proposes) the job, fills in its summary row and
+// returns the files to write: the JSON, then the sheet and CAM files of a
+// passing layout when asked.
+func jobFiles(cfg batchConfig, job *detail.Job, row *batchRow) ([]dxfout.File, error) {
+	var r *detail.Report
+	var data []byte
+	if cfg.propose {
+		p, err := detail.Propose(job, detail.ProposeOptions{Mode: detail.Pruned})
+		if err != nil {
+			return nil, err
+		}
+		if data, err = p.JSON(detail.Pruned); err != nil {
+			return nil, err
+		}
+		if !p.Found() {
+			row.Verdict, row.Message = batchFail, "no layout passes: "+p.Summary
+			if len(p.Blockers) > 0 {
+				row.Governing = p.Blockers[0].ID
+				if p.Blockers[0].Ratio > 0 {
+					row.Ratio = p.Blockers[0].Ratio
+				}
+			}
+			return []dxfout.File{{Name: job.Mark + ".json", Data: data}}, nil
+		}
+		r = p.Report
+	} else {
+		d, err := job.Build()
+		if err != nil {
+			return nil, err
+		}
+		if r, err = detail.Check(d); err != nil {
+			return nil, &detail.InputError{File: job.File, Msg: err.Error()}
+		}
+		if data, err = r.JSON(); err != nil {
+			return nil, err
+		}
+	}
+	g := r.GoverningResult()
+	row.Governing, row.Ratio, row.Bolts = g.ID, g.Ratio, len(r.Design.Conn.Holes)
+	files := []dxfout.File{{Name: job.Mark + ".json", Data: data}}
+	if !r.Pass {
+		row.Verdict, row.Message = batchFail, failing(r)
+		return files, nil
+	}
+	row.Verdict = batchPass
+	if !cfg.sheets {
+		return files, nil
+	}
+	s, err := detail.NewSheet(r, false)
+	if err != nil {
+		return nil, err
+	}
+	dxf, err := dxfout.Files(s)
+	if err != nil {
+		return nil, err
+	}
+	return append(files, dxf...), nil
+}
+
+// failing names what fails: limit states first, then detailing rules.
+func failing(r *detail.Report) string {
+	var ids []string
+	for _, x := range r.Results {
+		if !x.Pass && !slices.Contains(ids, x.ID) {
+			ids = append(ids, x.ID)
+		}
+	}
+	for _, f := range r.Findings {
+		if !f.Pass && !f.Advisory && !slices.Contains(ids, f.ID) {
+			ids = append(ids, f.ID)
+		}
+	}
+	return "fails: " + strings.Join(ids, ", ")
+}
+
+// checkNames makes sure a job writes only the names its mark claimed.
+func checkNames(mark string, files []dxfout.File) error {
+	names, err := markFiles(mark)
+	if err != nil {
+		return err
+	}
+	for _, f := range files {
+		if !slices.Contains(names, f.Name) {
+			return fmt.Errorf("gaugeline: batch: %s is not one of the files of mark %s", f.Name, mark)
+		}
+	}
+	return nil
+}
+
+// removeStale removes the files of mark that an earlier run left in dir
+// and this run did not write, so that a job that now fails never sits next
+// to an old cut sheet or CAM file.
+func removeStale(dir, mark string, wrote []dxfout.File) {
+	names, err := markFiles(mark)
+	if err != nil {
+		return
+	}
+	for _, n := range names {
+		if !slices.ContainsFunc(wrote, func(f dxfout.File) bool { return f.Name == n }) {
+			os.Remove(filepath.Join(dir, n)) // most often absent
+		}
+	}
+}
+
+// batchCounts tallies the rows.
+type batchCounts struct{ jobs, pass, fail, errors, json, dxf int }
+
+func countRows(rows []batchRow) batchCounts {
+	c := batchCounts{jobs: len(rows)}
+	for _, r := range rows {
+		switch r.Verdict {
+		case batchPass:
+			c.pass++
+		case batchFail:
+			c.fail++
+		default:
+			c.errors++
+		}
+		c.json += r.JSON
+		c.dxf += r.DXF
+	}
+	return c
+}
+
+// exit is the batch's exit code: bad input wins over a failing job.
+func (c batchCounts) exit() int {
+	switch {
+	case c.errors > 0:
+		return exitInput
+	case c.fail > 0:
+		return exitFail
+	}
+	return exitOK
+}
+
+func (c batchCounts) String() string {
+	return fmt.Sprintf("%d jobs: %d pass, %d fail, %d error", c.jobs, c.pass, c.fail, c.errors)
+}
+
+var summaryHeader = []string{"file", "mark", "verdict", "governing", "ratio", "bolts", "message"}
+
+func (r batchRow) fields() []string {
+	ratio, bolts := "", ""
+	if !math.IsNaN(r.Ratio) {
+		ratio = strconv.FormatFloat(r.Ratio, 'f', 3, 64)
+	}
+	if r.Bolts > 0 {
+		bolts = strconv.Itoa(r.Bolts)
+	}
+	msg := r.Message
+	if r.Hint != "" {
+		msg += " (hint: " + r.Hint + ")"
+	}
+	return []string{r.File, r.Mark, r.Verdict.String(), r.Governing, ratio, bolts, msg}
+}
+
+// summaryCSV is summary.csv: a header, then one row per job.
+func summaryCSV(rows []batchRow) ([]byte, error) {
+	var b bytes.Buffer
+	w := csv.NewWriter(&b)
+	w.Write(summaryHeader)
+	for _, r := range rows {
+		w.Write(r.fields())
+	}
+	w.Flush()
+	return b.Bytes(), w.Error()
+}
+
+// summaryMarkdown is summary.md: the counts, then one table row per job.
+func summaryMarkdown(rows []batchRow, cfg batchConfig) []byte {
+	var b bytes.Buffer
+	mode := "check"
+	if cfg.propose {
+		mode = "propose"
+	}
+	fmt.Fprintf(&b, "# Batch summary\n\n%s (%s", countRows(rows), mode)
+	if cfg.sheets {
+		b.WriteString(", with cut sheets")
+	}
+	b.WriteString(").\n\n| " + strings.Join(summaryHeader, " | ") + " |\n|")
+	b.WriteString(strings.Repeat("---|", len(summaryHeader)) + "\n")
+	for _, r := range rows {
+		f := r.fields()
+		for i := range f {
+			f[i] = mdCell(f[i])
+		}
+		b.WriteString("| " + strings.Join(f, " | ") + " |\n")
+	}
+	b.WriteString("\n> " + detail.Caution + "\n")
+	return b.Bytes()
+}
+
+// mdCell keeps a value inside its table cell.
+func mdCell(s string) string {
+	s = strings.ReplaceAll(s, `\`, `\\`)
+	s = strings.ReplaceAll(s, "|", `\|`)
+	return strings.Join(strings.Fields(s), " ")
+}
+
+// progress returns a progress callback: a bar on stderr when it is a
+// terminal, nothing otherwise; finish ends the bar.
+func progress(stderr io.Writer, n int) (tick, finish func()) {
+	f, ok := stderr.(*os.File)
+	if !ok || !term.IsTerminal(int(f.Fd())) {
+		return func() {}, func() {}
+	}
+	bar := progressbar.NewOptions(n,
+		progressbar.OptionSetWriter(f),
+		progressbar.OptionSetDescription("batch"),
+		progressbar.OptionShowCount(),
+		progressbar.OptionShowIts(),
+		progressbar.OptionSetItsString("jobs"),
+		progressbar.OptionSetPredictTime(true),
+		progressbar.OptionThrottle(100*time.Millisecond),
+		progressbar.OptionClearOnFinish(),
+	)
+	return func() { bar.Add(1) }, func() { bar.Finish() }
+}
+
+// maxErrorLines is how many job errors batch repeats on stderr; the
+// summary has them all.
+const maxErrorLines = 20
+
+func runBatch(ctx context.Context, o *rootOptions, bo batchOptions, arg string, out io.Writer) error {
+	if bo.dir == "" {
+		return usageError{errors.New("-o DIR is required")}
+	}
+	if bo.workers < 0 {
+		return usageError{fmt.Errorf("--jobs: want 1 or more (0: one per CPU), not %d", bo.workers)}
+	}
+	files, err := batchInputs(arg)
+	if err != nil {
+		return err
+	}
+	if err := os.MkdirAll(bo.dir, 0o755); err != nil {
+		return &detail.InputError{File: bo.dir, Msg: "cannot create the output directory: " + errText(err)}
+	}
+	cfg := batchConfig{out: bo.dir, propose: bo.propose, sheets: bo.sheets, workers: bo.workers}
+	if cfg.workers == 0 {
+		cfg.workers = runtime.NumCPU()
+	}
+	cfg.workers = min(cfg.workers, len(files))
+
+	// Ctrl-C stops the batch between jobs: the jobs running finish, the
+	// summary records the others as not run; a second Ctrl-C kills.
+	ctx, stop := signal.NotifyContext(ctx, os.Interrupt, syscall.SIGTERM)
+	defer stop()
+	context.AfterFunc(ctx, stop)
+
+	tick, finish := progress(o.stderr, len(files))
+	rows := runJobs(ctx, cfg, files, tick)
+	finish()
+
+	c := countRows(rows)
+	csvData, err := summaryCSV(rows)
+	if err != nil {
+		return err
+	}
+	if err := writeAll(bo.dir, []dxfout.File{
+		{Name: "summary.csv", Data: csvData},
+		{Name: "summary.md", Data: summaryMarkdown(rows, cfg)},
+	}); err != nil {
+		return &detail.InputError{File: bo.dir, Msg: err.Error()}
+	}
+
+	shown := 0
+	for _, r := range rows {
+		if r.Verdict == batchError {
+			if shown == maxErrorLines {
+				fmt.Fprintf(o.stderr, "gaugeline: error: … and %d more; see %s\n", c.errors-shown, filepath.Join(bo.dir, "summary.csv"))
+				break
+			}
+			fmt.Fprintf(o.stderr, "gaugeline: error: %s\n", r.Message)
+			if r.Hint != "" {
+				fmt.Fprintf(o.stderr, "gaugeline: hint: %s\n", r.Hint)
+			}
+			shown++
+		}
+	}
+	fmt.Fprintf(out, "batch: %s\n", c)
+	fmt.Fprintf(out, "wrote %d JSON and %d DXF files to %s\n", c.json, c.dxf, bo.dir)
+	fmt.Fprintf(out, "summary: %s, %s\n", filepath.Join(bo.dir, "summary.csv"), filepath.Join(bo.dir, "summary.md"))
+	if code := c.exit(); code != exitOK {
+		return exitError{code}
+	}
+	return nil
+}
