@@ -346,6 +346,65 @@ func (v *View) extents() (lo, hi Point) {
 	return lo, hi
 }
 
+// DimensionGraphics is a dimension laid out for text height h, for a
+// renderer to draw in this order: Lines (the extension lines, from just off
+// the feature points to a little past the dimension line, then the
+// dimension line), Arrows (closed triangles, inside the span or outside
+// when it is short), Leaders (the short lines beyond outside arrows) and
+// Texts.
+type DimensionGraphics struct {
+	Lines, Leaders []Segment
+	Arrows         [][3]Point
+	Texts          []Text
+}
+
+// Graphics lays the dimension out for text height h.
+func (d Dimension) Graphics(h float64) DimensionGraphics {
+	gap, over, n := h/4, h/2, 0.8*h
+	var g DimensionGraphics
+	seg := func(a, b Point) Segment { return Segment{A: a, B: b, Layer: LayerDimensions} }
+	ext := func(f, to Point) {
+		dx, dy := to.X-f.X, to.Y-f.Y
+		l := math.Hypot(dx, dy)
+		if l < gap {
+			return
+		}
+		ux, uy := dx/l, dy/l
+		g.Lines = append(g.Lines, seg(Point{X: f.X + ux*gap, Y: f.Y + uy*gap}, Point{X: to.X + ux*over, Y: to.Y + uy*over}))
+	}
+	// u is along the dimension line, from A to B.
+	var a, b, u Point
+	var span float64
+	if d.Axis == AlongX {
+		a, b = Point{X: d.A.X, Y: d.Offset}, Point{X: d.B.X, Y: d.Offset}
+		span = b.X - a.X
+		u = Point{X: math.Copysign(1, span)}
+	} else {
+		a, b = Point{X: d.Offset, Y: d.A.Y}, Point{X: d.Offset, Y: d.B.Y}
+		span = b.Y - a.Y
+		u = Point{Y: math.Copysign(1, span)}
+	}
+	ext(d.A, a)
+	ext(d.B, b)
+	g.Lines = append(g.Lines, seg(a, b))
+	neg := Point{X: -u.X, Y: -u.Y}
+	arrow := func(tip, dir Point) {
+		back := Point{X: tip.X - dir.X*n, Y: tip.Y - dir.Y*n}
+		side := Point{X: -dir.Y * n / 6, Y: dir.X * n / 6}
+		g.Arrows = append(g.Arrows, [3]Point{tip, back.Add(side), {X: back.X - side.X, Y: back.Y - side.Y}})
+	}
+	if math.Abs(span) >= 2.5*n {
+		arrow(a, neg)
+		arrow(b, u)
+	} else {
+		arrow(a, u)
+		arrow(b, neg)
+		g.Leaders = append(g.Leaders, seg(a, Point{X: a.X - u.X*2*n, Y: a.Y - u.Y*2*n}), seg(b, Point{X: b.X + u.X*2*n, Y: b.Y + u.Y*2*n}))
+	}
+	g.Texts = DimensionText(d, h)
+	return g
+}
+
 // DimensionText returns the text of a dimension of text height h: centred
 // on its dimension line, above a horizontal line and left of a vertical
 // one (reading upward).

@@ -159,55 +159,21 @@ func (p *svgPen) text(t detail.Text, class string) {
 	p.grow(hi)
 }
 
-// arrow draws a closed arrowhead with its tip at tip, pointing along the
-// unit vector dir, of length n (as the DXF does).
-func (p *svgPen) arrow(tip, dir detail.Point, n float64) {
-	back := detail.Point{X: tip.X - dir.X*n, Y: tip.Y - dir.Y*n}
-	side := detail.Point{X: -dir.Y * n / 6, Y: dir.X * n / 6}
-	p.polygon([]detail.Point{tip, back.Add(side), {X: back.X - side.X, Y: back.Y - side.Y}}, "arrow")
-}
-
-// dimension draws a linear dimension as the DXF does: extension lines from
-// just off the feature points to a little past the dimension line, the
-// dimension line, arrowheads inside (outside when the span is short) and
-// the text.
+// dimension draws a dimension as the sheet model lays it out (the same
+// layout the DXF draws).
 func (p *svgPen) dimension(d detail.Dimension, h float64) {
-	gap, over, n := h/4, h/2, 0.8*h
 	cls := detail.LayerDimensions.String()
-	ext := func(f, to detail.Point) {
-		dx, dy := to.X-f.X, to.Y-f.Y
-		l := math.Hypot(dx, dy)
-		if l < gap {
-			return
-		}
-		ux, uy := dx/l, dy/l
-		p.line(detail.Point{X: f.X + ux*gap, Y: f.Y + uy*gap}, detail.Point{X: to.X + ux*over, Y: to.Y + uy*over}, cls)
+	g := d.Graphics(h)
+	for _, l := range g.Lines {
+		p.line(l.A, l.B, cls)
 	}
-	var a, b, u detail.Point
-	var span float64
-	if d.Axis == detail.AlongX {
-		a, b = detail.Point{X: d.A.X, Y: d.Offset}, detail.Point{X: d.B.X, Y: d.Offset}
-		span = b.X - a.X
-		u = detail.Point{X: math.Copysign(1, span)}
-	} else {
-		a, b = detail.Point{X: d.Offset, Y: d.A.Y}, detail.Point{X: d.Offset, Y: d.B.Y}
-		span = b.Y - a.Y
-		u = detail.Point{Y: math.Copysign(1, span)}
+	for _, tri := range g.Arrows {
+		p.polygon(tri[:], "arrow")
 	}
-	ext(d.A, a)
-	ext(d.B, b)
-	p.line(a, b, cls)
-	neg := detail.Point{X: -u.X, Y: -u.Y}
-	if math.Abs(span) >= 2.5*n {
-		p.arrow(a, neg, n)
-		p.arrow(b, u, n)
-	} else {
-		p.arrow(a, u, n)
-		p.arrow(b, neg, n)
-		p.line(a, detail.Point{X: a.X - u.X*2*n, Y: a.Y - u.Y*2*n}, cls)
-		p.line(b, detail.Point{X: b.X + u.X*2*n, Y: b.Y + u.Y*2*n}, cls)
+	for _, l := range g.Leaders {
+		p.line(l.A, l.B, cls)
 	}
-	for _, t := range detail.DimensionText(d, h) {
+	for _, t := range g.Texts {
 		p.text(t, cls)
 	}
 }
