@@ -175,3 +175,16 @@ func TestAsBuiltHolesStayOnTheirLine(t *testing.T) {
 	}
 	near(t, "block shear Rn", MemberBlockShear(c).Nominal.Kip(), 144.2125, 0.01, "hand calculation per AISC 360-22 J4.3")
 }
+
+func TestWhitmoreSingleRow(t *testing.T) {
+	// With every bolt in one row there is no length for the 30° spread: the
+	// plate's section at the row is its whole width (as a splice plate is
+	// checked), less the holes in it. A 10 x 3/8 in A572-50 plate, one 3/4-in
+	// bolt: Ag = 3.75 in², An = (10 − 0.875)(0.375) = 3.422 in² (hand
+	// calculation per AISC 360-22 J4.1, B4.3b).
+	c := designExampleD2(t, rules.LRFD)
+	c.Holes = c.Holes[:1]
+	c.Plate = &Plate{T: in(0.375), Width: in(10), YCentre: in(2.5), FreeEdge: in(3), Fy: ksi(50), Fu: ksi(65)}
+	near(t, "Ag", value(t, PlateYield(c), "Ag")/float64(units.SquareInch), 3.75, 1e-9, "hand calculation per AISC 360-22 J4.1(a)")
+	near(t, "An", value(t, PlateRupture(c), "An")/float64(units.SquareInch), (10-0.875)*0.375, 1e-9, "hand calculation per AISC 360-22 J4.1(b), B4.3b")
+}

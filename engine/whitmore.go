@@ -16,6 +16,9 @@ type Whitmore struct {
 	X        units.Length // x of the section (the row farthest from the free edge)
 	Holes    int          // holes cut by the section
 	Deducted units.Length // their total width with the B4.3 allowance
+	// SingleRow: every hole is in one row, so the section is the plate's
+	// whole width at that row.
+	SingleRow bool
 }
 
 // WhitmoreSection computes the Whitmore section of the connection.
@@ -30,10 +33,15 @@ func WhitmoreSection(c *Connection) Whitmore {
 		ymin, ymax = math.Min(ymin, float64(h.Y)), math.Max(ymax, float64(h.Y))
 	}
 	w := Whitmore{X: units.Length(xmin)}
+	slack := float64(LineSlack(c.Bolt.D))
 	w.Spread = units.Length(ymax - ymin + 2*(xmax-xmin)*math.Tan(math.Pi/6))
+	if xmax-xmin <= slack {
+		// One row: there is no length to spread over, and the section at
+		// the row runs across the whole plate (as for a splice plate).
+		w.SingleRow, w.Spread = true, c.Plate.Width
+	}
 	w.Lw = min(w.Spread, c.Plate.Width)
 	allow := c.Edition.HoleAllowance()
-	slack := float64(LineSlack(c.Bolt.D))
 	for _, h := range c.Holes {
 		if float64(h.X)-xmin <= slack {
 			w.Holes++
@@ -57,7 +65,7 @@ func PlateYield(c *Connection) Result {
 		{"Whitmore_spread", float64(w.Spread), units.DimLength},
 		{"t", float64(p.T), units.DimLength},
 		{"Ag", float64(Aw), units.DimArea},
-	}, "Whitmore section (30° spread), capped by the plate width")
+	}, whitmoreNote(w, "Whitmore section (30° spread), capped by the plate width"))
 }
 
 // PlateRupture is tensile rupture of the plate on the Whitmore section,
@@ -70,7 +78,7 @@ func PlateRupture(c *Connection) Result {
 	w := WhitmoreSection(c)
 	Ag := w.Lw.Mul(p.T)
 	An := max((w.Lw - w.Deducted).Mul(p.T), 0)
-	note := "net Whitmore section at the row farthest from the free edge"
+	note := whitmoreNote(w, "net Whitmore section at the row farthest from the free edge")
 	capped := 0.0
 	if cap, ok := c.Edition.SplicePlateCap(); ok && p.Kind == Splice && An > units.Area(cap)*Ag {
 		An = units.Area(cap) * Ag
@@ -86,4 +94,11 @@ func PlateRupture(c *Connection) Result {
 		{"holes", float64(w.Holes), units.Dimensionless},
 		{"splice_cap_applied", capped, units.Dimensionless},
 	}, note)
+}
+
+func whitmoreNote(w Whitmore, note string) string {
+	if w.SingleRow {
+		return "one row of bolts: the section across the whole plate width at the row"
+	}
+	return note
 }
