@@ -54,8 +54,12 @@ func newRootCmd(o *rootOptions) *cobra.Command {
 	root := &cobra.Command{
 		Use:   "gaugeline",
 		Short: "Bolted tension connections to AISC 360, from layout to shop drawing",
-		Long: "gaugeline checks a bolted tension connection (angle, double angle or flat bar to a gusset or\n" +
-			"splice plate) against every detailing rule and tension limit state of AISC 360-22 or 360-16.\n\n" +
+		Long: "gaugeline turns a bolted tension connection (angle, double angle or flat bar to a gusset or\n" +
+			"splice plate) into a bolt layout the shop can cut: it checks a layout against every detailing rule\n" +
+			"and tension limit state of AISC 360-22 or 360-16 (check), proposes the best compliant one (propose),\n" +
+			"draws the DXF cut sheet and CAM files (sheet), writes the calculation (report), re-verifies a\n" +
+			"fabricated part from its measured holes (reverify) and runs whole job lists (batch).\n" +
+			"Try 'gaugeline demo' for the whole loop on an invented example.\n\n" +
 			detail.Caution,
 		SilenceErrors: true,
 		SilenceUsage:  true,
