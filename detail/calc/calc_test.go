@@ -18,8 +18,8 @@ import (
 )
 
 // jobs are every shape in both unit systems, with and without a plate,
-// passing and failing: the testdata jobs, the published example and the
-// demo's job.
+// passing and failing: the testdata jobs (the laid-out pipe-rack brace
+// among them) and the published example.
 func jobs(t *testing.T) []string {
 	t.Helper()
 	var out []string
