@@ -493,18 +493,7 @@ func (ab *AsBuilt) decide() {
 	}
 	if !r.Pass {
 		ab.Verdict = Reject
-		var fails []string
-		for _, x := range r.Results {
-			if !x.Pass {
-				fails = append(fails, x.ID)
-			}
-		}
-		for _, f := range r.Findings {
-			if !f.Pass && !f.Advisory && !slices.Contains(fails, f.ID) {
-				fails = append(fails, f.ID)
-			}
-		}
-		ab.Reasons = append(ab.Reasons, "fails as built: "+strings.Join(fails, ", "))
+		ab.Reasons = append(ab.Reasons, "fails as built: "+strings.Join(r.Failing(), ", "))
 		if !ab.DesignReport.Pass {
 			ab.Reasons = append(ab.Reasons, "the design itself fails: "+ab.DesignReport.GoverningResult().ID+" governs")
 		}
@@ -1134,12 +1123,7 @@ func (ab *AsBuilt) WriteText(w io.Writer) error {
 	}
 	tw.Flush()
 	b.WriteString("\n")
-	tw = tabwriter.NewWriter(&b, 0, 0, 2, ' ', 0)
-	fmt.Fprintf(tw, "DETAILING (AS BUILT)\tCLAUSE\tMEASURED\tLIMIT\t\tWHERE\n")
-	for _, f := range ab.Report.Findings {
-		fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\t%s\n", f.ID, f.Clause, p.value(f.Measured, f.Dim), p.value(f.Limit, f.Dim), okFail(f.Pass, f.Advisory), f.Where)
-	}
-	tw.Flush()
+	p.findingsText(&b, "DETAILING (AS BUILT)", ab.Report.Findings)
 	fmt.Fprintf(&b, "\nverdict: %s\n", strings.ToUpper(ab.Verdict.String()))
 	for _, r := range ab.Reasons {
 		fmt.Fprintf(&b, "  %s\n", r)
@@ -1181,10 +1165,7 @@ func (ab *AsBuilt) WriteMarkdown(w io.Writer) error {
 	for _, row := range ab.ratioRows() {
 		fmt.Fprintf(&b, "| %s |\n", strings.Join(row, " | "))
 	}
-	b.WriteString("\n## Detailing as built\n\n| id | clause | measured | limit | result | where |\n|---|---|---:|---:|---|---|\n")
-	for _, f := range ab.Report.Findings {
-		fmt.Fprintf(&b, "| %s | %s | %s | %s | %s | %s |\n", f.ID, f.Clause, mdEscape(p.value(f.Measured, f.Dim)), mdEscape(p.value(f.Limit, f.Dim)), okFail(f.Pass, f.Advisory), mdEscape(f.Where))
-	}
+	p.findingsMarkdown(&b, "Detailing as built", ab.Report.Findings)
 	b.WriteString("\n")
 	for _, c := range ab.Report.Cautions {
 		fmt.Fprintf(&b, "> %s\n>\n", c)

@@ -137,12 +137,7 @@ func (r *Report) WriteText(w io.Writer) error {
 	}
 	tw.Flush()
 	fmt.Fprintf(&b, "\n")
-	tw = tabwriter.NewWriter(&b, 0, 0, 2, ' ', 0)
-	fmt.Fprintf(tw, "DETAILING\tCLAUSE\tMEASURED\tLIMIT\t\tWHERE\n")
-	for _, f := range r.Findings {
-		fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\t%s\n", f.ID, f.Clause, p.value(f.Measured, f.Dim), p.value(f.Limit, f.Dim), okFail(f.Pass, f.Advisory), f.Where)
-	}
-	tw.Flush()
+	p.findingsText(&b, "DETAILING", r.Findings)
 	g := r.GoverningResult()
 	fmt.Fprintf(&b, "\nverdict: %s — governing %s (%s), ratio %s\n", strings.ToUpper(r.Verdict()), g.ID, g.Clause, ratio(g.Ratio))
 	for _, f := range r.Findings {
@@ -183,10 +178,7 @@ func (r *Report) WriteMarkdown(w io.Writer) error {
 		}
 		fmt.Fprintf(&b, "| %s | %s | %s | %s | %s | %s | %s | %s |\n", id, x.Clause, p.force(x.Nominal), p.force(x.Available), p.force(x.Demand), ratio(x.Ratio), res, mdEscape(x.Note))
 	}
-	fmt.Fprintf(&b, "\n## Detailing\n\n| id | clause | measured | limit | result | where |\n|---|---|---:|---:|---|---|\n")
-	for _, f := range r.Findings {
-		fmt.Fprintf(&b, "| %s | %s | %s | %s | %s | %s |\n", f.ID, f.Clause, mdEscape(p.value(f.Measured, f.Dim)), mdEscape(p.value(f.Limit, f.Dim)), okFail(f.Pass, f.Advisory), mdEscape(f.Where))
-	}
+	p.findingsMarkdown(&b, "Detailing", r.Findings)
 	g := r.GoverningResult()
 	fmt.Fprintf(&b, "\n**Verdict: %s** — governing %s (%s), ratio %s.\n\n", strings.ToUpper(r.Verdict()), g.ID, g.Clause, ratio(g.Ratio))
 	for _, c := range r.Cautions {
@@ -194,6 +186,25 @@ func (r *Report) WriteMarkdown(w io.Writer) error {
 	}
 	_, err := io.WriteString(w, strings.TrimSuffix(b.String(), ">\n"))
 	return err
+}
+
+// findingsText writes the detailing findings as an aligned table under a
+// title column heading.
+func (p people) findingsText(b *strings.Builder, title string, fs []Finding) {
+	tw := tabwriter.NewWriter(b, 0, 0, 2, ' ', 0)
+	fmt.Fprintf(tw, "%s\tCLAUSE\tMEASURED\tLIMIT\t\tWHERE\n", title)
+	for _, f := range fs {
+		fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\t%s\n", f.ID, f.Clause, p.value(f.Measured, f.Dim), p.value(f.Limit, f.Dim), okFail(f.Pass, f.Advisory), f.Where)
+	}
+	tw.Flush()
+}
+
+// findingsMarkdown writes the detailing findings as a Markdown section.
+func (p people) findingsMarkdown(b *strings.Builder, title string, fs []Finding) {
+	fmt.Fprintf(b, "\n## %s\n\n| id | clause | measured | limit | result | where |\n|---|---|---:|---:|---|---|\n", title)
+	for _, f := range fs {
+		fmt.Fprintf(b, "| %s | %s | %s | %s | %s | %s |\n", f.ID, f.Clause, mdEscape(p.value(f.Measured, f.Dim)), mdEscape(p.value(f.Limit, f.Dim)), okFail(f.Pass, f.Advisory), mdEscape(f.Where))
+	}
 }
 
 func mdEscape(s string) string { return strings.ReplaceAll(s, "|", `\|`) }

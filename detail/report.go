@@ -5,6 +5,7 @@ import (
 	"encoding/json"
 	"fmt"
 	"math"
+	"slices"
 
 	"gaugeline/engine"
 	"gaugeline/rules/units"
@@ -60,6 +61,23 @@ func CheckFile(path string) (*Report, error) {
 
 // GoverningResult returns the limit state with the highest ratio.
 func (r *Report) GoverningResult() engine.Result { return r.Results[r.Governing] }
+
+// Failing names every limit state and non-advisory detailing rule that
+// fails, each once: limit states first, in the report's order.
+func (r *Report) Failing() []string {
+	var ids []string
+	for _, x := range r.Results {
+		if !x.Pass && !slices.Contains(ids, x.ID) {
+			ids = append(ids, x.ID)
+		}
+	}
+	for _, f := range r.Findings {
+		if !f.Pass && !f.Advisory && !slices.Contains(ids, f.ID) {
+			ids = append(ids, f.ID)
+		}
+	}
+	return ids
+}
 
 // Verdict is "pass" or "fail".
 func (r *Report) Verdict() string {

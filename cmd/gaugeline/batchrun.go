@@ -401,7 +401,7 @@ func jobFiles(cfg batchConfig, job *detail.Job, row *batchRow) ([]dxfout.File, e
 	row.Governing, row.Ratio, row.Bolts = g.ID, g.Ratio, len(r.Design.Conn.Holes)
 	files := []dxfout.File{{Name: job.Mark + ".json", Data: data}}
 	if !r.Pass {
-		row.Verdict, row.Message = batchFail, failing(r)
+		row.Verdict, row.Message = batchFail, "fails: "+strings.Join(r.Failing(), ", ")
 		return files, nil
 	}
 	row.Verdict = batchPass
@@ -417,22 +417,6 @@ func jobFiles(cfg batchConfig, job *detail.Job, row *batchRow) ([]dxfout.File, e
 		return nil, err
 	}
 	return append(files, dxf...), nil
-}
-
-// failing names what fails: limit states first, then detailing rules.
-func failing(r *detail.Report) string {
-	var ids []string
-	for _, x := range r.Results {
-		if !x.Pass && !slices.Contains(ids, x.ID) {
-			ids = append(ids, x.ID)
-		}
-	}
-	for _, f := range r.Findings {
-		if !f.Pass && !f.Advisory && !slices.Contains(ids, f.ID) {
-			ids = append(ids, f.ID)
-		}
-	}
-	return "fails: " + strings.Join(ids, ", ")
 }
 
 // checkNames makes sure a job writes only the names its mark claimed.

@@ -6,7 +6,6 @@ import (
 	"fmt"
 	"io"
 	"path/filepath"
-	"slices"
 	"strings"
 
 	"github.com/spf13/cobra"
@@ -55,25 +54,8 @@ func runReport(_ context.Context, o *rootOptions, ro reportOptions, path string,
 	}
 	fmt.Fprintln(out, ro.out)
 	if !r.Pass {
-		fmt.Fprintf(o.stderr, "gaugeline: note: %s fails %s; the report shows why\n", r.Design.Job.Mark, strings.Join(failingIDs(r), ", "))
+		fmt.Fprintf(o.stderr, "gaugeline: note: %s fails %s; the report shows why\n", r.Design.Job.Mark, strings.Join(r.Failing(), ", "))
 		return exitError{exitFail}
 	}
 	return nil
-}
-
-// failingIDs names every limit state and non-advisory detailing rule that
-// fails, each once, in the report's order.
-func failingIDs(r *detail.Report) []string {
-	var ids []string
-	for _, x := range r.Results {
-		if !x.Pass {
-			ids = append(ids, x.ID)
-		}
-	}
-	for _, f := range r.Findings {
-		if !f.Pass && !f.Advisory && !slices.Contains(ids, f.ID) {
-			ids = append(ids, f.ID)
-		}
-	}
-	return ids
 }
