@@ -508,7 +508,7 @@ func (l sheetLayout) plateView(d *Design) View {
 		ylo, yhi = min(ylo, l.len(hole.Y)), max(yhi, l.len(hole.Y))
 	}
 	near, far := l.len(xhi), l.len(xlo)
-	spread := (near - far) * math.Tan(math.Pi/6)
+	spread := (near - far) * math.Tan(engine.WhitmoreAngle)
 	ymin := l.len(pl.YMin())
 	for _, s := range []Segment{
 		{Point{near, ylo}, Point{far, ylo - spread}, LayerReference},

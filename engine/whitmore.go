@@ -21,6 +21,10 @@ type Whitmore struct {
 	SingleRow bool
 }
 
+// WhitmoreAngle is the spread of the Whitmore section on each side of the
+// bolt group: 30°.
+const WhitmoreAngle = math.Pi / 6
+
 // WhitmoreSection computes the Whitmore section of the connection.
 func WhitmoreSection(c *Connection) Whitmore {
 	if len(c.Holes) == 0 {
@@ -34,7 +38,7 @@ func WhitmoreSection(c *Connection) Whitmore {
 	}
 	w := Whitmore{X: units.Length(xmin)}
 	slack := float64(LineSlack(c.Bolt.D))
-	w.Spread = units.Length(ymax - ymin + 2*(xmax-xmin)*math.Tan(math.Pi/6))
+	w.Spread = units.Length(ymax - ymin + 2*(xmax-xmin)*math.Tan(WhitmoreAngle))
 	if xmax-xmin <= slack {
 		// One row: there is no length to spread over, and the section at
 		// the row runs across the whole plate (as for a splice plate).
