@@ -150,14 +150,7 @@ func ShearLagFactor(c *Connection) ShearLag {
 	if m.Shape == Flat {
 		return ShearLag{U: 1, Case: "case 1"}
 	}
-	var sl ShearLag
-	xmin, xmax := math.Inf(1), math.Inf(-1)
-	for _, h := range c.Holes {
-		xmin, xmax = math.Min(xmin, float64(h.X)), math.Max(xmax, float64(h.X))
-	}
-	if len(c.Holes) > 0 {
-		sl.L = units.Length(xmax - xmin)
-	}
+	sl := ShearLag{L: patternLength(c.Holes)}
 	for _, line := range GageLines(c) {
 		sl.PerLn = max(sl.PerLn, len(line))
 	}
