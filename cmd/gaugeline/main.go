@@ -8,6 +8,7 @@ import (
 	"fmt"
 	"io"
 	"os"
+	"strings"
 
 	"github.com/spf13/cobra"
 
@@ -100,16 +101,7 @@ func exitCode(err error, stderr io.Writer) int {
 func isCobraUsage(err error) bool {
 	s := err.Error()
 	for _, p := range []string{"unknown command", "accepts ", "requires ", "unknown flag", "unknown shorthand"} {
-		if len(s) >= len(p) && contains(s, p) {
-			return true
-		}
-	}
-	return false
-}
-
-func contains(s, sub string) bool {
-	for i := 0; i+len(sub) <= len(s); i++ {
-		if s[i:i+len(sub)] == sub {
+		if strings.Contains(s, p) {
 			return true
 		}
 	}
