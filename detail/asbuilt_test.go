@@ -487,3 +487,39 @@ func TestReverifyNeverPanics(t *testing.T) {
 		}
 	}
 }
+
+// TestReverifyHoleOffItsLine is the review's case of issue 10 (item 9):
+// one line of five bolts whose third hole was drilled off the gage line.
+// Nothing about the member's block shear strength changes much, so the
+// as-built ratio must stay near the design's. Design, hand calculation per
+// AISC 360-22 J4.3 (L4x4x1/2 A36, 3/4-in bolts, dh = 7/8 in): Agv = 13.5(0.5)
+// = 6.75 in², Anv = (13.5 − 4.5·0.875)(0.5) = 4.781 in², Ant = (1.5 −
+// 0.4375)(0.5) = 0.5313 in²; Rn = min(197.2, 0.6·36·6.75 + 58·0.5313 =
+// 176.6) = 176.6 kips, φRn = 132.5 kips, ratio 110/132.5 = 0.830. The old
+// code formed a block through the first three holes and compared it with
+// the whole force: 1.49 with H3 0.3 in toward the toe.
+func TestReverifyHoleOffItsLine(t *testing.T) {
+	const src = "hand calculation per AISC 360-22 J4.3"
+	job := filepath.Join(measuredDir, "qa-5-offline.yaml")
+	for _, f := range []string{"qa-5-h3-0.3-toe.csv", "qa-5-h3-0.3-heel.csv", "qa-5-h3-0.5-toe.csv", "qa-5-h3-0.5-heel.csv"} {
+		ab := reverifyFile(t, job, filepath.Join(measuredDir, f), AlignDatum)
+		var design, built float64
+		for _, r := range ab.DesignReport.Results {
+			if r.ID == "member.block-shear" {
+				design = r.Ratio
+			}
+		}
+		if math.Abs(design-110/(0.75*176.6125)) > 1e-3 {
+			t.Errorf("%s: design block shear ratio %.4f, want 0.830 (%s)", f, design, src)
+		}
+		for _, r := range ab.Report.Results {
+			if r.ID == "member.block-shear" {
+				built = r.Ratio
+			}
+		}
+		if math.Abs(built/design-1) > 0.10 {
+			t.Errorf("%s: as-built block shear ratio %.3f against the design's %.3f: one hole off its line must not make a new, weaker block (%s)",
+				f, built, design, src)
+		}
+	}
+}

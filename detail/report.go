@@ -94,7 +94,8 @@ func cautions(d *Design) []string {
 		c = append(c, "The plate is taken as a rectangle of the given width centred on the bolt group; "+
 			"its side edges are free edges for block shear.")
 	}
-	c = append(c, "Block shear uses Ubs = 1.0 (uniform tension stress).")
+	c = append(c, "Block shear uses Ubs = 1.0 (uniform tension stress); a block that tears out k of the n bolts "+
+		"is compared with k/n of the force, the bolts sharing it equally.")
 	if d.Conn.Member.Shape != engine.Flat {
 		c = append(c, "Shear lag: U is the largest of Table D3.1 case 2, case 8 and the D3 bound for open sections.")
 	}

@@ -500,20 +500,17 @@ func (l sheetLayout) plateView(d *Design) View {
 	l.annotate(&v, true)
 	h := l.h
 
-	// Whitmore section: 30° each side from the row nearest the free edge
-	// to the row farthest from it, clipped to the plate.
+	// Whitmore section as the check takes it: 30° from the first bolt of
+	// each outer gage line to the section through the bolt farthest from
+	// the free edge, clipped to the plate.
 	w := engine.WhitmoreSection(c)
-	var ylo, yhi float64 = math.Inf(1), math.Inf(-1)
-	for _, hole := range c.Holes {
-		ylo, yhi = min(ylo, l.len(hole.Y)), max(yhi, l.len(hole.Y))
-	}
-	near, far := l.len(xhi), l.len(xlo)
-	spread := (near - far) * math.Tan(engine.WhitmoreAngle)
+	lo, hi := w.Low, w.High
+	far := l.len(w.X)
 	ymin := l.len(pl.YMin())
 	for _, s := range []Segment{
-		{Point{near, ylo}, Point{far, ylo - spread}, LayerReference},
-		{Point{near, yhi}, Point{far, yhi + spread}, LayerReference},
-		{Point{far, ylo - spread}, Point{far, yhi + spread}, LayerReference},
+		{Point{l.len(lo.X0), l.len(lo.Y0)}, Point{l.len(lo.X1), l.len(lo.Y1)}, LayerReference},
+		{Point{l.len(hi.X0), l.len(hi.Y0)}, Point{l.len(hi.X1), l.len(hi.Y1)}, LayerReference},
+		{Point{far, l.len(lo.Y1)}, Point{far, l.len(hi.Y1)}, LayerReference},
 	} {
 		if a, b, ok := clipY(s.A, s.B, ymin, ymax); ok && a != b {
 			v.Lines = append(v.Lines, Segment{turn(a.X, a.Y), turn(b.X, b.Y), LayerReference})

@@ -21,8 +21,10 @@ func BearingRn(cb, ct float64, d, lc, t units.Length, Fu units.Stress) (bearing,
 // clearDistances returns lc for every hole: the clear distance, in the
 // direction the part is pulled relative to the bolt (dir −1: toward −x; +1:
 // toward +x), from the hole's edge to the edge of the next hole in its line
-// of force or to the part's edge at x = edge.
-func clearDistances(holes []Hole, dir float64, edge units.Length) []units.Length {
+// of force or to the part's edge at x = edge. A hole in the same row
+// (within rowSlack along the load, as a measured hole a little off its row
+// is) is beside the bolt, not ahead of it.
+func clearDistances(holes []Hole, dir float64, edge, rowSlack units.Length) []units.Length {
 	lc := make([]units.Length, len(holes))
 	for i, h := range holes {
 		best := units.Length(dir*float64(edge-h.X)) - h.Dx/2
@@ -31,7 +33,7 @@ func clearDistances(holes []Hole, dir float64, edge units.Length) []units.Length
 				continue
 			}
 			ahead := units.Length(dir * float64(o.X-h.X))
-			if ahead <= eps || math.Abs(float64(o.Y-h.Y)) >= float64(o.Dy+h.Dy)/2 {
+			if ahead <= rowSlack || math.Abs(float64(o.Y-h.Y)) >= float64(max(h.Dy, o.Dy))/2 {
 				continue
 			}
 			if d := ahead - (o.Dx+h.Dx)/2; d < best {
@@ -45,7 +47,7 @@ func clearDistances(holes []Hole, dir float64, edge units.Length) []units.Length
 
 // bearingShares computes every hole's bearing and tearout in one part.
 func bearingShares(c *Connection, t units.Length, Fu units.Stress, dir float64, edge units.Length) []BoltShare {
-	lcs := clearDistances(c.Holes, dir, edge)
+	lcs := clearDistances(c.Holes, dir, edge, LineSlack(c.Bolt.D))
 	shares := make([]BoltShare, len(c.Holes))
 	for i, h := range c.Holes {
 		cb, ct := c.Edition.BearingCoefficients(h.Type, h.Slot, c.Bolt.DeformationConsidered)

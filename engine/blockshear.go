@@ -21,11 +21,13 @@ func BlockShearRn(Fy, Fu units.Stress, Agv, Anv, Ant units.Area, Ubs float64) un
 // block is one candidate block: its boundaries across the load are either a
 // free edge or a gage line (a shear plane runs along every gage-line
 // boundary); the tension plane runs between the boundaries through the
-// innermost hole of every line it crosses.
+// innermost hole of every line it crosses. Bolts is the number of bolts
+// whose holes the block tears out.
 type block struct {
 	desc          string
 	Agv, Anv, Ant units.Area
 	Rn            units.Force
+	Bolts         int
 }
 
 // blockPart describes one part for the block search.
@@ -42,31 +44,94 @@ type blockPart struct {
 	name   string  // "member" or "plate"
 }
 
+// HoleChord is the length along the load that a line parallel to the load,
+// dy off the hole's centre, cuts through a hole a long (along the load)
+// and b wide (across it): the whole length a on the centre line, less as
+// the line moves off it, and zero once it clears the hole. Round holes and
+// slots (stadiums) are exact.
+func HoleChord(a, b, dy units.Length) units.Length {
+	dy = units.Length(math.Abs(float64(dy)))
+	if dy >= b/2 {
+		return 0
+	}
+	if b >= a { // round, or a slot across the load: straight sides along x
+		straight := (b - a) / 2
+		if dy <= straight {
+			return a
+		}
+		r, e := float64(a/2), float64(dy-straight)
+		return units.Length(2 * math.Sqrt(max(r*r-e*e, 0)))
+	}
+	r := float64(b / 2) // a slot along the load: round ends of radius b/2
+	return a - b + units.Length(2*math.Sqrt(max(r*r-float64(dy*dy), 0)))
+}
+
 // blocks enumerates every block of the part and returns them all.
 func (p blockPart) blocks(c *Connection) []block {
 	allow := c.Edition.HoleAllowance()
 	lines := GageLines(c)
 	nl := len(lines)
+	// dist is a hole's distance from the tear-out edge along the load.
+	dist := func(h Hole) units.Length { return units.Length(p.toward) * (p.xEdge - h.X) }
 	// innermost hole of each line: farthest from the tear-out edge
 	inner := make([]int, nl)
 	for i, ln := range lines {
 		inner[i] = ln[0]
 		for _, h := range ln {
-			if p.toward*float64(c.Holes[h].X-c.Holes[inner[i]].X) < 0 {
+			if dist(c.Holes[h]) > dist(c.Holes[inner[i]]) {
 				inner[i] = h
 			}
 		}
 	}
-	shear := func(i int) (Agv, Anv units.Area) {
-		h := c.Holes[inner[i]]
-		lgv := units.Length(math.Abs(float64(p.xEdge - h.X)))
-		dh := h.Dx + allow
-		ln := units.Length(len(lines[i])) - 0.5
-		return lgv.Mul(p.t), (lgv - ln*dh).Mul(p.t)
+	// shearTo is the shear plane along y from the edge to the distance D:
+	// it takes out the part between the edge and D of every hole it cuts
+	// (B4.3 width along the load): half of one centred where it ends. As-
+	// built holes a little off the line are cut over their chord, not over
+	// their whole length.
+	shearTo := func(y, D units.Length) (Agv, Anv units.Area) {
+		net := D
+		for _, h := range c.Holes {
+			cut := HoleChord(h.Dx+allow, h.Dy+allow, h.Y-y)
+			d := dist(h)
+			if lo, hi := max(d-cut/2, 0), min(d+cut/2, D); hi > lo {
+				net -= hi - lo
+			}
+		}
+		return D.Mul(p.t), net.Mul(p.t)
 	}
-	// tension plane from boundary a to boundary b (line indexes; -1 is the
-	// low free edge, nl the high free edge)
-	tension := func(a, b int) units.Area {
+	// inside reports whether the hole of h reaches inside a block whose
+	// tension plane is at the distance D where h lies across the load: its
+	// bolt is then torn out with the block (a bolt whose hole the plane
+	// cuts counts, which is the larger share).
+	inside := func(h Hole, D units.Length) bool { return dist(h) < D+h.Dx/2-eps }
+	// shear is the shear plane along line i to its innermost hole.
+	shear := func(i int) (Agv, Anv units.Area) {
+		hi := c.Holes[inner[i]]
+		return shearTo(hi.Y, dist(hi))
+	}
+	// across is a tension plane square to the load at the distance D from
+	// y0 to y1: it takes out the part between y0 and y1 of every hole it
+	// cuts (B4.3 width across the load).
+	across := func(y0, y1, D units.Length) units.Area {
+		net := y1 - y0
+		for _, h := range c.Holes {
+			w := HoleChord(h.Dy+allow, h.Dx+allow, dist(h)-D)
+			lo, hi := max(h.Y-w/2, y0), min(h.Y+w/2, y1)
+			if hi > lo {
+				net -= hi - lo
+			}
+		}
+		return max(net, 0).Mul(p.t)
+	}
+	// plane is one tension plane from boundary a to boundary b (line
+	// indexes; -1 is the low free edge, nl the high free edge): it ends at
+	// the boundaries' innermost holes (taking half of each) and, between
+	// them, passes through the innermost hole of each line in the mask
+	// (the whole hole, plus s²/4g for each diagonal, B4.3b) and past the
+	// others. It returns Ant and the bolts the block tears out: every hole
+	// between the boundaries (or cut by a boundary's shear plane) on the
+	// edge side of the plane.
+	plane := func(a, b int, between []int, mask int) (units.Area, int) {
 		var y0, y1 units.Length
 		if a < 0 {
 			y0 = p.low
@@ -78,23 +143,57 @@ func (p blockPart) blocks(c *Connection) []block {
 		} else {
 			y1 = c.Holes[inner[b]].Y
 		}
+		var stops []Hole
 		net := y1 - y0
-		from, to := max(a, 0), min(b, nl-1)
-		for i := from; i <= to; i++ {
+		half := func(i int) {
 			h := c.Holes[inner[i]]
-			w := h.Dy + allow
-			if i == a || i == b {
-				w /= 2
+			stops = append(stops, h)
+			net -= (h.Dy + allow) / 2
+		}
+		if a >= 0 {
+			half(a)
+		}
+		for k, i := range between {
+			if mask&(1<<k) != 0 {
+				h := c.Holes[inner[i]]
+				stops = append(stops, h)
+				net -= h.Dy + allow
 			}
-			net -= w
-			if i > from {
-				g := h.Y - c.Holes[inner[i-1]].Y
-				s := h.X - c.Holes[inner[i-1]].X
+		}
+		if b < nl {
+			half(b)
+		}
+		for k := 1; k < len(stops); k++ {
+			g, s := stops[k].Y-stops[k-1].Y, stops[k].X-stops[k-1].X
+			if g > eps {
 				net += units.Length(float64(s*s) / float64(4*g))
 			}
 		}
-		return net.Mul(p.t)
+		// the plane's distance from the edge at y: straight between its
+		// stops, square to the load beyond the first and the last
+		at := func(y units.Length) units.Length {
+			if y <= stops[0].Y {
+				return dist(stops[0])
+			}
+			for k := 1; k < len(stops); k++ {
+				if y <= stops[k].Y {
+					f := (y - stops[k-1].Y) / max(stops[k].Y-stops[k-1].Y, eps)
+					return dist(stops[k-1]) + f*(dist(stops[k])-dist(stops[k-1]))
+				}
+			}
+			return dist(stops[len(stops)-1])
+		}
+		n := 0
+		for _, h := range c.Holes {
+			if h.Y+h.Dy/2 > y0-eps && h.Y-h.Dy/2 < y1+eps && inside(h, at(h.Y)) {
+				n++
+			}
+		}
+		return net.Mul(p.t), n
 	}
+	// most is how many lines in between are tried every way; beyond it
+	// the plane goes through all of them or through none.
+	const most = 8
 	var out []block
 	add := func(a, b int, desc string) {
 		var Agv, Anv units.Area
@@ -104,9 +203,68 @@ func (p blockPart) blocks(c *Connection) []block {
 				Agv, Anv = Agv+g, Anv+n
 			}
 		}
-		Ant := tension(a, b)
-		Agv, Anv, Ant = max(Agv, 0), max(Anv, 0), max(Ant, 0)
-		out = append(out, block{desc, Agv, Anv, Ant, BlockShearRn(p.Fy, p.Fu, Agv, Anv, Ant, 1)})
+		Agv, Anv = max(Agv, 0), max(Anv, 0)
+		var between []int
+		for i := a + 1; i < b; i++ {
+			if i >= 0 && i < nl {
+				between = append(between, i)
+			}
+		}
+		masks := []int{1<<len(between) - 1, 0}
+		if len(between) <= most {
+			masks = masks[:0]
+			for m := 1<<len(between) - 1; m >= 0; m-- {
+				masks = append(masks, m)
+			}
+		}
+		// the plane that makes the block worst: highest share over Rn
+		var worst block
+		first := true
+		consider := func(bl block) {
+			if first || float64(bl.Bolts)*float64(worst.Rn) > float64(worst.Bolts)*float64(bl.Rn)*(1+1e-12) {
+				worst, first = bl, false
+			}
+		}
+		for _, m := range masks {
+			Ant, bolts := plane(a, b, between, m)
+			Ant = max(Ant, 0)
+			consider(block{desc, Agv, Anv, Ant, BlockShearRn(p.Fy, p.Fu, Agv, Anv, Ant, 1), bolts})
+		}
+		// square blocks: the shear planes along the boundaries run to the
+		// distance D of a hole between them and the tension plane goes
+		// straight across there, past the boundaries' own last holes when
+		// they end nearer the edge (a measured hole off its line makes a
+		// line of its own that ends early)
+		y0, y1 := p.low, p.high
+		if a >= 0 {
+			y0 = c.Holes[inner[a]].Y
+		}
+		if b < nl {
+			y1 = c.Holes[inner[b]].Y
+		}
+		for _, h := range c.Holes {
+			if h.Y+h.Dy/2 <= y0+eps || h.Y-h.Dy/2 >= y1-eps {
+				continue
+			}
+			D := dist(h)
+			var gv, nv units.Area
+			for _, y := range []units.Length{y0, y1} {
+				if (y == y0 && a >= 0) || (y == y1 && b < nl) {
+					g, n := shearTo(y, D)
+					gv, nv = gv+g, nv+n
+				}
+			}
+			nt := across(y0, y1, D)
+			bolts := 0
+			for _, o := range c.Holes {
+				if o.Y+o.Dy/2 > y0-eps && o.Y-o.Dy/2 < y1+eps && inside(o, D) {
+					bolts++
+				}
+			}
+			gv, nv = max(gv, 0), max(nv, 0)
+			consider(block{desc, gv, nv, nt, BlockShearRn(p.Fy, p.Fu, gv, nv, nt, 1), bolts})
+		}
+		out = append(out, worst)
 	}
 	for a := 0; a < nl; a++ {
 		if p.hasLow {
@@ -137,15 +295,29 @@ func (p blockPart) edgeName(high bool) string {
 	return "lower side"
 }
 
+// blockResult picks the block with the highest ratio. A block that tears
+// out k of the n bolts is loaded by k/n of the force (the bolts share the
+// force equally, as the bolt checks take it): the bolts outside it still
+// carry their own share through the rest of the part.
 func blockResult(c *Connection, id string, blocks []block, p blockPart) Result {
+	n := len(c.Holes)
+	share := func(b block) float64 { return float64(b.Bolts) / float64(max(n, 1)) }
+	// severity orders the blocks by ratio at any demand: share / Rn
+	severity := func(b block) float64 {
+		if b.Rn <= 0 {
+			return math.Inf(1)
+		}
+		return share(b) / float64(b.Rn)
+	}
 	w := 0
 	for i, b := range blocks {
-		if b.Rn < blocks[w].Rn {
+		if severity(b) > severity(blocks[w])*(1+1e-12) {
 			w = i
 		}
 	}
 	b := blocks[w]
-	return finish(c, id, "J4.3", b.Rn, c.Edition.BlockShearFactor(), []Value{
+	k := share(b)
+	return finishFor(c, units.Force(k)*c.Demand, id, "J4.3", b.Rn, c.Edition.BlockShearFactor(), []Value{
 		{"Agv", float64(b.Agv), units.DimArea},
 		{"Anv", float64(b.Anv), units.DimArea},
 		{"Ant", float64(b.Ant), units.DimArea},
@@ -154,7 +326,11 @@ func blockResult(c *Connection, id string, blocks []block, p blockPart) Result {
 		{"Fu", float64(p.Fu), units.DimStress},
 		{"t", float64(p.t), units.DimLength},
 		{"blocks", float64(len(blocks)), units.Dimensionless},
-	}, fmt.Sprintf("weakest of %d blocks: %s (Ubs = 1, uniform tension)", len(blocks), b.desc))
+		{"bolts_in_block", float64(b.Bolts), units.Dimensionless},
+		{"bolts", float64(n), units.Dimensionless},
+		{"share", k, units.Dimensionless},
+	}, fmt.Sprintf("worst of %d blocks: %s, tearing out %d of %d bolts and carrying that share of the force (Ubs = 1, uniform tension)",
+		len(blocks), b.desc, b.Bolts, n))
 }
 
 // MemberBlockShear is block shear of the member, the weakest of every

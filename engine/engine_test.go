@@ -261,3 +261,35 @@ func TestSeguiStaggeredPlate(t *testing.T) {
 		t.Errorf("worst path %v, want a-b-c-d-e through all three holes", path)
 	}
 }
+
+func TestPlateNetSectionStaggered(t *testing.T) {
+	// The plate of Segui's Example 3.6 (from memory; see the test above)
+	// used as a 16 x 3/4 in splice plate under AISC 360-22 (no 0.85·Ag cap):
+	// two rows of each line, 6 in apart, the middle line staggered 3 in,
+	// holes 1-1/16 in (1-1/8 in with the B4.3 allowance, as Segui takes
+	// them). The Whitmore spread, 10 + 2·6·tan 30° = 16.93 in, is clipped to
+	// the 16-in plate, and the plate's net section must be found by the same
+	// worst-path search as the member's: path a-b-c-d-e, wn = 13.52 in, An =
+	// 10.14 in². The section through the first row alone would give
+	// wn = 16 − 2(1.125) = 13.75 in.
+	const src = "Segui, Steel Design, Example 3.6 (from memory)"
+	e := edition(t, "aisc360-22", units.US)
+	grade, _ := e.Bolt("A325")
+	h := in(1.0625)
+	holes := append(line(1, 2, in(1.5), in(6), in(3), h, h, rules.Standard),
+		line(3, 2, in(4.5), in(6), in(8), h, h, rules.Standard)...)
+	holes = append(holes, line(5, 2, in(1.5), in(6), in(13), h, h, rules.Standard)...)
+	c := &Connection{
+		Edition: e, Method: rules.LRFD,
+		Member: Member{Shape: Flat, Width: in(16), T: in(0.75), Ag: in2(12), Pieces: 1, Fy: ksi(36), Fu: ksi(58)},
+		Plate:  &Plate{Kind: Splice, T: in(0.75), Width: in(16), YCentre: in(8), FreeEdge: in(12), Fy: ksi(36), Fu: ksi(58)},
+		Bolt:   Bolt{D: in(1), Grade: grade, DeformationConsidered: true},
+		Holes:  holes,
+	}
+	r := PlateRupture(c)
+	near(t, "Lw", value(t, r, "Lw")/float64(units.Inch), 16, 1e-12, src)
+	near(t, "plate An", value(t, r, "An")/float64(units.SquareInch), 10.14, pubTol, src)
+	// one search serves both parts: the member's An over the same holes
+	An, _ := NetArea(c)
+	near(t, "member An", An.In2(), value(t, r, "An")/float64(units.SquareInch), 1e-12, src)
+}

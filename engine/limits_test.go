@@ -1,6 +1,7 @@
 package engine
 
 import (
+	"math"
 	"testing"
 
 	"gaugeline/rules"
@@ -68,7 +69,27 @@ func TestBlockShearFlatBlocks(t *testing.T) {
 		}
 		near(t, b.desc, b.Rn.Kip(), w, 1e-9, src)
 	}
-	near(t, "governing", MemberBlockShear(c).Nominal.Kip(), 79.4125, 1e-9, src)
+	// Each block carries the share of the force of the bolts it tears out:
+	// the outer L-blocks tear out two of the four bolts (half the force,
+	// 79.4125 / 0.5 = 158.825 kips for the whole force), the central block
+	// and the blocks that cross both lines all four. The weakest for the
+	// whole force is then the block from line 2 to the near edge,
+	// 141.0375 kips, carrying all four bolts.
+	r := MemberBlockShear(c)
+	near(t, "governing", r.Nominal.Kip(), 141.0375, 1e-9, src)
+	near(t, "share", value(t, r, "share"), 1, 0, src)
+	c.Demand = kip(100)
+	r = MemberBlockShear(c)
+	near(t, "ratio", r.Ratio, 100/(0.75*141.0375), 1e-9, src)
+	for _, b := range blocks {
+		want := 4
+		if b.desc == "member: line 1 to the near edge" || b.desc == "member: line 2 to the far edge" {
+			want = 2
+		}
+		if b.Bolts != want {
+			t.Errorf("%s tears out %d bolts, want %d", b.desc, b.Bolts, want)
+		}
+	}
 }
 
 func TestBearingTearoutPerBolt(t *testing.T) {
@@ -176,15 +197,67 @@ func TestAsBuiltHolesStayOnTheirLine(t *testing.T) {
 	near(t, "block shear Rn", MemberBlockShear(c).Nominal.Kip(), 144.2125, 0.01, "hand calculation per AISC 360-22 J4.3")
 }
 
-func TestWhitmoreSingleRow(t *testing.T) {
-	// With every bolt in one row there is no length for the 30° spread: the
-	// plate's section at the row is its whole width (as a splice plate is
-	// checked), less the holes in it. A 10 x 3/8 in A572-50 plate, one 3/4-in
-	// bolt: Ag = 3.75 in², An = (10 − 0.875)(0.375) = 3.422 in² (hand
-	// calculation per AISC 360-22 J4.1, B4.3b).
-	c := designExampleD2(t, rules.LRFD)
-	c.Holes = c.Holes[:1]
-	c.Plate = &Plate{T: in(0.375), Width: in(10), YCentre: in(2.5), FreeEdge: in(3), Fy: ksi(50), Fu: ksi(65)}
-	near(t, "Ag", value(t, PlateYield(c), "Ag")/float64(units.SquareInch), 3.75, 1e-9, "hand calculation per AISC 360-22 J4.1(a)")
-	near(t, "An", value(t, PlateRupture(c), "An")/float64(units.SquareInch), (10-0.875)*0.375, 1e-9, "hand calculation per AISC 360-22 J4.1(b), B4.3b")
+func TestWhitmoreFromTheFirstBoltOfEachLine(t *testing.T) {
+	// An L5x3x1/2 to a 14 x 1/2 in A572-50 gusset (the review's case in
+	// issue 10): the Whitmore width is the spread of the first row plus
+	// 2·L·tan 30° (AISC Manual Part 9, Whitmore section; common practice,
+	// no source), J4.1(a) φRn = 0.9·50·Lw·0.5 (hand calculation per AISC
+	// 360-22 J4.1(a)).
+	const src = "hand calculation per AISC 360-22 J4.1(a), Whitmore section"
+	e := edition(t, "aisc360-22", units.US)
+	grade, _ := e.Bolt("A325")
+	conn := func(holes []Hole) *Connection {
+		var maxX, sumY units.Length
+		for _, h := range holes {
+			maxX, sumY = max(maxX, h.X), sumY+h.Y
+		}
+		return &Connection{
+			Edition: e, Method: rules.LRFD,
+			Member: Member{Shape: Angle, Width: in(5), Outstanding: in(3), T: in(0.5), Ag: in2(3.75),
+				Xbar: in(0.75), Pieces: 1, Fy: ksi(36), Fu: ksi(58)},
+			Plate: &Plate{T: in(0.5), Width: in(14), YCentre: sumY / units.Length(len(holes)),
+				FreeEdge: maxX + in(1.5), Fy: ksi(50), Fu: ksi(65)},
+			Bolt:  Bolt{D: in(0.75), Grade: grade, DeformationConsidered: true},
+			Holes: holes,
+		}
+	}
+	hole := in(13.0 / 16)
+	one := line(1, 1, in(1.5), in(3), in(2), hole, hole, rules.Standard)
+	two := line(1, 2, in(1.5), in(3), in(2), hole, hole, rules.Standard)
+	// One bolt has no Whitmore section: Lw = 0 (the old code took the
+	// whole 14-in plate, 315 kips, and then dropped to 78 kips with a
+	// second bolt).
+	if lw := WhitmoreSection(conn(one)).Lw; lw != 0 {
+		t.Errorf("one bolt: Lw = %v in, want 0", lw.In())
+	}
+	if r := PlateYield(conn(one)); r.Pass || r.Nominal != 0 {
+		t.Errorf("one bolt: plate.yield Rn %v pass %v, want 0 and failing", r.Nominal.Kip(), r.Pass)
+	}
+	// Two bolts at 3 in: Lw = 2·3·tan 30° = 3.4641 in, φRn = 77.94 kips.
+	near(t, "two bolts Lw", WhitmoreSection(conn(two)).Lw.In(), 2*3*math.Tan(math.Pi/6), 1e-12, src)
+	near(t, "two bolts φRn", PlateYield(conn(two)).Available.Kip(), 0.9*50*2*3*math.Tan(math.Pi/6)*0.5, 1e-12, src)
+	// Two gage lines (2 in and 3-3/4 in from the heel), one bolt each:
+	// the row's spread only, Lw = 1.75 in, φRn = 39.375 kips; a second
+	// bolt in each line at 3 in adds 2·3·tan 30°: Lw = 5.2141 in.
+	row := append(line(1, 1, in(1.5), in(3), in(2), hole, hole, rules.Standard),
+		line(2, 1, in(1.5), in(3), in(3.75), hole, hole, rules.Standard)...)
+	near(t, "one row Lw", WhitmoreSection(conn(row)).Lw.In(), 1.75, 1e-12, src)
+	near(t, "one row φRn", PlateYield(conn(row)).Available.Kip(), 0.9*50*1.75*0.5, 1e-12, src)
+	rows := append(line(1, 2, in(1.5), in(3), in(2), hole, hole, rules.Standard),
+		line(3, 2, in(1.5), in(3), in(3.75), hole, hole, rules.Standard)...)
+	near(t, "two rows Lw", WhitmoreSection(conn(rows)).Lw.In(), 1.75+2*3*math.Tan(math.Pi/6), 1e-12, src)
+	// Staggered: line 1 (2 in) at x = 3, 6 in; line 2 (3-3/4 in) at x =
+	// 1-1/2, 4-1/2 in. The section is at the bolt farthest from the free
+	// edge, x = 1-1/2 in; each side spreads from its own line's first bolt:
+	// line 1 over 4-1/2 in, line 2 over 3 in: Lw = 1.75 + (4.5 + 3)·tan 30°
+	// (one row length for both sides would give 1.75 + 2·4.5·tan 30°).
+	stag := append(line(1, 2, in(3), in(3), in(2), hole, hole, rules.Standard),
+		line(3, 2, in(1.5), in(3), in(3.75), hole, hole, rules.Standard)...)
+	w := WhitmoreSection(conn(stag))
+	near(t, "staggered Lw", w.Lw.In(), 1.75+(4.5+3)*math.Tan(math.Pi/6), 1e-12, src)
+	near(t, "staggered section x", w.X.In(), 1.5, 1e-12, src)
+	// Clipped by the plate: a 4-in plate centred on the group.
+	c := conn(rows)
+	c.Plate.Width = in(4)
+	near(t, "clipped Lw", WhitmoreSection(c).Lw.In(), 4, 1e-12, src)
 }

@@ -3,6 +3,7 @@ package engine
 import (
 	"fmt"
 	"math"
+	"strings"
 	"testing"
 
 	"pgregory.net/rapid"
@@ -159,23 +160,54 @@ func TestPropertyWorstPathNotExceeded(t *testing.T) {
 				rt.Fatalf("one hole removes %v > worst %v", h.Dh, worst)
 			}
 		}
+		// the plate's net section comes from the same search over its
+		// own holes: no hand-built chain leaves less of the Whitmore width
+		pp := plateHoles(c)
+		w := WhitmoreSection(c)
+		var pchain units.Length
+		last = nil
+		for i := from; i <= to; i++ {
+			k := lines[i][rapid.IntRange(0, len(lines[i])-1).Draw(rt, fmt.Sprintf("pe%d", i))]
+			h := pp[k]
+			pchain += h.Dh
+			if last != nil {
+				s, g := float64(h.X-last.X), float64(h.U-last.U)
+				pchain -= units.Length(s * s / (4 * g))
+			}
+			last = &pp[k]
+		}
+		An := value(t, PlateRupture(c), "An")
+		if chainAn := max(float64((w.Lw - pchain).Mul(c.Plate.T)), 0); An > chainAn+1e-6 {
+			rt.Fatalf("plate An %v mm² exceeds %v mm² of a hand-built chain", An, chainAn)
+		}
 	})
 }
 
-// TestPropertyMonotone: more end distance or more pitch never lowers any
-// strength (within the long-joint limit).
+// TestPropertyMonotone: more end distance, more pitch or one more bolt in
+// every line never lowers any strength nor raises any ratio (within the
+// long-joint limit).
 func TestPropertyMonotone(t *testing.T) {
 	rapid.Check(t, func(rt *rapid.T) {
 		p := drawParams(rt)
-		grow := rapid.SampledFrom([]string{"end", "pitch"}).Draw(rt, "grow")
+		grow := rapid.SampledFrom([]string{"end", "pitch", "bolt"}).Draw(rt, "grow")
 		q := p
 		step := float64(rapid.IntRange(1, 8).Draw(rt, "step")) / 8
-		if grow == "end" {
+		switch grow {
+		case "end":
 			q.end += step
-		} else {
+		case "pitch":
 			q.pitch += step
 			if q.stag > 0 {
 				q.stag = q.pitch / 2
+			}
+		case "bolt":
+			// a bolt added where its hole leaves less than d clear of the
+			// next one is not a layout 360-22 J3.4 allows: holes that
+			// nearly touch may well be weaker than one hole
+			if in(p.pitch)-p.build(t).Holes[0].Dx < in(p.d) {
+				q.end += step
+			} else {
+				q.perLine++
 			}
 		}
 		a, err := Check(p.build(t))
@@ -187,11 +219,90 @@ func TestPropertyMonotone(t *testing.T) {
 			rt.Fatal(err)
 		}
 		for i := range a {
-			if b[i].Nominal < a[i].Nominal*(1-1e-12)-1e-6 { // 1 µN absorbs rounding where holes touch
+			// a block shear result is the block with the highest ratio,
+			// whose share of the force varies: its ratio is what falls
+			blockShear := strings.HasSuffix(a[i].ID, ".block-shear")
+			if !blockShear && b[i].Nominal < a[i].Nominal*(1-1e-12)-1e-6 { // 1 µN absorbs rounding where holes touch
 				rt.Fatalf("%s: more %s lowered Rn from %v to %v", a[i].ID, grow, a[i].Nominal, b[i].Nominal)
 			}
 			if math.IsNaN(float64(a[i].Nominal)) || a[i].Nominal < 0 {
 				rt.Fatalf("%s: Rn = %v", a[i].ID, a[i].Nominal)
+			}
+			// (holes that touch leave no strength: 1 N absorbs the rounding)
+			if a[i].Available > 1 && b[i].Ratio > a[i].Ratio*(1+1e-12)+1e-12 {
+				rt.Fatalf("%s: more %s raised the ratio from %v to %v", a[i].ID, grow, a[i].Ratio, b[i].Ratio)
+			}
+		}
+	})
+}
+
+// TestPropertyOneHoleMovedALittle: moving any one hole by up to 1/8 in
+// (inside the ±1/16 in tolerance band of a measured part, twice over)
+// changes no ratio by more than 10 % plus what the geometry changes (twice
+// the move over the shortest pitch or gage): a hole a little off its line must
+// not form a new, weaker block, section or line that the geometry does not
+// justify (issue 10, item 9). Layouts with one bolt per line are left out
+// (one row has no length: its Whitmore width is the row's spread, which a
+// moved hole changes in full), and so are limit states
+// far from passing (ratio over 1.5), where a section is nearly all holes
+// and any change of it is a large part of what is left.
+func TestPropertyOneHoleMovedALittle(t *testing.T) {
+	rapid.Check(t, func(rt *rapid.T) {
+		p := drawParams(rt)
+		p.perLine = max(p.perLine, 2)
+		// the preferred pitch of 3d at least (J3.3 [J3.4] user note): at
+		// the 2-2/3·d minimum a 1/8-in move is 7 % of a 1/2-in bolt's pitch
+		p.pitch = max(p.pitch, 3*p.d)
+		// slots across the load, as a bearing joint must have them (J3.2
+		// [J3.3]): a slot along it leaves a clear distance under d between
+		// holes at that pitch, which 360-22 J3.4 does not allow
+		p.slot = rules.Transverse
+		// and an end distance of 1-1/2 in, as the plate's edge is: at 1 in
+		// a 1/8-in move is a fifth of the end bolt's clear distance
+		p.end = max(p.end, 1.5)
+		// and gage lines whose holes are d clear of each other (360-22
+		// J3.4), which long slots across the load at a 2-in gage are not
+		// and the first line d clear of a flat's edge (Table J3.4 with the
+		// Table J3.5 increment asks more)
+		across := p.build(t).Holes[0].Dy.In()
+		if p.g2 < across+p.d {
+			p.g2 = math.Ceil(4*(across+p.d)) / 4
+		}
+		if p.gage < across/2+p.d {
+			p.gage = math.Ceil(4*(across/2+p.d)) / 4
+		}
+		if p.stag > 0 {
+			p.stag = p.pitch / 2
+		}
+		a := p.build(t)
+		b := p.build(t)
+		k := rapid.IntRange(0, len(b.Holes)-1).Draw(rt, "hole")
+		dx := float64(rapid.IntRange(-8, 8).Draw(rt, "dx64")) / 64 // −1/8 … 1/8 in
+		dy := float64(rapid.IntRange(-8, 8).Draw(rt, "dy64")) / 64
+		b.Holes[k].X += in(dx)
+		b.Holes[k].Y += in(dy)
+		// 10 %, plus twice what the move is of the shortest pitch or gage:
+		// a Whitmore width or a net width between two holes scales with it
+		short := p.pitch
+		if p.lines > 1 {
+			short = min(short, p.g2)
+		}
+		allowed := 0.10 + 2*math.Hypot(dx, dy)/short
+		ra, err := Check(a)
+		if err != nil {
+			rt.Fatal(err)
+		}
+		rb, err := Check(b)
+		if err != nil {
+			rt.Fatal(err)
+		}
+		for i := range ra {
+			if ra[i].Available <= 1 || rb[i].Available <= 1 || ra[i].Ratio > 1.5 {
+				continue
+			}
+			if ch := rb[i].Ratio/ra[i].Ratio - 1; math.Abs(ch) > allowed {
+				rt.Fatalf("%s: moving %s by (%g, %g) in changed the ratio by %.1f %% (%v → %v): %s → %s",
+					ra[i].ID, b.Holes[k].ID, dx, dy, 100*ch, ra[i].Ratio, rb[i].Ratio, ra[i].Note, rb[i].Note)
 			}
 		}
 	})

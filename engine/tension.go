@@ -126,8 +126,9 @@ func GageLines(c *Connection) [][]int {
 }
 
 // LineSlack is how far apart in y two holes of one gage line may be: a
-// quarter of the bolt diameter (never less than the geometric tolerance).
-func LineSlack(d units.Length) units.Length { return max(d/4, eps) }
+// half the bolt diameter (never less than the geometric tolerance): a
+// measured hole further off its line than that is a line of its own.
+func LineSlack(d units.Length) units.Length { return max(d/2, eps) }
 
 // ShearLag is the shear lag factor U of D3 with the cases that gave it.
 type ShearLag struct {
@@ -218,20 +219,26 @@ func MemberRupture(c *Connection) Result {
 		"net section, worst path; U from Table D3.1 "+sl.Case)
 }
 
-// finish fills the common fields of a result.
+// finish fills the common fields of a result loaded by the whole demand.
 func finish(c *Connection, id, clause16 string, Rn units.Force, f rules.Factor, vals []Value, note string) Result {
+	return finishFor(c, c.Demand, id, clause16, Rn, f, vals, note)
+}
+
+// finishFor fills the common fields of a result loaded by demand, a part
+// of the connection's demand (e.g. the share of one block).
+func finishFor(c *Connection, demand units.Force, id, clause16 string, Rn units.Force, f rules.Factor, vals []Value, note string) Result {
 	avail := f.Available(c.Method, Rn)
 	r := Result{
 		ID:        id,
 		Clause:    c.Edition.Clause(clause16),
 		Nominal:   Rn,
 		Available: avail,
-		Demand:    c.Demand,
+		Demand:    demand,
 		Values:    vals,
 		Note:      note,
 	}
 	if avail > 0 {
-		r.Ratio = float64(c.Demand / avail)
+		r.Ratio = float64(demand / avail)
 	} else {
 		r.Ratio = math.Inf(1)
 	}

@@ -446,8 +446,8 @@ var meaning = map[string]string{
 	"tearout_coefficient":  "tearout coefficient ct",
 	"bolts":                "bolts",
 	"Lw":                   "Whitmore width",
-	"Whitmore_spread":      "30° spread before the plate-width cap",
-	"holes":                "holes cut by the section",
+	"Whitmore_spread":      "30° spread before the clip by the plate",
+	"holes":                "holes on the worst path across the section",
 	"splice_cap_applied":   "An capped at 0.85·Ag (1 yes, 0 no)",
 	"Fnv":                  "nominal shear stress of the bolt",
 	"Ab":                   "nominal unthreaded bolt area, π·d²/4",
@@ -600,37 +600,35 @@ func limit(d *detail.Design, f fmtr, x engine.Result, byID map[string]engine.Res
 
 	case "plate.yield":
 		ls.Title = "Tensile yielding of the plate on the Whitmore section"
-		ls.Formula = []string{"Rn = Fy·Aw", "Aw = Lw·t", "Lw = min(spread, plate width)"}
-		where = []string{"the spread is the width of the bolt group widened at 30° each side from the row nearest the free edge to the row farthest from it (the Whitmore section)"}
+		ls.Formula = []string{"Rn = Fy·Aw", "Aw = Lw·t", "Lw = the spread, clipped by the plate's side edges"}
+		where = []string{"the spread is the width between 30° lines drawn from the first bolt of each gage line (the one nearest the free edge) to the section through the bolt farthest from it (the Whitmore section); one row of bolts spreads over the row's width only, and a single bolt has no Whitmore section"}
 		pw := "?"
 		if c.Plate != nil {
 			pw = f.length(c.Plate.Width)
 		}
 		ls.Steps = []string{
-			fmt.Sprintf("Lw = min(%s spread, %s plate width) = %s", v.q("Whitmore_spread"), pw, v.q("Lw")),
+			fmt.Sprintf("Lw = %s spread, clipped by the %s plate = %s", v.q("Whitmore_spread"), pw, v.q("Lw")),
 			fmt.Sprintf("Aw = (%s)(%s) = %s", v.q("Lw"), v.q("t"), v.q("Ag")),
 			fmt.Sprintf("Rn = (%s)(%s) = %s", v.q("Fy"), v.q("Ag"), f.force(x.Nominal)),
 		}
 
 	case "plate.rupture":
 		ls.Title = "Tensile rupture of the plate on the Whitmore section"
-		ls.Formula = []string{"Rn = Fu·An", "An = (Lw − Σdh)·t"}
-		where = []string{"the section is the Whitmore section at the row farthest from the free edge; dh = nominal hole + " + units.FormatJob(c.Edition.HoleAllowance(), f.sys)}
+		ls.Formula = []string{"Rn = Fu·An", "An = (Lw − Σdh + Σs²/4g)·t"}
+		where = []string{"the holes are those of the worst straight or zig-zag path across the plate (B4.3b, the same search as the member's); dh = nominal hole + " + units.FormatJob(c.Edition.HoleAllowance(), f.sys)}
 		if _, ok := c.Edition.SplicePlateCap(); ok {
 			ls.Formula = append(ls.Formula, "An ≤ 0.85·Ag (splice plates)")
 		}
 		ls.Steps = []string{
 			fmt.Sprintf("Ag = (%s)(%s) = %s", v.q("Lw"), v.q("t"), v.q("Ag")),
+			fmt.Sprintf("worst path: %s hole(s), Σdh − Σs²/4g = %s", v.q("holes"), v.q("deduction")),
 		}
 		if v.raw("splice_cap_applied") != 0 {
 			ls.Steps = append(ls.Steps, fmt.Sprintf("An = 0.85·Ag = %s (the splice-plate cap governs)", v.q("An")))
-		} else if n, t := v.raw("holes"), v.raw("t"); n > 0 && t > 0 && v.raw("An") > 0 {
-			// The width of one hole with its allowance, as the check took it.
-			dh := (v.raw("Lw")*t - v.raw("An")) / (t * n)
-			ls.Steps = append(ls.Steps, fmt.Sprintf("An = (%s − %s × %s)(%s) = %s", v.q("Lw"), v.q("holes"),
-				f.q(dh, units.DimLength), v.q("t"), v.q("An")))
+		} else if v.raw("An") > 0 {
+			ls.Steps = append(ls.Steps, fmt.Sprintf("An = (%s − %s)(%s) = %s", v.q("Lw"), v.q("deduction"), v.q("t"), v.q("An")))
 		} else {
-			ls.Steps = append(ls.Steps, fmt.Sprintf("An = Ag less the %s hole(s) the section cuts = %s", v.q("holes"), v.q("An")))
+			ls.Steps = append(ls.Steps, fmt.Sprintf("An = (%s − %s)(%s) ≤ 0: no net section, An = %s", v.q("Lw"), v.q("deduction"), v.q("t"), v.q("An")))
 		}
 		ls.Steps = append(ls.Steps, fmt.Sprintf("Rn = (%s)(%s) = %s", v.q("Fu"), v.q("An"), f.force(x.Nominal)))
 
