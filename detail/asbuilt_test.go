@@ -4,6 +4,7 @@ import (
 	"encoding/json"
 	"math"
 	"math/rand/v2"
+	"os"
 	"path/filepath"
 	"slices"
 	"strings"
@@ -485,5 +486,51 @@ func TestReverifyNeverPanics(t *testing.T) {
 				}
 			}
 		}
+	}
+}
+
+// reverifyCSV re-verifies job against measured holes given as CSV text.
+func reverifyCSV(t *testing.T, job, csv string) *AsBuilt {
+	t.Helper()
+	p := filepath.Join(t.TempDir(), "measured.csv")
+	if err := os.WriteFile(p, []byte(csv), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	return reverifyFile(t, job, p, AlignDatum)
+}
+
+// A design that fails a detailing rule, made exactly as designed: the
+// reasons and the JSON name the rule that fails, not the governing limit
+// state, which passes.
+func TestReverifyNamesWhatTheDesignFails(t *testing.T) {
+	// TE-9 as designed: end 5/8 in < 1 in for a 3/4-in bolt (AISC 360-16
+	// Table J3.4); 13/16-in standard holes (Table J3.3).
+	ab := reverifyCSV(t, "../testdata/batch/e-tight-edge.yaml", "x,y,diameter\n"+
+		"0.625,1.5,0.8125\n3.625,1.5,0.8125\n0.625,3.5,0.8125\n3.625,3.5,0.8125\n")
+	if ab.Verdict != Reject {
+		t.Fatalf("verdict %s, want reject; reasons %q", ab.Verdict, ab.Reasons)
+	}
+	reasons := strings.Join(ab.Reasons, "|")
+	if !strings.Contains(reasons, "fails as built: edge.min") || !strings.Contains(reasons, "the design itself fails: edge.min") ||
+		strings.Contains(reasons, "governs") {
+		t.Errorf("reasons %q, want the design and the part failing edge.min", ab.Reasons)
+	}
+	b, err := ab.JSON()
+	if err != nil {
+		t.Fatal(err)
+	}
+	var doc struct {
+		Governing       string   `json:"governing"`
+		Failing         []string `json:"failing"`
+		DesignGoverning string   `json:"design_governing"`
+		DesignFailing   []string `json:"design_failing"`
+	}
+	if err := json.Unmarshal(b, &doc); err != nil {
+		t.Fatal(err)
+	}
+	want := []string{"edge.min"}
+	if !slices.Equal(doc.Failing, want) || !slices.Equal(doc.DesignFailing, want) ||
+		doc.DesignGoverning != ab.DesignReport.GoverningResult().ID || doc.Governing != ab.Report.GoverningResult().ID {
+		t.Errorf("JSON failing %q design_failing %q governing %q design_governing %q", doc.Failing, doc.DesignFailing, doc.Governing, doc.DesignGoverning)
 	}
 }

@@ -113,6 +113,23 @@ func boltSize(d units.Length, sys units.System) string {
 	return units.FormatFeetInches(d)
 }
 
+// VerdictReason says what decided the verdict, for the line after it: a
+// pass names the governing limit state and its ratio; a fail names every
+// failing limit state and rule (Failing), then the governing limit state
+// for information, saying so when it passes (a detailing rule failed).
+func (r *Report) VerdictReason() string {
+	g := r.GoverningResult()
+	gov := fmt.Sprintf("governing %s (%s), ratio %s", g.ID, g.Clause, ratio(g.Ratio))
+	if r.Pass {
+		return gov
+	}
+	fails := "fails " + strings.Join(r.Failing(), ", ")
+	if g.Pass {
+		return fmt.Sprintf("%s; governing limit state %s (%s) passes, ratio %s", fails, g.ID, g.Clause, ratio(g.Ratio))
+	}
+	return fails + "; " + gov
+}
+
 // WriteText writes the report as aligned tables for a terminal.
 func (r *Report) WriteText(w io.Writer) error {
 	d := r.Design
@@ -138,8 +155,7 @@ func (r *Report) WriteText(w io.Writer) error {
 	tw.Flush()
 	fmt.Fprintf(&b, "\n")
 	p.findingsText(&b, "DETAILING", r.Findings)
-	g := r.GoverningResult()
-	fmt.Fprintf(&b, "\nverdict: %s — governing %s (%s), ratio %s\n", strings.ToUpper(r.Verdict()), g.ID, g.Clause, ratio(g.Ratio))
+	fmt.Fprintf(&b, "\nverdict: %s — %s\n", strings.ToUpper(r.Verdict()), r.VerdictReason())
 	for _, f := range r.Findings {
 		switch {
 		case f.Pass || f.Advisory:
@@ -179,8 +195,7 @@ func (r *Report) WriteMarkdown(w io.Writer) error {
 		fmt.Fprintf(&b, "| %s | %s | %s | %s | %s | %s | %s | %s |\n", id, x.Clause, p.force(x.Nominal), p.force(x.Available), p.force(x.Demand), ratio(x.Ratio), res, mdEscape(x.Note))
 	}
 	p.findingsMarkdown(&b, "Detailing", r.Findings)
-	g := r.GoverningResult()
-	fmt.Fprintf(&b, "\n**Verdict: %s** — governing %s (%s), ratio %s.\n\n", strings.ToUpper(r.Verdict()), g.ID, g.Clause, ratio(g.Ratio))
+	fmt.Fprintf(&b, "\n**Verdict: %s** — %s.\n\n", strings.ToUpper(r.Verdict()), mdEscape(r.VerdictReason()))
 	for _, c := range r.Cautions {
 		fmt.Fprintf(&b, "> %s\n>\n", c)
 	}

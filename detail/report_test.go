@@ -2,7 +2,9 @@ package detail
 
 import (
 	"encoding/json"
+	"os"
 	"path/filepath"
+	"slices"
 	"strings"
 	"testing"
 )
@@ -61,5 +63,93 @@ func TestJSONContract(t *testing.T) {
 		if !strings.Contains(doc["cautions"].([]any)[0].(string), "engineer of record") {
 			t.Errorf("%s: first caution is %v", job, doc["cautions"])
 		}
+	}
+}
+
+// writeJob writes a job file into a fresh directory and returns its path.
+func writeJob(t *testing.T, name, yaml string) string {
+	t.Helper()
+	p := filepath.Join(t.TempDir(), name)
+	if err := os.WriteFile(p, []byte(yaml), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	return p
+}
+
+// verdictLine returns the line of s that starts with prefix.
+func verdictLine(t *testing.T, s, prefix string) string {
+	t.Helper()
+	for _, l := range strings.Split(s, "\n") {
+		if strings.HasPrefix(l, prefix) {
+			return l
+		}
+	}
+	t.Fatalf("no line starting %q in:\n%s", prefix, s)
+	return ""
+}
+
+// When only a detailing rule fails, the verdict names it and does not
+// pass off the governing limit state as the failure; the JSON keeps
+// governing (the highest ratio) and lists what fails.
+func TestVerdictNamesWhatFails(t *testing.T) {
+	for _, tc := range []struct {
+		job     string
+		failing []string
+		src     string
+	}{
+		// End distance 5/8 in < 1 in for a 3/4-in bolt, every limit state
+		// passing at 20 kip.
+		{"../testdata/batch/e-tight-edge.yaml", []string{"edge.min"}, "AISC 360-16 Table J3.4: 3/4-in bolt, 1 in"},
+		// Bolt shear fails (and the group with it); nothing else.
+		{"../testdata/jobs/us-single-angle.yaml", []string{"bolts.shear", "bolts.group"}, "AISC 360-22 J3.7, Table J3.2"},
+		{"../testdata/jobs/si-double-angle.yaml", nil, "passes"},
+	} {
+		t.Run(filepath.Base(tc.job), func(t *testing.T) {
+			r := checkedJob(t, tc.job)
+			g := r.GoverningResult()
+			for _, x := range r.Results {
+				if x.Ratio > g.Ratio {
+					t.Fatalf("governing %s (%.3f) is not the highest ratio: %s %.3f", g.ID, g.Ratio, x.ID, x.Ratio)
+				}
+			}
+			var txt, md strings.Builder
+			if err := r.WriteText(&txt); err != nil {
+				t.Fatal(err)
+			}
+			if err := r.WriteMarkdown(&md); err != nil {
+				t.Fatal(err)
+			}
+			lines := []string{verdictLine(t, txt.String(), "verdict: "), verdictLine(t, md.String(), "**Verdict: ")}
+			for _, l := range lines {
+				if len(tc.failing) == 0 {
+					if !strings.Contains(l, "PASS") || strings.Contains(l, "fails") || !strings.Contains(l, "governing "+g.ID) {
+						t.Errorf("%q: want a pass governed by %s", l, g.ID)
+					}
+					continue
+				}
+				if want := "fails " + strings.Join(tc.failing, ", "); !strings.Contains(l, want) {
+					t.Errorf("%q does not say %q (%s)", l, want, tc.src)
+				}
+				// The governing limit state is shown for information; when it
+				// passes, the line says so.
+				if !strings.Contains(l, g.ID) || g.Pass != strings.Contains(l, g.ID+" ("+g.Clause+") passes") {
+					t.Errorf("%q: governing %s (pass %v) misstated", l, g.ID, g.Pass)
+				}
+			}
+			b, err := r.JSON()
+			if err != nil {
+				t.Fatal(err)
+			}
+			var doc struct {
+				Governing string   `json:"governing"`
+				Failing   []string `json:"failing"`
+			}
+			if err := json.Unmarshal(b, &doc); err != nil {
+				t.Fatal(err)
+			}
+			if doc.Governing != g.ID || !slices.Equal(doc.Failing, tc.failing) || doc.Failing == nil {
+				t.Errorf("JSON governing %q failing %q, want %q and %q (%s)", doc.Governing, doc.Failing, g.ID, tc.failing, tc.src)
+			}
+		})
 	}
 }

@@ -709,7 +709,10 @@ func (l sheetLayout) titleBlock(s *Sheet, r *Report, top float64) {
 	j := d.Job
 	g := r.GoverningResult()
 	verdict := "PASS"
-	if !r.Pass {
+	switch {
+	case !r.Pass && g.Pass: // a detailing rule fails, not the governing limit state
+		verdict = "FAIL: " + strings.Join(r.Failing(), ", ")
+	case !r.Pass:
 		verdict = "FAIL"
 	}
 	unitName := "INCHES"

@@ -308,3 +308,35 @@ func TestTextBox(t *testing.T) {
 		t.Errorf("rotated box %v %v", lo, hi)
 	}
 }
+
+// titleField returns the value of a title block field.
+func titleField(t *testing.T, s *Sheet, label string) string {
+	t.Helper()
+	for _, f := range s.Title {
+		if f[0] == label {
+			return f[1]
+		}
+	}
+	t.Fatalf("no %s in the title block %q", label, s.Title)
+	return ""
+}
+
+// A stamped sheet of a layout that fails a detailing rule says what fails,
+// not only the governing limit state, which passes.
+func TestSheetTitleNamesWhatFails(t *testing.T) {
+	// TE-9: end distance 5/8 in < 1 in for a 3/4-in bolt (AISC 360-16
+	// Table J3.4); every limit state passes.
+	r, s := sheetOf(t, "../testdata/batch/e-tight-edge.yaml")
+	g := r.GoverningResult()
+	if !g.Pass {
+		t.Fatalf("TE-9: %s fails; the test needs a failing rule and passing limit states", g.ID)
+	}
+	if got := titleField(t, s, "GOVERNING"); !strings.HasSuffix(got, "FAIL: edge.min") || !strings.HasPrefix(got, g.ID) {
+		t.Errorf("GOVERNING %q, want %s ... FAIL: edge.min", got, g.ID)
+	}
+	// Where the governing limit state fails, it is what the title names.
+	_, s = sheetOf(t, "../testdata/jobs/us-single-angle.yaml")
+	if got := titleField(t, s, "GOVERNING"); !strings.HasPrefix(got, "bolts.shear") || !strings.HasSuffix(got, " - FAIL") {
+		t.Errorf("GOVERNING %q, want bolts.shear ... - FAIL", got)
+	}
+}
