@@ -534,3 +534,34 @@ func TestReverifyNamesWhatTheDesignFails(t *testing.T) {
 		t.Errorf("JSON failing %q design_failing %q governing %q design_governing %q", doc.Failing, doc.DesignFailing, doc.Governing, doc.DesignGoverning)
 	}
 }
+
+// An as-built edge distance that 1/16 in rounds up to its limit is printed
+// with its exact value: H1 drilled 0.98 in from the end fails the 1 in of
+// Table J3.4 (3/4-in bolt, AISC 360-16) and must not read 1" against 1".
+func TestReverifyPrintsExactValues(t *testing.T) {
+	ab := reverifyCSV(t, filepath.Join(measuredDir, "hb-7-qa.yaml"), "x,y,diameter,id\n"+
+		"0.98,2.5,0.8125,H1\n4.5,2.5,0.8125,H2\n7.5,2.5,0.8125,H3\n10.5,2.5,0.8125,H4\n")
+	var txt, md strings.Builder
+	if err := ab.WriteText(&txt); err != nil {
+		t.Fatal(err)
+	}
+	if err := ab.WriteMarkdown(&md); err != nil {
+		t.Fatal(err)
+	}
+	for name, out := range map[string]string{"text": txt.String(), "markdown": md.String()} {
+		row := ""
+		for _, l := range strings.Split(out, "\n") {
+			if strings.Contains(l, "edge.min") && strings.Contains(l, "H1 to member end") {
+				row = l
+			}
+		}
+		if !strings.Contains(row, `1" (0.98 in)`) || !strings.Contains(row, "FAIL") {
+			t.Errorf("%s: edge.min row %q, want the measured 1\" (0.98 in) failing", name, row)
+		}
+		// The size limit, 13/16 in + 1/32 in (common practice, no source),
+		// is 0.84375 in, which 1/16 in rounds to 7/8 in.
+		if !strings.Contains(out, `7/8" (0.84375 in)`) {
+			t.Errorf("%s: hole.size limit not printed as 7/8\" (0.84375 in)", name)
+		}
+	}
+}

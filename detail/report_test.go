@@ -7,6 +7,8 @@ import (
 	"slices"
 	"strings"
 	"testing"
+
+	"gaugeline/rules/units"
 )
 
 // TestJSONContract pins the field names of SPEC §9: tests outside the
@@ -151,5 +153,79 @@ func TestVerdictNamesWhatFails(t *testing.T) {
 				t.Errorf("JSON governing %q failing %q, want %q and %q (%s)", doc.Governing, doc.Failing, g.ID, tc.failing, tc.src)
 			}
 		})
+	}
+}
+
+// A limit that rounds to 1/16 in is printed with its exact value, so that a
+// failing finding never reads as if it met its limit: 7/8-in bolts at a
+// 2-5/16 in pitch miss 2-2/3·d = 2.333 in, which rounds to 2-5/16 in.
+func TestReportPrintsExactLimits(t *testing.T) {
+	job := writeJob(t, "sp-7.yaml", `mark: SP-7
+units: us
+load:
+  required: 20 kip
+member:
+  shape: flat
+  width: 5 in
+  thickness: 1/2 in
+  grade: A36
+bolts:
+  diameter: 7/8 in
+  grade: A325
+  per_line: 2
+  pitch: 2-5/16 in
+  end: 1-1/2 in
+  gage: 2-1/2 in
+`)
+	r := checkedJob(t, job)
+	var txt, md strings.Builder
+	if err := r.WriteText(&txt); err != nil {
+		t.Fatal(err)
+	}
+	if err := r.WriteMarkdown(&md); err != nil {
+		t.Fatal(err)
+	}
+	// AISC 360-22 J3.4: 2-2/3 · 7/8 = 2.333333 in (hand calculation).
+	want := `2 5/16" (2.333333 in)`
+	for name, out := range map[string]string{"text": txt.String(), "markdown": md.String()} {
+		if !strings.Contains(out, want) {
+			t.Errorf("%s report does not print the limit as %q:\n%s", name, want, out)
+		}
+	}
+	// Every failing finding prints a measured value and a limit that differ.
+	p := people{r.Design.Job.Units}
+	n := 0
+	for _, f := range r.Findings {
+		if f.Pass || f.Dim != units.DimLength {
+			continue
+		}
+		n++
+		if m, l := p.value(f.Measured, f.Dim), p.value(f.Limit, f.Dim); m == l {
+			t.Errorf("%s %s fails but prints measured %s and limit %s", f.ID, f.Where, m, l)
+		}
+	}
+	if n == 0 {
+		t.Fatal("spacing.min does not fail at 2-5/16 in (AISC 360-22 J3.4: 2.333 in)")
+	}
+}
+
+func TestFormatLength(t *testing.T) {
+	for _, tc := range []struct {
+		l    units.Length
+		sys  units.System
+		want string
+		src  string
+	}{
+		{units.Inch * 13 / 16, units.US, `13/16"`, "AISC 360-22 Table J3.3: 3/4-in bolt, standard hole 13/16 in"},
+		{units.Inch * (13.0/16 + 1.0/32), units.US, `7/8" (0.84375 in)`, "Table J3.3 13/16 in plus 1/32 in (common practice, no source)"},
+		{units.Inch * 1.5, units.US, `1 1/2"`, "on the 1/16 in grid"},
+		{units.Inch * 0.06, units.US, `1/16" (0.06 in)`, "rounds to 1/16 in"},
+		{26, units.SI, "26.0 mm", "AISC 360-16 Table J3.4M: M20, 26 mm"},
+		{20 * 8.0 / 3, units.SI, "53.3 mm (53.333333 mm)", "AISC 360-16 J3.3: 2-2/3 · 20 mm"},
+		{25.96, units.SI, "26.0 mm (25.96 mm)", "rounds to 0.1 mm"},
+	} {
+		if got := FormatLength(tc.l, tc.sys); got != tc.want {
+			t.Errorf("FormatLength(%v mm) = %q, want %q (%s)", float64(tc.l), got, tc.want, tc.src)
+		}
 	}
 }
