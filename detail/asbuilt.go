@@ -495,7 +495,7 @@ func (ab *AsBuilt) decide() {
 		ab.Verdict = Reject
 		ab.Reasons = append(ab.Reasons, "fails as built: "+strings.Join(r.Failing(), ", "))
 		if !ab.DesignReport.Pass {
-			ab.Reasons = append(ab.Reasons, "the design itself fails: "+ab.DesignReport.GoverningResult().ID+" governs")
+			ab.Reasons = append(ab.Reasons, "the design itself fails: "+strings.Join(ab.DesignReport.Failing(), ", "))
 		}
 	}
 	if ab.Verdict == Review {
@@ -916,6 +916,7 @@ type jsonReverify struct {
 	Alignment       jsonAlignment      `json:"alignment"`
 	Deviations      []jsonDeviation    `json:"deviations"`
 	DesignGoverning string             `json:"design_governing"`
+	DesignFailing   []string           `json:"design_failing"` // [] when the design passes
 	DesignRatios    map[string]jsonNum `json:"design_ratios"`
 	RatioChange     map[string]jsonNum `json:"ratio_change"`
 }
@@ -938,6 +939,7 @@ func (ab *AsBuilt) document() jsonReverify {
 			Iterations: ab.Alignment.Iterations, Note: ab.Alignment.Note},
 		Deviations:      []jsonDeviation{},
 		DesignGoverning: ab.DesignReport.GoverningResult().ID,
+		DesignFailing:   append([]string{}, ab.DesignReport.Failing()...),
 		DesignRatios:    map[string]jsonNum{},
 		RatioChange:     map[string]jsonNum{},
 	}

@@ -4,6 +4,7 @@ import (
 	"encoding/json"
 	"math"
 	"math/rand/v2"
+	"os"
 	"path/filepath"
 	"slices"
 	"strings"
@@ -520,6 +521,83 @@ func TestReverifyHoleOffItsLine(t *testing.T) {
 		if math.Abs(built/design-1) > 0.10 {
 			t.Errorf("%s: as-built block shear ratio %.3f against the design's %.3f: one hole off its line must not make a new, weaker block (%s)",
 				f, built, design, src)
+		}
+	}
+}
+
+// reverifyCSV re-verifies job against measured holes given as CSV text.
+func reverifyCSV(t *testing.T, job, csv string) *AsBuilt {
+	t.Helper()
+	p := filepath.Join(t.TempDir(), "measured.csv")
+	if err := os.WriteFile(p, []byte(csv), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	return reverifyFile(t, job, p, AlignDatum)
+}
+
+// A design that fails a detailing rule, made exactly as designed: the
+// reasons and the JSON name the rule that fails, not the governing limit
+// state, which passes.
+func TestReverifyNamesWhatTheDesignFails(t *testing.T) {
+	// TE-9 as designed: end 5/8 in < 1 in for a 3/4-in bolt (AISC 360-16
+	// Table J3.4); 13/16-in standard holes (Table J3.3).
+	ab := reverifyCSV(t, "../testdata/batch/e-tight-edge.yaml", "x,y,diameter\n"+
+		"0.625,1.5,0.8125\n3.625,1.5,0.8125\n0.625,3.5,0.8125\n3.625,3.5,0.8125\n")
+	if ab.Verdict != Reject {
+		t.Fatalf("verdict %s, want reject; reasons %q", ab.Verdict, ab.Reasons)
+	}
+	reasons := strings.Join(ab.Reasons, "|")
+	if !strings.Contains(reasons, "fails as built: edge.min") || !strings.Contains(reasons, "the design itself fails: edge.min") ||
+		strings.Contains(reasons, "governs") {
+		t.Errorf("reasons %q, want the design and the part failing edge.min", ab.Reasons)
+	}
+	b, err := ab.JSON()
+	if err != nil {
+		t.Fatal(err)
+	}
+	var doc struct {
+		Governing       string   `json:"governing"`
+		Failing         []string `json:"failing"`
+		DesignGoverning string   `json:"design_governing"`
+		DesignFailing   []string `json:"design_failing"`
+	}
+	if err := json.Unmarshal(b, &doc); err != nil {
+		t.Fatal(err)
+	}
+	want := []string{"edge.min"}
+	if !slices.Equal(doc.Failing, want) || !slices.Equal(doc.DesignFailing, want) ||
+		doc.DesignGoverning != ab.DesignReport.GoverningResult().ID || doc.Governing != ab.Report.GoverningResult().ID {
+		t.Errorf("JSON failing %q design_failing %q governing %q design_governing %q", doc.Failing, doc.DesignFailing, doc.Governing, doc.DesignGoverning)
+	}
+}
+
+// An as-built edge distance that 1/16 in rounds up to its limit is printed
+// with its exact value: H1 drilled 0.98 in from the end fails the 1 in of
+// Table J3.4 (3/4-in bolt, AISC 360-16) and must not read 1" against 1".
+func TestReverifyPrintsExactValues(t *testing.T) {
+	ab := reverifyCSV(t, filepath.Join(measuredDir, "hb-7-qa.yaml"), "x,y,diameter,id\n"+
+		"0.98,2.5,0.8125,H1\n4.5,2.5,0.8125,H2\n7.5,2.5,0.8125,H3\n10.5,2.5,0.8125,H4\n")
+	var txt, md strings.Builder
+	if err := ab.WriteText(&txt); err != nil {
+		t.Fatal(err)
+	}
+	if err := ab.WriteMarkdown(&md); err != nil {
+		t.Fatal(err)
+	}
+	for name, out := range map[string]string{"text": txt.String(), "markdown": md.String()} {
+		row := ""
+		for _, l := range strings.Split(out, "\n") {
+			if strings.Contains(l, "edge.min") && strings.Contains(l, "H1 to member end") {
+				row = l
+			}
+		}
+		if !strings.Contains(row, `1" (0.98 in)`) || !strings.Contains(row, "FAIL") {
+			t.Errorf("%s: edge.min row %q, want the measured 1\" (0.98 in) failing", name, row)
+		}
+		// The size limit, 13/16 in + 1/32 in (common practice, no source),
+		// is 0.84375 in, which 1/16 in rounds to 7/8 in.
+		if !strings.Contains(out, `7/8" (0.84375 in)`) {
+			t.Errorf("%s: hole.size limit not printed as 7/8\" (0.84375 in)", name)
 		}
 	}
 }

@@ -311,7 +311,23 @@ type edge struct {
 
 // edges lists the edges the holes must clear, in a fixed order: member end,
 // member toe (angles; the heel is not an edge) or both sides (flats), plate
-// free edge, plate sides. Gusset sides take the minimum only.
+// free edge, plate sides.
+//
+// The maximum of J3.5 [J3.6] runs from a bolt "to the nearest edge of parts
+// in contact", 12 times the thickness of the part under consideration: it
+// keeps the plies closed where their contact ends. Every member edge takes
+// it with the member's t, and the plate's free edge with the plate's (the
+// member laps the plate up to it). A plate no wider than the member (a
+// splice plate cut to the member, or narrower) lies on the member, so its
+// sides are edges of the parts in contact and take it too. A plate wider
+// than the member (a gusset as a rule, or a wide splice plate) runs on
+// past the member's edges: the contact ends at those edges, checked with
+// the member's t, and the plate's far sides are no edge of it, so they
+// take the minimum only. The plate is centred on the bolt group, so the
+// choice does not depend on where the gage lines sit (propose relies on
+// that); a narrow plate whose side passes the member's edge on an
+// off-centre group is checked at its own side, farther from the holes
+// than the contact's edge: conservative.
 func edges(c *engine.Connection) []edge {
 	m := &c.Member
 	es := []edge{{name: "member end", dist: func(h *engine.Hole) units.Length { return h.X }, t: m.T, max: true}}
@@ -330,10 +346,11 @@ func edges(c *engine.Connection) []edge {
 		es = append(es, edge{name: "plate free edge", t: p.T, max: true,
 			dist: func(h *engine.Hole) units.Length { return p.FreeEdge - h.X }})
 		if p.Width > 0 {
+			onMember := p.Width <= m.Width+tol
 			es = append(es,
-				edge{name: "plate side edge (low y)", alongX: true, t: p.T,
+				edge{name: "plate side edge (low y)", alongX: true, t: p.T, max: onMember,
 					dist: func(h *engine.Hole) units.Length { return h.Y - p.YMin() }},
-				edge{name: "plate side edge (high y)", alongX: true, t: p.T,
+				edge{name: "plate side edge (high y)", alongX: true, t: p.T, max: onMember,
 					dist: func(h *engine.Hole) units.Length { return p.YMax() - h.Y }})
 		}
 	}
@@ -392,8 +409,9 @@ func minEdgeFindings(c *engine.Connection) []Finding {
 	return fs
 }
 
-// maxEdgeFindings is edge.max, J3.5 [J3.6]: per edge of a part in contact,
-// the hole nearest it against 12t ≤ 6 in (150 mm), t of that part.
+// maxEdgeFindings is edge.max, J3.5 [J3.6]: per edge of a part in contact
+// (see edges), the hole nearest it against 12t ≤ 6 in (150 mm), t of that
+// part.
 func maxEdgeFindings(c *engine.Connection) []Finding {
 	const id = "edge.max"
 	if len(c.Holes) == 0 {

@@ -100,6 +100,12 @@ func withPlate(c *engine.Connection, th, w, e units.Length) *engine.Connection {
 	return c
 }
 
+// splice makes the connection's plate a splice plate.
+func splice(c *engine.Connection) *engine.Connection {
+	c.Plate.Kind = engine.Splice
+	return c
+}
+
 // want is one expected finding, found by id and where (a refusal's
 // explanation may follow where after ": "); measured and limit in the
 // job's units. absent: no finding with this id and where may exist.
@@ -145,6 +151,15 @@ func TestDetailing(t *testing.T) {
 	// Two gage lines 2-1/2 in apart of transverse long slots, one bolt each.
 	longSlots := layout{d: in(0.75), joint: rules.Bearing, hole: rules.LongSlot, slot: rules.Transverse,
 		end: in(1.5), pitch: in(3), perLine: 1, gages: []units.Length{in(1.75), in(4.25)}}
+	// One line of two 3/4-in bolts (M20 in SI) at y = g.
+	centred := func(g units.Length) layout {
+		return layout{d: in(0.75), joint: rules.Bearing, hole: rules.Standard,
+			end: in(1.5), pitch: in(3), perLine: 2, gages: []units.Length{g}}
+	}
+	centredSI := func(g units.Length) layout {
+		return layout{d: mm(20), joint: rules.Bearing, hole: rules.Standard,
+			end: mm(40), pitch: mm(75), perLine: 2, gages: []units.Length{g}}
+	}
 	angle := func(g units.Length) layout {
 		return layout{d: in(0.75), joint: rules.Bearing, hole: rules.Standard,
 			end: in(1.5), pitch: in(3), perLine: 4, gages: []units.Length{g}}
@@ -295,6 +310,76 @@ func TestDetailing(t *testing.T) {
 				{id: "edge.max", where: "H1 to plate side edge (low y)", absent: true},
 			},
 			src: "AISC 360-22 J3.6(a): 24·(3/8) = 9 in; J3.6: 12·(3/8) = 4.5 in; AISC 360-16 Table J3.4: 1 in",
+		},
+		{
+			// One line on the centre of a 10 × 3/4 flat, a 3/8 × 10 splice
+			// plate over it: plate and member sides 5 in from the holes.
+			name: "splice plate sides 5 in from the holes fail 12t = 4-1/2 in",
+			conn: splice(withPlate(flat(t, us22, in(10), in(0.75), centred(in(5))), in(0.375), in(10), in(1.5))),
+			want: []want{
+				{id: "edge.max", where: "H1 to plate side edge (low y)", measured: 5, limit: 4.5, pass: false},
+				{id: "edge.max", where: "H1 to plate side edge (high y)", measured: 5, limit: 4.5, pass: false},
+				{id: "edge.max", where: "H1 to member edge (y = 0)", measured: 5, limit: 6, pass: true},
+				{id: "edge.max", where: "H2 to plate free edge", measured: 1.5, limit: 4.5, pass: true},
+			},
+			src: "hand calculation per AISC 360-22 J3.6: plate 12·(3/8) = 4.5 in; member 12·(3/4) = 9 in, not over 6 in; 10/2 = 5 in",
+		},
+		{
+			name: "360-16: splice plate 3/8 × 8 on an 8-in flat, sides 4 in from the holes, pass",
+			conn: splice(withPlate(flat(t, us16, in(8), in(0.5), centred(in(4))), in(0.375), in(8), in(1.5))),
+			want: []want{
+				{id: "edge.max", where: "H1 to plate side edge (low y)", measured: 4, limit: 4.5, pass: true},
+				{id: "edge.max", where: "H1 to plate side edge (high y)", measured: 4, limit: 4.5, pass: true},
+			},
+			src: "hand calculation per AISC 360-16 J3.5: 12·(3/8) = 4.5 in ≤ 6 in; 8/2 = 4 in",
+		},
+		{
+			name: "gusset no wider than the member: its sides are edges of the contact too",
+			conn: withPlate(flat(t, us22, in(10), in(0.75), centred(in(5))), in(0.375), in(10), in(1.5)),
+			want: []want{
+				{id: "edge.max", where: "H1 to plate side edge (low y)", measured: 5, limit: 4.5, pass: false},
+			},
+			src: "hand calculation per AISC 360-22 J3.6: 12·(3/8) = 4.5 in; 10/2 = 5 in",
+		},
+		{
+			// The 12-in plate runs 4 in past each side of the 4-in flat:
+			// the contact ends at the flat's edges, 2 in from the holes.
+			name: "splice plate wider than the member: its sides are no edge of the contact",
+			conn: splice(withPlate(flat(t, us22, in(4), in(0.5), line(in(1.5))), in(0.375), in(12), in(1.5))),
+			want: []want{
+				{id: "edge.max", where: "H1 to plate side edge (low y)", absent: true},
+				{id: "edge.max", where: "H1 to plate side edge (high y)", absent: true},
+				{id: "edge.max", where: "H1 to member edge (y = 0)", measured: 2, limit: 6, pass: true},
+				{id: "edge.min", where: "H1 to plate side edge (low y)", measured: 6, limit: 1, pass: true},
+			},
+			src: "AISC 360-22 J3.6: edges of parts in contact; 12·(1/2) = 6 in; Table J3.4 (360-16): 1 in",
+		},
+		{
+			// L4x4x1/2 at a 2-1/2 in gage, a 3/8 × 4 plate from heel to toe.
+			name: "angle: a plate as wide as the leg, sides at the heel and the toe",
+			conn: splice(withPlate(l4x4(t, us22, angle(in(2.5))), in(0.375), in(4), in(1.5))),
+			want: []want{
+				{id: "edge.max", where: "H1 to plate side edge (low y)", measured: 2.5, limit: 4.5, pass: true},
+				{id: "edge.max", where: "H1 to plate side edge (high y)", measured: 1.5, limit: 4.5, pass: true},
+			},
+			src: "hand calculation per AISC 360-22 J3.6: 12·(3/8) = 4.5 in; 2.5 and 4 − 2.5 = 1.5 in",
+		},
+		{
+			name: "SI: splice plate 10 × 300 on a 300-mm flat, sides 150 mm from the holes, fail 12t = 120 mm",
+			conn: splice(withPlate(flat(t, si16, mm(300), mm(20), centredSI(mm(150))), mm(10), mm(300), mm(40))),
+			want: []want{
+				{id: "edge.max", where: "H1 to plate side edge (low y)", measured: 150, limit: 120, pass: false},
+				{id: "edge.max", where: "H1 to member edge (y = 0)", measured: 150, limit: 150, pass: true},
+			},
+			src: "hand calculation per AISC 360-16 J3.5: plate 12·10 = 120 mm; member 12·20 = 240 mm, not over 150 mm; 300/2 = 150 mm",
+		},
+		{
+			name: "SI: splice plate 20 × 300, sides 150 mm from the holes, meet the 150 mm cap",
+			conn: splice(withPlate(flat(t, si16, mm(300), mm(20), centredSI(mm(150))), mm(20), mm(300), mm(40))),
+			want: []want{
+				{id: "edge.max", where: "H1 to plate side edge (high y)", measured: 150, limit: 150, pass: true},
+			},
+			src: "hand calculation per AISC 360-16 J3.5: 12·20 = 240 mm, not to exceed 150 mm",
 		},
 		{
 			name: "max spacing 9-1/4 in fails",

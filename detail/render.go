@@ -3,6 +3,7 @@ package detail
 import (
 	"fmt"
 	"io"
+	"math"
 	"strings"
 	"text/tabwriter"
 
@@ -19,12 +20,35 @@ func (p people) force(f units.Force) string {
 	return fmt.Sprintf("%.1f", p.sys.ToJob(float64(f), units.DimForce))
 }
 
-func (p people) length(l units.Length) string {
-	if p.sys == units.US {
-		return units.FormatFeetInches(l)
+func (p people) length(l units.Length) string { return FormatLength(l, p.sys) }
+
+// FormatLength writes a length for a person: US in feet-inches-sixteenths,
+// SI to 0.1 mm. Where that rounds the value, the exact value follows
+// (`7/8" (0.84375 in)`, `53.3 mm (53.333333 mm)`), so that a limit is
+// never printed as one the part meets while it fails it, nor a measured
+// value as one that meets its limit.
+func FormatLength(l units.Length, sys units.System) string {
+	if sys == units.US {
+		return withExact(units.FormatFeetInches(l), l, sys, 16)
 	}
-	return fmt.Sprintf("%.1f mm", float64(l))
+	return withExact(fmt.Sprintf("%.1f mm", float64(l)), l, sys, 10)
 }
+
+// withExact appends the exact length l (exactLength, to 1e-6 of the job's
+// unit) to text, l rounded to 1/steps of the job's unit, when the rounding
+// changed it.
+func withExact(text string, l units.Length, sys units.System, steps float64) string {
+	v := l.Mm()
+	if sys == units.US {
+		v = l.In()
+	}
+	if exact, grid := math.Round(v*1e6)/1e6, math.Round(v*steps)/steps; math.Abs(exact-grid) < 1e-9 || !finite(v) {
+		return text
+	}
+	return text + " (" + exactLength(l, sys) + ")"
+}
+
+func finite(v float64) bool { return !math.IsNaN(v) && !math.IsInf(v, 0) }
 
 func (p people) value(v float64, d units.Dim) string {
 	switch d {
@@ -113,6 +137,23 @@ func boltSize(d units.Length, sys units.System) string {
 	return units.FormatFeetInches(d)
 }
 
+// VerdictReason says what decided the verdict, for the line after it: a
+// pass names the governing limit state and its ratio; a fail names every
+// failing limit state and rule (Failing), then the governing limit state
+// for information, saying so when it passes (a detailing rule failed).
+func (r *Report) VerdictReason() string {
+	g := r.GoverningResult()
+	gov := fmt.Sprintf("governing %s (%s), ratio %s", g.ID, g.Clause, ratio(g.Ratio))
+	if r.Pass {
+		return gov
+	}
+	fails := "fails " + strings.Join(r.Failing(), ", ")
+	if g.Pass {
+		return fmt.Sprintf("%s; governing limit state %s (%s) passes, ratio %s", fails, g.ID, g.Clause, ratio(g.Ratio))
+	}
+	return fails + "; " + gov
+}
+
 // WriteText writes the report as aligned tables for a terminal.
 func (r *Report) WriteText(w io.Writer) error {
 	d := r.Design
@@ -138,8 +179,7 @@ func (r *Report) WriteText(w io.Writer) error {
 	tw.Flush()
 	fmt.Fprintf(&b, "\n")
 	p.findingsText(&b, "DETAILING", r.Findings)
-	g := r.GoverningResult()
-	fmt.Fprintf(&b, "\nverdict: %s — governing %s (%s), ratio %s\n", strings.ToUpper(r.Verdict()), g.ID, g.Clause, ratio(g.Ratio))
+	fmt.Fprintf(&b, "\nverdict: %s — %s\n", strings.ToUpper(r.Verdict()), r.VerdictReason())
 	for _, f := range r.Findings {
 		switch {
 		case f.Pass || f.Advisory:
@@ -179,8 +219,7 @@ func (r *Report) WriteMarkdown(w io.Writer) error {
 		fmt.Fprintf(&b, "| %s | %s | %s | %s | %s | %s | %s | %s |\n", id, x.Clause, p.force(x.Nominal), p.force(x.Available), p.force(x.Demand), ratio(x.Ratio), res, mdEscape(x.Note))
 	}
 	p.findingsMarkdown(&b, "Detailing", r.Findings)
-	g := r.GoverningResult()
-	fmt.Fprintf(&b, "\n**Verdict: %s** — governing %s (%s), ratio %s.\n\n", strings.ToUpper(r.Verdict()), g.ID, g.Clause, ratio(g.Ratio))
+	fmt.Fprintf(&b, "\n**Verdict: %s** — %s.\n\n", strings.ToUpper(r.Verdict()), mdEscape(r.VerdictReason()))
 	for _, c := range r.Cautions {
 		fmt.Fprintf(&b, "> %s\n>\n", c)
 	}

@@ -166,6 +166,7 @@ type jsonReport struct {
 	Verdict        string        `json:"verdict"`
 	Governing      string        `json:"governing"`
 	GoverningRatio jsonNum       `json:"governing_ratio"`
+	Failing        []string      `json:"failing"` // Report.Failing; [] when it passes
 	LimitStates    []jsonLimit   `json:"limit_states"`
 	Detailing      []jsonFinding `json:"detailing"`
 	Holes          []jsonHole    `json:"holes"`
@@ -183,8 +184,11 @@ func (r *Report) document() jsonReport {
 	doc := jsonReport{
 		Mark: d.Job.Mark, Standard: d.Conn.Edition.Name, Method: d.Conn.Method.String(), Units: sys.String(),
 		UnitLabels: sys.Labels(), Demand: force(d.Conn.Demand), Combination: d.Combination,
-		Verdict: r.Verdict(), Governing: g.ID, GoverningRatio: jsonNum(g.Ratio),
+		Verdict: r.Verdict(), Governing: g.ID, GoverningRatio: jsonNum(g.Ratio), Failing: r.Failing(),
 		LimitStates: []jsonLimit{}, Detailing: []jsonFinding{}, Holes: []jsonHole{}, Cautions: r.Cautions,
+	}
+	if doc.Failing == nil {
+		doc.Failing = []string{}
 	}
 	for _, x := range r.Results {
 		l := jsonLimit{ID: x.ID, Clause: x.Clause, Nominal: force(x.Nominal), Available: force(x.Available),

@@ -434,6 +434,17 @@ func (l sheetLayout) people(v float64) string {
 	return units.FormatForPeople(units.Length(l.sys.FromJob(v, units.DimLength)), l.sys)
 }
 
+// limit writes a length the shop compares with a limit (a thickness, the
+// punch limit) as people does, with the exact value after it where the
+// rounding to 1/16 in (1 mm) changed it: 7/8" (0.9 in).
+func (l sheetLayout) limit(v float64) string {
+	steps := 16.0
+	if l.sys == units.SI {
+		steps = 1
+	}
+	return withExact(l.people(v), units.Length(l.sys.FromJob(v, units.DimLength)), l.sys, steps)
+}
+
 func (l sheetLayout) rect(w, h float64) []Point { return []Point{{0, 0}, {w, 0}, {w, h}, {0, h}} }
 
 // patternX returns the least and greatest hole x of the connection.
@@ -659,9 +670,9 @@ func (l sheetLayout) schedule(s *Sheet, d *Design, top float64) float64 {
 	h := l.h
 	c := &d.Conn
 	hole := c.Holes[0]
-	limit := l.people(l.len(PunchLimit(c.Bolt.D, l.sys)))
+	limit := l.limit(l.len(PunchLimit(c.Bolt.D, l.sys)))
 	made := func(t units.Length) string {
-		return fmt.Sprintf("%s (t %s, punch limit %s)", HowMade(t, c.Bolt.D, l.sys), l.people(l.len(t)), limit)
+		return fmt.Sprintf("%s (t %s, punch limit %s)", HowMade(t, c.Bolt.D, l.sys), l.limit(l.len(t)), limit)
 	}
 	part := "MEMBER"
 	if c.Member.Pieces > 1 {
@@ -706,7 +717,10 @@ func (l sheetLayout) titleBlock(s *Sheet, r *Report, top float64) {
 	j := d.Job
 	g := r.GoverningResult()
 	verdict := "PASS"
-	if !r.Pass {
+	switch {
+	case !r.Pass && g.Pass: // a detailing rule fails, not the governing limit state
+		verdict = "FAIL: " + strings.Join(r.Failing(), ", ")
+	case !r.Pass:
 		verdict = "FAIL"
 	}
 	unitName := "INCHES"
@@ -726,11 +740,11 @@ func (l sheetLayout) titleBlock(s *Sheet, r *Report, top float64) {
 		{"QUANTITY", fmt.Sprintf("%d%s", j.Quantity, pieces)},
 		{"MEMBER", d.Info.Designation},
 		{"GRADE", "member " + d.Info.Grade},
-		{"THICKNESS", "member " + l.people(l.len(c.Member.T))},
+		{"THICKNESS", "member " + l.limit(l.len(c.Member.T))},
 	}
 	if c.Plate != nil {
 		fields[3][1] += ", plate " + d.Info.PlateGrade
-		fields[4][1] += ", plate " + l.people(l.len(c.Plate.T))
+		fields[4][1] += ", plate " + l.limit(l.len(c.Plate.T))
 	}
 	fields = append(fields,
 		[2]string{"BOLTS", fmt.Sprintf("(%d) %s %s, threads %s, %s joint, %s holes", len(c.Holes),

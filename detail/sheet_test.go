@@ -308,3 +308,95 @@ func TestTextBox(t *testing.T) {
 		t.Errorf("rotated box %v %v", lo, hi)
 	}
 }
+
+// titleField returns the value of a title block field.
+func titleField(t *testing.T, s *Sheet, label string) string {
+	t.Helper()
+	for _, f := range s.Title {
+		if f[0] == label {
+			return f[1]
+		}
+	}
+	t.Fatalf("no %s in the title block %q", label, s.Title)
+	return ""
+}
+
+// A stamped sheet of a layout that fails a detailing rule says what fails,
+// not only the governing limit state, which passes.
+func TestSheetTitleNamesWhatFails(t *testing.T) {
+	// TE-9: end distance 5/8 in < 1 in for a 3/4-in bolt (AISC 360-16
+	// Table J3.4); every limit state passes.
+	r, s := sheetOf(t, "../testdata/batch/e-tight-edge.yaml")
+	g := r.GoverningResult()
+	if !g.Pass {
+		t.Fatalf("TE-9: %s fails; the test needs a failing rule and passing limit states", g.ID)
+	}
+	if got := titleField(t, s, "GOVERNING"); !strings.HasSuffix(got, "FAIL: edge.min") || !strings.HasPrefix(got, g.ID) {
+		t.Errorf("GOVERNING %q, want %s ... FAIL: edge.min", got, g.ID)
+	}
+	// Where the governing limit state fails, it is what the title names.
+	_, s = sheetOf(t, "../testdata/jobs/us-single-angle.yaml")
+	if got := titleField(t, s, "GOVERNING"); !strings.HasPrefix(got, "bolts.shear") || !strings.HasSuffix(got, " - FAIL") {
+		t.Errorf("GOVERNING %q, want bolts.shear ... - FAIL", got)
+	}
+}
+
+// Thicknesses and the punch limit the shop compares them with are printed
+// with their exact values where 1/16 in (1 mm) rounds them: a 0.9-in bar
+// over the 7/8-in punch limit of a 3/4-in bolt does not read 7/8".
+func TestSheetPrintsExactLimits(t *testing.T) {
+	for _, tc := range []struct {
+		name, yaml, made, thickness string
+	}{
+		{"us", `mark: TB-1
+units: us
+load:
+  required: 20 kip
+member:
+  shape: flat
+  width: 5 in
+  thickness: 0.9 in
+  grade: A36
+  length: 4 ft
+bolts:
+  diameter: 3/4 in
+  grade: A325
+  per_line: 2
+  pitch: 3 in
+  end: 1-1/2 in
+  gage: 2-1/2 in
+`,
+			// Punch limit d + 1/8 = 7/8 in (common practice, no source).
+			`DRILL (t 7/8" (0.9 in), punch limit 7/8")`, `member 7/8" (0.9 in)`},
+		{"si", `mark: TB-2
+units: si
+load:
+  required: 100 kN
+member:
+  shape: flat
+  width: 120 mm
+  thickness: 23.4 mm
+  grade: A36
+  length: 1.2 m
+bolts:
+  diameter: M20
+  grade: A325M
+  per_line: 2
+  pitch: 75 mm
+  end: 40 mm
+  gage: 60 mm
+`,
+			// Punch limit d + 3 mm = 23 mm (common practice, no source).
+			`DRILL (t 23 (23.4 mm), punch limit 23)`, `member 23 (23.4 mm)`},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			_, s := sheetOf(t, writeJob(t, tc.name+".yaml", tc.yaml))
+			if got := s.Schedule[1][4]; got != tc.made {
+				t.Errorf("MADE BY %q, want %q", got, tc.made)
+			}
+			if got := titleField(t, s, "THICKNESS"); got != tc.thickness {
+				t.Errorf("THICKNESS %q, want %q", got, tc.thickness)
+			}
+		})
+	}
+}

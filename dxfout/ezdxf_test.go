@@ -2,6 +2,7 @@ package dxfout
 
 import (
 	"encoding/json"
+	"fmt"
 	"math"
 	"os"
 	"os/exec"
@@ -36,7 +37,10 @@ for path in sys.argv[1:]:
         elif e.dxftype() == "TEXT":
             d["text"] = e.dxf.text
         ents.append(d)
+    # Text extents depend on the font metrics ezdxf finds (matplotlib's, or
+    # a rough fallback without it); everything else is exact geometry.
     box = bbox.extents(msp)
+    geom = bbox.extents(e for e in msp if e.dxftype() not in ("TEXT", "MTEXT"))
     out.append({
         "path": path,
         "errors": [str(x.message) for x in auditor.errors],
@@ -46,6 +50,7 @@ for path in sys.argv[1:]:
         "extmin": list(doc.header.get("$EXTMIN"))[:2],
         "extmax": list(doc.header.get("$EXTMAX"))[:2],
         "bbox": [box.extmin.x, box.extmin.y, box.extmax.x, box.extmax.y],
+        "geometry": [geom.extmin.x, geom.extmin.y, geom.extmax.x, geom.extmax.y],
         "entities": ents,
     })
 json.dump(out, sys.stdout)
@@ -59,7 +64,8 @@ type ezFile struct {
 	Measurement int        `json:"measurement"`
 	Extmin      [2]float64 `json:"extmin"`
 	Extmax      [2]float64 `json:"extmax"`
-	Bbox        [4]float64 `json:"bbox"`
+	Bbox        [4]float64 `json:"bbox"`     // everything, text included
+	Geometry    [4]float64 `json:"geometry"` // everything but TEXT and MTEXT
 	Entities    []struct {
 		Type   string       `json:"type"`
 		Layer  string       `json:"layer"`
@@ -70,6 +76,18 @@ type ezFile struct {
 		Points [][3]float64 `json:"points"`
 		Text   string       `json:"text"`
 	} `json:"entities"`
+}
+
+// matplotlibMissing says why python cannot import matplotlib and what to
+// install, "" when it can. ezdxf draws with it and measures text with its
+// font metrics; without it ezdxf 0.18 estimates text extents with a rough
+// fallback font that disagrees with ours.
+func matplotlibMissing() string {
+	if err := exec.Command(python, "-c", "import matplotlib").Run(); err != nil {
+		return fmt.Sprintf("%s cannot import matplotlib (%v); install Debian's python3-matplotlib "+
+			"(apt-get install -y python3-matplotlib)", python, err)
+	}
+	return ""
 }
 
 func haveEzdxf(t *testing.T) {
@@ -83,7 +101,9 @@ func haveEzdxf(t *testing.T) {
 // Every sheet and CAM file passes ezdxf's audit with nothing to fix and reads
 // back, through ezdxf, to the job's holes within 1e-6 with the right
 // $INSUNITS; a CAM file holds only the contour and the holes; the header
-// extents hold ezdxf's own bounding box of everything drawn.
+// extents hold ezdxf's own bounding box of the geometry exactly and, where
+// matplotlib gives ezdxf real font metrics, of the text within a text
+// height.
 func TestEzdxfReadsBack(t *testing.T) {
 	haveEzdxf(t)
 	dir := t.TempDir()
@@ -147,14 +167,10 @@ func TestEzdxfReadsBack(t *testing.T) {
 		if f.Insunits != w.sys || f.Measurement != map[int]int{1: 0, 4: 1}[w.sys] {
 			t.Errorf("%s: $INSUNITS %d $MEASUREMENT %d", name, f.Insunits, f.Measurement)
 		}
-		// ezdxf measures text with real fonts: allow it a text height's
-		// slack (1/4 in, 6 mm) past our estimate.
-		slack := map[int]float64{1: 0.25, 4: 6}[w.sys]
-		if w.cam {
-			slack = 1e-6
-		}
-		if f.Bbox[0] < f.Extmin[0]-slack || f.Bbox[1] < f.Extmin[1]-slack || f.Bbox[2] > f.Extmax[0]+slack || f.Bbox[3] > f.Extmax[1]+slack {
-			t.Errorf("%s: ezdxf's bounding box %v lies outside $EXTMIN %v $EXTMAX %v", name, f.Bbox, f.Extmin, f.Extmax)
+		// The geometry (contours, holes, dimension and reference lines,
+		// arrowheads) lies inside the header extents, exactly.
+		if outside(f.Geometry, f.Extmin, f.Extmax, 1e-6) {
+			t.Errorf("%s: ezdxf's bounding box of the geometry %v lies outside $EXTMIN %v $EXTMAX %v", name, f.Geometry, f.Extmin, f.Extmax)
 		}
 		var holes []wantHole
 		for _, e := range f.Entities {
@@ -185,14 +201,38 @@ func TestEzdxfReadsBack(t *testing.T) {
 		}
 		sameHoles(t, name, holes, w.holes)
 	}
+	// Text: ezdxf measures it with matplotlib's font metrics; allow it a
+	// text height's slack (1/4 in, 6 mm) past our estimate. A CAM file
+	// has no text, so its whole box stays exact.
+	t.Run("text extents", func(t *testing.T) {
+		if why := matplotlibMissing(); why != "" {
+			t.Skip("skipping the bounding box of text, which ezdxf measures with matplotlib's font metrics: " + why)
+		}
+		for _, f := range files {
+			w := want[f.Path]
+			slack := map[int]float64{1: 0.25, 4: 6}[w.sys]
+			if w.cam {
+				slack = 1e-6
+			}
+			if outside(f.Bbox, f.Extmin, f.Extmax, slack) {
+				t.Errorf("%s: ezdxf's bounding box %v lies outside $EXTMIN %v $EXTMAX %v", filepath.Base(f.Path), f.Bbox, f.Extmin, f.Extmax)
+			}
+		}
+	})
+}
+
+// outside reports whether box (xmin, ymin, xmax, ymax) reaches more than
+// slack past the extents.
+func outside(box [4]float64, extmin, extmax [2]float64, slack float64) bool {
+	return box[0] < extmin[0]-slack || box[1] < extmin[1]-slack || box[2] > extmax[0]+slack || box[3] > extmax[1]+slack
 }
 
 // ezdxf's renderer draws a sheet without complaint (it fails on malformed
 // TEXT): a smoke test, skipped without python3-matplotlib.
 func TestEzdxfDraws(t *testing.T) {
 	haveEzdxf(t)
-	if err := exec.Command(python, "-c", "import matplotlib").Run(); err != nil {
-		t.Skipf("skipping the render: %s cannot import matplotlib (%v); install python3-matplotlib", python, err)
+	if why := matplotlibMissing(); why != "" {
+		t.Skip("skipping the render: " + why)
 	}
 	_, s := sheet(t, "../testdata/jobs/si-slotted.yaml")
 	b, err := Sheet(s)

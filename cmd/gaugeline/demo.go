@@ -129,11 +129,10 @@ func demoWrite(p *detail.Proposal, dir string, out io.Writer) error {
 	if err := writeAll(dir, files); err != nil {
 		return err
 	}
-	g := r.GoverningResult()
 	fmt.Fprintf(out, "%s  %s %s, demand %.1f %s\n", mark, d.Conn.Member.Shape, d.Info.Designation,
 		d.Job.Units.ToJob(float64(d.Conn.Demand), units.DimForce), d.Job.Units.Labels().Force)
 	fmt.Fprintf(out, "  propose  %s (checked %d of %d candidates)\n", p.Layout.Describe(d.Job.Units), p.Evaluated, p.Space)
-	fmt.Fprintf(out, "  check    %s, governing %s (%s) at ratio %.3f\n", strings.ToUpper(r.Verdict()), g.ID, g.Clause, g.Ratio)
+	fmt.Fprintf(out, "  check    %s, %s\n", strings.ToUpper(r.Verdict()), r.VerdictReason())
 	names := make([]string, len(files))
 	for i, f := range files {
 		names[i] = f.Name

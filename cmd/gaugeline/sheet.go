@@ -47,8 +47,7 @@ func runSheet(_ context.Context, o *rootOptions, so sheetOptions, path string, o
 		return err
 	}
 	if !r.Pass && !so.notForFabrication {
-		g := r.GoverningResult()
-		fmt.Fprintf(o.stderr, "gaugeline: error: %s: %s fails (governing %s, ratio %.3f): no sheet written\n", path, r.Design.Job.Mark, g.ID, g.Ratio)
+		fmt.Fprintf(o.stderr, "gaugeline: error: %s: %s %s: no sheet written\n", path, r.Design.Job.Mark, r.VerdictReason())
 		fmt.Fprintf(o.stderr, "gaugeline: hint: run 'gaugeline check %s' for every failing rule; --not-for-fabrication writes a stamped sheet\n", path)
 		return exitError{exitFail}
 	}

@@ -183,3 +183,15 @@ func TestSheetBadInputWritesNothing(t *testing.T) {
 		t.Errorf("no -o: exit %d, stderr %q", r.code, r.stderr)
 	}
 }
+
+// A refused sheet names what fails: TE-9 breaks only the end distance of
+// AISC 360-16 Table J3.4 (5/8 in < 1 in for a 3/4-in bolt), while its
+// governing limit state passes and is named as such.
+func TestSheetRefusalNamesWhatFails(t *testing.T) {
+	job, _ := filepath.Abs(filepath.Join(testdata, "batch", "e-tight-edge.yaml"))
+	r := gaugeline(t, ".", "sheet", job, "-o", t.TempDir())
+	if r.code != 1 || !strings.Contains(r.stderr, "TE-9 fails edge.min;") ||
+		!strings.Contains(r.stderr, "governing limit state bolts.group (J3.7, J3.11) passes") {
+		t.Errorf("exit %d, stderr %q: want exit 1 naming edge.min as the failure", r.code, r.stderr)
+	}
+}

@@ -104,15 +104,12 @@ func (f fmtr) force(x units.Force) string   { return f.q(float64(x), units.DimFo
 func (f fmtr) length(x units.Length) string { return f.q(float64(x), units.DimLength) }
 
 // people prints a measured or limiting value the way the shop reads it:
-// US lengths in feet, inches and sixteenths (as the drawing and check
-// print them).
+// lengths as the check prints them (detail.FormatLength: US in feet,
+// inches and sixteenths, the exact value after them where they round it).
 func (f fmtr) people(v float64, d units.Dim) string {
 	switch d {
 	case units.DimLength:
-		if f.sys == units.US {
-			return units.FormatFeetInches(units.Length(v))
-		}
-		return f.q(v, d)
+		return detail.FormatLength(units.Length(v), f.sys)
 	case units.Dimensionless:
 		if v == 0 {
 			return "–"
