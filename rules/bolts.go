@@ -213,3 +213,28 @@ func bearingCoefficients(t HoleType, dir SlotDir, deformationConsidered bool) (b
 		return 3.0, 1.5 // J3.10(a)(2)
 	}
 }
+
+// fillerFactor is J5.2(a): the multiplier of the bolts' shear strength when
+// a loaded bolt passes through fillers of total thickness t that are not
+// developed. Fillers of 1/4 in (6 mm) or less take no reduction; thicker
+// ones 1 − 0.4(t − 0.25), t in inches (SI: 1 − 0.0154(t − 6), t in mm), but
+// not less than 0.85. 360-22 prints this (read in the standard's text) and
+// sets no upper limit on t; 360-16 is taken the same (its text was not
+// read; 360-22's Commentary J5 dates the 0.85 floor to the 2010
+// Specification, so 360-16 has it too). Each system uses its own printed
+// formula.
+func (e *Edition) fillerFactor(t units.Length) float64 {
+	const tol = 1e-9
+	if e.si() {
+		x := t.Mm()
+		if x <= 6+tol {
+			return 1
+		}
+		return max(0.85, 1-0.0154*(x-6))
+	}
+	x := t.In()
+	if x <= 0.25+tol {
+		return 1
+	}
+	return max(0.85, 1-0.4*(x-0.25))
+}

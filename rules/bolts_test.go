@@ -1,6 +1,7 @@
 package rules
 
 import (
+	"math"
 	"slices"
 	"testing"
 
@@ -285,5 +286,45 @@ func TestBearingCoefficients(t *testing.T) {
 				t.Errorf("%s %s: = %v, %v; want %v, %v (%s)", ed, tt.name, b, to, tt.bearing, tt.tearout, tt.src)
 			}
 		}
+	}
+}
+
+func TestFillerFactor(t *testing.T) {
+	// AISC 360-22 J5.2(a), read in the standard's text: bolts through
+	// fillers over 1/4 in (6 mm) thick take 1 − 0.4(t − 0.25), SI
+	// 1 − 0.0154(t − 6), but not less than 0.85; t is the total filler
+	// thickness. 360-16 is taken the same (its text was not read; 360-22's
+	// Commentary J5 says the 0.85 floor dates from the 2010 Specification).
+	tests := []struct {
+		name string
+		ed   *Edition
+		t    units.Length
+		want float64
+		src  string
+	}{
+		{"none", us22(t), 0, 1, "AISC 360-22 J5.2"},
+		{"1/4 in: no reduction", us22(t), in(0.25), 1, "AISC 360-22 J5.2: equal to or less than 1/4 in"},
+		{"5/16 in", us22(t), in(5.0 / 16), 1 - 0.4*(5.0/16-0.25), "hand calculation per AISC 360-22 J5.2(a): 0.975"},
+		{"1/2 in", us22(t), in(0.5), 0.9, "hand calculation per AISC 360-22 J5.2(a): 1 − 0.4(0.25)"},
+		{"5/8 in: at the floor", us22(t), in(5.0 / 8), 0.85, "hand calculation per AISC 360-22 J5.2(a): 1 − 0.4(0.375)"},
+		{"3/4 in: the floor", us22(t), in(0.75), 0.85, "AISC 360-22 J5.2(a): 0.80, not less than 0.85"},
+		{"1-1/2 in: the floor", us22(t), in(1.5), 0.85, "AISC 360-22 J5.2(a): not less than 0.85"},
+		{"1/2 in, 360-16", us16(t), in(0.5), 0.9, "AISC 360-16 J5.2(a), taken as 360-22 (not read)"},
+		{"6 mm: no reduction", si22(t), mm(6), 1, "AISC 360-22 J5.2: equal to or less than 6 mm"},
+		{"12 mm", si22(t), mm(12), 1 - 0.0154*6, "hand calculation per AISC 360-22 J5.2(a) (S.I.): 0.9076"},
+		{"15 mm", si22(t), mm(15), 1 - 0.0154*9, "hand calculation per AISC 360-22 J5.2(a) (S.I.): 0.8614"},
+		{"20 mm: the floor", si22(t), mm(20), 0.85, "AISC 360-22 J5.2(a) (S.I.): 0.7844, not less than 0.85"},
+		{"12 mm, 360-16", si16(t), mm(12), 1 - 0.0154*6, "AISC 360-16 J5.2(a) (S.I.), taken as 360-22 (not read)"},
+	}
+	for _, tt := range tests {
+		if got := tt.ed.FillerFactor(tt.t); math.Abs(got-tt.want) > 1e-12 {
+			t.Errorf("%s %s: FillerFactor = %.15g, want %.15g (%s)", tt.ed, tt.name, got, tt.want, tt.src)
+		}
+	}
+	if c := us16(t).Clause("J5.2"); c != "J5.2" {
+		t.Errorf("360-16 clause %q, want J5.2", c)
+	}
+	if c := si22(t).Clause("J5.2"); c != "J5.2" {
+		t.Errorf("360-22 clause %q, want J5.2 (AISC 360-22 J5.2, read in the standard's text)", c)
 	}
 }
