@@ -261,7 +261,8 @@ func (j *Job) buildBolt(ed *rules.Edition, c *engine.Connection) error {
 	}
 	c.Bolt = engine.Bolt{
 		D: b.Diameter, Grade: g, Threads: b.Threads, Joint: b.Joint, Surface: b.Surface,
-		Fillers: b.Fillers, DeformationConsidered: b.DeformationConsidered,
+		Fillers: b.Fillers, FillerT: b.FillerThickness, FillerDeveloped: b.FillerDeveloped,
+		DeformationConsidered: b.DeformationConsidered,
 	}
 	return nil
 }

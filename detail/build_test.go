@@ -455,6 +455,9 @@ func TestBuildBadJobs(t *testing.T) {
 		{"empty.yaml", "", 0},
 		{"explicit-duplicate.yaml", "holes[2]", 14},
 		{"explicit-off-member.yaml", "holes[2]", 14},
+		{"filler-absurd.yaml", "bolts.filler_thickness", 15},
+		{"filler-negative.yaml", "bolts.filler_thickness", 15},
+		{"filler-without-fillers.yaml", "bolts.filler_thickness", 16},
 		{"flat-with-size.yaml", "member.size", 6},
 		{"fu-below-fy.yaml", "member.fu", 8},
 		{"hole-not-a-pair.yaml", "holes[1]", 13},
@@ -522,5 +525,17 @@ func TestBuildDoubleAngleSizePrefix(t *testing.T) {
 	d := mustBuild(t, mustParse(t, src))
 	if d.Info.Designation != "2L4x4x1/2" || d.Conn.Member.Pieces != 2 {
 		t.Errorf("designation %q, pieces %d", d.Info.Designation, d.Conn.Member.Pieces)
+	}
+}
+
+func TestBuildFillers(t *testing.T) {
+	src := strings.Replace(usAngle, "  gage: 2-1/2 in\n", "  gage: 2-1/2 in\n  fillers: 1\n  filler_thickness: 1/2 in\n", 1)
+	d := mustBuild(t, mustParse(t, src))
+	if b := d.Conn.Bolt; !closeTo(b.FillerT.In(), 0.5, 1e-12) || b.FillerDeveloped || b.Fillers != 1 {
+		t.Errorf("bolt = %+v", b)
+	}
+	d = mustBuild(t, mustParse(t, src+"  filler_developed: true\n"))
+	if !d.Conn.Bolt.FillerDeveloped {
+		t.Errorf("bolt = %+v, want developed fillers", d.Conn.Bolt)
 	}
 }

@@ -102,12 +102,17 @@ type PlateSpec struct {
 // given, the pattern. Diameter, Grade, PerLine, Pitch, End and Gage may be
 // absent (zero) in a propose job; Build requires what it needs.
 type BoltSpec struct {
-	Diameter              units.Length
-	Grade                 string
-	Threads               rules.Threads
-	Joint                 rules.Joint
-	Surface               rules.SlipClass
-	Fillers               int // 2 means two or more
+	Diameter units.Length
+	Grade    string
+	Threads  rules.Threads
+	Joint    rules.Joint
+	Surface  rules.SlipClass
+	Fillers  int // 2 means two or more
+	// FillerThickness is the total thickness of the fillers at a shear
+	// plane (0: none or not given); FillerDeveloped says they are welded or
+	// extended and bolted to carry their share (J5.2(b)).
+	FillerThickness       units.Length
+	FillerDeveloped       bool
 	Hole                  rules.HoleType
 	Slot                  rules.SlotDir
 	DeformationConsidered bool
@@ -207,6 +212,9 @@ const (
 	maxPerLine  = 200
 	maxHoles    = 1000
 	maxFillers  = 100
+	// A stack of fillers 150 mm (6 in) thick is no filler: a unit typed
+	// wrong (common practice, no source).
+	maxFillerThickness = 150 * units.Millimetre
 )
 
 // LoadJob reads and parses a job file.
@@ -945,8 +953,8 @@ func (p *parser) parsePlate(n *yaml.Node) error {
 	return nil
 }
 
-var boltKeys = []string{"diameter", "grade", "threads", "joint", "surface", "fillers", "hole", "slot", "deformation",
-	"lines", "per_line", "pitch", "end", "gage", "gage2", "stagger"}
+var boltKeys = []string{"diameter", "grade", "threads", "joint", "surface", "fillers", "filler_thickness", "filler_developed",
+	"hole", "slot", "deformation", "lines", "per_line", "pitch", "end", "gage", "gage2", "stagger"}
 
 // patternKeys are the bolts keys that generate hole centres.
 var patternKeys = []string{"lines", "per_line", "pitch", "end", "gage", "gage2", "stagger"}
@@ -1012,8 +1020,12 @@ func (p *parser) parseBolts(n *yaml.Node) error {
 			p.job.lines["bolts.fillers"] = v.Line
 			bs.Fillers = 2
 		} else if bs.Fillers, err = p.integer(v, "bolts.fillers", 0, maxFillers); err != nil {
+			err.(*InputError).Hint = "fillers counts the fillers (0, 1 or 2+); give their thickness as filler_thickness"
 			return err
 		}
+	}
+	if err := p.parseFiller(b, bs); err != nil {
+		return err
 	}
 	if b.has("hole") {
 		if bs.Hole, err = enum(p, b.vals["hole"], "bolts.hole", rules.ParseHoleType); err != nil {
@@ -1060,6 +1072,45 @@ func (p *parser) parseBolts(n *yaml.Node) error {
 		}
 		if *o.v, err = p.length(b.vals[o.k], b.sub(o.k), o.r); err != nil {
 			return err
+		}
+	}
+	return nil
+}
+
+func parseFlag(s string) (bool, error) {
+	switch s {
+	case "true":
+		return true, nil
+	case "false":
+		return false, nil
+	}
+	return false, fmt.Errorf("want true or false, not %q", s)
+}
+
+// parseFiller reads filler_thickness, the total thickness of the fillers
+// at a shear plane (J5.2), and filler_developed (J5.2(b)).
+func (p *parser) parseFiller(b *block, bs *BoltSpec) error {
+	var err error
+	if v := b.vals["filler_thickness"]; v != nil {
+		if bs.FillerThickness, err = p.length(v, "bolts.filler_thickness", nonNegative); err != nil {
+			return err
+		}
+		if bs.FillerThickness >= maxFillerThickness {
+			return p.errAt(v, "bolts.filler_thickness", "is absurdly thick for a filler (6 in, 150 mm, or more)",
+				"the total thickness of the fillers at one shear plane, e.g. 1/2 in; check the unit")
+		}
+		if bs.FillerThickness > 0 && b.has("fillers") && bs.Fillers == 0 {
+			return p.errAt(v, "bolts.filler_thickness", "is given but bolts.fillers is 0",
+				"give fillers: 1 (or 2+), or remove filler_thickness")
+		}
+	}
+	if v := b.vals["filler_developed"]; v != nil {
+		if bs.FillerDeveloped, err = enum(p, v, "bolts.filler_developed", parseFlag); err != nil {
+			return err
+		}
+		if bs.FillerDeveloped && bs.FillerThickness == 0 {
+			return p.errAt(v, "bolts.filler_developed", "says the fillers are developed but bolts.filler_thickness gives none",
+				"give filler_thickness, the total thickness of the fillers at one shear plane")
 		}
 	}
 	return nil

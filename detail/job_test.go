@@ -343,6 +343,18 @@ member:
 			t.Errorf("plate = %+v", *j.Plate)
 		}
 	})
+	t.Run("filler thickness and development", func(t *testing.T) {
+		j := mustParse(t, minimalUS+"bolts:\n  fillers: 1\n  filler_thickness: 1/2 in\n  filler_developed: true\n")
+		b := j.Bolts
+		if !closeTo(b.FillerThickness.In(), 0.5, readBack) || !b.FillerDeveloped || b.Fillers != 1 ||
+			j.Raw["bolts.filler_thickness"] != "1/2 in" || j.Line("bolts.filler_developed") != 11 {
+			t.Errorf("bolts = %+v, raw %q", b, j.Raw["bolts.filler_thickness"])
+		}
+		j = mustParse(t, minimalUS+"units: si\nbolts: {filler_thickness: 12, filler_developed: false}\n")
+		if !closeTo(float64(j.Bolts.FillerThickness), 12, readBack) || j.Bolts.FillerDeveloped {
+			t.Errorf("si bolts = %+v", j.Bolts)
+		}
+	})
 	t.Run("fillers as a number, stagger zero", func(t *testing.T) {
 		j := mustParse(t, minimalUS+"bolts: {fillers: 1, stagger: 0 in}\n")
 		if j.Bolts.Fillers != 1 || j.Bolts.Stagger != 0 || !j.Given("bolts.stagger") {
@@ -381,6 +393,13 @@ func TestJobParseErrors(t *testing.T) {
 		{"lines not whole", minimalUS + bolts + "  lines: 1.5\n", "bolts.lines", 11, "whole number", ""},
 		{"too many bolts", minimalUS + bolts + "  lines: 20\n  per_line: 60\n", "bolts.per_line", 12, "1200 bolts", ""},
 		{"fillers", minimalUS + bolts + "  fillers: 3.5\n", "bolts.fillers", 11, "whole number", ""},
+		{"fillers as a thickness", minimalUS + bolts + "  fillers: 1/2 in\n", "bolts.fillers", 11, "whole number", "filler_thickness"},
+		{"filler negative", minimalUS + bolts + "  filler_thickness: -1/2 in\n", "bolts.filler_thickness", 11, "negative", ""},
+		{"filler absurd", minimalUS + bolts + "  filler_thickness: 12 in\n", "bolts.filler_thickness", 11, "absurdly thick", "check the unit"},
+		{"filler a force", minimalUS + bolts + "  filler_thickness: 1/2 kip\n", "bolts.filler_thickness", 11, "", "write a length"},
+		{"filler and no fillers", minimalUS + bolts + "  fillers: 0\n  filler_thickness: 1/2 in\n", "bolts.filler_thickness", 12, "bolts.fillers is 0", ""},
+		{"developed not a flag", minimalUS + bolts + "  filler_thickness: 1/2 in\n  filler_developed: maybe\n", "bolts.filler_developed", 12, "true or false", ""},
+		{"developed without thickness", minimalUS + bolts + "  filler_developed: true\n", "bolts.filler_developed", 11, "filler_thickness", ""},
 		{"joint", minimalUS + bolts + "  joint: friction\n", "bolts.joint", 11, "unknown joint", ""},
 		{"threads", minimalUS + bolts + "  threads: partial\n", "bolts.threads", 11, "", ""},
 		{"hole type", minimalUS + bolts + "  hole: round\n", "bolts.hole", 11, "unknown hole type", ""},

@@ -142,6 +142,17 @@ func drawProposeJob(t *rapid.T) string {
 	default:
 		w("  joint: bearing")
 	}
+	if rapid.IntRange(0, 3).Draw(t, "fillers") == 0 { // J5.2 fillers
+		tf := rapid.SampledFrom([]float64{3.0 / 8, 5.0 / 8, 1}).Draw(t, "fillerIn")
+		if !us {
+			tf = rapid.SampledFrom([]float64{10, 16, 25}).Draw(t, "fillerMm")
+		}
+		w("  fillers: 1")
+		w("  filler_thickness: %s", in(tf))
+		if rapid.IntRange(0, 3).Draw(t, "developed") == 0 {
+			w("  filler_developed: true")
+		}
+	}
 	if rapid.IntRange(0, 4).Draw(t, "fixLines") == 0 {
 		w("  lines: %d", rapid.IntRange(1, 2).Draw(t, "lines"))
 		if rapid.Bool().Draw(t, "stagger") {

@@ -111,8 +111,15 @@ func (d *Design) Summary() [][2]string {
 			hole += " " + c.Holes[0].Slot.String()
 		}
 	}
-	rows = append(rows, [2]string{"bolts", fmt.Sprintf("%d × %s %s, threads %s, %s joint, %s holes",
-		len(c.Holes), boltSize(b.D, d.Job.Units), b.Grade.Name, b.Threads, b.Joint, hole)})
+	bolts := fmt.Sprintf("%d × %s %s, threads %s, %s joint, %s holes",
+		len(c.Holes), boltSize(b.D, d.Job.Units), b.Grade.Name, b.Threads, b.Joint, hole)
+	if b.FillerT > 0 {
+		bolts += ", fillers " + p.length(b.FillerT)
+		if b.FillerDeveloped {
+			bolts += " (developed)"
+		}
+	}
+	rows = append(rows, [2]string{"bolts", bolts})
 	demand := fmt.Sprintf("%s %s (%s)", p.force(c.Demand), d.Job.Units.Labels().Force, c.Method)
 	if d.Combination != "" {
 		demand += ", " + d.Combination

@@ -34,24 +34,61 @@ func boltShearFnv(c *Connection) (units.Stress, float64) {
 	return Fnv, 1
 }
 
+// fillerFactor is the J5.2 multiplier of the bolts' shear strength and a
+// note saying why: J5.2(a) for fillers over 1/4 in (6 mm) that are not
+// developed, 1 for developed fillers (J5.2(b)), thin fillers or none. It
+// applies in every joint type: a slip-critical joint is also designed for
+// the limit states of bearing-type connections (J3.8 [J3.9]), and its slip
+// resistance takes hf instead.
+func fillerFactor(c *Connection) (float64, string) {
+	b := c.Bolt
+	t := units.FormatJob(b.FillerT, c.Edition.System)
+	switch {
+	case b.FillerT > 0 && b.FillerDeveloped:
+		return 1, fmt.Sprintf("fillers %s, developed (J5.2(b)): no reduction", t)
+	case b.FillerT > 0:
+		k := c.Edition.FillerFactor(b.FillerT)
+		if k == 1 {
+			return 1, fmt.Sprintf("fillers %s: no reduction (J5.2)", t)
+		}
+		return k, fmt.Sprintf("fillers %s, not developed: shear × %.4g (J5.2(a))", t, k)
+	case b.Fillers > 0:
+		return 1, "filler thickness not given: no J5.2 reduction taken"
+	}
+	return 1, ""
+}
+
 // BoltShear is the shear rupture of the bolts: Rn = Fnv·Ab per shear
 // plane, summed over the bolts; Fnv is reduced to 83.3 % when an
-// end-loaded pattern is longer than 38 in (950 mm).
+// end-loaded pattern is longer than 38 in (950 mm), and the strength is
+// multiplied by the filler factor of J5.2(a) when the bolts pass through
+// undeveloped fillers over 1/4 in (6 mm) thick.
 //
-// Clause: J3.6 [J3.7]
+// Clause: J3.6 [J3.7], J5.2
 func BoltShear(c *Connection) Result {
 	Fnv, f := boltShearFnv(c)
+	ff, why := fillerFactor(c)
 	Ab := BoltArea(c.Bolt.D)
 	n, ns := len(c.Holes), c.ShearPlanes()
-	Rn := Fnv.Times(Ab) * units.Force(n*ns)
-	return finish(c, "bolts.shear", "J3.6", Rn, c.Edition.BoltShearFactor(), []Value{
+	Rn := Fnv.Times(Ab) * units.Force(float64(n*ns)*ff)
+	note := fmt.Sprintf("%d bolts × %d shear plane(s), threads %s", n, ns, c.Bolt.Threads)
+	if why != "" {
+		note += "; " + why
+	}
+	r := finish(c, "bolts.shear", "J3.6", Rn, c.Edition.BoltShearFactor(), []Value{
 		{"Fnv", float64(Fnv), units.DimStress},
 		{"Ab", float64(Ab), units.DimArea},
 		{"n", float64(n), units.Dimensionless},
 		{"planes", float64(ns), units.Dimensionless},
 		{"long_joint_factor", f, units.Dimensionless},
 		{"pattern_length", float64(patternLength(c.Holes)), units.DimLength},
-	}, fmt.Sprintf("%d bolts × %d shear plane(s), threads %s", n, ns, c.Bolt.Threads))
+		{"filler_factor", ff, units.Dimensionless},
+		{"filler_t", float64(c.Bolt.FillerT), units.DimLength},
+	}, note)
+	if ff < 1 {
+		r.Clause += ", " + c.Edition.Clause("J5.2")
+	}
+	return r
 }
 
 // BoltSlip is the slip resistance of a slip-critical joint:
@@ -99,7 +136,8 @@ func BoltSlip(c *Connection) (Result, error) {
 // Clause: J3.6, J3.10 [J3.7, J3.11]
 func BoltGroup(c *Connection, member, plate []BoltShare) Result {
 	Fnv, _ := boltShearFnv(c)
-	shear := Fnv.Times(BoltArea(c.Bolt.D)) * units.Force(c.ShearPlanes())
+	ff, _ := fillerFactor(c)
+	shear := Fnv.Times(BoltArea(c.Bolt.D)) * units.Force(float64(c.ShearPlanes())*ff)
 	var Rn units.Force
 	governs := map[string]int{}
 	for i := range c.Holes {
@@ -117,8 +155,12 @@ func BoltGroup(c *Connection, member, plate []BoltShare) Result {
 	r := finish(c, "bolts.group", "J3.6", Rn, c.Edition.BoltShearFactor(), []Value{
 		{"rn_shear", float64(shear), units.DimForce},
 		{"n", float64(len(c.Holes)), units.Dimensionless},
+		{"filler_factor", ff, units.Dimensionless},
 	}, fmt.Sprintf("per bolt the least of shear, member and plate bearing/tearout; %s", describeCounts(governs)))
 	r.Clause = c.Edition.Clause("J3.6") + ", " + c.Edition.Clause("J3.10")
+	if ff < 1 {
+		r.Clause += ", " + c.Edition.Clause("J5.2")
+	}
 	return r
 }
 

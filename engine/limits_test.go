@@ -2,6 +2,7 @@ package engine
 
 import (
 	"math"
+	"strings"
 	"testing"
 
 	"gaugeline/rules"
@@ -260,4 +261,79 @@ func TestWhitmoreFromTheFirstBoltOfEachLine(t *testing.T) {
 	c := conn(rows)
 	c.Plate.Width = in(4)
 	near(t, "clipped Lw", WhitmoreSection(c).Lw.In(), 4, 1e-12, src)
+}
+
+func TestBoltShearFillers(t *testing.T) {
+	// Four 3/4-in A325-N bolts in single shear through 1/2 in of fillers
+	// that are not developed. Hand calculation per AISC 360-22 J5.2(a):
+	// factor 1 − 0.4(0.5 − 0.25) = 0.90; Rn = 0.90·54·(π·0.75²/4)·4
+	// = 0.90·54·0.44179·4 = 85.88 kips, φRn = 64.41 kips.
+	const src = "hand calculation per AISC 360-22 J5.2(a)"
+	Ab := BoltArea(in(0.75)).In2()
+	c := designExampleD2(t, rules.LRFD)
+	c.Edition = edition(t, "aisc360-22", units.US)
+	c.Bolt.FillerT = in(0.5)
+	r := BoltShear(c)
+	near(t, "Rn", r.Nominal.Kip(), 0.90*54*Ab*4, 1e-9, src)
+	near(t, "φRn", r.Available.Kip(), 0.75*0.90*54*Ab*4, 1e-9, src)
+	near(t, "filler_factor", value(t, r, "filler_factor"), 0.90, 1e-12, src)
+	near(t, "filler_t", value(t, r, "filler_t"), float64(in(0.5)), 1e-12, src)
+	if !strings.Contains(r.Note, "J5.2") {
+		t.Errorf("note %q does not name J5.2", r.Note)
+	}
+	// The bolt group takes the same reduced shear per bolt.
+	g := BoltGroup(c, MemberBearing(c).PerBolt, nil)
+	near(t, "rn_shear", value(t, g, "rn_shear")/float64(units.Kip), 0.90*54*Ab, 1e-9, src)
+
+	// 1 in of fillers: 1 − 0.4(0.75) = 0.70, but not less than 0.85
+	// (AISC 360-22 J5.2(a)).
+	c.Bolt.FillerT = in(1)
+	near(t, "Rn, 1 in", BoltShear(c).Nominal.Kip(), 0.85*54*Ab*4, 1e-9, "AISC 360-22 J5.2(a): not less than 0.85")
+
+	// Developed fillers (J5.2(b)) and fillers of 1/4 in or less take no
+	// reduction: Rn = 54·0.44179·4 = 95.43 kips.
+	c.Bolt.FillerDeveloped = true
+	near(t, "Rn, developed", BoltShear(c).Nominal.Kip(), 54*Ab*4, 1e-9, "AISC 360-22 J5.2(b)")
+	c.Bolt.FillerT, c.Bolt.FillerDeveloped = in(0.25), false
+	near(t, "Rn, 1/4 in", BoltShear(c).Nominal.Kip(), 54*Ab*4, 1e-9, "AISC 360-22 J5.2: 1/4 in or less, no reduction")
+
+	// The long-joint reduction and the filler factor both apply: 15 bolts
+	// at 3 in (42 in) through 1/2 in of fillers, Rn = 0.833·0.90·54·Ab·15
+	// (AISC 360-22 Table J3.2 footnote [c] and J5.2(a)).
+	c.Holes = line(1, 15, in(1.5), in(3), in(2.5), in(13.0/16), in(13.0/16), rules.Standard)
+	c.Bolt.FillerT = in(0.5)
+	near(t, "Rn, long", BoltShear(c).Nominal.Kip(), 0.833*0.90*54*Ab*15, 1e-9, "AISC 360-22 Table J3.2 [c], J5.2(a)")
+
+	// Slip keeps hf and takes no J5.2 factor: Rn = μ·Du·hf·Tb·ns·n =
+	// 0.30·1.13·1.0·28·1·15 (AISC 360-22 J3.9, Table J3.1).
+	c.Bolt.Joint, c.Bolt.Fillers = rules.SlipCritical, 1
+	s, err := BoltSlip(c)
+	if err != nil {
+		t.Fatal(err)
+	}
+	near(t, "slip Rn", s.Nominal.Kip(), 0.30*1.13*1.0*28*15, 1e-9, "AISC 360-22 J3.9")
+	// The slip-critical joint's bolt shear (a bearing-type limit state
+	// J3.9 also requires) keeps the filler factor.
+	near(t, "Rn, slip-critical", BoltShear(c).Nominal.Kip(), 0.833*0.90*54*Ab*15, 1e-9, "AISC 360-22 J3.9, J5.2(a)")
+}
+
+func TestBoltShearFillersSI(t *testing.T) {
+	// M20 A325M-N (Fnv = 370 MPa), four bolts in single shear through
+	// 12 mm of fillers. Hand calculation per AISC 360-22 J5.2(a) (S.I.):
+	// factor 1 − 0.0154(12 − 6) = 0.9076; Ab = π·20²/4 = 314.16 mm²;
+	// Rn = 0.9076·370·314.16·4 = 422.0 kN.
+	const src = "hand calculation per AISC 360-22 J5.2(a) (S.I.)"
+	e := edition(t, "aisc360-22", units.SI)
+	g, err := e.Bolt("A325M")
+	if err != nil {
+		t.Fatal(err)
+	}
+	mm := func(v float64) units.Length { return units.Length(v) * units.Millimetre }
+	c := &Connection{Edition: e, Method: rules.LRFD,
+		Member: Member{Shape: Angle, Width: mm(100), Outstanding: mm(100), T: mm(10), Ag: units.Area(1920), Xbar: mm(28.2), Pieces: 1, Fy: 345, Fu: 450},
+		Bolt:   Bolt{D: mm(20), Grade: g, DeformationConsidered: true, FillerT: mm(12)},
+		Holes:  line(1, 4, mm(40), mm(70), mm(55), mm(22), mm(22), rules.Standard),
+	}
+	Ab := math.Pi * 20 * 20 / 4
+	near(t, "Rn", BoltShear(c).Nominal.KN(), (1-0.0154*6)*370*Ab*4/1000, 1e-9, src)
 }

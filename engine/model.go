@@ -78,7 +78,13 @@ type Bolt struct {
 	Threads rules.Threads
 	Joint   rules.Joint
 	Surface rules.SlipClass
-	Fillers int
+	Fillers int // fillers between the connected parts, for hf (2 means two or more)
+	// FillerT is the total thickness of the fillers a bolt passes through at
+	// each shear plane (0: none or not given); FillerDeveloped says the
+	// fillers are welded or extended and bolted to carry their share of the
+	// force (J5.2(b)), so the bolts' shear strength is not reduced.
+	FillerT         units.Length
+	FillerDeveloped bool
 	// DeformationConsidered: deformation at the bolt hole at service load is
 	// a design consideration (J3.10(a) [J3.11(a)]).
 	DeformationConsidered bool

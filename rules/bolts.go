@@ -45,15 +45,24 @@ var boltStressUS = [...]boltStress{
 	GroupB:    {113, 68, 84},
 }
 
-// boltStressSI is Table J3.2 in MPa; A307 Fnv is 188 MPa in 360-16 and 190
-// MPa in 360-22 (see boltStressA307SI22).
-var boltStressSI = [...]boltStress{
-	GroupA307: {310, 188, 188},
+// boltStressSI22 is 360-22's Table J3.2 in MPa, read in the standard's
+// text: A307 310 / 190 / 190, Group 120 620 / 370 / 470, Group 150
+// 780 / 470 / 580.
+var boltStressSI22 = [...]boltStress{
+	GroupA307: {310, 190, 190},
 	GroupA:    {620, 370, 470},
 	GroupB:    {780, 470, 580},
 }
 
-var boltStressA307SI22 = boltStress{310, 190, 190}
+// boltStressSI16 is what the code uses for 360-16's Table J3.2 in MPa. The
+// 360-16 text was not available to read: these are 360-22's values except
+// A307 Fnv (188 MPa, as before). Unconfirmed: a review read 372 / 469 /
+// 579 MPa for 360-16; change them only from the 360-16 text itself.
+var boltStressSI16 = [...]boltStress{
+	GroupA307: {310, 188, 188},
+	GroupA:    {620, 370, 470},
+	GroupB:    {780, 470, 580},
+}
 
 // boltGrades lists the names accepted in this system.
 func (e *Edition) boltGrades() []string {
@@ -87,11 +96,11 @@ func (e *Edition) bolt(name string) (BoltGrade, error) {
 // grade converts a row of Table J3.2 [J3.2M] to internal units.
 func (e *Edition) grade(b boltName) BoltGrade {
 	s, u := boltStressUS[b.group], units.Ksi
-	if e.si() {
-		s, u = boltStressSI[b.group], units.Megapascal
-		if b.group == GroupA307 && e.is22() {
-			s = boltStressA307SI22
-		}
+	switch {
+	case e.si() && e.is22():
+		s, u = boltStressSI22[b.group], units.Megapascal
+	case e.si():
+		s, u = boltStressSI16[b.group], units.Megapascal
 	}
 	return BoltGrade{
 		Name:  b.name,
@@ -138,7 +147,9 @@ var pretensionUS = [...]pretensionRow{
 	{1 + 1.0/2, 118, 148},
 }
 
-// pretensionSI is Table J3.1M; the M12 row is 360-22's.
+// pretensionSI is Table J3.1M as 360-22 prints it (read in the standard's
+// text); 360-16 does not tabulate M12 (tableDiameters) and its other rows
+// were not read: they are taken the same.
 var pretensionSI = [...]pretensionRow{
 	{12, 49, 72},
 	{16, 91, 114},
@@ -181,7 +192,8 @@ func (e *Edition) pretension(b BoltGrade, d units.Length) (units.Force, error) {
 }
 
 // longJoint is Table J3.2 footnote: end-loaded joints longer than 38 in
-// (950 mm) take 0.833·Fnv.
+// (950 mm) take 0.833·Fnv. 360-22 prints 950 mm (read in the standard's
+// text); 360-16's mm value was not read and is taken the same.
 func (e *Edition) longJoint() (units.Length, float64) {
 	if e.si() {
 		return 950 * units.Millimetre, 0.833
@@ -200,4 +212,29 @@ func bearingCoefficients(t HoleType, dir SlotDir, deformationConsidered bool) (b
 	default:
 		return 3.0, 1.5 // J3.10(a)(2)
 	}
+}
+
+// fillerFactor is J5.2(a): the multiplier of the bolts' shear strength when
+// a loaded bolt passes through fillers of total thickness t that are not
+// developed. Fillers of 1/4 in (6 mm) or less take no reduction; thicker
+// ones 1 − 0.4(t − 0.25), t in inches (SI: 1 − 0.0154(t − 6), t in mm), but
+// not less than 0.85. 360-22 prints this (read in the standard's text) and
+// sets no upper limit on t; 360-16 is taken the same (its text was not
+// read; 360-22's Commentary J5 dates the 0.85 floor to the 2010
+// Specification, so 360-16 has it too). Each system uses its own printed
+// formula.
+func (e *Edition) fillerFactor(t units.Length) float64 {
+	const tol = 1e-9
+	if e.si() {
+		x := t.Mm()
+		if x <= 6+tol {
+			return 1
+		}
+		return max(0.85, 1-0.0154*(x-6))
+	}
+	x := t.In()
+	if x <= 0.25+tol {
+		return 1
+	}
+	return max(0.85, 1-0.4*(x-0.25))
 }

@@ -135,6 +135,11 @@ func (e *Edition) Mu(c SlipClass) float64 { return mu(c) }
 // Du is the ratio of mean installed to specified minimum pretension (1.13).
 func (e *Edition) Du() float64 { return 1.13 }
 
+// FillerFactor is the J5.2(a) multiplier of the bolts' shear strength for
+// undeveloped fillers of total thickness t: 1 up to 1/4 in (6 mm), then
+// 1 − 0.4(t − 0.25) in inches (SI 1 − 0.0154(t − 6) in mm), not below 0.85.
+func (e *Edition) FillerFactor(t units.Length) float64 { return e.fillerFactor(t) }
+
 // Hf is the filler factor: 1.0 with no filler or one, 0.85 with two or more.
 func (e *Edition) Hf(fillers int) float64 { return hf(fillers) }
 

@@ -285,3 +285,55 @@ func TestReadmeJobExample(t *testing.T) {
 		t.Errorf("README example: exit %d, mark %q\n%s", r.code, doc.Mark, r.stderr)
 	}
 }
+
+func TestFillersThroughTheBinary(t *testing.T) {
+	// Four 3/4-in A325-N bolts in single shear through a 5/8-in filler
+	// that is not developed. Hand calculation per AISC 360-22 J5.2(a):
+	// factor 1 − 0.4(0.625 − 0.25) = 0.85; φRn = 0.75·0.85·54·0.4418·4
+	// = 60.84 kips < 65 kips: the job fails on bolt shear (exit 1).
+	// Developed (J5.2(b)): φRn = 0.75·54·0.4418·4 = 71.57 kips, it passes.
+	const src = "hand calculation per AISC 360-22 J5.2"
+	Ab := math.Pi * 0.75 * 0.75 / 4
+	job := filepath.Join(testdata, "jobs", "us-filler-gusset.yaml")
+	shear := func(doc jsonReport) (float64, map[string]float64) {
+		for _, ls := range doc.LimitStates {
+			if ls.ID == "bolts.shear" {
+				return ls.Available, ls.Values
+			}
+		}
+		t.Fatal("no bolts.shear")
+		return 0, nil
+	}
+	doc, r := checkJSON(t, job)
+	got, v := shear(doc)
+	if want := 0.75 * 0.85 * 54 * Ab * 4; math.Abs(got-want) > 1e-9*want {
+		t.Errorf("φRn = %.6g kip, want %.6g (%s)", got, want, src)
+	}
+	if v["filler_factor"] != 0.85 || math.Abs(v["filler_t"]-0.625) > 1e-12 {
+		t.Errorf("values: filler_factor %v, filler_t %v in; want 0.85, 0.625 (%s)", v["filler_factor"], v["filler_t"], src)
+	}
+	if r.code != 1 || doc.Verdict != "fail" || doc.Governing != "bolts.shear" {
+		t.Errorf("exit %d, verdict %s, governing %s; want 1, fail, bolts.shear", r.code, doc.Verdict, doc.Governing)
+	}
+	text := gaugeline(t, ".", "check", job)
+	if !strings.Contains(text.stdout, "J5.2") || !strings.Contains(text.stdout, "fillers 5/8 in, not developed") {
+		t.Errorf("the text report does not say the filler reduction:\n%s", text.stdout)
+	}
+
+	data, err := os.ReadFile(job)
+	if err != nil {
+		t.Fatal(err)
+	}
+	dev := filepath.Join(t.TempDir(), "developed.yaml")
+	if err := os.WriteFile(dev, append(data, []byte("  filler_developed: true\n")...), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	doc, r = checkJSON(t, dev)
+	got, v = shear(doc)
+	if want := 0.75 * 54 * Ab * 4; math.Abs(got-want) > 1e-9*want || v["filler_factor"] != 1 {
+		t.Errorf("developed: φRn = %.6g kip, factor %v; want %.6g, 1 (%s)", got, v["filler_factor"], want, src)
+	}
+	if r.code != 0 || doc.Verdict != "pass" {
+		t.Errorf("developed: exit %d, verdict %s; want 0, pass", r.code, doc.Verdict)
+	}
+}

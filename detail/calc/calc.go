@@ -459,7 +459,9 @@ var meaning = map[string]string{
 	"ns":                   "slip planes",
 	"phi":                  "resistance factor φ for slip, by hole type",
 	"omega":                "safety factor Ω for slip, by hole type",
-	"rn_shear":             "shear strength of one bolt, Fnv·Ab·ns",
+	"rn_shear":             "shear strength of one bolt, Fnv·Ab·ns (× ff with fillers)",
+	"filler_factor":        "filler factor ff of J5.2(a) on the bolts' shear strength (1 when none)",
+	"filler_t":             "total thickness of the fillers at a shear plane (0 when none given)",
 }
 
 // symbols are printed names of values whose names are spelled out.
@@ -469,7 +471,43 @@ var symbols = map[string]string{
 	"bearing_coefficient": "cb", "tearout_coefficient": "ct", "rn_shear": "rn,shear",
 	"Whitmore_spread": "spread", "long_joint_factor": "long-joint factor",
 	"pattern_length": "pattern length", "splice_cap_applied": "cap applied",
-	"deduction": "Σdh − Σs²/4g",
+	"deduction": "Σdh − Σs²/4g", "filler_factor": "ff", "filler_t": "t (fillers)",
+}
+
+// fillerFormula is J5.2(a) as the edition prints it for the job's system.
+func fillerFormula(sys units.System) string {
+	if sys == units.SI {
+		return "ff = 1 − 0.0154(t − 6) ≥ 0.85, t in mm"
+	}
+	return "ff = 1 − 0.4(t − 0.25) ≥ 0.85, t in in."
+}
+
+// fillerLimit is the filler thickness J5.2 lets through without reduction.
+func fillerLimit(sys units.System) string {
+	if sys == units.SI {
+		return "6 mm"
+	}
+	return "1/4 in"
+}
+
+// fillerStep works the filler factor from the filler thickness.
+func fillerStep(f fmtr, v vals) string {
+	t := units.Length(v.raw("filler_t"))
+	var raw float64
+	var expr string
+	if f.sys == units.SI {
+		raw = 1 - 0.0154*(t.Mm()-6)
+		expr = fmt.Sprintf("1 − 0.0154(%.4g − 6)", t.Mm())
+	} else {
+		raw = 1 - 0.4*(t.In()-0.25)
+		expr = fmt.Sprintf("1 − 0.4(%.4g − 0.25)", t.In())
+	}
+	ff := v.raw("filler_factor")
+	s := fmt.Sprintf("ff = %s = %.3f", expr, raw)
+	if raw < ff {
+		s += fmt.Sprintf(", not less than 0.85: ff = %.3f", ff)
+	}
+	return s + fmt.Sprintf(": fillers %s thick, not developed", v.q("filler_t"))
 }
 
 // factorOf is the φ and Ω of a limit state.
@@ -641,7 +679,15 @@ func limit(d *detail.Design, f fmtr, x engine.Result, byID map[string]engine.Res
 		ls.Steps = []string{
 			fmt.Sprintf("Ab = π(%s)²/4 = %s", f.length(c.Bolt.D), v.q("Ab")),
 			fmt.Sprintf("Fnv = %s for %s, threads %s%s", v.q("Fnv"), c.Bolt.Grade.Name, c.Bolt.Threads, lj),
-			fmt.Sprintf("Rn = (%s)(%s)(%s)(%s) = %s", v.q("Fnv"), v.q("Ab"), v.q("n"), v.q("planes"), f.force(x.Nominal)),
+		}
+		if ff := v.raw("filler_factor"); v.has("filler_factor") && ff < 1 {
+			ls.Formula = []string{"Rn = Fnv·Ab·n·ns·ff", "Ab = π·d²/4", fillerFormula(f.sys)}
+			where = append(where, "ff is the filler factor for bolts through fillers over "+fillerLimit(f.sys)+
+				" thick that are not developed, t the total thickness of the fillers (J5.2(a))")
+			ls.Steps = append(ls.Steps, fillerStep(f, v),
+				fmt.Sprintf("Rn = (%s)(%s)(%s)(%s)(%.3f) = %s", v.q("Fnv"), v.q("Ab"), v.q("n"), v.q("planes"), ff, f.force(x.Nominal)))
+		} else {
+			ls.Steps = append(ls.Steps, fmt.Sprintf("Rn = (%s)(%s)(%s)(%s) = %s", v.q("Fnv"), v.q("Ab"), v.q("n"), v.q("planes"), f.force(x.Nominal)))
 		}
 
 	case "bolts.slip":
@@ -659,6 +705,11 @@ func limit(d *detail.Design, f fmtr, x engine.Result, byID map[string]engine.Res
 		ls.Steps = []string{
 			"rn,shear = " + v.q("rn_shear") + " per bolt",
 			fmt.Sprintf("Rn = Σ over %s bolts (table) = %s", v.q("n"), f.force(x.Nominal)),
+		}
+		if ff := v.raw("filler_factor"); v.has("filler_factor") && ff < 1 {
+			where[0] = "rn,shear = Fnv·Ab·ns·ff is the shear strength of one bolt, ff the filler factor of J5.2(a) (see bolts.shear)" +
+				strings.TrimPrefix(where[0], "rn,shear = Fnv·Ab·ns is the shear strength of one bolt")
+			ls.Steps[0] = fmt.Sprintf("rn,shear = %s per bolt, with the filler factor ff = %.3f (J5.2(a))", v.q("rn_shear"), ff)
 		}
 		mb, hasM := byID["member.bearing"]
 		pb, hasP := byID["plate.bearing"]
@@ -719,7 +770,11 @@ func limit(d *detail.Design, f fmtr, x engine.Result, byID map[string]engine.Res
 	ls.Result = append(ls.Result, row{"Result", verdict}, row{"Clause", "AISC " + strings.TrimPrefix(c.Edition.Name, "aisc") + " " + x.Clause})
 
 	ls.Values.Head = []string{"symbol", "value", "what it is"}
+	noFiller := v.raw("filler_factor") == 1 && v.raw("filler_t") == 0
 	for _, val := range x.Values {
+		if noFiller && (val.Name == "filler_factor" || val.Name == "filler_t") {
+			continue // no fillers: nothing to show
+		}
 		sym := val.Name
 		if s, ok := symbols[val.Name]; ok {
 			sym = s

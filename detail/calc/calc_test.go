@@ -33,7 +33,7 @@ func jobs(t *testing.T) []string {
 	if len(out) < 5 {
 		t.Fatalf("found only %d jobs", len(out))
 	}
-	for _, name := range []string{"long-splice-asd.yaml", "si-flat-alone.yaml"} {
+	for _, name := range []string{"long-splice-asd.yaml", "si-flat-alone.yaml", "filler-bearing.yaml", "si-filler-slip.yaml"} {
 		out = append(out, "inline:"+name)
 	}
 	return out
@@ -43,8 +43,62 @@ func jobs(t *testing.T) []string {
 // 360-16, a double angle into a splice plate (the 0.85·Ag cap applies),
 // slip-critical with oversized holes and a pattern long enough for the
 // long-joint reduction, failing an edge distance only; an SI flat bar
-// with no plate.
+// with no plate; a US bearing joint through 1/2 in of undeveloped fillers
+// (J5.2(a) factor 0.90); an SI slip-critical joint under 360-16 through
+// 20 mm of fillers (the 0.85 floor) with two fillers (hf 0.85).
 var inline = map[string]string{
+	"filler-bearing.yaml": `mark: FL-1
+units: us
+standard: aisc360-22
+method: lrfd
+load:
+  required: 60 kip
+member:
+  shape: angle
+  size: L4x4x1/2
+  grade: A36
+plate:
+  thickness: 1/2 in
+  grade: A572-50
+  width: 12 in
+  edge: 1-1/2 in
+bolts:
+  diameter: 3/4 in
+  grade: A325
+  fillers: 1
+  filler_thickness: 1/2 in
+  per_line: 4
+  pitch: 3 in
+  end: 1-1/2 in
+  gage: 2-1/2 in
+`,
+	"si-filler-slip.yaml": `mark: FL-2
+units: si
+standard: aisc360-16
+method: asd
+load:
+  required: 150 kN
+member:
+  shape: double-angle
+  size: L100x100x10
+  grade: A572-50
+plate:
+  thickness: 12 mm
+  grade: A572-50
+  width: 250 mm
+  edge: 40 mm
+bolts:
+  diameter: M20
+  grade: A325M
+  joint: slip-critical
+  surface: A
+  fillers: 2+
+  filler_thickness: 20 mm
+  per_line: 3
+  pitch: 70 mm
+  end: 40 mm
+  gage: 55 mm
+`,
 	"long-splice-asd.yaml": `mark: LONG-1
 units: us
 standard: aisc360-16
@@ -444,6 +498,7 @@ func TestFailingConnectionIsStamped(t *testing.T) {
 // page, worked from those values, must give that strength. Relative
 // tolerance 1e-9: the same arithmetic in another order.
 func TestFormulasOnThePageGiveTheNominalStrength(t *testing.T) {
+	seen := 0 // jobs whose filler factor reduces the shear
 	for _, path := range jobs(t) {
 		r := check(t, path)
 		c := &r.Design.Conn
@@ -485,7 +540,8 @@ func TestFormulasOnThePageGiveTheNominalStrength(t *testing.T) {
 				}
 				want = v["Fu"] * v["An"]
 			case "bolts.shear":
-				want = v["Fnv"] * v["Ab"] * v["n"] * v["planes"]
+				ff := fillerFactor(t, c, v)
+				want = v["Fnv"] * v["Ab"] * v["n"] * v["planes"] * ff
 			case "bolts.slip":
 				want = v["mu"] * v["Du"] * v["hf"] * v["Tb"] * v["ns"] * v["n"]
 			case "member.bearing", "plate.bearing":
@@ -499,6 +555,18 @@ func TestFormulasOnThePageGiveTheNominalStrength(t *testing.T) {
 					want += float64(b.Rn)
 				}
 			case "bolts.group":
+				// rn,shear is the shear check's Fnv·Ab·ns·ff for one bolt.
+				vs := map[string]float64{}
+				for _, val := range byID["bolts.shear"].Values {
+					vs[val.Name] = val.V
+				}
+				ff := fillerFactor(t, c, vs)
+				if v["filler_factor"] != ff {
+					t.Errorf("%s: filler factor %g, bolts.shear's %g", x.ID, v["filler_factor"], ff)
+				}
+				if rn := vs["Fnv"] * vs["Ab"] * vs["planes"] * ff; math.Abs(rn-v["rn_shear"]) > 1e-9*rn {
+					t.Errorf("%s: rn,shear = Fnv·Ab·ns·ff gives %g, the check %g", x.ID, rn, v["rn_shear"])
+				}
 				mb, pb := byID["member.bearing"], byID["plate.bearing"]
 				for i := range c.Holes {
 					rn := min(v["rn_shear"], float64(mb.PerBolt[i].Rn))
@@ -514,6 +582,83 @@ func TestFormulasOnThePageGiveTheNominalStrength(t *testing.T) {
 			if got := float64(x.Nominal); math.Abs(got-want) > 1e-9*math.Abs(want) {
 				t.Errorf("%s %s: the formula gives %g, the check %g", filepath.Base(path), x.ID, want, got)
 			}
+			if x.ID == "bolts.shear" && v["filler_factor"] < 1 {
+				seen++
+			}
+		}
+	}
+	if seen < 2 {
+		t.Errorf("%d jobs reduce the bolt shear for fillers, want the two inline ones", seen)
+	}
+}
+
+// fillerFactor is the J5.2 factor the page prints, checked against the
+// filler thickness it prints: 1 − 0.4(t − 0.25) with t in inches (SI
+// 1 − 0.0154(t − 6), t in mm), not less than 0.85, 1 for 1/4 in (6 mm) or
+// less and for developed fillers (AISC 360-22 J5.2, hand formula).
+func fillerFactor(t *testing.T, c *engine.Connection, v map[string]float64) float64 {
+	t.Helper()
+	ff, ok := v["filler_factor"]
+	if !ok {
+		t.Errorf("no filler_factor in the values")
+		return 1
+	}
+	want := 1.0
+	switch tf := units.Length(v["filler_t"]); {
+	case c.Bolt.FillerDeveloped:
+	case c.Edition.System == units.SI && tf.Mm() > 6:
+		want = max(0.85, 1-0.0154*(tf.Mm()-6))
+	case c.Edition.System == units.US && tf.In() > 0.25:
+		want = max(0.85, 1-0.4*(tf.In()-0.25))
+	}
+	if math.Abs(ff-want) > 1e-12 {
+		t.Errorf("filler factor %g, J5.2 gives %g for t = %g mm", ff, want, v["filler_t"])
+	}
+	return ff
+}
+
+// Where the fillers reduce the bolts' shear strength, the page says so:
+// the J5.2 formula, the factor worked from the thickness and the factor in
+// the product, in both bolt sections. Where they do not, it says nothing
+// of fillers beyond what the job gave.
+func TestFillerFactorOnThePage(t *testing.T) {
+	tests := []struct {
+		job   string
+		steps []string // in the bolts.shear section
+		src   string
+	}{
+		{"inline:filler-bearing.yaml", []string{"1 − 0.4(t − 0.25)", "1 − 0.4(0.5 − 0.25) = 0.900", "(0.900)"},
+			"hand calculation per AISC 360-22 J5.2(a): 0.90"},
+		{"inline:si-filler-slip.yaml", []string{"1 − 0.0154(t − 6)", "1 − 0.0154(20 − 6) = 0.784", "0.85", "(0.850)"},
+			"hand calculation per AISC 360-16 J5.2(a) (S.I.), not less than 0.85"},
+	}
+	for _, tt := range tests {
+		r := check(t, tt.job)
+		doc, _ := render(t, r)
+		for _, id := range []string{"bolts.shear", "bolts.group"} {
+			s := find(doc, func(n *html.Node) bool { v, _ := attr(n, "data-id"); return n.Data == "section" && v == id })
+			if len(s) != 1 {
+				t.Fatalf("%s: no %s section", tt.job, id)
+			}
+			st := text(s[0])
+			if !strings.Contains(st, "J5.2") {
+				t.Errorf("%s %s: the section does not name J5.2", tt.job, id)
+			}
+			if id != "bolts.shear" {
+				continue
+			}
+			for _, w := range tt.steps {
+				if !strings.Contains(st, w) {
+					t.Errorf("%s %s: the section does not say %q (%s)\n%s", tt.job, id, w, tt.src, st)
+				}
+			}
+		}
+	}
+	r := check(t, "../../testdata/examples/aisc-d2.yaml")
+	doc, _ := render(t, r)
+	for _, n := range find(doc, func(n *html.Node) bool { v, _ := attr(n, "data-id"); return n.Data == "section" && v == "bolts.shear" }) {
+		if st := text(n); strings.Contains(st, "J5.2") || strings.Contains(st, "0.4(t") {
+			t.Errorf("a job without fillers shows the filler factor:\n%s", st)
 		}
 	}
 }
