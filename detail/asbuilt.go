@@ -424,6 +424,7 @@ func (ab *AsBuilt) check() error {
 	d := ab.Design
 	built := *d
 	built.Conn.Holes = nil
+	built.Info.PositionTol = ab.Tolerance.Position // J1.7's limit: the tolerance reverify applies
 	if d.Conn.Plate != nil {
 		pl := *d.Conn.Plate // the plate as designed: its free edge and centre line stay
 		built.Conn.Plate = &pl

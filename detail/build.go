@@ -152,7 +152,9 @@ func (j *Job) buildMember(ed *rules.Edition, d *Design) error {
 	info := &d.Info
 	mem.Shape = m.Shape
 	mem.Pieces = 1
+	mem.Eccentricity = m.Eccentricity
 	info.Length = m.Length
+	info.PositionTol = j.positionTolerance()
 
 	switch m.Shape {
 	case engine.Flat:
@@ -224,6 +226,19 @@ func (j *Job) buildMember(ed *rules.Edition, d *Design) error {
 	info.Grade = st.Name
 	info.Weathering = st.Weathering
 	return nil
+}
+
+// positionTolerance is the job's tolerance.position, or where a job was
+// not read from a file the common-practice default, ±1/16 in (2 mm)
+// (common practice, no source; REFERENCE.md, fabrication).
+func (j *Job) positionTolerance() units.Length {
+	switch {
+	case j.Tolerance.Position > 0:
+		return j.Tolerance.Position
+	case j.Units == units.SI:
+		return 2 * units.Millimetre
+	}
+	return units.Inch / 16
 }
 
 // gap is the space between double angles: as given, else the plate's

@@ -452,6 +452,7 @@ func TestBuildBadJobs(t *testing.T) {
 		{"broken-yaml.yaml", "", -1},
 		{"comment-only.yaml", "", 0},
 		{"duplicate-key.yaml", "bolts.pitch", 15},
+		{"eccentricity-on-angle.yaml", "member.eccentricity", 8},
 		{"empty.yaml", "", 0},
 		{"explicit-duplicate.yaml", "holes[2]", 14},
 		{"explicit-off-member.yaml", "holes[2]", 14},

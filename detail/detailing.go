@@ -25,7 +25,7 @@ const maxSlenderness = 300
 // Detailing runs every detailing check of SPEC §5 on the connection and
 // returns every finding, passing or not, in a fixed order: hole.size,
 // hole.type, spacing.min, edge.min, edge.max, spacing.max, gage.workable,
-// slenderness. Within a check, findings follow hole types, edges and gage
+// eccentricity, slenderness. Within a check, findings follow hole types, edges and gage
 // lines in a fixed order, so the same connection always gives the same
 // list. A bolt diameter the edition does not tabulate gives a failing
 // finding naming the table, not an error.
@@ -41,6 +41,7 @@ func Detailing(c *engine.Connection, info MemberInfo) []Finding {
 	fs = append(fs, maxEdgeFindings(c)...)
 	fs = append(fs, maxSpacingFindings(c, info)...)
 	fs = append(fs, gageFindings(c, info)...)
+	fs = append(fs, eccentricityFindings(c, info)...)
 	fs = append(fs, slendernessFindings(c, info)...)
 	return fs
 }
@@ -525,6 +526,43 @@ func gageFindings(c *engine.Connection, info MemberInfo) []Finding {
 		lengthFinding(id, commonPractice, fillet, info.K, atLeast(fillet, info.K), name+" to fillet (k)"),
 		lengthFinding(id, commonPractice, leg, wrench, atLeast(leg, wrench), name+" to outstanding leg (wrench clearance)"),
 	}
+}
+
+// eccentricityFindings is eccentricity, J1.7 (flat bars only): the bolt
+// group's centre of gravity (the mean y of its holes; every bolt is the
+// same bolt and carries an equal share, so hole sizes do not weight it)
+// against the bar's gravity axis, y = width/2. The limit is the job's
+// hole position tolerance (tolerance.position, ±1/16 in or 2 mm by
+// default, common practice): the mean of holes each within it lies within
+// it too, so an as-built group is never failed for the shop's own
+// accuracy. Where the job provides for the eccentricity
+// (member.eccentricity: provided) the finding is advisory and the engine
+// checks the bar for Pr with Mr = Pr·e instead (member.combined, H1.2).
+//
+// J1.7 exempts single-angle, double-angle "and similar members": open
+// sections connected through one element, whose centroid the group
+// cannot reach (tees, channels by a leg or flange). A flat bar is
+// connected across its whole section and can always be centred, so it is
+// not one of them; angles get no finding.
+func eccentricityFindings(c *engine.Connection, info MemberInfo) []Finding {
+	const id = "eccentricity"
+	if c.Member.Shape != engine.Flat || len(c.Holes) == 0 {
+		return nil
+	}
+	e, _ := engine.GroupEccentricity(c)
+	limit := info.PositionTol
+	where := "bolt group's centre of gravity to the bar's centre line (y = width/2)"
+	provided := c.Member.Eccentricity == engine.EccentricityProvided
+	pass := atMost(e, limit)
+	switch {
+	case provided:
+		where += "; the eccentricity is provided for: member.combined checks the bar for Pr with Mr = Pr·e (" + c.Edition.Clause("H1.2") + ")"
+	case !pass:
+		where += "; centre the group, or provide for the eccentricity (member.eccentricity: provided)"
+	}
+	f := lengthFinding(id, c.Edition.Clause("J1.7"), e, limit, pass, where)
+	f.Advisory = provided
+	return []Finding{f}
 }
 
 // slendernessFindings is slenderness, the User Note to D1: L/r preferably

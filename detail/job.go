@@ -85,6 +85,9 @@ type MemberSpec struct {
 	// Gap is the plate between double angles; 0: the plate thickness, or
 	// 3/8 in (10 mm) without a plate.
 	Gap units.Length
+	// Eccentricity (flats only) says whether the design provides for a
+	// bolt group off the bar's centre line (J1.7); default not provided.
+	Eccentricity engine.EndEccentricity
 }
 
 // PlateSpec is the gusset or splice plate the member bolts to.
@@ -742,7 +745,7 @@ func (p *parser) parseLoad(n *yaml.Node) error {
 	return nil
 }
 
-var memberKeys = []string{"shape", "size", "legs", "thickness", "width", "grade", "fy", "fu", "length", "area", "xbar", "rmin", "gap"}
+var memberKeys = []string{"shape", "size", "legs", "thickness", "width", "grade", "fy", "fu", "length", "area", "xbar", "rmin", "gap", "eccentricity"}
 
 func parseShape(s string) (engine.Shape, error) {
 	for _, sh := range []engine.Shape{engine.Angle, engine.DoubleAngle, engine.Flat} {
@@ -751,6 +754,15 @@ func parseShape(s string) (engine.Shape, error) {
 		}
 	}
 	return engine.Angle, fmt.Errorf("unknown shape %q (want angle, double-angle or flat)", s)
+}
+
+func parseEccentricity(s string) (engine.EndEccentricity, error) {
+	for _, e := range []engine.EndEccentricity{engine.EccentricityNotProvided, engine.EccentricityProvided} {
+		if e.String() == s {
+			return e, nil
+		}
+	}
+	return engine.EccentricityNotProvided, fmt.Errorf("unknown eccentricity setting %q (want provided or not-provided)", s)
 }
 
 func (p *parser) parseMember(n *yaml.Node) error {
@@ -788,6 +800,15 @@ func (p *parser) parseMember(n *yaml.Node) error {
 		}
 	} else {
 		if err := p.parseAngleSection(b); err != nil {
+			return err
+		}
+	}
+	if v := b.vals["eccentricity"]; v != nil {
+		if m.Shape != engine.Flat {
+			return p.errAt(v, "member.eccentricity", "eccentricity is for flat bars",
+				"J1.7 does not require the bolt group of a single- or double-angle end to lie on the member's gravity axis; remove the key")
+		}
+		if m.Eccentricity, err = enum(p, v, "member.eccentricity", parseEccentricity); err != nil {
 			return err
 		}
 	}

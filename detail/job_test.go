@@ -432,6 +432,8 @@ func TestJobParseErrors(t *testing.T) {
 		{"single angle with gap", strings.Replace(minimalUS, "  grade: A36", "  grade: A36\n  gap: 3/8 in", 1), "member.gap", 8, "double angles", ""},
 		{"flat with size", "mark: A\nload: {required: 1 kip}\nmember:\n  shape: flat\n  size: L4x4x1/2\n  grade: A36\n", "member.size", 5, "flat bar", "width and thickness"},
 		{"flat with xbar", "mark: A\nload: {required: 1 kip}\nmember:\n  shape: flat\n  width: 6 in\n  thickness: 1/2 in\n  xbar: 1 in\n  grade: A36\n", "member.xbar", 7, "flat bar", ""},
+		{"eccentricity on an angle", strings.Replace(minimalUS, "  grade: A36", "  grade: A36\n  eccentricity: provided", 1), "member.eccentricity", 8, "flat bars", "J1.7"},
+		{"eccentricity unknown", "mark: A\nload: {required: 1 kip}\nmember:\n  shape: flat\n  width: 6 in\n  thickness: 1/2 in\n  eccentricity: maybe\n  grade: A36\n", "member.eccentricity", 7, "unknown eccentricity setting", ""},
 		{"flat without width", "mark: A\nload: {required: 1 kip}\nmember:\n  shape: flat\n  thickness: 1/2 in\n  grade: A36\n", "member.width", 3, "is required", ""},
 		{"grade missing", strings.Replace(minimalUS, "  grade: A36\n", "", 1), "member.grade", 4, "is required", ""},
 		{"grade and fy", strings.Replace(minimalUS, "  grade: A36", "  grade: A36\n  fy: 36 ksi", 1), "member.fy", 8, "not both", ""},

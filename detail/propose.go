@@ -49,14 +49,24 @@ import (
 //     rules out every smaller one, one passing layout admits every larger
 //     one, and the shortest passing layouts lie on its staircase.
 //   - Gage: where the gage lines sit across the member matters only to
-//     member block shear (its blocks reach the toe or the bar's edges)
-//     and to the gage and member-edge rules; the plate is centred on the
-//     bolt group and every other check sees distances between holes. So a
-//     pitch, end and edge that fail on another check fail at every gage,
-//     and the other checks' ratios bound the ratio at every gage from
-//     below. On angles moving the lines toward the toe only shrinks the
-//     toe block's tension area and the gage rules pass on an interval, so
-//     the smallest gage that passes them dominates every larger one.
+//     member block shear (its blocks reach the toe or the bar's edges),
+//     to a flat's eccentricity (J1.7: the eccentricity rule and
+//     member.combined) and to the gage and member-edge rules; the plate
+//     is centred on the bolt group and every other check sees distances
+//     between holes. So a pitch, end and edge that fail on another check
+//     fail at every gage, and the other checks' ratios bound the ratio at
+//     every gage from below. On angles moving the lines toward the toe
+//     only shrinks the toe block's tension area and the gage rules pass
+//     on an interval, so the smallest gage that passes them dominates
+//     every larger one.
+//
+// Flats are not searched across: J1.7 wants the bolt group on the bar's
+// centre line, so the first gage line is derived, (width − (lines − 1)·
+// gage2)/2, on the grid or off it; when the job fixes the gage (and not
+// gage2) of a flat with several lines, gage2 is derived instead,
+// (width − 2·gage)/(lines − 1). What the job fixes is held: a fixed gage
+// that cannot be centred stays, and the eccentricity rule then fails
+// (or, provided for, member.combined checks it).
 //
 // Ratios are compared to 6 decimals (closer ones are a tie, settled by
 // the tie-breaks), so that rounding in sums of grid values never decides.
@@ -539,17 +549,26 @@ func (p *problem) ranges(g *group) {
 	default:
 		g.edge = p.grid(p.gridUp(p.minEdgeTo(g, false)), min(p.gridDown(ed.MaxEdge(c.Plate.T)), four))
 	}
+	lo2 := ed.MinSpacing(g.d)
+	if ed.ClearSpacingRule() {
+		lo2 = max(lo2, g.d+g.dy)
+	}
 	switch {
 	case g.lines == 1:
 		g.gage2 = []units.Length{0}
 	case j.Given("bolts.gage2"):
 		g.gage2 = []units.Length{j.Bolts.Gage2}
-	default:
-		lo := ed.MinSpacing(g.d)
-		if ed.ClearSpacingRule() {
-			lo = max(lo, g.d+g.dy)
+	case m.Shape == engine.Flat && j.Given("bolts.gage"):
+		// J1.7: the fixed first line and the last one equally far from
+		// the bar's edges; unless that is closer than the spacing rule,
+		// when the lines are searched and the group left off-centre.
+		if g2 := p.snap((m.Width - 2*j.Bolts.Gage) / units.Length(g.lines-1)); g2 >= lo2-eps {
+			g.gage2 = []units.Length{g2}
+		} else {
+			g.gage2 = p.grid(p.gridUp(lo2), four)
 		}
-		g.gage2 = p.grid(p.gridUp(lo), four)
+	default:
+		g.gage2 = p.grid(p.gridUp(lo2), four)
 	}
 	if g.lines > 1 {
 		g.stag = j.Bolts.Stagger
@@ -560,10 +579,11 @@ func (p *problem) ranges(g *group) {
 	}
 }
 
-// gagesFor lists the first gage line's positions for gage2 index i: from
-// the smallest on-grid value that passes the gage and edge rules (angles:
-// clear of the fillet, wrench clearance, toe within 12t; flats: edge
-// distance) to the largest that keeps the toe or far edge distance.
+// gagesFor lists the first gage line's positions for gage2 index i. On
+// angles: from the smallest on-grid value that passes the gage and edge
+// rules (clear of the fillet, wrench clearance, toe within 12t) to the
+// largest that keeps the toe distance. On flats: the one position that
+// centres the group on the bar (J1.7), if the edge distances allow it.
 func (p *problem) gagesFor(g *group, i int) []units.Length {
 	if gs, ok := g.gages[i]; ok {
 		return gs
@@ -577,14 +597,18 @@ func (p *problem) gagesFor(g *group, i int) []units.Length {
 		span := units.Length(g.lines-1) * g.gage2[i]
 		side := p.minEdgeTo(g, true)
 		maxEdge := p.ed.MaxEdge(m.T)
-		var lo, hi units.Length
 		if m.Shape == engine.Flat {
-			lo = max(side, g.dy/2, m.Width-span-maxEdge)
-			hi = min(maxEdge, m.Width-span-side)
-		} else {
-			lo = max(g.tmpl.Info.K+g.dy/2, m.T+wrenchClearance(g.d, p.ed.System), g.dy/2, m.Width-span-maxEdge)
-			hi = m.Width - span - side
+			// J1.7: the group centred on the bar, where the edge rules
+			// let it be.
+			lo := max(side, g.dy/2, m.Width-span-maxEdge)
+			hi := min(maxEdge, m.Width-span-side)
+			if g1 := p.snap((m.Width - span) / 2); g1 >= lo-eps && g1 <= hi+eps {
+				gs = []units.Length{g1}
+			}
+			break
 		}
+		lo := max(g.tmpl.Info.K+g.dy/2, m.T+wrenchClearance(g.d, p.ed.System), g.dy/2, m.Width-span-maxEdge)
+		hi := m.Width - span - side
 		gs = p.grid(p.gridUp(lo), p.gridDown(hi))
 	}
 	g.gages[i] = gs
@@ -1068,7 +1092,7 @@ func (s *searcher) lowRatioOf(g2i, i, j, k int) int64 {
 func (s *searcher) noteRatio(g2i, i, j, k int, r *Report) {
 	low := 0.0
 	for _, x := range r.Results {
-		if x.ID != "member.block-shear" {
+		if !gageDependent(x.ID) {
 			low = max(low, x.Ratio)
 		}
 	}
@@ -1264,8 +1288,8 @@ func (s *searcher) sub(g *group, g2i int, g1 units.Length, ia, ib int) (tried, g
 // failsAtEveryGage reports whether a failing report fails only checks
 // that do not depend on where the gage lines sit across the member, so
 // that the same pitch, end and edge fail at every gage: everything but
-// member block shear (its blocks reach the member's edges), the gage
-// rules and the edge distances to the member's toe or sides. Plate
+// the gage-dependent limit states (gageDependent), the gage and
+// eccentricity rules and the edge distances to the member's toe or sides. Plate
 // checks see the plate centred on the bolt group; net sections, Whitmore
 // sections, bearing and spacing see only distances between holes.
 func failsAtEveryGage(r *Report) bool {
@@ -1274,7 +1298,7 @@ func failsAtEveryGage(r *Report) bool {
 		if x.Pass {
 			continue
 		}
-		if x.ID == "member.block-shear" {
+		if gageDependent(x.ID) {
 			return false
 		}
 		failing = true
@@ -1291,10 +1315,18 @@ func failsAtEveryGage(r *Report) bool {
 	return failing
 }
 
+// gageDependent: a limit state whose ratio depends on where the gage
+// lines sit across the member: member block shear (its blocks reach the
+// member's edges) and a flat's combined check (its moment arm is the
+// group's offset from the bar's centre line).
+func gageDependent(id string) bool {
+	return id == "member.block-shear" || id == "member.combined"
+}
+
 // isGageFinding: a detailing finding that depends on where the gage
 // lines sit across the member.
 func isGageFinding(f Finding) bool {
-	return f.ID == "gage.workable" || (f.ID == "edge.min" || f.ID == "edge.max") &&
+	return f.ID == "gage.workable" || f.ID == "eccentricity" || (f.ID == "edge.min" || f.ID == "edge.max") &&
 		(strings.HasSuffix(f.Where, "member toe") || strings.Contains(f.Where, "member edge (y"))
 }
 
@@ -1517,6 +1549,8 @@ func findingLift(id string) string {
 		return "use a smaller bolt or a member with a longer connected leg"
 	case "edge.max", "spacing.max":
 		return "use thicker parts or a smaller step"
+	case "eccentricity":
+		return "let propose centre the group on the bar (leave bolts.gage and gage2 free), or provide for the eccentricity (member.eccentricity: provided)"
 	}
 	return "change the bolt size or the member"
 }

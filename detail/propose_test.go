@@ -4,6 +4,7 @@ import (
 	"errors"
 	"flag"
 	"fmt"
+	"math"
 	"os"
 	"path/filepath"
 	"reflect"
@@ -15,6 +16,7 @@ import (
 	"pgregory.net/rapid"
 
 	"gaugeline/detail/section"
+	"gaugeline/engine"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
 )
@@ -40,6 +42,12 @@ func atLeastChecks(t *testing.T, n int) {
 // step, one or two diameters and grades, at most two lines of four.
 // Sizes and loads are invented test data.
 func drawProposeJob(t *rapid.T) string {
+	return drawProposeJobOf(t, []string{"angle", "double-angle", "flat"}, true)
+}
+
+// drawProposeJobOf draws a propose job of one of the shapes; fixGage lets
+// it fix bolts.gage.
+func drawProposeJobOf(t *rapid.T, shapes []string, fixGage bool) string {
 	us := rapid.Bool().Draw(t, "us")
 	sys := units.SI
 	if us {
@@ -51,7 +59,7 @@ func drawProposeJob(t *rapid.T) string {
 	w("units: %s", sys)
 	w("standard: %s", rapid.SampledFrom(rules.Names()).Draw(t, "standard"))
 	w("method: %s", rapid.SampledFrom([]string{"lrfd", "asd"}).Draw(t, "method"))
-	shape := rapid.SampledFrom([]string{"angle", "double-angle", "flat"}).Draw(t, "shape")
+	shape := rapid.SampledFrom(shapes).Draw(t, "shape")
 	in := func(v float64) string { // a length in the job's units
 		if us {
 			return units.FormatJob(units.Length(v)*units.Inch, sys)
@@ -80,6 +88,9 @@ func drawProposeJob(t *rapid.T) string {
 		} else {
 			w("  width: %s", in(float64(rapid.IntRange(10, 20).Draw(t, "width10")*10)))
 			w("  thickness: %s", in(float64(rapid.IntRange(6, 20).Draw(t, "tmm"))))
+		}
+		if rapid.IntRange(0, 3).Draw(t, "eccProvided") == 0 {
+			w("  eccentricity: provided")
 		}
 	} else {
 		var sizes []string
@@ -169,7 +180,7 @@ func drawProposeJob(t *rapid.T) string {
 	if rapid.IntRange(0, 5).Draw(t, "fixEnd") == 0 {
 		w("  end: %s", in(map[bool]float64{true: 1.5, false: 40}[us]))
 	}
-	if rapid.IntRange(0, 4).Draw(t, "fixGage") == 0 {
+	if fixGage && rapid.IntRange(0, 4).Draw(t, "fixGage") == 0 {
 		w("  gage: %s", in(map[bool]float64{true: 2, false: 50}[us]))
 	}
 	diams := []string{"5/8 in", "3/4 in", "7/8 in"}
@@ -461,4 +472,157 @@ func TestProposeOddStep(t *testing.T) {
 			t.Errorf("step %s: %d bolts, want 6", step, p.Layout.Bolts())
 		}
 	}
+}
+
+// centroidOffset is the bolt group's offset from a flat's centre line.
+func centroidOffset(r *Report) units.Length {
+	e, _ := engine.GroupEccentricity(&r.Design.Conn)
+	return e
+}
+
+// TestProposeCentresFlats: propose puts a flat's bolt group on the bar's
+// centre line (J1.7). Before issue 10 it placed the first line at the
+// smallest edge distance: us-flat-shear came out at gage 2 in on an 8-in
+// bar, the group 2 in off centre. By hand: one line on PL 8 is centred at
+// gage 8/2 = 4 in; on PL 200 at 100 mm; on PL 10 at 5 in; FT-05 fixes the
+// gage at 2 in with two lines, so gage2 = 8 − 2·2 = 4 in.
+func TestProposeCentresFlats(t *testing.T) {
+	cases := []struct {
+		file        string
+		gage, gage2 units.Length
+	}{
+		{"us-flat-shear.yaml", 4 * units.Inch, 0},
+		{"si-flat-shear.yaml", 100, 0},
+		{"us-long-joint.yaml", 5 * units.Inch, 0},
+		{"us-staggered-flat.yaml", 2 * units.Inch, 4 * units.Inch},
+		{"us-flat-bearing.yaml", 4 * units.Inch, 0},
+	}
+	for _, c := range cases {
+		t.Run(c.file, func(t *testing.T) {
+			p := proposeFile(t, c.file, false)
+			if !p.Found() {
+				t.Fatalf("no layout: %s", p.Summary)
+			}
+			if e := centroidOffset(p.Report); e > 1e-6 {
+				t.Errorf("group %v mm off the centre line (%s)", float64(e), p.Layout.Describe(p.Job.Units))
+			}
+			if math.Abs(float64(p.Layout.Gage-c.gage)) > 1e-9 || math.Abs(float64(p.Layout.Gage2-c.gage2)) > 1e-9 {
+				t.Errorf("gage %v, gage2 %v mm; want %v, %v (hand calculation)", float64(p.Layout.Gage), float64(p.Layout.Gage2), float64(c.gage), float64(c.gage2))
+			}
+			if f, ok := findingOf(p.Report, "eccentricity"); !ok || !f.Pass {
+				t.Errorf("eccentricity finding %+v", f)
+			}
+		})
+	}
+}
+
+// A gage the job fixes off the centre line is held: nothing passes J1.7,
+// and the diagnosis says so; provided for, the layout is found off-centre
+// and checked for the combined force (member.combined).
+func TestProposeHoldsAFixedOffCentreGage(t *testing.T) {
+	src, err := os.ReadFile(filepath.Join("..", "testdata", "propose", "us-flat-shear.yaml"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	fixed := strings.Replace(string(src), "  joint: bearing\n", "  joint: bearing\n  gage: 2 in\n", 1)
+	job, err := ParseJob("fixed.yaml", []byte(fixed))
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, mode := range []SearchMode{Pruned, Exhaustive} {
+		p, err := Propose(job, ProposeOptions{Mode: mode})
+		if err != nil {
+			t.Fatal(err)
+		}
+		if p.Found() || len(p.Blockers) == 0 || !slices.ContainsFunc(p.Blockers, func(b Blocker) bool { return b.ID == "eccentricity" }) {
+			t.Fatalf("mode %v: found %v, blockers %+v; want J1.7 blocking every candidate", mode, p.Found(), p.Blockers)
+		}
+	}
+	provided := strings.Replace(fixed, "  grade: A572-50\nplate:", "  grade: A572-50\n  eccentricity: provided\nplate:", 1)
+	job, err = ParseJob("provided.yaml", []byte(provided))
+	if err != nil {
+		t.Fatal(err)
+	}
+	fast, err := Propose(job, ProposeOptions{Mode: Pruned, Alternatives: 2})
+	if err != nil {
+		t.Fatal(err)
+	}
+	ex, err := Propose(job, ProposeOptions{Mode: Exhaustive, Alternatives: 2})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !fast.Found() || !reflect.DeepEqual(fast.Layout, ex.Layout) || !reflect.DeepEqual(fast.Alternatives, ex.Alternatives) {
+		t.Fatalf("provided: found %v; pruned %s, exhaustive %s", fast.Found(), fast.Layout.Describe(job.Units), ex.Layout.Describe(job.Units))
+	}
+	if fast.Layout.Gage != 2*units.Inch {
+		t.Errorf("gage %v mm, want the job's 2 in", float64(fast.Layout.Gage))
+	}
+	// By hand (AISC 360-22 D2, F11.1, H1.2): PL 8x3/4 A572-50, one line
+	// of 3/4-in bolts 2 in off the 4-in centre line, Pu = 100 kips.
+	// Pc = min(0.9·50·6 = 270, 0.75·65·(6 − (7/8)(3/4)) = 260.51) = 260.51;
+	// Mr = 100·2 = 200 kip-in; Mc = 0.9·50·(0.75·8²/4) = 540 kip-in;
+	// H1-1a: 100/260.51 + (8/9)(200/540) = 0.383866 + 0.329218 = 0.713084.
+	x, ok := resultOf(fast.Report, "member.combined")
+	if !ok || !x.Pass || math.Abs(x.Ratio-0.713084) > 1e-4 {
+		t.Errorf("member.combined %+v in the chosen layout, want ratio 0.713084 (hand calculation)", x)
+	}
+	if e := centroidOffset(fast.Report); math.Abs(e.In()-2) > 1e-9 {
+		t.Errorf("offset %v in, want 2 in (gage 2 in on an 8-in bar)", e.In())
+	}
+}
+
+// Property: every layout propose gives a flat whose job leaves the gage
+// free has its group on the bar's centre line (within 1e-6 mm) and passes
+// check, eccentricity provided for or not.
+func TestPropertyProposedFlatsAreCentred(t *testing.T) {
+	if testing.Short() {
+		t.Skip("runs propose on generated jobs")
+	}
+	found, runs := 0, 0
+	rapid.Check(t, func(rt *rapid.T) {
+		runs++
+		src := drawProposeJobOf(rt, []string{"flat"}, false)
+		job, err := ParseJob("gen.yaml", []byte(src))
+		if err != nil {
+			rt.Fatalf("generated job does not parse: %v\n%s", err, src)
+		}
+		p, err := Propose(job, ProposeOptions{})
+		if err != nil {
+			var ie *InputError
+			if !errors.As(err, &ie) {
+				rt.Fatalf("not an input error: %v", err)
+			}
+			return
+		}
+		if !p.Found() {
+			return
+		}
+		found++
+		if e := centroidOffset(p.Report); e > 1e-6 {
+			rt.Fatalf("group %v mm off centre: %s\n%s", float64(e), p.Layout.Describe(job.Units), src)
+		}
+		lj, err := ParseJob("written.yaml", p.LayoutJob)
+		if err != nil {
+			rt.Fatal(err)
+		}
+		r, err := Check(mustBuildRapid(rt, lj))
+		if err != nil || !r.Pass {
+			rt.Fatalf("the written layout does not pass check (%v)\n%s", err, p.LayoutJob)
+		}
+		if e := centroidOffset(r); e > 1e-6 {
+			rt.Fatalf("written layout %v mm off centre\n%s", float64(e), p.LayoutJob)
+		}
+	})
+	if found < runs/4 {
+		t.Errorf("only %d of %d generated flats got a layout: the property says little", found, runs)
+	}
+	t.Logf("%d of %d generated flats got a layout", found, runs)
+}
+
+func mustBuildRapid(rt *rapid.T, j *Job) *Design {
+	d, err := j.Build()
+	if err != nil {
+		rt.Fatal(err)
+	}
+	return d
 }

@@ -99,6 +99,15 @@ func cautions(d *Design) []string {
 	if d.Conn.Member.Shape != engine.Flat {
 		c = append(c, "Shear lag: U is the largest of Table D3.1 case 2, case 8 and the D3 bound for open sections.")
 	}
+	if d.Conn.Member.Shape == engine.Flat && d.Conn.Member.Eccentricity == engine.EccentricityProvided {
+		ed := d.Conn.Edition
+		c = append(c, "Eccentric bolt group ("+ed.Clause("J1.7")+", provided for): member.combined checks the bar by "+ed.Clause("H1.2")+
+			" for Pr with Mr = Pr·e, e the offset of the group's centre of gravity from the bar's centre line; "+
+			"Pc is the lesser of D2 yielding and rupture, Mc = φb·Mp (or Mp/Ωb) of F11 on the gross bar bent in its plane, "+
+			"with no lateral-torsional buckling in the connection, where the bolts and the plate brace the bar (Lb = 0); "+
+			"the ratio is Pr over the largest force Eqs. H1-1a and H1-1b allow at that e. "+
+			"Bending of the member beyond the connection is the member's design.")
+	}
 	return c
 }
 

@@ -38,6 +38,10 @@ type MemberInfo struct {
 	Weathering  bool         // unpainted weathering steel (A588)
 	Grade       string       // member steel grade name
 	PlateGrade  string       // plate steel grade name
+	// PositionTol is the fabrication tolerance on a hole's position (the
+	// job's tolerance.position): how far a flat's bolt group may sit off
+	// the bar's centre line before J1.7's finding fails.
+	PositionTol units.Length
 }
 
 // Design is a job resolved into the engine's model: ready to check.

@@ -3,13 +3,18 @@ package engine
 import "gaugeline/rules"
 
 // Check computes every limit state of the connection, in a stable order:
-// the member's, the plate's (when there is one), then the bolts'. A
+// the member's (member.combined last, for a flat bar whose eccentric bolt
+// group is provided for), the plate's (when there is one), then the
+// bolts'. A
 // failing limit state is a result; the error reports a lookup the edition
 // cannot answer (e.g. the pretension of a bolt grade that has none).
 func Check(c *Connection) ([]Result, error) {
 	out := []Result{MemberYield(c), MemberRupture(c), MemberBlockShear(c)}
 	mb := MemberBearing(c)
 	out = append(out, mb)
+	if needsCombined(c) {
+		out = append(out, MemberCombined(c))
+	}
 	var plateShares []BoltShare
 	if c.Plate != nil {
 		pb := PlateBearing(c)

@@ -37,6 +37,10 @@ type Member struct {
 	// Pieces is 2 for a double angle, otherwise 1.
 	Pieces int
 	Fy, Fu units.Stress
+	// Eccentricity says whether the design provides for a flat bar's bolt
+	// group lying off the bar's centre line (J1.7); when it does, Check
+	// adds member.combined.
+	Eccentricity EndEccentricity
 }
 
 // PlateKind is the role of the connecting plate.

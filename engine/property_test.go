@@ -26,6 +26,7 @@ type genParams struct {
 	hole                       rules.HoleType
 	slot                       rules.SlotDir
 	slip                       bool
+	ecc                        bool // flats: eccentricity provided for (member.combined)
 }
 
 func drawParams(t *rapid.T) genParams {
@@ -41,6 +42,7 @@ func drawParams(t *rapid.T) genParams {
 		hole:    rules.HoleType(rapid.IntRange(0, 3).Draw(t, "hole")),
 		slot:    rules.SlotDir(rapid.IntRange(0, 1).Draw(t, "slot")),
 		slip:    rapid.Bool().Draw(t, "slip"),
+		ecc:     rapid.Bool().Draw(t, "ecc"),
 	}
 	p.pitch = float64(rapid.IntRange(8, 20).Draw(t, "pitch8")) / 4 // 2 … 5 in: 5 pitches + stagger + growth stay under 38 in
 	p.end = float64(rapid.IntRange(4, 12).Draw(t, "end8")) / 4     // 1 … 3 in
@@ -86,6 +88,9 @@ func (p genParams) build(tb testing.TB) *Connection {
 	switch p.shape {
 	case Flat:
 		m.Ag = width.Mul(m.T)
+		if p.ecc {
+			m.Eccentricity = EccentricityProvided
+		}
 	default:
 		m.Outstanding = in(4)
 		m.Ag = (width + in(4) - m.T).Mul(m.T)

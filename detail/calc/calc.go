@@ -54,7 +54,7 @@ type fmtr struct{ sys units.System }
 
 // unitLabel is the printed unit of a dimension, with superscripts.
 func (f fmtr) unitLabel(d units.Dim) string {
-	return strings.ReplaceAll(f.sys.Label(d), "2", "²")
+	return strings.NewReplacer("2", "²", "3", "³").Replace(f.sys.Label(d))
 }
 
 // places is how many decimals a value of dimension d is printed with.
@@ -72,6 +72,16 @@ func (f fmtr) places(d units.Dim) int {
 		return 0
 	case units.DimForce, units.DimStress:
 		return 1
+	case units.DimMoment:
+		if f.sys == units.US {
+			return 2
+		}
+		return 3
+	case units.DimModulus:
+		if f.sys == units.US {
+			return 3
+		}
+		return 0
 	}
 	return 3
 }
@@ -462,6 +472,31 @@ var meaning = map[string]string{
 	"rn_shear":             "shear strength of one bolt, Fnv·Ab·ns (× ff with fillers)",
 	"filler_factor":        "filler factor ff of J5.2(a) on the bolts' shear strength (1 when none)",
 	"filler_t":             "total thickness of the fillers at a shear plane (0 when none given)",
+	"member.combined:d":    "depth of the bar in the plane of bending (its width)",
+	"member.combined:t":    "thickness of the bar",
+	"Pr":                   "required axial strength (the demand)",
+	"Pc":                   "available tensile strength, the lesser of yielding and rupture (D2)",
+	"Pc_yield":             "available strength in tensile yielding, D2(a)",
+	"Pc_rupture":           "available strength in tensile rupture, D2(b)",
+	"Pn":                   "nominal tensile strength, min(Fy·Ag, Fu·Ae)",
+	"e":                    "offset of the bolt group's centre of gravity from the bar's centre line",
+	"ybar":                 "the bolt group's centre of gravity, from the edge y = 0",
+	"Z":                    "plastic section modulus of the bar, t·d²/4",
+	"S":                    "elastic section modulus of the bar, t·d²/6",
+	"Mp_cap":               "k of F11.1: Mp ≤ k·Fy·Sx",
+	"Mp":                   "plastic moment, F11.1",
+	"Lb":                   "unbraced length within the connection",
+	"LTB_lambda":           "Lb·d/t² of F11.2",
+	"LTB_limit":            "0.08E/Fy: below it F11.2(a), no lateral-torsional buckling",
+	"Mn":                   "nominal flexural strength, F11",
+	"Mc":                   "available flexural strength",
+	"Mr":                   "required flexural strength, Pr·e",
+	"Pr_Pc":                "axial term",
+	"Mr_Mc":                "flexural term",
+	"H1_1a":                "Eq. H1-1a, Pr/Pc + (8/9)·Mr/Mc",
+	"H1_1b":                "Eq. H1-1b, Pr/(2Pc) + Mr/Mc",
+	"H1_eq":                "equation H1.2 selects: 1 for H1-1a (Pr/Pc ≥ 0.2), 2 for H1-1b",
+	"H1_value":             "value of the selected equation",
 }
 
 // symbols are printed names of values whose names are spelled out.
@@ -472,6 +507,9 @@ var symbols = map[string]string{
 	"Whitmore_spread": "spread", "long_joint_factor": "long-joint factor",
 	"pattern_length": "pattern length", "splice_cap_applied": "cap applied",
 	"deduction": "Σdh − Σs²/4g", "filler_factor": "ff", "filler_t": "t (fillers)",
+	"Pc_yield": "Pc,yield", "Pc_rupture": "Pc,rupture", "ybar": "ȳ", "Mp_cap": "k",
+	"LTB_lambda": "Lb·d/t²", "LTB_limit": "0.08E/Fy", "Pr_Pc": "Pr/Pc", "Mr_Mc": "Mr/Mc",
+	"H1_1a": "H1-1a", "H1_1b": "H1-1b", "H1_eq": "equation", "H1_value": "H1 value",
 }
 
 // fillerFormula is J5.2(a) as the edition prints it for the job's system.
@@ -740,6 +778,10 @@ func limit(d *detail.Design, f fmtr, x engine.Result, byID map[string]engine.Res
 			ls.PerBoltTitle = "Bolt by bolt"
 		}
 
+	case "member.combined":
+		combinedSection(c, f, x, v, &ls)
+		return ls
+
 	default:
 		ls.Title = x.ID
 		ls.Steps = []string{"this report has no formula on file for " + x.ID + ": the values it used are listed below"}
@@ -769,8 +811,98 @@ func limit(d *detail.Design, f fmtr, x engine.Result, byID map[string]engine.Res
 	}
 	ls.Result = append(ls.Result, row{"Result", verdict}, row{"Clause", "AISC " + strings.TrimPrefix(c.Edition.Name, "aisc") + " " + x.Clause})
 
-	ls.Values.Head = []string{"symbol", "value", "what it is"}
-	noFiller := v.raw("filler_factor") == 1 && v.raw("filler_t") == 0
+	ls.Values = valuesTable(c, f, x)
+	return ls
+}
+
+// combinedSection fills the section of member.combined: the bar under its
+// tension and the moment of an eccentric bolt group, H1.2 with F11 and D2.
+// Its result is an interaction, not a strength with one φ, so it prints
+// its own result rows.
+func combinedSection(c *engine.Connection, f fmtr, x engine.Result, v vals, ls *limitSection) {
+	lrfd := c.Method == rules.LRFD
+	fb := c.Edition.FlexureFactor()
+	ls.Title = "Tension with the moment of the eccentric bolt group (flat bar)"
+	mc := fmt.Sprintf("Mc = φb·Mn, φb = %.2f", fb.Phi)
+	pc := "Pc = min(φt·Fy·Ag, φt·Fu·Ae)"
+	ru, rc := "Ru", "φRn"
+	if !lrfd {
+		mc = fmt.Sprintf("Mc = Mn/Ωb, Ωb = %.2f", fb.Omega)
+		pc = "Pc = min(Fy·Ag/Ωt, Fu·Ae/Ωt)"
+		ru, rc = "Ra", "Rn/Ω"
+	}
+	ls.Formula = []string{
+		"Mr = Pr·e, e = |ȳ − d/2|",
+		pc,
+		"Mn = Mp = Fy·Z ≤ k·Fy·Sx, Z = t·d²/4, Sx = t·d²/6",
+		mc,
+		"Eq. H1-1a, Pr/Pc ≥ 0.2: Pr/Pc + (8/9)·Mr/Mc ≤ 1.0",
+		"Eq. H1-1b, Pr/Pc < 0.2: Pr/(2Pc) + Mr/Mc ≤ 1.0",
+		"ratio = max(H1-1a, H1-1b) = Pr / (largest force allowed at e)",
+	}
+	ls.Where = "ȳ is the mean y of the holes (every bolt the same, each an equal share); d the bar's width, the depth in the plane of bending; " +
+		"the two equations bound one region, so the larger passes exactly when the one H1.2 selects does, and Pr over it is the force the interaction allows; " +
+		"within the connection the bolts and the plate brace the bar, Lb = 0, F11.2(a): no lateral-torsional buckling"
+	eq := "H1-1a (Pr/Pc ≥ 0.2)"
+	if v.raw("H1_eq") == 2 {
+		eq = "H1-1b (Pr/Pc < 0.2)"
+	}
+	pr, mr := v.raw("Pr_Pc"), v.raw("Mr_Mc")
+	ls.Steps = []string{
+		fmt.Sprintf("e = |%s − %s/2| = %s", v.q("ybar"), v.q("d"), v.q("e")),
+		fmt.Sprintf("Mr = (%s)(%s) = %s", v.q("Pr"), v.q("e"), v.q("Mr")),
+		fmt.Sprintf("Pc = min(%s, %s) = %s", v.q("Pc_yield"), v.q("Pc_rupture"), v.q("Pc")),
+		fmt.Sprintf("Z = (%s)(%s)²/4 = %s; Sx = (%s)(%s)²/6 = %s", v.q("t"), v.q("d"), v.q("Z"), v.q("t"), v.q("d"), v.q("S")),
+		fmt.Sprintf("Mp = min((%s)(%s), %.1f(%s)(%s)) = %s", v.q("Fy"), v.q("Z"), v.raw("Mp_cap"), v.q("Fy"), v.q("S"), v.q("Mp")),
+	}
+	if v.raw("LTB_lambda") <= v.raw("LTB_limit") {
+		ls.Steps = append(ls.Steps, fmt.Sprintf("Lb = %s: Lb·d/t² = %.1f ≤ 0.08E/Fy = %.1f, F11.2(a): Mn = Mp = %s",
+			v.q("Lb"), v.raw("LTB_lambda"), v.raw("LTB_limit"), v.q("Mn")))
+	} else {
+		ls.Steps = append(ls.Steps, fmt.Sprintf("Lb = %s: Lb·d/t² = %.1f > 0.08E/Fy = %.1f, F11.2: Mn = %s",
+			v.q("Lb"), v.raw("LTB_lambda"), v.raw("LTB_limit"), v.q("Mn")))
+	}
+	if lrfd {
+		ls.Steps = append(ls.Steps, fmt.Sprintf("Mc = (%.2f)(%s) = %s", fb.Phi, v.q("Mn"), v.q("Mc")))
+	} else {
+		ls.Steps = append(ls.Steps, fmt.Sprintf("Mc = %s / %.2f = %s", v.q("Mn"), fb.Omega, v.q("Mc")))
+	}
+	ls.Steps = append(ls.Steps,
+		fmt.Sprintf("Pr/Pc = %s / %s = %.3f; Mr/Mc = %s / %s = %.3f", v.q("Pr"), v.q("Pc"), pr, v.q("Mr"), v.q("Mc"), mr),
+		fmt.Sprintf("H1-1a: %.3f + (8/9)(%.3f) = %.3f", pr, mr, v.raw("H1_1a")),
+		fmt.Sprintf("H1-1b: %.3f/2 + %.3f = %.3f", pr, mr, v.raw("H1_1b")),
+		fmt.Sprintf("H1.2 selects Eq. %s: %.3f", eq, v.raw("H1_value")),
+		fmt.Sprintf("ratio = max(%.3f, %.3f) = %s", v.raw("H1_1a"), v.raw("H1_1b"), ratioText(x.Ratio)),
+	)
+	verdict := "passes: ratio ≤ 1.0"
+	if !x.Pass {
+		verdict = "FAILS: ratio > 1.0"
+	}
+	ls.Result = []row{
+		{"Interaction, Eq. " + eq, fmt.Sprintf("%.3f (limit 1.0)", v.raw("H1_value"))},
+		{"Force allowed at this e, " + rc + " = Pr / ratio", fmt.Sprintf("%s / %s = %s", f.num(float64(x.Demand), units.DimForce), ratioText(x.Ratio), f.force(x.Available))},
+		{"The same with Pn and Mn, Rn", f.force(x.Nominal)},
+		{"Required strength " + ru, f.force(x.Demand)},
+		{"Ratio " + ru + " / " + rc, fmt.Sprintf("%s / %s = %s", f.num(float64(x.Demand), units.DimForce), f.num(float64(x.Available), units.DimForce), ratioText(x.Ratio))},
+		{"Result", verdict},
+		{"Clause", "AISC " + strings.TrimPrefix(c.Edition.Name, "aisc") + " " + x.Clause + " with D2 and F11"},
+	}
+	ls.Values = valuesTable(c, f, x)
+}
+
+// valuesTable lists a result's intermediate values with what each is.
+func valuesTable(c *engine.Connection, f fmtr, x engine.Result) table {
+	t := table{Head: []string{"symbol", "value", "what it is"}}
+	ff, ft := 1.0, 0.0
+	for _, val := range x.Values {
+		switch val.Name {
+		case "filler_factor":
+			ff = val.V
+		case "filler_t":
+			ft = val.V
+		}
+	}
+	noFiller := ff == 1 && ft == 0
 	for _, val := range x.Values {
 		if noFiller && (val.Name == "filler_factor" || val.Name == "filler_t") {
 			continue // no fillers: nothing to show
@@ -786,9 +918,9 @@ func limit(d *detail.Design, f fmtr, x engine.Result, byID map[string]engine.Res
 		if what == "" {
 			what = meaning[val.Name]
 		}
-		ls.Values.Rows = append(ls.Values.Rows, tableRow{Cells: []string{sym, f.q(val.V, val.Dim), what}})
+		t.Rows = append(t.Rows, tableRow{Cells: []string{sym, f.q(val.V, val.Dim), what}})
 	}
-	return ls
+	return t
 }
 
 var pageTemplate = template.Must(template.New("report").Parse(pageHTML))

@@ -41,6 +41,12 @@ const (
 	DimForce
 	DimStress
 	DimArea
+	// DimMoment is a bending moment (N·mm inside; printed kip-in or kN-m)
+	// and DimModulus a section modulus (mm³; in3 or mm3). Results carry
+	// them; job files never give them, so Parse does not read them (it
+	// panics, as on any dimension it does not know).
+	DimMoment
+	DimModulus
 )
 
 // String names the dimension for error messages.
@@ -54,6 +60,10 @@ func (d Dim) String() string {
 		return "stress"
 	case DimArea:
 		return "area"
+	case DimMoment:
+		return "moment"
+	case DimModulus:
+		return "section modulus"
 	}
 	return "number"
 }
@@ -69,6 +79,12 @@ type Stress float64
 
 // Area is an area in square millimetres.
 type Area float64
+
+// Moment is a bending moment in newton-millimetres.
+type Moment float64
+
+// Modulus is a section modulus in cubic millimetres.
+type Modulus float64
 
 // Exact conversion factors to the internal units.
 const (
@@ -109,20 +125,28 @@ func (l Length) Mul(m Length) Area { return Area(float64(l) * float64(m)) }
 // Times returns the force a stress produces on an area.
 func (s Stress) Times(a Area) Force { return Force(float64(s) * float64(a)) }
 
+// At returns the moment of the force about a point at distance e.
+func (f Force) At(e Length) Moment { return Moment(float64(f) * float64(e)) }
+
+// Over returns the moment a stress produces over a section modulus.
+func (s Stress) Over(z Modulus) Moment { return Moment(float64(s) * float64(z)) }
+
 // Labels are the unit names printed beside values of one system.
 type Labels struct {
-	Length string `json:"length"`
-	Force  string `json:"force"`
-	Stress string `json:"stress"`
-	Area   string `json:"area"`
+	Length  string `json:"length"`
+	Force   string `json:"force"`
+	Stress  string `json:"stress"`
+	Area    string `json:"area"`
+	Moment  string `json:"moment"`
+	Modulus string `json:"section_modulus"`
 }
 
 // Labels returns the unit names used when printing values in s.
 func (s System) Labels() Labels {
 	if s == SI {
-		return Labels{Length: "mm", Force: "kN", Stress: "MPa", Area: "mm2"}
+		return Labels{Length: "mm", Force: "kN", Stress: "MPa", Area: "mm2", Moment: "kN-m", Modulus: "mm3"}
 	}
-	return Labels{Length: "in", Force: "kip", Stress: "ksi", Area: "in2"}
+	return Labels{Length: "in", Force: "kip", Stress: "ksi", Area: "in2", Moment: "kip-in", Modulus: "in3"}
 }
 
 // Label returns the printed unit of dimension d in s ("" for numbers).
@@ -137,6 +161,10 @@ func (s System) Label(d Dim) string {
 		return l.Stress
 	case DimArea:
 		return l.Area
+	case DimMoment:
+		return l.Moment
+	case DimModulus:
+		return l.Modulus
 	}
 	return ""
 }
@@ -163,6 +191,16 @@ func (s System) scale(d Dim) float64 {
 	case DimArea:
 		if us {
 			return float64(SquareInch)
+		}
+		return 1
+	case DimMoment:
+		if us {
+			return float64(Kip) * float64(Inch)
+		}
+		return float64(Kilonewton) * float64(Metre)
+	case DimModulus:
+		if us {
+			return float64(Inch) * float64(Inch) * float64(Inch)
 		}
 		return 1
 	}
