@@ -337,7 +337,7 @@ func (ab *AsBuilt) deviations(aligned []abVec, match []int) error {
 		dv := Deviation{ID: fmt.Sprintf("X%d", n), MeasuredID: m.ID, Line: m.Line, Status: HoleExtra,
 			X: units.Length(aligned[k].x), Y: units.Length(aligned[k].y),
 			Width: units.Length(m.Width), Length: units.Length(m.Length), Why: []string{"not in the design"}}
-		hb, err := ab.classify(engine.Hole{Type: rules.Standard}, m, dv.X, dv.Y)
+		hb, err := ab.classify(engine.Hole{HoleShape: engine.HoleShape{Type: rules.Standard}}, m, dv.X, dv.Y)
 		if err != nil {
 			return err
 		}

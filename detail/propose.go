@@ -480,7 +480,7 @@ func (p *problem) minEdgeTo(g *group, alongX bool) units.Length {
 	if err != nil {
 		return 0
 	}
-	h := engine.Hole{Type: g.hole, Slot: g.slot}
+	h := engine.Hole{HoleShape: engine.HoleShape{Type: g.hole, Slot: g.slot}}
 	c2, err := p.ed.EdgeIncrement(g.d, incrementType(&h, edge{alongX: alongX}))
 	if err != nil {
 		return emin
@@ -649,7 +649,7 @@ func (p *problem) perBolt(t *Design) boltBounds {
 		slot = p.job.Bolts.Slot
 	}
 	dx, dy := holeExtent(hs, p.job.Bolts.Hole, slot)
-	c.Holes = []engine.Hole{{X: far, Y: dy, Type: p.job.Bolts.Hole, Slot: slot, Dx: dx, Dy: dy}}
+	c.Holes = []engine.Hole{{X: far, Y: dy, HoleShape: engine.HoleShape{Type: p.job.Bolts.Hole, Slot: slot, Dx: dx, Dy: dy}}}
 	b := boltBounds{demand: c.Demand}
 	b.avail = append(b.avail, engine.BoltShear(&c).Available, engine.MemberBearing(&c).Available)
 	if c.Bolt.Joint == rules.SlipCritical {
@@ -760,7 +760,7 @@ func (p *problem) design(c *cand) (*Design, bool) {
 				return nil, false
 			}
 			conn.Holes = append(conn.Holes, engine.Hole{ID: holeID(len(conn.Holes)), X: x, Y: y,
-				Type: g.hole, Slot: g.slot, Dx: g.dx, Dy: g.dy})
+				HoleShape: engine.HoleShape{Type: g.hole, Slot: g.slot, Dx: g.dx, Dy: g.dy}})
 		}
 	}
 	if t.Conn.Plate != nil {
