@@ -1,6 +1,7 @@
 package detail
 
 import (
+	"math"
 	"strings"
 	"testing"
 
@@ -121,5 +122,116 @@ func TestPlyHoleKeyErrors(t *testing.T) {
 				t.Errorf("%s:%d %q, want %s and %q", ie.Field, ie.Line, ie.Msg, tt.field, tt.msg)
 			}
 		})
+	}
+}
+
+// fayingFinding returns the hole.type finding on long slots at the faying
+// surfaces, and whether there is one.
+func fayingFinding(r *Report) (Finding, bool) {
+	for _, f := range r.Findings {
+		if f.ID == "hole.type" && strings.Contains(f.Where, "faying surface") {
+			return f, true
+		}
+	}
+	return Finding{}, false
+}
+
+// TestLongSlotsOneFayingSurface: AISC 360-22 J3.3 (360-16 J3.2) permits
+// long-slotted holes in only one of the connected parts at an individual
+// faying surface (REFERENCE.md, hole-type permissions, verified).
+func TestLongSlotsOneFayingSurface(t *testing.T) {
+	longAcross := "  hole: long-slot\n  slot: transverse\n"
+	noPlate := func(s string) string {
+		i, k := strings.Index(s, "plate:\n"), strings.Index(s, "bolts:\n")
+		return s[:i] + s[k:]
+	}
+	tests := []struct {
+		name     string
+		job      string
+		clause   string
+		pass     bool
+		advisory bool
+		where    string // in the finding
+	}{
+		{"360-22, bolts.hole long-slot: both plies", plyJob(longAcross, "", ""), "J3.3", false, false, "long slots in both the member (H1, H2, H3, H4) and the plate (H1, H2, H3, H4)"},
+		{"360-16, bolts.hole long-slot: both plies", "standard: aisc360-16\n" + plyJob(longAcross, "", ""), "J3.2", false, false, "long slots in both the member"},
+		{"360-22, member.hole and plate.hole long-slot", plyJob("", longAcross, longAcross), "J3.3", false, false, "long slots in both the member"},
+		{"double angle, both plies", strings.Replace(plyJob(longAcross, "", ""), "shape: angle", "shape: double-angle", 1), "J3.3", false, false, "long slots in both the member"},
+		{"long slots in the member, standard holes in the plate", plyJob("", longAcross, "  hole: standard\n"), "J3.3", true, false, "long slots in the member only"},
+		{"long slots in the plate, standard holes in the member", plyJob(longAcross, "  hole: standard\n", ""), "J3.3", true, false, "long slots in the plate only"},
+		{"no plate: the other ply unknown", noPlate(plyJob(longAcross, "", "")), "J3.3", true, true, "only one connected part at each faying surface"},
+	}
+	for _, tt := range tests {
+		t.Run(tt.name, func(t *testing.T) {
+			r, err := Check(mustBuild(t, mustParse(t, tt.job)))
+			if err != nil {
+				t.Fatal(err)
+			}
+			f, ok := fayingFinding(r)
+			if !ok {
+				t.Fatalf("no faying-surface finding in %+v", r.Findings)
+			}
+			if f.Clause != tt.clause || f.Pass != tt.pass || f.Advisory != tt.advisory || !strings.Contains(f.Where, tt.where) {
+				t.Errorf("finding %+v; want clause %s, pass %v, advisory %v, where containing %q", f, tt.clause, tt.pass, tt.advisory, tt.where)
+			}
+			failsOnIt := false
+			for _, id := range r.Failing() {
+				failsOnIt = failsOnIt || id == "hole.type"
+			}
+			if failsOnIt == tt.pass || (!tt.pass && r.Pass) {
+				t.Errorf("hole.type among the failures: %v, report passes %v; want the job to fail on it: %v", failsOnIt, r.Pass, !tt.pass)
+			}
+		})
+	}
+}
+
+// TestDetailingPerPly: each part's edges, hole sizes and clear distances
+// take that part's holes. Member: long slots along the load (13/16 ×
+// 1-7/8, AISC 360-22 Table J3.3), slip-critical; plate: standard 13/16.
+func TestDetailingPerPly(t *testing.T) {
+	job := plyJob("  joint: slip-critical\n", "  hole: long-slot\n  slot: longitudinal\n", "  hole: standard\n")
+	r, err := Check(mustBuild(t, mustParse(t, job)))
+	if err != nil {
+		t.Fatal(err)
+	}
+	find := func(id, where string) (Finding, bool) {
+		for _, f := range r.Findings {
+			if f.ID == id && f.Where == where {
+				return f, true
+			}
+		}
+		return Finding{}, false
+	}
+	in := float64(units.Inch)
+	for _, w := range []struct {
+		id, where       string
+		measured, limit float64 // in
+		src             string
+	}{
+		// Table J3.4: 1 in for a 3/4-in bolt; Table J3.5: C2 = 0.75d =
+		// 0.5625 in for a long slot whose axis is perpendicular to the edge.
+		{"edge.min", "H1 to member end", 1.5, 1.5625, "AISC 360-22 Table J3.4 1 in + Table J3.5 0.75d (long slot ⊥ end)"},
+		{"edge.min", "H4 to plate free edge", 1.5, 1, "AISC 360-22 Table J3.4, standard hole: no C2"},
+		{"hole.size", "H1 along the slot (largest long-slot hole in the member)", 1 + 7.0/8, 1 + 7.0/8, "AISC 360-22 Table J3.3 long slot length"},
+		{"hole.size", "H1 (largest standard hole in the plate)", 13.0 / 16, 13.0 / 16, "AISC 360-22 Table J3.3 standard"},
+		// Clear distance at 3-in pitch: 3 − 1-7/8 = 1.125 in between the
+		// member's slots, 3 − 13/16 = 2.1875 in between the plate's holes
+		// (hand geometry); limit d, AISC 360-22 J3.4.
+		{"spacing.min", "H1–H2 (clear distance in the member)", 1.125, 0.75, "AISC 360-22 J3.4, hand geometry"},
+		{"spacing.min", "H1–H2 (clear distance in the plate)", 2.1875, 0.75, "AISC 360-22 J3.4, hand geometry"},
+	} {
+		f, ok := find(w.id, w.where)
+		if !ok {
+			t.Errorf("no %s finding %q", w.id, w.where)
+			continue
+		}
+		if math.Abs(f.Measured/in-w.measured) > 1e-9 || math.Abs(f.Limit/in-w.limit) > 1e-9 {
+			t.Errorf("%s %q: measured %g, limit %g in; want %g, %g (%s)", w.id, w.where, f.Measured/in, f.Limit/in, w.measured, w.limit, w.src)
+		}
+	}
+	for _, where := range []string{"member: longitudinal long-slot holes in a slip-critical joint", "plate: standard holes in a slip-critical joint"} {
+		if f, ok := find("hole.type", where); !ok || !f.Pass {
+			t.Errorf("hole.type %q: %+v (found %v), want a passing finding (AISC 360-22 J3.3)", where, f, ok)
+		}
 	}
 }

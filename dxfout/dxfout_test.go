@@ -29,14 +29,16 @@ var jobs = []string{
 }
 
 // inlineJobs are jobs of our own for the hole types the job files lack:
-// long slots along the load (US) and oversized holes in one row (SI).
+// long slots along the load in the member with standard holes in the plate
+// (US; AISC 360-22 J3.3 permits long slots in one ply of a faying surface)
+// and oversized holes in one row (SI).
 var inlineJobs = map[string]string{
 	"long-slot.yaml": `
 mark: LS-1
 units: us
 load: {required: 40 kip}
 member: {shape: angle, size: L4x4x1/2, grade: A36}
-plate: {thickness: 1/2 in, grade: A36, width: 8 in, edge: 2 in}
+plate: {thickness: 1/2 in, grade: A36, width: 8 in, edge: 2 in, hole: standard}
 bolts: {diameter: 3/4 in, grade: A325, joint: slip-critical, hole: long-slot, slot: longitudinal,
         per_line: 2, pitch: 4 in, end: 2 in, gage: 2-1/2 in}
 `,
