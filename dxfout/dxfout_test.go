@@ -98,18 +98,24 @@ type wantHole struct {
 	alongY              bool
 }
 
-// jobHoles returns the design's holes in the job's units: in the member's
-// frame, or in the plate's (x' = FreeEdge − x, y' = YMax − y, see
-// detail.Sheet), computed here from the engine's model.
+// jobHoles returns the design's holes in the job's units: the member's ply
+// in the member's frame, or the plate's ply in the plate's frame (x' =
+// FreeEdge − x, y' = YMax − y, see detail.Sheet), computed here from the
+// engine's model.
 func jobHoles(r *detail.Report, plate bool) []wantHole {
 	c := &r.Design.Conn
 	sys := r.Design.Job.Units
 	in := func(l units.Length) float64 { return sys.ToJob(float64(l), units.DimLength) }
 	var out []wantHole
-	for _, h := range c.Holes {
-		w := wantHole{x: in(h.X), y: in(h.Y), width: in(min(h.Dx, h.Dy))}
-		if h.Type.IsSlot() {
-			w.length, w.alongY = in(max(h.Dx, h.Dy)), h.Dy > h.Dx
+	for i := range c.Holes {
+		h := &c.Holes[i]
+		s := h.HoleShape
+		if plate {
+			s = h.InPlate()
+		}
+		w := wantHole{x: in(h.X), y: in(h.Y), width: in(min(s.Dx, s.Dy))}
+		if s.Type.IsSlot() {
+			w.length, w.alongY = in(max(s.Dx, s.Dy)), s.Dy > s.Dx
 		}
 		if plate {
 			w.x, w.y = in(c.Plate.FreeEdge-h.X), in(c.Plate.YMax()-h.Y)

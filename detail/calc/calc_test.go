@@ -33,7 +33,7 @@ func jobs(t *testing.T) []string {
 	if len(out) < 5 {
 		t.Fatalf("found only %d jobs", len(out))
 	}
-	for _, name := range []string{"long-splice-asd.yaml", "si-flat-alone.yaml"} {
+	for _, name := range []string{"long-splice-asd.yaml", "si-flat-alone.yaml", "ply-long-slot.yaml"} {
 		out = append(out, "inline:"+name)
 	}
 	return out
@@ -43,8 +43,33 @@ func jobs(t *testing.T) []string {
 // 360-16, a double angle into a splice plate (the 0.85·Ag cap applies),
 // slip-critical with oversized holes and a pattern long enough for the
 // long-joint reduction, failing an edge distance only; an SI flat bar
-// with no plate.
+// with no plate; a US angle with long slots in the member and standard
+// holes in the plate.
 var inline = map[string]string{
+	"ply-long-slot.yaml": `mark: PLY-1
+units: us
+load:
+  required: 60 kip
+member:
+  shape: angle
+  size: L4x4x1/2
+  grade: A36
+  hole: long-slot
+  slot: transverse
+plate:
+  thickness: 1/2 in
+  grade: A36
+  width: 12 in
+  edge: 1-1/2 in
+  hole: standard
+bolts:
+  diameter: 7/8 in
+  grade: A325
+  per_line: 4
+  pitch: 3 in
+  end: 1-1/2 in
+  gage: 2-1/2 in
+`,
 	"long-splice-asd.yaml": `mark: LONG-1
 units: us
 standard: aisc360-16
@@ -305,6 +330,10 @@ func TestDrawingHolesMatchTheJob(t *testing.T) {
 				tx, _ := strconv.ParseFloat(m[1], 64)
 				ty, _ := strconv.ParseFloat(m[2], 64)
 				holes := find(v, func(n *html.Node) bool { _, ok := attr(n, "data-hole"); return ok })
+				shape := c.Holes[0].HoleShape // each view draws its own part's holes
+				if part == "plate" {
+					shape = c.Holes[0].InPlate()
+				}
 				if len(holes) != len(c.Holes) {
 					t.Fatalf("view %s: %d holes drawn, want %d", part, len(holes), len(c.Holes))
 				}
@@ -330,13 +359,13 @@ func TestDrawingHolesMatchTheJob(t *testing.T) {
 						if px, py := cx+tx, cy+ty; px < 0 || px > vw || py < 0 || py > vh {
 							t.Errorf("%s %s: at (%g, %g) on the page, outside the viewBox %g × %g", part, id, px, py, vw, vh)
 						}
-						if d := 2 * num(t, h, "r"); math.Abs(d-job(min(c.Holes[0].Dx, c.Holes[0].Dy))) > tol {
+						if d := 2 * num(t, h, "r"); math.Abs(d-job(min(shape.Dx, shape.Dy))) > tol {
 							t.Errorf("%s %s: diameter %g", part, id, d)
 						}
 					}
 				}
-				if c.Holes[0].Type.IsSlot() == (circles > 0) {
-					t.Errorf("view %s: %d circles for %s holes", part, circles, c.Holes[0].Type)
+				if shape.Type.IsSlot() == (circles > 0) {
+					t.Errorf("view %s: %d circles for %s holes", part, circles, shape.Type)
 				}
 			}
 		})
@@ -515,5 +544,22 @@ func TestFormulasOnThePageGiveTheNominalStrength(t *testing.T) {
 				t.Errorf("%s %s: the formula gives %g, the check %g", filepath.Base(path), x.ID, want, got)
 			}
 		}
+	}
+}
+
+// The hole table gives each ply's holes when they differ (PLY-1: long
+// slots across the load in the member, 15/16 × 2-3/16, standard 15/16
+// holes in the plate, AISC 360-22 Table J3.3 for a 7/8-in bolt), and keeps
+// its one-ply columns otherwise.
+func TestHoleTablePerPly(t *testing.T) {
+	_, b := render(t, check(t, "inline:ply-long-slot.yaml"))
+	for _, s := range []string{"member: type", "plate: type", "long-slot, transverse", "15/16 in diameter", "15/16 × 2-3/16 in"} {
+		if !bytes.Contains(b, []byte(s)) {
+			t.Errorf("the report lacks %q", s)
+		}
+	}
+	_, b = render(t, check(t, "../../testdata/jobs/us-single-angle.yaml"))
+	if bytes.Contains(b, []byte("plate: type")) {
+		t.Error("a job of one hole type gets per-ply columns")
 	}
 }
