@@ -57,6 +57,60 @@ func ParseAlign(s string) (AlignMode, error) {
 	return AlignDatum, fmt.Errorf("unknown alignment %q (want datum or best-fit)", s)
 }
 
+// MeasuredPart is the connected part a measured file is of: its holes are those
+// of one ply (SPEC §8 measures a part, not the joint).
+type MeasuredPart int
+
+const (
+	MeasuredMember MeasuredPart = iota // the member (both angles of a pair alike)
+	MeasuredPlate                      // the gusset or splice plate
+)
+
+// String returns the flag spelling.
+func (p MeasuredPart) String() string {
+	if p == MeasuredPlate {
+		return "plate"
+	}
+	return "member"
+}
+
+// ParsePart reads the --part flag.
+func ParsePart(s string) (MeasuredPart, error) {
+	switch s {
+	case "member":
+		return MeasuredMember, nil
+	case "plate":
+		return MeasuredPlate, nil
+	}
+	return MeasuredMember, fmt.Errorf("unknown part %q (want member or plate)", s)
+}
+
+// partFrame maps the job's frame to the measured part's own frame, the
+// frame of its cut-sheet view and CAM file (see detail/sheet.go): the
+// member's is the job's; the plate's is the job's turned half a turn about
+// the plate's datum corner, x' = FreeEdge − x, y' = YMax − y. Both maps
+// are their own inverse.
+type partFrame struct {
+	plate    bool
+	fe, ymax float64 // mm
+}
+
+func newPartFrame(d *Design, p MeasuredPart) partFrame {
+	if p != MeasuredPlate {
+		return partFrame{}
+	}
+	pl := d.Conn.Plate
+	return partFrame{plate: true, fe: float64(pl.FreeEdge), ymax: float64(pl.YMax())}
+}
+
+// of maps a point from the job's frame to the part's, or back.
+func (f partFrame) of(x, y float64) abVec {
+	if !f.plate {
+		return abVec{x, y}
+	}
+	return abVec{f.fe - x, f.ymax - y}
+}
+
 // QAVerdict is the QA outcome of reverify.
 type QAVerdict int
 
@@ -87,13 +141,18 @@ var holeStatusNames = [...]string{"ok", "out-of-tolerance", "missing", "extra"}
 func (s HoleStatus) String() string { return holeStatusNames[s] }
 
 // Deviation is one design hole and the measured hole matched to it, or a
-// missing or extra hole. Lengths are in mm, in the design's frame.
+// missing or extra hole. Lengths are in mm, in the measured part's frame
+// (the job's for the member; the plate's, as on its cut-sheet view and
+// CAM file, for the plate).
 type Deviation struct {
 	ID         string // design hole id; for an extra hole "X1", "X2", …
 	MeasuredID string // the hole's id in the measured file ("" when missing)
 	Line       int    // line of the measured hole in its file
 	Status     HoleStatus
-	Design     engine.Hole // zero for an extra hole
+	// Design is the design hole as the measured part has it: its centre in
+	// the part's frame and its shape in that part's ply (Plate nil); zero
+	// for an extra hole.
+	Design engine.Hole
 	// Measured centre in the design's frame, and the deviations from the
 	// design centre (measured − design) and their resultant.
 	X, Y           units.Length
@@ -102,8 +161,10 @@ type Deviation struct {
 	// round hole), and the width's deviation from the design's nominal.
 	Width, Length units.Length
 	DDiameter     units.Length
-	// AsBuilt is the hole as the as-built check sees it: measured centre,
-	// type after reclassification, extents max(measured, nominal).
+	// AsBuilt is the measured part's hole as the as-built check sees it,
+	// in the part's frame and ply: measured centre, type after
+	// reclassification, extents max(measured, nominal). The other part's
+	// hole stays as designed.
 	AsBuilt      engine.Hole
 	Reclassified bool
 	Why          []string // what is out of tolerance, for people
@@ -123,6 +184,8 @@ type Alignment struct {
 // AsBuilt is the outcome of reverify.
 type AsBuilt struct {
 	Design       *Design
+	Part         MeasuredPart // the part measured
+	frame        partFrame
 	DesignReport *Report
 	Report       *Report // the as-built check
 	Measured     *measured.Set
@@ -139,7 +202,11 @@ type AsBuilt struct {
 type ReverifyOptions struct {
 	Align     AlignMode
 	Tolerance Tolerance
+	Part      MeasuredPart // the part the measured file is of (default the member)
 }
+
+// ErrNoPlate is returned when a plate is measured for a job without one.
+var ErrNoPlate = errors.New("the job has no plate: a measured plate needs the job's plate block")
 
 // LoadMeasured reads a measured CSV or DXF (by its extension, or its
 // content when the extension says neither), in the job's units unless the
@@ -183,11 +250,15 @@ func Reverify(d *Design, set *measured.Set, opt ReverifyOptions) (*AsBuilt, erro
 	if d == nil || set == nil || len(set.Holes) == 0 {
 		panic("detail: Reverify needs a design and measured holes")
 	}
+	if opt.Part == MeasuredPlate && d.Conn.Plate == nil {
+		return nil, ErrNoPlate
+	}
 	dr, err := Check(d)
 	if err != nil {
 		return nil, err
 	}
-	ab := &AsBuilt{Design: d, DesignReport: dr, Measured: set, Tolerance: d.Job.Tolerance}
+	ab := &AsBuilt{Design: d, DesignReport: dr, Measured: set, Tolerance: d.Job.Tolerance,
+		Part: opt.Part, frame: newPartFrame(d, opt.Part)}
 	if opt.Tolerance.Position > 0 {
 		ab.Tolerance.Position = opt.Tolerance.Position
 	}
@@ -196,9 +267,11 @@ func Reverify(d *Design, set *measured.Set, opt ReverifyOptions) (*AsBuilt, erro
 	}
 	ab.Gate = matchGate(&d.Conn, ab.Tolerance)
 
+	// The design's holes in the measured part's frame: the file's frame
+	// for datum alignment, the start of a best fit.
 	des := make([]abVec, len(d.Conn.Holes))
 	for i, h := range d.Conn.Holes {
-		des[i] = abVec{float64(h.X), float64(h.Y)}
+		des[i] = ab.frame.of(float64(h.X), float64(h.Y))
 	}
 	mea := make([]abVec, len(set.Holes))
 	for i, h := range set.Holes {
@@ -216,6 +289,9 @@ func Reverify(d *Design, set *measured.Set, opt ReverifyOptions) (*AsBuilt, erro
 			tf.t = lo
 			if lo != (abVec{}) {
 				ab.Alignment.Note = "datum: the lower-left corner of the part's contour (member end, heel)"
+				if ab.frame.plate {
+					ab.Alignment.Note = "datum: the lower-left corner of the plate's contour (free edge, the side its CAM file puts at y = 0)"
+				}
 			}
 		}
 		match = assignHoles(des, tf.inverseAll(mea), float64(ab.Gate))
@@ -273,7 +349,8 @@ func (ab *AsBuilt) deviations(aligned []abVec, match []int) error {
 	sys := ab.Design.Job.Units
 	ql := func(l units.Length) string { return qaLength(l, sys) }
 	qt := func(l units.Length) string { return exactLength(l, sys) }
-	for i, h := range c.Holes {
+	for i := range c.Holes {
+		h := ab.designInPart(&c.Holes[i])
 		dv := Deviation{ID: h.ID, Design: h}
 		k := match[i]
 		if k < 0 {
@@ -337,7 +414,7 @@ func (ab *AsBuilt) deviations(aligned []abVec, match []int) error {
 		dv := Deviation{ID: fmt.Sprintf("X%d", n), MeasuredID: m.ID, Line: m.Line, Status: HoleExtra,
 			X: units.Length(aligned[k].x), Y: units.Length(aligned[k].y),
 			Width: units.Length(m.Width), Length: units.Length(m.Length), Why: []string{"not in the design"}}
-		hb, err := ab.classify(engine.Hole{Type: rules.Standard}, m, dv.X, dv.Y)
+		hb, err := ab.classify(engine.Hole{HoleShape: engine.HoleShape{Type: rules.Standard}}, m, dv.X, dv.Y)
 		if err != nil {
 			return err
 		}
@@ -346,6 +423,45 @@ func (ab *AsBuilt) deviations(aligned []abVec, match []int) error {
 		ab.Deviations = append(ab.Deviations, dv)
 	}
 	return nil
+}
+
+// designInPart is design hole h as the measured part has it: its centre in
+// the part's frame and its shape in the part's ply.
+func (ab *AsBuilt) designInPart(h *engine.Hole) engine.Hole {
+	p := ab.frame.of(float64(h.X), float64(h.Y))
+	out := engine.Hole{ID: h.ID, X: units.Length(p.x), Y: units.Length(p.y), HoleShape: h.HoleShape}
+	if ab.Part == MeasuredPlate {
+		out.HoleShape = h.InPlate() // a half turn keeps extents along x and y
+	}
+	return out
+}
+
+// asBuiltHole is the hole through both plies that the as-built check
+// takes for deviation dv of design hole design (nil for an extra hole):
+// the measured centre, back in the job's frame, through both plies (one
+// bolt, one centre); the measured part's ply as measured, the other as
+// designed. An extra hole is taken as measured in both plies.
+func (ab *AsBuilt) asBuiltHole(dv Deviation, design *engine.Hole) engine.Hole {
+	p := ab.frame.of(float64(dv.X), float64(dv.Y))
+	h := engine.Hole{ID: dv.AsBuilt.ID, X: units.Length(p.x), Y: units.Length(p.y), HoleShape: dv.AsBuilt.HoleShape}
+	if design == nil || ab.Design.Conn.Plate == nil {
+		return h
+	}
+	other := design.InPlate()
+	if ab.Part == MeasuredPlate {
+		other = design.HoleShape
+		h.HoleShape = design.HoleShape
+	}
+	if other == dv.AsBuilt.HoleShape {
+		return h
+	}
+	if ab.Part == MeasuredPlate {
+		plate := dv.AsBuilt.HoleShape
+		h.Plate = &plate
+	} else {
+		h.Plate = &other
+	}
+	return h
 }
 
 // tolSlack is the slack of tolerance comparisons, in mm: a deviation exactly
@@ -429,10 +545,15 @@ func (ab *AsBuilt) check() error {
 		pl := *d.Conn.Plate // the plate as designed: its free edge and centre line stay
 		built.Conn.Plate = &pl
 	}
-	for _, dv := range ab.Deviations {
-		if dv.Status != HoleMissing {
-			built.Conn.Holes = append(built.Conn.Holes, dv.AsBuilt)
+	for i, dv := range ab.Deviations {
+		if dv.Status == HoleMissing {
+			continue
 		}
+		var design *engine.Hole // deviations list the design holes first, in order
+		if dv.Status != HoleExtra {
+			design = &d.Conn.Holes[i]
+		}
+		built.Conn.Holes = append(built.Conn.Holes, ab.asBuiltHole(dv, design))
 	}
 	// The engine groups holes into gage lines and rows with a slack of a
 	// quarter diameter, so the measured centres go in as they are.
@@ -454,14 +575,29 @@ func (ab *AsBuilt) check() error {
 	for _, x := range rs {
 		r.Pass = r.Pass && x.Pass
 	}
-	r.Cautions = append(cautions(&built),
-		"As built: the plate is taken as designed (free edge and centre line); the measured holes are taken through both plies.",
+	r.Cautions = append(cautions(&built), ab.partCaution(),
 		"As built: holes within a quarter of the bolt diameter of one another across (along) the load are taken as one gage line (row).")
 	if ab.Alignment.Mode == AlignBestFit {
 		r.Cautions = append(r.Cautions, "Best-fit alignment places the hole group on the design: edge distances are checked as designed plus the holes' deviations within the group, not measured from the part's own edges; use --align datum to check them.")
 	}
 	ab.Report = r
 	return nil
+}
+
+// partCaution says which part was measured and what the check takes of the
+// other.
+func (ab *AsBuilt) partCaution() string {
+	if ab.Part == MeasuredPlate {
+		return "As built: the plate was measured. Its holes take the measured sizes and the hole types they now are; " +
+			"the member's holes keep their designed type and size. Each bolt has one centre, the measured one, in both parts; " +
+			"the plate's free edge and centre line are where the file's frame puts them, the member's end and edges as designed."
+	}
+	msg := "As built: the member was measured. Its holes take the measured sizes and the hole types they now are; "
+	if ab.Design.Conn.Plate == nil {
+		return msg + "each bolt is at its measured centre."
+	}
+	return msg + "the plate's holes keep their designed type and size. Each bolt has one centre, the measured one, in both parts; " +
+		"the plate is taken as designed (free edge and centre line)."
 }
 
 // decide sets the verdict and its reasons.
@@ -909,6 +1045,7 @@ type jsonReverify struct {
 	jsonReport
 	Verdict         string             `json:"verdict"`
 	AsBuilt         string             `json:"as_built"`
+	Part            string             `json:"part"`
 	DesignVerdict   string             `json:"design_verdict"`
 	Reasons         []string           `json:"reasons"`
 	Measured        jsonMeasured       `json:"measured"`
@@ -929,7 +1066,7 @@ func (ab *AsBuilt) document() jsonReverify {
 		return &v
 	}
 	doc := jsonReverify{
-		jsonReport: ab.Report.document(), Verdict: ab.Verdict.String(), AsBuilt: ab.Report.Verdict(),
+		jsonReport: ab.Report.document(), Verdict: ab.Verdict.String(), AsBuilt: ab.Report.Verdict(), Part: ab.Part.String(),
 		DesignVerdict: ab.DesignReport.Verdict(), Reasons: ab.Reasons,
 		Measured: jsonMeasured{File: ab.Measured.File, Format: ab.Measured.Format, Units: ab.Measured.Units,
 			Holes: len(ab.Measured.Holes), Notes: ab.Measured.Notes},
@@ -1065,8 +1202,17 @@ func (ab *AsBuilt) preamble() [][2]string {
 	align := fmt.Sprintf("%s: shift x %s, y %s; rotation %.6f deg; rms %s (%s)", a.Mode, qaSigned(a.Shift[0], sys), qaSigned(a.Shift[1], sys),
 		a.Rotation*180/math.Pi, qaLength(a.RMS, sys), a.Note)
 	m := ab.Measured
+	part := "member: its holes reclassified from the measured sizes, the plate's as designed; coordinates in the job's frame"
+	switch {
+	case ab.Part == MeasuredPlate:
+		part = "plate: its holes reclassified from the measured sizes, the member's as designed; coordinates in the plate's frame " +
+			"(x from the free edge, y from the side its CAM file puts at y = 0)"
+	case ab.Design.Conn.Plate == nil:
+		part = "member: its holes reclassified from the measured sizes; coordinates in the job's frame"
+	}
 	return [][2]string{
 		{"measured", fmt.Sprintf("%s (%s, %s, %d holes)", m.File, m.Format, m.Units, len(m.Holes))},
+		{"part", part},
 		{"tolerance", fmt.Sprintf("position %s radial, size +%s over nominal; holes farther than %s from a design hole are extra",
 			exactLength(ab.Tolerance.Position, sys), exactLength(ab.Tolerance.Diameter, sys), exactLength(ab.Gate, sys))},
 		{"alignment", align},

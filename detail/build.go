@@ -293,20 +293,47 @@ func holeExtent(hs rules.HoleSize, t rules.HoleType, dir rules.SlotDir) (dx, dy 
 	return hs.Width, hs.Length
 }
 
+// plyShape is the nominal hole of type t and slot direction dir for a bolt
+// of diameter d (Table J3.3 [J3.3M]).
+func plyShape(ed *rules.Edition, d units.Length, t rules.HoleType, dir rules.SlotDir) (engine.HoleShape, error) {
+	size, err := ed.Hole(d, t)
+	if err != nil {
+		return engine.HoleShape{}, err
+	}
+	if !t.IsSlot() {
+		dir = rules.Transverse
+	}
+	dx, dy := holeExtent(size, t, dir)
+	return engine.HoleShape{Type: t, Slot: dir, Dx: dx, Dy: dy}, nil
+}
+
+// plyShapes returns the member's and the plate's hole shape for bolt
+// diameter d; the plate's is nil when it is the member's (or there is no
+// plate).
+func (j *Job) plyShapes(ed *rules.Edition, d units.Length) (engine.HoleShape, *engine.HoleShape, error) {
+	mt, mdir := j.MemberHole()
+	ms, err := plyShape(ed, d, mt, mdir)
+	if err != nil || j.Plate == nil {
+		return ms, nil, err
+	}
+	pt, pdir := j.PlateHole()
+	ps, err := plyShape(ed, d, pt, pdir)
+	if err != nil || ps == ms {
+		return ms, nil, err
+	}
+	return ms, &ps, nil
+}
+
 // eps is the geometric tolerance of the fit checks, in mm.
 const eps = 1e-6
 
 func (j *Job) buildHoles(ed *rules.Edition, c *engine.Connection) error {
 	b := j.Bolts
-	size, err := ed.Hole(b.Diameter, b.Hole)
+	shape, plate, err := j.plyShapes(ed, b.Diameter)
 	if err != nil {
 		return j.inputErr("bolts.diameter", tabulatedMsg(err), diametersHint(ed))
 	}
-	slot := rules.Transverse
-	if b.Hole.IsSlot() {
-		slot = b.Slot
-	}
-	dx, dy := holeExtent(size, b.Hole, slot)
+	dx, dy := shape.Dx, shape.Dy
 	w := c.Member.Width
 	room, part := w, "flat"
 	if c.Member.Shape != engine.Flat {
@@ -373,7 +400,11 @@ func (j *Job) buildHoles(ed *rules.Edition, c *engine.Connection) error {
 	for i := range holes {
 		h := &holes[i]
 		h.ID = fmt.Sprintf("H%d", i+1)
-		h.Type, h.Slot, h.Dx, h.Dy = b.Hole, slot, dx, dy
+		h.HoleShape = shape
+		if plate != nil {
+			p := *plate // each hole its own: as-built copies may change one
+			h.Plate = &p
+		}
 		switch {
 		case h.X-dx/2 < -eps:
 			return j.inputErr(h.xField, fmt.Sprintf("hole %s at x = %s runs past the member end", h.ID, units.FormatJob(h.X, j.Units)),
@@ -424,7 +455,7 @@ func (j *Job) buildPlate(ed *rules.Edition, d *Design) error {
 	pl.FreeEdge = xmax + ps.Edge
 	pl.YCentre = ysum / units.Length(len(c.Holes))
 	for _, h := range c.Holes {
-		if h.Y-h.Dy/2 < pl.YMin()-eps || h.Y+h.Dy/2 > pl.YMax()+eps {
+		if dy := h.InPlate().Dy; h.Y-dy/2 < pl.YMin()-eps || h.Y+dy/2 > pl.YMax()+eps {
 			return j.inputErr("plate.width", fmt.Sprintf("hole %s runs off the plate: the plate is %s wide", h.ID, units.FormatJob(ps.Width, j.Units)),
 				"the plate must be wider than the bolt group plus the hole")
 		}

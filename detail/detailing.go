@@ -5,6 +5,7 @@ import (
 	"fmt"
 	"math"
 	"slices"
+	"strings"
 
 	"gaugeline/engine"
 	"gaugeline/rules"
@@ -92,10 +93,45 @@ func lengthFinding(id, clause string, measured, limit units.Length, pass bool, w
 	}
 }
 
+// ply is one connected part as the detailing checks see its holes: the
+// member's or the plate's shape of each hole.
+type ply struct {
+	name  string // "member" or "plate"
+	shape func(*engine.Hole) engine.HoleShape
+}
+
+var (
+	memberPly = ply{"member", func(h *engine.Hole) engine.HoleShape { return h.HoleShape }}
+	platePly  = ply{"plate", func(h *engine.Hole) engine.HoleShape { return h.InPlate() }}
+)
+
+// pliesOf lists the plies whose holes the checks that look at hole shapes
+// take one by one: the member alone when every hole is alike in both plies
+// (or there is no plate), so that a connection of one hole type gives the
+// findings it always gave; both, named, when the plies differ anywhere.
+func pliesOf(c *engine.Connection) (plies []ply, named bool) {
+	if c.Plate != nil {
+		for i := range c.Holes {
+			if c.Holes[i].PliesDiffer() {
+				return []ply{memberPly, platePly}, true
+			}
+		}
+	}
+	return []ply{memberPly}, false
+}
+
+// in names the ply in a finding's where, when the plies are named.
+func (p ply) in(named bool) string {
+	if !named {
+		return ""
+	}
+	return " in the " + p.name
+}
+
 // alongAcross returns a hole's extent along its long axis and across it,
 // as J3.3 tabulates slots (length × width); for a round hole both are its
 // larger extent.
-func alongAcross(h *engine.Hole) (along, across units.Length) {
+func alongAcross(h engine.HoleShape) (along, across units.Length) {
 	if !h.Type.IsSlot() {
 		d := max(h.Dx, h.Dy)
 		return d, d
@@ -106,12 +142,12 @@ func alongAcross(h *engine.Hole) (along, across units.Length) {
 	return h.Dy, h.Dx
 }
 
-// holeTypesPresent lists the hole types of the connection in enum order.
-func holeTypesPresent(c *engine.Connection) []rules.HoleType {
+// holeTypesPresent lists the hole types of one ply in enum order.
+func holeTypesPresent(c *engine.Connection, p ply) []rules.HoleType {
 	var ts []rules.HoleType
-	for _, h := range c.Holes {
-		if !slices.Contains(ts, h.Type) {
-			ts = append(ts, h.Type)
+	for i := range c.Holes {
+		if t := p.shape(&c.Holes[i]).Type; !slices.Contains(ts, t) {
+			ts = append(ts, t)
 		}
 	}
 	slices.Sort(ts)
@@ -119,14 +155,23 @@ func holeTypesPresent(c *engine.Connection) []rules.HoleType {
 }
 
 // holeSizeFindings is hole.size, J3.2 [J3.3] with Table J3.3 [J3.3M]: per
-// hole type present, the hole that most exceeds the nominal size (along or
-// across a slot) against that size. Design holes equal the table; measured
-// as-built holes may not.
+// ply (when the plies differ) and hole type present, the hole that most
+// exceeds the nominal size (along or across a slot) against that size.
+// Design holes equal the table; measured as-built holes may not.
 func holeSizeFindings(c *engine.Connection) []Finding {
+	var fs []Finding
+	plies, named := pliesOf(c)
+	for _, p := range plies {
+		fs = append(fs, plyHoleSizeFindings(c, p, named)...)
+	}
+	return fs
+}
+
+func plyHoleSizeFindings(c *engine.Connection, p ply, named bool) []Finding {
 	const id = "hole.size"
 	clause := c.Edition.Clause("J3.2") + ", " + table(c, "Table J3.3")
 	var fs []Finding
-	for _, t := range holeTypesPresent(c) {
+	for _, t := range holeTypesPresent(c, p) {
 		nominal, err := c.Edition.Hole(c.Bolt.D, t)
 		if err != nil {
 			fs = append(fs, untabulated(id, clause, err))
@@ -134,7 +179,7 @@ func holeSizeFindings(c *engine.Connection) []Finding {
 		}
 		best, bestExcess := Finding{}, units.Length(math.Inf(-1))
 		for i := range c.Holes {
-			h := &c.Holes[i]
+			h := p.shape(&c.Holes[i])
 			if h.Type != t {
 				continue
 			}
@@ -150,7 +195,7 @@ func holeSizeFindings(c *engine.Connection) []Finding {
 			for _, e := range ext {
 				if excess := e.measured - e.limit; excess > bestExcess+tol {
 					bestExcess = excess
-					where := fmt.Sprintf("%s%s (largest %s hole)", holeName(c, i), e.dir, t)
+					where := fmt.Sprintf("%s%s (largest %s hole%s)", holeName(c, i), e.dir, t, p.in(named))
 					best = lengthFinding(id, clause, e.measured, e.limit, atMost(e.measured, e.limit), where)
 				}
 			}
@@ -160,11 +205,19 @@ func holeSizeFindings(c *engine.Connection) []Finding {
 	return fs
 }
 
-// holeTypeFindings is hole.type, J3.2 [J3.3]: per distinct hole type and
-// slot direction, whether the edition permits it in the joint; long slots
-// add an advisory that only one connected part at each faying surface may
-// have them.
+// holeTypeFindings is hole.type, J3.2 [J3.3]: per ply (when the plies
+// differ) and distinct hole type and slot direction, whether the edition
+// permits it in the joint; then long slots at the faying surfaces.
 func holeTypeFindings(c *engine.Connection) []Finding {
+	var fs []Finding
+	plies, named := pliesOf(c)
+	for _, p := range plies {
+		fs = append(fs, plyHoleTypeFindings(c, p, named)...)
+	}
+	return append(fs, fayingSurfaceFindings(c)...)
+}
+
+func plyHoleTypeFindings(c *engine.Connection, p ply, named bool) []Finding {
 	const id = "hole.type"
 	clause := c.Edition.Clause("J3.2")
 	type kind struct {
@@ -172,7 +225,8 @@ func holeTypeFindings(c *engine.Connection) []Finding {
 		dir rules.SlotDir
 	}
 	var kinds []kind
-	for _, h := range c.Holes {
+	for i := range c.Holes {
+		h := p.shape(&c.Holes[i])
 		k := kind{h.Type, h.Slot}
 		if !h.Type.IsSlot() {
 			k.dir = rules.Transverse // direction means nothing for a round hole
@@ -184,33 +238,83 @@ func holeTypeFindings(c *engine.Connection) []Finding {
 	slices.SortFunc(kinds, func(a, b kind) int {
 		return cmp.Or(cmp.Compare(a.t, b.t), cmp.Compare(a.dir, b.dir))
 	})
+	prefix := ""
+	if named {
+		prefix = p.name + ": "
+	}
 	var fs []Finding
-	long := false
 	for _, k := range kinds {
 		ok, why := c.Edition.HolePermitted(k.t, k.dir, c.Bolt.Joint)
 		what := k.t.String() + " holes"
 		if k.t.IsSlot() {
 			what = k.dir.String() + " " + what
-			long = long || k.t == rules.LongSlot
 		}
-		where := fmt.Sprintf("%s in a %s joint", what, c.Bolt.Joint) // bearing, pretensioned, slip-critical
+		where := fmt.Sprintf("%s%s in a %s joint", prefix, what, c.Bolt.Joint) // bearing, pretensioned, slip-critical
 		if !ok && why != "" {
 			where += ": " + why
 		}
 		fs = append(fs, Finding{ID: id, Clause: clause, Dim: units.Dimensionless, Pass: ok, Where: where})
 	}
-	if long {
-		fs = append(fs, Finding{
-			ID: id, Clause: clause, Dim: units.Dimensionless, Pass: true, Advisory: true,
-			Where: "long-slot holes: " + clause + " permits long slots in only one connected part at each faying surface; make the other ply standard holes",
-		})
-	}
 	return fs
 }
 
+// fayingSurfaceFindings is the rest of hole.type, J3.2 [J3.3]: long-slotted
+// holes are permitted in only one of the connected parts at an individual
+// faying surface. With a plate, long slots in both the member and the plate
+// fail (every faying surface of the joint, both of a double angle's, lies
+// between the member and the plate); long slots in one ply pass. Without a
+// plate the other part is unknown: an advisory.
+func fayingSurfaceFindings(c *engine.Connection) []Finding {
+	const id = "hole.type"
+	clause := c.Edition.Clause("J3.2")
+	var inMember, inPlate []string
+	for i := range c.Holes {
+		h := &c.Holes[i]
+		if h.Type == rules.LongSlot {
+			inMember = append(inMember, holeName(c, i))
+		}
+		if c.Plate != nil && h.InPlate().Type == rules.LongSlot {
+			inPlate = append(inPlate, holeName(c, i))
+		}
+	}
+	rule := clause + " permits long slots in only one connected part at each faying surface"
+	f := Finding{ID: id, Clause: clause, Dim: units.Dimensionless, Pass: true}
+	switch {
+	case len(inMember) == 0 && len(inPlate) == 0:
+		return nil
+	case c.Plate == nil:
+		f.Advisory = true
+		f.Where = "long-slot holes: " + rule + "; make the other ply standard holes"
+	case len(inMember) > 0 && len(inPlate) > 0:
+		f.Pass = false
+		f.Where = fmt.Sprintf("long slots in both the member (%s) and the plate (%s) at one faying surface: %s; make one ply standard holes",
+			holeList(inMember), holeList(inPlate), rule)
+	default:
+		in, other, ply := "member", "plate", platePly
+		if len(inPlate) > 0 {
+			in, other, ply = "plate", "member", memberPly
+		}
+		var types []string
+		for _, t := range holeTypesPresent(c, ply) {
+			types = append(types, t.String())
+		}
+		f.Where = fmt.Sprintf("long slots in the %s only, %s holes in the %s: %s", in, strings.Join(types, " and "), other, rule)
+	}
+	return []Finding{f}
+}
+
+// holeList names holes for a finding: every id up to six, else the first
+// and the last with the count.
+func holeList(ids []string) string {
+	if len(ids) <= 6 {
+		return strings.Join(ids, ", ")
+	}
+	return fmt.Sprintf("%s … %s, %d holes", ids[0], ids[len(ids)-1], len(ids))
+}
+
 // minSpacingFindings is spacing.min, J3.3 [J3.4]: the least centre-to-centre
-// distance against 2-2/3·d and, under 360-22, the least clear distance
-// between hole outlines against d.
+// distance against 2-2/3·d and, under 360-22, per ply (when the plies
+// differ) the least clear distance between hole outlines against d.
 func minSpacingFindings(c *engine.Connection) []Finding {
 	const id = "spacing.min"
 	if len(c.Holes) < 2 {
@@ -218,25 +322,35 @@ func minSpacingFindings(c *engine.Connection) []Finding {
 	}
 	clause := c.Edition.Clause("J3.3")
 	d := c.Bolt.D
-	centre, clear := math.Inf(1), math.Inf(1)
-	var ci, cj, ki, kj int
+	centre := math.Inf(1)
+	var ci, cj int
 	for i := range c.Holes {
 		for j := i + 1; j < len(c.Holes); j++ {
 			a, b := &c.Holes[i], &c.Holes[j]
 			if s := math.Hypot(float64(a.X-b.X), float64(a.Y-b.Y)); s < centre-tol {
 				centre, ci, cj = s, i, j
 			}
-			if s := clearDistance(a, b); s < clear-tol {
-				clear, ki, kj = s, i, j
-			}
 		}
 	}
 	limit := c.Edition.MinSpacing(d)
 	fs := []Finding{lengthFinding(id, clause, units.Length(centre), limit,
 		atLeast(units.Length(centre), limit), holeName(c, ci)+"–"+holeName(c, cj))}
-	if c.Edition.ClearSpacingRule() {
+	if !c.Edition.ClearSpacingRule() {
+		return fs
+	}
+	plies, named := pliesOf(c)
+	for _, p := range plies {
+		clear := math.Inf(1)
+		var ki, kj int
+		for i := range c.Holes {
+			for j := i + 1; j < len(c.Holes); j++ {
+				if s := clearDistanceIn(&c.Holes[i], &c.Holes[j], p); s < clear-tol {
+					clear, ki, kj = s, i, j
+				}
+			}
+		}
 		fs = append(fs, lengthFinding(id, clause, units.Length(clear), d,
-			atLeast(units.Length(clear), d), holeName(c, ki)+"–"+holeName(c, kj)+" (clear distance)"))
+			atLeast(units.Length(clear), d), holeName(c, ki)+"–"+holeName(c, kj)+" (clear distance"+p.in(named)+")"))
 	}
 	return fs
 }
@@ -244,12 +358,13 @@ func minSpacingFindings(c *engine.Connection) []Finding {
 // point is a point of the (x, y) plane in mm.
 type point struct{ x, y float64 }
 
-// stadium returns a hole's outline as a segment along its long axis, of
-// length |Dx − Dy|, swept by a circle of radius min(Dx, Dy)/2: a round hole
-// is a degenerate segment, a slot a stadium.
-func stadium(h *engine.Hole) (a, b point, r float64) {
-	cx, cy := float64(h.X), float64(h.Y)
-	dx, dy := float64(h.Dx), float64(h.Dy)
+// stadium returns the outline of a hole of shape s centred at (x, y) as a
+// segment along its long axis, of length |Dx − Dy|, swept by a circle of
+// radius min(Dx, Dy)/2: a round hole is a degenerate segment, a slot a
+// stadium.
+func stadium(x, y units.Length, s engine.HoleShape) (a, b point, r float64) {
+	cx, cy := float64(x), float64(y)
+	dx, dy := float64(s.Dx), float64(s.Dy)
 	if dx >= dy {
 		half := (dx - dy) / 2
 		return point{cx - half, cy}, point{cx + half, cy}, dy / 2
@@ -258,11 +373,15 @@ func stadium(h *engine.Hole) (a, b point, r float64) {
 	return point{cx, cy - half}, point{cx, cy + half}, dx / 2
 }
 
-// clearDistance is the least distance between the outlines of two holes
-// (negative when they overlap).
-func clearDistance(h1, h2 *engine.Hole) float64 {
-	a1, b1, r1 := stadium(h1)
-	a2, b2, r2 := stadium(h2)
+// clearDistance is the least distance between the outlines of two holes in
+// the member's ply (negative when they overlap).
+func clearDistance(h1, h2 *engine.Hole) float64 { return clearDistanceIn(h1, h2, memberPly) }
+
+// clearDistanceIn is the least distance between the outlines of two holes
+// in ply p.
+func clearDistanceIn(h1, h2 *engine.Hole, p ply) float64 {
+	a1, b1, r1 := stadium(h1.X, h1.Y, p.shape(h1))
+	a2, b2, r2 := stadium(h2.X, h2.Y, p.shape(h2))
 	return segmentDistance(a1, b1, a2, b2) - r1 - r2
 }
 
@@ -308,6 +427,7 @@ type edge struct {
 	dist   func(h *engine.Hole) units.Length
 	t      units.Length // thickness of the part, for the maximum
 	max    bool         // J3.5 [J3.6] maximum edge distance applies
+	ply    ply          // the part's holes
 }
 
 // edges lists the edges the holes must clear, in a fixed order: member end,
@@ -331,38 +451,39 @@ type edge struct {
 // than the contact's edge: conservative.
 func edges(c *engine.Connection) []edge {
 	m := &c.Member
-	es := []edge{{name: "member end", dist: func(h *engine.Hole) units.Length { return h.X }, t: m.T, max: true}}
+	es := []edge{{name: "member end", dist: func(h *engine.Hole) units.Length { return h.X }, t: m.T, max: true, ply: memberPly}}
 	switch m.Shape {
 	case engine.Angle, engine.DoubleAngle:
-		es = append(es, edge{name: "member toe", alongX: true, t: m.T, max: true,
+		es = append(es, edge{name: "member toe", alongX: true, t: m.T, max: true, ply: memberPly,
 			dist: func(h *engine.Hole) units.Length { return m.Width - h.Y }})
 	default:
 		es = append(es,
-			edge{name: "member edge (y = 0)", alongX: true, t: m.T, max: true,
+			edge{name: "member edge (y = 0)", alongX: true, t: m.T, max: true, ply: memberPly,
 				dist: func(h *engine.Hole) units.Length { return h.Y }},
-			edge{name: "member edge (y = width)", alongX: true, t: m.T, max: true,
+			edge{name: "member edge (y = width)", alongX: true, t: m.T, max: true, ply: memberPly,
 				dist: func(h *engine.Hole) units.Length { return m.Width - h.Y }})
 	}
 	if p := c.Plate; p != nil {
-		es = append(es, edge{name: "plate free edge", t: p.T, max: true,
+		es = append(es, edge{name: "plate free edge", t: p.T, max: true, ply: platePly,
 			dist: func(h *engine.Hole) units.Length { return p.FreeEdge - h.X }})
 		if p.Width > 0 {
 			onMember := p.Width <= m.Width+tol
 			es = append(es,
-				edge{name: "plate side edge (low y)", alongX: true, t: p.T, max: onMember,
+				edge{name: "plate side edge (low y)", alongX: true, t: p.T, ply: platePly, max: onMember,
 					dist: func(h *engine.Hole) units.Length { return h.Y - p.YMin() }},
-				edge{name: "plate side edge (high y)", alongX: true, t: p.T, max: onMember,
+				edge{name: "plate side edge (high y)", alongX: true, t: p.T, ply: platePly, max: onMember,
 					dist: func(h *engine.Hole) units.Length { return p.YMax() - h.Y }})
 		}
 	}
 	return es
 }
 
-// incrementType is the hole type whose C2 (Table J3.5) applies at edge e:
-// oversized holes at every edge, slots whose long axis is perpendicular to
-// the edge, otherwise none (Standard). The reduction of C2 for slots
-// shorter than the maximum is not taken (conservative).
-func incrementType(h *engine.Hole, e edge) rules.HoleType {
+// incrementType is the hole type whose C2 (Table J3.5) applies at edge e
+// to a hole of shape h in that edge's part: oversized holes at every edge,
+// slots whose long axis is perpendicular to the edge, otherwise none
+// (Standard). The reduction of C2 for slots shorter than the maximum is
+// not taken (conservative).
+func incrementType(h engine.HoleShape, e edge) rules.HoleType {
 	switch {
 	case h.Type == rules.Oversized:
 		return h.Type
@@ -374,7 +495,8 @@ func incrementType(h *engine.Hole, e edge) rules.HoleType {
 
 // minEdgeFindings is edge.min, J3.4 [J3.5] with Tables J3.4 and J3.5: per
 // edge, the hole with the least margin over its minimum, Table J3.4 plus
-// C2 where the hole's long axis is perpendicular to the edge.
+// C2 where the hole's long axis is perpendicular to the edge; the member's
+// edges take the member's holes, the plate's the plate's.
 func minEdgeFindings(c *engine.Connection) []Finding {
 	const id = "edge.min"
 	clause := c.Edition.Clause("J3.4") + ", " + table(c, "Table J3.4")
@@ -391,7 +513,7 @@ func minEdgeFindings(c *engine.Connection) []Finding {
 		margin := units.Length(math.Inf(1))
 		for i := range c.Holes {
 			h := &c.Holes[i]
-			c2, err := c.Edition.EdgeIncrement(c.Bolt.D, incrementType(h, e))
+			c2, err := c.Edition.EdgeIncrement(c.Bolt.D, incrementType(e.ply.shape(h), e))
 			if err != nil {
 				return append(fs, untabulated(id, clause, err))
 			}

@@ -62,7 +62,7 @@ func (l layout) holes(t *testing.T, ed *rules.Edition) []engine.Hole {
 			hs = append(hs, engine.Hole{
 				ID: "H" + strconv.Itoa(len(hs)+1),
 				X:  l.end + units.Length(k)*l.pitch, Y: y,
-				Type: l.hole, Slot: l.slot, Dx: dx, Dy: dy,
+				HoleShape: engine.HoleShape{Type: l.hole, Slot: l.slot, Dx: dx, Dy: dy},
 			})
 		}
 	}
@@ -567,7 +567,7 @@ func TestDetailingCollectsEverything(t *testing.T) {
 	c := withPlate(flat(t, ed, in(4), in(0.5), layout{d: in(0.75), joint: rules.Bearing, hole: rules.Oversized,
 		end: in(7.0 / 8), pitch: in(1.75), perLine: 2, gages: []units.Length{in(2)}}), in(0.375), in(12), in(1.5))
 	c.Holes = append(c.Holes, engine.Hole{ID: "H3", X: c.Holes[1].X + in(9.5), Y: in(2),
-		Type: rules.Oversized, Dx: in(15.0 / 16), Dy: in(15.0 / 16)})
+		HoleShape: engine.HoleShape{Type: rules.Oversized, Dx: in(15.0 / 16), Dy: in(15.0 / 16)}})
 	c.Plate.FreeEdge = c.Holes[2].X + in(1.5)
 	fs := Detailing(c, MemberInfo{})
 	failed := map[string]bool{}
@@ -640,10 +640,10 @@ func TestDetailingWrenchClearance(t *testing.T) {
 // slots against hand geometry (common practice, no source).
 func TestDetailingClearDistance(t *testing.T) {
 	round := func(x, y, d float64) engine.Hole {
-		return engine.Hole{X: in(x), Y: in(y), Dx: in(d), Dy: in(d)}
+		return engine.Hole{X: in(x), Y: in(y), HoleShape: engine.HoleShape{Dx: in(d), Dy: in(d)}}
 	}
 	slot := func(x, y, dx, dy float64) engine.Hole {
-		return engine.Hole{X: in(x), Y: in(y), Dx: in(dx), Dy: in(dy), Type: rules.ShortSlot}
+		return engine.Hole{X: in(x), Y: in(y), HoleShape: engine.HoleShape{Dx: in(dx), Dy: in(dy), Type: rules.ShortSlot}}
 	}
 	for _, tc := range []struct {
 		name string

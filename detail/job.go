@@ -88,6 +88,8 @@ type MemberSpec struct {
 	// Eccentricity (flats only) says whether the design provides for a
 	// bolt group off the bar's centre line (J1.7); default not provided.
 	Eccentricity engine.EndEccentricity
+	// Hole is the member's own hole type (member.hole, member.slot).
+	Hole PlyHole
 }
 
 // PlateSpec is the gusset or splice plate the member bolts to.
@@ -99,6 +101,17 @@ type PlateSpec struct {
 	Steel         SteelSpec
 	Width         units.Length // across the load
 	Edge          units.Length // last bolt to the free edge; 0: not given (propose)
+	// Hole is the plate's own hole type (plate.hole, plate.slot).
+	Hole PlyHole
+}
+
+// PlyHole is one ply's own hole type and slot direction, where the job
+// gives them (member.hole and member.slot, plate.hole and plate.slot);
+// what it leaves out follows bolts.hole and bolts.slot.
+type PlyHole struct {
+	Type             rules.HoleType
+	Slot             rules.SlotDir
+	HasType, HasSlot bool
 }
 
 // BoltSpec is the bolts block: the bolt and, unless explicit holes are
@@ -166,6 +179,35 @@ type Stock struct {
 type Tolerance struct {
 	Position units.Length
 	Diameter units.Length
+}
+
+// MemberHole returns the hole type and slot direction of the member's ply:
+// member.hole and member.slot, else bolts.hole and bolts.slot. The slot
+// direction of a round hole is Transverse.
+func (j *Job) MemberHole() (rules.HoleType, rules.SlotDir) { return j.plyHole(j.Member.Hole) }
+
+// PlateHole returns the hole type and slot direction of the plate's ply:
+// plate.hole and plate.slot, else bolts.hole and bolts.slot (also without
+// a plate block).
+func (j *Job) PlateHole() (rules.HoleType, rules.SlotDir) {
+	if j.Plate == nil {
+		return j.plyHole(PlyHole{})
+	}
+	return j.plyHole(j.Plate.Hole)
+}
+
+func (j *Job) plyHole(h PlyHole) (rules.HoleType, rules.SlotDir) {
+	t, dir := j.Bolts.Hole, j.Bolts.Slot
+	if h.HasType {
+		t = h.Type
+	}
+	if h.HasSlot {
+		dir = h.Slot
+	}
+	if !t.IsSlot() {
+		dir = rules.Transverse
+	}
+	return t, dir
 }
 
 // Given reports whether the job file wrote the scalar at path.
@@ -694,6 +736,9 @@ func (p *parser) parseRoot(root *yaml.Node) error {
 	if err := p.parseBolts(b.vals["bolts"]); err != nil {
 		return err
 	}
+	if err := p.checkPlyHoles(); err != nil {
+		return err
+	}
 	if n := b.vals["holes"]; n != nil {
 		if err := p.parseHoles(n); err != nil {
 			return err
@@ -745,7 +790,7 @@ func (p *parser) parseLoad(n *yaml.Node) error {
 	return nil
 }
 
-var memberKeys = []string{"shape", "size", "legs", "thickness", "width", "grade", "fy", "fu", "length", "area", "xbar", "rmin", "gap", "eccentricity"}
+var memberKeys = []string{"shape", "size", "legs", "thickness", "width", "grade", "fy", "fu", "length", "area", "xbar", "rmin", "gap", "eccentricity", "hole", "slot"}
 
 func parseShape(s string) (engine.Shape, error) {
 	for _, sh := range []engine.Shape{engine.Angle, engine.DoubleAngle, engine.Flat} {
@@ -836,6 +881,52 @@ func (p *parser) parseMember(n *yaml.Node) error {
 			return err
 		}
 	}
+	m.Hole, err = p.parsePlyHole(b)
+	return err
+}
+
+// parsePlyHole reads a ply's own hole and slot keys of block b.
+func (p *parser) parsePlyHole(b *block) (PlyHole, error) {
+	var h PlyHole
+	var err error
+	if b.has("hole") {
+		if h.Type, err = enum(p, b.vals["hole"], b.sub("hole"), rules.ParseHoleType); err != nil {
+			return h, err
+		}
+		h.HasType = true
+	}
+	if b.has("slot") {
+		if h.Slot, err = enum(p, b.vals["slot"], b.sub("slot"), rules.ParseSlotDir); err != nil {
+			return h, err
+		}
+		h.HasSlot = true
+	}
+	return h, nil
+}
+
+// checkPlyHoles rejects a ply's slot direction given for round holes: the
+// ply's hole type (its own, else bolts.hole) must be a slot.
+func (p *parser) checkPlyHoles() error {
+	j := p.job
+	check := func(ply string, h PlyHole, t rules.HoleType) error {
+		if !h.HasSlot || t.IsSlot() {
+			return nil
+		}
+		from := ply + ".hole"
+		if !h.HasType {
+			from = "bolts.hole"
+		}
+		return j.inputErr(ply+".slot", fmt.Sprintf("is for slotted holes, and the %s's holes are %s (%s)", ply, t, from),
+			fmt.Sprintf("give %s.hole: short-slot or long-slot, or remove %s.slot", ply, ply))
+	}
+	mt, _ := j.MemberHole()
+	if err := check("member", j.Member.Hole, mt); err != nil {
+		return err
+	}
+	if j.Plate != nil {
+		pt, _ := j.PlateHole()
+		return check("plate", j.Plate.Hole, pt)
+	}
 	return nil
 }
 
@@ -923,7 +1014,7 @@ func (p *parser) parseSteel(b *block) (SteelSpec, error) {
 	return s, nil
 }
 
-var plateKeys = []string{"kind", "thickness", "grade", "fy", "fu", "width", "edge"}
+var plateKeys = []string{"kind", "thickness", "grade", "fy", "fu", "width", "edge", "hole", "slot"}
 
 func parsePlateKind(s string) (engine.PlateKind, error) {
 	switch s {
@@ -969,6 +1060,9 @@ func (p *parser) parsePlate(n *yaml.Node) error {
 		if pl.Edge, err = p.length(b.vals["edge"], "plate.edge", positive); err != nil {
 			return err
 		}
+	}
+	if pl.Hole, err = p.parsePlyHole(b); err != nil {
+		return err
 	}
 	p.job.Plate = pl
 	return nil

@@ -280,12 +280,12 @@ type group struct {
 	tp             units.Length
 	lines, perLine int
 	nT             int
-	tmpl           *Design // member, bolt, plate steel, demand; no holes
-	hole           rules.HoleType
-	slot           rules.SlotDir
-	dx, dy         units.Length
-	fits           bool // the hole fits the leg or flat at all
-	viable         bool // not ruled out by the bounds
+	tmpl           *Design           // member, bolt, plate steel, demand; no holes
+	shape          engine.HoleShape  // the member's holes
+	plate          *engine.HoleShape // the plate's, nil when the member's; shared, never changed
+	dx, dy         units.Length      // the member's hole extents
+	fits           bool              // the hole fits the leg or flat at all
+	viable         bool              // not ruled out by the bounds
 
 	pitch, end, edge, gage2 []units.Length
 	stag                    units.Length // stagger applied (lines > 1)
@@ -483,15 +483,14 @@ func (p *problem) snap(v units.Length) units.Length {
 	return v
 }
 
-// minEdgeTo is the Table J3.4 minimum plus C2 of Table J3.5 at an edge
-// running along x (a side or toe) or along y (an end).
-func (p *problem) minEdgeTo(g *group, alongX bool) units.Length {
+// minEdgeTo is the Table J3.4 minimum plus C2 of Table J3.5 for a hole of
+// shape hs at an edge running along x (a side or toe) or along y (an end).
+func (p *problem) minEdgeTo(g *group, hs engine.HoleShape, alongX bool) units.Length {
 	emin, err := p.ed.MinEdge(g.d)
 	if err != nil {
 		return 0
 	}
-	h := engine.Hole{Type: g.hole, Slot: g.slot}
-	c2, err := p.ed.EdgeIncrement(g.d, incrementType(&h, edge{alongX: alongX}))
+	c2, err := p.ed.EdgeIncrement(g.d, incrementType(hs, edge{alongX: alongX}))
 	if err != nil {
 		return emin
 	}
@@ -505,13 +504,14 @@ func (p *problem) ranges(g *group) {
 	j, ed := p.job, p.ed
 	c := &g.tmpl.Conn
 	m := &c.Member
-	g.hole = j.Bolts.Hole
-	g.slot = rules.Transverse
-	if g.hole.IsSlot() {
-		g.slot = j.Bolts.Slot
+	g.shape, g.plate, _ = j.plyShapes(ed, g.d) // tabulated: checked by newProblem
+	g.dx, g.dy = g.shape.Dx, g.shape.Dy
+	// Clear distances (360-22) hold in both plies: the larger hole sets them.
+	plate := g.shape
+	if g.plate != nil {
+		plate = *g.plate
 	}
-	hs, _ := ed.Hole(g.d, g.hole) // tabulated: checked by newProblem
-	g.dx, g.dy = holeExtent(hs, g.hole, g.slot)
+	dxMax, dyMax := max(g.dx, plate.Dx), max(g.dy, plate.Dy)
 	room := m.Width
 	if m.Shape != engine.Flat {
 		room = m.Width - m.T
@@ -532,14 +532,14 @@ func (p *problem) ranges(g *group) {
 	default:
 		lo := ed.MinSpacing(g.d)
 		if ed.ClearSpacingRule() {
-			lo = max(lo, g.d+g.dx)
+			lo = max(lo, g.d+dxMax)
 		}
 		g.pitch = p.grid(p.gridUp(lo), min(p.gridDown(ed.MaxSpacing(tThin, g.tmpl.Info.Weathering)), four))
 	}
 	if j.Given("bolts.end") {
 		g.end = []units.Length{j.Bolts.End}
 	} else {
-		g.end = p.grid(p.gridUp(p.minEdgeTo(g, false)), min(p.gridDown(ed.MaxEdge(m.T)), four))
+		g.end = p.grid(p.gridUp(p.minEdgeTo(g, g.shape, false)), min(p.gridDown(ed.MaxEdge(m.T)), four))
 	}
 	switch {
 	case c.Plate == nil:
@@ -547,11 +547,11 @@ func (p *problem) ranges(g *group) {
 	case j.Plate.Edge > 0:
 		g.edge = []units.Length{j.Plate.Edge}
 	default:
-		g.edge = p.grid(p.gridUp(p.minEdgeTo(g, false)), min(p.gridDown(ed.MaxEdge(c.Plate.T)), four))
+		g.edge = p.grid(p.gridUp(p.minEdgeTo(g, plate, false)), min(p.gridDown(ed.MaxEdge(c.Plate.T)), four))
 	}
 	lo2 := ed.MinSpacing(g.d)
 	if ed.ClearSpacingRule() {
-		lo2 = max(lo2, g.d+g.dy)
+		lo2 = max(lo2, g.d+dyMax)
 	}
 	switch {
 	case g.lines == 1:
@@ -595,7 +595,7 @@ func (p *problem) gagesFor(g *group, i int) []units.Length {
 	default:
 		m := &g.tmpl.Conn.Member
 		span := units.Length(g.lines-1) * g.gage2[i]
-		side := p.minEdgeTo(g, true)
+		side := p.minEdgeTo(g, g.shape, true)
 		maxEdge := p.ed.MaxEdge(m.T)
 		if m.Shape == engine.Flat {
 			// J1.7: the group centred on the bar, where the edge rules
@@ -667,13 +667,8 @@ func (b boltBounds) pass(n int) bool {
 func (p *problem) perBolt(t *Design) boltBounds {
 	c := t.Conn
 	far := units.Length(1e7)
-	hs, _ := p.ed.Hole(c.Bolt.D, p.job.Bolts.Hole)
-	slot := rules.Transverse
-	if p.job.Bolts.Hole.IsSlot() {
-		slot = p.job.Bolts.Slot
-	}
-	dx, dy := holeExtent(hs, p.job.Bolts.Hole, slot)
-	c.Holes = []engine.Hole{{X: far, Y: dy, Type: p.job.Bolts.Hole, Slot: slot, Dx: dx, Dy: dy}}
+	shape, plate, _ := p.job.plyShapes(p.ed, c.Bolt.D) // tabulated: checked by newProblem
+	c.Holes = []engine.Hole{{X: far, Y: shape.Dy, HoleShape: shape, Plate: plate}}
 	b := boltBounds{demand: c.Demand}
 	b.avail = append(b.avail, engine.BoltShear(&c).Available, engine.MemberBearing(&c).Available)
 	if c.Bolt.Joint == rules.SlipCritical {
@@ -784,7 +779,7 @@ func (p *problem) design(c *cand) (*Design, bool) {
 				return nil, false
 			}
 			conn.Holes = append(conn.Holes, engine.Hole{ID: holeID(len(conn.Holes)), X: x, Y: y,
-				Type: g.hole, Slot: g.slot, Dx: g.dx, Dy: g.dy})
+				HoleShape: g.shape, Plate: g.plate})
 		}
 	}
 	if t.Conn.Plate != nil {
@@ -799,7 +794,7 @@ func (p *problem) design(c *cand) (*Design, bool) {
 		pl.FreeEdge = xmax + g.edge[c.k]
 		pl.YCentre = ysum / units.Length(len(conn.Holes))
 		for _, h := range conn.Holes {
-			if h.Y-h.Dy/2 < pl.YMin()-eps || h.Y+h.Dy/2 > pl.YMax()+eps {
+			if dy := h.InPlate().Dy; h.Y-dy/2 < pl.YMin()-eps || h.Y+dy/2 > pl.YMax()+eps {
 				return nil, false
 			}
 		}

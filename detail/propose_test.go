@@ -60,6 +60,11 @@ func drawProposeJobOf(t *rapid.T, shapes []string, fixGage bool) string {
 	w("standard: %s", rapid.SampledFrom(rules.Names()).Draw(t, "standard"))
 	w("method: %s", rapid.SampledFrom([]string{"lrfd", "asd"}).Draw(t, "method"))
 	shape := rapid.SampledFrom(shapes).Draw(t, "shape")
+	// Hole types: 3 puts long slots in one ply (J3.2 [J3.3]: only one
+	// connected part per faying surface), 4 oversized holes in the plate
+	// only; the plies' own keys then differ from bolts.hole.
+	holeKind := rapid.IntRange(0, 6).Draw(t, "holeKind")
+	longInPlate := rapid.Bool().Draw(t, "longInPlate")
 	in := func(v float64) string { // a length in the job's units
 		if us {
 			return units.FormatJob(units.Length(v)*units.Inch, sys)
@@ -103,6 +108,10 @@ func drawProposeJobOf(t *rapid.T, shapes []string, fixGage bool) string {
 		w("  size: %s", rapid.SampledFrom(sizes).Draw(t, "size"))
 	}
 	w("  grade: %s", rapid.SampledFrom([]string{"A36", "A572-50", "A588"}).Draw(t, "grade"))
+	if holeKind == 3 && !longInPlate {
+		w("  hole: long-slot")
+		w("  slot: transverse")
+	}
 	thickLine := ""
 	if rapid.IntRange(0, 4).Draw(t, "noPlate") > 0 {
 		w("plate:")
@@ -125,6 +134,13 @@ func drawProposeJobOf(t *rapid.T, shapes []string, fixGage bool) string {
 		if rapid.IntRange(0, 3).Draw(t, "edgeGiven") == 0 {
 			w("  edge: %s", in(map[bool]float64{true: 1.5, false: 40}[us]))
 		}
+		switch {
+		case holeKind == 3 && longInPlate:
+			w("  hole: long-slot")
+			w("  slot: transverse")
+		case holeKind == 4:
+			w("  hole: oversized")
+		}
 		th := rapid.SliceOfNDistinct(rapid.SampledFrom(tps), 1, 2, func(v float64) float64 { return v }).Draw(t, "thicknesses")
 		var ts []string
 		for _, v := range th {
@@ -134,7 +150,7 @@ func drawProposeJobOf(t *rapid.T, shapes []string, fixGage bool) string {
 	}
 	w("bolts:")
 	w("  threads: %s", rapid.SampledFrom([]string{"included", "excluded"}).Draw(t, "threads"))
-	switch rapid.IntRange(0, 6).Draw(t, "holeKind") {
+	switch holeKind {
 	case 0:
 		w("  joint: slip-critical")
 		w("  surface: %s", rapid.SampledFrom([]string{"A", "B"}).Draw(t, "surface"))
@@ -146,10 +162,9 @@ func drawProposeJobOf(t *rapid.T, shapes []string, fixGage bool) string {
 	case 2:
 		w("  joint: pretensioned")
 		w("  deformation: not-considered")
-	case 3:
-		w("  hole: long-slot")
-		w("  slot: transverse")
+	case 3, 4:
 		w("  joint: slip-critical")
+		w("  surface: %s", rapid.SampledFrom([]string{"A", "B"}).Draw(t, "surface"))
 	default:
 		w("  joint: bearing")
 	}

@@ -104,15 +104,8 @@ func (d *Design) Summary() [][2]string {
 			p.length(pl.T), d.Info.PlateGrade, pl.Kind, p.length(pl.Width), p.length(pl.FreeEdge-lastX(c.Holes)))})
 	}
 	b := c.Bolt
-	hole := "standard"
-	if len(c.Holes) > 0 {
-		hole = c.Holes[0].Type.String()
-		if c.Holes[0].Type.IsSlot() {
-			hole += " " + c.Holes[0].Slot.String()
-		}
-	}
-	bolts := fmt.Sprintf("%d × %s %s, threads %s, %s joint, %s holes",
-		len(c.Holes), boltSize(b.D, d.Job.Units), b.Grade.Name, b.Threads, b.Joint, hole)
+	bolts := fmt.Sprintf("%d × %s %s, threads %s, %s joint, %s",
+		len(c.Holes), boltSize(b.D, d.Job.Units), b.Grade.Name, b.Threads, b.Joint, holeKinds(&c))
 	if b.FillerT > 0 {
 		bolts += ", fillers " + p.length(b.FillerT)
 		if b.FillerDeveloped {
@@ -126,6 +119,27 @@ func (d *Design) Summary() [][2]string {
 	}
 	rows = append(rows, [2]string{"demand", demand})
 	return rows
+}
+
+// holeKinds names the holes of a design for people, by the first hole:
+// "standard holes", "long-slot transverse holes"; when the plate's ply
+// differs, "long-slot transverse holes in the member, standard in the
+// plate".
+func holeKinds(c *engine.Connection) string {
+	if len(c.Holes) == 0 {
+		return "standard holes"
+	}
+	kind := func(s engine.HoleShape) string {
+		if s.Type.IsSlot() {
+			return s.Type.String() + " " + s.Slot.String()
+		}
+		return s.Type.String()
+	}
+	h := &c.Holes[0]
+	if c.Plate == nil || !h.PliesDiffer() || kind(h.HoleShape) == kind(*h.Plate) {
+		return kind(h.HoleShape) + " holes"
+	}
+	return kind(h.HoleShape) + " holes in the member, " + kind(*h.Plate) + " in the plate"
 }
 
 func lastX(hs []engine.Hole) units.Length {

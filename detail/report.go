@@ -162,6 +162,16 @@ type jsonHole struct {
 	Length   jsonNum `json:"length,omitempty"`
 	Type     string  `json:"type"`
 	Slot     string  `json:"slot,omitempty"`
+	// Plate is the hole in the plate's ply where it differs from the
+	// member's (the fields above).
+	Plate *jsonPlyHole `json:"plate,omitempty"`
+}
+
+type jsonPlyHole struct {
+	Diameter jsonNum `json:"diameter"`
+	Length   jsonNum `json:"length,omitempty"`
+	Type     string  `json:"type"`
+	Slot     string  `json:"slot,omitempty"`
 }
 
 type jsonReport struct {
@@ -216,11 +226,21 @@ func (r *Report) document() jsonReport {
 			Measured: jsonNum(sys.ToJob(f.Measured, f.Dim)), Limit: jsonNum(sys.ToJob(f.Limit, f.Dim)),
 			Unit: sys.Label(f.Dim), Pass: f.Pass, Advisory: f.Advisory, Where: f.Where})
 	}
-	for _, h := range d.Conn.Holes {
-		jh := jsonHole{ID: h.ID, X: length(h.X), Y: length(h.Y), Diameter: length(min(h.Dx, h.Dy)), Type: h.Type.String()}
-		if h.Type.IsSlot() {
-			jh.Length = length(max(h.Dx, h.Dy))
-			jh.Slot = h.Slot.String()
+	ply := func(s engine.HoleShape) jsonPlyHole {
+		j := jsonPlyHole{Diameter: length(min(s.Dx, s.Dy)), Type: s.Type.String()}
+		if s.Type.IsSlot() {
+			j.Length = length(max(s.Dx, s.Dy))
+			j.Slot = s.Slot.String()
+		}
+		return j
+	}
+	for i := range d.Conn.Holes {
+		h := &d.Conn.Holes[i]
+		m := ply(h.HoleShape)
+		jh := jsonHole{ID: h.ID, X: length(h.X), Y: length(h.Y), Diameter: m.Diameter, Length: m.Length, Type: m.Type, Slot: m.Slot}
+		if d.Conn.Plate != nil && h.PliesDiffer() {
+			p := ply(*h.Plate)
+			jh.Plate = &p
 		}
 		doc.Holes = append(doc.Holes, jh)
 	}

@@ -504,8 +504,12 @@ func (l sheetLayout) plateView(d *Design) View {
 	// turn maps the member frame onto the plate frame (half a turn).
 	turn := func(x, y float64) Point { return Point{fe - x, ymax - y} }
 	p := Part{Name: "plate", Contour: l.rect(length, width), Thickness: l.len(pl.T), Pieces: 1}
-	for _, h := range c.Holes {
-		p.Holes = append(p.Holes, SheetHole{ID: h.ID, Centre: turn(l.len(h.X), l.len(h.Y)), Dx: l.len(h.Dx), Dy: l.len(h.Dy), Type: h.Type})
+	for i := range c.Holes {
+		h := &c.Holes[i]
+		// The plate's own holes; a half turn keeps each hole's extents
+		// along the part's x and y.
+		hs := h.InPlate()
+		p.Holes = append(p.Holes, SheetHole{ID: h.ID, Centre: turn(l.len(h.X), l.len(h.Y)), Dx: l.len(hs.Dx), Dy: l.len(hs.Dy), Type: hs.Type})
 	}
 	v := View{Part: p}
 	l.annotate(&v, true)
@@ -656,7 +660,7 @@ func HowMade(t, d units.Length, sys units.System) string {
 }
 
 // holeText names a hole's size: 13/16" DIA; 22 x 26 SLOT.
-func (l sheetLayout) holeText(h engine.Hole) string {
+func (l sheetLayout) holeText(h engine.HoleShape) string {
 	w := l.people(l.len(min(h.Dx, h.Dy)))
 	if !h.Type.IsSlot() {
 		return w + " DIA"
@@ -669,7 +673,7 @@ func (l sheetLayout) holeText(h engine.Hole) string {
 func (l sheetLayout) schedule(s *Sheet, d *Design, top float64) float64 {
 	h := l.h
 	c := &d.Conn
-	hole := c.Holes[0]
+	hole, plate := c.Holes[0].HoleShape, c.Holes[0].InPlate() // each ply's holes are all alike in a design
 	limit := l.limit(l.len(PunchLimit(c.Bolt.D, l.sys)))
 	made := func(t units.Length) string {
 		return fmt.Sprintf("%s (t %s, punch limit %s)", HowMade(t, c.Bolt.D, l.sys), l.limit(l.len(t)), limit)
@@ -683,7 +687,7 @@ func (l sheetLayout) schedule(s *Sheet, d *Design, top float64) float64 {
 		{part, fmt.Sprint(len(c.Holes)), l.holeText(hole), strings.ToUpper(hole.Type.String()), made(c.Member.T)},
 	}
 	if c.Plate != nil {
-		rows = append(rows, []string{"PLATE", fmt.Sprint(len(c.Holes)), l.holeText(hole), strings.ToUpper(hole.Type.String()), made(c.Plate.T)})
+		rows = append(rows, []string{"PLATE", fmt.Sprint(len(c.Holes)), l.holeText(plate), strings.ToUpper(plate.Type.String()), made(c.Plate.T)})
 	}
 	s.Schedule = rows
 	// Each column as wide as its widest entry, plus two text heights.
@@ -727,10 +731,6 @@ func (l sheetLayout) titleBlock(s *Sheet, r *Report, top float64) {
 	if l.sys == units.SI {
 		unitName = "MILLIMETRES"
 	}
-	hole := c.Holes[0].Type.String()
-	if c.Holes[0].Type.IsSlot() {
-		hole += " " + c.Holes[0].Slot.String()
-	}
 	pieces := ""
 	if c.Member.Pieces > 1 {
 		pieces = fmt.Sprintf(" (%d pieces each)", c.Member.Pieces)
@@ -747,8 +747,8 @@ func (l sheetLayout) titleBlock(s *Sheet, r *Report, top float64) {
 		fields[4][1] += ", plate " + l.limit(l.len(c.Plate.T))
 	}
 	fields = append(fields,
-		[2]string{"BOLTS", fmt.Sprintf("(%d) %s %s, threads %s, %s joint, %s holes", len(c.Holes),
-			boltSize(c.Bolt.D, l.sys), c.Bolt.Grade.Name, c.Bolt.Threads, c.Bolt.Joint, hole)},
+		[2]string{"BOLTS", fmt.Sprintf("(%d) %s %s, threads %s, %s joint, %s", len(c.Holes),
+			boltSize(c.Bolt.D, l.sys), c.Bolt.Grade.Name, c.Bolt.Threads, c.Bolt.Joint, holeKinds(c))},
 		[2]string{"STANDARD", fmt.Sprintf("AISC %s %s", strings.TrimPrefix(c.Edition.Name, "aisc"), strings.ToUpper(c.Method.String()))},
 		[2]string{"GOVERNING", fmt.Sprintf("%s (%s) ratio %s - %s", g.ID, g.Clause, ratio(g.Ratio), verdict)},
 		[2]string{"UNITS", unitName},

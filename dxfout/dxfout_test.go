@@ -29,14 +29,16 @@ var jobs = []string{
 }
 
 // inlineJobs are jobs of our own for the hole types the job files lack:
-// long slots along the load (US) and oversized holes in one row (SI).
+// long slots along the load in the member with standard holes in the plate
+// (US; AISC 360-22 J3.3 permits long slots in one ply of a faying surface)
+// and oversized holes in one row (SI).
 var inlineJobs = map[string]string{
 	"long-slot.yaml": `
 mark: LS-1
 units: us
 load: {required: 40 kip}
 member: {shape: angle, size: L4x4x1/2, grade: A36}
-plate: {thickness: 1/2 in, grade: A36, width: 8 in, edge: 2 in}
+plate: {thickness: 1/2 in, grade: A36, width: 8 in, edge: 2 in, hole: standard}
 bolts: {diameter: 3/4 in, grade: A325, joint: slip-critical, hole: long-slot, slot: longitudinal,
         per_line: 2, pitch: 4 in, end: 2 in, gage: 2-1/2 in}
 `,
@@ -96,18 +98,24 @@ type wantHole struct {
 	alongY              bool
 }
 
-// jobHoles returns the design's holes in the job's units: in the member's
-// frame, or in the plate's (x' = FreeEdge − x, y' = YMax − y, see
-// detail.Sheet), computed here from the engine's model.
+// jobHoles returns the design's holes in the job's units: the member's ply
+// in the member's frame, or the plate's ply in the plate's frame (x' =
+// FreeEdge − x, y' = YMax − y, see detail.Sheet), computed here from the
+// engine's model.
 func jobHoles(r *detail.Report, plate bool) []wantHole {
 	c := &r.Design.Conn
 	sys := r.Design.Job.Units
 	in := func(l units.Length) float64 { return sys.ToJob(float64(l), units.DimLength) }
 	var out []wantHole
-	for _, h := range c.Holes {
-		w := wantHole{x: in(h.X), y: in(h.Y), width: in(min(h.Dx, h.Dy))}
-		if h.Type.IsSlot() {
-			w.length, w.alongY = in(max(h.Dx, h.Dy)), h.Dy > h.Dx
+	for i := range c.Holes {
+		h := &c.Holes[i]
+		s := h.HoleShape
+		if plate {
+			s = h.InPlate()
+		}
+		w := wantHole{x: in(h.X), y: in(h.Y), width: in(min(s.Dx, s.Dy))}
+		if s.Type.IsSlot() {
+			w.length, w.alongY = in(max(s.Dx, s.Dy)), s.Dy > s.Dx
 		}
 		if plate {
 			w.x, w.y = in(c.Plate.FreeEdge-h.X), in(c.Plate.YMax()-h.Y)

@@ -21,22 +21,25 @@ func BearingRn(cb, ct float64, d, lc, t units.Length, Fu units.Stress) (bearing,
 // clearDistances returns lc for every hole: the clear distance, in the
 // direction the part is pulled relative to the bolt (dir −1: toward −x; +1:
 // toward +x), from the hole's edge to the edge of the next hole in its line
-// of force or to the part's edge at x = edge. A hole in the same row
+// of force or to the part's edge at x = edge. ply gives each hole's shape
+// in the part (the member's or the plate's). A hole in the same row
 // (within rowSlack along the load, as a measured hole a little off its row
 // is) is beside the bolt, not ahead of it.
-func clearDistances(holes []Hole, dir float64, edge, rowSlack units.Length) []units.Length {
+func clearDistances(holes []Hole, ply func(*Hole) HoleShape, dir float64, edge, rowSlack units.Length) []units.Length {
 	lc := make([]units.Length, len(holes))
-	for i, h := range holes {
-		best := units.Length(dir*float64(edge-h.X)) - h.Dx/2
-		for j, o := range holes {
+	for i := range holes {
+		h, hs := &holes[i], ply(&holes[i])
+		best := units.Length(dir*float64(edge-h.X)) - hs.Dx/2
+		for j := range holes {
 			if j == i {
 				continue
 			}
+			o, osh := &holes[j], ply(&holes[j])
 			ahead := units.Length(dir * float64(o.X-h.X))
-			if ahead <= rowSlack || math.Abs(float64(o.Y-h.Y)) >= float64(max(h.Dy, o.Dy))/2 {
+			if ahead <= rowSlack || math.Abs(float64(o.Y-h.Y)) >= float64(max(hs.Dy, osh.Dy))/2 {
 				continue
 			}
-			if d := ahead - (o.Dx+h.Dx)/2; d < best {
+			if d := ahead - (osh.Dx+hs.Dx)/2; d < best {
 				best = d
 			}
 		}
@@ -45,12 +48,19 @@ func clearDistances(holes []Hole, dir float64, edge, rowSlack units.Length) []un
 	return lc
 }
 
-// bearingShares computes every hole's bearing and tearout in one part.
-func bearingShares(c *Connection, t units.Length, Fu units.Stress, dir float64, edge units.Length) []BoltShare {
-	lcs := clearDistances(c.Holes, dir, edge, LineSlack(c.Bolt.D))
+// memberPly and platePly give a hole's shape in the member and in the plate.
+func memberPly(h *Hole) HoleShape { return h.HoleShape }
+func platePly(h *Hole) HoleShape  { return h.InPlate() }
+
+// bearingShares computes every hole's bearing and tearout in one part,
+// each hole of the shape ply gives it in that part.
+func bearingShares(c *Connection, ply func(*Hole) HoleShape, t units.Length, Fu units.Stress, dir float64, edge units.Length) []BoltShare {
+	lcs := clearDistances(c.Holes, ply, dir, edge, LineSlack(c.Bolt.D))
 	shares := make([]BoltShare, len(c.Holes))
-	for i, h := range c.Holes {
-		cb, ct := c.Edition.BearingCoefficients(h.Type, h.Slot, c.Bolt.DeformationConsidered)
+	for i := range c.Holes {
+		h := &c.Holes[i]
+		hs := ply(h)
+		cb, ct := c.Edition.BearingCoefficients(hs.Type, hs.Slot, c.Bolt.DeformationConsidered)
 		b, tr := BearingRn(cb, ct, c.Bolt.D, lcs[i], t, Fu)
 		s := BoltShare{Hole: h.ID, Lc: lcs[i], Bearing: b, Tearout: tr, Rn: b, Governed: "bearing"}
 		if tr < b {
@@ -61,7 +71,7 @@ func bearingShares(c *Connection, t units.Length, Fu units.Stress, dir float64, 
 	return shares
 }
 
-func bearingResult(c *Connection, id, part string, t units.Length, Fu units.Stress, shares []BoltShare) Result {
+func bearingResult(c *Connection, id, part string, ply func(*Hole) HoleShape, t units.Length, Fu units.Stress, shares []BoltShare) Result {
 	var Rn units.Force
 	lcMin := units.Length(math.Inf(1))
 	tear := 0
@@ -74,7 +84,8 @@ func bearingResult(c *Connection, id, part string, t units.Length, Fu units.Stre
 	}
 	cb, ct := 0.0, 0.0
 	if len(c.Holes) > 0 {
-		cb, ct = c.Edition.BearingCoefficients(c.Holes[0].Type, c.Holes[0].Slot, c.Bolt.DeformationConsidered)
+		hs := ply(&c.Holes[0])
+		cb, ct = c.Edition.BearingCoefficients(hs.Type, hs.Slot, c.Bolt.DeformationConsidered)
 	}
 	r := finish(c, id, "J3.10", Rn, c.Edition.BearingFactor(), []Value{
 		{"d", float64(c.Bolt.D), units.DimLength},
@@ -95,16 +106,17 @@ func bearingResult(c *Connection, id, part string, t units.Length, Fu units.Stre
 // Clause: J3.10 [J3.11]
 func MemberBearing(c *Connection) Result {
 	t := units.Length(c.Member.Pieces) * c.Member.T
-	shares := bearingShares(c, t, c.Member.Fu, -1, 0)
-	return bearingResult(c, "member.bearing", "member, toward the member end", t, c.Member.Fu, shares)
+	shares := bearingShares(c, memberPly, t, c.Member.Fu, -1, 0)
+	return bearingResult(c, "member.bearing", "member, toward the member end", memberPly, t, c.Member.Fu, shares)
 }
 
 // PlateBearing is bearing and tearout at the plate's holes, lc measured
-// toward the plate's free edge.
+// toward the plate's free edge; coefficients and clear distances are the
+// plate ply's holes' (Hole.InPlate).
 //
 // Clause: J3.10 [J3.11]
 func PlateBearing(c *Connection) Result {
 	p := c.Plate
-	shares := bearingShares(c, p.T, p.Fu, 1, p.FreeEdge)
-	return bearingResult(c, "plate.bearing", "plate, toward its free edge", p.T, p.Fu, shares)
+	shares := bearingShares(c, platePly, p.T, p.Fu, 1, p.FreeEdge)
+	return bearingResult(c, "plate.bearing", "plate, toward its free edge", platePly, p.T, p.Fu, shares)
 }

@@ -42,6 +42,7 @@ type blockPart struct {
 	xEdge  units.Length
 	toward float64 // −1 member, +1 plate
 	name   string  // "member" or "plate"
+	ply    func(*Hole) HoleShape
 }
 
 // HoleChord is the length along the load that a line parallel to the load,
@@ -68,6 +69,12 @@ func HoleChord(a, b, dy units.Length) units.Length {
 
 // blocks enumerates every block of the part and returns them all.
 func (p blockPart) blocks(c *Connection) []block {
+	// every hole as this part has it (the member's ply or the plate's)
+	holes := make([]Hole, len(c.Holes))
+	for i := range c.Holes {
+		holes[i] = c.Holes[i]
+		holes[i].HoleShape, holes[i].Plate = p.ply(&c.Holes[i]), nil
+	}
 	allow := c.Edition.HoleAllowance()
 	lines := GageLines(c)
 	nl := len(lines)
@@ -78,7 +85,7 @@ func (p blockPart) blocks(c *Connection) []block {
 	for i, ln := range lines {
 		inner[i] = ln[0]
 		for _, h := range ln {
-			if dist(c.Holes[h]) > dist(c.Holes[inner[i]]) {
+			if dist(holes[h]) > dist(holes[inner[i]]) {
 				inner[i] = h
 			}
 		}
@@ -90,7 +97,7 @@ func (p blockPart) blocks(c *Connection) []block {
 	// their whole length.
 	shearTo := func(y, D units.Length) (Agv, Anv units.Area) {
 		net := D
-		for _, h := range c.Holes {
+		for _, h := range holes {
 			cut := HoleChord(h.Dx+allow, h.Dy+allow, h.Y-y)
 			d := dist(h)
 			if lo, hi := max(d-cut/2, 0), min(d+cut/2, D); hi > lo {
@@ -106,7 +113,7 @@ func (p blockPart) blocks(c *Connection) []block {
 	inside := func(h Hole, D units.Length) bool { return dist(h) < D+h.Dx/2-eps }
 	// shear is the shear plane along line i to its innermost hole.
 	shear := func(i int) (Agv, Anv units.Area) {
-		hi := c.Holes[inner[i]]
+		hi := holes[inner[i]]
 		return shearTo(hi.Y, dist(hi))
 	}
 	// across is a tension plane square to the load at the distance D from
@@ -114,7 +121,7 @@ func (p blockPart) blocks(c *Connection) []block {
 	// cuts (B4.3 width across the load).
 	across := func(y0, y1, D units.Length) units.Area {
 		net := y1 - y0
-		for _, h := range c.Holes {
+		for _, h := range holes {
 			w := HoleChord(h.Dy+allow, h.Dx+allow, dist(h)-D)
 			lo, hi := max(h.Y-w/2, y0), min(h.Y+w/2, y1)
 			if hi > lo {
@@ -136,17 +143,17 @@ func (p blockPart) blocks(c *Connection) []block {
 		if a < 0 {
 			y0 = p.low
 		} else {
-			y0 = c.Holes[inner[a]].Y
+			y0 = holes[inner[a]].Y
 		}
 		if b >= nl {
 			y1 = p.high
 		} else {
-			y1 = c.Holes[inner[b]].Y
+			y1 = holes[inner[b]].Y
 		}
 		var stops []Hole
 		net := y1 - y0
 		half := func(i int) {
-			h := c.Holes[inner[i]]
+			h := holes[inner[i]]
 			stops = append(stops, h)
 			net -= (h.Dy + allow) / 2
 		}
@@ -155,7 +162,7 @@ func (p blockPart) blocks(c *Connection) []block {
 		}
 		for k, i := range between {
 			if mask&(1<<k) != 0 {
-				h := c.Holes[inner[i]]
+				h := holes[inner[i]]
 				stops = append(stops, h)
 				net -= h.Dy + allow
 			}
@@ -184,7 +191,7 @@ func (p blockPart) blocks(c *Connection) []block {
 			return dist(stops[len(stops)-1])
 		}
 		n := 0
-		for _, h := range c.Holes {
+		for _, h := range holes {
 			if h.Y+h.Dy/2 > y0-eps && h.Y-h.Dy/2 < y1+eps && inside(h, at(h.Y)) {
 				n++
 			}
@@ -237,12 +244,12 @@ func (p blockPart) blocks(c *Connection) []block {
 		// line of its own that ends early)
 		y0, y1 := p.low, p.high
 		if a >= 0 {
-			y0 = c.Holes[inner[a]].Y
+			y0 = holes[inner[a]].Y
 		}
 		if b < nl {
-			y1 = c.Holes[inner[b]].Y
+			y1 = holes[inner[b]].Y
 		}
-		for _, h := range c.Holes {
+		for _, h := range holes {
 			if h.Y+h.Dy/2 <= y0+eps || h.Y-h.Dy/2 >= y1-eps {
 				continue
 			}
@@ -256,7 +263,7 @@ func (p blockPart) blocks(c *Connection) []block {
 			}
 			nt := across(y0, y1, D)
 			bolts := 0
-			for _, o := range c.Holes {
+			for _, o := range holes {
 				if o.Y+o.Dy/2 > y0-eps && o.Y-o.Dy/2 < y1+eps && inside(o, D) {
 					bolts++
 				}
@@ -345,7 +352,7 @@ func MemberBlockShear(c *Connection) Result {
 		t: units.Length(m.Pieces) * m.T, Fy: m.Fy, Fu: m.Fu,
 		high: m.Width, hasHigh: true,
 		hasLow: m.Shape == Flat,
-		xEdge:  0, toward: -1, name: "member",
+		xEdge:  0, toward: -1, name: "member", ply: memberPly,
 	}
 	return blockResult(c, "member.block-shear", p.blocks(c), p)
 }
@@ -360,7 +367,7 @@ func PlateBlockShear(c *Connection) Result {
 	p := blockPart{
 		t: pl.T, Fy: pl.Fy, Fu: pl.Fu,
 		low: pl.YMin(), high: pl.YMax(), hasLow: true, hasHigh: true,
-		xEdge: pl.FreeEdge, toward: 1, name: "plate",
+		xEdge: pl.FreeEdge, toward: 1, name: "plate", ply: platePly,
 	}
 	return blockResult(c, "plate.block-shear", p.blocks(c), p)
 }

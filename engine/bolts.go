@@ -93,7 +93,9 @@ func BoltShear(c *Connection) Result {
 
 // BoltSlip is the slip resistance of a slip-critical joint:
 // Rn = μ·Du·hf·Tb·ns per bolt, summed over the bolts; φ and Ω by hole
-// type (the most severe hole type present governs).
+// type, the most severe hole type present in either ply governing (J3.8
+// gives φ and Ω by hole type without naming a ply; a long slot in the
+// plate lets the joint slip as one in the member does).
 //
 // Clause: J3.8 [J3.9]
 func BoltSlip(c *Connection) (Result, error) {
@@ -105,9 +107,12 @@ func BoltSlip(c *Connection) (Result, error) {
 	mu, Du, hf := e.Mu(c.Bolt.Surface), e.Du(), e.Hf(c.Bolt.Fillers)
 	ns, n := c.ShearPlanes(), len(c.Holes)
 	f := rules.Factor{Phi: math.Inf(1)}
-	for _, h := range c.Holes {
-		if hf := e.SlipFactor(h.Type, h.Slot); hf.Phi < f.Phi {
-			f = hf
+	for i := range c.Holes {
+		h := &c.Holes[i]
+		for _, hs := range [...]HoleShape{h.HoleShape, h.InPlate()} {
+			if hf := e.SlipFactor(hs.Type, hs.Slot); hf.Phi < f.Phi {
+				f = hf
+			}
 		}
 	}
 	if n == 0 {

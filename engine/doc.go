@@ -11,6 +11,11 @@
 // x = last bolt + plate edge distance and the plate is pulled toward −x, so
 // its bolts bear toward that free edge (+x).
 //
+// Holes: each Hole is one bolt with one centre and its hole's shape (type,
+// slot direction, extents) in each ply: the member's (Hole.HoleShape) and
+// the plate's (Hole.InPlate), which may differ. A limit state of a part uses
+// that part's ply.
+//
 // Every limit state returns a Result carrying its id, the clause of the
 // edition in force, nominal and available strength, the demand, the ratio
 // and the intermediate values used, so that reports can quote them. A

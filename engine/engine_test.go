@@ -31,7 +31,7 @@ func kip(v float64) units.Force  { return units.Force(v) * units.Kip }
 func line(first int, n int, x0, pitch, y units.Length, dx, dy units.Length, t rules.HoleType) []Hole {
 	hs := make([]Hole, n)
 	for i := range hs {
-		hs[i] = Hole{ID: fmt.Sprintf("H%d", first+i), X: x0 + units.Length(i)*pitch, Y: y, Type: t, Dx: dx, Dy: dy}
+		hs[i] = Hole{ID: fmt.Sprintf("H%d", first+i), X: x0 + units.Length(i)*pitch, Y: y, HoleShape: HoleShape{Type: t, Dx: dx, Dy: dy}}
 	}
 	return hs
 }

@@ -50,7 +50,7 @@ func TestBlockShearFlatBlocks(t *testing.T) {
 		Holes: append(line(1, 2, in(1.5), in(3), in(1.5), in(13.0/16), in(13.0/16), rules.Standard),
 			line(3, 2, in(1.5), in(3), in(4.5), in(13.0/16), in(13.0/16), rules.Standard)...),
 	}
-	p := blockPart{t: in(0.5), Fy: ksi(36), Fu: ksi(58), high: in(6), hasHigh: true, hasLow: true, toward: -1, name: "member"}
+	p := blockPart{t: in(0.5), Fy: ksi(36), Fu: ksi(58), high: in(6), hasHigh: true, hasLow: true, toward: -1, name: "member", ply: memberPly}
 	blocks := p.blocks(c)
 	want := map[string]float64{
 		"member: between lines 1 and 2":   158.825,

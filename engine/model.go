@@ -94,16 +94,38 @@ type Bolt struct {
 	DeformationConsidered bool
 }
 
-// Hole is one bolt hole through the member and the plate. Dx and Dy are the
-// hole's nominal extents along x and y: the diameter for a round hole; for a
-// slot, its length along its long axis and its width across it.
-type Hole struct {
-	ID     string
-	X, Y   units.Length
+// HoleShape is a hole's type and nominal extents in one ply. Dx and Dy are
+// the extents along x and y: the diameter for a round hole; for a slot, its
+// length along its long axis and its width across it. Slot means nothing
+// for a round hole (Transverse by convention).
+type HoleShape struct {
 	Type   rules.HoleType
 	Slot   rules.SlotDir
 	Dx, Dy units.Length
 }
+
+// Hole is one bolt through the member and the plate: one centre, and the
+// hole's shape in each ply (J3.2 [J3.3] lets the plies differ, e.g. a long
+// slot in one part and standard holes in the other). The embedded shape
+// is the member's ply, so h.Type, h.Dx and h.Dy are the member's.
+type Hole struct {
+	ID        string
+	X, Y      units.Length
+	HoleShape            // the member's ply
+	Plate     *HoleShape // the plate's ply; nil: the same as the member's
+}
+
+// InPlate returns the hole's shape in the plate's ply.
+func (h *Hole) InPlate() HoleShape {
+	if h.Plate != nil {
+		return *h.Plate
+	}
+	return h.HoleShape
+}
+
+// PliesDiffer reports whether the plate's ply has a hole of another type,
+// direction or size than the member's.
+func (h *Hole) PliesDiffer() bool { return h.Plate != nil && *h.Plate != h.HoleShape }
 
 // Connection is everything the limit states need.
 type Connection struct {

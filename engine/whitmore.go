@@ -72,8 +72,9 @@ func WhitmoreSection(c *Connection) Whitmore {
 func plateHoles(c *Connection) []PathHole {
 	allow := c.Edition.HoleAllowance()
 	ph := make([]PathHole, len(c.Holes))
-	for i, h := range c.Holes {
-		ph[i] = PathHole{X: h.X, U: h.Y, Dh: h.Dy + allow}
+	for i := range c.Holes {
+		h := &c.Holes[i]
+		ph[i] = PathHole{X: h.X, U: h.Y, Dh: h.InPlate().Dy + allow}
 	}
 	return ph
 }

@@ -15,6 +15,7 @@ type reverifyOptions struct {
 	measured string
 	layer    string
 	align    string
+	part     string
 	position string
 	diameter string
 	format   string
@@ -28,8 +29,10 @@ func newReverifyCmd(o *rootOptions) *cobra.Command {
 		Long: "reverify matches the holes measured on a fabricated part (a CSV of x,y,diameter[,id] or a DXF of\n" +
 			"the part) to the design in the job, reports each hole's deviation against the fabrication\n" +
 			"tolerance, reclassifies enlarged holes, and recomputes every detailing rule and limit state on\n" +
-			"the as-built geometry. Exit 0 accept (within tolerance and passing), 3 review (out of tolerance\n" +
-			"but passing as built: engineer of record), 1 reject (fails as built, or holes missing), 2 bad input.",
+			"the as-built geometry. A measured file is of one part (--part): that part's holes are taken as\n" +
+			"measured, the other part's as designed. Exit 0 accept (within tolerance and passing), 3 review\n" +
+			"(out of tolerance but passing as built: engineer of record), 1 reject (fails as built, or holes\n" +
+			"missing), 2 bad input.",
 		Args: argsExactly(1, "one job file"),
 		RunE: func(cmd *cobra.Command, args []string) error {
 			return runReverify(cmd.Context(), o, ro, args[0], o.stdout)
@@ -39,6 +42,7 @@ func newReverifyCmd(o *rootOptions) *cobra.Command {
 	f.StringVar(&ro.measured, "measured", "", "measured holes: a .csv (x,y,diameter[,id]) or a .dxf of the part")
 	f.StringVar(&ro.layer, "layer", "", "DXF: take the circles on this layer (default: every circle inside the part's contour)")
 	f.StringVar(&ro.align, "align", "datum", "datum (trust the file's frame) or best-fit (fit shift and rotation)")
+	f.StringVar(&ro.part, "part", "member", "the part measured: member (job frame, as its CAM file) or plate (the plate's frame, as its CAM file)")
 	f.StringVar(&ro.position, "position", "", "position tolerance, radial (default: the job's tolerance, else 1/16 in or 2 mm)")
 	f.StringVar(&ro.diameter, "diameter", "", "diameter tolerance over nominal (default: the job's tolerance, else 1/32 in or 1 mm)")
 	f.StringVar(&ro.format, "format", "text", "output format: text, json or markdown")
@@ -58,11 +62,19 @@ func runReverify(_ context.Context, _ *rootOptions, ro reverifyOptions, path str
 	if err != nil {
 		return usageError{fmt.Errorf("--align: %w", err)}
 	}
+	part, err := detail.ParsePart(ro.part)
+	if err != nil {
+		return usageError{fmt.Errorf("--part: %w", err)}
+	}
 	job, err := detail.LoadJob(path)
 	if err != nil {
 		return err
 	}
-	opt := detail.ReverifyOptions{Align: align}
+	if part == detail.MeasuredPlate && job.Plate == nil {
+		return &detail.InputError{File: path, Field: "--part", Msg: "the job has no plate to measure",
+			Hint: "--part plate needs the job's plate block; a measured member is --part member"}
+	}
+	opt := detail.ReverifyOptions{Align: align, Part: part}
 	for _, t := range []struct {
 		flag, val string
 		dst       *units.Length

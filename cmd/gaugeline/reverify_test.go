@@ -17,6 +17,7 @@ var measuredDir = filepath.Join(testdata, "measured")
 type reverifyDoc struct {
 	Verdict      string             `json:"verdict"`
 	AsBuilt      string             `json:"as_built"`
+	Part         string             `json:"part"`
 	DesignRatios map[string]float64 `json:"design_ratios"`
 	Alignment    struct {
 		Mode        string  `json:"mode"`
@@ -95,25 +96,31 @@ func TestReverifyThroughTheBinary(t *testing.T) {
 	}
 }
 
-// TestReverifyReadsOurCAMFiles feeds the member CAM files that
-// `gaugeline sheet` wrote (testdata/golden) back as measured parts: the
-// holes are the design's, so each is accepted.
+// TestReverifyReadsOurCAMFiles feeds the CAM files that `gaugeline sheet`
+// wrote (testdata/golden) back as measured parts, the plate's in its own
+// frame (--part plate), by datum and by best fit: the holes are the
+// design's, so each is accepted.
 func TestReverifyReadsOurCAMFiles(t *testing.T) {
-	for _, c := range []struct{ job, cam string }{
-		{"si-double-angle.yaml", "TD-21.b-member.cam.dxf"},
-		{"si-slotted.yaml", "KB-40-member.cam.dxf"},
+	for _, c := range []struct{ job, cam, part string }{
+		{"si-double-angle.yaml", "TD-21.b-member.cam.dxf", "member"},
+		{"si-slotted.yaml", "KB-40-member.cam.dxf", "member"},
+		{"si-double-angle.yaml", "TD-21.b-plate.cam.dxf", "plate"},
+		{"si-slotted.yaml", "KB-40-plate.cam.dxf", "plate"},
+		{"us-pipe-rack-brace.yaml", "PR-VB2-plate.cam.dxf", "plate"},
 	} {
 		cam := filepath.Join(testdata, "golden", c.cam)
 		if _, err := os.Stat(cam); err != nil {
 			t.Skipf("no %s: %v", cam, err)
 		}
-		r := gaugeline(t, ".", "reverify", filepath.Join(testdata, "jobs", c.job), "--measured", cam, "--format", "json")
-		var doc reverifyDoc
-		if err := json.Unmarshal([]byte(r.stdout), &doc); err != nil {
-			t.Fatalf("%s: exit %d: %v\n%s", c.cam, r.code, err, r.stderr)
-		}
-		if r.code != 0 || doc.Verdict != "accept" {
-			t.Errorf("%s: exit %d, verdict %s", c.cam, r.code, doc.Verdict)
+		for _, align := range []string{"datum", "best-fit"} {
+			r := gaugeline(t, ".", "reverify", filepath.Join(testdata, "jobs", c.job), "--measured", cam, "--part", c.part, "--align", align, "--format", "json")
+			var doc reverifyDoc
+			if err := json.Unmarshal([]byte(r.stdout), &doc); err != nil {
+				t.Fatalf("%s: exit %d: %v\n%s", c.cam, r.code, err, r.stderr)
+			}
+			if r.code != 0 || doc.Verdict != "accept" || doc.Part != c.part || abs(doc.Alignment.RotationDeg) > 1e-6 {
+				t.Errorf("%s --part %s --align %s: exit %d, verdict %s, part %q, rotation %g°", c.cam, c.part, align, r.code, doc.Verdict, doc.Part, doc.Alignment.RotationDeg)
+			}
 		}
 	}
 }
@@ -170,6 +177,7 @@ func TestReverifyBadInputExits2(t *testing.T) {
 		{"bad --align", []string{"--measured", filepath.Join(md, "hb-7-qa-nominal.csv"), "--align", "sideways"}, "--align"},
 		{"bad --position", []string{"--measured", filepath.Join(md, "hb-7-qa-nominal.csv"), "--position", "3 kip"}, "--position"},
 		{"bad --format", []string{"--measured", filepath.Join(md, "hb-7-qa-nominal.csv"), "--format", "xml"}, "--format"},
+		{"bad --part", []string{"--measured", filepath.Join(md, "hb-7-qa-nominal.csv"), "--part", "gusset"}, `--part: unknown part "gusset"`},
 	}
 	for _, tt := range tests {
 		t.Run(tt.name, func(t *testing.T) {
@@ -182,5 +190,15 @@ func TestReverifyBadInputExits2(t *testing.T) {
 				t.Errorf("bad input wrote to stdout: %q", r.stdout)
 			}
 		})
+	}
+}
+
+// A plate measured for a job that has none is bad input naming --part.
+func TestReverifyPlateWithoutPlate(t *testing.T) {
+	job := filepath.Join(testdata, "examples", "aisc-d2.yaml")
+	r := gaugeline(t, ".", "reverify", job, "--measured", filepath.Join(measuredDir, "hb-7-qa-nominal.csv"), "--part", "plate")
+	first := strings.SplitN(r.stderr, "\n", 2)[0]
+	if r.code != 2 || !strings.Contains(first, "aisc-d2.yaml: --part: the job has no plate to measure") || r.stdout != "" {
+		t.Errorf("exit %d, stderr %q, stdout %q", r.code, r.stderr, r.stdout)
 	}
 }

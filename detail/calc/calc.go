@@ -386,19 +386,40 @@ func holeTable(c *engine.Connection, f fmtr) table {
 	if c.Member.Shape == engine.Flat {
 		from = "y from edge"
 	}
+	// A column for the plate's holes only when a ply differs, so that a
+	// connection of one hole type reads as it always did.
+	plies := false
+	for i := range c.Holes {
+		plies = plies || (c.Plate != nil && c.Holes[i].PliesDiffer())
+	}
 	t := table{Head: []string{"hole", "x from member end", from, "size (along × across the load)", "type"}}
-	for _, h := range c.Holes {
-		typ := h.Type.String()
-		if h.Type.IsSlot() {
-			typ += ", " + h.Slot.String()
+	if plies {
+		t.Head = []string{"hole", "x from member end", from, "member: size (along × across the load)", "member: type",
+			"plate: size (along × across the load)", "plate: type"}
+	}
+	for i := range c.Holes {
+		h := &c.Holes[i]
+		cells := []string{h.ID, f.length(h.X), f.length(h.Y)}
+		cells = append(cells, holeCells(h.HoleShape, f)...)
+		if plies {
+			cells = append(cells, holeCells(h.InPlate(), f)...)
 		}
-		size := units.FormatJob(h.Dx, f.sys) + " diameter"
-		if h.Type.IsSlot() {
-			size = strings.TrimSuffix(units.FormatJob(h.Dx, f.sys), " "+f.unitLabel(units.DimLength)) + " × " + units.FormatJob(h.Dy, f.sys)
-		}
-		t.Rows = append(t.Rows, tableRow{Cells: []string{h.ID, f.length(h.X), f.length(h.Y), size, typ}})
+		t.Rows = append(t.Rows, tableRow{Cells: cells})
 	}
 	return t
+}
+
+// holeCells are a hole's size and type in one ply.
+func holeCells(h engine.HoleShape, f fmtr) []string {
+	typ := h.Type.String()
+	if h.Type.IsSlot() {
+		typ += ", " + h.Slot.String()
+	}
+	size := units.FormatJob(h.Dx, f.sys) + " diameter"
+	if h.Type.IsSlot() {
+		size = strings.TrimSuffix(units.FormatJob(h.Dx, f.sys), " "+f.unitLabel(units.DimLength)) + " × " + units.FormatJob(h.Dy, f.sys)
+	}
+	return []string{size, typ}
 }
 
 // vals looks up a result's intermediate values by name.

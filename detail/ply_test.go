@@ -1,0 +1,388 @@
+package detail
+
+import (
+	"encoding/json"
+	"math"
+	"path/filepath"
+	"strings"
+	"testing"
+
+	"gaugeline/engine"
+	"gaugeline/rules"
+	"gaugeline/rules/units"
+)
+
+// plyJob is usAngle (an L4x4x1/2 on a 1/2-in gusset, four 3/4-in A325 at
+// 3 in) with bolts lines and per-ply keys added: bolts adds to the bolts
+// block, member and plate to those blocks.
+func plyJob(bolts, member, plate string) string {
+	s := usAngle
+	if member != "" {
+		s = strings.Replace(s, "  length: 10 ft\n", "  length: 10 ft\n"+member, 1)
+	}
+	if plate != "" {
+		s = strings.Replace(s, "  edge: 1-1/2 in\n", "  edge: 1-1/2 in\n"+plate, 1)
+	}
+	if bolts != "" {
+		s = strings.Replace(s, "  grade: A325\n", "  grade: A325\n"+bolts, 1)
+	}
+	return s
+}
+
+func TestPlyHoleKeys(t *testing.T) {
+	type ply struct {
+		t   rules.HoleType
+		dir rules.SlotDir
+	}
+	sc := "  joint: slip-critical\n"
+	tests := []struct {
+		name                 string
+		bolts, member, plate string
+		member2, plate2      ply
+	}{
+		{"bolts.hole serves both plies", sc + "  hole: long-slot\n  slot: longitudinal\n", "", "",
+			ply{rules.LongSlot, rules.Longitudinal}, ply{rules.LongSlot, rules.Longitudinal}},
+		{"member.hole overrides for the member", sc + "  hole: long-slot\n  slot: longitudinal\n", "  hole: standard\n", "",
+			ply{rules.Standard, rules.Transverse}, ply{rules.LongSlot, rules.Longitudinal}},
+		{"plate.hole overrides for the plate, bolts.slot its direction", sc + "  slot: longitudinal\n", "", "  hole: short-slot\n",
+			ply{rules.Standard, rules.Transverse}, ply{rules.ShortSlot, rules.Longitudinal}},
+		{"plate.slot overrides bolts.slot", sc + "  hole: long-slot\n  slot: longitudinal\n", "", "  slot: transverse\n",
+			ply{rules.LongSlot, rules.Longitudinal}, ply{rules.LongSlot, rules.Transverse}},
+		{"each ply its own", "", "  hole: long-slot\n  slot: transverse\n", "  hole: oversized\n",
+			ply{rules.LongSlot, rules.Transverse}, ply{rules.Oversized, rules.Transverse}},
+	}
+	for _, tt := range tests {
+		t.Run(tt.name, func(t *testing.T) {
+			j := mustParse(t, plyJob(tt.bolts, tt.member, tt.plate))
+			if mt, md := j.MemberHole(); (ply{mt, md}) != tt.member2 {
+				t.Errorf("member ply %s %s, want %s %s", mt, md, tt.member2.t, tt.member2.dir)
+			}
+			if pt, pd := j.PlateHole(); (ply{pt, pd}) != tt.plate2 {
+				t.Errorf("plate ply %s %s, want %s %s", pt, pd, tt.plate2.t, tt.plate2.dir)
+			}
+		})
+	}
+}
+
+// TestBuildPlyShapes: each ply's holes get their own nominal size, AISC
+// 360-22 Table J3.3 for a 3/4-in bolt (standard 13/16, oversized 15/16,
+// long slot 13/16 × 1-7/8); plies alike leave Hole.Plate nil.
+func TestBuildPlyShapes(t *testing.T) {
+	in := func(v float64) units.Length { return units.Length(v) * units.Inch }
+	std := engine.HoleShape{Type: rules.Standard, Dx: in(13.0 / 16), Dy: in(13.0 / 16)}
+	longAlong := engine.HoleShape{Type: rules.LongSlot, Slot: rules.Longitudinal, Dx: in(1 + 7.0/8), Dy: in(13.0 / 16)}
+	over := engine.HoleShape{Type: rules.Oversized, Dx: in(15.0 / 16), Dy: in(15.0 / 16)}
+	tests := []struct {
+		name                 string
+		bolts, member, plate string
+		m                    engine.HoleShape
+		p                    *engine.HoleShape
+	}{
+		{"one type", "", "", "", std, nil},
+		{"plate.hole equal to bolts.hole", "", "", "  hole: standard\n", std, nil},
+		{"long slots along the load in the member", "  joint: slip-critical\n", "  hole: long-slot\n  slot: longitudinal\n", "", longAlong, &std},
+		{"oversized in the plate", "  joint: slip-critical\n", "", "  hole: oversized\n", std, &over},
+	}
+	for _, tt := range tests {
+		t.Run(tt.name, func(t *testing.T) {
+			d := mustBuild(t, mustParse(t, plyJob(tt.bolts, tt.member, tt.plate)))
+			for i, h := range d.Conn.Holes {
+				if h.HoleShape != tt.m {
+					t.Errorf("%s member ply %+v, want %+v", h.ID, h.HoleShape, tt.m)
+				}
+				switch {
+				case tt.p == nil && h.Plate != nil:
+					t.Errorf("%s plate ply %+v, want nil (as the member's)", h.ID, *h.Plate)
+				case tt.p != nil && (h.Plate == nil || *h.Plate != *tt.p):
+					t.Errorf("%s plate ply %+v, want %+v", h.ID, h.InPlate(), *tt.p)
+				}
+				if i > 0 && h.Plate != nil && h.Plate == d.Conn.Holes[i-1].Plate {
+					t.Errorf("%s shares its plate ply with the hole before: a copy that changes one changes both", h.ID)
+				}
+			}
+		})
+	}
+}
+
+func TestPlyHoleKeyErrors(t *testing.T) {
+	tests := []struct {
+		name                 string
+		bolts, member, plate string
+		field, msg           string
+	}{
+		{"unknown hole type", "", "  hole: slotted\n", "", "member.hole", `unknown hole type "slotted"`},
+		{"unknown slot direction", "", "", "  hole: long-slot\n  slot: along\n", "plate.slot", `unknown slot direction "along"`},
+		{"slot for round holes", "", "", "  slot: longitudinal\n", "plate.slot", "is for slotted holes, and the plate's holes are standard (bolts.hole)"},
+		{"slot for the ply's own round holes", "  hole: long-slot\n", "  hole: oversized\n  slot: transverse\n", "", "member.slot",
+			"is for slotted holes, and the member's holes are oversized (member.hole)"},
+		{"a list", "", "  hole: [standard]\n", "", "member.hole", "want a single value, not a list"},
+	}
+	for _, tt := range tests {
+		t.Run(tt.name, func(t *testing.T) {
+			ie := parseErr(t, plyJob(tt.bolts, tt.member, tt.plate))
+			if ie.Field != tt.field || !strings.Contains(ie.Msg, tt.msg) || ie.Line == 0 {
+				t.Errorf("%s:%d %q, want %s and %q", ie.Field, ie.Line, ie.Msg, tt.field, tt.msg)
+			}
+		})
+	}
+}
+
+// fayingFinding returns the hole.type finding on long slots at the faying
+// surfaces, and whether there is one.
+func fayingFinding(r *Report) (Finding, bool) {
+	for _, f := range r.Findings {
+		if f.ID == "hole.type" && strings.Contains(f.Where, "faying surface") {
+			return f, true
+		}
+	}
+	return Finding{}, false
+}
+
+// TestLongSlotsOneFayingSurface: AISC 360-22 J3.3 (360-16 J3.2) permits
+// long-slotted holes in only one of the connected parts at an individual
+// faying surface (REFERENCE.md, hole-type permissions, verified).
+func TestLongSlotsOneFayingSurface(t *testing.T) {
+	longAcross := "  hole: long-slot\n  slot: transverse\n"
+	noPlate := func(s string) string {
+		i, k := strings.Index(s, "plate:\n"), strings.Index(s, "bolts:\n")
+		return s[:i] + s[k:]
+	}
+	tests := []struct {
+		name     string
+		job      string
+		clause   string
+		pass     bool
+		advisory bool
+		where    string // in the finding
+	}{
+		{"360-22, bolts.hole long-slot: both plies", plyJob(longAcross, "", ""), "J3.3", false, false, "long slots in both the member (H1, H2, H3, H4) and the plate (H1, H2, H3, H4)"},
+		{"360-16, bolts.hole long-slot: both plies", "standard: aisc360-16\n" + plyJob(longAcross, "", ""), "J3.2", false, false, "long slots in both the member"},
+		{"360-22, member.hole and plate.hole long-slot", plyJob("", longAcross, longAcross), "J3.3", false, false, "long slots in both the member"},
+		{"double angle, both plies", strings.Replace(plyJob(longAcross, "", ""), "shape: angle", "shape: double-angle", 1), "J3.3", false, false, "long slots in both the member"},
+		{"long slots in the member, standard holes in the plate", plyJob("", longAcross, "  hole: standard\n"), "J3.3", true, false, "long slots in the member only"},
+		{"long slots in the plate, standard holes in the member", plyJob(longAcross, "  hole: standard\n", ""), "J3.3", true, false, "long slots in the plate only"},
+		{"no plate: the other ply unknown", noPlate(plyJob(longAcross, "", "")), "J3.3", true, true, "only one connected part at each faying surface"},
+	}
+	for _, tt := range tests {
+		t.Run(tt.name, func(t *testing.T) {
+			r, err := Check(mustBuild(t, mustParse(t, tt.job)))
+			if err != nil {
+				t.Fatal(err)
+			}
+			f, ok := fayingFinding(r)
+			if !ok {
+				t.Fatalf("no faying-surface finding in %+v", r.Findings)
+			}
+			if f.Clause != tt.clause || f.Pass != tt.pass || f.Advisory != tt.advisory || !strings.Contains(f.Where, tt.where) {
+				t.Errorf("finding %+v; want clause %s, pass %v, advisory %v, where containing %q", f, tt.clause, tt.pass, tt.advisory, tt.where)
+			}
+			failsOnIt := false
+			for _, id := range r.Failing() {
+				failsOnIt = failsOnIt || id == "hole.type"
+			}
+			if failsOnIt == tt.pass || (!tt.pass && r.Pass) {
+				t.Errorf("hole.type among the failures: %v, report passes %v; want the job to fail on it: %v", failsOnIt, r.Pass, !tt.pass)
+			}
+		})
+	}
+}
+
+// TestDetailingPerPly: each part's edges, hole sizes and clear distances
+// take that part's holes. Member: long slots along the load (13/16 ×
+// 1-7/8, AISC 360-22 Table J3.3), slip-critical; plate: standard 13/16.
+func TestDetailingPerPly(t *testing.T) {
+	job := plyJob("  joint: slip-critical\n", "  hole: long-slot\n  slot: longitudinal\n", "  hole: standard\n")
+	r, err := Check(mustBuild(t, mustParse(t, job)))
+	if err != nil {
+		t.Fatal(err)
+	}
+	find := func(id, where string) (Finding, bool) {
+		for _, f := range r.Findings {
+			if f.ID == id && f.Where == where {
+				return f, true
+			}
+		}
+		return Finding{}, false
+	}
+	in := float64(units.Inch)
+	for _, w := range []struct {
+		id, where       string
+		measured, limit float64 // in
+		src             string
+	}{
+		// Table J3.4: 1 in for a 3/4-in bolt; Table J3.5: C2 = 0.75d =
+		// 0.5625 in for a long slot whose axis is perpendicular to the edge.
+		{"edge.min", "H1 to member end", 1.5, 1.5625, "AISC 360-22 Table J3.4 1 in + Table J3.5 0.75d (long slot ⊥ end)"},
+		{"edge.min", "H4 to plate free edge", 1.5, 1, "AISC 360-22 Table J3.4, standard hole: no C2"},
+		{"hole.size", "H1 along the slot (largest long-slot hole in the member)", 1 + 7.0/8, 1 + 7.0/8, "AISC 360-22 Table J3.3 long slot length"},
+		{"hole.size", "H1 (largest standard hole in the plate)", 13.0 / 16, 13.0 / 16, "AISC 360-22 Table J3.3 standard"},
+		// Clear distance at 3-in pitch: 3 − 1-7/8 = 1.125 in between the
+		// member's slots, 3 − 13/16 = 2.1875 in between the plate's holes
+		// (hand geometry); limit d, AISC 360-22 J3.4.
+		{"spacing.min", "H1–H2 (clear distance in the member)", 1.125, 0.75, "AISC 360-22 J3.4, hand geometry"},
+		{"spacing.min", "H1–H2 (clear distance in the plate)", 2.1875, 0.75, "AISC 360-22 J3.4, hand geometry"},
+	} {
+		f, ok := find(w.id, w.where)
+		if !ok {
+			t.Errorf("no %s finding %q", w.id, w.where)
+			continue
+		}
+		if math.Abs(f.Measured/in-w.measured) > 1e-9 || math.Abs(f.Limit/in-w.limit) > 1e-9 {
+			t.Errorf("%s %q: measured %g, limit %g in; want %g, %g (%s)", w.id, w.where, f.Measured/in, f.Limit/in, w.measured, w.limit, w.src)
+		}
+	}
+	for _, where := range []string{"member: longitudinal long-slot holes in a slip-critical joint", "plate: standard holes in a slip-critical joint"} {
+		if f, ok := find("hole.type", where); !ok || !f.Pass {
+			t.Errorf("hole.type %q: %+v (found %v), want a passing finding (AISC 360-22 J3.3)", where, f, ok)
+		}
+	}
+}
+
+// TestSheetAndReportPerPly: the plate view (so the plate's CAM file), the
+// hole schedule, the title block, the summary and the JSON holes show each
+// ply's own holes. Member: long slots across the load, 13/16 × 1-7/8;
+// plate: standard 13/16 (AISC 360-22 Table J3.3, 3/4-in bolt).
+func TestSheetAndReportPerPly(t *testing.T) {
+	job := plyJob("", "  hole: long-slot\n  slot: transverse\n", "  hole: standard\n")
+	r, err := Check(mustBuild(t, mustParse(t, job)))
+	if err != nil {
+		t.Fatal(err)
+	}
+	s, err := NewSheet(r, true)
+	if err != nil {
+		t.Fatal(err)
+	}
+	parts := map[string]Part{}
+	for _, v := range s.Views {
+		parts[v.Part.Name] = v.Part
+	}
+	for _, h := range parts["member"].Holes {
+		if h.Type != rules.LongSlot || !near(h.Dx, 13.0/16) || !near(h.Dy, 1+7.0/8) {
+			t.Errorf("member %s: %s %g × %g, want a long slot 13/16 along x × 1-7/8 along y", h.ID, h.Type, h.Dx, h.Dy)
+		}
+	}
+	for _, h := range parts["plate"].Holes {
+		if h.Type != rules.Standard || !h.Round() || !near(h.Dx, 13.0/16) || !near(h.Dy, 13.0/16) {
+			t.Errorf("plate %s: %s %g × %g, want a standard 13/16 hole", h.ID, h.Type, h.Dx, h.Dy)
+		}
+	}
+	if len(s.Schedule) != 3 || s.Schedule[1][3] != "LONG-SLOT" || !strings.Contains(s.Schedule[1][2], "SLOT TRANSVERSE") ||
+		s.Schedule[2][3] != "STANDARD" || !strings.HasSuffix(s.Schedule[2][2], "DIA") {
+		t.Errorf("schedule %q", s.Schedule)
+	}
+	want := "long-slot transverse holes in the member, standard in the plate"
+	var bolts string
+	for _, f := range s.Title {
+		if f[0] == "BOLTS" {
+			bolts = f[1]
+		}
+	}
+	if !strings.HasSuffix(bolts, want) {
+		t.Errorf("title block BOLTS %q, want it to end %q", bolts, want)
+	}
+	if row := r.Design.Summary(); !strings.HasSuffix(row[2][1], want) {
+		t.Errorf("summary %q", row[2][1])
+	}
+	b, err := r.JSON()
+	if err != nil {
+		t.Fatal(err)
+	}
+	var doc struct {
+		Holes []struct {
+			Type  string `json:"type"`
+			Slot  string `json:"slot"`
+			Plate *struct {
+				Type     string  `json:"type"`
+				Diameter float64 `json:"diameter"`
+			} `json:"plate"`
+		} `json:"holes"`
+	}
+	if err := json.Unmarshal(b, &doc); err != nil {
+		t.Fatal(err)
+	}
+	for i, h := range doc.Holes {
+		if h.Type != "long-slot" || h.Slot != "transverse" || h.Plate == nil || h.Plate.Type != "standard" || h.Plate.Diameter != 13.0/16 {
+			t.Errorf("JSON hole %d: %+v", i, h)
+		}
+	}
+	// One hole type: no plate entry, as before.
+	r1, err := Check(mustBuild(t, mustParse(t, usAngle)))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if b, _ := r1.JSON(); strings.Contains(string(b), `"plate": {`) {
+		t.Errorf("a job of one hole type writes plate holes:\n%s", b)
+	}
+}
+
+// TestReverifyKeepsTheOtherPly: a measured part's holes are that part's
+// only. TD-21.sc (slip-critical, M20 in standard 22-mm holes, AISC 360-16
+// Table J3.3M) with H2 made 23.5 mm, an oversized hole as built (24 mm,
+// Table J3.3M; +1 mm tolerance, common practice): measured on the member,
+// the plate's H2 stays a standard 22-mm hole, and the plate's limit states
+// keep their design ratios; measured on the plate (in the plate's frame,
+// x' = FreeEdge − x, y' = YMax − y, as its CAM file), the member's do.
+func TestReverifyKeepsTheOtherPly(t *testing.T) {
+	d := buildJob(t, filepath.Join(measuredDir, "td-21-sc.yaml"))
+	std := d.Conn.Holes[1].HoleShape
+	if std.Type != rules.Standard || math.Abs(float64(std.Dx)-22) > 1e-9 {
+		t.Fatalf("design hole %+v, want standard 22 mm", std)
+	}
+	ratios := func(r *Report, part string) map[string]float64 {
+		m := map[string]float64{}
+		for _, x := range r.Results {
+			if strings.HasPrefix(x.ID, part+".") {
+				m[x.ID] = x.Ratio
+			}
+		}
+		return m
+	}
+	for _, part := range []MeasuredPart{MeasuredMember, MeasuredPlate} {
+		t.Run(part.String(), func(t *testing.T) {
+			set := synthetic(d)
+			if part == MeasuredPlate {
+				pl := d.Conn.Plate
+				for i := range set.Holes {
+					h := &set.Holes[i]
+					h.X, h.Y = float64(pl.FreeEdge)-h.X, float64(pl.YMax())-h.Y
+				}
+			}
+			set.Holes[1].Width, set.Holes[1].Length = 23.5, 23.5
+			ab, err := Reverify(d, set, ReverifyOptions{Part: part})
+			if err != nil {
+				t.Fatal(err)
+			}
+			for _, dv := range ab.Deviations {
+				if dv.Status == HoleMissing || dv.Status == HoleExtra {
+					t.Fatalf("%s %s: the part's frame was not taken: %q", part, dv.ID, statuses(ab))
+				}
+			}
+			built := ab.Report.Design.Conn.Holes[1]
+			measured, other := built.HoleShape, built.InPlate()
+			otherName := "plate"
+			if part == MeasuredPlate {
+				measured, other, otherName = other, measured, "member"
+			}
+			// As built a hole is the larger of measured and its type's
+			// nominal: oversized M20, 24 mm (Table J3.3M).
+			if measured.Type != rules.Oversized || math.Abs(float64(measured.Dx)-24) > 1e-9 {
+				t.Errorf("measured %s's H2 as built %+v, want oversized 24 mm", part, measured)
+			}
+			if other != std {
+				t.Errorf("the %s's H2 as built %+v, want as designed %+v", otherName, other, std)
+			}
+			want, got := ratios(ab.DesignReport, otherName), ratios(ab.Report, otherName)
+			for id, r := range want {
+				if math.Abs(got[id]-r) > 1e-12 {
+					t.Errorf("%s: ratio %g as built, %g designed; nothing of the %s was measured", id, got[id], r, otherName)
+				}
+			}
+			if !strings.Contains(strings.Join(ab.Report.Cautions, " "), "the "+part.String()+" was measured") {
+				t.Errorf("the report does not say the %s was measured: %q", part, ab.Report.Cautions)
+			}
+		})
+	}
+	if _, err := Reverify(buildJob(t, "../testdata/examples/aisc-d2.yaml"), synthetic(d), ReverifyOptions{Part: MeasuredPlate}); err != ErrNoPlate {
+		t.Errorf("a plate measured for a job without one: %v, want ErrNoPlate", err)
+	}
+}
