@@ -30,6 +30,12 @@ type block struct {
 	Bolts         int
 }
 
+// worseThan orders blocks by ratio at any demand: the bolts a block tears
+// out (its share of the force) over its strength.
+func (b block) worseThan(o block) bool {
+	return float64(b.Bolts)*float64(o.Rn) > float64(o.Bolts)*float64(b.Rn)*(1+1e-12)
+}
+
 // blockPart describes one part for the block search.
 type blockPart struct {
 	t      units.Length // total thickness (both angles of a pair)
@@ -111,6 +117,17 @@ func (p blockPart) blocks(c *Connection) []block {
 	// bolt is then torn out with the block (a bolt whose hole the plane
 	// cuts counts, which is the larger share).
 	inside := func(h Hole, D units.Length) bool { return dist(h) < D+h.Dx/2-eps }
+	// torn counts the bolts a block between y0 and y1 tears out, its
+	// tension plane at the distance at(y).
+	torn := func(y0, y1 units.Length, at func(units.Length) units.Length) int {
+		n := 0
+		for _, h := range holes {
+			if h.Y+h.Dy/2 > y0-eps && h.Y-h.Dy/2 < y1+eps && inside(h, at(h.Y)) {
+				n++
+			}
+		}
+		return n
+	}
 	// shear is the shear plane along line i to its innermost hole.
 	shear := func(i int) (Agv, Anv units.Area) {
 		hi := holes[inner[i]]
@@ -138,18 +155,7 @@ func (p blockPart) blocks(c *Connection) []block {
 	// others. It returns Ant and the bolts the block tears out: every hole
 	// between the boundaries (or cut by a boundary's shear plane) on the
 	// edge side of the plane.
-	plane := func(a, b int, between []int, mask int) (units.Area, int) {
-		var y0, y1 units.Length
-		if a < 0 {
-			y0 = p.low
-		} else {
-			y0 = holes[inner[a]].Y
-		}
-		if b >= nl {
-			y1 = p.high
-		} else {
-			y1 = holes[inner[b]].Y
-		}
+	plane := func(a, b int, y0, y1 units.Length, between []int, mask int) (units.Area, int) {
 		var stops []Hole
 		net := y1 - y0
 		half := func(i int) {
@@ -190,13 +196,7 @@ func (p blockPart) blocks(c *Connection) []block {
 			}
 			return dist(stops[len(stops)-1])
 		}
-		n := 0
-		for _, h := range holes {
-			if h.Y+h.Dy/2 > y0-eps && h.Y-h.Dy/2 < y1+eps && inside(h, at(h.Y)) {
-				n++
-			}
-		}
-		return net.Mul(p.t), n
+		return net.Mul(p.t), torn(y0, y1, at)
 	}
 	// most is how many lines in between are tried every way; beyond it
 	// the plane goes through all of them or through none.
@@ -211,6 +211,13 @@ func (p blockPart) blocks(c *Connection) []block {
 			}
 		}
 		Agv, Anv = max(Agv, 0), max(Anv, 0)
+		y0, y1 := p.low, p.high
+		if a >= 0 {
+			y0 = holes[inner[a]].Y
+		}
+		if b < nl {
+			y1 = holes[inner[b]].Y
+		}
 		var between []int
 		for i := a + 1; i < b; i++ {
 			if i >= 0 && i < nl {
@@ -224,16 +231,16 @@ func (p blockPart) blocks(c *Connection) []block {
 				masks = append(masks, m)
 			}
 		}
-		// the plane that makes the block worst: highest share over Rn
+		// the plane that makes the block worst
 		var worst block
 		first := true
 		consider := func(bl block) {
-			if first || float64(bl.Bolts)*float64(worst.Rn) > float64(worst.Bolts)*float64(bl.Rn)*(1+1e-12) {
+			if first || bl.worseThan(worst) {
 				worst, first = bl, false
 			}
 		}
 		for _, m := range masks {
-			Ant, bolts := plane(a, b, between, m)
+			Ant, bolts := plane(a, b, y0, y1, between, m)
 			Ant = max(Ant, 0)
 			consider(block{desc, Agv, Anv, Ant, BlockShearRn(p.Fy, p.Fu, Agv, Anv, Ant, 1), bolts})
 		}
@@ -242,32 +249,21 @@ func (p blockPart) blocks(c *Connection) []block {
 		// straight across there, past the boundaries' own last holes when
 		// they end nearer the edge (a measured hole off its line makes a
 		// line of its own that ends early)
-		y0, y1 := p.low, p.high
-		if a >= 0 {
-			y0 = holes[inner[a]].Y
-		}
-		if b < nl {
-			y1 = holes[inner[b]].Y
-		}
 		for _, h := range holes {
 			if h.Y+h.Dy/2 <= y0+eps || h.Y-h.Dy/2 >= y1-eps {
 				continue
 			}
 			D := dist(h)
 			var gv, nv units.Area
-			for _, y := range []units.Length{y0, y1} {
-				if (y == y0 && a >= 0) || (y == y1 && b < nl) {
-					g, n := shearTo(y, D)
-					gv, nv = gv+g, nv+n
-				}
+			if a >= 0 {
+				gv, nv = shearTo(y0, D)
+			}
+			if b < nl {
+				g, n := shearTo(y1, D)
+				gv, nv = gv+g, nv+n
 			}
 			nt := across(y0, y1, D)
-			bolts := 0
-			for _, o := range holes {
-				if o.Y+o.Dy/2 > y0-eps && o.Y-o.Dy/2 < y1+eps && inside(o, D) {
-					bolts++
-				}
-			}
+			bolts := torn(y0, y1, func(units.Length) units.Length { return D })
 			gv, nv = max(gv, 0), max(nv, 0)
 			consider(block{desc, gv, nv, nt, BlockShearRn(p.Fy, p.Fu, gv, nv, nt, 1), bolts})
 		}
@@ -308,22 +304,14 @@ func (p blockPart) edgeName(high bool) string {
 // carry their own share through the rest of the part.
 func blockResult(c *Connection, id string, blocks []block, p blockPart) Result {
 	n := len(c.Holes)
-	share := func(b block) float64 { return float64(b.Bolts) / float64(max(n, 1)) }
-	// severity orders the blocks by ratio at any demand: share / Rn
-	severity := func(b block) float64 {
-		if b.Rn <= 0 {
-			return math.Inf(1)
-		}
-		return share(b) / float64(b.Rn)
-	}
 	w := 0
 	for i, b := range blocks {
-		if severity(b) > severity(blocks[w])*(1+1e-12) {
+		if b.worseThan(blocks[w]) {
 			w = i
 		}
 	}
 	b := blocks[w]
-	k := share(b)
+	k := float64(b.Bolts) / float64(max(n, 1))
 	return finishFor(c, units.Force(k)*c.Demand, id, "J4.3", b.Rn, c.Edition.BlockShearFactor(), []Value{
 		{"Agv", float64(b.Agv), units.DimArea},
 		{"Anv", float64(b.Anv), units.DimArea},

@@ -138,24 +138,13 @@ func TestPropertyNetAreaAndU(t *testing.T) {
 func TestPropertyWorstPathNotExceeded(t *testing.T) {
 	rapid.Check(t, func(rt *rapid.T) {
 		c := drawParams(rt).build(t)
-		ph := pathHoles(c)
+		ph := pathHoles(c, memberPly)
 		worst, _ := NetWidthDeduction(ph)
 		lines := GageLines(c)
 		// one hole from each of a run of consecutive lines
 		from := rapid.IntRange(0, len(lines)-1).Draw(rt, "from")
 		to := rapid.IntRange(from, len(lines)-1).Draw(rt, "to")
-		var chain units.Length
-		var last *PathHole
-		for i := from; i <= to; i++ {
-			k := lines[i][rapid.IntRange(0, len(lines[i])-1).Draw(rt, fmt.Sprintf("re%d", i))]
-			h := ph[k]
-			chain += h.Dh
-			if last != nil {
-				s, g := float64(h.X-last.X), float64(h.U-last.U)
-				chain -= units.Length(s * s / (4 * g))
-			}
-			last = &ph[k]
-		}
+		chain := handChain(rt, ph, lines, from, to, "re")
 		if chain > worst+1e-9 {
 			rt.Fatalf("a hand-built chain removes %v mm, more than the worst path %v mm", chain, worst)
 		}
@@ -167,25 +156,32 @@ func TestPropertyWorstPathNotExceeded(t *testing.T) {
 		}
 		// the plate's net section comes from the same search over its
 		// own holes: no hand-built chain leaves less of the Whitmore width
-		pp := plateHoles(c)
+		pp := pathHoles(c, platePly)
 		w := WhitmoreSection(c)
-		var pchain units.Length
-		last = nil
-		for i := from; i <= to; i++ {
-			k := lines[i][rapid.IntRange(0, len(lines[i])-1).Draw(rt, fmt.Sprintf("pe%d", i))]
-			h := pp[k]
-			pchain += h.Dh
-			if last != nil {
-				s, g := float64(h.X-last.X), float64(h.U-last.U)
-				pchain -= units.Length(s * s / (4 * g))
-			}
-			last = &pp[k]
-		}
+		pchain := handChain(rt, pp, lines, from, to, "pe")
 		An := value(t, PlateRupture(c), "An")
 		if chainAn := max(float64((w.Lw - pchain).Mul(c.Plate.T)), 0); An > chainAn+1e-6 {
 			rt.Fatalf("plate An %v mm² exceeds %v mm² of a hand-built chain", An, chainAn)
 		}
 	})
+}
+
+// handChain is the B4.3b deduction of a chain built by hand through one
+// hole, drawn at random, of each gage line from..to: Σ Dh − Σ s²/4g.
+func handChain(rt *rapid.T, ph []PathHole, lines [][]int, from, to int, label string) units.Length {
+	var chain units.Length
+	var last *PathHole
+	for i := from; i <= to; i++ {
+		k := lines[i][rapid.IntRange(0, len(lines[i])-1).Draw(rt, fmt.Sprintf("%s%d", label, i))]
+		h := ph[k]
+		chain += h.Dh
+		if last != nil {
+			s, g := float64(h.X-last.X), float64(h.U-last.U)
+			chain -= units.Length(s * s / (4 * g))
+		}
+		last = &ph[k]
+	}
+	return chain
 }
 
 // TestPropertyMonotone: more end distance, more pitch or one more bolt in

@@ -81,12 +81,14 @@ func NetWidthDeduction(holes []PathHole) (units.Length, []int) {
 	return units.Length(best[end]), path
 }
 
-// pathHoles returns the member's holes for the net-section search.
-func pathHoles(c *Connection) []PathHole {
+// pathHoles returns one part's holes for the net-section search, each of
+// the shape ply gives it in that part (memberPly or platePly).
+func pathHoles(c *Connection, ply func(*Hole) HoleShape) []PathHole {
 	allow := c.Edition.HoleAllowance()
 	ph := make([]PathHole, len(c.Holes))
-	for i, h := range c.Holes {
-		ph[i] = PathHole{X: h.X, U: h.Y, Dh: h.Dy + allow}
+	for i := range c.Holes {
+		h := &c.Holes[i]
+		ph[i] = PathHole{X: h.X, U: h.Y, Dh: ply(h).Dy + allow}
 	}
 	return ph
 }
@@ -95,7 +97,7 @@ func pathHoles(c *Connection) []PathHole {
 // worst path's deduction times the thickness of every piece.
 func NetArea(c *Connection) (An units.Area, deduction units.Length) {
 	m := c.Member
-	deduction, _ = NetWidthDeduction(pathHoles(c))
+	deduction, _ = NetWidthDeduction(pathHoles(c, memberPly))
 	return m.Ag - units.Area(float64(m.Pieces)*float64(deduction)*float64(m.T)), deduction
 }
 

@@ -63,20 +63,9 @@ func WhitmoreSection(c *Connection) Whitmore {
 	w.Spread = w.High.Y1 - w.Low.Y1
 	w.YLo, w.YHi = max(w.Low.Y1, c.Plate.YMin()), min(w.High.Y1, c.Plate.YMax())
 	w.Lw = max(w.YHi-w.YLo, 0)
-	ded, path := NetWidthDeduction(plateHoles(c))
+	ded, path := NetWidthDeduction(pathHoles(c, platePly))
 	w.Holes, w.Deducted = len(path), ded
 	return w
-}
-
-// plateHoles returns the plate's holes for the net-section search.
-func plateHoles(c *Connection) []PathHole {
-	allow := c.Edition.HoleAllowance()
-	ph := make([]PathHole, len(c.Holes))
-	for i := range c.Holes {
-		h := &c.Holes[i]
-		ph[i] = PathHole{X: h.X, U: h.Y, Dh: h.InPlate().Dy + allow}
-	}
-	return ph
 }
 
 // PlateYield is tensile yielding of the plate on the Whitmore section:
