@@ -107,8 +107,9 @@ func (e *Edition) maxEdge(t units.Length) units.Length {
 	return min(12*t, limit)
 }
 
-// maxSpacing is J3.5 [J3.6]: 24t ≤ 12 in (360-16 305 mm, 360-22 300 mm);
-// unpainted weathering steel 14t ≤ 7 in (180 mm).
+// maxSpacing is J3.5 [J3.6]: 24t ≤ 12 in (300 mm); unpainted weathering
+// steel 14t ≤ 7 in (180 mm). Both editions print 300 mm (360-16 J3.5(a)
+// read in its text, page 16.1-131; 360-05 printed 305 mm).
 func (e *Edition) maxSpacing(t units.Length, weathering bool) units.Length {
 	if weathering {
 		limit := 7 * units.Inch
@@ -119,10 +120,7 @@ func (e *Edition) maxSpacing(t units.Length, weathering bool) units.Length {
 	}
 	limit := 12 * units.Inch
 	if e.si() {
-		limit = 305 * units.Millimetre
-		if e.is22() {
-			limit = 300 * units.Millimetre
-		}
+		limit = 300 * units.Millimetre
 	}
 	return min(24*t, limit)
 }

@@ -83,8 +83,8 @@ func (e *Edition) ClearSpacingRule() bool { return e.is22() }
 func (e *Edition) MaxEdge(t units.Length) units.Length { return e.maxEdge(t) }
 
 // MaxSpacing is the largest longitudinal spacing for a plate and shape in
-// continuous contact, t the thinner part: 24t ≤ 12 in (360-16: 305 mm,
-// 360-22: 300 mm); unpainted weathering steel 14t ≤ 7 in (180 mm).
+// continuous contact, t the thinner part: 24t ≤ 12 in (300 mm); unpainted
+// weathering steel 14t ≤ 7 in (180 mm).
 func (e *Edition) MaxSpacing(t units.Length, weathering bool) units.Length {
 	return e.maxSpacing(t, weathering)
 }
