@@ -90,6 +90,7 @@ func (r *Report) Verdict() string {
 // cautions lists the caution line and the assumptions the check made.
 func cautions(d *Design) []string {
 	c := []string{Caution}
+	c = append(c, d.Conn.Edition.Unconfirmed()...)
 	if d.Conn.Plate != nil {
 		c = append(c, "The plate is taken as a rectangle of the given width centred on the bolt group; "+
 			"its side edges are free edges for block shear.")

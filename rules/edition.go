@@ -160,3 +160,17 @@ func (e *Edition) SplicePlateCap() (float64, bool) { return e.splicePlateCap() }
 func (e *Edition) HolePermitted(t HoleType, dir SlotDir, j Joint) (ok bool, why string) {
 	return e.holePermitted(t, dir, j)
 }
+
+// Unconfirmed lists the values this edition uses that could not be read in
+// the standard's printed text, in words a report can print. An empty list
+// means every value the edition uses was read (or computed from a printed
+// formula).
+func (e *Edition) Unconfirmed() []string {
+	if !e.si() || e.is22() {
+		return nil
+	}
+	return []string{"The MPa values of Table J3.2 used for AISC 360-16 (A307 310 / 188, Group A 620 / 370 / 470, " +
+		"Group B 780 / 470 / 580 MPa) and its 950 mm long-joint length could not be read in 360-16's printed text: " +
+		"they are 360-22's, with A307 at 188 MPa. A reading of 360-16 gave 372 / 469 / 579 MPa; " +
+		"confirm the bolt stresses against the printed table."}
+}

@@ -149,3 +149,22 @@ func TestSplicePlateCap(t *testing.T) {
 		}
 	}
 }
+
+// TestUnconfirmedOnlyWhereNotRead: 360-22 (both systems) and 360-16 US
+// were read in the printed text (Table J3.2, AISC 360-22; AISC 360-16
+// Table J3.2 in ksi); only 360-16's SI bolt stresses were not, and the
+// report must say so.
+func TestUnconfirmedOnlyWhereNotRead(t *testing.T) {
+	for _, tt := range []struct {
+		e    *Edition
+		want int
+	}{{us22(t), 0}, {si22(t), 0}, {us16(t), 0}, {si16(t), 1}} {
+		got := tt.e.Unconfirmed()
+		if len(got) != tt.want {
+			t.Errorf("%s: %d unconfirmed notes, want %d: %q", tt.e, len(got), tt.want, got)
+		}
+	}
+	if n := si16(t).Unconfirmed(); len(n) == 1 && !strings.Contains(n[0], "Table J3.2") {
+		t.Errorf("note does not name the table: %q", n[0])
+	}
+}
