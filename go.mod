@@ -9,6 +9,7 @@ require (
 	github.com/yofu/dxf v0.0.0-20250806094206-f3988c7f0176
 	go.yaml.in/yaml/v3 v3.0.6
 	golang.org/x/net v0.62.0
+	golang.org/x/sys v0.49.0
 	golang.org/x/term v0.47.0
 	pgregory.net/rapid v1.3.0
 )
@@ -18,5 +19,4 @@ require (
 	github.com/mitchellh/colorstring v0.0.0-20190213212951-d06e56a500db // indirect
 	github.com/rivo/uniseg v0.4.7 // indirect
 	github.com/spf13/pflag v1.0.9 // indirect
-	golang.org/x/sys v0.49.0 // indirect
 )

@@ -2,6 +2,7 @@ package detail
 
 import (
 	"bytes"
+	"crypto/sha256"
 	"errors"
 	"fmt"
 	"io"
@@ -41,6 +42,13 @@ type Job struct {
 	Holes     []HoleCentre
 	Stock     Stock
 	Tolerance Tolerance
+
+	// SHA256 is the hex SHA-256 of the job file's bytes.
+	SHA256 string
+	// Stamp names the run that writes this job's files (tool version,
+	// mode, input hash); "" when nothing is stamped. The caller sets it;
+	// the JSON, the HTML report and every DXF of a file set carry it.
+	Stamp string
 
 	// Raw holds every scalar as written in the file, keyed by field path,
 	// so that a rewritten job can re-emit the user's own spelling.
@@ -320,10 +328,11 @@ func ParseJob(file string, data []byte) (*Job, error) {
 		return nil, &InputError{File: file, Line: root.Line, Msg: "a job must be a mapping of keys (mark:, load:, member:, …)"}
 	}
 	p := &parser{job: &Job{
-		File:  file,
-		Raw:   map[string]string{},
-		lines: map[string]int{"": root.Line},
-		root:  &doc,
+		File:   file,
+		SHA256: fmt.Sprintf("%x", sha256.Sum256(data)),
+		Raw:    map[string]string{},
+		lines:  map[string]int{"": root.Line},
+		root:   &doc,
 	}}
 	if err := p.noAliases(root, ""); err != nil {
 		return nil, err
@@ -664,7 +673,9 @@ func (p *parser) list(n *yaml.Node, path, example string, maxN int) ([]*yaml.Nod
 	return n.Content, nil
 }
 
-var markPattern = regexp.MustCompile(`^[A-Za-z0-9._-]{1,40}$`)
+// markPattern: a mark names its output folder and files, so it never
+// starts with '.' (a hidden file) or '-' (read as an option by shell tools).
+var markPattern = regexp.MustCompile(`^[A-Za-z0-9_][A-Za-z0-9._-]{0,39}$`)
 
 var rootKeys = []string{"mark", "units", "standard", "method", "quantity", "load", "member", "plate", "bolts", "holes", "stock", "tolerance"}
 
@@ -687,7 +698,7 @@ func (p *parser) parseRoot(root *yaml.Node) error {
 		}
 		if !markPattern.MatchString(j.Mark) || j.Mark == "." || j.Mark == ".." {
 			return p.errAt(n, "mark", fmt.Sprintf("%q is not a usable mark", j.Mark),
-				"a mark is 1 to 40 letters, digits, '.', '_' or '-' (it names the output files), e.g. BR-12")
+				"a mark is 1 to 40 letters, digits, '.', '_' or '-', not starting with '.' or '-' (it names the output files), e.g. BR-12")
 		}
 	} else {
 		return p.missing(b, "mark", "is required", "add a piece mark, e.g. mark: BR-12")

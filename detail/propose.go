@@ -1675,6 +1675,7 @@ type jsonInfeasible struct {
 	Blocking   []jsonBlocker `json:"blocking"`
 	Search     jsonSearch    `json:"search"`
 	Cautions   []string      `json:"cautions"`
+	Stamp      string        `json:"stamp,omitempty"`
 }
 
 func (p *Proposal) search(mode SearchMode) jsonSearch {
@@ -1697,6 +1698,7 @@ func (p *Proposal) JSON(mode SearchMode) ([]byte, error) {
 		d := jsonProposal{jsonReport: p.Report.document(), Layout: jl, Plate: jp, Bolts: p.Layout.Bolts(),
 			Length: lengthJSON(p.Length, sys), Alternatives: []jsonAlternative{},
 			Search: p.search(mode)}
+		d.Stamp = p.Job.Stamp
 		for _, a := range p.Alternatives {
 			al, ap := a.Layout.json(sys)
 			d.Alternatives = append(d.Alternatives, jsonAlternative{Layout: al, Plate: ap, Bolts: a.Layout.Bolts(),
@@ -1706,7 +1708,7 @@ func (p *Proposal) JSON(mode SearchMode) ([]byte, error) {
 	} else {
 		d := jsonInfeasible{Mark: p.Job.Mark, Standard: p.Job.Standard, Method: p.Job.Method.String(), Units: sys.String(),
 			UnitLabels: sys.Labels(), Verdict: "infeasible", Message: p.Summary, Blocking: []jsonBlocker{},
-			Search: p.search(mode), Cautions: []string{Caution}}
+			Search: p.search(mode), Cautions: []string{Caution}, Stamp: p.Job.Stamp}
 		for _, b := range p.Blockers {
 			d.Blocking = append(d.Blocking, jsonBlocker{ID: b.ID, Ratio: jsonNum(b.Ratio), What: b.Text, Lift: b.Lift})
 		}

@@ -191,6 +191,7 @@ type jsonReport struct {
 	Detailing      []jsonFinding `json:"detailing"`
 	Holes          []jsonHole    `json:"holes"`
 	Cautions       []string      `json:"cautions"`
+	Stamp          string        `json:"stamp,omitempty"` // Job.Stamp: the run that wrote the file set
 }
 
 // document converts the report to the JSON contract of SPEC §9, every
@@ -206,6 +207,7 @@ func (r *Report) document() jsonReport {
 		UnitLabels: sys.Labels(), Demand: force(d.Conn.Demand), Combination: d.Combination,
 		Verdict: r.Verdict(), Governing: g.ID, GoverningRatio: jsonNum(g.Ratio), Failing: r.Failing(),
 		LimitStates: []jsonLimit{}, Detailing: []jsonFinding{}, Holes: []jsonHole{}, Cautions: r.Cautions,
+		Stamp: d.Job.Stamp,
 	}
 	if doc.Failing == nil {
 		doc.Failing = []string{}

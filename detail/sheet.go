@@ -241,6 +241,9 @@ type Sheet struct {
 	Title [][2]string
 	Lines []Segment // in the sheet's frame: the title block's rules
 	Texts []Text    // in the sheet's frame: schedule, title block
+	// Stamp is the job's run stamp (Job.Stamp), written as a comment into
+	// every file drawn from the sheet; "" for none.
+	Stamp string
 }
 
 // Stamp is written on every view of a sheet not for fabrication.
@@ -259,7 +262,8 @@ func NewSheet(r *Report, notForFabrication bool) (*Sheet, error) {
 	}
 	d := r.Design
 	sys := d.Job.Units
-	s := &Sheet{Mark: d.Job.Mark, Units: sys, NotForFabrication: notForFabrication, TextHeight: textHeight(sys)}
+	s := &Sheet{Mark: d.Job.Mark, Units: sys, NotForFabrication: notForFabrication, TextHeight: textHeight(sys),
+		Stamp: d.Job.Stamp}
 	l := sheetLayout{sys: sys, h: s.TextHeight}
 
 	member := l.memberView(d)

@@ -4,6 +4,7 @@ import (
 	"bytes"
 	"fmt"
 	"slices"
+	"strings"
 	"sync"
 
 	"github.com/yofu/dxf/block"
@@ -36,7 +37,7 @@ func Files(s *detail.Sheet) ([]File, error) {
 	if err != nil {
 		return nil, err
 	}
-	out := []File{{s.Mark + ".dxf", b}}
+	out := []File{{s.Mark + ".dxf", Comment(b, s.Stamp)}}
 	if s.NotForFabrication {
 		return out, nil
 	}
@@ -46,9 +47,26 @@ func Files(s *detail.Sheet) ([]File, error) {
 		if err != nil {
 			return nil, err
 		}
-		out = append(out, File{s.Mark + "-" + p.Name + ".cam.dxf", b})
+		out = append(out, File{s.Mark + "-" + p.Name + ".cam.dxf", Comment(b, s.Stamp)})
 	}
 	return out, nil
+}
+
+// CommentPrefix starts the DXF comment (group 999) that carries a run
+// stamp at the top of every file of a file set.
+const CommentPrefix = "gaugeline stamp: "
+
+// Comment puts the stamp in a DXF comment (group code 999, which readers
+// skip) before the first section of data; an empty stamp leaves data as
+// it is. A stamp is one line: line breaks in it are replaced by blanks.
+func Comment(data []byte, stamp string) []byte {
+	if stamp == "" {
+		return data
+	}
+	stamp = strings.NewReplacer("\r", " ", "\n", " ").Replace(stamp)
+	out := make([]byte, 0, len(data)+len(stamp)+32)
+	out = append(out, "999\n"+CommentPrefix+stamp+"\n"...)
+	return append(out, data...)
 }
 
 // layerColors are the ACI colours of the layers: parts in the foreground

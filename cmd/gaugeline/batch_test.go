@@ -18,7 +18,7 @@ import (
 
 // summaryRow is one row of summary.csv.
 type summaryRow struct {
-	file, mark, verdict, governing, ratio, bolts, message string
+	file, mark, verdict, governing, ratio, bolts, set, input, message string
 }
 
 func readSummary(t *testing.T, out string) []summaryRow {
@@ -36,7 +36,7 @@ func readSummary(t *testing.T, out string) []summaryRow {
 	}
 	var rows []summaryRow
 	for _, r := range recs[1:] {
-		rows = append(rows, summaryRow{r[0], r[1], r[2], r[3], r[4], r[5], r[6]})
+		rows = append(rows, summaryRow{r[0], r[1], r[2], r[3], r[4], r[5], r[6], r[7], r[8]})
 	}
 	return rows
 }
@@ -74,14 +74,52 @@ func checkRows(t *testing.T, got []summaryRow, want []wantRow) {
 	}
 }
 
-// noTemps fails when a temporary file was left in dir.
+// noTemps fails when a temporary file was left in dir (the lock file a
+// run takes stays, empty, by design).
 func noTemps(t *testing.T, dir string) {
 	t.Helper()
 	for _, n := range dirNames(t, dir) {
-		if strings.HasSuffix(n, ".tmp") || strings.HasPrefix(n, ".") {
+		if n != lockName && (strings.HasSuffix(n, ".tmp") || strings.HasPrefix(n, ".")) {
 			t.Errorf("left behind in %s: %s", dir, n)
 		}
 	}
+}
+
+// outFiles lists every file under an output folder as a slash path
+// relative to it (MARK/MARK.json), sorted, without the lock file.
+func outFiles(t *testing.T, dir string) []string {
+	t.Helper()
+	var names []string
+	err := filepath.WalkDir(dir, func(p string, d os.DirEntry, err error) error {
+		if err != nil || d.IsDir() {
+			return err
+		}
+		rel, _ := filepath.Rel(dir, p)
+		if rel != lockName {
+			names = append(names, filepath.ToSlash(rel))
+		}
+		return nil
+	})
+	if err != nil && !os.IsNotExist(err) {
+		t.Fatal(err)
+	}
+	slices.Sort(names)
+	return names
+}
+
+// setOf is the files of a mark's set folder, its manifest included.
+func setOf(mark string, names ...string) []string {
+	out := []string{mark + "/" + mark + manifestExt}
+	for _, n := range names {
+		out = append(out, mark+"/"+n)
+	}
+	slices.Sort(out)
+	return out
+}
+
+// sheetSet is a passing mark's set with sheets: JSON, cut sheet, CAM files.
+func sheetSet(mark string) []string {
+	return setOf(mark, mark+".json", mark+".dxf", mark+"-member.cam.dxf", mark+"-plate.cam.dxf")
 }
 
 // folderRows is what a check of testdata/batch says, job by job. Ratios
@@ -112,12 +150,12 @@ func TestBatchFolder(t *testing.T) {
 	}
 	checkRows(t, readSummary(t, out), folderRows)
 
-	want := []string{"HB-7.json", "TE-9.json", "summary.csv", "summary.md"}
+	want := slices.Concat([]string{"summary.csv", "summary.md"}, setOf("HB-7", "HB-7.json"), setOf("TE-9", "TE-9.json"))
 	for _, m := range []string{"KB-40", "RB-4", "TD-21.b"} {
-		want = append(want, m+".json", m+".dxf", m+"-member.cam.dxf", m+"-plate.cam.dxf")
+		want = append(want, sheetSet(m)...)
 	}
 	slices.Sort(want)
-	if got := dirNames(t, out); !slices.Equal(got, want) {
+	if got := outFiles(t, out); !slices.Equal(got, want) {
 		t.Errorf("files in -o DIR:\n got %v\nwant %v", got, want)
 	}
 	noTemps(t, out)
@@ -125,7 +163,7 @@ func TestBatchFolder(t *testing.T) {
 	// The JSON is the check's: the same contract as `check --format json`.
 	for mark, verdict := range map[string]string{"RB-4": "pass", "HB-7": "fail", "TD-21.b": "pass"} {
 		var rep jsonReport
-		data, err := os.ReadFile(filepath.Join(out, mark+".json"))
+		data, err := os.ReadFile(filepath.Join(out, mark, mark+".json"))
 		if err != nil {
 			t.Fatal(err)
 		}
@@ -247,12 +285,13 @@ func TestBatchDuplicateMarks(t *testing.T) {
 		{"40-other.yaml", "RB-5", "pass", "bolts.shear", "5", nil},
 	})
 	// RB-4 fails: its JSON only, the first job's.
-	data, err := os.ReadFile(filepath.Join(out, "RB-4.json"))
+	data, err := os.ReadFile(filepath.Join(out, "RB-4", "RB-4.json"))
 	if err != nil || !bytes.Contains(data, []byte(`"verdict": "fail"`)) {
 		t.Errorf("RB-4.json is not the first job's: %v", err)
 	}
-	want := []string{"RB-4.json", "RB-5-member.cam.dxf", "RB-5-plate.cam.dxf", "RB-5.dxf", "RB-5.json", "summary.csv", "summary.md"}
-	if got := dirNames(t, out); !slices.Equal(got, want) {
+	want := slices.Concat(setOf("RB-4", "RB-4.json"), sheetSet("RB-5"), []string{"summary.csv", "summary.md"})
+	slices.Sort(want)
+	if got := outFiles(t, out); !slices.Equal(got, want) {
 		t.Errorf("files:\n got %v\nwant %v", got, want)
 	}
 }
@@ -300,39 +339,63 @@ func TestBatchPropose(t *testing.T) {
 		Verdict string `json:"verdict"`
 		Layout  any    `json:"layout"`
 	}
-	data, _ := os.ReadFile(filepath.Join(out, "DA-3.json"))
+	data, _ := os.ReadFile(filepath.Join(out, "DA-3", "DA-3.json"))
 	if err := json.Unmarshal(data, &p); err != nil || p.Verdict != "pass" || p.Layout == nil {
 		t.Errorf("DA-3.json is not a proposal: %v %+v", err, p)
 	}
-	for _, f := range []string{"DA-3.dxf", "DA-3-member.cam.dxf", "BR-12.dxf", "IB-2.json"} {
+	for _, f := range []string{"DA-3/DA-3.dxf", "DA-3/DA-3-member.cam.dxf", "BR-12/BR-12.dxf", "IB-2/IB-2.json"} {
 		if _, err := os.Stat(filepath.Join(out, f)); err != nil {
 			t.Error(err)
 		}
 	}
-	if _, err := os.Stat(filepath.Join(out, "IB-2.dxf")); err == nil {
+	if _, err := os.Stat(filepath.Join(out, "IB-2", "IB-2.dxf")); err == nil {
 		t.Error("an infeasible job got a sheet")
 	}
 }
 
 // A job that now fails loses the cut sheet and CAM files an earlier run
-// left for its mark; other files in the folder are left alone.
+// left for its mark (its set is replaced whole); files and folders that
+// are not its set are left alone, and a folder of its name that is not a
+// set gaugeline wrote is never touched.
 func TestBatchRemovesStaleSheets(t *testing.T) {
 	dir := copyJobs(t, map[string]string{"d.yaml": "batch/d-overloaded-brace.yaml"})
 	out := filepath.Join(dir, "out")
-	if err := os.MkdirAll(out, 0o755); err != nil {
-		t.Fatal(err)
-	}
-	for _, f := range []string{"HB-7.dxf", "HB-7-member.cam.dxf", "HB-7-plate.cam.dxf", "notes.txt", "HB-70.dxf"} {
-		if err := os.WriteFile(filepath.Join(out, f), []byte("old"), 0o644); err != nil {
+	write := func(name, s string) {
+		t.Helper()
+		if err := os.MkdirAll(filepath.Dir(filepath.Join(out, name)), 0o755); err != nil {
+			t.Fatal(err)
+		}
+		if err := os.WriteFile(filepath.Join(out, name), []byte(s), 0o644); err != nil {
 			t.Fatal(err)
 		}
 	}
+	// An earlier run's whole set of HB-7, passing then: a manifest and sheets.
+	for _, f := range []string{"HB-7.dxf", "HB-7-member.cam.dxf", "HB-7-plate.cam.dxf", "HB-7.json"} {
+		write("HB-7/"+f, "old")
+	}
+	write("HB-7/HB-7.files", "stamp: old\n")
+	write("notes.txt", "mine")
+	write("HB-70/HB-70.dxf", "someone else's")
 	if r := gaugeline(t, ".", "batch", dir, "-o", out, "--sheets"); r.code != 1 {
 		t.Fatalf("exit %d, want 1: %s", r.code, r.stderr)
 	}
-	want := []string{"HB-7.json", "HB-70.dxf", "notes.txt", "summary.csv", "summary.md"}
-	if got := dirNames(t, out); !slices.Equal(got, want) {
+	want := slices.Concat(setOf("HB-7", "HB-7.json"), []string{"HB-70/HB-70.dxf", "notes.txt", "summary.csv", "summary.md"})
+	slices.Sort(want)
+	if got := outFiles(t, out); !slices.Equal(got, want) {
 		t.Errorf("files:\n got %v\nwant %v", got, want)
+	}
+
+	// A folder HB-7 that is not a set: the job is refused, the folder kept.
+	if err := os.RemoveAll(filepath.Join(out, "HB-7")); err != nil {
+		t.Fatal(err)
+	}
+	write("HB-7/drawings.pdf", "not ours")
+	r := gaugeline(t, ".", "batch", dir, "-o", out, "--sheets")
+	if r.code != 2 || !strings.Contains(r.stderr, "is not a gaugeline file set") {
+		t.Errorf("exit %d, stderr %q; want 2 and the folder refused", r.code, r.stderr)
+	}
+	if b, err := os.ReadFile(filepath.Join(out, "HB-7", "drawings.pdf")); err != nil || string(b) != "not ours" {
+		t.Errorf("a folder that is not a set was touched: %v", err)
 	}
 }
 
@@ -436,7 +499,7 @@ func TestBatchInterrupt(t *testing.T) {
 		t.Fatal(err)
 	}
 	for deadline := time.Now().Add(30 * time.Second); ; time.Sleep(2 * time.Millisecond) {
-		if _, err := os.Stat(filepath.Join(out, "UC-0.json")); err == nil {
+		if _, err := os.Stat(filepath.Join(out, "UC-0", "UC-0.json")); err == nil {
 			break
 		}
 		if time.Now().After(deadline) {
@@ -462,8 +525,8 @@ func TestBatchInterrupt(t *testing.T) {
 		t.Skip("the batch finished before the interrupt reached it")
 	}
 	var ee *exec.ExitError
-	if !errors.As(err, &ee) || ee.ExitCode() != 2 {
-		t.Errorf("exit %v, want 2 with %d jobs not run", err, notRun)
+	if !errors.As(err, &ee) || ee.ExitCode() != exitInterrupted {
+		t.Errorf("exit %v, want %d (interrupted) with %d jobs not run", err, exitInterrupted, notRun)
 	}
 	if rows[0].verdict != "pass" || notRun == n {
 		t.Errorf("the first job did not run to the end: %+v", rows[0])
@@ -487,14 +550,16 @@ func TestBatchInputs(t *testing.T) {
 			t.Errorf("commentStart(%q): kept %q, want %q", tt.line, got, tt.want)
 		}
 	}
-	for _, mark := range []string{"BR-12", "TD-21.b", ".x", "a_b"} {
-		if _, err := markFiles(mark); err != nil {
-			t.Errorf("markFiles(%q): %v", mark, err)
+	for _, mark := range []string{"BR-12", "TD-21.b", "a_b", "A-member.cam"} {
+		if err := checkSetName(mark); err != nil {
+			t.Errorf("checkSetName(%q): %v", mark, err)
 		}
 	}
-	for _, mark := range []string{"../x", "a/b", `a\b`, "C:x"} {
-		if _, err := markFiles(mark); err == nil {
-			t.Errorf("markFiles(%q) accepted a path", mark)
+	// Issue 11: marks starting with '.' or '-' are refused, and so are the
+	// batch's own file names (in any case).
+	for _, mark := range []string{"../x", "a/b", `a\b`, "C:x", ".x", "-rf", "summary.csv", "SUMMARY.md"} {
+		if err := checkSetName(mark); err == nil {
+			t.Errorf("checkSetName(%q) accepted it", mark)
 		}
 	}
 }

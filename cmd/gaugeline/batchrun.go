@@ -4,6 +4,7 @@ import (
 	"bufio"
 	"bytes"
 	"context"
+	"crypto/sha256"
 	"encoding/csv"
 	"errors"
 	"fmt"
@@ -14,7 +15,6 @@ import (
 	"os/signal"
 	"path/filepath"
 	"runtime"
-	"slices"
 	"strconv"
 	"strings"
 	"sync"
@@ -38,12 +38,13 @@ import (
 type batchVerdict int
 
 const (
-	batchPass  batchVerdict = iota
-	batchFail               // a limit state or rule fails, or no layout passes
-	batchError              // bad input: nothing written
+	batchPass   batchVerdict = iota
+	batchFail                // a limit state or rule fails, or no layout passes
+	batchError               // bad input: nothing written
+	batchNotRun              // the batch was interrupted before the job started
 )
 
-func (v batchVerdict) String() string { return [...]string{"pass", "fail", "error"}[v] }
+func (v batchVerdict) String() string { return [...]string{"pass", "fail", "error", "not run"}[v] }
 
 // batchRow is one job's line of the summary.
 type batchRow struct {
@@ -57,11 +58,13 @@ type batchRow struct {
 	Hint      string  // advice on an error
 	JSON      int     // files written: JSON and DXF
 	DXF       int
+	Set       string // the folder of the mark's file set; "" when none was written
+	Input     string // SHA-256 of the job file, as in the set's stamp
 }
 
 // batchConfig is what every job of a batch shares.
 type batchConfig struct {
-	out     string // output directory, existing
+	out     string // output directory, existing and locked
 	propose bool
 	sheets  bool
 	workers int
@@ -162,30 +165,7 @@ func errText(err error) string {
 	return err.Error()
 }
 
-// partNames are the parts a sheet draws, in the CAM file names
-// MARK-PART.cam.dxf (see detail.NewSheet).
-var partNames = []string{"member", "plate"}
-
-// markFiles are every file a job of this mark may write into the output
-// directory. A mark is already restricted to [A-Za-z0-9._-] by the job
-// parser; markFiles still refuses anything that is not a plain file name.
-func markFiles(mark string) ([]string, error) {
-	names := []string{mark + ".json", mark + ".dxf"}
-	for _, p := range partNames {
-		names = append(names, mark+"-"+p+".cam.dxf")
-	}
-	for _, n := range names {
-		if n != filepath.Base(n) || !filepath.IsLocal(n) || strings.ContainsAny(n, `/\:`) {
-			return nil, fmt.Errorf("mark %q does not make a safe file name", mark)
-		}
-	}
-	return names, nil
-}
-
-// summaryFiles are the batch's own files; no mark may claim them.
-var summaryFiles = []string{"summary.csv", "summary.md"}
-
-// markGate hands out output file names in input order. Job i waits at the
+// markGate hands out set names (marks) in input order. Job i waits at the
 // gate until jobs 0…i-1 have passed it. That never deadlocks: jobs are
 // dispatched in input order and each reaches the gate after reading its
 // own file only, so the lowest job not yet through is always running.
@@ -193,7 +173,7 @@ type markGate struct {
 	mu     sync.Mutex
 	turn   *sync.Cond
 	next   int
-	owners map[string]markOwner // lower-cased file name → who writes it
+	owners map[string]markOwner // lower-cased mark → who writes its set
 }
 
 type markOwner struct{ file, mark string }
@@ -201,16 +181,13 @@ type markOwner struct{ file, mark string }
 func newMarkGate() *markGate {
 	g := &markGate{owners: map[string]markOwner{}}
 	g.turn = sync.NewCond(&g.mu)
-	for _, n := range summaryFiles {
-		g.owners[n] = markOwner{file: "the batch summary"}
-	}
 	return g
 }
 
-// pass lets job i through the gate and claims the file names of its mark
-// ("" when the job could not be read). It returns why the names cannot be
-// had, "" when they are the job's. File names are compared without case:
-// on Windows and macOS file systems BR-1 and br-1 are one file.
+// pass lets job i through the gate and claims the set of its mark ("" when
+// the job could not be read). It returns why the set cannot be had, ""
+// when it is the job's. Marks are compared without case: on Windows and
+// macOS file systems BR-1 and br-1 are one folder.
 func (g *markGate) pass(i int, file, mark string) string {
 	g.mu.Lock()
 	defer g.mu.Unlock()
@@ -225,27 +202,16 @@ func (g *markGate) pass(i int, file, mark string) string {
 	if mark == "" {
 		return ""
 	}
-	names, err := markFiles(mark)
-	if err != nil {
+	if err := checkSetName(mark); err != nil {
 		return err.Error()
 	}
-	for _, n := range names {
-		if o, taken := g.owners[strings.ToLower(n)]; taken {
-			switch {
-			case o.mark == mark:
-				return fmt.Sprintf("duplicate mark %s, already used by %s", mark, o.file)
-			case strings.EqualFold(o.mark, mark):
-				return fmt.Sprintf("duplicate mark %s, already used as %s by %s (marks differing only in case name the same files on Windows and macOS)", mark, o.mark, o.file)
-			case o.mark == "":
-				return fmt.Sprintf("mark %s would write %s, which is %s", mark, n, o.file)
-			default:
-				return fmt.Sprintf("mark %s would write %s, which %s (mark %s) writes", mark, n, o.file, o.mark)
-			}
+	if o, taken := g.owners[strings.ToLower(mark)]; taken {
+		if o.mark == mark {
+			return fmt.Sprintf("duplicate mark %s, already used by %s", mark, o.file)
 		}
+		return fmt.Sprintf("duplicate mark %s, already used as %s by %s (marks differing only in case name the same folder on Windows and macOS)", mark, o.mark, o.file)
 	}
-	for _, n := range names {
-		g.owners[strings.ToLower(n)] = markOwner{file, mark}
-	}
+	g.owners[strings.ToLower(mark)] = markOwner{file, mark}
 	return ""
 }
 
@@ -287,7 +253,7 @@ func runJobs(ctx context.Context, cfg batchConfig, files []string, done func()) 
 	}
 	for i, ok := range ran {
 		if !ok {
-			rows[i] = batchRow{File: files[i], Verdict: batchError, Ratio: math.NaN(),
+			rows[i] = batchRow{File: files[i], Verdict: batchNotRun, Ratio: math.NaN(),
 				Message: files[i] + ": not run: the batch was interrupted"}
 		}
 	}
@@ -324,26 +290,28 @@ func runJob(cfg batchConfig, gate *markGate, i int, path string) (row batchRow) 
 		row.Verdict, row.Message = batchError, path+": "+conflict
 		return row // the names are another job's: touch nothing
 	}
+	row.Input = job.SHA256
+	mode := "check"
+	if cfg.propose {
+		mode = "propose"
+	}
+	job.Stamp = stampFor(mode, job)
 	files, err := jobFiles(cfg, job, &row)
 	if err == nil {
-		err = checkNames(mark, files)
-	}
-	if err == nil {
-		err = writeAll(cfg.out, files)
+		err = writeSet(cfg.out, fileSet{name: mark, stamp: job.Stamp, files: files})
 	}
 	if err != nil {
-		files = nil
 		row = errorRow(row, path, err)
+		removeSet(cfg.out, mark) // an old set must not outlive a job that no longer reads
+		return row
 	}
+	row.Set = mark
 	for _, f := range files {
 		if strings.HasSuffix(f.Name, ".json") {
 			row.JSON++
 		} else {
 			row.DXF++
 		}
-	}
-	if row.Verdict != batchPass {
-		removeStale(cfg.out, mark, files)
 	}
 	return row
 }
@@ -385,6 +353,7 @@ func jobFiles(cfg batchConfig, job *detail.Job, row *batchRow) ([]dxfout.File, e
 			return []dxfout.File{{Name: job.Mark + ".json", Data: data}}, nil
 		}
 		r = p.Report
+		r.Design.Job.Stamp = job.Stamp // the sheet of the layout job carries the input's stamp
 	} else {
 		d, err := job.Build()
 		if err != nil {
@@ -419,37 +388,8 @@ func jobFiles(cfg batchConfig, job *detail.Job, row *batchRow) ([]dxfout.File, e
 	return append(files, dxf...), nil
 }
 
-// checkNames makes sure a job writes only the names its mark claimed.
-func checkNames(mark string, files []dxfout.File) error {
-	names, err := markFiles(mark)
-	if err != nil {
-		return err
-	}
-	for _, f := range files {
-		if !slices.Contains(names, f.Name) {
-			return fmt.Errorf("gaugeline: batch: %s is not one of the files of mark %s", f.Name, mark)
-		}
-	}
-	return nil
-}
-
-// removeStale removes the files of mark that an earlier run left in dir
-// and this run did not write, so that a job that now fails never sits next
-// to an old cut sheet or CAM file.
-func removeStale(dir, mark string, wrote []dxfout.File) {
-	names, err := markFiles(mark)
-	if err != nil {
-		return
-	}
-	for _, n := range names {
-		if !slices.ContainsFunc(wrote, func(f dxfout.File) bool { return f.Name == n }) {
-			os.Remove(filepath.Join(dir, n)) // most often absent
-		}
-	}
-}
-
 // batchCounts tallies the rows.
-type batchCounts struct{ jobs, pass, fail, errors, json, dxf int }
+type batchCounts struct{ jobs, pass, fail, errors, notRun, json, dxf int }
 
 func countRows(rows []batchRow) batchCounts {
 	c := batchCounts{jobs: len(rows)}
@@ -459,6 +399,8 @@ func countRows(rows []batchRow) batchCounts {
 			c.pass++
 		case batchFail:
 			c.fail++
+		case batchNotRun:
+			c.notRun++
 		default:
 			c.errors++
 		}
@@ -468,9 +410,12 @@ func countRows(rows []batchRow) batchCounts {
 	return c
 }
 
-// exit is the batch's exit code: bad input wins over a failing job.
+// exit is the batch's exit code: an interruption wins over bad input,
+// bad input over a failing job.
 func (c batchCounts) exit() int {
 	switch {
+	case c.notRun > 0:
+		return exitInterrupted
 	case c.errors > 0:
 		return exitInput
 	case c.fail > 0:
@@ -480,10 +425,14 @@ func (c batchCounts) exit() int {
 }
 
 func (c batchCounts) String() string {
-	return fmt.Sprintf("%d jobs: %d pass, %d fail, %d error", c.jobs, c.pass, c.fail, c.errors)
+	s := fmt.Sprintf("%d jobs: %d pass, %d fail, %d error", c.jobs, c.pass, c.fail, c.errors)
+	if c.notRun > 0 {
+		s += fmt.Sprintf(", %d not run (interrupted)", c.notRun)
+	}
+	return s
 }
 
-var summaryHeader = []string{"file", "mark", "verdict", "governing", "ratio", "bolts", "message"}
+var summaryHeader = []string{"file", "mark", "verdict", "governing", "ratio", "bolts", "set", "input_sha256", "message"}
 
 func (r batchRow) fields() []string {
 	ratio, bolts := "", ""
@@ -497,7 +446,7 @@ func (r batchRow) fields() []string {
 	if r.Hint != "" {
 		msg += " (hint: " + r.Hint + ")"
 	}
-	return []string{r.File, r.Mark, r.Verdict.String(), r.Governing, ratio, bolts, msg}
+	return []string{r.File, r.Mark, r.Verdict.String(), r.Governing, ratio, bolts, r.Set, r.Input, msg}
 }
 
 // summaryCSV is summary.csv: a header, then one row per job.
@@ -512,18 +461,42 @@ func summaryCSV(rows []batchRow) ([]byte, error) {
 	return b.Bytes(), w.Error()
 }
 
-// summaryMarkdown is summary.md: the counts, then one table row per job.
-func summaryMarkdown(rows []batchRow, cfg batchConfig) []byte {
-	var b bytes.Buffer
+// runLine names the run a summary describes: the tool, what it did and
+// the SHA-256 of its list of job files, so that two summaries of different
+// runs never read alike.
+func runLine(cfg batchConfig, files []string) string {
 	mode := "check"
 	if cfg.propose {
 		mode = "propose"
 	}
-	fmt.Fprintf(&b, "# Batch summary\n\n%s (%s", countRows(rows), mode)
 	if cfg.sheets {
-		b.WriteString(", with cut sheets")
+		mode += " with cut sheets"
 	}
-	b.WriteString(").\n\n| " + strings.Join(summaryHeader, " | ") + " |\n|")
+	return fmt.Sprintf("%s; %s; %d jobs, list sha256 %x", toolVersion(), mode, len(files),
+		sha256.Sum256([]byte(strings.Join(files, "\n"))))
+}
+
+// summaryRunning is summary.md while a run is under way: it replaces the
+// last run's summary before any set is touched, so a run that is killed
+// leaves this, never a summary of an earlier run.
+func summaryRunning(run string) []byte {
+	return []byte("# Batch summary: RUN NOT FINISHED\n\nRun: " + run + "\n\n" +
+		"This run started and has not written its summary: it is still running, or it was stopped before\n" +
+		"the end. Each mark's folder holds a whole file set, of this run or an earlier one; run\n" +
+		"'gaugeline audit' on this folder to see which, or run the batch again.\n\n> " + detail.Caution + "\n")
+}
+
+// summaryMarkdown is summary.md: the run, the counts, then one table row
+// per job.
+func summaryMarkdown(rows []batchRow, run string) []byte {
+	var b bytes.Buffer
+	c := countRows(rows)
+	title := "Batch summary"
+	if c.notRun > 0 {
+		title += ": INTERRUPTED"
+	}
+	fmt.Fprintf(&b, "# %s\n\nRun: %s\n\n%s.\n\n| ", title, run, c)
+	b.WriteString(strings.Join(summaryHeader, " | ") + " |\n|")
 	b.WriteString(strings.Repeat("---|", len(summaryHeader)) + "\n")
 	for _, r := range rows {
 		f := r.fields()
@@ -578,14 +551,21 @@ func runBatch(ctx context.Context, o *rootOptions, bo batchOptions, arg string, 
 	if err != nil {
 		return err
 	}
-	if err := os.MkdirAll(bo.dir, 0o755); err != nil {
-		return &detail.InputError{File: bo.dir, Msg: "cannot create the output directory: " + errText(err)}
+	unlock, err := lockOutput(bo.dir, func(s string) { fmt.Fprintf(o.stderr, "gaugeline: note: %s\n", s) })
+	if err != nil {
+		return err
 	}
+	defer unlock()
 	cfg := batchConfig{out: bo.dir, propose: bo.propose, sheets: bo.sheets, workers: bo.workers}
 	if cfg.workers == 0 {
 		cfg.workers = runtime.NumCPU()
 	}
 	cfg.workers = min(cfg.workers, len(files))
+	run := runLine(cfg, files)
+	os.Remove(filepath.Join(bo.dir, "summary.csv"))
+	if err := writeAll(bo.dir, []dxfout.File{{Name: "summary.md", Data: summaryRunning(run)}}); err != nil {
+		return &detail.InputError{File: bo.dir, Msg: err.Error()}
+	}
 
 	// Ctrl-C stops the batch between jobs: the jobs running finish, the
 	// summary records the others as not run; a second Ctrl-C kills.
@@ -602,10 +582,11 @@ func runBatch(ctx context.Context, o *rootOptions, bo batchOptions, arg string, 
 	if err != nil {
 		return err
 	}
-	if err := writeAll(bo.dir, []dxfout.File{
-		{Name: "summary.csv", Data: csvData},
-		{Name: "summary.md", Data: summaryMarkdown(rows, cfg)},
-	}); err != nil {
+	// summary.md last: until it is replaced it says the run is not finished.
+	if err := writeAll(bo.dir, []dxfout.File{{Name: "summary.csv", Data: csvData}}); err != nil {
+		return &detail.InputError{File: bo.dir, Msg: err.Error()}
+	}
+	if err := writeAll(bo.dir, []dxfout.File{{Name: "summary.md", Data: summaryMarkdown(rows, run)}}); err != nil {
 		return &detail.InputError{File: bo.dir, Msg: err.Error()}
 	}
 
@@ -624,7 +605,7 @@ func runBatch(ctx context.Context, o *rootOptions, bo batchOptions, arg string, 
 		}
 	}
 	fmt.Fprintf(out, "batch: %s\n", c)
-	fmt.Fprintf(out, "wrote %d JSON and %d DXF files to %s\n", c.json, c.dxf, bo.dir)
+	fmt.Fprintf(out, "wrote %d JSON and %d DXF files to %s, one folder per mark\n", c.json, c.dxf, bo.dir)
 	fmt.Fprintf(out, "summary: %s, %s\n", filepath.Join(bo.dir, "summary.csv"), filepath.Join(bo.dir, "summary.md"))
 	if code := c.exit(); code != exitOK {
 		return exitError{code}

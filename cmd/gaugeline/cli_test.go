@@ -233,17 +233,17 @@ func TestDemoAndRules(t *testing.T) {
 	for _, mark := range []string{"PR-VB2", "PR-HS5", "PR-KT1"} {
 		for _, ext := range []string{".yaml", ".json", ".html", ".dxf", "-member.cam.dxf", "-plate.cam.dxf"} {
 			f := mark + ext
-			if _, err := os.Stat(filepath.Join(out, f)); err != nil || !strings.Contains(r.stdout, f) {
+			if _, err := os.Stat(filepath.Join(out, mark, f)); err != nil || !strings.Contains(r.stdout, f) {
 				t.Errorf("demo did not write or name %s: %v", f, err)
 			}
 		}
 		// every filled-in job the demo wrote checks clean
-		if c := gaugeline(t, ".", "check", filepath.Join(out, mark+".yaml")); c.code != 0 {
+		if c := gaugeline(t, ".", "check", filepath.Join(out, mark, mark+".yaml")); c.code != 0 {
 			t.Errorf("check %s.yaml: exit %d %s", mark, c.code, c.stderr)
 		}
 	}
 	for _, f := range []string{"PR-VB2-measured.csv", "PR-VB2-qa.md"} {
-		if _, err := os.Stat(filepath.Join(out, f)); err != nil {
+		if _, err := os.Stat(filepath.Join(out, "PR-VB2-QA", f)); err != nil {
 			t.Errorf("demo did not write %s", f)
 		}
 	}

@@ -1,6 +1,7 @@
 package main
 
 import (
+	"bytes"
 	"embed"
 	"fmt"
 	"io"
@@ -13,6 +14,7 @@ import (
 
 	"gaugeline/detail"
 	"gaugeline/detail/calc"
+	"gaugeline/detail/measured"
 	"gaugeline/dxfout"
 	"gaugeline/rules/units"
 )
@@ -56,7 +58,12 @@ func runDemo(do demoOptions, out io.Writer) error {
 		return err
 	}
 	fmt.Fprintf(out, "gaugeline demo: pipe rack PR-3 (an invented scenario), three bolted tension connections.\n")
-	fmt.Fprintf(out, "Everything is written to %s\n\n", do.dir)
+	fmt.Fprintf(out, "Everything is written to %s, one folder per mark\n\n", do.dir)
+	unlock, err := lockOutput(do.dir, func(s string) { fmt.Fprintf(out, "note: %s\n", s) })
+	if err != nil {
+		return err
+	}
+	defer unlock()
 	var qa *detail.Proposal
 	for _, e := range entries {
 		name := path.Join("demo", e.Name())
@@ -76,7 +83,7 @@ func runDemo(do demoOptions, out io.Writer) error {
 	}
 	fmt.Fprintf(out, "\nNext: open the .html reports in a browser and the .dxf sheets in a CAD viewer; run\n")
 	fmt.Fprintf(out, "'gaugeline check %s' to see a full check table. The README walks through each step.\n",
-		filepath.Join(do.dir, qa.Job.Mark+".yaml"))
+		filepath.Join(do.dir, qa.Job.Mark, qa.Job.Mark+".yaml"))
 	fmt.Fprintf(out, "\n%s\n", detail.Caution)
 	return nil
 }
@@ -90,6 +97,7 @@ func demoPropose(name string) (*detail.Proposal, error) {
 	if err != nil {
 		return nil, err
 	}
+	job.Stamp = stampFor("propose", job)
 	p, err := detail.Propose(job, detail.ProposeOptions{})
 	if err != nil {
 		return nil, err
@@ -97,6 +105,7 @@ func demoPropose(name string) (*detail.Proposal, error) {
 	if !p.Found() {
 		return nil, fmt.Errorf("demo: no layout for %s", job.Mark)
 	}
+	p.Report.Design.Job.Stamp = job.Stamp // the sheet and report of the layout carry the input's stamp
 	return p, nil
 }
 
@@ -122,11 +131,11 @@ func demoWrite(p *detail.Proposal, dir string, out io.Writer) error {
 		return err
 	}
 	files := append([]dxfout.File{
-		{Name: mark + ".yaml", Data: p.LayoutJob},
+		stamped(dxfout.File{Name: mark + ".yaml", Data: p.LayoutJob}, p.Job.Stamp),
 		{Name: mark + ".json", Data: js},
 		{Name: mark + ".html", Data: html},
 	}, dxfs...)
-	if err := writeAll(dir, files); err != nil {
+	if err := writeSet(dir, fileSet{name: mark, stamp: p.Job.Stamp, files: files}); err != nil {
 		return err
 	}
 	fmt.Fprintf(out, "%s  %s %s, demand %.1f %s\n", mark, d.Conn.Member.Shape, d.Info.Designation,
@@ -137,7 +146,7 @@ func demoWrite(p *detail.Proposal, dir string, out io.Writer) error {
 	for i, f := range files {
 		names[i] = f.Name
 	}
-	fmt.Fprintf(out, "  wrote    %s\n\n", strings.Join(names, ", "))
+	fmt.Fprintf(out, "  wrote    %s/: %s\n\n", mark, strings.Join(names, ", "))
 	return nil
 }
 
@@ -164,11 +173,17 @@ func demoMeasured(d *detail.Design) []byte {
 func demoReverify(p *detail.Proposal, dir string, out io.Writer) error {
 	d := p.Report.Design
 	mark := d.Job.Mark
-	csv := filepath.Join(dir, mark+"-measured.csv")
-	if err := writeAll(dir, []dxfout.File{{Name: filepath.Base(csv), Data: demoMeasured(d)}}); err != nil {
-		return err
+	// The QA records are a set of their own: the inspection is not the
+	// fabrication drawing, and is made at another time.
+	qaSet := mark + "-QA"
+	stamp := p.Job.Stamp
+	meas := stamped(dxfout.File{Name: mark + "-measured.csv", Data: demoMeasured(d)}, stamp)
+	csv := filepath.Join(dir, qaSet, meas.Name)
+	unit := measured.Inches
+	if d.Job.Units == units.SI {
+		unit = measured.Millimetres
 	}
-	set, err := detail.LoadMeasured(csv, d.Job, "")
+	set, err := measured.ReadCSV(bytes.NewReader(meas.Data), csv, unit)
 	if err != nil {
 		return err
 	}
@@ -180,7 +195,8 @@ func demoReverify(p *detail.Proposal, dir string, out io.Writer) error {
 	if err := ab.WriteMarkdown(&md); err != nil {
 		return err
 	}
-	if err := writeAll(dir, []dxfout.File{{Name: mark + "-qa.md", Data: []byte(md.String())}}); err != nil {
+	qa := stamped(dxfout.File{Name: mark + "-qa.md", Data: []byte(md.String())}, stamp)
+	if err := writeSet(dir, fileSet{name: qaSet, stamp: stamp, files: []dxfout.File{meas, qa}}); err != nil {
 		return err
 	}
 	fmt.Fprintf(out, "QA  %s as fabricated, measured holes in %s\n", mark, csv)
@@ -194,6 +210,6 @@ func demoReverify(p *detail.Proposal, dir string, out io.Writer) error {
 	default:
 		fmt.Fprintf(out, ": the part fails as built (the command exits 1)\n")
 	}
-	fmt.Fprintf(out, "  wrote     %s\n", mark+"-qa.md")
+	fmt.Fprintf(out, "  wrote     %s/: %s, %s\n", qaSet, meas.Name, qa.Name)
 	return nil
 }

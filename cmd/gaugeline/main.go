@@ -21,6 +21,9 @@ const (
 	exitFail   = 1 // a limit state or detailing rule fails; reverify: reject
 	exitInput  = 2 // bad input or usage
 	exitReview = 3 // reverify: out of tolerance but still passing
+	// exitInterrupted: a batch stopped by SIGINT or SIGTERM; the jobs it
+	// started are whole, the others not run (summary.md says which).
+	exitInterrupted = 5
 )
 
 // exitError carries an exit code for an outcome that is not an error
@@ -66,7 +69,7 @@ func newRootCmd(o *rootOptions) *cobra.Command {
 		SilenceUsage:  true,
 	}
 	root.SetFlagErrorFunc(func(_ *cobra.Command, err error) error { return usageError{err} })
-	root.AddCommand(newCheckCmd(o), newProposeCmd(o), newRulesCmd(o), newDemoCmd(o), newSheetCmd(o), newReverifyCmd(o), newBatchCmd(o), newReportCmd(o))
+	root.AddCommand(newCheckCmd(o), newProposeCmd(o), newRulesCmd(o), newDemoCmd(o), newSheetCmd(o), newReverifyCmd(o), newBatchCmd(o), newReportCmd(o), newAuditCmd(o))
 	return root
 }
 

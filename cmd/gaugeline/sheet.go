@@ -23,8 +23,9 @@ func newSheetCmd(o *rootOptions) *cobra.Command {
 	cmd := &cobra.Command{
 		Use:   "sheet JOB.yaml -o DIR",
 		Short: "Write the DXF cut sheet and CAM files of a layout that passes",
-		Long: "sheet checks the job and writes, into DIR, the dimensioned cut sheet MARK.dxf and the\n" +
-			"geometry-only CAM files MARK-member.cam.dxf and MARK-plate.cam.dxf. A failing connection is\n" +
+		Long: "sheet checks the job and writes, into the folder DIR/MARK, the dimensioned cut sheet MARK.dxf,\n" +
+			"the geometry-only CAM files MARK-member.cam.dxf and MARK-plate.cam.dxf and the manifest MARK.files.\n" +
+			"The folder is replaced as a whole, never file by file. A failing connection is\n" +
 			"refused (exit 1, nothing written) unless --not-for-fabrication, which writes the cut sheet alone,\n" +
 			"stamped NOT FOR FABRICATION on every view (exit 1 still: the connection fails). Bad input exits 2.",
 		Args: argsExactly(1, "one job file"),
@@ -42,9 +43,18 @@ func runSheet(_ context.Context, o *rootOptions, so sheetOptions, path string, o
 	if so.dir == "" {
 		return usageError{errors.New("-o DIR is required")}
 	}
-	r, err := detail.CheckFile(path)
+	job, err := detail.LoadJob(path)
 	if err != nil {
 		return err
+	}
+	job.Stamp = stampFor("check", job)
+	d, err := job.Build()
+	if err != nil {
+		return err
+	}
+	r, err := detail.Check(d)
+	if err != nil {
+		return &detail.InputError{File: path, Msg: err.Error()}
 	}
 	if !r.Pass && !so.notForFabrication {
 		fmt.Fprintf(o.stderr, "gaugeline: error: %s: %s %s: no sheet written\n", path, r.Design.Job.Mark, r.VerdictReason())
@@ -59,11 +69,16 @@ func runSheet(_ context.Context, o *rootOptions, so sheetOptions, path string, o
 	if err != nil {
 		return err
 	}
-	if err := writeAll(so.dir, files); err != nil {
+	unlock, err := lockOutput(so.dir, func(s string) { fmt.Fprintf(o.stderr, "gaugeline: note: %s\n", s) })
+	if err != nil {
 		return err
 	}
+	defer unlock()
+	if err := writeSet(so.dir, fileSet{name: job.Mark, stamp: job.Stamp, files: files}); err != nil {
+		return &detail.InputError{File: so.dir, Msg: err.Error()}
+	}
 	for _, f := range files {
-		fmt.Fprintln(out, filepath.Join(so.dir, f.Name))
+		fmt.Fprintln(out, filepath.Join(so.dir, job.Mark, f.Name))
 	}
 	if so.notForFabrication {
 		fmt.Fprintf(o.stderr, "gaugeline: note: %s stamped %s; no CAM file written\n", files[0].Name, detail.Stamp)

@@ -73,11 +73,15 @@ func TestSheetCommand(t *testing.T) {
 					t.Fatalf("--not-for-fabrication: exit %d, want 1 (the connection still fails); stderr %s", r.code, r.stderr)
 				}
 			}
-			names := dirNames(t, out)
-			if !slices.Equal(names, tt.files) {
-				t.Fatalf("wrote %v, want %v", names, tt.files)
+			mark := strings.TrimSuffix(tt.files[len(tt.files)-1], ".dxf")
+			names := outFiles(t, out)
+			if want := setOf(mark, tt.files...); !slices.Equal(names, want) {
+				t.Fatalf("wrote %v, want %v", names, want)
 			}
 			for _, n := range names {
+				if strings.HasSuffix(n, manifestExt) {
+					continue
+				}
 				data, err := os.ReadFile(filepath.Join(out, n))
 				if err != nil {
 					t.Fatal(err)
@@ -106,7 +110,7 @@ func TestSheetTwiceIsByteIdentical(t *testing.T) {
 			t.Fatalf("exit %d: %s", r.code, r.stderr)
 		}
 	}
-	for _, n := range dirNames(t, a) {
+	for _, n := range outFiles(t, a) {
 		x, _ := os.ReadFile(filepath.Join(a, n))
 		y, _ := os.ReadFile(filepath.Join(b, n))
 		if len(x) == 0 || !bytes.Equal(x, y) {
@@ -122,16 +126,16 @@ func TestSheetOfDemoJob(t *testing.T) {
 	if r := gaugeline(t, ".", "sheet", job, "-o", dir); r.code != 0 {
 		t.Fatalf("exit %d: %s", r.code, r.stderr)
 	}
-	if want := []string{"PR-VB2-member.cam.dxf", "PR-VB2-plate.cam.dxf", "PR-VB2.dxf"}; !slices.Equal(dirNames(t, dir), want) {
-		t.Errorf("wrote %v, want %v", dirNames(t, dir), want)
+	if want := setOf("PR-VB2", "PR-VB2-member.cam.dxf", "PR-VB2-plate.cam.dxf", "PR-VB2.dxf"); !slices.Equal(outFiles(t, dir), want) {
+		t.Errorf("wrote %v, want %v", outFiles(t, dir), want)
 	}
 	// Asked not for fabrication, a passing job gets the stamped sheet alone.
 	dir = t.TempDir()
 	if r := gaugeline(t, ".", "sheet", job, "-o", dir, "--not-for-fabrication"); r.code != 0 || !strings.Contains(r.stderr, "no CAM file") {
 		t.Fatalf("exit %d: %s", r.code, r.stderr)
 	}
-	data, _ := os.ReadFile(filepath.Join(dir, "PR-VB2.dxf"))
-	if names := dirNames(t, dir); !slices.Equal(names, []string{"PR-VB2.dxf"}) || !bytes.Contains(data, []byte("NOT FOR FABRICATION")) {
+	data, _ := os.ReadFile(filepath.Join(dir, "PR-VB2", "PR-VB2.dxf"))
+	if names := outFiles(t, dir); !slices.Equal(names, setOf("PR-VB2", "PR-VB2.dxf")) || !bytes.Contains(data, []byte("NOT FOR FABRICATION")) {
 		t.Errorf("wrote %v, stamped %v", names, bytes.Contains(data, []byte("NOT FOR FABRICATION")))
 	}
 }

@@ -173,6 +173,7 @@ type summaryRow struct {
 
 type page struct {
 	Mark, Subtitle, File string
+	Stamp                string // Job.Stamp, in a <meta> element; "" for none
 	Pass                 bool
 	Verdict, Governing   string
 	Failures             []string
@@ -201,6 +202,7 @@ func newPage(r *detail.Report, s *detail.Sheet) page {
 		Mark:            d.Job.Mark,
 		Subtitle:        fmt.Sprintf("Bolted tension connection · AISC %s · %s · %s units", strings.TrimPrefix(c.Edition.Name, "aisc"), strings.ToUpper(c.Method.String()), strings.ToUpper(d.Job.Units.String())),
 		File:            filepath.Base(d.Job.File),
+		Stamp:           d.Job.Stamp,
 		Pass:            r.Pass,
 		Caution:         detail.Caution,
 		ForceUnit:       f.unitLabel(units.DimForce),
@@ -950,7 +952,8 @@ const pageHTML = `<!DOCTYPE html>
 <html lang="en">
 <head>
 <meta charset="utf-8">
-<meta name="viewport" content="width=device-width, initial-scale=1">
+{{with .Stamp}}<meta name="gaugeline-stamp" content="{{.}}">
+{{end}}<meta name="viewport" content="width=device-width, initial-scale=1">
 <title>{{.Mark}} — calculation report</title>
 <style>
 :root {
