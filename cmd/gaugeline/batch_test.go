@@ -12,6 +12,7 @@ import (
 	"path/filepath"
 	"slices"
 	"strings"
+	"syscall"
 	"testing"
 	"time"
 )
@@ -481,8 +482,9 @@ func TestBatchInProcessRace(t *testing.T) {
 	noTemps(t, out)
 }
 
-// Ctrl-C: the running job finishes, the rest are recorded as not run, the
-// summary is written, and nothing is left half-written.
+// Ctrl-C or SIGTERM: the running job finishes, the rest are recorded as
+// not run, the summary says the run was interrupted, the exit code is the
+// interruption's own, and every set in the folder is whole.
 func TestBatchInterrupt(t *testing.T) {
 	dir := t.TempDir()
 	const n = 400
@@ -491,47 +493,58 @@ func TestBatchInterrupt(t *testing.T) {
 			t.Fatal(err)
 		}
 	}
-	out := filepath.Join(dir, "out")
-	cmd := exec.Command(bin, "batch", dir, "-o", out, "--sheets", "-j", "1")
-	var stdout bytes.Buffer
-	cmd.Stdout = &stdout
-	if err := cmd.Start(); err != nil {
-		t.Fatal(err)
+	for _, sig := range []os.Signal{os.Interrupt, syscall.SIGTERM} {
+		t.Run(sig.String(), func(t *testing.T) {
+			out := filepath.Join(t.TempDir(), "out")
+			cmd := exec.Command(bin, "batch", dir, "-o", out, "--sheets", "-j", "1")
+			var stdout bytes.Buffer
+			cmd.Stdout = &stdout
+			if err := cmd.Start(); err != nil {
+				t.Fatal(err)
+			}
+			for deadline := time.Now().Add(30 * time.Second); ; time.Sleep(2 * time.Millisecond) {
+				if _, err := os.Stat(filepath.Join(out, "UC-0", "UC-0.json")); err == nil {
+					break
+				}
+				if time.Now().After(deadline) {
+					cmd.Process.Kill()
+					t.Fatal("no job finished in 30 s")
+				}
+			}
+			if err := cmd.Process.Signal(sig); err != nil {
+				t.Fatal(err)
+			}
+			err := cmd.Wait()
+			rows := readSummary(t, out)
+			if len(rows) != n {
+				t.Fatalf("%d rows, want %d", len(rows), n)
+			}
+			notRun := 0
+			for _, r := range rows {
+				if r.verdict == "not run" && strings.Contains(r.message, "not run: the batch was interrupted") {
+					notRun++
+				}
+			}
+			if notRun == 0 {
+				t.Skip("the batch finished before the signal reached it")
+			}
+			var ee *exec.ExitError
+			if !errors.As(err, &ee) || ee.ExitCode() != exitInterrupted {
+				t.Errorf("exit %v, want %d (interrupted) with %d jobs not run", err, exitInterrupted, notRun)
+			}
+			if rows[0].verdict != "pass" || notRun == n {
+				t.Errorf("the first job did not run to the end: %+v", rows[0])
+			}
+			md, _ := os.ReadFile(filepath.Join(out, "summary.md"))
+			if !bytes.HasPrefix(md, []byte("# Batch summary: INTERRUPTED")) {
+				t.Errorf("summary.md does not say the run was interrupted:\n%.200s", md)
+			}
+			if _, problems := auditProblems(t, out); len(problems) != 0 {
+				t.Errorf("after the signal: %v", problems)
+			}
+			noTemps(t, out)
+		})
 	}
-	for deadline := time.Now().Add(30 * time.Second); ; time.Sleep(2 * time.Millisecond) {
-		if _, err := os.Stat(filepath.Join(out, "UC-0", "UC-0.json")); err == nil {
-			break
-		}
-		if time.Now().After(deadline) {
-			cmd.Process.Kill()
-			t.Fatal("no job finished in 30 s")
-		}
-	}
-	if err := cmd.Process.Signal(os.Interrupt); err != nil {
-		t.Fatal(err)
-	}
-	err := cmd.Wait()
-	rows := readSummary(t, out)
-	if len(rows) != n {
-		t.Fatalf("%d rows, want %d", len(rows), n)
-	}
-	notRun := 0
-	for _, r := range rows {
-		if strings.Contains(r.message, "not run: the batch was interrupted") {
-			notRun++
-		}
-	}
-	if notRun == 0 {
-		t.Skip("the batch finished before the interrupt reached it")
-	}
-	var ee *exec.ExitError
-	if !errors.As(err, &ee) || ee.ExitCode() != exitInterrupted {
-		t.Errorf("exit %v, want %d (interrupted) with %d jobs not run", err, exitInterrupted, notRun)
-	}
-	if rows[0].verdict != "pass" || notRun == n {
-		t.Errorf("the first job did not run to the end: %+v", rows[0])
-	}
-	noTemps(t, out)
 }
 
 func TestBatchInputs(t *testing.T) {
