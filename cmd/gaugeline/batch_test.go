@@ -576,3 +576,36 @@ func TestBatchInputs(t *testing.T) {
 		}
 	}
 }
+
+// Issue 11: a FIFO (or any file that is not a regular file) among the jobs
+// is that job's bad input: it is refused without being opened, the other
+// jobs carry on, and the batch ends. A FIFO given as the list itself is
+// refused at once.
+func TestBatchRefusesSpecialFiles(t *testing.T) {
+	dir := copyJobs(t, map[string]string{"a.yaml": "batch/a-truss-diagonal.yaml", "c.yaml": "batch/c-rack-brace.yaml"})
+	if err := syscall.Mkfifo(filepath.Join(dir, "b.yaml"), 0o644); err != nil {
+		t.Skip("no FIFOs here:", err)
+	}
+	list := filepath.Join(t.TempDir(), "jobs.list")
+	if err := syscall.Mkfifo(list, 0o644); err != nil {
+		t.Fatal(err)
+	}
+	out := filepath.Join(t.TempDir(), "out")
+	done := make(chan ran, 2)
+	go func() { done <- gaugeline(t, ".", "batch", dir, "-o", out) }()
+	go func() { done <- gaugeline(t, ".", "batch", list, "-o", out) }()
+	for range 2 {
+		select {
+		case r := <-done:
+			if r.code != 2 || !strings.Contains(r.stderr, "b.yaml") && !strings.Contains(r.stderr, "jobs.list") {
+				t.Errorf("exit %d, want 2 naming the special file; stderr %s", r.code, r.stderr)
+			}
+		case <-time.After(20 * time.Second):
+			t.Fatal("batch blocked on a FIFO")
+		}
+	}
+	rows := readSummary(t, out)
+	if len(rows) != 3 || rows[0].verdict != "pass" || rows[1].verdict != "error" || rows[2].verdict != "pass" {
+		t.Errorf("rows %+v, want pass, error (the FIFO), pass", rows)
+	}
+}

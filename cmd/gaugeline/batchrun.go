@@ -98,6 +98,10 @@ func batchInputs(arg string) ([]string, error) {
 		}
 		return files, nil
 	}
+	if !fi.Mode().IsRegular() {
+		return nil, &detail.InputError{File: arg, Msg: "not a folder or a regular list file (" + fi.Mode().Type().String() + ")",
+			Hint: "batch reads a folder of jobs or a text file listing them"}
+	}
 	if ext := filepath.Ext(arg); ext == ".yaml" || ext == ".yml" {
 		return nil, usageError{fmt.Errorf("%s is a job, not a folder or a list of jobs (for one job, use 'gaugeline check')", arg)}
 	}
