@@ -388,6 +388,9 @@ func (j *Job) buildHoles(ed *rules.Edition, c *engine.Connection) error {
 			for k := range b.PerLine {
 				x := b.End + units.Length(k)*b.Pitch
 				xField := "bolts.end"
+				if k > 0 {
+					xField = "bolts.pitch" // the pitch put it there
+				}
 				if i%2 == 1 {
 					x += b.Stagger
 				}

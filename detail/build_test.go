@@ -471,6 +471,7 @@ func TestBuildBadJobs(t *testing.T) {
 		{"missing-mark.yaml", "mark", 1},
 		{"nan.yaml", "bolts.end", 13},
 		{"negative-pitch.yaml", "bolts.pitch", 12},
+		{"pitch-absurdly-small.yaml", "bolts.pitch", 12},
 		{"not-a-mapping.yaml", "", 1},
 		{"plate-auto-in-check.yaml", "plate.thickness", 9},
 		{"plate-hole-unknown.yaml", "plate.hole", 13},
@@ -542,5 +543,173 @@ func TestBuildFillers(t *testing.T) {
 	d = mustBuild(t, mustParse(t, src+"  filler_developed: true\n"))
 	if !d.Conn.Bolt.FillerDeveloped {
 		t.Errorf("bolt = %+v, want developed fillers", d.Conn.Bolt)
+	}
+}
+
+// lengthJob writes every length field a checked job may have, one per
+// line; lengthFields lists them with their lines.
+const lengthJob = `mark: LEN-1
+load:
+  required: 95 kip
+member:
+  shape: double-angle
+  size: L4x4x1/2
+  grade: A36
+  length: 10 ft
+  xbar: 1.18 in
+  rmin: 0.776 in
+  gap: 1/2 in
+  area: 3.75 in2
+plate:
+  thickness: 1/2 in
+  grade: A572-50
+  width: 12 in
+  edge: 1-1/2 in
+bolts:
+  diameter: 3/4 in
+  grade: A325
+  fillers: 1
+  filler_thickness: 1/4 in
+  lines: 2
+  per_line: 3
+  pitch: 3 in
+  end: 1-1/2 in
+  gage: 1-1/4 in
+  gage2: 1-1/2 in
+  stagger: 1 in
+stock:
+  step: 1/4 in
+  thicknesses: [3/8 in]
+tolerance:
+  position: 1/16 in
+  diameter: 1/32 in
+`
+
+// setLine replaces the value on line n (1-based) of src.
+func setLine(src string, n int, value string) string {
+	lines := strings.Split(src, "\n")
+	l := lines[n-1]
+	if strings.HasSuffix(l, "]") {
+		lines[n-1] = l[:strings.Index(l, "[")+1] + value + "]"
+	} else {
+		lines[n-1] = l[:strings.Index(l, ": ")+2] + value
+	}
+	return strings.Join(lines, "\n")
+}
+
+// Every length field that is zero (where zero is not allowed), negative,
+// absurdly small or absurdly large is refused as that field, on its line,
+// whether parsing or Build finds it. A pitch of 1e-300 in once came out as
+// "bolts.end: hole H2 has the same centre as H1".
+func TestLengthFieldsNameThemselves(t *testing.T) {
+	mustBuild(t, mustParse(t, lengthJob))
+	fields := []struct {
+		path     string
+		line     int
+		zeroOK   bool
+		area     bool
+		flatLegs bool
+	}{
+		{"member.length", 8, false, false, false},
+		{"member.xbar", 9, false, false, false},
+		{"member.rmin", 10, false, false, false},
+		{"member.gap", 11, false, false, false},
+		{"member.area", 12, false, true, false},
+		{"plate.thickness", 14, false, false, false},
+		{"plate.width", 16, false, false, false},
+		{"plate.edge", 17, false, false, false},
+		{"bolts.filler_thickness", 22, true, false, false},
+		{"bolts.pitch", 25, false, false, false},
+		{"bolts.end", 26, false, false, false},
+		{"bolts.gage", 27, false, false, false},
+		{"bolts.gage2", 28, false, false, false},
+		{"bolts.stagger", 29, true, false, false},
+		{"stock.step", 31, false, false, false},
+		{"stock.thicknesses[0]", 32, false, false, false},
+		{"tolerance.position", 34, false, false, false},
+		{"tolerance.diameter", 35, false, false, false},
+	}
+	for _, f := range fields {
+		unit := " in"
+		if f.area {
+			unit = " in2"
+		}
+		values := []string{"1e-300", "-2", "1e6", "1e-9"}
+		if !f.zeroOK {
+			values = append(values, "0")
+		}
+		for _, v := range values {
+			t.Run(f.path+"="+v, func(t *testing.T) {
+				src := setLine(lengthJob, f.line, v+unit)
+				j, err := ParseJob("len.yaml", []byte(src))
+				if err == nil {
+					_, err = j.Build()
+				}
+				var ie *InputError
+				if !errors.As(err, &ie) {
+					t.Fatalf("got %v, want an *InputError at %s", err, f.path)
+				}
+				if ie.File != "len.yaml" || ie.Field != f.path || ie.Line != f.line || ie.Msg == "" {
+					t.Errorf("got %v (field %q, line %d), want field %q on line %d", ie, ie.Field, ie.Line, f.path, f.line)
+				}
+			})
+		}
+	}
+}
+
+// The same for the member's own dimensions and explicit holes.
+func TestDimensionFieldsNameThemselves(t *testing.T) {
+	legs := `mark: LEN-2
+load: {required: 95 kip}
+member:
+  shape: angle
+  legs: [4 in, 3 in]
+  thickness: 1/2 in
+  grade: A36
+bolts: {diameter: 3/4 in, grade: A325}
+holes:
+  - [1.5 in, 2.5 in]
+  - [4.5 in, 2.5 in]
+`
+	flat := `mark: LEN-3
+load: {required: 95 kip}
+member:
+  shape: flat
+  width: 6 in
+  thickness: 1/2 in
+  grade: A36
+bolts: {diameter: 3/4 in, grade: A325, per_line: 2, pitch: 3 in, end: 1-1/2 in, gage: 3 in}
+`
+	mustBuild(t, mustParse(t, legs))
+	mustBuild(t, mustParse(t, flat))
+	cases := []struct {
+		src, from, path string
+		line            int
+	}{
+		{legs, "[4 in, 3 in]", "member.legs[0]", 5},
+		{legs, "3 in]", "member.legs[1]", 5},
+		{legs, "thickness: 1/2 in", "member.thickness", 6},
+		{legs, "[4.5 in, 2.5 in]", "holes[1]", 11},
+		{flat, "width: 6 in", "member.width", 5},
+		{flat, "thickness: 1/2 in", "member.thickness", 6},
+	}
+	for _, c := range cases {
+		for _, v := range []string{"1e-300 in", "0", "-2 in", "1e6 in"} {
+			t.Run(c.path+"="+v, func(t *testing.T) {
+				to := strings.NewReplacer("[4 in", "["+v, "3 in]", v+"]", "1/2 in", v, "6 in", v, "[4.5 in", "["+v).Replace(c.from)
+				src := strings.Replace(c.src, c.from, to, 1)
+				j, err := ParseJob("dim.yaml", []byte(src))
+				if err == nil {
+					_, err = j.Build()
+				}
+				var ie *InputError
+				if !errors.As(err, &ie) {
+					t.Fatalf("got %v, want an *InputError at %s", err, c.path)
+				}
+				if ie.Field != c.path || ie.Line != c.line {
+					t.Errorf("got %v (field %q, line %d), want field %q on line %d", ie, ie.Field, ie.Line, c.path, c.line)
+				}
+			})
+		}
 	}
 }

@@ -248,7 +248,11 @@ const MaxJobSize = 1 << 20
 
 // Bounds on what a job may ask for: beyond them the input is a typo.
 const (
-	maxLength   = 100 * units.Metre
+	maxLength = 100 * units.Metre
+	// minLength: nothing in a bolted part is given to less than a
+	// micrometre; a smaller length is a unit or exponent typed wrong.
+	minLength   = units.Millimetre / 1000
+	minArea     = units.Area(1e-6) // mm²
 	maxForce    = 1e6 * units.Kip
 	maxStress   = 2000 * units.Megapascal
 	maxArea     = units.Area(1e7) // mm², 10 m²
@@ -544,20 +548,23 @@ const (
 	anySign                       // an offset
 )
 
-// length reads a length at path under rule r, always below 100 m in size.
+// length reads a length at path under rule r: when not zero, at least
+// 0.001 mm and below 100 m in size.
 func (p *parser) length(n *yaml.Node, path string, r lengthRule) (units.Length, error) {
 	v, err := p.quantity(n, path, units.DimLength)
 	if err != nil {
 		return 0, err
 	}
 	l := units.Length(v)
-	switch {
+	switch size := math.Abs(float64(l)); {
 	case r == positive && l <= 0:
 		return 0, p.errAt(n, path, "must be greater than zero", "")
 	case r == nonNegative && l < 0:
 		return 0, p.errAt(n, path, "must not be negative", "")
-	case math.Abs(float64(l)) >= float64(maxLength):
+	case size >= float64(maxLength):
 		return 0, p.errAt(n, path, "is absurdly large (100 m or more)", "check the unit")
+	case size > 0 && size < float64(minLength):
+		return 0, p.errAt(n, path, "is absurdly small (under 0.001 mm)", "check the unit and the exponent")
 	}
 	return l, nil
 }
@@ -606,6 +613,8 @@ func (p *parser) area(n *yaml.Node, path string) (units.Area, error) {
 		return 0, p.errAt(n, path, "must be greater than zero", "")
 	case a >= maxArea:
 		return 0, p.errAt(n, path, "is absurdly large (10 m² or more)", "check the unit")
+	case a < minArea:
+		return 0, p.errAt(n, path, "is absurdly small (under 0.000001 mm²)", "check the unit and the exponent")
 	}
 	return a, nil
 }
