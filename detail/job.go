@@ -7,7 +7,6 @@ import (
 	"io"
 	"io/fs"
 	"math"
-	"os"
 	"regexp"
 	"slices"
 	"strconv"
@@ -15,6 +14,7 @@ import (
 
 	"go.yaml.in/yaml/v3"
 
+	"gaugeline/detail/measured"
 	"gaugeline/engine"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
@@ -268,9 +268,9 @@ const (
 
 // LoadJob reads and parses a job file.
 func LoadJob(path string) (*Job, error) {
-	f, err := os.Open(path)
+	f, err := measured.OpenRegular(path)
 	if err != nil {
-		return nil, &InputError{File: path, Msg: "cannot read the job: " + pathErrText(err)}
+		return nil, &InputError{File: path, Msg: "cannot read the job: " + pathErrText(err), Hint: notRegularHint(err)}
 	}
 	defer f.Close()
 	data, err := io.ReadAll(io.LimitReader(f, MaxJobSize+1))
@@ -280,13 +280,27 @@ func LoadJob(path string) (*Job, error) {
 	return ParseJob(path, data)
 }
 
-// pathErrText drops the path a *fs.PathError repeats.
+// pathErrText drops the path a *fs.PathError or *measured.NotRegularError
+// repeats.
 func pathErrText(err error) string {
 	var pe *fs.PathError
 	if errors.As(err, &pe) {
 		return pe.Err.Error()
 	}
+	var nr *measured.NotRegularError
+	if errors.As(err, &nr) {
+		return "it is " + nr.Kind() + ", not a regular file"
+	}
 	return err.Error()
+}
+
+// notRegularHint is the hint for a path that is not a regular file.
+func notRegularHint(err error) string {
+	var nr *measured.NotRegularError
+	if errors.As(err, &nr) {
+		return "give the path of a file; a pipe or device is not read, so that it cannot stall the run"
+	}
+	return ""
 }
 
 var yamlLine = regexp.MustCompile(`^yaml: line (\d+): (.*)$`)
