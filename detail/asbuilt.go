@@ -8,7 +8,6 @@ import (
 	"fmt"
 	"io"
 	"math"
-	"os"
 	"path/filepath"
 	"slices"
 	"strconv"
@@ -212,9 +211,9 @@ var ErrNoPlate = errors.New("the job has no plate: a measured plate needs the jo
 // content when the extension says neither), in the job's units unless the
 // file says otherwise. Every error is an *InputError.
 func LoadMeasured(path string, job *Job, layer string) (*measured.Set, error) {
-	f, err := os.Open(path)
+	f, err := measured.OpenRegular(path)
 	if err != nil {
-		return nil, &InputError{File: path, Field: "--measured", Msg: "cannot read the measured file: " + pathErrText(err)}
+		return nil, &InputError{File: path, Field: "--measured", Msg: "cannot read the measured file: " + pathErrText(err), Hint: notRegularHint(err)}
 	}
 	defer f.Close()
 	def := measured.Inches

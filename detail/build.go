@@ -4,6 +4,7 @@ import (
 	"errors"
 	"fmt"
 	"math"
+	"strconv"
 	"strings"
 
 	"gaugeline/detail/section"
@@ -194,6 +195,9 @@ func (j *Job) buildMember(ed *rules.Edition, d *Design) error {
 			info.Designation = "L" + compact(m.Legs[0], j.Units) + "x" + compact(m.Legs[1], j.Units) + "x" + compact(m.Thickness, j.Units)
 			info.K = a.T
 		}
+		if err := j.checkOverrides(a, info.Designation); err != nil {
+			return err
+		}
 		props := a.Properties()
 		mem.Width, mem.Outstanding, mem.T = a.A, a.B, a.T
 		area := props.Area
@@ -225,6 +229,50 @@ func (j *Job) buildMember(ed *rules.Edition, d *Design) error {
 	mem.Fy, mem.Fu = st.Fy, st.Fu
 	info.Grade = st.Name
 	info.Weathering = st.Weathering
+	return nil
+}
+
+// checkOverrides refuses a section override (member.area, xbar, rmin, all
+// of one angle) that no angle of a's legs and thickness can have, whatever
+// its radii (section.Bounds): a typo, the wrong unit or the pair's value.
+// An area below the angle's own is allowed down to half of it.
+func (j *Job) checkOverrides(a section.Angle, name string) error {
+	m, b := j.Member, a.Bounds()
+	// three significant figures, whole numbers from 100 on
+	num := func(v float64, d units.Dim) string {
+		v = j.Units.ToJob(v, d)
+		s := strconv.FormatFloat(v, 'g', 3, 64)
+		if math.Abs(v) >= 100 {
+			s = strconv.FormatFloat(math.Round(v), 'f', 0, 64)
+		}
+		return s + " " + j.Units.Label(d)
+	}
+	length := func(l units.Length) string { return num(float64(l), units.DimLength) }
+	area := func(x units.Area) string { return num(float64(x), units.DimArea) }
+	outside := func(v, lo, hi float64) bool { return v > 0 && (v < lo || v > hi) }
+	t, leg := a.T, min(a.A, a.B)
+	plain := a.A.Mul(t) + (a.B - t).Mul(t) // the two rectangles
+	switch {
+	case m.Area > b.AreaMax:
+		return j.inputErr("member.area", fmt.Sprintf("%s is more than one %s can have: its legs make %s, and with the largest root fillet it is at most %s",
+			j.Raw["member.area"], name, area(plain), area(b.AreaMax)),
+			"the area is of one angle, also in a pair; leave it out to have it computed")
+	case m.Area > 0 && m.Area < plain/2:
+		// Less than the angle's own area is a section loss the engineer
+		// may model (an existing, corroded member); under half the legs'
+		// area it is taken for the wrong unit.
+		return j.inputErr("member.area", fmt.Sprintf("%s is under half the area of one %s: its legs make %s",
+			j.Raw["member.area"], name, area(plain)),
+			"the area is of one angle, also in a pair; check the unit, or leave it out to have it computed")
+	case outside(float64(m.Xbar), float64(b.XbarMin), float64(b.XbarMax)):
+		return j.inputErr("member.xbar", fmt.Sprintf("%s is not the x̄ of an %s: it lies between %s (half the thickness) and %s (half the outstanding leg)",
+			j.Raw["member.xbar"], name, length(t/2), length(a.B/2)),
+			"x̄ is of one angle, from the back of the connected leg to the centroid; leave it out to have it computed")
+	case outside(float64(m.Rmin), float64(b.RminMin), float64(b.RminMax)):
+		return j.inputErr("member.rmin", fmt.Sprintf("%s is not the least radius of gyration of an %s: it lies between %s (t/√12) and %s (half the shorter leg)",
+			j.Raw["member.rmin"], name, length(units.Length(float64(t)/math.Sqrt(12))), length(leg/2)),
+			"rmin is of one angle (rz), also in a pair; leave it out to have it computed")
+	}
 	return nil
 }
 
@@ -388,6 +436,9 @@ func (j *Job) buildHoles(ed *rules.Edition, c *engine.Connection) error {
 			for k := range b.PerLine {
 				x := b.End + units.Length(k)*b.Pitch
 				xField := "bolts.end"
+				if k > 0 {
+					xField = "bolts.pitch" // the pitch put it there
+				}
 				if i%2 == 1 {
 					x += b.Stagger
 				}

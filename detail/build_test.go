@@ -5,6 +5,7 @@ import (
 	"math"
 	"os"
 	"path/filepath"
+	"strconv"
 	"strings"
 	"testing"
 
@@ -471,6 +472,9 @@ func TestBuildBadJobs(t *testing.T) {
 		{"missing-mark.yaml", "mark", 1},
 		{"nan.yaml", "bolts.end", 13},
 		{"negative-pitch.yaml", "bolts.pitch", 12},
+		{"pitch-absurdly-small.yaml", "bolts.pitch", 12},
+		{"xbar-outside-angle.yaml", "member.xbar", 8},
+		{"area-outside-angle.yaml", "member.area", 8},
 		{"not-a-mapping.yaml", "", 1},
 		{"plate-auto-in-check.yaml", "plate.thickness", 9},
 		{"plate-hole-unknown.yaml", "plate.hole", 13},
@@ -543,4 +547,289 @@ func TestBuildFillers(t *testing.T) {
 	if !d.Conn.Bolt.FillerDeveloped {
 		t.Errorf("bolt = %+v, want developed fillers", d.Conn.Bolt)
 	}
+}
+
+// lengthJob writes every length field a checked job may have, one per
+// line; lengthFields lists them with their lines.
+const lengthJob = `mark: LEN-1
+load:
+  required: 95 kip
+member:
+  shape: double-angle
+  size: L4x4x1/2
+  grade: A36
+  length: 10 ft
+  xbar: 1.18 in
+  rmin: 0.776 in
+  gap: 1/2 in
+  area: 3.75 in2
+plate:
+  thickness: 1/2 in
+  grade: A572-50
+  width: 12 in
+  edge: 1-1/2 in
+bolts:
+  diameter: 3/4 in
+  grade: A325
+  fillers: 1
+  filler_thickness: 1/4 in
+  lines: 2
+  per_line: 3
+  pitch: 3 in
+  end: 1-1/2 in
+  gage: 1-1/4 in
+  gage2: 1-1/2 in
+  stagger: 1 in
+stock:
+  step: 1/4 in
+  thicknesses: [3/8 in]
+tolerance:
+  position: 1/16 in
+  diameter: 1/32 in
+`
+
+// setLine replaces the value on line n (1-based) of src.
+func setLine(src string, n int, value string) string {
+	lines := strings.Split(src, "\n")
+	l := lines[n-1]
+	if strings.HasSuffix(l, "]") {
+		lines[n-1] = l[:strings.Index(l, "[")+1] + value + "]"
+	} else {
+		lines[n-1] = l[:strings.Index(l, ": ")+2] + value
+	}
+	return strings.Join(lines, "\n")
+}
+
+// Every length field that is zero (where zero is not allowed), negative,
+// absurdly small or absurdly large is refused as that field, on its line,
+// whether parsing or Build finds it. A pitch of 1e-300 in once came out as
+// "bolts.end: hole H2 has the same centre as H1".
+func TestLengthFieldsNameThemselves(t *testing.T) {
+	mustBuild(t, mustParse(t, lengthJob))
+	fields := []struct {
+		path     string
+		line     int
+		zeroOK   bool
+		area     bool
+		flatLegs bool
+	}{
+		{"member.length", 8, false, false, false},
+		{"member.xbar", 9, false, false, false},
+		{"member.rmin", 10, false, false, false},
+		{"member.gap", 11, false, false, false},
+		{"member.area", 12, false, true, false},
+		{"plate.thickness", 14, false, false, false},
+		{"plate.width", 16, false, false, false},
+		{"plate.edge", 17, false, false, false},
+		{"bolts.filler_thickness", 22, true, false, false},
+		{"bolts.pitch", 25, false, false, false},
+		{"bolts.end", 26, false, false, false},
+		{"bolts.gage", 27, false, false, false},
+		{"bolts.gage2", 28, false, false, false},
+		{"bolts.stagger", 29, true, false, false},
+		{"stock.step", 31, false, false, false},
+		{"stock.thicknesses[0]", 32, false, false, false},
+		{"tolerance.position", 34, false, false, false},
+		{"tolerance.diameter", 35, false, false, false},
+	}
+	for _, f := range fields {
+		unit := " in"
+		if f.area {
+			unit = " in2"
+		}
+		values := []string{"1e-300", "-2", "1e6", "1e-9"}
+		if !f.zeroOK {
+			values = append(values, "0")
+		}
+		for _, v := range values {
+			t.Run(f.path+"="+v, func(t *testing.T) {
+				src := setLine(lengthJob, f.line, v+unit)
+				j, err := ParseJob("len.yaml", []byte(src))
+				if err == nil {
+					_, err = j.Build()
+				}
+				var ie *InputError
+				if !errors.As(err, &ie) {
+					t.Fatalf("got %v, want an *InputError at %s", err, f.path)
+				}
+				if ie.File != "len.yaml" || ie.Field != f.path || ie.Line != f.line || ie.Msg == "" {
+					t.Errorf("got %v (field %q, line %d), want field %q on line %d", ie, ie.Field, ie.Line, f.path, f.line)
+				}
+			})
+		}
+	}
+}
+
+// The same for the member's own dimensions and explicit holes.
+func TestDimensionFieldsNameThemselves(t *testing.T) {
+	legs := `mark: LEN-2
+load: {required: 95 kip}
+member:
+  shape: angle
+  legs: [4 in, 3 in]
+  thickness: 1/2 in
+  grade: A36
+bolts: {diameter: 3/4 in, grade: A325}
+holes:
+  - [1.5 in, 2.5 in]
+  - [4.5 in, 2.5 in]
+`
+	flat := `mark: LEN-3
+load: {required: 95 kip}
+member:
+  shape: flat
+  width: 6 in
+  thickness: 1/2 in
+  grade: A36
+bolts: {diameter: 3/4 in, grade: A325, per_line: 2, pitch: 3 in, end: 1-1/2 in, gage: 3 in}
+`
+	mustBuild(t, mustParse(t, legs))
+	mustBuild(t, mustParse(t, flat))
+	cases := []struct {
+		src, from, path string
+		line            int
+	}{
+		{legs, "[4 in, 3 in]", "member.legs[0]", 5},
+		{legs, "3 in]", "member.legs[1]", 5},
+		{legs, "thickness: 1/2 in", "member.thickness", 6},
+		{legs, "[4.5 in, 2.5 in]", "holes[1]", 11},
+		{flat, "width: 6 in", "member.width", 5},
+		{flat, "thickness: 1/2 in", "member.thickness", 6},
+	}
+	for _, c := range cases {
+		for _, v := range []string{"1e-300 in", "0", "-2 in", "1e6 in"} {
+			t.Run(c.path+"="+v, func(t *testing.T) {
+				to := strings.NewReplacer("[4 in", "["+v, "3 in]", v+"]", "1/2 in", v, "6 in", v, "[4.5 in", "["+v).Replace(c.from)
+				src := strings.Replace(c.src, c.from, to, 1)
+				j, err := ParseJob("dim.yaml", []byte(src))
+				if err == nil {
+					_, err = j.Build()
+				}
+				var ie *InputError
+				if !errors.As(err, &ie) {
+					t.Fatalf("got %v, want an *InputError at %s", err, c.path)
+				}
+				if ie.Field != c.path || ie.Line != c.line {
+					t.Errorf("got %v (field %q, line %d), want field %q on line %d", ie, ie.Field, ie.Line, c.path, c.line)
+				}
+			})
+		}
+	}
+}
+
+// Section overrides that no angle of the member's legs and thickness can
+// have are refused as their field, on their line: x̄ between t/2 and half
+// the outstanding leg, the area at most the legs' and the largest fillet's,
+// rmin between t/√12 and half the shorter leg (section.Bounds). An area
+// below the angle's own (a section loss) passes down to half of it.
+func TestBuildSectionOverridesBounded(t *testing.T) {
+	// usAngle's member block ends on line 9 (length: 10 ft); the override
+	// goes on line 10.
+	override := func(src, kv string) string {
+		return strings.Replace(src, "  length: 10 ft\n", "  length: 10 ft\n  "+kv+"\n", 1)
+	}
+	double := strings.Replace(usAngle, "shape: angle", "shape: double-angle", 1)
+	swapped := strings.Replace(usAngle, "size: L4x4x1/2", "size: L4x6x1/2", 1)
+	custom := strings.Replace(usAngle, "  size: L4x4x1/2\n", "  legs: [4 in, 3 in]\n  thickness: 1/2 in\n", 1)
+	si := `mark: S1
+units: si
+load: {required: 300 kN}
+member:
+  shape: angle
+  size: L100x100x10
+  grade: A572-50
+  length: 3 m
+bolts: {diameter: M20, grade: A325M, per_line: 3, pitch: 70 mm, end: 40 mm, gage: 55 mm}
+`
+	cases := []struct {
+		name, src, kv, field string
+		line                 int
+		msg                  string
+	}{
+		{"xbar 100 in", usAngle, "xbar: 100 in", "member.xbar", 10, "is not the x̄ of an L4x4x1/2"},
+		{"xbar the leg", usAngle, "xbar: 4 in", "member.xbar", 10, "between 0.25 in"},
+		{"xbar below t/2", usAngle, "xbar: 0.2 in", "member.xbar", 10, "x̄"},
+		{"xbar in mm for an inch job", usAngle, "xbar: 30", "member.xbar", 10, "and 2 in (half the outstanding leg)"},
+		{"xbar of the pair", double, "xbar: 2.5 in", "member.xbar", 10, "x̄"},
+		{"xbar of the other leg", swapped, "xbar: 3.5 in", "member.xbar", 10, "L4x6x1/2"},
+		{"xbar past the custom leg", custom, "xbar: 1.6 in", "member.xbar", 11, "half the outstanding leg"},
+		{"area 10x", usAngle, "area: 37.5 in2", "member.area", 10, "at most 6.44 in2"},
+		{"area of the pair", double, "area: 7.5 in2", "member.area", 10, "is more than one L4x4x1/2 can have: its legs make 3.75 in2"},
+		{"area in mm2 as in2", usAngle, "area: 2419", "member.area", 10, ""},
+		{"area too small", usAngle, "area: 1.8 in2", "member.area", 10, "under half the area"},
+		{"rmin the leg", usAngle, "rmin: 4 in", "member.rmin", 10, "least radius of gyration"},
+		{"rmin below t/sqrt12", usAngle, "rmin: 0.1 in", "member.rmin", 10, ""},
+		{"si xbar in cm", si, "xbar: 2.82", "member.xbar", 9, "5 mm"},
+		{"si area in cm2", si, "area: 19.2", "member.area", 9, "its legs make 1900 mm2"},
+		{"si rmin 300 mm", si, "rmin: 300 mm", "member.rmin", 9, ""},
+	}
+	for _, c := range cases {
+		t.Run(c.name, func(t *testing.T) {
+			src := override(c.src, c.kv)
+			if c.src == si {
+				src = strings.Replace(si, "  length: 3 m\n", "  length: 3 m\n  "+c.kv+"\n", 1)
+			}
+			e := buildErr(t, src)
+			if e.Field != c.field || e.Line != c.line || !strings.Contains(e.Msg, c.msg) {
+				t.Errorf("got %s:%d %q, want %s:%d containing %q", e.Field, e.Line, e.Msg, c.field, c.line, c.msg)
+			}
+		})
+	}
+	// Published values pass: AISC Manual Table 1-7, L4x4x1/2, A 3.75 in²,
+	// x̄ 1.18 in, rz 0.776 in; EN 10056-1 L100x100x10, A 19.2 cm², e 2.82 cm,
+	// iv 1.95 cm (both from memory).
+	mustBuild(t, mustParse(t, override(usAngle, "area: 3.75 in2\n  xbar: 1.18 in\n  rmin: 0.776 in")))
+	mustBuild(t, mustParse(t, override(usAngle, "area: 1.9 in2")))
+	mustBuild(t, mustParse(t, strings.Replace(si, "  length: 3 m\n", "  length: 3 m\n  area: 19.2 cm2\n  xbar: 28.2 mm\n  rmin: 19.5 mm\n", 1)))
+}
+
+// No angle of the catalogs, connected by either leg, single or double, has
+// its own properties (within the 0.5 % of a rounded table) refused as
+// overrides.
+func TestBuildOverridesNeverRefuseACatalogAngle(t *testing.T) {
+	n := 0
+	for _, sys := range []units.System{units.US, units.SI} {
+		for _, name := range section.Names(sys) {
+			a, err := section.Lookup(name, sys)
+			if err != nil {
+				t.Fatal(err)
+			}
+			for _, swap := range []bool{false, true} {
+				c, size := a, name
+				if swap {
+					c, size = a.Swapped(), swapName(name)
+				}
+				p := c.Properties()
+				for _, k := range []float64{0.995, 1.005} {
+					for _, shape := range []string{"angle", "double-angle"} {
+						src := overrideJob(sys, shape, size, c, p, k)
+						j, err := ParseJob("catalog.yaml", []byte(src))
+						if err != nil {
+							t.Fatalf("%s: %v\n%s", size, err, src)
+						}
+						if _, err := j.Build(); err != nil {
+							t.Errorf("%s %s ×%g: %v", shape, size, k, err)
+						}
+						n++
+					}
+				}
+			}
+		}
+	}
+	if n < 800 {
+		t.Errorf("%d jobs built", n)
+	}
+}
+
+// overrideJob is a job for angle size of sys with its properties p, times
+// k, given as overrides, and two bolts on the connected leg's centre line.
+func overrideJob(sys units.System, shape, size string, a section.Angle, p section.Props, k float64) string {
+	mm := func(l units.Length) string { return strconv.FormatFloat(float64(l)*k, 'g', 10, 64) + " mm" }
+	bolt, grade, steel := "3/4 in", "A325", "A36"
+	if sys == units.SI {
+		bolt, grade, steel = "M20", "A325M", "A572-50"
+	}
+	return "mark: C1\nunits: " + sys.String() + "\nload: {required: 10 kN}\nmember:\n  shape: " + shape + "\n  size: " + size +
+		"\n  grade: " + steel + "\n  area: " + strconv.FormatFloat(float64(p.Area)*k, 'g', 10, 64) + " mm2\n  xbar: " + mm(p.Xbar) +
+		"\n  rmin: " + mm(p.Rmin) + "\nbolts: {diameter: " + bolt + ", grade: " + grade + ", per_line: 2, pitch: 80 mm, end: 40 mm, gage: " + mm(a.A/2/units.Length(k)) + "}\n"
 }

@@ -8,7 +8,6 @@ import (
 	"io"
 	"io/fs"
 	"math"
-	"os"
 	"regexp"
 	"slices"
 	"strconv"
@@ -16,6 +15,7 @@ import (
 
 	"go.yaml.in/yaml/v3"
 
+	"gaugeline/detail/measured"
 	"gaugeline/engine"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
@@ -256,7 +256,11 @@ const MaxJobSize = 1 << 20
 
 // Bounds on what a job may ask for: beyond them the input is a typo.
 const (
-	maxLength   = 100 * units.Metre
+	maxLength = 100 * units.Metre
+	// minLength: nothing in a bolted part is given to less than a
+	// micrometre; a smaller length is a unit or exponent typed wrong.
+	minLength   = units.Millimetre / 1000
+	minArea     = units.Area(1e-6) // mm²
 	maxForce    = 1e6 * units.Kip
 	maxStress   = 2000 * units.Megapascal
 	maxArea     = units.Area(1e7) // mm², 10 m²
@@ -272,9 +276,9 @@ const (
 
 // LoadJob reads and parses a job file.
 func LoadJob(path string) (*Job, error) {
-	f, err := os.Open(path)
+	f, err := measured.OpenRegular(path)
 	if err != nil {
-		return nil, &InputError{File: path, Msg: "cannot read the job: " + pathErrText(err)}
+		return nil, &InputError{File: path, Msg: "cannot read the job: " + pathErrText(err), Hint: notRegularHint(err)}
 	}
 	defer f.Close()
 	data, err := io.ReadAll(io.LimitReader(f, MaxJobSize+1))
@@ -284,13 +288,27 @@ func LoadJob(path string) (*Job, error) {
 	return ParseJob(path, data)
 }
 
-// pathErrText drops the path a *fs.PathError repeats.
+// pathErrText drops the path a *fs.PathError or *measured.NotRegularError
+// repeats.
 func pathErrText(err error) string {
 	var pe *fs.PathError
 	if errors.As(err, &pe) {
 		return pe.Err.Error()
 	}
+	var nr *measured.NotRegularError
+	if errors.As(err, &nr) {
+		return "it is " + nr.Kind() + ", not a regular file"
+	}
 	return err.Error()
+}
+
+// notRegularHint is the hint for a path that is not a regular file.
+func notRegularHint(err error) string {
+	var nr *measured.NotRegularError
+	if errors.As(err, &nr) {
+		return "give the path of a file; a pipe or device is not read, so that it cannot stall the run"
+	}
+	return ""
 }
 
 var yamlLine = regexp.MustCompile(`^yaml: line (\d+): (.*)$`)
@@ -553,20 +571,23 @@ const (
 	anySign                       // an offset
 )
 
-// length reads a length at path under rule r, always below 100 m in size.
+// length reads a length at path under rule r: when not zero, at least
+// 0.001 mm and below 100 m in size.
 func (p *parser) length(n *yaml.Node, path string, r lengthRule) (units.Length, error) {
 	v, err := p.quantity(n, path, units.DimLength)
 	if err != nil {
 		return 0, err
 	}
 	l := units.Length(v)
-	switch {
+	switch size := math.Abs(float64(l)); {
 	case r == positive && l <= 0:
 		return 0, p.errAt(n, path, "must be greater than zero", "")
 	case r == nonNegative && l < 0:
 		return 0, p.errAt(n, path, "must not be negative", "")
-	case math.Abs(float64(l)) >= float64(maxLength):
+	case size >= float64(maxLength):
 		return 0, p.errAt(n, path, "is absurdly large (100 m or more)", "check the unit")
+	case size > 0 && size < float64(minLength):
+		return 0, p.errAt(n, path, "is absurdly small (under 0.001 mm)", "check the unit and the exponent")
 	}
 	return l, nil
 }
@@ -615,6 +636,8 @@ func (p *parser) area(n *yaml.Node, path string) (units.Area, error) {
 		return 0, p.errAt(n, path, "must be greater than zero", "")
 	case a >= maxArea:
 		return 0, p.errAt(n, path, "is absurdly large (10 m² or more)", "check the unit")
+	case a < minArea:
+		return 0, p.errAt(n, path, "is absurdly small (under 0.000001 mm²)", "check the unit and the exponent")
 	}
 	return a, nil
 }

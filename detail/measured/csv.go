@@ -48,8 +48,9 @@ var headerCell = regexp.MustCompile(`^([a-z]+)(?:\s*[_\s]\s*([a-z"]+)|\s*[\(\[]\
 // may name the columns in any order, give radius instead of diameter, and
 // carry columns it does not use (z, …), which are ignored. The
 // delimiter is a comma, a semicolon or a tab (with either of the last two
-// a comma in a number is a decimal comma). Blank lines and lines
-// starting with # are skipped. Every row must be well formed: the first
+// a comma in a number is a decimal comma); a cell may be quoted, and a
+// quote left open is an error. Blank lines and lines starting with # are
+// skipped. Every row must be well formed: the first
 // bad one is an *Error naming its line and column.
 func ReadCSV(r io.Reader, file string, def Unit) (*Set, error) {
 	data, err := readCapped(r, file)
@@ -80,9 +81,10 @@ func ReadCSV(r io.Reader, file string, def Unit) (*Set, error) {
 		if delim == "" {
 			delim = pickDelimiter(line)
 		}
-		cells := strings.Split(line, delim)
-		for i := range cells {
-			cells[i] = strings.TrimSpace(strings.Trim(strings.TrimSpace(cells[i]), `"'`))
+		cells, err := splitCells(line, delim)
+		if err != nil {
+			err.File, err.Line = file, lineNo
+			return nil, err
 		}
 		if cols == nil {
 			if isHeader(cells) {
@@ -223,6 +225,56 @@ func readCapped(r io.Reader, file string) ([]byte, error) {
 		return nil, &Error{File: file, Msg: "the file is empty"}
 	}
 	return data, nil
+}
+
+// splitCells splits a line at delim. A cell that starts with a double or
+// single quote is quoted (RFC 4180): it runs to the matching quote, may
+// hold the delimiter, and a doubled quote inside it is one quote. A quote
+// not closed on its line is an error, as is text after a closing quote
+// (a cut-off cell or a row broken across lines is not data). A quote
+// inside an unquoted cell is kept: it is an inch or foot mark.
+func splitCells(line, delim string) ([]string, *Error) {
+	var cells []string
+	for col := 1; ; col++ {
+		rest := strings.TrimLeft(line, " \t")
+		if rest == "" || (rest[0] != '"' && rest[0] != '\'') {
+			cell, after, more := strings.Cut(line, delim)
+			cells = append(cells, strings.TrimSpace(cell))
+			if !more {
+				return cells, nil
+			}
+			line = after
+			continue
+		}
+		q := rest[0]
+		var b strings.Builder
+		i := 1
+		for {
+			k := strings.IndexByte(rest[i:], q)
+			if k < 0 {
+				return nil, &Error{Field: fmt.Sprintf("column %d", col), Msg: fmt.Sprintf("unclosed quote %c", q),
+					Hint: "a quoted cell ends with its quote on the same line: is the file cut short?"}
+			}
+			b.WriteString(rest[i : i+k])
+			i += k + 1
+			if i < len(rest) && rest[i] == q {
+				b.WriteByte(q) // a doubled quote
+				i++
+				continue
+			}
+			break
+		}
+		after := strings.TrimLeft(rest[i:], " \t")
+		cells = append(cells, strings.TrimSpace(b.String()))
+		if after == "" {
+			return cells, nil
+		}
+		if !strings.HasPrefix(after, delim) {
+			return nil, &Error{Field: fmt.Sprintf("column %d", col), Msg: fmt.Sprintf("text %q after the closing quote", clip(after)),
+				Hint: "quote the whole cell, or none of it"}
+		}
+		line = after[len(delim):]
+	}
 }
 
 // pickDelimiter: a semicolon or a tab where there is one (the comma is

@@ -35,6 +35,12 @@ func TestReadCSV(t *testing.T) {
 			[]Hole{{ID: "M1", X: 38.1, Y: 63.5, Width: 20.6375}}, "mm (the job's units)"},
 		{"quoted cells", "\"x\",\"y\",\"diameter\"\n\"40\",\"55\",\"22\"\n", Millimetres,
 			[]Hole{{ID: "M1", X: 40, Y: 55, Width: 22}}, "mm (the job's units)"},
+		// RFC 4180 quoting: a quoted cell may hold the delimiter, and a
+		// doubled quote inside it is one quote; an inch mark ends a value.
+		{"quoted delimiter and doubled quote", "x,y,diameter,id\n40,\"55\" ,22,\"A,\"\"1\"\"\"\n'40',55,22,'B'\n", Millimetres,
+			[]Hole{{ID: `A,"1"`, X: 40, Y: 55, Width: 22}, {ID: "B", X: 40, Y: 55, Width: 22}}, "mm (the job's units)"},
+		{"inch marks", "1-1/2\",2.5 in,13/16\"\n", Inches,
+			[]Hole{{ID: "M1", X: 38.1, Y: 63.5, Width: 20.6375}}, "in (the job's units)"},
 	}
 	for _, tt := range tests {
 		t.Run(tt.name, func(t *testing.T) {
@@ -80,6 +86,14 @@ func TestReadCSVErrors(t *testing.T) {
 		{"radius and diameter", "x,y,r,d\n1,2,3,6\n", 1, "radius", "not both"},
 		{"duplicate id", "1,2,0.8,A\n4,2,0.8,A\n", 2, "id", "already used on line 1"},
 		{"ragged row", "x,y,diameter\n1,2,0.8,9\n", 2, "", "columns"},
+		// A quote opened and not closed on its line: a cell cut short or a
+		// row broken across lines, not data.
+		{"unclosed quote", "x,y,diameter\n1,2,0.8\n\"1.5,2.5,0.8125\n", 3, "column 1", "unclosed quote"},
+		{"unclosed quote last cell", "1,2,0.8\n1.5,2.5,\"0.8125\n", 2, "column 3", "unclosed quote"},
+		{"unclosed quote in header", "x,y,\"diameter\n1,2,0.8\n", 1, "column 3", "unclosed quote"},
+		{"unclosed single quote", "1.5;'2,5;0,8125\n", 1, "column 2", "unclosed quote"},
+		{"quote spans the row", "\"1.5,2.5,0.8125\n4.5,2.5,0.8125\"\n", 1, "column 1", "unclosed quote"},
+		{"text after the closing quote", "1,\"2\"5,0.8\n", 1, "column 2", "after the closing quote"},
 	}
 	for _, tt := range tests {
 		t.Run(tt.name, func(t *testing.T) {

@@ -17,7 +17,13 @@ import (
 // hatches and every other entity are skipped, as are entities in paper
 // space. Entities drawn with the extrusion (0, 0, −1) — mirrored by many
 // CAD programs — are mapped to world coordinates; other extrusions are
-// skipped with a note.
+// skipped with a note. A file must end with its 0/EOF record: a file cut
+// short is an error, not a part with holes missing. $INSUNITS outside the
+// DXF's codes 0 to 24 is an error; 0 (unitless) reads the job's units.
+
+// maxInsUnits is the largest $INSUNITS code: 0 is unitless, 24 the US
+// survey mile (DXF Reference, HEADER section variables; from memory).
+const maxInsUnits = 24
 
 // insUnits maps $INSUNITS codes that are lengths of a part to millimetres.
 var insUnits = map[int]Unit{
@@ -104,6 +110,7 @@ type entity struct {
 // drawing is what the reader keeps of a DXF, in the file's units.
 type drawing struct {
 	insUnits    int // -1: not given
+	unitsLine   int // line of the $INSUNITS value
 	measurement int // -1: not given
 	circles     []circle
 	loops       [][]seg // closed polylines
@@ -202,7 +209,13 @@ scan:
 			return nil, err
 		}
 		if !ok {
-			break
+			if !sawSection {
+				return nil, &Error{File: file, Msg: "no DXF sections", Hint: "is this an ASCII DXF file?"}
+			}
+			// Judging the holes of a cut-off file would report the holes
+			// it lost as missing.
+			return nil, &Error{File: file, Line: s.line, Msg: "the file ends before EOF: truncated transfer?",
+				Hint: "a DXF ends with the record 0/EOF; copy or export the file again"}
 		}
 		if p.code == 0 {
 			if err := flush(); err != nil {
@@ -254,7 +267,11 @@ scan:
 					return nil, &Error{File: file, Line: p.line, Field: headerVar, Msg: fmt.Sprintf("%q is not an integer", clip(p.val))}
 				}
 				if headerVar == "$INSUNITS" {
-					d.insUnits = v
+					if v < 0 || v > maxInsUnits {
+						return nil, &Error{File: file, Line: p.line, Field: headerVar, Msg: fmt.Sprintf("%d is not a $INSUNITS code (0 to %d)", v, maxInsUnits),
+							Hint: "set $INSUNITS to 1 (inches) or 4 (millimetres)"}
+					}
+					d.insUnits, d.unitsLine = v, p.line
 				} else {
 					d.measurement = v
 				}

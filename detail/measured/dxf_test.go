@@ -10,12 +10,15 @@ import (
 	"testing"
 )
 
+// noUnits tells dxf to write no HEADER.
+const noUnits = -1 << 31
+
 // dxf writes a minimal ASCII DXF: a header setting $INSUNITS (omitted
-// when insunits < 0) and the given entity groups, one "code\nvalue" per
+// when insunits is noUnits) and the given entity groups, one "code\nvalue" per
 // string.
 func dxf(insunits int, blocks string, entities ...string) string {
 	var b strings.Builder
-	if insunits >= 0 {
+	if insunits != noUnits {
 		b.WriteString("0\nSECTION\n2\nHEADER\n9\n$ACADVER\n1\nAC1015\n9\n$INSUNITS\n70\n")
 		b.WriteString(strconv.Itoa(insunits) + "\n0\nENDSEC\n")
 	}
@@ -139,7 +142,7 @@ func TestReadDXFR12PolylineMirroredAndLines(t *testing.T) {
 	line := func(x1, y1, x2, y2 string) string {
 		return "0\nLINE\n8\n0\n10\n" + x1 + "\n20\n" + y1 + "\n11\n" + x2 + "\n21\n" + y2 + "\n"
 	}
-	src := dxf(-1, "", poly, circleE("holes", "40", "55", "11"), mirrored,
+	src := dxf(noUnits, "", poly, circleE("holes", "40", "55", "11"), mirrored,
 		line("0", "200", "50", "200"), line("50", "200", "50", "210"), line("0", "210", "50", "210"), line("0", "200", "0", "210"),
 		"0\nDIMENSION\n8\ndim\n2\n*D1\n10\n0\n20\n0\n")
 	s := read(t, src, Millimetres, "")
@@ -174,7 +177,18 @@ func TestReadDXFErrors(t *testing.T) {
 		{"bad radius", dxf(4, "", "0\nCIRCLE\n8\n0\n10\n1\n20\n1\n40\nbig\n"), "", 33, "group 40", "not a number"},
 		{"negative radius", dxf(4, "", "0\nCIRCLE\n8\n0\n10\n1\n20\n1\n40\n-1\n"), "", 25, "CIRCLE group 40", "not positive"},
 		{"circle without centre", dxf(4, "", "0\nCIRCLE\n8\n0\n40\n1\n"), "", 25, "CIRCLE group 10", "missing"},
-		{"unit code", dxf(3, "", circleE("0", "1", "1", "1")), "", 0, "$INSUNITS", "not a unit"},
+		// $INSUNITS codes run from 0 (unitless) to 24 (US survey mile):
+		// DXF Reference, HEADER section variables (from memory). Line 11
+		// is the group 70 of $INSUNITS in the file dxf writes.
+		{"unit code", dxf(3, "", circleE("0", "1", "1", "1")), "", 11, "$INSUNITS", "not a unit"},
+		{"negative unit code", dxf(-5, "", circleE("0", "1", "1", "1")), "", 11, "$INSUNITS", "not a $INSUNITS code"},
+		{"unit code too large", dxf(99999, "", circleE("0", "1", "1", "1")), "", 11, "$INSUNITS", "not a $INSUNITS code"},
+		{"unit code 25", dxf(25, "", circleE("0", "1", "1", "1")), "", 11, "$INSUNITS", "not a $INSUNITS code"},
+		// A transfer cut off anywhere before the 0/EOF record: the reader
+		// names the last line of the file (62, 60 and 64 lines here).
+		{"truncated before EOF", strings.TrimSuffix(dxf(4, "", rect("300", "120"), circleE("0", "40", "55", "11")), "0\nEOF\n"), "", 62, "", "ends before EOF"},
+		{"truncated in ENTITIES", strings.Split(dxf(4, "", rect("300", "120"), circleE("0", "40", "55", "11"), circleE("0", "110", "55", "11")), "0\nCIRCLE\n8\n0\n10\n110")[0], "", 60, "", "ends before EOF"},
+		{"EOF cut short", strings.TrimSuffix(dxf(4, "", rect("300", "120"), circleE("0", "40", "55", "11")), "EOF\n") + "EO\n", "", 64, "", "ends before EOF"},
 		{"no holes", dxf(4, "", rect("10", "10")), "", 0, "", "no holes"},
 		{"no circles on layer", dxf(4, "", circleE("holes", "1", "1", "1")), "cam", 0, "--layer", `no circles on layer "cam"`},
 	}
@@ -245,5 +259,39 @@ func TestReadDXFFixtures(t *testing.T) {
 				}
 			}
 		})
+	}
+}
+
+// TestReadDXFTruncatedFixtures cuts every DXF fixture (written by ezdxf)
+// short at ten points, each at a line end before its 0/EOF record: each
+// cut file is an error naming its last line, never a set of fewer holes.
+// (Before the reader required EOF, most cuts read as parts with holes
+// missing.)
+func TestReadDXFTruncatedFixtures(t *testing.T) {
+	files, _ := filepath.Glob(filepath.Join("..", "..", "testdata", "measured", "*.dxf"))
+	if len(files) < 10 {
+		t.Fatalf("%d DXF fixtures", len(files))
+	}
+	for _, p := range files {
+		data, err := os.ReadFile(p)
+		if err != nil {
+			t.Fatal(err)
+		}
+		eof := strings.LastIndex(string(data), "EOF")
+		for k := 1; k <= 10; k++ {
+			cut := string(data[:eof*k/10])
+			cut = cut[:strings.LastIndexByte(cut, '\n')+1]
+			lines := strings.Count(cut, "\n")
+			_, err := ReadDXF(strings.NewReader(cut), "cut.dxf", Millimetres, "")
+			var e *Error
+			if !errors.As(err, &e) {
+				t.Errorf("%s cut at line %d: err = %v, want *Error", filepath.Base(p), lines, err)
+				continue
+			}
+			// Cut after a group code, the file ends before its value.
+			if e.Line != lines || !strings.Contains(e.Msg, "the file ends before") {
+				t.Errorf("%s cut at line %d: %v", filepath.Base(p), lines, e)
+			}
+		}
 	}
 }

@@ -74,7 +74,7 @@ func FuzzReadDXF(f *testing.F) {
 	for _, s := range []string{
 		dxf(1, "", rect("8", "4"), circleE("holes", "1.5", "2.5", "0.40625")),
 		dxf(4, "", rect("300", "120"), slot),
-		dxf(-1, "", "0\nPOLYLINE\n70\n1\n0\nVERTEX\n10\n0\n20\n0\n42\n0.4\n0\nVERTEX\n10\n9\n20\n0\n0\nVERTEX\n10\n9\n20\n9\n0\nSEQEND\n",
+		dxf(noUnits, "", "0\nPOLYLINE\n70\n1\n0\nVERTEX\n10\n0\n20\n0\n42\n0.4\n0\nVERTEX\n10\n9\n20\n0\n0\nVERTEX\n10\n9\n20\n9\n0\nSEQEND\n",
 			circleE("0", "3", "3", "1"), "0\nCIRCLE\n10\n-5\n20\n5\n40\n1\n230\n-1\n"),
 		dxf(4, "", "0\nLINE\n10\n0\n20\n0\n11\n5\n21\n0\n0\nARC\n10\n5\n20\n5\n40\n5\n50\n270\n51\n180\n0\nLINE\n10\n0\n20\n5\n11\n0\n21\n0\n",
 			circleE("0", "2", "2", "0.5")),

@@ -19,7 +19,7 @@ func (d *drawing) holes(file string, def Unit, layer string) (*Set, error) {
 	case d.insUnits > 0:
 		var ok bool
 		if u, ok = insUnits[d.insUnits]; !ok {
-			return nil, &Error{File: file, Field: "$INSUNITS", Msg: fmt.Sprintf("unit code %d is not a unit a part is drawn in", d.insUnits),
+			return nil, &Error{File: file, Line: d.unitsLine, Field: "$INSUNITS", Msg: fmt.Sprintf("unit code %d is not a unit a part is drawn in", d.insUnits),
 				Hint: "set $INSUNITS to 1 (inches) or 4 (millimetres)"}
 		}
 		set.Units = u.Name + " ($INSUNITS)"

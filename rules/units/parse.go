@@ -18,6 +18,8 @@ import (
 // Numbers are decimals ("2.5", "1e3"), fractions ("3/4") or mixed numbers
 // ("1-1/2", "1 1/2"); units are case-insensitive. A leading sign applies to
 // the whole quantity, so "-3'-6\"" is -42 in. Parse does not judge sign.
+// In feet-inches the feet are whole and the inches unsigned and less than
+// 12, a lone fraction of an inch proper: 3'-99" and 3'-13/4" are errors.
 func Parse(s string, want Dim, sys System) (float64, error) {
 	if want < Dimensionless || want > DimArea {
 		panic(fmt.Sprintf("units: Parse: unknown dimension %d", int(want)))
@@ -52,9 +54,12 @@ func Parse(s string, want Dim, sys System) (float64, error) {
 	var internal float64
 	if after, ok := cutFeet(rest); ok {
 		dim = DimLength
-		in, err := inchesAfterFeet(after)
+		in, given, err := inchesAfterFeet(after, v)
 		if err != nil {
 			return 0, numberError(s, err)
+		}
+		if given && v != math.Trunc(v) {
+			return 0, numberError(s, errWholeFeet)
 		}
 		// Sum in inches first: on the 1/16 in grid the sum is exact, so
 		// only the final conversion to mm rounds.
@@ -210,13 +215,17 @@ type parseError string
 func (e parseError) Error() string { return string(e) }
 
 const (
-	errNoNumber   parseError = "no number"
-	errFraction   parseError = "malformed fraction"
-	errDivZero    parseError = "division by zero"
-	errRange      parseError = "number out of range"
-	errFeetInches parseError = `want feet-inches like 3'-6 1/2"`
-	errUnknown    parseError = "unknown unit"
-	errJunk       parseError = "malformed number"
+	errNoNumber     parseError = "no number"
+	errFraction     parseError = "malformed fraction"
+	errDivZero      parseError = "division by zero"
+	errRange        parseError = "number out of range"
+	errFeetInches   parseError = `want feet-inches like 3'-6 1/2"`
+	errNoInches     parseError = `no inches after the feet: write 3'-0" or 3'`
+	errInchSign     parseError = `the inches after the feet take no sign: a sign goes before the feet, -3'-6"`
+	errInchFraction parseError = `the inches after the feet are a whole number and a proper fraction: 3'-1 3/4"`
+	errWholeFeet    parseError = `the feet are a whole number when inches follow: 2'-6", or 2.5 ft alone`
+	errUnknown      parseError = "unknown unit"
+	errJunk         parseError = "malformed number"
 )
 
 func numberError(s string, err error) error {
@@ -346,32 +355,52 @@ func cutFeet(rest string) (string, bool) {
 	return "", false
 }
 
-// inchesAfterFeet reads the optional inch part of a feet-inches length:
-// "", `-6"`, ` 6-1/2"`, "-6 1/2 in".
-func inchesAfterFeet(s string) (float64, error) {
+// inchesAfterFeet reads the optional inch part of a feet-inches length
+// after feet ft: "", `-6"`, ` 6-1/2"`, "-6 1/2 in"; given reports that
+// there was one. The inch part is unsigned and less than 12, and a lone
+// fraction is proper (shop convention: 3'-1 3/4", not 3'-13/4"): anything
+// else is a typo, not a length.
+func inchesAfterFeet(s string, ft float64) (in float64, given bool, err error) {
 	s = strings.TrimSpace(s)
 	if s == "" {
-		return 0, nil
+		return 0, false, nil
 	}
 	if s[0] == '-' {
 		s = strings.TrimLeftFunc(s[1:], unicode.IsSpace)
 	}
+	if s == "" || s[0] == '"' || normalizeUnit(s) == "in" {
+		return 0, true, errNoInches
+	}
+	if s[0] == '-' || s[0] == '+' {
+		return 0, true, errInchSign
+	}
 	v, rest, err := scanNumber(s)
 	if err == errNoNumber {
-		return 0, errFeetInches
+		return 0, true, errFeetInches
 	}
 	if err != nil {
-		return 0, err
+		return 0, true, err
 	}
 	rest = strings.TrimSpace(rest)
 	if rest != `"` {
 		switch normalizeUnit(rest) {
 		case "in", "inch", "inches":
 		default:
-			return 0, errFeetInches
+			return 0, true, errFeetInches
 		}
 	}
-	return v, nil
+	if i := spanDigits(s, 0); i > 0 && i < len(s) && s[i] == '/' && v >= 1 {
+		return 0, true, errInchFraction
+	}
+	if v >= 12 {
+		msg := "inches after the feet must be less than 12"
+		if total := ft*12 + v; finite(total) && total*16 == math.Trunc(total*16) && total < 1e9 {
+			msg += fmt.Sprintf(": %s ft %s in is %s", strconv.FormatFloat(ft, 'f', -1, 64),
+				strconv.FormatFloat(v, 'f', -1, 64), FormatFeetInches(Length(total)*Inch))
+		}
+		return 0, true, parseError(msg)
+	}
+	return v, true, nil
 }
 
 // unitOf returns the dimension of the unit written after a number and the

@@ -36,95 +36,105 @@ func assertClose(t *testing.T, want, got float64, msg string) {
 	assert.InDelta(t, want, got, tol, msg)
 }
 
+// parseCases are the quantities Parse reads (also FuzzParseQuantity's
+// seeds).
+var parseCases = []struct {
+	name string
+	in   string
+	dim  Dim
+	sys  System
+	want float64 // internal units: mm, N, MPa, mm²
+	src  string
+}{
+	// Lengths.
+	{"fraction in", "3/4 in", DimLength, US, 19.05, srcInch},
+	{"mixed in with dash", "1-1/2 in", DimLength, US, 38.1, srcInch},
+	{"mixed in with space", "1 1/2 in", DimLength, US, 38.1, srcInch},
+	{"decimal in", "2.5 in", DimLength, US, 63.5, srcInch},
+	{"whole in", "3 in", DimLength, US, 76.2, srcInch},
+	{"inch mark", `1.5"`, DimLength, US, 38.1, srcInch},
+	{"feet-inches mixed", `3'-6 1/2"`, DimLength, US, 1079.5, srcInch + "; 3'-6 1/2\" = 42.5 in"},
+	{"feet-inches whole", `3'-6"`, DimLength, US, 1066.8, srcInch + "; 3'-6\" = 42 in"},
+	{"feet space inches dash", `3' 6-1/2"`, DimLength, US, 1079.5, srcInch + "; 42.5 in"},
+	{"feet no separator", `3'6"`, DimLength, US, 1066.8, srcInch + "; 42 in"},
+	{"feet only", `3'`, DimLength, US, 914.4, srcFoot},
+	{"ft", "12 ft", DimLength, US, 3657.6, srcFoot},
+	{"decimal ft", "1.5 ft", DimLength, US, 457.2, srcFoot},
+	{"feet word", "2 feet", DimLength, US, 609.6, srcFoot},
+	{"foot word", "1 foot", DimLength, US, 304.8, srcFoot},
+	{"ft and in words", "3 ft 6 in", DimLength, US, 1066.8, srcInch + "; 42 in"},
+	{"ft and in glued", "3ft-6in", DimLength, US, 1066.8, srcInch + "; 42 in"},
+	{"feet-inches largest inch part", `3'-11 15/16"`, DimLength, US, 1217.6125, srcInch + "; 47 15/16 in"},
+	{"feet-inches fraction only", `3'-3/4"`, DimLength, US, 933.45, srcInch + "; 36.75 in"},
+	{"feet-inches decimal inches", `3'-11.5"`, DimLength, US, 1206.5, srcInch + "; 47.5 in"},
+	{"feet-inches zero inches", `3'-0"`, DimLength, US, 914.4, srcFoot},
+	{"feet-inches zero feet", `0'-6"`, DimLength, US, 152.4, srcInch},
+	{"feet-inches spaced dash", `3' - 6"`, DimLength, US, 1066.8, srcInch + "; 42 in"},
+	{"decimal feet alone", `2.5'`, DimLength, US, 762, srcFoot},
+	{"inch word", "1 inch", DimLength, US, 25.4, srcInch},
+	{"inches word", "2 inches", DimLength, US, 50.8, srcInch},
+	{"mm", "20 mm", DimLength, US, 20, srcSI},
+	{"m", "3.2 m", DimLength, US, 3200, srcSI},
+	{"cm", "2.5 cm", DimLength, SI, 25, srcSI},
+	{"millimetres word", "12 millimetres", DimLength, SI, 12, srcSI},
+	{"upper case unit", "3/4 IN", DimLength, US, 19.05, srcInch},
+	{"whitespace", "  3/4\tin  ", DimLength, US, 19.05, srcInch},
+	{"no space before unit", "20mm", DimLength, US, 20, srcSI},
+	{"typographic primes", "3′-6″", DimLength, US, 1066.8, srcInch + "; 42 in"},
+	{"doubled apostrophe as inch", "6''", DimLength, US, 152.4, srcInch},
+	{"leading point", ".5 in", DimLength, US, 12.7, srcInch},
+	{"exponent", "1e3 mm", DimLength, SI, 1000, srcSI},
+	{"plus sign", "+2 in", DimLength, US, 50.8, srcInch},
+	{"negative in", "-3 in", DimLength, US, -76.2, srcInch + "; Parse leaves sign to callers"},
+	{"negative mixed", "-1-1/2 in", DimLength, US, -38.1, srcInch + "; sign applies to the whole number"},
+	{"negative feet-inches", `-3'-6"`, DimLength, US, -1066.8, srcInch + "; sign applies to the whole quantity"},
+	{"zero", "0", DimLength, US, 0, srcBare},
+	{"bare decimal us", "1.5", DimLength, US, 38.1, srcBare + "; " + srcInch},
+	{"bare fraction us", "3/4", DimLength, US, 19.05, srcBare + "; " + srcInch},
+	{"bare mixed us", "1-1/2", DimLength, US, 38.1, srcBare + "; " + srcInch},
+	{"bare decimal si", "1.5", DimLength, SI, 1.5, srcBare},
+	{"bare whole si", "20", DimLength, SI, 20, srcBare},
+	{"improper fraction", "5/4 in", DimLength, US, 31.75, srcInch},
+
+	// Forces.
+	{"kip", "95 kip", DimForce, US, 422581.0534497475, srcLbf},
+	{"kips", "95 kips", DimForce, SI, 422581.0534497475, srcLbf},
+	{"kN", "400 kN", DimForce, US, 400000, srcSI},
+	{"kN lower", "400 kn", DimForce, US, 400000, srcSI},
+	{"N", "1500 N", DimForce, US, 1500, srcSI},
+	{"lb", "95000 lb", DimForce, US, 422581.0534497475, srcLbf},
+	{"lbf", "95000 lbf", DimForce, US, 422581.0534497475, srcLbf},
+	{"bare kip", "95", DimForce, US, 422581.0534497475, srcBare + "; " + srcLbf},
+	{"bare kN", "400", DimForce, SI, 400000, srcBare + "; " + srcSI},
+
+	// Stresses.
+	{"ksi", "50 ksi", DimStress, US, 344.73786465841805, srcPsi},
+	{"MPa", "345 MPa", DimStress, US, 345, srcMPa},
+	{"N/mm2", "345 N/mm2", DimStress, US, 345, srcMPa},
+	{"N/mm^2", "345 N/mm^2", DimStress, US, 345, srcMPa},
+	{"N/mm²", "345 N/mm²", DimStress, US, 345, srcMPa},
+	{"psi", "36000 psi", DimStress, SI, 248.211262554061, srcPsi},
+	{"bare ksi", "50", DimStress, US, 344.73786465841805, srcBare + "; " + srcPsi},
+	{"bare MPa", "345", DimStress, SI, 345, srcBare},
+
+	// Areas.
+	{"in2", "3.75 in2", DimArea, US, 2419.35, srcSqIn},
+	{"in^2", "3.75 in^2", DimArea, US, 2419.35, srcSqIn},
+	{"in²", "3.75 in²", DimArea, US, 2419.35, srcSqIn},
+	{"sq in", "3.75 sq in", DimArea, US, 2419.35, srcSqIn},
+	{"mm2", "1920 mm2", DimArea, US, 1920, srcSI},
+	{"cm2", "19.2 cm2", DimArea, US, 1920, srcSI},
+	{"bare in2", "3.75", DimArea, US, 2419.35, srcBare + "; " + srcSqIn},
+	{"bare mm2", "1920", DimArea, SI, 1920, srcBare},
+
+	// Numbers.
+	{"number decimal", "1.5", Dimensionless, US, 1.5, srcBare},
+	{"number fraction", "3/4", Dimensionless, SI, 0.75, srcBare},
+	{"number mixed", "1-1/2", Dimensionless, US, 1.5, srcBare},
+}
+
 func TestParse(t *testing.T) {
-	tests := []struct {
-		name string
-		in   string
-		dim  Dim
-		sys  System
-		want float64 // internal units: mm, N, MPa, mm²
-		src  string
-	}{
-		// Lengths.
-		{"fraction in", "3/4 in", DimLength, US, 19.05, srcInch},
-		{"mixed in with dash", "1-1/2 in", DimLength, US, 38.1, srcInch},
-		{"mixed in with space", "1 1/2 in", DimLength, US, 38.1, srcInch},
-		{"decimal in", "2.5 in", DimLength, US, 63.5, srcInch},
-		{"whole in", "3 in", DimLength, US, 76.2, srcInch},
-		{"inch mark", `1.5"`, DimLength, US, 38.1, srcInch},
-		{"feet-inches mixed", `3'-6 1/2"`, DimLength, US, 1079.5, srcInch + "; 3'-6 1/2\" = 42.5 in"},
-		{"feet-inches whole", `3'-6"`, DimLength, US, 1066.8, srcInch + "; 3'-6\" = 42 in"},
-		{"feet space inches dash", `3' 6-1/2"`, DimLength, US, 1079.5, srcInch + "; 42.5 in"},
-		{"feet no separator", `3'6"`, DimLength, US, 1066.8, srcInch + "; 42 in"},
-		{"feet only", `3'`, DimLength, US, 914.4, srcFoot},
-		{"ft", "12 ft", DimLength, US, 3657.6, srcFoot},
-		{"decimal ft", "1.5 ft", DimLength, US, 457.2, srcFoot},
-		{"feet word", "2 feet", DimLength, US, 609.6, srcFoot},
-		{"foot word", "1 foot", DimLength, US, 304.8, srcFoot},
-		{"ft and in words", "3 ft 6 in", DimLength, US, 1066.8, srcInch + "; 42 in"},
-		{"ft and in glued", "3ft-6in", DimLength, US, 1066.8, srcInch + "; 42 in"},
-		{"inch word", "1 inch", DimLength, US, 25.4, srcInch},
-		{"inches word", "2 inches", DimLength, US, 50.8, srcInch},
-		{"mm", "20 mm", DimLength, US, 20, srcSI},
-		{"m", "3.2 m", DimLength, US, 3200, srcSI},
-		{"cm", "2.5 cm", DimLength, SI, 25, srcSI},
-		{"millimetres word", "12 millimetres", DimLength, SI, 12, srcSI},
-		{"upper case unit", "3/4 IN", DimLength, US, 19.05, srcInch},
-		{"whitespace", "  3/4\tin  ", DimLength, US, 19.05, srcInch},
-		{"no space before unit", "20mm", DimLength, US, 20, srcSI},
-		{"typographic primes", "3′-6″", DimLength, US, 1066.8, srcInch + "; 42 in"},
-		{"doubled apostrophe as inch", "6''", DimLength, US, 152.4, srcInch},
-		{"leading point", ".5 in", DimLength, US, 12.7, srcInch},
-		{"exponent", "1e3 mm", DimLength, SI, 1000, srcSI},
-		{"plus sign", "+2 in", DimLength, US, 50.8, srcInch},
-		{"negative in", "-3 in", DimLength, US, -76.2, srcInch + "; Parse leaves sign to callers"},
-		{"negative mixed", "-1-1/2 in", DimLength, US, -38.1, srcInch + "; sign applies to the whole number"},
-		{"negative feet-inches", `-3'-6"`, DimLength, US, -1066.8, srcInch + "; sign applies to the whole quantity"},
-		{"zero", "0", DimLength, US, 0, srcBare},
-		{"bare decimal us", "1.5", DimLength, US, 38.1, srcBare + "; " + srcInch},
-		{"bare fraction us", "3/4", DimLength, US, 19.05, srcBare + "; " + srcInch},
-		{"bare mixed us", "1-1/2", DimLength, US, 38.1, srcBare + "; " + srcInch},
-		{"bare decimal si", "1.5", DimLength, SI, 1.5, srcBare},
-		{"bare whole si", "20", DimLength, SI, 20, srcBare},
-		{"improper fraction", "5/4 in", DimLength, US, 31.75, srcInch},
-
-		// Forces.
-		{"kip", "95 kip", DimForce, US, 422581.0534497475, srcLbf},
-		{"kips", "95 kips", DimForce, SI, 422581.0534497475, srcLbf},
-		{"kN", "400 kN", DimForce, US, 400000, srcSI},
-		{"kN lower", "400 kn", DimForce, US, 400000, srcSI},
-		{"N", "1500 N", DimForce, US, 1500, srcSI},
-		{"lb", "95000 lb", DimForce, US, 422581.0534497475, srcLbf},
-		{"lbf", "95000 lbf", DimForce, US, 422581.0534497475, srcLbf},
-		{"bare kip", "95", DimForce, US, 422581.0534497475, srcBare + "; " + srcLbf},
-		{"bare kN", "400", DimForce, SI, 400000, srcBare + "; " + srcSI},
-
-		// Stresses.
-		{"ksi", "50 ksi", DimStress, US, 344.73786465841805, srcPsi},
-		{"MPa", "345 MPa", DimStress, US, 345, srcMPa},
-		{"N/mm2", "345 N/mm2", DimStress, US, 345, srcMPa},
-		{"N/mm^2", "345 N/mm^2", DimStress, US, 345, srcMPa},
-		{"N/mm²", "345 N/mm²", DimStress, US, 345, srcMPa},
-		{"psi", "36000 psi", DimStress, SI, 248.211262554061, srcPsi},
-		{"bare ksi", "50", DimStress, US, 344.73786465841805, srcBare + "; " + srcPsi},
-		{"bare MPa", "345", DimStress, SI, 345, srcBare},
-
-		// Areas.
-		{"in2", "3.75 in2", DimArea, US, 2419.35, srcSqIn},
-		{"in^2", "3.75 in^2", DimArea, US, 2419.35, srcSqIn},
-		{"in²", "3.75 in²", DimArea, US, 2419.35, srcSqIn},
-		{"sq in", "3.75 sq in", DimArea, US, 2419.35, srcSqIn},
-		{"mm2", "1920 mm2", DimArea, US, 1920, srcSI},
-		{"cm2", "19.2 cm2", DimArea, US, 1920, srcSI},
-		{"bare in2", "3.75", DimArea, US, 2419.35, srcBare + "; " + srcSqIn},
-		{"bare mm2", "1920", DimArea, SI, 1920, srcBare},
-
-		// Numbers.
-		{"number decimal", "1.5", Dimensionless, US, 1.5, srcBare},
-		{"number fraction", "3/4", Dimensionless, SI, 0.75, srcBare},
-		{"number mixed", "1-1/2", Dimensionless, US, 1.5, srcBare},
-	}
-	for _, tt := range tests {
+	for _, tt := range parseCases {
 		t.Run(tt.name, func(t *testing.T) {
 			got, err := Parse(tt.in, tt.dim, tt.sys)
 			require.NoError(t, err)
@@ -133,67 +143,83 @@ func TestParse(t *testing.T) {
 	}
 }
 
+// parseErrorCases are the strings Parse refuses (also FuzzParseQuantity's
+// seeds).
+var parseErrorCases = []struct {
+	name string
+	in   string
+	dim  Dim
+	want string // a fragment of the message
+	src  string
+}{
+	{"force as length", "3 kip", DimLength, `"3 kip" is a force, not a length`, "dimension mismatch"},
+	{"length as force", "3 in", DimForce, `"3 in" is a length, not a force`, "dimension mismatch"},
+	{"feet-inches as stress", `3'-6"`, DimStress, "is a length, not a stress", "dimension mismatch"},
+	{"feet as force", "12 ft", DimForce, "is a length, not a force", "dimension mismatch"},
+	{"area as length", "3 in2", DimLength, "is an area, not a length", "dimension mismatch"},
+	{"stress as area", "50 ksi", DimArea, "is a stress, not an area", "dimension mismatch"},
+	{"mm as stress", "20 mm", DimStress, "is a length, not a stress", "dimension mismatch"},
+	{"unit on a number", "3 in", Dimensionless, "is a length, not a number", "numbers take no unit"},
+	{"feet on a number", `3'`, Dimensionless, "is a length, not a number", "numbers take no unit"},
+	{"not a quantity", "abc", DimLength, `"abc" is not a quantity`, "no number"},
+	{"unit only", "in", DimLength, "is not a quantity", "no number"},
+	{"point only", ". in", DimLength, "is not a quantity", "no number"},
+	{"empty", "", DimLength, "empty value", "no number"},
+	{"blank", " \t ", DimForce, "empty value", "no number"},
+	{"unknown unit", "3 furlongs", DimLength, `unknown unit "furlongs"`, "unknown unit"},
+	{"unknown unit m20", "M20", DimLength, "is not a quantity", "Parse does not read bolt designations"},
+	{"NaN", "NaN", DimLength, "NaN is not a number", "not finite"},
+	{"NaN in", "NaN in", DimLength, "NaN is not a number", "not finite"},
+	{"nan mm", "nan mm", DimLength, "NaN is not a number", "not finite"},
+	{"inf mm", "inf mm", DimLength, "infinity is not a number", "not finite"},
+	{"-Inf in", "-Inf in", DimLength, "infinity is not a number", "not finite"},
+	{"Infinity", "Infinity", DimForce, "infinity is not a number", "not finite"},
+	{"overflow", "1e999 in", DimLength, "out of range", "not finite"},
+	{"negative overflow", "-1e999 mm", DimLength, "out of range", "not finite"},
+	{"overflow after conversion", "1e308 ft", DimLength, "out of range", "not finite"},
+	{"overflow kip", "1e308 kip", DimForce, "out of range", "not finite"},
+	{"division by zero", "1/0 in", DimLength, `"1/0 in": division by zero`, "malformed fraction"},
+	{"mixed division by zero", "1-1/0 in", DimLength, "division by zero", "malformed fraction"},
+	{"bare division by zero", "0/0", Dimensionless, "division by zero", "malformed fraction"},
+	{"no denominator", "1/ in", DimLength, "malformed fraction", "malformed fraction"},
+	{"no numerator", "/2 in", DimLength, "is not a quantity", "malformed fraction"},
+	{"double slash", "1//2 in", DimLength, "malformed fraction", "malformed fraction"},
+	{"two slashes", "1/2/3 in", DimLength, "malformed fraction", "malformed fraction"},
+	{"decimal denominator", "1/2.5 in", DimLength, "malformed fraction", "malformed fraction"},
+	{"improper mixed", "1-3/2 in", DimLength, "malformed fraction", "malformed fraction"},
+	{"mixed denominator missing", "1 1/ in", DimLength, "malformed fraction", "malformed fraction"},
+	{"trailing word", "3 in foo", DimLength, "unknown unit", "trailing junk"},
+	{"trailing semicolon", "3 in;", DimLength, "unknown unit", "trailing junk"},
+	{"trailing junk bare", "3 x", DimLength, "unknown unit", "trailing junk"},
+	{"two numbers", "1 2 in", DimLength, "malformed number", "trailing junk"},
+	{"two points", "1.2.3 in", DimLength, "malformed number", "trailing junk"},
+	{"decimal numerator", "1.5/2 in", DimLength, "malformed number", "trailing junk"},
+	{"double sign", "--3 in", DimLength, "is not a quantity", "trailing junk"},
+	{"spaced sign", "- 3 in", DimLength, "is not a quantity", "trailing junk"},
+	{"inches without mark", `3'-6`, DimLength, "want feet-inches", "malformed feet-inches"},
+	{"inch mark without number", `3'-"`, DimLength, "no inches after the feet", "malformed feet-inches"},
+	{"junk after inches", `3'-6" x`, DimLength, "want feet-inches", "malformed feet-inches"},
+	{"mm after feet", `3'-6 mm`, DimLength, "want feet-inches", "malformed feet-inches"},
+	{"feet twice", "3 ft 6 ft", DimLength, "want feet-inches", "malformed feet-inches"},
+	{"dangling dash", `3'-`, DimLength, "no inches after the feet", "malformed feet-inches"},
+	{"blank inch part", `3' "`, DimLength, "no inches after the feet", "malformed feet-inches"},
+	{"inch part 99", `3'-99"`, DimLength, `inches after the feet must be less than 12: 3 ft 99 in is 11'-3"`, srcShop + "; 12 in = 1 ft"},
+	{"inch part 12", `3'-12"`, DimLength, "must be less than 12", srcShop + "; 12 in = 1 ft"},
+	{"inch part 12 words", "3 ft 12 in", DimLength, "must be less than 12", srcShop + "; 12 in = 1 ft"},
+	{"inch part 12.5", `3'-12.5"`, DimLength, "must be less than 12", srcShop + "; 12 in = 1 ft"},
+	{"inch part by exponent", `3'-1e3"`, DimLength, "must be less than 12", srcShop + "; 12 in = 1 ft"},
+	{"improper inch fraction", `3'-13/4"`, DimLength, "proper fraction", srcShop + "; 3'-1 3/4\" is written so"},
+	{"whole inch fraction", `3'-4/4"`, DimLength, "proper fraction", srcShop},
+	{"negative inch part", `3'--6"`, DimLength, "no sign", "the sign goes before the feet: -3'-6\""},
+	{"negative spaced inch part", `3'- -6"`, DimLength, "no sign", "the sign goes before the feet"},
+	{"plus inch part", `3'-+6"`, DimLength, "no sign", "the sign goes before the feet"},
+	{"decimal feet with inches", `2.5'-6"`, DimLength, "the feet are a whole number when inches follow", srcShop},
+	{"mixed feet with inches", `1-1/2'-6"`, DimLength, "the feet are a whole number when inches follow", srcShop},
+	{"hex", "0x10 in", DimLength, "unknown unit", "only decimal numbers"},
+}
+
 func TestParseErrors(t *testing.T) {
-	tests := []struct {
-		name string
-		in   string
-		dim  Dim
-		want string // a fragment of the message
-		src  string
-	}{
-		{"force as length", "3 kip", DimLength, `"3 kip" is a force, not a length`, "dimension mismatch"},
-		{"length as force", "3 in", DimForce, `"3 in" is a length, not a force`, "dimension mismatch"},
-		{"feet-inches as stress", `3'-6"`, DimStress, "is a length, not a stress", "dimension mismatch"},
-		{"feet as force", "12 ft", DimForce, "is a length, not a force", "dimension mismatch"},
-		{"area as length", "3 in2", DimLength, "is an area, not a length", "dimension mismatch"},
-		{"stress as area", "50 ksi", DimArea, "is a stress, not an area", "dimension mismatch"},
-		{"mm as stress", "20 mm", DimStress, "is a length, not a stress", "dimension mismatch"},
-		{"unit on a number", "3 in", Dimensionless, "is a length, not a number", "numbers take no unit"},
-		{"feet on a number", `3'`, Dimensionless, "is a length, not a number", "numbers take no unit"},
-		{"not a quantity", "abc", DimLength, `"abc" is not a quantity`, "no number"},
-		{"unit only", "in", DimLength, "is not a quantity", "no number"},
-		{"point only", ". in", DimLength, "is not a quantity", "no number"},
-		{"empty", "", DimLength, "empty value", "no number"},
-		{"blank", " \t ", DimForce, "empty value", "no number"},
-		{"unknown unit", "3 furlongs", DimLength, `unknown unit "furlongs"`, "unknown unit"},
-		{"unknown unit m20", "M20", DimLength, "is not a quantity", "Parse does not read bolt designations"},
-		{"NaN", "NaN", DimLength, "NaN is not a number", "not finite"},
-		{"NaN in", "NaN in", DimLength, "NaN is not a number", "not finite"},
-		{"nan mm", "nan mm", DimLength, "NaN is not a number", "not finite"},
-		{"inf mm", "inf mm", DimLength, "infinity is not a number", "not finite"},
-		{"-Inf in", "-Inf in", DimLength, "infinity is not a number", "not finite"},
-		{"Infinity", "Infinity", DimForce, "infinity is not a number", "not finite"},
-		{"overflow", "1e999 in", DimLength, "out of range", "not finite"},
-		{"negative overflow", "-1e999 mm", DimLength, "out of range", "not finite"},
-		{"overflow after conversion", "1e308 ft", DimLength, "out of range", "not finite"},
-		{"overflow kip", "1e308 kip", DimForce, "out of range", "not finite"},
-		{"division by zero", "1/0 in", DimLength, `"1/0 in": division by zero`, "malformed fraction"},
-		{"mixed division by zero", "1-1/0 in", DimLength, "division by zero", "malformed fraction"},
-		{"bare division by zero", "0/0", Dimensionless, "division by zero", "malformed fraction"},
-		{"no denominator", "1/ in", DimLength, "malformed fraction", "malformed fraction"},
-		{"no numerator", "/2 in", DimLength, "is not a quantity", "malformed fraction"},
-		{"double slash", "1//2 in", DimLength, "malformed fraction", "malformed fraction"},
-		{"two slashes", "1/2/3 in", DimLength, "malformed fraction", "malformed fraction"},
-		{"decimal denominator", "1/2.5 in", DimLength, "malformed fraction", "malformed fraction"},
-		{"improper mixed", "1-3/2 in", DimLength, "malformed fraction", "malformed fraction"},
-		{"mixed denominator missing", "1 1/ in", DimLength, "malformed fraction", "malformed fraction"},
-		{"trailing word", "3 in foo", DimLength, "unknown unit", "trailing junk"},
-		{"trailing semicolon", "3 in;", DimLength, "unknown unit", "trailing junk"},
-		{"trailing junk bare", "3 x", DimLength, "unknown unit", "trailing junk"},
-		{"two numbers", "1 2 in", DimLength, "malformed number", "trailing junk"},
-		{"two points", "1.2.3 in", DimLength, "malformed number", "trailing junk"},
-		{"decimal numerator", "1.5/2 in", DimLength, "malformed number", "trailing junk"},
-		{"double sign", "--3 in", DimLength, "is not a quantity", "trailing junk"},
-		{"spaced sign", "- 3 in", DimLength, "is not a quantity", "trailing junk"},
-		{"inches without mark", `3'-6`, DimLength, "want feet-inches", "malformed feet-inches"},
-		{"inch mark without number", `3'-"`, DimLength, "want feet-inches", "malformed feet-inches"},
-		{"junk after inches", `3'-6" x`, DimLength, "want feet-inches", "malformed feet-inches"},
-		{"mm after feet", `3'-6 mm`, DimLength, "want feet-inches", "malformed feet-inches"},
-		{"feet twice", "3 ft 6 ft", DimLength, "want feet-inches", "malformed feet-inches"},
-		{"dangling dash", `3'-`, DimLength, "want feet-inches", "malformed feet-inches"},
-		{"hex", "0x10 in", DimLength, "unknown unit", "only decimal numbers"},
-	}
-	for _, tt := range tests {
+	for _, tt := range parseErrorCases {
 		t.Run(tt.name, func(t *testing.T) {
 			for _, sys := range []System{US, SI} {
 				got, err := Parse(tt.in, tt.dim, sys)

@@ -1,0 +1,7 @@
+//go:build !unix
+
+package measured
+
+// openNonBlock: the system has no O_NONBLOCK; the check before opening
+// stands alone.
+const openNonBlock = 0

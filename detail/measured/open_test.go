@@ -1,0 +1,72 @@
+//go:build unix
+
+package measured
+
+import (
+	"errors"
+	"os"
+	"path/filepath"
+	"strings"
+	"syscall"
+	"testing"
+	"time"
+)
+
+// OpenRegular refuses, without blocking, a FIFO, a directory and a
+// device; it opens a regular file and a link to one.
+func TestOpenRegular(t *testing.T) {
+	dir := t.TempDir()
+	fifo := filepath.Join(dir, "holes.csv")
+	if err := syscall.Mkfifo(fifo, 0o600); err != nil {
+		t.Skipf("mkfifo: %v", err)
+	}
+	for _, c := range []struct{ path, kind string }{
+		{fifo, "a named pipe (FIFO)"},
+		{dir, "a directory"},
+		{os.DevNull, "a device"},
+	} {
+		done := make(chan error, 1)
+		go func() {
+			f, err := OpenRegular(c.path)
+			if err == nil {
+				f.Close()
+			}
+			done <- err
+		}()
+		var err error
+		select {
+		case err = <-done:
+		case <-time.After(5 * time.Second):
+			if w, werr := os.OpenFile(fifo, os.O_WRONLY, 0); werr == nil {
+				w.Close()
+			}
+			t.Fatalf("OpenRegular(%s) blocked for 5 s", c.path)
+		}
+		var nr *NotRegularError
+		if !errors.As(err, &nr) || nr.Path != c.path || nr.Kind() != c.kind || !strings.Contains(err.Error(), "not a regular file") {
+			t.Errorf("OpenRegular(%s) = %v, want a *NotRegularError: %s", c.path, err, c.kind)
+		}
+	}
+	file := filepath.Join(dir, "holes-ok.csv")
+	if err := os.WriteFile(file, []byte("1,2,0.8\n"), 0o600); err != nil {
+		t.Fatal(err)
+	}
+	link := filepath.Join(dir, "link.csv")
+	if err := os.Symlink(file, link); err != nil {
+		t.Fatal(err)
+	}
+	for _, p := range []string{file, link} {
+		f, err := OpenRegular(p)
+		if err != nil {
+			t.Fatalf("OpenRegular(%s): %v", p, err)
+		}
+		s, err := ReadCSV(f, p, Millimetres)
+		f.Close()
+		if err != nil || len(s.Holes) != 1 {
+			t.Errorf("%s: %v", p, err)
+		}
+	}
+	if _, err := OpenRegular(filepath.Join(dir, "missing.csv")); !errors.Is(err, os.ErrNotExist) {
+		t.Errorf("missing file: %v", err)
+	}
+}
