@@ -25,6 +25,7 @@ import (
 	"golang.org/x/term"
 
 	"gaugeline/detail"
+	"gaugeline/detail/measured"
 	"gaugeline/dxfout"
 )
 
@@ -105,7 +106,7 @@ func batchInputs(arg string) ([]string, error) {
 	if ext := filepath.Ext(arg); ext == ".yaml" || ext == ".yml" {
 		return nil, usageError{fmt.Errorf("%s is a job, not a folder or a list of jobs (for one job, use 'gaugeline check')", arg)}
 	}
-	f, err := os.Open(arg)
+	f, err := measured.OpenRegular(arg) // never blocks on a FIFO swapped in after the Stat
 	if err != nil {
 		return nil, &detail.InputError{File: arg, Msg: "cannot read the list: " + errText(err)}
 	}
