@@ -230,3 +230,25 @@ func TestSetFilesCarryOneStamp(t *testing.T) {
 		}
 	}
 }
+
+// A stamped CAM file still reads as a measured file: the 999 comment that
+// carries the stamp is skipped, and the part re-verifies as accepted
+// (measured = designed).
+func TestStampedCAMReverifies(t *testing.T) {
+	job, _ := filepath.Abs(filepath.Join(testdata, "jobs", "si-double-angle.yaml"))
+	out := t.TempDir()
+	if r := gaugeline(t, ".", "sheet", job, "-o", out); r.code != 0 {
+		t.Fatalf("sheet: exit %d %s", r.code, r.stderr)
+	}
+	for _, part := range []string{"member", "plate"} {
+		cam := filepath.Join(out, "TD-21.b", "TD-21.b-"+part+".cam.dxf")
+		b, _ := os.ReadFile(cam)
+		if !strings.HasPrefix(string(b), "999\n"+"gaugeline stamp: ") {
+			t.Fatalf("%s is not stamped", cam)
+		}
+		r := gaugeline(t, ".", "reverify", job, "--measured", cam, "--part", part)
+		if r.code != 0 || !strings.Contains(strings.ToLower(r.stdout), "accept") {
+			t.Errorf("%s: exit %d, want 0 (accept)\n%s%s", part, r.code, r.stdout, r.stderr)
+		}
+	}
+}
