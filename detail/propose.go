@@ -175,9 +175,12 @@ func Propose(j *Job, opt ProposeOptions) (*Proposal, error) {
 		out.Summary = b.Text + ": " + b.Lift
 		return out, nil
 	}
+	// There are never more alternatives than arrangements: the bound
+	// keeps 1 + Alternatives from overflowing.
+	nAlt := min(max(opt.Alternatives, 0), len(p.groups))
 	var tops []*cand
 	var other *cand
-	k := 1 + max(opt.Alternatives, 0)
+	k := 1 + nAlt
 	if opt.Mode == Exhaustive {
 		var bests, others []*cand
 		bests, others = p.exhaustive()
@@ -190,7 +193,7 @@ func Propose(j *Job, opt ProposeOptions) (*Proposal, error) {
 		p.cache = map[candKey]*Report{}
 		tops = p.bestPerGroup(p.obj, 1)
 		out.Evaluated = p.evals
-		if len(tops) > 0 && opt.Alternatives > 0 {
+		if len(tops) > 0 && nAlt > 0 {
 			tops = p.bestPerGroup(p.obj, k)
 			if o := p.bestPerGroup(p.obj.other(), 1); len(o) > 0 {
 				other = o[0]
@@ -207,8 +210,8 @@ func Propose(j *Job, opt ProposeOptions) (*Proposal, error) {
 	best := tops[0]
 	out.Layout = p.layout(best)
 	out.Length = best.length()
-	if opt.Alternatives > 0 {
-		out.Alternatives = p.alternatives(tops, other, opt.Alternatives)
+	if nAlt > 0 {
+		out.Alternatives = p.alternatives(tops, other, nAlt)
 	}
 	data, err := j.WithLayout(out.Layout)
 	if err != nil {
