@@ -12,6 +12,10 @@ import (
 	"gaugeline/dxfout"
 )
 
+// maxAlternatives bounds --alternatives: a longer list is no longer read
+// (each is the best of its own arrangement).
+const maxAlternatives = 100
+
 type proposeOptions struct {
 	format       string
 	alternatives int
@@ -35,7 +39,7 @@ func newProposeCmd(o *rootOptions) *cobra.Command {
 		},
 	}
 	cmd.Flags().StringVar(&po.format, "format", "text", "output format: text, json or markdown")
-	cmd.Flags().IntVar(&po.alternatives, "alternatives", 3, "how many other layouts to list")
+	cmd.Flags().IntVar(&po.alternatives, "alternatives", 3, fmt.Sprintf("how many other layouts to list (0 to %d)", maxAlternatives))
 	cmd.Flags().BoolVar(&po.exhaustive, "exhaustive", false, "check every candidate (reference mode; slow)")
 	cmd.Flags().StringVar(&po.write, "write", "", "write the job with the chosen layout filled in to `FILE`")
 	return cmd
@@ -47,8 +51,8 @@ func runPropose(_ context.Context, o *rootOptions, po proposeOptions, path strin
 	default:
 		return usageError{fmt.Errorf("--format: unknown format %q (want text, json or markdown)", po.format)}
 	}
-	if po.alternatives < 0 {
-		return usageError{fmt.Errorf("--alternatives: want 0 or more, not %d", po.alternatives)}
+	if po.alternatives < 0 || po.alternatives > maxAlternatives {
+		return usageError{fmt.Errorf("--alternatives: want 0 to %d, not %d", maxAlternatives, po.alternatives)}
 	}
 	job, err := detail.LoadJob(path)
 	if err != nil {

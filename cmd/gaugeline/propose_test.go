@@ -130,3 +130,34 @@ func TestProposeExitCodes(t *testing.T) {
 		}
 	}
 }
+
+// TestNumericFlagsInRange: every numeric flag out of its range is bad
+// input (exit 2) with one message naming the flag and the range, never a
+// panic. --alternatives 2⁶³−1 overflowed 1 + N and panicked with a stack
+// trace.
+func TestNumericFlagsInRange(t *testing.T) {
+	job, _ := filepath.Abs(filepath.Join(testdata, "propose", "us-flat-shear.yaml"))
+	out := t.TempDir()
+	for _, c := range []struct {
+		args []string
+		want string // in the error line: the flag and its range
+	}{
+		{[]string{"propose", job, "--alternatives", "9223372036854775807"}, "--alternatives: want 0 to 100"},
+		{[]string{"propose", job, "--alternatives", "101"}, "--alternatives: want 0 to 100"},
+		{[]string{"propose", job, "--alternatives", "-1"}, "--alternatives: want 0 to 100"},
+		{[]string{"propose", job, "--alternatives", "99999999999999999999"}, "--alternatives"},
+		{[]string{"batch", filepath.Join(testdata, "batch"), "-o", out, "-j", "-1"}, "--jobs: want 1 or more"},
+		{[]string{"batch", filepath.Join(testdata, "batch"), "-o", out, "--jobs", "99999999999999999999"}, "--jobs"},
+	} {
+		r := gaugeline(t, ".", c.args...)
+		first := strings.SplitN(r.stderr, "\n", 2)[0]
+		if r.code != 2 || !strings.HasPrefix(first, "gaugeline: error: ") || !strings.Contains(first, c.want) ||
+			strings.Contains(r.stderr, "goroutine ") || strings.Contains(r.stderr, "panic") || r.stdout != "" {
+			t.Errorf("%v: exit %d, stderr %q; want 2 and one message with %q", c.args[2:], r.code, r.stderr, c.want)
+		}
+	}
+	// In range, the largest count lists what there is.
+	if r := gaugeline(t, ".", "propose", job, "--alternatives", "100"); r.code != 0 {
+		t.Errorf("--alternatives 100: exit %d\n%s", r.code, r.stderr)
+	}
+}
