@@ -383,6 +383,9 @@ func newProblem(j *Job) (*problem, error) {
 			return nil, err
 		}
 	}
+	if err := p.checkStep(diams, members); err != nil {
+		return nil, err
+	}
 	for di, d := range diams {
 		if _, err := ed.Hole(d.v, j.Bolts.Hole); err != nil {
 			return nil, j.inputErr("bolts.diameter", tabulatedMsg(err), diametersHint(ed))
@@ -408,6 +411,37 @@ func newProblem(j *Job) (*problem, error) {
 	}
 	p.diams, p.thick, p.grades = diams, thick, grades
 	return p, nil
+}
+
+// maxGridValues bounds the values of one searched range: a finer step is
+// a typo, and would list (and search) billions of lengths. 1000 is a
+// step of 1/128 in across an 8 in leg.
+const maxGridValues = 1000
+
+// checkStep refuses a step that puts more than maxGridValues values on
+// the widest range searched: 4·d of the largest bolt (pitch, end, edge,
+// gage2) or the member's width (the gage).
+func (p *problem) checkStep(diams []option[units.Length], members []*Design) error {
+	reach, what := units.Length(0), ""
+	for _, d := range diams {
+		if 4*d.v > reach {
+			reach, what = 4*d.v, "4·d of the largest bolt"
+		}
+	}
+	for _, m := range members {
+		if w := m.Conn.Member.Width; w > reach {
+			reach, what = w, "the member's width"
+		}
+	}
+	n := float64(reach / p.step)
+	if n <= maxGridValues { // false for NaN too
+		return nil
+	}
+	sys := p.job.Units
+	return p.job.inputErr("stock.step", fmt.Sprintf("is too fine: %s, %s, would hold %.3g steps, at most %d",
+		what, units.FormatJob(reach, sys), n, maxGridValues),
+		fmt.Sprintf("use a step of at least %s (a shop lays bolts out on 1/16 in or 1 mm or coarser)",
+			units.FormatJob(reach/maxGridValues, sys)))
 }
 
 // template resolves the member, the plate's steel and the demand for a
