@@ -7,7 +7,9 @@ import (
 	"math"
 	"os"
 	"path/filepath"
+	"strconv"
 	"strings"
+	"sync/atomic"
 	"testing"
 )
 
@@ -97,5 +99,127 @@ func TestProposeStepTooFine(t *testing.T) {
 				t.Fatalf("step %s: error %v, want bad input at stock.step naming the bound", c.step, err)
 			}
 		})
+	}
+}
+
+// progressLog records Progress calls and fails on calls that overlap or
+// go backwards.
+type progressLog struct {
+	t           *testing.T
+	busy        atomic.Bool
+	calls       int
+	done, total int
+}
+
+func (l *progressLog) note(done, total int) {
+	if !l.busy.CompareAndSwap(false, true) {
+		l.t.Error("Progress called from two goroutines at once")
+		return
+	}
+	defer l.busy.Store(false)
+	if l.calls > 0 && (done < l.done || total != l.total) {
+		l.t.Errorf("Progress(%d, %d) after (%d, %d): want done not decreasing and the same total", done, total, l.done, l.total)
+	}
+	l.calls++
+	l.done, l.total = done, total
+}
+
+// TestProposeMaxCandidatesExhaustive: the exhaustive search checks the
+// space against the limit before it starts (no Progress, nothing
+// checked); within the limit it returns exactly what it returns without
+// one, reporting progress up to the space.
+func TestProposeMaxCandidatesExhaustive(t *testing.T) {
+	job := loadProposeJob(t, "us-angle-brace.yaml")
+	p, err := Propose(job, ProposeOptions{}) // the space, as the search counts it
+	if err != nil {
+		t.Fatal(err)
+	}
+	log := &progressLog{t: t}
+	_, err = Propose(job, ProposeOptions{Mode: Exhaustive, MaxCandidates: 1000, Progress: log.note})
+	var le *SearchLimitError
+	if !errors.As(err, &le) || le.Mode != Exhaustive || le.Space != p.Space || le.Limit != 1000 || le.Checked != 0 {
+		t.Fatalf("error %#v, want a SearchLimitError with space %d and limit 1000", err, p.Space)
+	}
+	if !strings.Contains(le.Error(), strconv.Itoa(p.Space)) || !strings.Contains(le.Error(), "1000") {
+		t.Errorf("%q does not name the space %d and the limit", le.Error(), p.Space)
+	}
+	if log.calls != 0 {
+		t.Errorf("the search ran (%d progress calls) before it was refused", log.calls)
+	}
+
+	job = loadProposeJob(t, "us-flat-shear.yaml")
+	want := proposeJSON(t, job, ProposeOptions{Mode: Exhaustive, Alternatives: 3})
+	space, err := Propose(job, ProposeOptions{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	log = &progressLog{t: t}
+	got := proposeJSON(t, job, ProposeOptions{Mode: Exhaustive, Alternatives: 3, MaxCandidates: space.Space, Progress: log.note})
+	if !bytes.Equal(got, want) {
+		t.Errorf("with the limit at the space the proposal differs:\n%s\nwant\n%s", got, want)
+	}
+	if log.calls == 0 || log.done != space.Space || log.total != space.Space {
+		t.Errorf("%d progress calls, last (%d, %d); want the last at (%d, %d)", log.calls, log.done, log.total, space.Space, space.Space)
+	}
+}
+
+// TestProposeMaxCandidatesPruned: the pruned search cannot know its count
+// up front; it stops at the limit, exactly: a limit of the checks it
+// needs gives the proposal it gives without a limit, one less stops it.
+// The same holds for the checks that explain an infeasible job.
+func TestProposeMaxCandidatesPruned(t *testing.T) {
+	for _, name := range []string{"us-angle-brace.yaml", "infeasible-bolts.yaml"} {
+		t.Run(name, func(t *testing.T) {
+			job := loadProposeJob(t, name)
+			log := &progressLog{t: t}
+			want := proposeJSON(t, job, ProposeOptions{Alternatives: 3, Progress: log.note})
+			checks := log.done
+			if log.calls != checks || log.total != -1 || checks == 0 {
+				t.Fatalf("%d progress calls, last (%d, %d); want one per check, total -1 (unknown)", log.calls, log.done, log.total)
+			}
+			if got := proposeJSON(t, job, ProposeOptions{Alternatives: 3, MaxCandidates: checks}); !bytes.Equal(got, want) {
+				t.Errorf("with the limit at the %d checks needed the proposal differs:\n%s\nwant\n%s", checks, got, want)
+			}
+			_, err := Propose(job, ProposeOptions{Alternatives: 3, MaxCandidates: checks - 1})
+			var le *SearchLimitError
+			if !errors.As(err, &le) || le.Mode != Pruned || le.Checked != checks-1 || le.Limit != checks-1 || le.Space == 0 {
+				t.Fatalf("limit %d: error %#v, want a SearchLimitError after %d checks", checks-1, err, checks-1)
+			}
+		})
+	}
+}
+
+// TestProposeCallbackPanicReachesCaller: a panic in the exhaustive search's
+// workers (here in the caller's Progress, which they call) reaches the
+// goroutine that called Propose, where a caller can recover it; on a
+// worker it would end the process.
+func TestProposeCallbackPanicReachesCaller(t *testing.T) {
+	job := loadProposeJob(t, "us-flat-shear.yaml")
+	var got any
+	func() {
+		defer func() { got = recover() }()
+		Propose(job, ProposeOptions{Mode: Exhaustive, Progress: func(done, _ int) {
+			if done > 0 {
+				panic("progress: boom")
+			}
+		}})
+	}()
+	if got != "progress: boom" {
+		t.Errorf("recovered %v, want the callback's panic", got)
+	}
+}
+
+func TestSaturatingCount(t *testing.T) {
+	const m = math.MaxInt
+	for _, c := range []struct{ a, b, sum, prod int }{
+		{0, 0, 0, 0}, {3, 4, 7, 12}, {m, 0, m, 0}, {m, 1, m, m}, {m - 1, 1, m, m - 1},
+		{1 << 32, 1 << 31, 1<<32 + 1<<31, m}, {m / 2, 3, m/2 + 3, m}, {m, m, m, m},
+	} {
+		if s := addSat(c.a, c.b); s != c.sum {
+			t.Errorf("addSat(%d, %d) = %d, want %d", c.a, c.b, s, c.sum)
+		}
+		if p := mulSat(c.a, c.b); p != c.prod {
+			t.Errorf("mulSat(%d, %d) = %d, want %d", c.a, c.b, p, c.prod)
+		}
 	}
 }
