@@ -18,11 +18,12 @@ import (
 const maxAlternatives = 100
 
 // defaultMaxCandidates is the default of --max-candidates. BenchmarkPropose-
-// Rate (detail) measured 58,600 candidates/s for the exhaustive search on
-// 2 cores (AMD EPYC) and 23,500 checks/s for the pruned search, which
-// keeps about 2.4 KB per check: at this bound the exhaustive search takes
-// about 17 s there, the pruned one at most about 45 s and 2.4 GB. Every
-// job under testdata/propose has a space of at most 509,562.
+// Rate (detail; 3 runs on a shared 2-core AMD EPYC) measured 42,000 to
+// 76,000 candidates/s for the exhaustive search and 6,000 to 23,000
+// checks/s for the pruned one, which keeps about 2.4 KB per check: at
+// this bound the exhaustive search takes 13 to 24 s there, the pruned one
+// (which gets this far only on an absurd stock) at most about 3 min and
+// 2.4 GB. Every job under testdata/propose has a space of at most 509,562.
 const defaultMaxCandidates = 1_000_000
 
 type proposeOptions struct {
