@@ -195,7 +195,9 @@ func (p *Proposal) Found() bool { return p.Report != nil }
 
 // Propose searches the job's stock for the best passing layout (SPEC §6).
 // Bad input (no diameters, an unknown grade, explicit holes) is an
-// *InputError; a job where nothing passes is a Proposal with Blockers.
+// *InputError, a search larger than opt.MaxCandidates a
+// *SearchLimitError; a job where nothing passes is a Proposal with
+// Blockers.
 func Propose(j *Job, opt ProposeOptions) (*Proposal, error) {
 	p, err := newProblem(j)
 	if err != nil {
@@ -205,7 +207,10 @@ func Propose(j *Job, opt ProposeOptions) (*Proposal, error) {
 	if opt.MaxCandidates > 0 && opt.Mode == Exhaustive && out.Space > opt.MaxCandidates {
 		return nil, &SearchLimitError{File: j.File, Mode: Exhaustive, Space: out.Space, Limit: opt.MaxCandidates}
 	}
-	p.limit = opt.MaxCandidates
+	if opt.Mode == Pruned {
+		// (the exhaustive search's diagnosis checks fewer than the space)
+		p.limit = opt.MaxCandidates
+	}
 	stopped := func() error {
 		if !p.stopped {
 			return nil
