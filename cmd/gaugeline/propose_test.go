@@ -140,6 +140,8 @@ func TestProposeExitCodes(t *testing.T) {
 func TestNumericFlagsInRange(t *testing.T) {
 	job, _ := filepath.Abs(filepath.Join(testdata, "propose", "us-flat-shear.yaml"))
 	out := t.TempDir()
+	qa, _ := filepath.Abs(filepath.Join(testdata, "measured", "hb-7-qa.yaml"))
+	csv, _ := filepath.Abs(filepath.Join(testdata, "measured", "hb-7-qa-nominal.csv"))
 	for _, c := range []struct {
 		args []string
 		want string // in the error line: the flag and its range
@@ -152,13 +154,17 @@ func TestNumericFlagsInRange(t *testing.T) {
 		{[]string{"propose", job, "--max-candidates", "-5", "--exhaustive"}, "--max-candidates: want 1 or more"},
 		{[]string{"propose", job, "--max-candidates", "99999999999999999999"}, "--max-candidates"},
 		{[]string{"batch", filepath.Join(testdata, "batch"), "-o", out, "-j", "-1"}, "--jobs: want 1 or more"},
+		// reverify's tolerances are lengths: above 0, at most 100 mm
+		{[]string{"reverify", qa, "--measured", csv, "--position", "0 in"}, "--position: want a length above 0 and at most"},
+		{[]string{"reverify", qa, "--measured", csv, "--position", "5 in"}, "--position: want a length above 0 and at most"},
+		{[]string{"reverify", qa, "--measured", csv, "--diameter", "-1/32 in"}, "--diameter: want a length above 0 and at most"},
 		{[]string{"batch", filepath.Join(testdata, "batch"), "-o", out, "--jobs", "99999999999999999999"}, "--jobs"},
 	} {
 		r := gaugeline(t, ".", c.args...)
 		first := strings.SplitN(r.stderr, "\n", 2)[0]
 		if r.code != 2 || !strings.HasPrefix(first, "gaugeline: error: ") || !strings.Contains(first, c.want) ||
 			strings.Contains(r.stderr, "goroutine ") || strings.Contains(r.stderr, "panic") || r.stdout != "" {
-			t.Errorf("%v: exit %d, stderr %q; want 2 and one message with %q", c.args[2:], r.code, r.stderr, c.want)
+			t.Errorf("%v: exit %d, stderr %q; want 2 and one message with %q", c.args, r.code, r.stderr, c.want)
 		}
 	}
 	// In range, the largest count lists what there is.
