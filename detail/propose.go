@@ -90,6 +90,38 @@ type ProposeOptions struct {
 	Mode SearchMode
 	// Alternatives is how many layouts besides the chosen one to report.
 	Alternatives int
+	// MaxCandidates bounds the work; 0: no bound. The exhaustive search
+	// is refused before it starts when the space holds more candidates;
+	// the pruned one, whose count is not known ahead, stops when it has
+	// checked that many. Either way Propose returns a *SearchLimitError.
+	// A count, not a time, so that the outcome never depends on the
+	// machine.
+	MaxCandidates int
+	// Progress, when set, is told how far the search is: done candidates
+	// of total (the space, for the exhaustive search), or done checked of
+	// an unknown total, -1 (the pruned search). The calls come one at a
+	// time, with done never decreasing, from any goroutine.
+	Progress func(done, total int)
+}
+
+// SearchLimitError is a search refused, or stopped, at
+// ProposeOptions.MaxCandidates. It is bad input: the stock is what makes
+// the search that large.
+type SearchLimitError struct {
+	File  string
+	Mode  SearchMode
+	Space int // candidates in the space (math.MaxInt: more than an int counts)
+	// Checked is what the pruned search had checked when it stopped; 0
+	// for the exhaustive search, refused before it starts.
+	Checked int
+	Limit   int
+}
+
+func (e *SearchLimitError) Error() string {
+	if e.Mode == Exhaustive {
+		return fmt.Sprintf("%s: the exhaustive search has %d candidates, more than the limit of %d", e.File, e.Space, e.Limit)
+	}
+	return fmt.Sprintf("%s: the pruned search stopped at the limit of %d candidates checked, unfinished (the space has %d)", e.File, e.Limit, e.Space)
 }
 
 // DefaultMaxPerLine is the most bolts per gage line propose tries when
@@ -163,24 +195,42 @@ func (p *Proposal) Found() bool { return p.Report != nil }
 
 // Propose searches the job's stock for the best passing layout (SPEC §6).
 // Bad input (no diameters, an unknown grade, explicit holes) is an
-// *InputError; a job where nothing passes is a Proposal with Blockers.
+// *InputError, a search larger than opt.MaxCandidates a
+// *SearchLimitError; a job where nothing passes is a Proposal with
+// Blockers.
 func Propose(j *Job, opt ProposeOptions) (*Proposal, error) {
 	p, err := newProblem(j)
 	if err != nil {
 		return nil, err
 	}
 	out := &Proposal{Job: j, Space: p.space()}
+	if opt.MaxCandidates > 0 && opt.Mode == Exhaustive && out.Space > opt.MaxCandidates {
+		return nil, &SearchLimitError{File: j.File, Mode: Exhaustive, Space: out.Space, Limit: opt.MaxCandidates}
+	}
+	if opt.Mode == Pruned {
+		// (the exhaustive search's diagnosis checks fewer than the space)
+		p.limit = opt.MaxCandidates
+	}
+	stopped := func() error {
+		if !p.stopped {
+			return nil
+		}
+		return &SearchLimitError{File: j.File, Mode: Pruned, Space: out.Space, Checked: p.checks, Limit: p.limit}
+	}
 	if b := p.yieldBlocker(); b != nil {
 		out.Blockers = []Blocker{*b}
 		out.Summary = b.Text + ": " + b.Lift
 		return out, nil
 	}
+	// There are never more alternatives than arrangements: the bound
+	// keeps 1 + Alternatives from overflowing.
+	nAlt := min(max(opt.Alternatives, 0), len(p.groups))
 	var tops []*cand
 	var other *cand
-	k := 1 + max(opt.Alternatives, 0)
+	k := 1 + nAlt
 	if opt.Mode == Exhaustive {
 		var bests, others []*cand
-		bests, others = p.exhaustive()
+		bests, others = p.exhaustive(out.Space, opt.Progress)
 		out.Evaluated = p.evals
 		tops = firstN(bests, k)
 		if len(others) > 0 {
@@ -188,27 +238,34 @@ func Propose(j *Job, opt ProposeOptions) (*Proposal, error) {
 		}
 	} else {
 		p.cache = map[candKey]*Report{}
+		p.progress = opt.Progress
 		tops = p.bestPerGroup(p.obj, 1)
 		out.Evaluated = p.evals
-		if len(tops) > 0 && opt.Alternatives > 0 {
+		if len(tops) > 0 && nAlt > 0 {
 			tops = p.bestPerGroup(p.obj, k)
 			if o := p.bestPerGroup(p.obj.other(), 1); len(o) > 0 {
 				other = o[0]
 			}
 			out.AltEvaluated = p.evals - out.Evaluated
 		}
+		if err := stopped(); err != nil {
+			return nil, err
+		}
 	}
 	if len(tops) == 0 {
 		before := p.evals
 		p.diagnose(out)
+		if err := stopped(); err != nil {
+			return nil, err
+		}
 		out.DiagEvaluated = p.evals - before
 		return out, nil
 	}
 	best := tops[0]
 	out.Layout = p.layout(best)
 	out.Length = best.length()
-	if opt.Alternatives > 0 {
-		out.Alternatives = p.alternatives(tops, other, opt.Alternatives)
+	if nAlt > 0 {
+		out.Alternatives = p.alternatives(tops, other, nAlt)
 	}
 	data, err := j.WithLayout(out.Layout)
 	if err != nil {
@@ -265,10 +322,17 @@ type problem struct {
 	grades []string
 	thick  []option[units.Length]
 
-	snapped map[int]units.Length // grid index → value
+	snapped map[int]units.Length      // grid index → value
+	grids   map[[2]int][]units.Length // grid index range → values, shared by the groups
 
 	evals int
 	cache map[candKey]*Report // pruned search only; nil: no cache
+
+	// checks counts the candidates eval checked (not from the cache);
+	// at limit (0: none) eval checks no more and sets stopped.
+	checks, limit int
+	stopped       bool
+	progress      func(done, total int) // pruned search only
 }
 
 // group is one arrangement: diameter, grade, plate thickness, lines and
@@ -311,7 +375,8 @@ func newProblem(j *Job) (*problem, error) {
 		return nil, j.inputErr("holes", "propose lays out the bolts itself; explicit holes leave nothing to choose",
 			"remove the holes list, or run gaugeline check")
 	}
-	p := &problem{job: j, ed: ed, step: j.Stock.Step, obj: j.Stock.Objective, snapped: map[int]units.Length{}}
+	p := &problem{job: j, ed: ed, step: j.Stock.Step, obj: j.Stock.Objective, snapped: map[int]units.Length{},
+		grids: map[[2]int][]units.Length{}}
 
 	var diams []option[units.Length]
 	switch {
@@ -380,6 +445,9 @@ func newProblem(j *Job) (*problem, error) {
 			return nil, err
 		}
 	}
+	if err := p.checkStep(diams, members); err != nil {
+		return nil, err
+	}
 	for di, d := range diams {
 		if _, err := ed.Hole(d.v, j.Bolts.Hole); err != nil {
 			return nil, j.inputErr("bolts.diameter", tabulatedMsg(err), diametersHint(ed))
@@ -405,6 +473,37 @@ func newProblem(j *Job) (*problem, error) {
 	}
 	p.diams, p.thick, p.grades = diams, thick, grades
 	return p, nil
+}
+
+// maxGridValues bounds the values of one searched range: a finer step is
+// a typo, and would list (and search) billions of lengths. 1000 is a
+// step of 1/128 in across an 8 in leg.
+const maxGridValues = 1000
+
+// checkStep refuses a step that puts more than maxGridValues values on
+// the widest range searched: 4·d of the largest bolt (pitch, end, edge,
+// gage2) or the member's width (the gage).
+func (p *problem) checkStep(diams []option[units.Length], members []*Design) error {
+	reach, what := units.Length(0), ""
+	for _, d := range diams {
+		if 4*d.v > reach {
+			reach, what = 4*d.v, "4·d of the largest bolt"
+		}
+	}
+	for _, m := range members {
+		if w := m.Conn.Member.Width; w > reach {
+			reach, what = w, "the member's width"
+		}
+	}
+	n := float64(reach / p.step)
+	if n <= maxGridValues { // false for NaN too
+		return nil
+	}
+	sys := p.job.Units
+	return p.job.inputErr("stock.step", fmt.Sprintf("is too fine: %s, %s, would hold %.3g steps, at most %d",
+		what, units.FormatJob(reach, sys), n, maxGridValues),
+		fmt.Sprintf("use a step of at least %s (a shop lays bolts out on 1/16 in or 1 mm or coarser)",
+			units.FormatJob(reach/maxGridValues, sys)))
 }
 
 // template resolves the member, the plate's steel and the demand for a
@@ -456,10 +555,14 @@ func (t *Design) withBolt(ed *rules.Edition, d units.Length, grade string) (*Des
 func (p *problem) gridUp(l units.Length) int   { return int(math.Ceil(float64(l/p.step) - 1e-9)) }
 func (p *problem) gridDown(l units.Length) int { return int(math.Floor(float64(l/p.step) + 1e-9)) }
 
-// grid lists k·step for k from lo to max(lo, hi).
+// grid lists k·step for k from lo to max(lo, hi), at least 1. The list
+// is shared: never change it.
 func (p *problem) grid(lo, hi int) []units.Length {
 	lo = max(lo, 1)
 	hi = max(hi, lo)
+	if out, ok := p.grids[[2]int{lo, hi}]; ok {
+		return out
+	}
 	out := make([]units.Length, 0, hi-lo+1)
 	for k := lo; k <= hi; k++ {
 		v, ok := p.snapped[k]
@@ -469,7 +572,14 @@ func (p *problem) grid(lo, hi int) []units.Length {
 		}
 		out = append(out, v)
 	}
+	p.grids[[2]int{lo, hi}] = out
 	return out
+}
+
+// gridLen is len(p.grid(lo, hi)), without listing it.
+func gridLen(lo, hi int) int {
+	lo = max(lo, 1)
+	return max(hi, lo) - lo + 1
 }
 
 // snap replaces a grid value by what its job-file spelling reads back as
@@ -574,9 +684,6 @@ func (p *problem) ranges(g *group) {
 		g.stag = j.Bolts.Stagger
 	}
 	g.segments = p.segments(g)
-	for i := range g.gage2 {
-		p.gagesFor(g, i) // filled now: the exhaustive workers only read
-	}
 }
 
 // gagesFor lists the first gage line's positions for gage2 index i. On
@@ -584,35 +691,65 @@ func (p *problem) ranges(g *group) {
 // rules (clear of the fillet, wrench clearance, toe within 12t) to the
 // largest that keeps the toe distance. On flats: the one position that
 // centres the group on the bar (J1.7), if the edge distances allow it.
+// The lists are kept only for the exhaustive search (fillGages): the
+// gage2 × gage lists of a fine step would take more memory than the
+// pruned search ever looks at.
 func (p *problem) gagesFor(g *group, i int) []units.Length {
 	if gs, ok := g.gages[i]; ok {
 		return gs
 	}
-	var gs []units.Length
-	switch {
-	case p.job.Given("bolts.gage"):
-		gs = []units.Length{p.job.Bolts.Gage}
-	default:
-		m := &g.tmpl.Conn.Member
-		span := units.Length(g.lines-1) * g.gage2[i]
-		side := p.minEdgeTo(g, g.shape, true)
-		maxEdge := p.ed.MaxEdge(m.T)
-		if m.Shape == engine.Flat {
-			// J1.7: the group centred on the bar, where the edge rules
-			// let it be.
-			lo := max(side, g.dy/2, m.Width-span-maxEdge)
-			hi := min(maxEdge, m.Width-span-side)
-			if g1 := p.snap((m.Width - span) / 2); g1 >= lo-eps && g1 <= hi+eps {
-				gs = []units.Length{g1}
-			}
-			break
-		}
-		lo := max(g.tmpl.Info.K+g.dy/2, m.T+wrenchClearance(g.d, p.ed.System), g.dy/2, m.Width-span-maxEdge)
-		hi := m.Width - span - side
-		gs = p.grid(p.gridUp(lo), p.gridDown(hi))
+	gs, lo, hi, onGrid := p.gageSpan(g, i)
+	if onGrid {
+		return p.grid(lo, hi)
 	}
-	g.gages[i] = gs
 	return gs
+}
+
+// gageCount is len(p.gagesFor(g, i)), without listing the grid.
+func (p *problem) gageCount(g *group, i int) int {
+	if gs, ok := g.gages[i]; ok {
+		return len(gs)
+	}
+	gs, lo, hi, onGrid := p.gageSpan(g, i)
+	if onGrid {
+		return gridLen(lo, hi)
+	}
+	return len(gs)
+}
+
+// gageSpan is what gagesFor lists: the grid from index lo to hi when
+// onGrid, else gs.
+func (p *problem) gageSpan(g *group, i int) (gs []units.Length, lo, hi int, onGrid bool) {
+	if p.job.Given("bolts.gage") {
+		return []units.Length{p.job.Bolts.Gage}, 0, 0, false
+	}
+	m := &g.tmpl.Conn.Member
+	span := units.Length(g.lines-1) * g.gage2[i]
+	side := p.minEdgeTo(g, g.shape, true)
+	maxEdge := p.ed.MaxEdge(m.T)
+	if m.Shape == engine.Flat {
+		// J1.7: the group centred on the bar, where the edge rules let
+		// it be.
+		lo := max(side, g.dy/2, m.Width-span-maxEdge)
+		hi := min(maxEdge, m.Width-span-side)
+		if g1 := p.snap((m.Width - span) / 2); g1 >= lo-eps && g1 <= hi+eps {
+			return []units.Length{g1}, 0, 0, false
+		}
+		return nil, 0, 0, false
+	}
+	gLo := max(g.tmpl.Info.K+g.dy/2, m.T+wrenchClearance(g.d, p.ed.System), g.dy/2, m.Width-span-maxEdge)
+	gHi := m.Width - span - side
+	return nil, p.gridUp(gLo), p.gridDown(gHi), true
+}
+
+// fillGages lists every group's gages ahead of the exhaustive search,
+// whose workers only read them.
+func (p *problem) fillGages() {
+	for _, g := range p.groups {
+		for i := range g.gage2 {
+			g.gages[i] = p.gagesFor(g, i)
+		}
+	}
 }
 
 // segments splits the pitch range into runs where feasibility is monotone
@@ -711,16 +848,33 @@ func forceText(f units.Force, sys units.System) string {
 	return fmt.Sprintf("%.1f %s", sys.ToJob(float64(f), units.DimForce), sys.Label(units.DimForce))
 }
 
-// space counts the candidates in the space.
+// space counts the candidates in the space, math.MaxInt when they are
+// more than an int counts.
 func (p *problem) space() int {
 	n := 0
 	for _, g := range p.groups {
-		per := len(g.pitch) * len(g.end) * len(g.edge)
+		per := mulSat(mulSat(len(g.pitch), len(g.end)), len(g.edge))
 		for i := range g.gage2 {
-			n += per * len(p.gagesFor(g, i))
+			n = addSat(n, mulSat(per, p.gageCount(g, i)))
 		}
 	}
 	return n
+}
+
+// addSat and mulSat add and multiply counts (≥ 0), math.MaxInt when the
+// result is larger.
+func addSat(a, b int) int {
+	if a > math.MaxInt-b {
+		return math.MaxInt
+	}
+	return a + b
+}
+
+func mulSat(a, b int) int {
+	if a != 0 && b > math.MaxInt/a {
+		return math.MaxInt
+	}
+	return a * b
 }
 
 // ---------------------------------------------------------------------
@@ -825,6 +979,14 @@ func (p *problem) eval(c *cand) bool {
 			return r != nil
 		}
 	}
+	if p.limit > 0 && p.checks >= p.limit {
+		p.stopped = true
+		return false
+	}
+	p.checks++
+	if p.progress != nil {
+		p.progress(p.checks, -1)
+	}
 	ok := p.check(c)
 	if ok {
 		p.evals++
@@ -909,21 +1071,54 @@ func tieBreak(a, b *cand) int {
 
 // exhaustive checks every candidate and returns the best of each
 // arrangement, best first, under the job's objective, and the best of
-// each group under the other one. Groups are shared out among the cores.
-func (p *problem) exhaustive() (bests, others []*cand) {
+// each group under the other one. Groups are shared out among the cores;
+// progress (nil: none) hears of every candidate of the space. A panic on
+// a worker is raised again on the caller's goroutine, where it can be
+// recovered.
+func (p *problem) exhaustive(space int, progress func(done, total int)) (bests, others []*cand) {
+	p.fillGages()
 	type result struct {
 		best  *cand
 		evals int
 	}
 	res := make([]result, len(p.groups))
+	var mu sync.Mutex // serialises progress, guards done and failure
+	done := 0
+	var failure any
+	failed := false
+	tick := func(n int) {
+		if progress == nil {
+			return
+		}
+		mu.Lock()
+		defer mu.Unlock()
+		done += n
+		progress(done, space)
+	}
 	next := make(chan int)
 	var wg sync.WaitGroup
 	for range max(1, runtime.GOMAXPROCS(0)) {
 		wg.Add(1)
 		go func() {
 			defer wg.Done()
-			for gi := range next {
-				res[gi].best, res[gi].evals = p.exhaustGroup(p.groups[gi])
+			for gi := range next { // after a failure: drain, check nothing
+				func() {
+					defer func() {
+						if v := recover(); v != nil {
+							mu.Lock()
+							if !failed {
+								failure, failed = v, true
+							}
+							mu.Unlock()
+						}
+					}()
+					mu.Lock()
+					stop := failed
+					mu.Unlock()
+					if !stop {
+						res[gi].best, res[gi].evals = p.exhaustGroup(p.groups[gi], tick)
+					}
+				}()
 			}
 		}()
 	}
@@ -932,6 +1127,9 @@ func (p *problem) exhaustive() (bests, others []*cand) {
 	}
 	close(next)
 	wg.Wait()
+	if failed {
+		panic(failure)
+	}
 	for _, r := range res {
 		p.evals += r.evals
 		if r.best != nil {
@@ -944,14 +1142,23 @@ func (p *problem) exhaustive() (bests, others []*cand) {
 	return onePerArrangement(bests), others
 }
 
+// tickEvery is how many candidates an exhaustive worker checks between
+// progress reports.
+const tickEvery = 256
+
 // exhaustGroup checks every candidate of one group and returns the best
-// and the number checked.
-func (p *problem) exhaustGroup(g *group) (best *cand, evals int) {
+// and the number checked; tick hears how many were gone through.
+func (p *problem) exhaustGroup(g *group, tick func(n int)) (best *cand, evals int) {
+	seen := 0
 	for g2i := range g.gage2 {
 		for _, g1 := range g.gages[g2i] {
 			for i := range g.pitch {
 				for j := range g.end {
 					for k := range g.edge {
+						if seen++; seen == tickEvery {
+							tick(seen)
+							seen = 0
+						}
 						c := p.newCand(g, g2i, g1, i, j, k)
 						if !p.check(c) {
 							continue
@@ -968,6 +1175,9 @@ func (p *problem) exhaustGroup(g *group) (best *cand, evals int) {
 				}
 			}
 		}
+	}
+	if seen > 0 {
+		tick(seen)
 	}
 	return best, evals
 }
@@ -1012,6 +1222,9 @@ func (p *problem) bestPerGroup(obj Objective, k int) []*cand {
 	})
 	var list []*cand
 	for _, g := range order {
+		if p.stopped {
+			break
+		}
 		if !g.viable {
 			continue
 		}
@@ -1116,6 +1329,9 @@ func (s *searcher) group(g *group) {
 	angle := g.tmpl.Conn.Member.Shape != engine.Flat
 	for g2i := range g.gage2 {
 		for _, g1 := range s.p.gagesFor(g, g2i) {
+			if s.p.stopped {
+				return
+			}
 			tried, gageOK := false, false
 			for _, seg := range g.segments {
 				t, ok := s.sub(g, g2i, g1, seg[0], seg[1])
@@ -1389,6 +1605,9 @@ func (p *problem) diagnose(out *Proposal) {
 		}
 		for g2i := range g.gage2 {
 			for _, g1 := range p.gagesFor(g, g2i) {
+				if p.stopped {
+					return
+				}
 				for _, seg := range g.segments {
 					c := p.newCand(g, g2i, g1, seg[1], len(g.end)-1, len(g.edge)-1)
 					if p.eval(c) {

@@ -36,3 +36,39 @@ func BenchmarkProposeFast(b *testing.B) { benchPropose(b, Pruned) }
 
 // BenchmarkProposeExhaustive checks every candidate of the same jobs.
 func BenchmarkProposeExhaustive(b *testing.B) { benchPropose(b, Exhaustive) }
+
+// BenchmarkProposeRate measures how many candidates a second each search
+// gets through: the exhaustive search's candidates of the space (on every
+// core) and the pruned search's checks (on one), over the same jobs. The
+// default of `propose --max-candidates` rests on it.
+func BenchmarkProposeRate(b *testing.B) {
+	for _, mode := range []SearchMode{Exhaustive, Pruned} {
+		name := map[SearchMode]string{Exhaustive: "exhaustive", Pruned: "pruned"}[mode]
+		b.Run(name, func(b *testing.B) {
+			var jobs []*Job
+			for _, f := range benchProposeJobs {
+				job, err := LoadJob(filepath.Join("..", "testdata", "propose", f))
+				if err != nil {
+					b.Fatal(err)
+				}
+				jobs = append(jobs, job)
+			}
+			n := 0
+			for b.Loop() {
+				for _, job := range jobs {
+					checks := 0
+					p, err := Propose(job, ProposeOptions{Mode: mode, Alternatives: 3, Progress: func(done, _ int) { checks = done }})
+					if err != nil {
+						b.Fatal(err)
+					}
+					if mode == Exhaustive {
+						n += p.Space
+					} else {
+						n += checks
+					}
+				}
+			}
+			b.ReportMetric(float64(n)/b.Elapsed().Seconds(), "candidates/s")
+		})
+	}
+}

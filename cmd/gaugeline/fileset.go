@@ -11,7 +11,6 @@ import (
 	"io/fs"
 	"os"
 	"path/filepath"
-	"runtime/debug"
 	"slices"
 	"strings"
 
@@ -53,34 +52,8 @@ type fileSet struct {
 	files []dxfout.File // names inside the set's folder
 }
 
-// toolVersion names this build: the module version, and the VCS revision
-// when the build recorded one.
-func toolVersion() string {
-	v := "gaugeline (devel)"
-	bi, ok := debug.ReadBuildInfo()
-	if !ok {
-		return v
-	}
-	if m := bi.Main.Version; m != "" && m != "(devel)" {
-		v = "gaugeline " + m
-	}
-	rev, dirty := "", false
-	for _, s := range bi.Settings {
-		switch s.Key {
-		case "vcs.revision":
-			rev = s.Value
-		case "vcs.modified":
-			dirty = s.Value == "true"
-		}
-	}
-	if rev != "" {
-		v += " rev " + rev[:min(len(rev), 12)]
-		if dirty {
-			v += "+modified"
-		}
-	}
-	return v
-}
+// toolVersion names this build in a stamp: "gaugeline " and version().
+func toolVersion() string { return "gaugeline " + version() }
 
 // stampFor is the stamp of a set made by mode ("check", "propose") from
 // the job's file.

@@ -8,6 +8,8 @@ import (
 	"fmt"
 	"io"
 	"os"
+	"runtime/debug"
+	"strconv"
 	"strings"
 
 	"github.com/spf13/cobra"
@@ -21,6 +23,8 @@ const (
 	exitFail   = 1 // a limit state or detailing rule fails; reverify: reject
 	exitInput  = 2 // bad input or usage
 	exitReview = 3 // reverify: out of tolerance but still passing
+	// exitInternal: gaugeline itself failed (a panic), whatever the input.
+	exitInternal = 4
 	// exitInterrupted: a batch stopped by SIGINT or SIGTERM; the jobs it
 	// started are whole, the others not run (summary.md says which).
 	exitInterrupted = 5
@@ -47,11 +51,71 @@ func main() {
 
 func run(ctx context.Context, args []string, stdout, stderr io.Writer) int {
 	o := &rootOptions{stdout: stdout, stderr: stderr}
-	root := newRootCmd(o)
+	return execute(ctx, newRootCmd(o), args, stdout, stderr)
+}
+
+// execute runs the root command and maps its outcome to an exit code. A
+// panic is gaugeline's own failure, not the input's: it is reported as an
+// internal error with what to send, without the stack trace, and exits
+// with its own code.
+func execute(ctx context.Context, root *cobra.Command, args []string, stdout, stderr io.Writer) (code int) {
+	defer func() {
+		if v := recover(); v != nil {
+			fmt.Fprintf(stderr, "gaugeline: internal error: %v\n", v)
+			fmt.Fprintf(stderr, "gaugeline: hint: this is a fault in gaugeline, not in the input; please report it with the command line (%s), "+
+				"the job file and any other file it reads, and gaugeline version %s\n", commandLine(args), version())
+			code = exitInternal
+		}
+	}()
 	root.SetArgs(args)
 	root.SetOut(stdout)
 	root.SetErr(stderr)
 	return exitCode(root.ExecuteContext(ctx), stderr)
+}
+
+// commandLine writes the arguments as a shell would read them back.
+func commandLine(args []string) string {
+	q := []string{"gaugeline"}
+	for _, a := range args {
+		if a == "" || strings.ContainsAny(a, " \t\n\"'\\$`*?[]{}()<>|&;#~") {
+			a = strconv.Quote(a)
+		}
+		q = append(q, a)
+	}
+	return strings.Join(q, " ")
+}
+
+// version is the build's version, commit and Go version, from the build
+// information the Go tool embeds: "(devel) commit 1a2b… (modified), go1.26.0".
+func version() string {
+	bi, ok := debug.ReadBuildInfo()
+	if !ok {
+		return "unknown (no build information)"
+	}
+	return versionOf(bi)
+}
+
+func versionOf(bi *debug.BuildInfo) string {
+	v := bi.Main.Version
+	if v == "" {
+		v = "(devel)"
+	}
+	var rev, modified string
+	for _, s := range bi.Settings {
+		switch s.Key {
+		case "vcs.revision":
+			rev = s.Value
+		case "vcs.modified":
+			modified = s.Value
+		}
+	}
+	if rev != "" {
+		v += " commit " + rev
+		if modified == "true" {
+			v += " (modified)"
+		}
+	}
+	return v + ", " + bi.GoVersion
 }
 
 func newRootCmd(o *rootOptions) *cobra.Command {
@@ -65,6 +129,7 @@ func newRootCmd(o *rootOptions) *cobra.Command {
 			"fabricated part from its measured holes (reverify) and runs whole job lists (batch).\n" +
 			"Try 'gaugeline demo' for the whole loop on an invented example.\n\n" +
 			detail.Caution,
+		Version:       version(),
 		SilenceErrors: true,
 		SilenceUsage:  true,
 	}

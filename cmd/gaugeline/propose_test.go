@@ -2,8 +2,10 @@ package main
 
 import (
 	"encoding/json"
+	"fmt"
 	"os"
 	"path/filepath"
+	"strconv"
 	"strings"
 	"testing"
 )
@@ -127,6 +129,94 @@ func TestProposeExitCodes(t *testing.T) {
 	for _, args := range [][]string{{"propose"}, {"propose", bad, "--format", "xml"}, {"propose", bad, "--alternatives", "-1"}} {
 		if r := gaugeline(t, dir, args...); r.code != 2 {
 			t.Errorf("%v: exit %d, want 2", args, r.code)
+		}
+	}
+}
+
+// TestNumericFlagsInRange: every numeric flag out of its range is bad
+// input (exit 2) with one message naming the flag and the range, never a
+// panic. --alternatives 2⁶³−1 overflowed 1 + N and panicked with a stack
+// trace.
+func TestNumericFlagsInRange(t *testing.T) {
+	job, _ := filepath.Abs(filepath.Join(testdata, "propose", "us-flat-shear.yaml"))
+	out := t.TempDir()
+	qa, _ := filepath.Abs(filepath.Join(testdata, "measured", "hb-7-qa.yaml"))
+	csv, _ := filepath.Abs(filepath.Join(testdata, "measured", "hb-7-qa-nominal.csv"))
+	for _, c := range []struct {
+		args []string
+		want string // in the error line: the flag and its range
+	}{
+		{[]string{"propose", job, "--alternatives", "9223372036854775807"}, "--alternatives: want 0 to 100"},
+		{[]string{"propose", job, "--alternatives", "101"}, "--alternatives: want 0 to 100"},
+		{[]string{"propose", job, "--alternatives", "-1"}, "--alternatives: want 0 to 100"},
+		{[]string{"propose", job, "--alternatives", "99999999999999999999"}, "--alternatives"},
+		{[]string{"propose", job, "--max-candidates", "0"}, "--max-candidates: want 1 or more"},
+		{[]string{"propose", job, "--max-candidates", "-5", "--exhaustive"}, "--max-candidates: want 1 or more"},
+		{[]string{"propose", job, "--max-candidates", "99999999999999999999"}, "--max-candidates"},
+		{[]string{"batch", filepath.Join(testdata, "batch"), "-o", out, "-j", "-1"}, "--jobs: want 1 or more"},
+		// reverify's tolerances are lengths: above 0, at most 100 mm
+		{[]string{"reverify", qa, "--measured", csv, "--position", "0 in"}, "--position: want a length above 0 and at most"},
+		{[]string{"reverify", qa, "--measured", csv, "--position", "5 in"}, "--position: want a length above 0 and at most"},
+		{[]string{"reverify", qa, "--measured", csv, "--diameter", "-1/32 in"}, "--diameter: want a length above 0 and at most"},
+		{[]string{"batch", filepath.Join(testdata, "batch"), "-o", out, "--jobs", "99999999999999999999"}, "--jobs"},
+	} {
+		r := gaugeline(t, ".", c.args...)
+		first := strings.SplitN(r.stderr, "\n", 2)[0]
+		if r.code != 2 || !strings.HasPrefix(first, "gaugeline: error: ") || !strings.Contains(first, c.want) ||
+			strings.Contains(r.stderr, "goroutine ") || strings.Contains(r.stderr, "panic") || r.stdout != "" {
+			t.Errorf("%v: exit %d, stderr %q; want 2 and one message with %q", c.args, r.code, r.stderr, c.want)
+		}
+	}
+	// In range, the largest count lists what there is.
+	if r := gaugeline(t, ".", "propose", job, "--alternatives", "100"); r.code != 0 {
+		t.Errorf("--alternatives 100: exit %d\n%s", r.code, r.stderr)
+	}
+}
+
+// TestProposeMaxCandidates: a space larger than --max-candidates is bad
+// input before the exhaustive search starts (exit 2, the space, the limit
+// and what to do; nothing written); the pruned search stops at the limit
+// the same way; within the limit the output is what it is without one.
+func TestProposeMaxCandidates(t *testing.T) {
+	dir := t.TempDir()
+	brace, _ := filepath.Abs(filepath.Join(testdata, "propose", "us-angle-brace.yaml"))
+	space := proposeDoc(t, gaugeline(t, dir, "propose", brace, "--format", "json")).Search.Space // as the search counts it
+	for _, c := range []struct {
+		args []string
+		want []string
+	}{
+		{[]string{"--exhaustive", "--max-candidates", "1000"},
+			[]string{fmt.Sprintf("us-angle-brace.yaml:20: stock: the exhaustive search would check all %d candidates", space), "more than --max-candidates 1000"}},
+		{[]string{"--max-candidates", "10"},
+			[]string{"us-angle-brace.yaml:20: stock: the search reached --max-candidates (10 candidates checked) before finishing", fmt.Sprintf("the space has %d", space)}},
+	} {
+		r := gaugeline(t, dir, append([]string{"propose", brace, "--write", "out.yaml"}, c.args...)...)
+		lines := strings.Split(strings.TrimSuffix(r.stderr, "\n"), "\n")
+		if r.code != 2 || len(lines) != 2 || r.stdout != "" {
+			t.Fatalf("%v: exit %d, stdout %q, stderr %q; want 2, an error and a hint", c.args, r.code, r.stdout, r.stderr)
+		}
+		for _, w := range c.want {
+			if !strings.Contains(lines[0], w) {
+				t.Errorf("%v: %q does not say %q", c.args, lines[0], w)
+			}
+		}
+		if !strings.HasPrefix(lines[1], "gaugeline: hint: narrow the stock") || !strings.Contains(lines[1], "raise --max-candidates") {
+			t.Errorf("%v: hint %q", c.args, lines[1])
+		}
+		if entries, _ := os.ReadDir(dir); len(entries) != 0 {
+			t.Errorf("%v: wrote %v", c.args, entries)
+		}
+	}
+
+	// Within the limit, byte for byte the same as without one (and so as
+	// before the limit existed: the default is above this space).
+	flat, _ := filepath.Abs(filepath.Join(testdata, "propose", "us-flat-shear.yaml"))
+	n := proposeDoc(t, gaugeline(t, dir, "propose", flat, "--format", "json")).Search.Space
+	for _, mode := range [][]string{{"--exhaustive"}, {}} {
+		want := gaugeline(t, dir, append([]string{"propose", flat, "--format", "json", "--alternatives", "5"}, mode...)...)
+		got := gaugeline(t, dir, append([]string{"propose", flat, "--format", "json", "--alternatives", "5", "--max-candidates", strconv.Itoa(n)}, mode...)...)
+		if want.code != 0 || got.code != 0 || got.stdout != want.stdout || got.stderr != "" {
+			t.Errorf("%v --max-candidates %d (the space): exit %d, stderr %q; output equal: %v", mode, n, got.code, got.stderr, got.stdout == want.stdout)
 		}
 	}
 }

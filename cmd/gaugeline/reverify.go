@@ -49,6 +49,10 @@ func newReverifyCmd(o *rootOptions) *cobra.Command {
 	return cmd
 }
 
+// maxTolerance bounds --position and --diameter (the message says
+// 100 mm): a larger tolerance is a typo.
+const maxTolerance = 100 * units.Millimetre
+
 func runReverify(_ context.Context, _ *rootOptions, ro reverifyOptions, path string, out io.Writer) error {
 	switch ro.format {
 	case "text", "json", "markdown":
@@ -83,10 +87,14 @@ func runReverify(_ context.Context, _ *rootOptions, ro reverifyOptions, path str
 			continue
 		}
 		v, err := units.ParseLength(t.val, job.Units)
-		if err != nil || !(v > 0) || v > 100*units.Millimetre {
-			msg := "is not a tolerance"
+		if err != nil || !(v > 0) || v > maxTolerance {
+			most := "100 mm"
+			if job.Units == units.US {
+				most += " (3.94 in)"
+			}
+			msg := fmt.Sprintf("want a length above 0 and at most %s, not %s", most, t.val)
 			if err != nil {
-				msg = err.Error()
+				msg += " (" + err.Error() + ")"
 			}
 			return usageError{fmt.Errorf("--%s: %s", t.flag, msg)}
 		}
