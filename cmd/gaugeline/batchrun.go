@@ -19,10 +19,6 @@ import (
 	"strings"
 	"sync"
 	"syscall"
-	"time"
-
-	"github.com/schollz/progressbar/v3"
-	"golang.org/x/term"
 
 	"gaugeline/detail"
 	"gaugeline/detail/measured"
@@ -340,7 +336,11 @@ func jobFiles(cfg batchConfig, job *detail.Job, row *batchRow) ([]dxfout.File, e
 	var r *detail.Report
 	var data []byte
 	if cfg.propose {
-		p, err := detail.Propose(job, detail.ProposeOptions{Mode: detail.Pruned})
+		p, err := detail.Propose(job, detail.ProposeOptions{Mode: detail.Pruned, MaxCandidates: defaultMaxCandidates})
+		var le *detail.SearchLimitError
+		if errors.As(err, &le) {
+			return nil, limitError(job, le)
+		}
 		if err != nil {
 			return nil, err
 		}
@@ -521,26 +521,6 @@ func mdCell(s string) string {
 	return strings.Join(strings.Fields(s), " ")
 }
 
-// progress returns a progress callback: a bar on stderr when it is a
-// terminal, nothing otherwise; finish ends the bar.
-func progress(stderr io.Writer, n int) (tick, finish func()) {
-	f, ok := stderr.(*os.File)
-	if !ok || !term.IsTerminal(int(f.Fd())) {
-		return func() {}, func() {}
-	}
-	bar := progressbar.NewOptions(n,
-		progressbar.OptionSetWriter(f),
-		progressbar.OptionSetDescription("batch"),
-		progressbar.OptionShowCount(),
-		progressbar.OptionShowIts(),
-		progressbar.OptionSetItsString("jobs"),
-		progressbar.OptionSetPredictTime(true),
-		progressbar.OptionThrottle(100*time.Millisecond),
-		progressbar.OptionClearOnFinish(),
-	)
-	return func() { bar.Add(1) }, func() { bar.Finish() }
-}
-
 // maxErrorLines is how many job errors batch repeats on stderr; the
 // summary has them all.
 const maxErrorLines = 20
@@ -578,8 +558,9 @@ func runBatch(ctx context.Context, o *rootOptions, bo batchOptions, arg string, 
 	defer stop()
 	context.AfterFunc(ctx, stop)
 
-	tick, finish := progress(o.stderr, len(files))
-	rows := runJobs(ctx, cfg, files, tick)
+	report, finish := progressBar(o.stderr, "batch", "jobs")
+	finished := 0
+	rows := runJobs(ctx, cfg, files, func() { finished++; report(finished, len(files)) })
 	finish()
 
 	c := countRows(rows)
