@@ -132,8 +132,8 @@ const maxFixed = 20
 // exactly: v·10^prec rounded half to even, in 128-bit integers. strconv
 // takes its arbitrary-precision path for every 'f' with a precision, at
 // several times the cost. ok is false, and nothing appended, for NaN, the
-// infinities and values of 10^prec·|v| ≥ 2^100 (beyond 10^13 at 16
-// decimals); pow5 is 5^prec.
+// infinities and values of 10^prec·|v| ≥ 2^100 (|v| beyond about
+// 1.3·10^14 at 16 decimals); pow5 is 5^prec.
 func appendFixed(b []byte, v float64, prec int, pow5 uint64) (_ []byte, ok bool) {
 	if pow5 == 0 {
 		return b, false
@@ -189,16 +189,14 @@ const digitPairs = "000102030405060708091011121314151617181920212223242526272829
 	"40414243444546474849505152535455565758596061626364656667686970717273747576777879" +
 	"8081828384858687888990919293949596979899"
 
-// putDigits writes v in decimal into d, ending before d[i], in at least
-// least digits (leading zeros), and returns where the digits start.
+// putDigits writes v in decimal into d, ending before d[i], in no fewer
+// than least digits (zeros in front) and at least one, and returns where
+// the digits start.
 func putDigits(d *[40]byte, i int, v uint64, least int) int {
 	end := i
 	for v >= 10 {
 		q := v / 100
 		r := 2 * (v - 100*q)
-		if v < 100 {
-			q, r = 0, 2*v
-		}
 		i -= 2
 		d[i], d[i+1] = digitPairs[r], digitPairs[r+1]
 		v = q
