@@ -13,8 +13,8 @@ import (
 )
 
 // This file is the cut-sheet model: what a shop drawing of one connection
-// shows, as plain geometry and text. It knows nothing of files; package
-// dxfout draws it.
+// shows, as plain geometry and text. It knows nothing of files: paint.go
+// walks it over a Painter, and package dxfout is the painter of DXF.
 //
 // Every coordinate of the model is a float64 in the job's units (inches
 // for us, millimetres for si): the drawing is 1:1 in those units. Angles

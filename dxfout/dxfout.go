@@ -1,15 +1,11 @@
 package dxfout
 
 import (
-	"bytes"
-	"fmt"
-	"slices"
 	"strings"
-	"sync"
 
 	"github.com/yofu/dxf/block"
+	"github.com/yofu/dxf/class"
 	"github.com/yofu/dxf/color"
-	"github.com/yofu/dxf/drawing"
 	"github.com/yofu/dxf/entity"
 	"github.com/yofu/dxf/format"
 	"github.com/yofu/dxf/object"
@@ -19,11 +15,6 @@ import (
 	"gaugeline/rules/units"
 )
 
-// mu serialises every use of github.com/yofu/dxf: its default layer, line
-// types and text style are package-level and get handles and heights
-// written into them while a drawing is built and written.
-var mu sync.Mutex
-
 // File is one DXF file to write: its name (no directory) and content.
 type File struct {
 	Name string
@@ -31,25 +22,38 @@ type File struct {
 }
 
 // Files draws the cut sheet MARK.dxf and, unless the sheet is not for
-// fabrication, the CAM file MARK-PART.cam.dxf of each part, in that order.
+// fabrication, the CAM file MARK-PART.cam.dxf of each part, in that order,
+// each starting with the sheet's stamp (see Comment). Drawing cannot fail
+// today; the error is there for a writer that can.
 func Files(s *detail.Sheet) ([]File, error) {
-	b, err := Sheet(s)
-	if err != nil {
-		return nil, err
-	}
-	out := []File{{s.Mark + ".dxf", Comment(b, s.Stamp)}}
+	out := []File{{s.Mark + ".dxf", drawSheet(s, s.Stamp)}}
 	if s.NotForFabrication {
 		return out, nil
 	}
 	for i := range s.Views {
 		p := &s.Views[i].Part
-		b, err := CAM(p, s.Units)
-		if err != nil {
-			return nil, err
-		}
-		out = append(out, File{s.Mark + "-" + p.Name + ".cam.dxf", Comment(b, s.Stamp)})
+		out = append(out, File{s.Mark + "-" + p.Name + ".cam.dxf", drawCAM(p, s.Units, s.Stamp)})
 	}
 	return out, nil
+}
+
+// Sheet draws the cut sheet, without a stamp. The error is always nil.
+func Sheet(s *detail.Sheet) ([]byte, error) { return drawSheet(s, ""), nil }
+
+// CAM draws one part alone in its own frame: the closed contour and the
+// holes, nothing else; without a stamp. The error is always nil.
+func CAM(part *detail.Part, sys units.System) ([]byte, error) { return drawCAM(part, sys, ""), nil }
+
+func drawSheet(s *detail.Sheet, stamp string) []byte {
+	p := newPen(256)
+	lo, hi := s.Paint(p)
+	return p.write(s.Units, s.TextHeight, lo, hi, stamp)
+}
+
+func drawCAM(part *detail.Part, sys units.System, stamp string) []byte {
+	p := newPen(1 + len(part.Holes))
+	lo, hi := part.Paint(p)
+	return p.write(sys, 1, lo, hi, stamp)
 }
 
 // CommentPrefix starts the DXF comment (group 999) that carries a run
@@ -59,222 +63,203 @@ const CommentPrefix = "gaugeline stamp: "
 // Comment puts the stamp in a DXF comment (group code 999, which readers
 // skip) before the first section of data; an empty stamp leaves data as
 // it is. A stamp is one line: line breaks in it are replaced by blanks.
+// Files writes the same comment as it draws.
 func Comment(data []byte, stamp string) []byte {
 	if stamp == "" {
 		return data
 	}
-	stamp = strings.NewReplacer("\r", " ", "\n", " ").Replace(stamp)
-	out := make([]byte, 0, len(data)+len(stamp)+32)
-	out = append(out, "999\n"+CommentPrefix+stamp+"\n"...)
-	return append(out, data...)
+	c := appendString(nil, 999, CommentPrefix+oneLine(stamp))
+	return append(c, data...)
 }
 
-// layerColors are the ACI colours of the layers: parts in the foreground
+func oneLine(s string) string { return strings.NewReplacer("\r", " ", "\n", " ").Replace(s) }
+
+// layerColor is the ACI colour of a layer: parts in the foreground
 // colour, holes red, dimensions cyan, reference lines grey.
-var layerColors = map[detail.Layer]color.ColorNumber{
-	detail.LayerContour:    color.White,
-	detail.LayerHoles:      color.Red,
-	detail.LayerDimensions: color.Cyan,
-	detail.LayerReference:  color.Grey128,
-	detail.LayerNotes:      color.White,
-	detail.LayerTitle:      color.White,
-}
-
-// pen draws on a drawing and keeps the extents of what it drew.
-type pen struct {
-	d      *drawing.Drawing
-	at     detail.Point // origin of the current frame on the drawing
-	lo, hi detail.Point
-	empty  bool
-}
-
-func newPen(layers []detail.Layer) (*pen, error) {
-	d := drawing.New()
-	tidy(d)
-	for _, l := range layers {
-		if _, err := d.AddLayer(l.String(), layerColors[l], table.LT_CONTINUOUS, false); err != nil {
-			return nil, fmt.Errorf("dxfout: %w", err)
-		}
+func layerColor(l detail.Layer) color.ColorNumber {
+	switch l {
+	case detail.LayerHoles:
+		return color.Red
+	case detail.LayerDimensions:
+		return color.Cyan
+	case detail.LayerReference:
+		return color.Grey128
 	}
-	return &pen{d: d, empty: true}, nil
+	return color.White
 }
 
-func (p *pen) grow(q detail.Point) {
-	if p.empty {
-		p.lo, p.hi, p.empty = q, q, false
-		return
-	}
-	p.lo = detail.Point{X: min(p.lo.X, q.X), Y: min(p.lo.Y, q.Y)}
-	p.hi = detail.Point{X: max(p.hi.X, q.X), Y: max(p.hi.Y, q.Y)}
-}
-
-func (p *pen) layer(l detail.Layer) {
-	if err := p.d.ChangeLayer(l.String()); err != nil {
-		panic("dxfout: " + err.Error()) // every layer is added by newPen
-	}
-}
-
-func (p *pen) line(a, b detail.Point, l detail.Layer) {
-	a, b = a.Add(p.at), b.Add(p.at)
-	p.layer(l)
-	p.d.Line(a.X, a.Y, 0, b.X, b.Y, 0)
-	p.grow(a)
-	p.grow(b)
-}
-
-// poly draws a closed LWPOLYLINE; bulges may be nil. lo and hi bound it.
-func (p *pen) poly(pts []detail.Point, bulges []float64, l detail.Layer, lo, hi detail.Point) {
-	p.layer(l)
-	vs := make([][]float64, len(pts))
-	for i, q := range pts {
-		q = q.Add(p.at)
-		vs[i] = []float64{q.X, q.Y}
-	}
-	e, _ := p.d.LwPolyline(true, vs...)
-	copy(e.Bulges, bulges)
-	p.grow(lo.Add(p.at))
-	p.grow(hi.Add(p.at))
-}
-
-func (p *pen) contour(pts []detail.Point) {
-	lo, hi := bounds(pts)
-	p.poly(pts, nil, detail.LayerContour, lo, hi)
-}
-
-func (p *pen) hole(h detail.SheetHole) {
-	if h.Round() {
-		c := h.Centre.Add(p.at)
-		r := h.Diameter() / 2
-		p.layer(detail.LayerHoles)
-		p.d.Circle(c.X, c.Y, 0, r)
-		p.grow(detail.Point{X: c.X - r, Y: c.Y - r})
-		p.grow(detail.Point{X: c.X + r, Y: c.Y + r})
-		return
-	}
-	pts, bulges := h.SlotOutline()
-	half := detail.Point{X: h.Dx / 2, Y: h.Dy / 2}
-	p.poly(pts, bulges, detail.LayerHoles, detail.Point{X: h.Centre.X - half.X, Y: h.Centre.Y - half.Y}, h.Centre.Add(half))
-}
-
-// aligns maps our alignments onto the library's; all of them write the
+// anchor maps our alignments onto the library's; all of them write the
 // alignment point.
-var aligns = map[detail.Align]int{
-	detail.AlignLeftBase:     entity.LEFT_BASE,
-	detail.AlignCenterBottom: entity.CENTER_BOTTOM,
-	detail.AlignCenterMiddle: entity.CENTER_CENTER,
-	detail.AlignCenterTop:    entity.CENTER_TOP,
-	detail.AlignRightBottom:  entity.RIGHT_BOTTOM,
-	detail.AlignRightMiddle:  entity.RIGHT_CENTER,
-	detail.AlignRightTop:     entity.RIGHT_TOP,
+func anchor(a detail.Align) int {
+	switch a {
+	case detail.AlignCenterBottom:
+		return entity.CENTER_BOTTOM
+	case detail.AlignCenterMiddle:
+		return entity.CENTER_CENTER
+	case detail.AlignCenterTop:
+		return entity.CENTER_TOP
+	case detail.AlignRightBottom:
+		return entity.RIGHT_BOTTOM
+	case detail.AlignRightMiddle:
+		return entity.RIGHT_CENTER
+	case detail.AlignRightTop:
+		return entity.RIGHT_TOP
+	}
+	return entity.LEFT_BASE
 }
 
-func (p *pen) text(t detail.Text) {
-	t.At = t.At.Add(p.at)
-	p.layer(t.Layer)
-	e, _ := p.d.Text(t.Value, t.At.X, t.At.Y, 0, t.Height)
+// pen is one DXF file being drawn: a detail.Painter that turns each item
+// into the library's entity. It builds the file's skeleton itself rather
+// than through drawing.New, which hands every drawing the library's
+// package-level layer "0", line types and text style and writes handles,
+// owners, plot styles and text heights into them: sharing nothing, pens
+// draw in parallel.
+type pen struct {
+	continuous *table.LineType
+	layer0     *table.Layer
+	layers     []*table.Layer // by detail.Layer; nil where not declared
+	style      *table.Style
+	tables     table.Tables
+	blocks     block.Blocks
+	entities   entity.Entities
+	objects    object.Objects
+}
+
+// newPen lays out the skeleton drawing.New makes (sections, tables, the
+// two blocks of model and paper space, the dictionaries), less what an
+// independent audit (ezdxf) would repair in the library's: a second paper
+// space block (*Paper_Space0) with no layout, and dictionaries without
+// their owner (the root's is handle 0, the group dictionary's the root).
+// It makes room for about n entities.
+func newPen(n int) *pen {
+	p := &pen{continuous: table.NewLineType("Continuous", "Solid Line"), style: table.NewStyle("Standard")}
+	root := object.NewDictionary()
+	plotStyles, normal := object.NewAcDbDictionaryWDFLT(root)
+	root.AddItem("ACAD_PLOTSTYLENAME", plotStyles)
+	groups := object.NewDictionary()
+	root.AddItem("ACAD_GROUP", groups)
+	p.objects = object.Objects{owned{root, nil}, plotStyles, normal, owned{groups, root}}
+
+	p.layer0 = table.NewLayer("0", color.White, p.continuous)
+	p.layer0.SetPlotStyle(normal)
+	p.tables = table.Tables{
+		table.NewTable("VPORT"), table.NewTable("LTYPE"), table.NewTable("LAYER"), table.NewTable("STYLE"),
+		table.NewTable("VIEW"), table.NewTable("UCS"), table.NewTable("APPID"), table.NewTable("DIMSTYLE"),
+		table.NewTable("BLOCK_RECORD"),
+	}
+	lt := p.tables[table.LTYPE]
+	lt.Add(table.NewLineType("ByLayer", ""))
+	lt.Add(table.NewLineType("ByBlock", ""))
+	lt.Add(p.continuous)
+	lt.Add(table.NewLineType("HIDDEN", "Hidden __ __ __ __ __ __ __ __ __ __ __ __ __ _", 0.25, -0.125))
+	lt.Add(table.NewLineType("DASHDOT", "Dash dot __ . __ . __ . __ . __ . __ . __ . __", 0.5, -0.25, 0.0, -0.25))
+	p.tables[table.LAYER].Add(p.layer0)
+	p.tables[table.STYLE].Add(p.style)
+	p.tables[table.APPID].Add(table.NewAppID("ACAD"))
+	p.tables[table.BLOCK_RECORD].Add(table.NewBlockRecord("*Model_Space"))
+	p.tables[table.BLOCK_RECORD].Add(table.NewBlockRecord("*Paper_Space"))
+	p.blocks = block.Blocks{block.NewBlock("*Model_Space", ""), block.NewBlock("*Paper_Space", "")}
+	for _, b := range p.blocks {
+		b.SetLayer(p.layer0)
+	}
+	p.entities = make(entity.Entities, 0, n)
+	return p
+}
+
+// Layers adds the layers to the layer table, after layer 0.
+func (p *pen) Layers(ls []detail.Layer) {
+	for _, l := range ls {
+		ly := table.NewLayer(l.String(), layerColor(l), p.continuous)
+		ly.SetPlotStyle(p.layer0.PlotStyle)
+		p.tables[table.LAYER].Add(ly)
+		for int(l) >= len(p.layers) {
+			p.layers = append(p.layers, nil)
+		}
+		p.layers[l] = ly
+	}
+}
+
+func (p *pen) layer(l detail.Layer) *table.Layer {
+	if int(l) >= len(p.layers) || p.layers[l] == nil {
+		panic("dxfout: layer " + l.String() + " not declared by the painter's Layers")
+	}
+	return p.layers[l]
+}
+
+func (p *pen) Line(a, b detail.Point, l detail.Layer) {
+	e := entity.NewLine()
+	e.Start[0], e.Start[1] = a.X, a.Y
+	e.End[0], e.End[1] = b.X, b.Y
+	e.SetLayer(p.layer(l))
+	p.entities = append(p.entities, e)
+}
+
+func (p *pen) Circle(c detail.Point, r float64, l detail.Layer) {
+	e := entity.NewCircle()
+	e.Center[0], e.Center[1] = c.X, c.Y
+	e.Radius = r
+	e.SetLayer(p.layer(l))
+	p.entities = append(p.entities, e)
+}
+
+// ClosedPolyline draws a closed LWPOLYLINE; bulges may be nil.
+func (p *pen) ClosedPolyline(pts []detail.Point, bulges []float64, l detail.Layer) {
+	e := entity.NewLwPolyline(len(pts))
+	for i, q := range pts {
+		e.Vertices[i][0], e.Vertices[i][1] = q.X, q.Y
+	}
+	copy(e.Bulges, bulges)
+	e.Close()
+	e.SetLayer(p.layer(l))
+	p.entities = append(p.entities, e)
+}
+
+// Text draws a TEXT in the one text style.
+func (p *pen) Text(t detail.Text) {
+	e := entity.NewText()
+	e.Coord1[0], e.Coord1[1] = t.At.X, t.At.Y
+	e.Height = t.Height
+	e.Value = t.Value
+	e.SetLayer(p.layer(t.Layer))
+	e.Style = p.style
+	e.WidthFactor, e.ObliqueAngle = p.style.WidthFactor, p.style.ObliqueAngle
 	e.Rotation = t.Rotation
-	e.Anchor(aligns[t.Align])
-	lo, hi := t.Box()
-	p.grow(lo)
-	p.grow(hi)
+	e.Anchor(anchor(t.Align))
+	p.entities = append(p.entities, e)
 }
 
-// dimension draws a dimension as the sheet model lays it out.
-func (p *pen) dimension(d detail.Dimension, h float64) {
-	g := d.Graphics(h)
-	for _, l := range g.Lines {
-		p.line(l.A, l.B, l.Layer)
-	}
-	for _, tri := range g.Arrows {
-		pts := tri[:]
-		lo, hi := bounds(pts)
-		p.poly(pts, nil, detail.LayerDimensions, lo, hi)
-	}
-	for _, l := range g.Leaders {
-		p.line(l.A, l.B, l.Layer)
-	}
-	for _, t := range g.Texts {
-		p.text(t)
-	}
+// section is what the library's drawing writes a section through.
+type section interface {
+	Format(format.Formatter)
+	SetHandle(*int)
 }
 
-// finish sets the header and writes the drawing.
-func (p *pen) finish(sys units.System, textHeight float64) ([]byte, error) {
-	h := &header{insunits: 1, measurement: 0}
+// write numbers the handles as the library's drawing does (every section
+// after the header in order, then the header, which records the next free
+// one) and writes the file: the stamp's comment, the sections, EOF.
+// textHeight is recorded as the text style's last height used.
+func (p *pen) write(sys units.System, textHeight float64, lo, hi detail.Point, stamp string) []byte {
+	p.style.LastHeightUsed = textHeight
+	h := &header{insunits: 1, measurement: 0, extmin: lo, extmax: hi}
 	if sys == units.SI {
 		h.insunits, h.measurement = 4, 1
 	}
-	h.extmin, h.extmax = p.lo, p.hi
-	p.d.Sections[drawing.HEADER] = h
-	// The library's default style is shared: pin the height it records.
-	table.ST_STANDARD.LastHeightUsed = textHeight
-	var buf bytes.Buffer
-	if _, err := p.d.WriteTo(&buf); err != nil {
-		return nil, fmt.Errorf("dxfout: %w", err)
+	sections := [...]section{h, class.New(), p.tables, p.blocks, p.entities, p.objects}
+	next := 1
+	for _, s := range sections[1:] {
+		s.SetHandle(&next)
 	}
-	return buf.Bytes(), nil
-}
-
-// Sheet draws the cut sheet: every view at its origin, then the sheet's
-// own lines and text.
-func Sheet(s *detail.Sheet) ([]byte, error) {
-	mu.Lock()
-	defer mu.Unlock()
-	p, err := newPen(detail.Layers())
-	if err != nil {
-		return nil, err
+	h.SetHandle(&next)
+	// About 4.5 kB of skeleton and at most 320 bytes an entity (a TEXT).
+	f := newASCII(5120 + 320*len(p.entities))
+	if stamp != "" {
+		f.WriteString(999, CommentPrefix+oneLine(stamp))
 	}
-	h := s.TextHeight
-	for i := range s.Views {
-		v := &s.Views[i]
-		p.at = v.Origin
-		p.contour(v.Part.Contour)
-		for _, hole := range v.Part.Holes {
-			p.hole(hole)
-		}
-		for _, l := range v.Lines {
-			p.line(l.A, l.B, l.Layer)
-		}
-		for _, d := range v.Dims {
-			p.dimension(d, h)
-		}
-		for _, t := range v.Texts {
-			p.text(t)
-		}
+	for _, s := range sections {
+		s.Format(f)
 	}
-	p.at = detail.Point{}
-	for _, l := range s.Lines {
-		p.line(l.A, l.B, l.Layer)
-	}
-	for _, t := range s.Texts {
-		p.text(t)
-	}
-	return p.finish(s.Units, h)
-}
-
-// CAM draws one part alone in its own frame: the closed contour and the
-// holes, nothing else.
-func CAM(part *detail.Part, sys units.System) ([]byte, error) {
-	mu.Lock()
-	defer mu.Unlock()
-	p, err := newPen([]detail.Layer{detail.LayerContour, detail.LayerHoles})
-	if err != nil {
-		return nil, err
-	}
-	p.contour(part.Contour)
-	for _, hole := range part.Holes {
-		p.hole(hole)
-	}
-	return p.finish(sys, 1)
-}
-
-func bounds(pts []detail.Point) (lo, hi detail.Point) {
-	lo, hi = pts[0], pts[0]
-	for _, q := range pts {
-		lo = detail.Point{X: min(lo.X, q.X), Y: min(lo.Y, q.Y)}
-		hi = detail.Point{X: max(hi.X, q.X), Y: max(hi.Y, q.Y)}
-	}
-	return lo, hi
+	f.WriteString(0, "EOF")
+	return f.buf
 }
 
 // header is the HEADER section: the library's lacks $MEASUREMENT, so we
@@ -317,40 +302,20 @@ func (h *header) Format(f format.Formatter) {
 	f.WriteString(0, "ENDSEC")
 }
 
-// tidy removes what an independent audit (ezdxf) would repair in the
-// library's skeleton: a second paper space block (*Paper_Space0) with no
-// layout, and dictionaries without their owner (the root's is handle 0,
-// the group dictionary's the root).
-func tidy(d *drawing.Drawing) {
-	blocks := d.Sections[drawing.BLOCKS].(block.Blocks)
-	d.Sections[drawing.BLOCKS] = slices.DeleteFunc(blocks, func(b *block.Block) bool { return b.Name == "*Paper_Space0" })
-	records := d.Sections[drawing.TABLES].(table.Tables)[table.BLOCK_RECORD]
-	records.Clear()
-	records.Add(table.NewBlockRecord("*Model_Space"))
-	records.Add(table.NewBlockRecord("*Paper_Space"))
-	objects := d.Sections[drawing.OBJECTS].(object.Objects)
-	root := objects[0]
-	for i, o := range objects {
-		if _, ok := o.(*object.Dictionary); !ok {
-			continue
-		}
-		owner := func() int { return root.Handle() }
-		if i == 0 {
-			owner = func() int { return 0 }
-		}
-		objects[i] = owned{o, owner}
-	}
-}
-
-// owned writes an object with its owner group (330) right after its
-// handle (5).
+// owned writes a dictionary with its owner group (330) right after its
+// handle (5), which the library's object.Dictionary leaves out; a nil
+// owner is handle 0.
 type owned struct {
 	object.Object
-	owner func() int
+	owner object.Object
 }
 
 func (o owned) Format(f format.Formatter) {
-	o.Object.Format(&ownerAfterHandle{Formatter: f, owner: o.owner()})
+	h := 0
+	if o.owner != nil {
+		h = o.owner.Handle()
+	}
+	o.Object.Format(&ownerAfterHandle{Formatter: f, owner: h})
 }
 
 type ownerAfterHandle struct {

@@ -7,7 +7,9 @@ import (
 	"path/filepath"
 	"strings"
 	"sync"
+	"syscall"
 	"testing"
+	"time"
 
 	"gaugeline/detail"
 	"gaugeline/rules/units"
@@ -410,11 +412,41 @@ func TestDeterministicAndConcurrent(t *testing.T) {
 	}
 }
 
+// cpuTime is the process's user + system CPU time so far: what the
+// machine's other load does not change, unlike the wall time of ns/op.
+func cpuTime() time.Duration {
+	var ru syscall.Rusage
+	if err := syscall.Getrusage(syscall.RUSAGE_SELF, &ru); err != nil {
+		return 0
+	}
+	return time.Duration(ru.Utime.Nano() + ru.Stime.Nano())
+}
+
+// BenchmarkFiles draws one sheet's files (the cut sheet and two CAM
+// files of the SI double angle, 181 entities).
 func BenchmarkFiles(b *testing.B) {
 	_, s := sheet(b, "../testdata/jobs/si-double-angle.yaml")
+	cpu0 := cpuTime()
 	for b.Loop() {
 		if _, err := Files(s); err != nil {
 			b.Fatal(err)
 		}
 	}
+	b.ReportMetric(float64((cpuTime()-cpu0).Microseconds())/float64(b.N), "cpu-µs/op")
+}
+
+// BenchmarkFilesParallel draws the same on every core at once: with
+// nothing shared between drawings, ns/op falls with the cores.
+func BenchmarkFilesParallel(b *testing.B) {
+	_, s := sheet(b, "../testdata/jobs/si-double-angle.yaml")
+	cpu0 := cpuTime()
+	b.RunParallel(func(pb *testing.PB) {
+		for pb.Next() {
+			if _, err := Files(s); err != nil {
+				b.Error(err)
+				return
+			}
+		}
+	})
+	b.ReportMetric(float64((cpuTime()-cpu0).Microseconds())/float64(b.N), "cpu-µs/op")
 }

@@ -1,0 +1,171 @@
+package detail
+
+// This file is the one walk over the sheet model: what a drawing of a cut
+// sheet or of one part holds, in which order, and how far it reaches. A
+// back end (package dxfout) implements Painter and draws only what it is
+// handed.
+
+// Painter is a drawing back end. Coordinates are the drawing's: a view's
+// origin is already added. A painter must not keep the slices it is
+// handed; they are reused after the call returns.
+type Painter interface {
+	// Layers comes first, once, with every layer the drawing may use, in
+	// the order a layer table lists them.
+	Layers(ls []Layer)
+	Line(a, b Point, l Layer)
+	Circle(centre Point, r float64, l Layer)
+	// ClosedPolyline draws a closed outline through pts. The side from
+	// pts[i] to the next vertex is straight where bulges is nil or
+	// bulges[i] is 0, else an arc of bulge bulges[i] (the tangent of a
+	// quarter of its included angle, positive counter-clockwise): a slot's
+	// ends are half circles of bulge 1.
+	ClosedPolyline(pts []Point, bulges []float64, l Layer)
+	// Text draws one line of text at t.At with its height, rotation and
+	// alignment.
+	Text(t Text)
+}
+
+// PartLayers are the layers of a part drawn alone (Part.Paint): a CAM file
+// has entities on these only.
+func PartLayers() []Layer { return []Layer{LayerContour, LayerHoles} }
+
+// Paint draws the cut sheet on p: every view at its origin (the part's
+// contour and holes, then its reference lines, dimensions and texts), then
+// the sheet's own lines and texts (title block, hole schedule). It returns
+// the corners of what it drew, text by Text.Box, a slot by its extents.
+func (s *Sheet) Paint(to Painter) (lo, hi Point) {
+	w := walk{p: to, empty: true}
+	to.Layers(Layers())
+	for i := range s.Views {
+		v := &s.Views[i]
+		w.at = v.Origin
+		w.part(&v.Part)
+		for _, l := range v.Lines {
+			w.line(l)
+		}
+		for _, d := range v.Dims {
+			w.dimension(d, s.TextHeight)
+		}
+		for _, t := range v.Texts {
+			w.text(t)
+		}
+	}
+	w.at = Point{}
+	for _, l := range s.Lines {
+		w.line(l)
+	}
+	for _, t := range s.Texts {
+		w.text(t)
+	}
+	return w.lo, w.hi
+}
+
+// Paint draws the part alone in its own frame, as its CAM file holds it:
+// the closed contour and the holes, nothing else. It returns the corners
+// of what it drew.
+func (p *Part) Paint(to Painter) (lo, hi Point) {
+	w := walk{p: to, empty: true}
+	to.Layers(PartLayers())
+	w.part(p)
+	return w.lo, w.hi
+}
+
+// walk hands the model to a painter, shifted by the origin of the current
+// view, and keeps the extents of what it handed over.
+type walk struct {
+	p      Painter
+	at     Point // origin of the current view on the drawing
+	lo, hi Point
+	empty  bool
+	pts    []Point // reused for the vertices handed to ClosedPolyline
+}
+
+func (w *walk) grow(q Point) {
+	if w.empty {
+		w.lo, w.hi, w.empty = q, q, false
+		return
+	}
+	w.lo = Point{X: min(w.lo.X, q.X), Y: min(w.lo.Y, q.Y)}
+	w.hi = Point{X: max(w.hi.X, q.X), Y: max(w.hi.Y, q.Y)}
+}
+
+func (w *walk) line(s Segment) {
+	a, b := s.A.Add(w.at), s.B.Add(w.at)
+	w.p.Line(a, b, s.Layer)
+	w.grow(a)
+	w.grow(b)
+}
+
+// polyline hands over a closed outline given in the view's frame; lo and
+// hi bound it there.
+func (w *walk) polyline(pts []Point, bulges []float64, l Layer, lo, hi Point) {
+	w.pts = w.pts[:0]
+	for _, q := range pts {
+		w.pts = append(w.pts, q.Add(w.at))
+	}
+	w.p.ClosedPolyline(w.pts, bulges, l)
+	w.grow(lo.Add(w.at))
+	w.grow(hi.Add(w.at))
+}
+
+func (w *walk) part(p *Part) {
+	lo, hi := corners(p.Contour)
+	w.polyline(p.Contour, nil, LayerContour, lo, hi)
+	for _, h := range p.Holes {
+		w.hole(h)
+	}
+}
+
+// hole draws a round hole as a circle, a slot as its closed outline of
+// two straight sides and two half circles.
+func (w *walk) hole(h SheetHole) {
+	if h.Round() {
+		c := h.Centre.Add(w.at)
+		r := h.Diameter() / 2
+		w.p.Circle(c, r, LayerHoles)
+		w.grow(Point{X: c.X - r, Y: c.Y - r})
+		w.grow(Point{X: c.X + r, Y: c.Y + r})
+		return
+	}
+	pts, bulges := h.SlotOutline()
+	half := Point{X: h.Dx / 2, Y: h.Dy / 2}
+	w.polyline(pts, bulges, LayerHoles, Point{X: h.Centre.X - half.X, Y: h.Centre.Y - half.Y}, h.Centre.Add(half))
+}
+
+func (w *walk) text(t Text) {
+	t.At = t.At.Add(w.at)
+	w.p.Text(t)
+	lo, hi := t.Box()
+	w.grow(lo)
+	w.grow(hi)
+}
+
+// dimension draws a dimension as Dimension.Graphics lays it out for text
+// height h, in its order.
+func (w *walk) dimension(d Dimension, h float64) {
+	g := d.Graphics(h)
+	for _, l := range g.Lines {
+		w.line(l)
+	}
+	for _, tri := range g.Arrows {
+		pts := tri[:]
+		lo, hi := corners(pts)
+		w.polyline(pts, nil, LayerDimensions, lo, hi)
+	}
+	for _, l := range g.Leaders {
+		w.line(l)
+	}
+	for _, t := range g.Texts {
+		w.text(t)
+	}
+}
+
+// corners returns the corners of the box around pts (at least one).
+func corners(pts []Point) (lo, hi Point) {
+	lo, hi = pts[0], pts[0]
+	for _, q := range pts {
+		lo = Point{X: min(lo.X, q.X), Y: min(lo.Y, q.Y)}
+		hi = Point{X: max(hi.X, q.X), Y: max(hi.Y, q.Y)}
+	}
+	return lo, hi
+}

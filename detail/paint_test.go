@@ -1,0 +1,221 @@
+package detail
+
+import (
+	"math"
+	"slices"
+	"testing"
+
+	"gaugeline/rules"
+)
+
+// item is one call a recording painter received.
+type item struct {
+	kind   string // line, circle, polyline, text
+	pts    []Point
+	bulges []float64
+	r      float64
+	text   Text
+	layer  Layer
+}
+
+// recorder is a Painter that keeps every call.
+type recorder struct {
+	layers [][]Layer
+	items  []item
+}
+
+func (r *recorder) Layers(ls []Layer) {
+	if len(r.items) > 0 {
+		panic("Layers after drawing")
+	}
+	r.layers = append(r.layers, slices.Clone(ls))
+}
+func (r *recorder) Line(a, b Point, l Layer) {
+	r.items = append(r.items, item{kind: "line", pts: []Point{a, b}, layer: l})
+}
+func (r *recorder) Circle(c Point, rad float64, l Layer) {
+	r.items = append(r.items, item{kind: "circle", pts: []Point{c}, r: rad, layer: l})
+}
+func (r *recorder) ClosedPolyline(pts []Point, bulges []float64, l Layer) {
+	r.items = append(r.items, item{kind: "polyline", pts: slices.Clone(pts), bulges: slices.Clone(bulges), layer: l})
+}
+func (r *recorder) Text(t Text) {
+	r.items = append(r.items, item{kind: "text", text: t, layer: t.Layer})
+}
+
+// box is the box around what was drawn, found here from the drawn items
+// themselves: a polyline's arcs by their centre and sweep (a bulge b
+// spans 4·atan(b), SPEC §7's bulge convention, the DXF one), a text by
+// Text.Box.
+func (r *recorder) box() (lo, hi Point) {
+	lo = Point{math.Inf(1), math.Inf(1)}
+	hi = Point{math.Inf(-1), math.Inf(-1)}
+	grow := func(q Point) {
+		lo = Point{min(lo.X, q.X), min(lo.Y, q.Y)}
+		hi = Point{max(hi.X, q.X), max(hi.Y, q.Y)}
+	}
+	for _, it := range r.items {
+		switch it.kind {
+		case "line":
+			grow(it.pts[0])
+			grow(it.pts[1])
+		case "circle":
+			c := it.pts[0]
+			grow(Point{c.X - it.r, c.Y - it.r})
+			grow(Point{c.X + it.r, c.Y + it.r})
+		case "polyline":
+			for i, p := range it.pts {
+				grow(p)
+				if it.bulges == nil || it.bulges[i] == 0 {
+					continue
+				}
+				q := it.pts[(i+1)%len(it.pts)]
+				theta := 4 * math.Atan(it.bulges[i])
+				chord := math.Hypot(q.X-p.X, q.Y-p.Y)
+				rad := chord / 2 / math.Sin(theta/2)
+				// The centre is off the chord's midpoint, to the left of p→q
+				// for a counter-clockwise arc.
+				off := rad * math.Cos(theta/2)
+				c := Point{(p.X+q.X)/2 - (q.Y-p.Y)/chord*off, (p.Y+q.Y)/2 + (q.X-p.X)/chord*off}
+				a0 := math.Atan2(p.Y-c.Y, p.X-c.X)
+				for k := range 4 {
+					phi := float64(k) * math.Pi / 2
+					if math.Mod(phi-a0+4*math.Pi, 2*math.Pi) <= theta+1e-12 {
+						grow(Point{c.X + math.Abs(rad)*math.Cos(phi), c.Y + math.Abs(rad)*math.Sin(phi)})
+					}
+				}
+			}
+		case "text":
+			a, b := it.text.Box()
+			grow(a)
+			grow(b)
+		}
+	}
+	return lo, hi
+}
+
+func nearPoint(a, b Point) bool { return near(a.X, b.X) && near(a.Y, b.Y) }
+
+// The sheet's walk declares every layer first, draws each view's part at
+// its origin (one item per hole, a circle or a slot's outline), every
+// dimension as Dimension.Graphics lays it out, every text, and returns the
+// box around all of it.
+func TestSheetPaint(t *testing.T) {
+	for _, path := range sheetJobs {
+		_, s := sheetOf(t, path)
+		var r recorder
+		lo, hi := s.Paint(&r)
+		if len(r.layers) != 1 || !slices.Equal(r.layers[0], Layers()) {
+			t.Fatalf("%s: layers %v, want %v once", path, r.layers, Layers())
+		}
+		var wantLines, wantTexts, wantArrows int
+		var holes []SheetHole // in the sheet's frame
+		for _, v := range s.Views {
+			wantLines += len(v.Lines)
+			wantTexts += len(v.Texts)
+			for _, d := range v.Dims {
+				g := d.Graphics(s.TextHeight)
+				wantLines += len(g.Lines) + len(g.Leaders)
+				wantArrows += len(g.Arrows)
+				wantTexts += len(g.Texts)
+			}
+			for _, h := range v.Part.Holes {
+				h.Centre = h.Centre.Add(v.Origin)
+				holes = append(holes, h)
+			}
+		}
+		wantLines += len(s.Lines)
+		wantTexts += len(s.Texts)
+		count := map[string]int{}
+		var drawnHoles []item
+		for _, it := range r.items {
+			count[it.kind]++
+			if it.layer == LayerHoles {
+				drawnHoles = append(drawnHoles, it)
+			}
+		}
+		if count["line"] != wantLines || count["text"] != wantTexts || count["polyline"] != len(s.Views)+wantArrows+len(holes)-count["circle"] {
+			t.Errorf("%s: drew %v; want %d lines, %d texts, %d contours, %d arrows and %d holes", path, count,
+				wantLines, wantTexts, len(s.Views), wantArrows, len(holes))
+		}
+		if len(drawnHoles) != len(holes) {
+			t.Fatalf("%s: %d items on the holes layer, %d holes", path, len(drawnHoles), len(holes))
+		}
+		for i, h := range holes {
+			it := drawnHoles[i]
+			if h.Round() {
+				if it.kind != "circle" || !nearPoint(it.pts[0], h.Centre) || !near(2*it.r, h.Diameter()) {
+					t.Errorf("%s: hole %s drawn as %+v", path, h.ID, it)
+				}
+				continue
+			}
+			want, bulges := h.SlotOutline()
+			if it.kind != "polyline" || len(it.pts) != len(want) || !slices.Equal(it.bulges, bulges) {
+				t.Errorf("%s: slot %s drawn as %+v", path, h.ID, it)
+				continue
+			}
+			for k := range want {
+				if !nearPoint(it.pts[k], want[k]) {
+					t.Errorf("%s: slot %s vertex %d at %v, want %v", path, h.ID, k, it.pts[k], want[k])
+				}
+			}
+		}
+		wlo, whi := r.box()
+		if !nearPoint(lo, wlo) || !nearPoint(hi, whi) {
+			t.Errorf("%s: extents %v–%v, box of what was drawn %v–%v", path, lo, hi, wlo, whi)
+		}
+	}
+}
+
+// A part alone is its contour and holes in its own frame, on the contour
+// and holes layers only.
+func TestPartPaint(t *testing.T) {
+	for _, path := range sheetJobs {
+		_, s := sheetOf(t, path)
+		for _, v := range s.Views {
+			p := v.Part
+			var r recorder
+			lo, hi := p.Paint(&r)
+			if len(r.layers) != 1 || !slices.Equal(r.layers[0], []Layer{LayerContour, LayerHoles}) {
+				t.Fatalf("%s %s: layers %v", path, p.Name, r.layers)
+			}
+			if len(r.items) != 1+len(p.Holes) {
+				t.Fatalf("%s %s: %d items for a contour and %d holes", path, p.Name, len(r.items), len(p.Holes))
+			}
+			if c := r.items[0]; c.kind != "polyline" || c.layer != LayerContour || !slices.Equal(c.pts, p.Contour) || c.bulges != nil {
+				t.Errorf("%s %s: contour drawn as %+v, want %v", path, p.Name, c, p.Contour)
+			}
+			for i, it := range r.items[1:] {
+				h := p.Holes[i]
+				if it.layer != LayerHoles || h.Round() && (it.kind != "circle" || it.pts[0] != h.Centre) {
+					t.Errorf("%s %s: hole %s drawn as %+v", path, p.Name, h.ID, it)
+				}
+			}
+			// The holes lie inside the contour: the extents are the part's.
+			blo, bhi := p.Bounds()
+			wlo, whi := r.box()
+			if lo != blo || hi != bhi || !nearPoint(lo, wlo) || !nearPoint(hi, whi) {
+				t.Errorf("%s %s: extents %v–%v, part %v–%v, drawn %v–%v", path, p.Name, lo, hi, blo, bhi, wlo, whi)
+			}
+		}
+	}
+}
+
+// A slot past the contour's edge stretches the extents to its half-circle
+// ends, a circle to its radius: a 22 × 26 slot along x centred on the
+// right edge of a 100 × 50 part reaches 13 past it; a 20 round hole on the
+// top edge reaches 10 above (the sizes of TestSlotOutline).
+func TestPaintExtentsReachHoles(t *testing.T) {
+	p := Part{Contour: []Point{{0, 0}, {100, 0}, {100, 50}, {0, 50}}, Holes: []SheetHole{
+		{ID: "H1", Centre: Point{100, 25}, Dx: 26, Dy: 22, Type: rules.ShortSlot},
+		{ID: "H2", Centre: Point{40, 50}, Dx: 20, Dy: 20, Type: rules.Standard},
+	}}
+	var r recorder
+	lo, hi := p.Paint(&r)
+	if want := (Point{113, 60}); lo != (Point{0, 0}) || hi != want {
+		t.Errorf("extents %v–%v, want (0,0)–%v", lo, hi, want)
+	}
+	if wlo, whi := r.box(); !nearPoint(lo, wlo) || !nearPoint(hi, whi) {
+		t.Errorf("extents %v–%v, box of what was drawn %v–%v", lo, hi, wlo, whi)
+	}
+}
