@@ -411,6 +411,9 @@ func TestJobParseErrors(t *testing.T) {
 		{"mark too long", strings.Replace(minimalUS, "mark: M1", "mark: "+strings.Repeat("A", 41), 1), "mark", 1, "not a usable mark", "1 to 40"},
 		{"mark dot", strings.Replace(minimalUS, "mark: M1", "mark: '.'", 1), "mark", 1, "not a usable mark", ""},
 		{"mark slash", strings.Replace(minimalUS, "mark: M1", "mark: a/b", 1), "mark", 1, "not a usable mark", ""},
+		// Issue 11: a mark names its folder and files; '.' hides them and '-' reads as an option.
+		{"mark hidden", strings.Replace(minimalUS, "mark: M1", "mark: .BR-1", 1), "mark", 1, "not a usable mark", "not starting with '.' or '-'"},
+		{"mark option", strings.Replace(minimalUS, "mark: M1", "mark: -rf", 1), "mark", 1, "not a usable mark", "not starting with '.' or '-'"},
 		{"load missing", "mark: A\nmember: {shape: flat}\n", "load", 1, "is required", ""},
 		{"load required zero", strings.Replace(minimalUS, "95 kip", "0 kip", 1), "load.required", 3, "greater than zero", ""},
 		{"load all zero", strings.Replace(minimalUS, "required: 95 kip", "dead: 0 kip", 1), "load", 2, "no load greater than zero", ""},
