@@ -12,27 +12,26 @@ import (
 	"github.com/yofu/dxf/table"
 
 	"gaugeline/detail"
+	"gaugeline/fileset"
 	"gaugeline/rules/units"
 )
 
-// File is one DXF file to write: its name (no directory) and content.
-type File struct {
-	Name string
-	Data []byte
-}
+// File is one file drawn: its name and bytes (a file of a set, see
+// package fileset).
+type File = fileset.File
 
 // Files draws the cut sheet MARK.dxf and, unless the sheet is not for
 // fabrication, the CAM file MARK-PART.cam.dxf of each part, in that order,
 // each starting with the sheet's stamp (see Comment). Drawing cannot fail
 // today; the error is there for a writer that can.
 func Files(s *detail.Sheet) ([]File, error) {
-	out := []File{{s.Mark + ".dxf", drawSheet(s, s.Stamp)}}
+	out := []File{{Name: s.Mark + ".dxf", Data: drawSheet(s, s.Stamp)}}
 	if s.NotForFabrication {
 		return out, nil
 	}
 	for i := range s.Views {
 		p := &s.Views[i].Part
-		out = append(out, File{s.Mark + "-" + p.Name + ".cam.dxf", drawCAM(p, s.Units, s.Stamp)})
+		out = append(out, File{Name: s.Mark + "-" + p.Name + ".cam.dxf", Data: drawCAM(p, s.Units, s.Stamp)})
 	}
 	return out, nil
 }
@@ -58,7 +57,7 @@ func drawCAM(part *detail.Part, sys units.System, stamp string) []byte {
 
 // CommentPrefix starts the DXF comment (group 999) that carries a run
 // stamp at the top of every file of a file set.
-const CommentPrefix = "gaugeline stamp: "
+const CommentPrefix = fileset.StampPrefix
 
 // Comment puts the stamp in a DXF comment (group code 999, which readers
 // skip) before the first section of data; an empty stamp leaves data as

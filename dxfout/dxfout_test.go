@@ -368,7 +368,7 @@ func allFiles(path string) ([]File, error) {
 		if err != nil {
 			return nil, err
 		}
-		fs = append(fs, File{s.Views[i].Part.Name, b})
+		fs = append(fs, File{Name: s.Views[i].Part.Name, Data: b})
 	}
 	return fs, nil
 }

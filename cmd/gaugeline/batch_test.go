@@ -15,6 +15,8 @@ import (
 	"syscall"
 	"testing"
 	"time"
+
+	"gaugeline/fileset"
 )
 
 // summaryRow is one row of summary.csv.
@@ -80,7 +82,7 @@ func checkRows(t *testing.T, got []summaryRow, want []wantRow) {
 func noTemps(t *testing.T, dir string) {
 	t.Helper()
 	for _, n := range dirNames(t, dir) {
-		if n != lockName && (strings.HasSuffix(n, ".tmp") || strings.HasPrefix(n, ".")) {
+		if n != fileset.LockName && (strings.HasSuffix(n, ".tmp") || strings.HasPrefix(n, ".")) {
 			t.Errorf("left behind in %s: %s", dir, n)
 		}
 	}
@@ -96,7 +98,7 @@ func outFiles(t *testing.T, dir string) []string {
 			return err
 		}
 		rel, _ := filepath.Rel(dir, p)
-		if rel != lockName {
+		if rel != fileset.LockName {
 			names = append(names, filepath.ToSlash(rel))
 		}
 		return nil
@@ -110,7 +112,7 @@ func outFiles(t *testing.T, dir string) []string {
 
 // setOf is the files of a mark's set folder, its manifest included.
 func setOf(mark string, names ...string) []string {
-	out := []string{mark + "/" + mark + manifestExt}
+	out := []string{mark + "/" + mark + fileset.ManifestExt}
 	for _, n := range names {
 		out = append(out, mark+"/"+n)
 	}
@@ -563,18 +565,7 @@ func TestBatchInputs(t *testing.T) {
 			t.Errorf("commentStart(%q): kept %q, want %q", tt.line, got, tt.want)
 		}
 	}
-	for _, mark := range []string{"BR-12", "TD-21.b", "a_b", "A-member.cam"} {
-		if err := checkSetName(mark); err != nil {
-			t.Errorf("checkSetName(%q): %v", mark, err)
-		}
-	}
-	// Issue 11: marks starting with '.' or '-' are refused, and so are the
-	// batch's own file names (in any case).
-	for _, mark := range []string{"../x", "a/b", `a\b`, "C:x", ".x", "-rf", "summary.csv", "SUMMARY.md"} {
-		if err := checkSetName(mark); err == nil {
-			t.Errorf("checkSetName(%q) accepted it", mark)
-		}
-	}
+	// Mark names: see fileset.TestCheckName.
 }
 
 // Issue 11: a FIFO (or any file that is not a regular file) among the jobs

@@ -23,6 +23,7 @@ import (
 	"gaugeline/detail"
 	"gaugeline/detail/measured"
 	"gaugeline/dxfout"
+	"gaugeline/fileset"
 )
 
 // The batch runner. Jobs run on a pool of workers; each job's files are
@@ -203,7 +204,7 @@ func (g *markGate) pass(i int, file, mark string) string {
 	if mark == "" {
 		return ""
 	}
-	if err := checkSetName(mark); err != nil {
+	if err := fileset.CheckName(mark); err != nil {
 		return err.Error()
 	}
 	if o, taken := g.owners[strings.ToLower(mark)]; taken {
@@ -299,11 +300,11 @@ func runJob(cfg batchConfig, gate *markGate, i int, path string) (row batchRow) 
 	job.Stamp = stampFor(mode, job)
 	files, err := jobFiles(cfg, job, &row)
 	if err == nil {
-		err = writeSet(cfg.out, fileSet{name: mark, stamp: job.Stamp, files: files})
+		err = fileset.Write(cfg.out, fileset.Set{Name: mark, Stamp: job.Stamp, Files: files})
 	}
 	if err != nil {
 		row = errorRow(row, path, err)
-		removeSet(cfg.out, mark) // an old set must not outlive a job that no longer reads
+		fileset.Remove(cfg.out, mark) // an old set must not outlive a job that no longer reads
 		return row
 	}
 	row.Set = mark
@@ -485,7 +486,7 @@ func runLine(cfg batchConfig, files []string) string {
 // last run's summary before any set is touched, so a run that is killed
 // leaves this, never a summary of an earlier run.
 func summaryRunning(run string) []byte {
-	return []byte("# Batch summary: RUN NOT FINISHED\n\nRun: " + run + "\n\n" +
+	return []byte(fileset.UnfinishedTitle + "\n\nRun: " + run + "\n\n" +
 		"This run started and has not written its summary: it is still running, or it was stopped before\n" +
 		"the end. Each mark's folder holds a whole file set, of this run or an earlier one; run\n" +
 		"'gaugeline audit' on this folder to see which, or run the batch again.\n\n> " + detail.Caution + "\n")

@@ -16,6 +16,7 @@ import (
 	"gaugeline/detail/calc"
 	"gaugeline/detail/measured"
 	"gaugeline/dxfout"
+	"gaugeline/fileset"
 	"gaugeline/rules/units"
 )
 
@@ -131,11 +132,11 @@ func demoWrite(p *detail.Proposal, dir string, out io.Writer) error {
 		return err
 	}
 	files := append([]dxfout.File{
-		stamped(dxfout.File{Name: mark + ".yaml", Data: p.LayoutJob}, p.Job.Stamp),
+		fileset.Stamped(dxfout.File{Name: mark + ".yaml", Data: p.LayoutJob}, p.Job.Stamp),
 		{Name: mark + ".json", Data: js},
 		{Name: mark + ".html", Data: html},
 	}, dxfs...)
-	if err := writeSet(dir, fileSet{name: mark, stamp: p.Job.Stamp, files: files}); err != nil {
+	if err := fileset.Write(dir, fileset.Set{Name: mark, Stamp: p.Job.Stamp, Files: files}); err != nil {
 		return err
 	}
 	fmt.Fprintf(out, "%s  %s %s, demand %.1f %s\n", mark, d.Conn.Member.Shape, d.Info.Designation,
@@ -177,7 +178,7 @@ func demoReverify(p *detail.Proposal, dir string, out io.Writer) error {
 	// fabrication drawing, and is made at another time.
 	qaSet := mark + "-QA"
 	stamp := p.Job.Stamp
-	meas := stamped(dxfout.File{Name: mark + "-measured.csv", Data: demoMeasured(d)}, stamp)
+	meas := fileset.Stamped(dxfout.File{Name: mark + "-measured.csv", Data: demoMeasured(d)}, stamp)
 	csv := filepath.Join(dir, qaSet, meas.Name)
 	unit := measured.Inches
 	if d.Job.Units == units.SI {
@@ -195,8 +196,8 @@ func demoReverify(p *detail.Proposal, dir string, out io.Writer) error {
 	if err := ab.WriteMarkdown(&md); err != nil {
 		return err
 	}
-	qa := stamped(dxfout.File{Name: mark + "-qa.md", Data: []byte(md.String())}, stamp)
-	if err := writeSet(dir, fileSet{name: qaSet, stamp: stamp, files: []dxfout.File{meas, qa}}); err != nil {
+	qa := fileset.Stamped(dxfout.File{Name: mark + "-qa.md", Data: []byte(md.String())}, stamp)
+	if err := fileset.Write(dir, fileset.Set{Name: qaSet, Stamp: stamp, Files: []dxfout.File{meas, qa}}); err != nil {
 		return err
 	}
 	fmt.Fprintf(out, "QA  %s as fabricated, measured holes in %s\n", mark, csv)

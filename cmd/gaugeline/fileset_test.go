@@ -11,6 +11,8 @@ import (
 	"syscall"
 	"testing"
 	"time"
+
+	"gaugeline/fileset"
 )
 
 // killJobs writes n passing angle jobs K-0…K-(n-1) into a new folder, with
@@ -31,15 +33,15 @@ func killJobs(t *testing.T, n int, pitch string) (string, map[string]string) {
 }
 
 // auditProblems runs the folder check and returns its problems.
-func auditProblems(t *testing.T, out string) (*auditReport, []auditFinding) {
+func auditProblems(t *testing.T, out string) (*fileset.Report, []fileset.Finding) {
 	t.Helper()
-	a, err := auditFolder(out)
+	a, err := fileset.Audit(out)
 	if err != nil {
 		t.Fatal(err)
 	}
-	var p []auditFinding
+	var p []fileset.Finding
 	for _, f := range a.Findings {
-		if f.problem() {
+		if f.Problem() {
 			p = append(p, f)
 		}
 	}
@@ -82,7 +84,7 @@ func TestKilledBatchLeavesWholeSets(t *testing.T) {
 
 		a, problems := auditProblems(t, out)
 		for _, p := range problems {
-			if p.Kind != auditUnfinished { // a killed run's summary says so: expected
+			if p.Kind != fileset.Unfinished { // a killed run's summary says so: expected
 				t.Errorf("kill %d: %s: %s: %s", k, p.Path, p.Kind, p.Msg)
 			}
 		}
@@ -221,11 +223,11 @@ func TestSetFilesCarryOneStamp(t *testing.T) {
 	}
 	want := fmt.Sprintf("%s; propose; input sha256 %x", toolVersion(), sha256.Sum256(data))
 	for _, f := range outFiles(t, filepath.Join(out, "PR-VB2")) {
-		if strings.HasSuffix(f, manifestExt) {
+		if strings.HasSuffix(f, fileset.ManifestExt) {
 			continue
 		}
 		b, _ := os.ReadFile(filepath.Join(out, "PR-VB2", f))
-		if got, ok := fileStamp(f, b); !ok || got != want {
+		if got, ok := fileset.FileStamp(f, b); !ok || got != want {
 			t.Errorf("%s: stamp %q (%v), want %q", f, got, ok, want)
 		}
 	}

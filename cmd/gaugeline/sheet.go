@@ -11,6 +11,7 @@ import (
 
 	"gaugeline/detail"
 	"gaugeline/dxfout"
+	"gaugeline/fileset"
 )
 
 type sheetOptions struct {
@@ -74,7 +75,7 @@ func runSheet(_ context.Context, o *rootOptions, so sheetOptions, path string, o
 		return err
 	}
 	defer unlock()
-	if err := writeSet(so.dir, fileSet{name: job.Mark, stamp: job.Stamp, files: files}); err != nil {
+	if err := fileset.Write(so.dir, fileset.Set{Name: job.Mark, Stamp: job.Stamp, Files: files}); err != nil {
 		return &detail.InputError{File: so.dir, Msg: err.Error()}
 	}
 	for _, f := range files {

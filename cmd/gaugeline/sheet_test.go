@@ -7,6 +7,8 @@ import (
 	"slices"
 	"strings"
 	"testing"
+
+	"gaugeline/fileset"
 )
 
 // insunits reads $INSUNITS from a DXF's header (group code pairs).
@@ -79,7 +81,7 @@ func TestSheetCommand(t *testing.T) {
 				t.Fatalf("wrote %v, want %v", names, want)
 			}
 			for _, n := range names {
-				if strings.HasSuffix(n, manifestExt) {
+				if strings.HasSuffix(n, fileset.ManifestExt) {
 					continue
 				}
 				data, err := os.ReadFile(filepath.Join(out, n))

@@ -1,4 +1,4 @@
-package main
+package fileset
 
 import "golang.org/x/sys/unix"
 

@@ -1,4 +1,8 @@
-package main
+// Package fileset is the layout of gaugeline's output folders: one folder
+// per mark holding a whole file set and its manifest, written together and
+// swapped in as one; the stamp every file carries; the folder's lock; and
+// the audit that checks a folder. It imports only the standard library.
+package fileset
 
 import (
 	"bufio"
@@ -13,9 +17,6 @@ import (
 	"path/filepath"
 	"slices"
 	"strings"
-
-	"gaugeline/detail"
-	"gaugeline/dxfout"
 )
 
 // File sets. Everything gaugeline writes for one mark (its JSON, cut
@@ -32,38 +33,57 @@ import (
 // marks' files can never collide; marks that differ only in case are one
 // folder on Windows and macOS and are refused as duplicates by batch.
 
-// manifestExt ends the manifest's name: MARK.files.
-const manifestExt = ".files"
+// ManifestExt ends the manifest's name: MARK.files.
+const ManifestExt = ".files"
 
-// lockName is the lock a run holds on an output folder while it writes.
-const lockName = ".gaugeline.lock"
+// LockName is the lock a run holds on an output folder while it writes.
+const LockName = ".gaugeline.lock"
 
-// batchFiles are a batch's own files in the output folder; no mark may
-// have their names.
-var batchFiles = []string{"summary.csv", "summary.md"}
+// The batch summary's files in an output folder; no mark may have their
+// names. UnfinishedTitle starts summary.md while a run is under way.
+const (
+	SummaryCSV      = "summary.csv"
+	SummaryMD       = "summary.md"
+	UnfinishedTitle = "# Batch summary: RUN NOT FINISHED"
+)
 
-// stampPrefix starts the stamp line in the formats that take a comment.
-const stampPrefix = "gaugeline stamp: "
+var indexFiles = []string{SummaryCSV, SummaryMD}
 
-// fileSet is one mark's files, written together.
-type fileSet struct {
-	name  string // the mark: the set's folder and the manifest's name
-	stamp string
-	files []dxfout.File // names inside the set's folder
+// StampPrefix starts the stamp in the comment of every format that takes
+// one (the DXF 999 comment included).
+const StampPrefix = "gaugeline stamp: "
+
+// File is one output file: its name in its folder and its bytes.
+type File struct {
+	Name string
+	Data []byte
 }
 
-// toolVersion names this build in a stamp: "gaugeline " and version().
-func toolVersion() string { return "gaugeline " + version() }
-
-// stampFor is the stamp of a set made by mode ("check", "propose") from
-// the job's file.
-func stampFor(mode string, job *detail.Job) string {
-	return fmt.Sprintf("%s; %s; input sha256 %s", toolVersion(), mode, job.SHA256)
+// Set is one mark's files, written together.
+type Set struct {
+	Name  string // the mark: the set's folder and the manifest's name
+	Stamp string
+	Files []File // names inside the set's folder
 }
 
-// checkSetName refuses a mark that cannot name a set folder: empty,
+// Stamp is the stamp of a set made by tool ("gaugeline v1.2, go1.26"),
+// in mode ("check", "propose"), from an input of the given SHA-256 (hex).
+func Stamp(tool, mode, inputSHA256 string) string {
+	return fmt.Sprintf("%s; %s; input sha256 %s", tool, mode, inputSHA256)
+}
+
+// StampInput is the input SHA-256 a stamp names ("" when it names none).
+func StampInput(stamp string) string {
+	_, in, ok := strings.Cut(stamp, "; input sha256 ")
+	if !ok {
+		return ""
+	}
+	return in
+}
+
+// CheckName refuses a mark that cannot name a set folder: empty,
 // hidden or option-like, a path, or a batch file's name.
-func checkSetName(mark string) error {
+func CheckName(mark string) error {
 	switch {
 	case mark == "":
 		return errors.New("a file set needs a mark")
@@ -72,7 +92,7 @@ func checkSetName(mark string) error {
 	case mark != filepath.Base(mark) || !filepath.IsLocal(mark) || strings.ContainsAny(mark, `/\:*?"<>|`):
 		return fmt.Errorf("mark %q does not make a safe folder name", mark)
 	}
-	for _, b := range batchFiles {
+	for _, b := range indexFiles {
 		if strings.EqualFold(mark, b) {
 			return fmt.Errorf("mark %q is the name of the batch's own %s", mark, b)
 		}
@@ -80,22 +100,22 @@ func checkSetName(mark string) error {
 	return nil
 }
 
-// stamped returns f with the stamp in it where f's format takes a comment
+// Stamped returns f with the stamp in it where f's format takes a comment
 // line and gaugeline does not already write one (JSON, HTML and DXF carry
 // the job's stamp from detail and dxfout).
-func stamped(f dxfout.File, stamp string) dxfout.File {
+func Stamped(f File, stamp string) File {
 	switch filepath.Ext(f.Name) {
 	case ".yaml", ".csv":
-		f.Data = append([]byte("# "+stampPrefix+stamp+"\n"), f.Data...)
+		f.Data = append([]byte("# "+StampPrefix+stamp+"\n"), f.Data...)
 	case ".md":
-		f.Data = append([]byte("<!-- "+stampPrefix+stamp+" -->\n"), f.Data...)
+		f.Data = append([]byte("<!-- "+StampPrefix+stamp+" -->\n"), f.Data...)
 	}
 	return f
 }
 
-// fileStamp reads the stamp a file of a set carries; ok is false when it
+// FileStamp reads the stamp a file of a set carries; ok is false when it
 // carries none.
-func fileStamp(name string, data []byte) (stamp string, ok bool) {
+func FileStamp(name string, data []byte) (stamp string, ok bool) {
 	first := func() string {
 		line, _, _ := bytes.Cut(data, []byte("\n"))
 		return strings.TrimRight(string(line), "\r")
@@ -114,7 +134,7 @@ func fileStamp(name string, data []byte) (stamp string, ok bool) {
 		if len(lines) < 2 || strings.TrimSpace(lines[0]) != "999" {
 			return "", false
 		}
-		return strings.CutPrefix(strings.TrimRight(lines[1], "\r"), dxfout.CommentPrefix)
+		return strings.CutPrefix(strings.TrimRight(lines[1], "\r"), StampPrefix)
 	case ".html":
 		const open = `<meta name="gaugeline-stamp" content="`
 		_, rest, found := bytes.Cut(data, []byte(open))
@@ -127,9 +147,9 @@ func fileStamp(name string, data []byte) (stamp string, ok bool) {
 		}
 		return html.UnescapeString(string(v)), true
 	case ".yaml", ".csv":
-		return strings.CutPrefix(first(), "# "+stampPrefix)
+		return strings.CutPrefix(first(), "# "+StampPrefix)
 	case ".md":
-		s, ok := strings.CutPrefix(first(), "<!-- "+stampPrefix)
+		s, ok := strings.CutPrefix(first(), "<!-- "+StampPrefix)
 		if !ok {
 			return "", false
 		}
@@ -140,11 +160,11 @@ func fileStamp(name string, data []byte) (stamp string, ok bool) {
 
 // manifest is the set's list of files: the stamp, then each file's
 // SHA-256 and name, in the set's order.
-func (s fileSet) manifest() []byte {
+func (s Set) Manifest() []byte {
 	var b bytes.Buffer
-	fmt.Fprintf(&b, "# gaugeline file set %s: these files were written together; check with 'gaugeline audit'.\n", s.name)
-	fmt.Fprintf(&b, "stamp: %s\n", s.stamp)
-	for _, f := range s.files {
+	fmt.Fprintf(&b, "# gaugeline file set %s: these files were written together; check with 'gaugeline audit'.\n", s.Name)
+	fmt.Fprintf(&b, "stamp: %s\n", s.Stamp)
+	for _, f := range s.Files {
 		fmt.Fprintf(&b, "%x  %s\n", sha256.Sum256(f.Data), f.Name)
 	}
 	return b.Bytes()
@@ -153,8 +173,8 @@ func (s fileSet) manifest() []byte {
 // manifestEntry is one file a manifest lists.
 type manifestEntry struct{ sum, name string }
 
-// readManifest parses a manifest written by fileSet.manifest.
-func readManifest(data []byte) (stamp string, entries []manifestEntry, err error) {
+// ReadManifest parses a manifest written by fileSet.manifest.
+func ReadManifest(data []byte) (stamp string, entries []manifestEntry, err error) {
 	sc := bufio.NewScanner(bytes.NewReader(data))
 	for n := 1; sc.Scan(); n++ {
 		line := sc.Text()
@@ -176,9 +196,9 @@ func readManifest(data []byte) (stamp string, entries []manifestEntry, err error
 	return stamp, entries, sc.Err()
 }
 
-// isSet reports whether dir is a set folder gaugeline wrote (it holds the
+// IsSet reports whether dir is a set folder gaugeline wrote (it holds the
 // manifest of its own name) or an empty folder.
-func isSet(dir string) bool {
+func IsSet(dir string) bool {
 	entries, err := os.ReadDir(dir)
 	if err != nil {
 		return false
@@ -186,32 +206,32 @@ func isSet(dir string) bool {
 	if len(entries) == 0 {
 		return true
 	}
-	_, err = os.Stat(filepath.Join(dir, filepath.Base(dir)+manifestExt))
+	_, err = os.Stat(filepath.Join(dir, filepath.Base(dir)+ManifestExt))
 	return err == nil
 }
 
-// writeSet writes the set into out/NAME, replacing what an earlier run
+// Write writes the set into out/NAME, replacing what an earlier run
 // left there as a whole. A folder of that name that is not a set gaugeline
 // wrote is never touched.
-func writeSet(out string, s fileSet) error {
-	if err := checkSetName(s.name); err != nil {
+func Write(out string, s Set) error {
+	if err := CheckName(s.Name); err != nil {
 		return err
 	}
-	seen := map[string]bool{strings.ToLower(s.name + manifestExt): true}
-	for _, f := range s.files {
+	seen := map[string]bool{strings.ToLower(s.Name + ManifestExt): true}
+	for _, f := range s.Files {
 		if f.Name != filepath.Base(f.Name) || !filepath.IsLocal(f.Name) || seen[strings.ToLower(f.Name)] {
-			panic(fmt.Sprintf("gaugeline: file set %s: file name %q is not one of its own", s.name, f.Name))
+			panic(fmt.Sprintf("gaugeline: file set %s: file name %q is not one of its own", s.Name, f.Name))
 		}
 		seen[strings.ToLower(f.Name)] = true
 	}
 	if err := os.MkdirAll(out, 0o755); err != nil {
 		return fmt.Errorf("cannot create the output directory: %w", err)
 	}
-	target := filepath.Join(out, s.name)
-	if fi, err := os.Lstat(target); err == nil && (!fi.IsDir() || !isSet(target)) {
+	target := filepath.Join(out, s.Name)
+	if fi, err := os.Lstat(target); err == nil && (!fi.IsDir() || !IsSet(target)) {
 		return fmt.Errorf("%s exists and is not a gaugeline file set: move it away, or write to another folder", target)
 	}
-	stage, err := os.MkdirTemp(out, "."+s.name+".new-")
+	stage, err := os.MkdirTemp(out, "."+s.Name+".new-")
 	if err != nil {
 		return fmt.Errorf("cannot write into %s: %w", out, err)
 	}
@@ -223,11 +243,11 @@ func writeSet(out string, s fileSet) error {
 }
 
 // writeStage writes the set's files and manifest into the staging folder.
-func writeStage(stage string, s fileSet) error {
+func writeStage(stage string, s Set) error {
 	if err := os.Chmod(stage, 0o755); err != nil {
 		return err
 	}
-	files := append(slices.Clone(s.files), dxfout.File{Name: s.name + manifestExt, Data: s.manifest()})
+	files := append(slices.Clone(s.Files), File{Name: s.Name + ManifestExt, Data: s.Manifest()})
 	for _, f := range files {
 		if err := os.WriteFile(filepath.Join(stage, f.Name), f.Data, 0o644); err != nil {
 			return fmt.Errorf("cannot write %s: %w", f.Name, err)
@@ -266,12 +286,12 @@ func swapIn(stage, target string) error {
 	return nil
 }
 
-// removeSet takes a mark's set away as a whole (a job that no longer
+// Remove takes a mark's set away as a whole (a job that no longer
 // passes, or no longer reads, must not keep an old cut sheet). A folder
 // that is not a set is left alone.
-func removeSet(out, name string) {
+func Remove(out, name string) {
 	target := filepath.Join(out, name)
-	if checkSetName(name) != nil || !isSet(target) {
+	if CheckName(name) != nil || !IsSet(target) {
 		return
 	}
 	old, err := os.MkdirTemp(out, "."+name+".old-")
@@ -284,41 +304,39 @@ func removeSet(out, name string) {
 	}
 }
 
-// isLeftover reports whether an output folder entry is a staging folder
+// IsLeftover reports whether an output folder entry is a staging folder
 // or temporary file an interrupted run left behind.
-func isLeftover(name string) bool {
-	return strings.HasPrefix(name, ".") && name != lockName &&
+func IsLeftover(name string) bool {
+	return strings.HasPrefix(name, ".") && name != LockName &&
 		(strings.Contains(name, ".new-") || strings.Contains(name, ".old-") || strings.HasSuffix(name, ".tmp"))
 }
 
-// cleanLeftovers removes what interrupted runs left in out. Call it only
+// CleanLeftovers removes what interrupted runs left in out. Call it only
 // while holding the folder's lock, so no running writer owns them.
-func cleanLeftovers(out string) {
+func CleanLeftovers(out string) {
 	entries, err := os.ReadDir(out)
 	if err != nil {
 		return
 	}
 	for _, e := range entries {
-		if isLeftover(e.Name()) {
+		if IsLeftover(e.Name()) {
 			os.RemoveAll(filepath.Join(out, e.Name()))
 		}
 	}
 }
 
-// lockOutput creates out if needed, takes its lock (waiting, with a note
-// on stderr, while another gaugeline run writes there) and cleans what
+// Lock creates out if needed, takes its lock (calling wait once, then
+// waiting, while another gaugeline run writes there) and cleans what
 // interrupted runs left. unlock releases it; the system releases it too
 // when the process ends, however it ends.
-func lockOutput(out string, note func(string)) (unlock func(), err error) {
+func Lock(out string, wait func()) (unlock func(), err error) {
 	if err := os.MkdirAll(out, 0o755); err != nil {
-		return nil, &detail.InputError{File: out, Msg: "cannot create the output directory: " + errText(err)}
+		return nil, fmt.Errorf("cannot create the output directory: %w", err)
 	}
-	unlock, err = lockFile(filepath.Join(out, lockName), func() {
-		note(fmt.Sprintf("waiting for another gaugeline run writing into %s", out))
-	})
+	unlock, err = lockFile(filepath.Join(out, LockName), wait)
 	if err != nil {
-		return nil, &detail.InputError{File: out, Msg: "cannot lock the output directory: " + errText(err)}
+		return nil, fmt.Errorf("cannot lock the output directory: %w", err)
 	}
-	cleanLeftovers(out)
+	CleanLeftovers(out)
 	return unlock, nil
 }

@@ -1,6 +1,6 @@
 //go:build !unix
 
-package main
+package fileset
 
 // lockFile does not lock where the system has no flock: concurrent runs
 // into one folder are then the user's to avoid.
