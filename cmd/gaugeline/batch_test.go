@@ -16,6 +16,7 @@ import (
 	"testing"
 	"time"
 
+	"gaugeline/batch"
 	"gaugeline/fileset"
 )
 
@@ -34,8 +35,8 @@ func readSummary(t *testing.T, out string) []summaryRow {
 	if err != nil {
 		t.Fatalf("summary.csv: %v", err)
 	}
-	if len(recs) == 0 || !slices.Equal(recs[0], summaryHeader) {
-		t.Fatalf("summary.csv header %v, want %v", recs[0], summaryHeader)
+	if len(recs) == 0 || !slices.Equal(recs[0], batch.Header) {
+		t.Fatalf("summary.csv header %v, want %v", recs[0], batch.Header)
 	}
 	var rows []summaryRow
 	for _, r := range recs[1:] {
@@ -547,25 +548,6 @@ func TestBatchInterrupt(t *testing.T) {
 			noTemps(t, out)
 		})
 	}
-}
-
-func TestBatchInputs(t *testing.T) {
-	for _, tt := range []struct{ line, want string }{
-		{"a.yaml", "a.yaml"},
-		{"a.yaml # note", "a.yaml "},
-		{"# all comment", ""},
-		{"b#1.yaml", "b#1.yaml"},
-		{"\tc.yaml\t# tab", "\tc.yaml\t"},
-	} {
-		got := tt.line
-		if i := commentStart(got); i >= 0 {
-			got = got[:i]
-		}
-		if got != tt.want {
-			t.Errorf("commentStart(%q): kept %q, want %q", tt.line, got, tt.want)
-		}
-	}
-	// Mark names: see fileset.TestCheckName.
 }
 
 // Issue 11: a FIFO (or any file that is not a regular file) among the jobs

@@ -1,525 +1,33 @@
 package main
 
 import (
-	"bufio"
-	"bytes"
 	"context"
-	"crypto/sha256"
-	"encoding/csv"
 	"errors"
 	"fmt"
 	"io"
-	"io/fs"
-	"math"
 	"os"
 	"os/signal"
 	"path/filepath"
 	"runtime"
-	"strconv"
-	"strings"
-	"sync"
 	"syscall"
 
+	"gaugeline/batch"
 	"gaugeline/detail"
-	"gaugeline/detail/measured"
 	"gaugeline/dxfout"
-	"gaugeline/fileset"
 )
 
-// The batch runner. Jobs run on a pool of workers; each job's files are
-// written (atomically, all of them or none) as soon as it finishes, so the
-// only thing a batch keeps is one summary row per job. Marks are claimed in
-// input order through a gate, so that which of two jobs with the same mark
-// is the duplicate never depends on scheduling.
-
-// batchVerdict is the outcome of one job of a batch.
-type batchVerdict int
-
-const (
-	batchPass   batchVerdict = iota
-	batchFail                // a limit state or rule fails, or no layout passes
-	batchError               // bad input: nothing written
-	batchNotRun              // the batch was interrupted before the job started
-)
-
-func (v batchVerdict) String() string { return [...]string{"pass", "fail", "error", "not run"}[v] }
-
-// batchRow is one job's line of the summary.
-type batchRow struct {
-	File      string
-	Mark      string // "" when the job could not be read
-	Verdict   batchVerdict
-	Governing string  // limit state or rule id; "" when none
-	Ratio     float64 // governing ratio; NaN when none
-	Bolts     int     // 0 when none
-	Message   string  // the error, or what fails
-	Hint      string  // advice on an error
-	JSON      int     // files written: JSON and DXF
-	DXF       int
-	Set       string // the folder of the mark's file set; "" when none was written
-	Input     string // SHA-256 of the job file, as in the set's stamp
-}
-
-// batchConfig is what every job of a batch shares.
-type batchConfig struct {
-	out     string // output directory, existing and locked
-	propose bool
-	sheets  bool
-	workers int
-}
-
-// maxListSize bounds a list file: 10,000 jobs take well under 1 MiB.
-const maxListSize = 16 << 20
-
-// batchInputs returns the job files of a folder (every *.yaml, sorted by
-// name, not recursive) or of a list file (one path per line, relative to
-// the list file; '#' starts a comment), in input order.
-func batchInputs(arg string) ([]string, error) {
-	fi, err := os.Stat(arg)
-	if err != nil {
-		return nil, &detail.InputError{File: arg, Msg: "cannot read the jobs: " + errText(err)}
-	}
-	if fi.IsDir() {
-		entries, err := os.ReadDir(arg) // sorted by name
-		if err != nil {
-			return nil, &detail.InputError{File: arg, Msg: "cannot read the folder: " + errText(err)}
-		}
-		var files []string
-		for _, e := range entries {
-			if !e.IsDir() && strings.HasSuffix(e.Name(), ".yaml") {
-				files = append(files, filepath.Join(arg, e.Name()))
-			}
-		}
-		if len(files) == 0 {
-			return nil, &detail.InputError{File: arg, Msg: "no *.yaml job in the folder",
-				Hint: "batch reads the *.yaml files of the folder itself, not of its subfolders"}
-		}
-		return files, nil
-	}
-	if !fi.Mode().IsRegular() {
-		return nil, &detail.InputError{File: arg, Msg: "not a folder or a regular list file (" + fi.Mode().Type().String() + ")",
-			Hint: "batch reads a folder of jobs or a text file listing them"}
-	}
-	if ext := filepath.Ext(arg); ext == ".yaml" || ext == ".yml" {
-		return nil, usageError{fmt.Errorf("%s is a job, not a folder or a list of jobs (for one job, use 'gaugeline check')", arg)}
-	}
-	f, err := measured.OpenRegular(arg) // never blocks on a FIFO swapped in after the Stat
-	if err != nil {
-		return nil, &detail.InputError{File: arg, Msg: "cannot read the list: " + errText(err)}
-	}
-	defer f.Close()
-	data, err := io.ReadAll(io.LimitReader(f, maxListSize+1))
-	if err != nil {
-		return nil, &detail.InputError{File: arg, Msg: "cannot read the list: " + errText(err)}
-	}
-	if len(data) > maxListSize {
-		return nil, &detail.InputError{File: arg, Msg: fmt.Sprintf("the list is larger than %d MiB", maxListSize>>20),
-			Hint: "a list holds one job path per line"}
-	}
-	base := filepath.Dir(arg)
-	var files []string
-	sc := bufio.NewScanner(bytes.NewReader(data))
-	sc.Buffer(nil, maxListSize)
-	for line := 1; sc.Scan(); line++ {
-		s := sc.Text()
-		if i := commentStart(s); i >= 0 {
-			s = s[:i]
-		}
-		s = strings.TrimSpace(s)
-		if s == "" {
-			continue
-		}
-		if strings.ContainsRune(s, 0) {
-			return nil, &detail.InputError{File: arg, Line: line, Msg: "not a list of job paths (binary data)"}
-		}
-		if !filepath.IsAbs(s) {
-			s = filepath.Join(base, s)
-		}
-		files = append(files, s)
-	}
-	if err := sc.Err(); err != nil {
-		return nil, &detail.InputError{File: arg, Msg: "cannot read the list: " + err.Error()}
-	}
-	if len(files) == 0 {
-		return nil, &detail.InputError{File: arg, Msg: "the list names no job",
-			Hint: "a list holds one job path per line, relative to the list; '#' starts a comment"}
-	}
-	return files, nil
-}
-
-// commentStart is the index of a '#' at the start of s or after a blank,
-// -1 when there is none: a path may contain '#' inside a name.
-func commentStart(s string) int {
-	for i := 0; i < len(s); i++ {
-		if s[i] == '#' && (i == 0 || s[i-1] == ' ' || s[i-1] == '\t') {
-			return i
-		}
-	}
-	return -1
-}
-
-// errText drops the path a *fs.PathError repeats.
-func errText(err error) string {
-	var pe *fs.PathError
-	if errors.As(err, &pe) {
-		return pe.Err.Error()
-	}
-	return err.Error()
-}
-
-// markGate hands out set names (marks) in input order. Job i waits at the
-// gate until jobs 0…i-1 have passed it. That never deadlocks: jobs are
-// dispatched in input order and each reaches the gate after reading its
-// own file only, so the lowest job not yet through is always running.
-type markGate struct {
-	mu     sync.Mutex
-	turn   *sync.Cond
-	next   int
-	owners map[string]markOwner // lower-cased mark → who writes its set
-}
-
-type markOwner struct{ file, mark string }
-
-func newMarkGate() *markGate {
-	g := &markGate{owners: map[string]markOwner{}}
-	g.turn = sync.NewCond(&g.mu)
-	return g
-}
-
-// pass lets job i through the gate and claims the set of its mark ("" when
-// the job could not be read). It returns why the set cannot be had, ""
-// when it is the job's. Marks are compared without case: on Windows and
-// macOS file systems BR-1 and br-1 are one folder.
-func (g *markGate) pass(i int, file, mark string) string {
-	g.mu.Lock()
-	defer g.mu.Unlock()
-	for g.next < i {
-		g.turn.Wait()
-	}
-	if g.next > i { // through already: a job that panicked in here
-		return ""
-	}
-	g.next++
-	g.turn.Broadcast()
-	if mark == "" {
-		return ""
-	}
-	if err := fileset.CheckName(mark); err != nil {
-		return err.Error()
-	}
-	if o, taken := g.owners[strings.ToLower(mark)]; taken {
-		if o.mark == mark {
-			return fmt.Sprintf("duplicate mark %s, already used by %s", mark, o.file)
-		}
-		return fmt.Sprintf("duplicate mark %s, already used as %s by %s (marks differing only in case name the same folder on Windows and macOS)", mark, o.mark, o.file)
-	}
-	g.owners[strings.ToLower(mark)] = markOwner{file, mark}
-	return ""
-}
-
-// runJobs runs every job on cfg.workers workers and returns the summary
-// rows in input order. done is called (from this goroutine) as each job
-// finishes. Jobs not started when ctx ends are recorded as errors.
-func runJobs(ctx context.Context, cfg batchConfig, files []string, done func()) []batchRow {
-	rows := make([]batchRow, len(files))
-	gate := newMarkGate()
-	next := make(chan int)
-	go func() {
-		defer close(next)
-		for i := range files {
-			select {
-			case next <- i:
-			case <-ctx.Done():
-				return
-			}
-		}
-	}()
-	finished := make(chan int, cfg.workers)
-	var wg sync.WaitGroup
-	for range cfg.workers {
-		wg.Go(func() {
-			for i := range next {
-				rows[i] = runJob(cfg, gate, i, files[i])
-				finished <- i
-			}
-		})
-	}
-	go func() {
-		wg.Wait()
-		close(finished)
-	}()
-	ran := make([]bool, len(files))
-	for i := range finished {
-		ran[i] = true
-		done()
-	}
-	for i, ok := range ran {
-		if !ok {
-			rows[i] = batchRow{File: files[i], Verdict: batchNotRun, Ratio: math.NaN(),
-				Message: files[i] + ": not run: the batch was interrupted"}
-		}
-	}
-	return rows
-}
-
-// runJob runs one job of the batch and writes its files.
-func runJob(cfg batchConfig, gate *markGate, i int, path string) (row batchRow) {
-	row = batchRow{File: path, Ratio: math.NaN()}
-	through := false
-	defer func() {
-		// A programmer's mistake in one job must not stop the others.
-		if r := recover(); r != nil {
-			row = batchRow{File: path, Mark: row.Mark, Verdict: batchError, Ratio: math.NaN(),
-				Message: fmt.Sprintf("%s: internal error, please report it: %v", path, r),
-				Hint:    "gaugeline check (or propose) on this job alone shows where it happens"}
-		}
-		if !through {
-			gate.pass(i, path, "")
-		}
-	}()
-	job, err := detail.LoadJob(path)
-	mark := ""
-	if err == nil {
-		mark = job.Mark
-	}
-	conflict := gate.pass(i, path, mark)
-	through = true
-	if err != nil {
-		return errorRow(row, path, err)
-	}
-	row.Mark = mark
-	if conflict != "" {
-		row.Verdict, row.Message = batchError, path+": "+conflict
-		return row // the names are another job's: touch nothing
-	}
-	row.Input = job.SHA256
-	mode := "check"
-	if cfg.propose {
-		mode = "propose"
-	}
-	job.Stamp = stampFor(mode, job)
-	files, err := jobFiles(cfg, job, &row)
-	if err == nil {
-		err = fileset.Write(cfg.out, fileset.Set{Name: mark, Stamp: job.Stamp, Files: files})
-	}
-	if err != nil {
-		row = errorRow(row, path, err)
-		fileset.Remove(cfg.out, mark) // an old set must not outlive a job that no longer reads
-		return row
-	}
-	row.Set = mark
-	for _, f := range files {
-		if strings.HasSuffix(f.Name, ".json") {
-			row.JSON++
-		} else {
-			row.DXF++
-		}
-	}
-	return row
-}
-
-// errorRow records err as the job's error, keeping file and mark.
-func errorRow(row batchRow, path string, err error) batchRow {
-	row.Verdict, row.Governing, row.Ratio, row.Bolts, row.Hint = batchError, "", math.NaN(), 0, ""
-	var ie *detail.InputError
-	if errors.As(err, &ie) {
-		row.Message, row.Hint = ie.Error(), ie.Hint
-		return row
-	}
-	row.Message = path + ": " + err.Error()
-	return row
-}
-
-// jobFiles checks (or proposes) the job, fills in its summary row and
-// returns the files to write: the JSON, then the sheet and CAM files of a
-// passing layout when asked.
-func jobFiles(cfg batchConfig, job *detail.Job, row *batchRow) ([]dxfout.File, error) {
-	var r *detail.Report
-	var data []byte
-	if cfg.propose {
-		p, err := detail.Propose(job, detail.ProposeOptions{Mode: detail.Pruned, MaxCandidates: defaultMaxCandidates})
-		var le *detail.SearchLimitError
-		if errors.As(err, &le) {
-			return nil, limitError(job, le)
-		}
-		if err != nil {
-			return nil, err
-		}
-		if data, err = p.JSON(detail.Pruned); err != nil {
-			return nil, err
-		}
-		if !p.Found() {
-			row.Verdict, row.Message = batchFail, "no layout passes: "+p.Summary
-			if len(p.Blockers) > 0 {
-				row.Governing = p.Blockers[0].ID
-				if p.Blockers[0].Ratio > 0 {
-					row.Ratio = p.Blockers[0].Ratio
-				}
-			}
-			return []dxfout.File{{Name: job.Mark + ".json", Data: data}}, nil
-		}
-		r = p.Report
-		r.Design.Job.Stamp = job.Stamp // the sheet of the layout job carries the input's stamp
-	} else {
-		d, err := job.Build()
-		if err != nil {
-			return nil, err
-		}
-		if r, err = detail.Check(d); err != nil {
-			return nil, &detail.InputError{File: job.File, Msg: err.Error()}
-		}
-		if data, err = r.JSON(); err != nil {
-			return nil, err
-		}
-	}
-	g := r.GoverningResult()
-	row.Governing, row.Ratio, row.Bolts = g.ID, g.Ratio, len(r.Design.Conn.Holes)
-	files := []dxfout.File{{Name: job.Mark + ".json", Data: data}}
-	if !r.Pass {
-		row.Verdict, row.Message = batchFail, "fails: "+strings.Join(r.Failing(), ", ")
-		return files, nil
-	}
-	row.Verdict = batchPass
-	if !cfg.sheets {
-		return files, nil
-	}
-	s, err := detail.NewSheet(r, false)
-	if err != nil {
-		return nil, err
-	}
-	dxf, err := dxfout.Files(s)
-	if err != nil {
-		return nil, err
-	}
-	return append(files, dxf...), nil
-}
-
-// batchCounts tallies the rows.
-type batchCounts struct{ jobs, pass, fail, errors, notRun, json, dxf int }
-
-func countRows(rows []batchRow) batchCounts {
-	c := batchCounts{jobs: len(rows)}
-	for _, r := range rows {
-		switch r.Verdict {
-		case batchPass:
-			c.pass++
-		case batchFail:
-			c.fail++
-		case batchNotRun:
-			c.notRun++
-		default:
-			c.errors++
-		}
-		c.json += r.JSON
-		c.dxf += r.DXF
-	}
-	return c
-}
-
-// exit is the batch's exit code: an interruption wins over bad input,
+// batchExit is the batch's exit code: an interruption wins over bad input,
 // bad input over a failing job.
-func (c batchCounts) exit() int {
+func batchExit(c batch.Counts) int {
 	switch {
-	case c.notRun > 0:
+	case c.NotRun > 0:
 		return exitInterrupted
-	case c.errors > 0:
+	case c.Errors > 0:
 		return exitInput
-	case c.fail > 0:
+	case c.Fail > 0:
 		return exitFail
 	}
 	return exitOK
-}
-
-func (c batchCounts) String() string {
-	s := fmt.Sprintf("%d jobs: %d pass, %d fail, %d error", c.jobs, c.pass, c.fail, c.errors)
-	if c.notRun > 0 {
-		s += fmt.Sprintf(", %d not run (interrupted)", c.notRun)
-	}
-	return s
-}
-
-var summaryHeader = []string{"file", "mark", "verdict", "governing", "ratio", "bolts", "set", "input_sha256", "message"}
-
-func (r batchRow) fields() []string {
-	ratio, bolts := "", ""
-	if !math.IsNaN(r.Ratio) {
-		ratio = strconv.FormatFloat(r.Ratio, 'f', 3, 64)
-	}
-	if r.Bolts > 0 {
-		bolts = strconv.Itoa(r.Bolts)
-	}
-	msg := r.Message
-	if r.Hint != "" {
-		msg += " (hint: " + r.Hint + ")"
-	}
-	return []string{r.File, r.Mark, r.Verdict.String(), r.Governing, ratio, bolts, r.Set, r.Input, msg}
-}
-
-// summaryCSV is summary.csv: a header, then one row per job.
-func summaryCSV(rows []batchRow) ([]byte, error) {
-	var b bytes.Buffer
-	w := csv.NewWriter(&b)
-	w.Write(summaryHeader)
-	for _, r := range rows {
-		w.Write(r.fields())
-	}
-	w.Flush()
-	return b.Bytes(), w.Error()
-}
-
-// runLine names the run a summary describes: the tool, what it did and
-// the SHA-256 of its list of job files, so that two summaries of different
-// runs never read alike.
-func runLine(cfg batchConfig, files []string) string {
-	mode := "check"
-	if cfg.propose {
-		mode = "propose"
-	}
-	if cfg.sheets {
-		mode += " with cut sheets"
-	}
-	return fmt.Sprintf("%s; %s; %d jobs, list sha256 %x", toolVersion(), mode, len(files),
-		sha256.Sum256([]byte(strings.Join(files, "\n"))))
-}
-
-// summaryRunning is summary.md while a run is under way: it replaces the
-// last run's summary before any set is touched, so a run that is killed
-// leaves this, never a summary of an earlier run.
-func summaryRunning(run string) []byte {
-	return []byte(fileset.UnfinishedTitle + "\n\nRun: " + run + "\n\n" +
-		"This run started and has not written its summary: it is still running, or it was stopped before\n" +
-		"the end. Each mark's folder holds a whole file set, of this run or an earlier one; run\n" +
-		"'gaugeline audit' on this folder to see which, or run the batch again.\n\n> " + detail.Caution + "\n")
-}
-
-// summaryMarkdown is summary.md: the run, the counts, then one table row
-// per job.
-func summaryMarkdown(rows []batchRow, run string) []byte {
-	var b bytes.Buffer
-	c := countRows(rows)
-	title := "Batch summary"
-	if c.notRun > 0 {
-		title += ": INTERRUPTED"
-	}
-	fmt.Fprintf(&b, "# %s\n\nRun: %s\n\n%s.\n\n| ", title, run, c)
-	b.WriteString(strings.Join(summaryHeader, " | ") + " |\n|")
-	b.WriteString(strings.Repeat("---|", len(summaryHeader)) + "\n")
-	for _, r := range rows {
-		f := r.fields()
-		for i := range f {
-			f[i] = mdCell(f[i])
-		}
-		b.WriteString("| " + strings.Join(f, " | ") + " |\n")
-	}
-	b.WriteString("\n> " + detail.Caution + "\n")
-	return b.Bytes()
-}
-
-// mdCell keeps a value inside its table cell.
-func mdCell(s string) string {
-	s = strings.ReplaceAll(s, `\`, `\\`)
-	s = strings.ReplaceAll(s, "|", `\|`)
-	return strings.Join(strings.Fields(s), " ")
 }
 
 // maxErrorLines is how many job errors batch repeats on stderr; the
@@ -533,7 +41,11 @@ func runBatch(ctx context.Context, o *rootOptions, bo batchOptions, arg string, 
 	if bo.workers < 0 {
 		return usageError{fmt.Errorf("--jobs: want 1 or more (0: one per CPU), not %d", bo.workers)}
 	}
-	files, err := batchInputs(arg)
+	files, err := batch.Inputs(arg)
+	var nl *batch.NotAListError
+	if errors.As(err, &nl) {
+		return usageError{err}
+	}
 	if err != nil {
 		return err
 	}
@@ -542,14 +54,15 @@ func runBatch(ctx context.Context, o *rootOptions, bo batchOptions, arg string, 
 		return err
 	}
 	defer unlock()
-	cfg := batchConfig{out: bo.dir, propose: bo.propose, sheets: bo.sheets, workers: bo.workers}
-	if cfg.workers == 0 {
-		cfg.workers = runtime.NumCPU()
+	cfg := batch.Config{Out: bo.dir, Propose: bo.propose, Sheets: bo.sheets, Workers: bo.workers,
+		Tool: toolVersion(), MaxCandidates: defaultMaxCandidates, LimitError: limitError}
+	if cfg.Workers == 0 {
+		cfg.Workers = runtime.NumCPU()
 	}
-	cfg.workers = min(cfg.workers, len(files))
-	run := runLine(cfg, files)
+	cfg.Workers = min(cfg.Workers, len(files))
+	run := batch.RunLine(cfg, files)
 	os.Remove(filepath.Join(bo.dir, "summary.csv"))
-	if err := writeAll(bo.dir, []dxfout.File{{Name: "summary.md", Data: summaryRunning(run)}}); err != nil {
+	if err := writeAll(bo.dir, []dxfout.File{{Name: "summary.md", Data: batch.SummaryRunning(run)}}); err != nil {
 		return &detail.InputError{File: bo.dir, Msg: err.Error()}
 	}
 
@@ -561,11 +74,11 @@ func runBatch(ctx context.Context, o *rootOptions, bo batchOptions, arg string, 
 
 	report, finish := progressBar(o.stderr, "batch", "jobs")
 	finished := 0
-	rows := runJobs(ctx, cfg, files, func() { finished++; report(finished, len(files)) })
+	rows := batch.Run(ctx, cfg, files, func() { finished++; report(finished, len(files)) })
 	finish()
 
-	c := countRows(rows)
-	csvData, err := summaryCSV(rows)
+	c := batch.Count(rows)
+	csvData, err := batch.SummaryCSV(rows)
 	if err != nil {
 		return err
 	}
@@ -573,15 +86,15 @@ func runBatch(ctx context.Context, o *rootOptions, bo batchOptions, arg string, 
 	if err := writeAll(bo.dir, []dxfout.File{{Name: "summary.csv", Data: csvData}}); err != nil {
 		return &detail.InputError{File: bo.dir, Msg: err.Error()}
 	}
-	if err := writeAll(bo.dir, []dxfout.File{{Name: "summary.md", Data: summaryMarkdown(rows, run)}}); err != nil {
+	if err := writeAll(bo.dir, []dxfout.File{{Name: "summary.md", Data: batch.SummaryMarkdown(rows, run)}}); err != nil {
 		return &detail.InputError{File: bo.dir, Msg: err.Error()}
 	}
 
 	shown := 0
 	for _, r := range rows {
-		if r.Verdict == batchError {
+		if r.Verdict == batch.VerdictError {
 			if shown == maxErrorLines {
-				fmt.Fprintf(o.stderr, "gaugeline: error: … and %d more; see %s\n", c.errors-shown, filepath.Join(bo.dir, "summary.csv"))
+				fmt.Fprintf(o.stderr, "gaugeline: error: … and %d more; see %s\n", c.Errors-shown, filepath.Join(bo.dir, "summary.csv"))
 				break
 			}
 			fmt.Fprintf(o.stderr, "gaugeline: error: %s\n", r.Message)
@@ -592,9 +105,9 @@ func runBatch(ctx context.Context, o *rootOptions, bo batchOptions, arg string, 
 		}
 	}
 	fmt.Fprintf(out, "batch: %s\n", c)
-	fmt.Fprintf(out, "wrote %d JSON and %d DXF files to %s, one folder per mark\n", c.json, c.dxf, bo.dir)
+	fmt.Fprintf(out, "wrote %d JSON and %d DXF files to %s, one folder per mark\n", c.JSON, c.DXF, bo.dir)
 	fmt.Fprintf(out, "summary: %s, %s\n", filepath.Join(bo.dir, "summary.csv"), filepath.Join(bo.dir, "summary.md"))
-	if code := c.exit(); code != exitOK {
+	if code := batchExit(c); code != exitOK {
 		return exitError{code}
 	}
 	return nil

@@ -12,6 +12,7 @@ import (
 	"testing"
 	"time"
 
+	"gaugeline/batch"
 	"gaugeline/fileset"
 )
 
@@ -193,7 +194,7 @@ func TestAuditFindsMixedSets(t *testing.T) {
 	}
 
 	// A run that did not finish: its summary says so, and audit reports it.
-	os.WriteFile(filepath.Join(out, "summary.md"), summaryRunning("test"), 0o644)
+	os.WriteFile(filepath.Join(out, "summary.md"), batch.SummaryRunning("test"), 0o644)
 	if r := gaugeline(t, ".", "audit", out); !strings.Contains(r.stdout, "summary.md: unfinished:") {
 		t.Errorf("audit does not report the unfinished run:\n%s", r.stdout)
 	}

@@ -1,0 +1,523 @@
+// Package batch runs many jobs on a pool of workers and writes each job's
+// file set as it finishes, with a summary of the whole run. The command
+// line (flags, signals, exit codes, messages) is cmd/gaugeline's.
+package batch
+
+import (
+	"bufio"
+	"bytes"
+	"context"
+	"crypto/sha256"
+	"encoding/csv"
+	"errors"
+	"fmt"
+	"io"
+	"io/fs"
+	"math"
+	"os"
+	"path/filepath"
+	"strconv"
+	"strings"
+	"sync"
+
+	"gaugeline/detail"
+	"gaugeline/detail/measured"
+	"gaugeline/dxfout"
+	"gaugeline/fileset"
+)
+
+// NotAListError: batch was given one job file, not a folder or a list.
+type NotAListError struct{ Path string }
+
+func (e *NotAListError) Error() string {
+	return e.Path + " is a job, not a folder or a list of jobs (for one job, use 'gaugeline check')"
+}
+
+// The batch runner. Jobs run on a pool of workers; each job's files are
+// written (atomically, all of them or none) as soon as it finishes, so the
+// only thing a batch keeps is one summary row per job. Marks are claimed in
+// input order through a gate, so that which of two jobs with the same mark
+// is the duplicate never depends on scheduling.
+
+// Verdict is the outcome of one job of a batch.
+type Verdict int
+
+const (
+	VerdictPass   Verdict = iota
+	VerdictFail           // a limit state or rule fails, or no layout passes
+	VerdictError          // bad input: nothing written
+	VerdictNotRun         // the batch was interrupted before the job started
+)
+
+func (v Verdict) String() string { return [...]string{"pass", "fail", "error", "not run"}[v] }
+
+// Row is one job's line of the summary.
+type Row struct {
+	File      string
+	Mark      string // "" when the job could not be read
+	Verdict   Verdict
+	Governing string  // limit state or rule id; "" when none
+	Ratio     float64 // governing ratio; NaN when none
+	Bolts     int     // 0 when none
+	Message   string  // the error, or what fails
+	Hint      string  // advice on an error
+	JSON      int     // files written: JSON and DXF
+	DXF       int
+	Set       string // the folder of the mark's file set; "" when none was written
+	Input     string // SHA-256 of the job file, as in the set's stamp
+}
+
+// Config is what every job of a batch shares.
+type Config struct {
+	Out     string // output directory, existing and locked
+	Propose bool
+	Sheets  bool
+	Workers int
+	// Tool names the build in each set's stamp (fileset.Stamp).
+	Tool string
+	// MaxCandidates bounds each proposal's search (detail.ProposeOptions).
+	MaxCandidates int
+	// LimitError words a search stopped at MaxCandidates as the job's
+	// error; nil: the *detail.SearchLimitError itself.
+	LimitError func(*detail.Job, *detail.SearchLimitError) error
+}
+
+// maxListSize bounds a list file: 10,000 jobs take well under 1 MiB.
+const maxListSize = 16 << 20
+
+// Inputs returns the job files of a folder (every *.yaml, sorted by
+// name, not recursive) or of a list file (one path per line, relative to
+// the list file; '#' starts a comment), in input order.
+func Inputs(arg string) ([]string, error) {
+	fi, err := os.Stat(arg)
+	if err != nil {
+		return nil, &detail.InputError{File: arg, Msg: "cannot read the jobs: " + errText(err)}
+	}
+	if fi.IsDir() {
+		entries, err := os.ReadDir(arg) // sorted by name
+		if err != nil {
+			return nil, &detail.InputError{File: arg, Msg: "cannot read the folder: " + errText(err)}
+		}
+		var files []string
+		for _, e := range entries {
+			if !e.IsDir() && strings.HasSuffix(e.Name(), ".yaml") {
+				files = append(files, filepath.Join(arg, e.Name()))
+			}
+		}
+		if len(files) == 0 {
+			return nil, &detail.InputError{File: arg, Msg: "no *.yaml job in the folder",
+				Hint: "batch reads the *.yaml files of the folder itself, not of its subfolders"}
+		}
+		return files, nil
+	}
+	if !fi.Mode().IsRegular() {
+		return nil, &detail.InputError{File: arg, Msg: "not a folder or a regular list file (" + fi.Mode().Type().String() + ")",
+			Hint: "batch reads a folder of jobs or a text file listing them"}
+	}
+	if ext := filepath.Ext(arg); ext == ".yaml" || ext == ".yml" {
+		return nil, &NotAListError{Path: arg}
+	}
+	f, err := measured.OpenRegular(arg) // never blocks on a FIFO swapped in after the Stat
+	if err != nil {
+		return nil, &detail.InputError{File: arg, Msg: "cannot read the list: " + errText(err)}
+	}
+	defer f.Close()
+	data, err := io.ReadAll(io.LimitReader(f, maxListSize+1))
+	if err != nil {
+		return nil, &detail.InputError{File: arg, Msg: "cannot read the list: " + errText(err)}
+	}
+	if len(data) > maxListSize {
+		return nil, &detail.InputError{File: arg, Msg: fmt.Sprintf("the list is larger than %d MiB", maxListSize>>20),
+			Hint: "a list holds one job path per line"}
+	}
+	base := filepath.Dir(arg)
+	var files []string
+	sc := bufio.NewScanner(bytes.NewReader(data))
+	sc.Buffer(nil, maxListSize)
+	for line := 1; sc.Scan(); line++ {
+		s := sc.Text()
+		if i := commentStart(s); i >= 0 {
+			s = s[:i]
+		}
+		s = strings.TrimSpace(s)
+		if s == "" {
+			continue
+		}
+		if strings.ContainsRune(s, 0) {
+			return nil, &detail.InputError{File: arg, Line: line, Msg: "not a list of job paths (binary data)"}
+		}
+		if !filepath.IsAbs(s) {
+			s = filepath.Join(base, s)
+		}
+		files = append(files, s)
+	}
+	if err := sc.Err(); err != nil {
+		return nil, &detail.InputError{File: arg, Msg: "cannot read the list: " + err.Error()}
+	}
+	if len(files) == 0 {
+		return nil, &detail.InputError{File: arg, Msg: "the list names no job",
+			Hint: "a list holds one job path per line, relative to the list; '#' starts a comment"}
+	}
+	return files, nil
+}
+
+// commentStart is the index of a '#' at the start of s or after a blank,
+// -1 when there is none: a path may contain '#' inside a name.
+func commentStart(s string) int {
+	for i := 0; i < len(s); i++ {
+		if s[i] == '#' && (i == 0 || s[i-1] == ' ' || s[i-1] == '\t') {
+			return i
+		}
+	}
+	return -1
+}
+
+// errText drops the path a *fs.PathError repeats.
+func errText(err error) string {
+	var pe *fs.PathError
+	if errors.As(err, &pe) {
+		return pe.Err.Error()
+	}
+	return err.Error()
+}
+
+// markGate hands out set names (marks) in input order. Job i waits at the
+// gate until jobs 0…i-1 have passed it. That never deadlocks: jobs are
+// dispatched in input order and each reaches the gate after reading its
+// own file only, so the lowest job not yet through is always running.
+type markGate struct {
+	mu     sync.Mutex
+	turn   *sync.Cond
+	next   int
+	owners map[string]markOwner // lower-cased mark → who writes its set
+}
+
+type markOwner struct{ file, mark string }
+
+func newMarkGate() *markGate {
+	g := &markGate{owners: map[string]markOwner{}}
+	g.turn = sync.NewCond(&g.mu)
+	return g
+}
+
+// pass lets job i through the gate and claims the set of its mark ("" when
+// the job could not be read). It returns why the set cannot be had, ""
+// when it is the job's. Marks are compared without case: on Windows and
+// macOS file systems BR-1 and br-1 are one folder.
+func (g *markGate) pass(i int, file, mark string) string {
+	g.mu.Lock()
+	defer g.mu.Unlock()
+	for g.next < i {
+		g.turn.Wait()
+	}
+	if g.next > i { // through already: a job that panicked in here
+		return ""
+	}
+	g.next++
+	g.turn.Broadcast()
+	if mark == "" {
+		return ""
+	}
+	if err := fileset.CheckName(mark); err != nil {
+		return err.Error()
+	}
+	if o, taken := g.owners[strings.ToLower(mark)]; taken {
+		if o.mark == mark {
+			return fmt.Sprintf("duplicate mark %s, already used by %s", mark, o.file)
+		}
+		return fmt.Sprintf("duplicate mark %s, already used as %s by %s (marks differing only in case name the same folder on Windows and macOS)", mark, o.mark, o.file)
+	}
+	g.owners[strings.ToLower(mark)] = markOwner{file, mark}
+	return ""
+}
+
+// Run runs every job on cfg.Workers workers and returns the summary
+// rows in input order. done is called (from this goroutine) as each job
+// finishes. Jobs not started when ctx ends are recorded as errors.
+func Run(ctx context.Context, cfg Config, files []string, done func()) []Row {
+	rows := make([]Row, len(files))
+	gate := newMarkGate()
+	next := make(chan int)
+	go func() {
+		defer close(next)
+		for i := range files {
+			select {
+			case next <- i:
+			case <-ctx.Done():
+				return
+			}
+		}
+	}()
+	finished := make(chan int, cfg.Workers)
+	var wg sync.WaitGroup
+	for range cfg.Workers {
+		wg.Go(func() {
+			for i := range next {
+				rows[i] = runJob(cfg, gate, i, files[i])
+				finished <- i
+			}
+		})
+	}
+	go func() {
+		wg.Wait()
+		close(finished)
+	}()
+	ran := make([]bool, len(files))
+	for i := range finished {
+		ran[i] = true
+		done()
+	}
+	for i, ok := range ran {
+		if !ok {
+			rows[i] = Row{File: files[i], Verdict: VerdictNotRun, Ratio: math.NaN(),
+				Message: files[i] + ": not run: the batch was interrupted"}
+		}
+	}
+	return rows
+}
+
+// runJob runs one job of the batch and writes its files.
+func runJob(cfg Config, gate *markGate, i int, path string) (row Row) {
+	row = Row{File: path, Ratio: math.NaN()}
+	through := false
+	defer func() {
+		// A programmer's mistake in one job must not stop the others.
+		if r := recover(); r != nil {
+			row = Row{File: path, Mark: row.Mark, Verdict: VerdictError, Ratio: math.NaN(),
+				Message: fmt.Sprintf("%s: internal error, please report it: %v", path, r),
+				Hint:    "gaugeline check (or propose) on this job alone shows where it happens"}
+		}
+		if !through {
+			gate.pass(i, path, "")
+		}
+	}()
+	job, err := detail.LoadJob(path)
+	mark := ""
+	if err == nil {
+		mark = job.Mark
+	}
+	conflict := gate.pass(i, path, mark)
+	through = true
+	if err != nil {
+		return errorRow(row, path, err)
+	}
+	row.Mark = mark
+	if conflict != "" {
+		row.Verdict, row.Message = VerdictError, path+": "+conflict
+		return row // the names are another job's: touch nothing
+	}
+	row.Input = job.SHA256
+	mode := "check"
+	if cfg.Propose {
+		mode = "propose"
+	}
+	job.Stamp = fileset.Stamp(cfg.Tool, mode, job.SHA256)
+	files, err := jobFiles(cfg, job, &row)
+	if err == nil {
+		err = fileset.Write(cfg.Out, fileset.Set{Name: mark, Stamp: job.Stamp, Files: files})
+	}
+	if err != nil {
+		row = errorRow(row, path, err)
+		fileset.Remove(cfg.Out, mark) // an old set must not outlive a job that no longer reads
+		return row
+	}
+	row.Set = mark
+	for _, f := range files {
+		if strings.HasSuffix(f.Name, ".json") {
+			row.JSON++
+		} else {
+			row.DXF++
+		}
+	}
+	return row
+}
+
+// errorRow records err as the job's error, keeping file and mark.
+func errorRow(row Row, path string, err error) Row {
+	row.Verdict, row.Governing, row.Ratio, row.Bolts, row.Hint = VerdictError, "", math.NaN(), 0, ""
+	var ie *detail.InputError
+	if errors.As(err, &ie) {
+		row.Message, row.Hint = ie.Error(), ie.Hint
+		return row
+	}
+	row.Message = path + ": " + err.Error()
+	return row
+}
+
+// jobFiles checks (or proposes) the job, fills in its summary row and
+// returns the files to write: the JSON, then the sheet and CAM files of a
+// passing layout when asked.
+func jobFiles(cfg Config, job *detail.Job, row *Row) ([]dxfout.File, error) {
+	var r *detail.Report
+	var data []byte
+	if cfg.Propose {
+		p, err := detail.Propose(job, detail.ProposeOptions{Mode: detail.Pruned, MaxCandidates: cfg.MaxCandidates})
+		var le *detail.SearchLimitError
+		if errors.As(err, &le) && cfg.LimitError != nil {
+			return nil, cfg.LimitError(job, le)
+		}
+		if err != nil {
+			return nil, err
+		}
+		if data, err = p.JSON(detail.Pruned); err != nil {
+			return nil, err
+		}
+		if !p.Found() {
+			row.Verdict, row.Message = VerdictFail, "no layout passes: "+p.Summary
+			if len(p.Blockers) > 0 {
+				row.Governing = p.Blockers[0].ID
+				if p.Blockers[0].Ratio > 0 {
+					row.Ratio = p.Blockers[0].Ratio
+				}
+			}
+			return []dxfout.File{{Name: job.Mark + ".json", Data: data}}, nil
+		}
+		r = p.Report
+		r.Design.Job.Stamp = job.Stamp // the sheet of the layout job carries the input's stamp
+	} else {
+		d, err := job.Build()
+		if err != nil {
+			return nil, err
+		}
+		if r, err = detail.Check(d); err != nil {
+			return nil, &detail.InputError{File: job.File, Msg: err.Error()}
+		}
+		if data, err = r.JSON(); err != nil {
+			return nil, err
+		}
+	}
+	g := r.GoverningResult()
+	row.Governing, row.Ratio, row.Bolts = g.ID, g.Ratio, len(r.Design.Conn.Holes)
+	files := []dxfout.File{{Name: job.Mark + ".json", Data: data}}
+	if !r.Pass {
+		row.Verdict, row.Message = VerdictFail, "fails: "+strings.Join(r.Failing(), ", ")
+		return files, nil
+	}
+	row.Verdict = VerdictPass
+	if !cfg.Sheets {
+		return files, nil
+	}
+	s, err := detail.NewSheet(r, false)
+	if err != nil {
+		return nil, err
+	}
+	dxf, err := dxfout.Files(s)
+	if err != nil {
+		return nil, err
+	}
+	return append(files, dxf...), nil
+}
+
+// Counts tallies the rows.
+type Counts struct{ Jobs, Pass, Fail, Errors, NotRun, JSON, DXF int }
+
+func Count(rows []Row) Counts {
+	c := Counts{Jobs: len(rows)}
+	for _, r := range rows {
+		switch r.Verdict {
+		case VerdictPass:
+			c.Pass++
+		case VerdictFail:
+			c.Fail++
+		case VerdictNotRun:
+			c.NotRun++
+		default:
+			c.Errors++
+		}
+		c.JSON += r.JSON
+		c.DXF += r.DXF
+	}
+	return c
+}
+
+func (c Counts) String() string {
+	s := fmt.Sprintf("%d jobs: %d pass, %d fail, %d error", c.Jobs, c.Pass, c.Fail, c.Errors)
+	if c.NotRun > 0 {
+		s += fmt.Sprintf(", %d not run (interrupted)", c.NotRun)
+	}
+	return s
+}
+
+var Header = []string{"file", "mark", "verdict", "governing", "ratio", "bolts", "set", "input_sha256", "message"}
+
+func (r Row) fields() []string {
+	ratio, bolts := "", ""
+	if !math.IsNaN(r.Ratio) {
+		ratio = strconv.FormatFloat(r.Ratio, 'f', 3, 64)
+	}
+	if r.Bolts > 0 {
+		bolts = strconv.Itoa(r.Bolts)
+	}
+	msg := r.Message
+	if r.Hint != "" {
+		msg += " (hint: " + r.Hint + ")"
+	}
+	return []string{r.File, r.Mark, r.Verdict.String(), r.Governing, ratio, bolts, r.Set, r.Input, msg}
+}
+
+// SummaryCSV is summary.csv: a header, then one row per job.
+func SummaryCSV(rows []Row) ([]byte, error) {
+	var b bytes.Buffer
+	w := csv.NewWriter(&b)
+	w.Write(Header)
+	for _, r := range rows {
+		w.Write(r.fields())
+	}
+	w.Flush()
+	return b.Bytes(), w.Error()
+}
+
+// RunLine names the run a summary describes: the tool, what it did and
+// the SHA-256 of its list of job files, so that two summaries of different
+// runs never read alike.
+func RunLine(cfg Config, files []string) string {
+	mode := "check"
+	if cfg.Propose {
+		mode = "propose"
+	}
+	if cfg.Sheets {
+		mode += " with cut sheets"
+	}
+	return fmt.Sprintf("%s; %s; %d jobs, list sha256 %x", cfg.Tool, mode, len(files),
+		sha256.Sum256([]byte(strings.Join(files, "\n"))))
+}
+
+// SummaryRunning is summary.md while a run is under way: it replaces the
+// last run's summary before any set is touched, so a run that is killed
+// leaves this, never a summary of an earlier run.
+func SummaryRunning(run string) []byte {
+	return []byte(fileset.UnfinishedTitle + "\n\nRun: " + run + "\n\n" +
+		"This run started and has not written its summary: it is still running, or it was stopped before\n" +
+		"the end. Each mark's folder holds a whole file set, of this run or an earlier one; run\n" +
+		"'gaugeline audit' on this folder to see which, or run the batch again.\n\n> " + detail.Caution + "\n")
+}
+
+// SummaryMarkdown is summary.md: the run, the counts, then one table row
+// per job.
+func SummaryMarkdown(rows []Row, run string) []byte {
+	var b bytes.Buffer
+	c := Count(rows)
+	title := "Batch summary"
+	if c.NotRun > 0 {
+		title += ": INTERRUPTED"
+	}
+	fmt.Fprintf(&b, "# %s\n\nRun: %s\n\n%s.\n\n| ", title, run, c)
+	b.WriteString(strings.Join(Header, " | ") + " |\n|")
+	b.WriteString(strings.Repeat("---|", len(Header)) + "\n")
+	for _, r := range rows {
+		f := r.fields()
+		for i := range f {
+			f[i] = mdCell(f[i])
+		}
+		b.WriteString("| " + strings.Join(f, " | ") + " |\n")
+	}
+	b.WriteString("\n> " + detail.Caution + "\n")
+	return b.Bytes()
+}
+
+// mdCell keeps a value inside its table cell.
+func mdCell(s string) string {
+	s = strings.ReplaceAll(s, `\`, `\\`)
+	s = strings.ReplaceAll(s, "|", `\|`)
+	return strings.Join(strings.Fields(s), " ")
+}
