@@ -93,23 +93,24 @@ func bearingResult(c *Connection, bp bearingPart, ply func(*Hole) HoleShape, t u
 		hs := ply(&c.Holes[0])
 		cb, ct = c.Edition.BearingCoefficients(hs.Type, hs.Slot, c.Bolt.DeformationConsidered)
 	}
-	d := Value{Name: "d", V: float64(c.Bolt.D), Dim: units.DimLength, What: "bolt diameter"}
 	what := "thickness"
 	if bp.member {
 		what = "thickness bearing (both angles of a pair)"
 	}
-	tv := valT(c, t, bp.member, what)
-	fu := valFu(Fu)
-	lc := Value{Name: "lc_min", V: float64(lcMin), Dim: units.DimLength, Sym: "lc,min", What: "least clear distance lc"}
-	cbv := Value{Name: "bearing_coefficient", V: cb, Sym: "cb", What: "bearing coefficient cb"}
-	ctv := Value{Name: "tearout_coefficient", V: ct, Sym: "ct", What: "tearout coefficient ct"}
-	bolts := Value{Name: "bolts", V: float64(len(shares)), What: "bolts"}
-	r := finish(c, bp.id, "J3.10", Rn, c.Edition.BearingFactor(), []Value{d, tv, fu, lc, cbv, ctv, bolts},
+	vs := newValues(7)
+	pD := vs.add(Value{Name: "d", V: float64(c.Bolt.D), Dim: units.DimLength, What: "bolt diameter"})
+	pT, pFu := vs.add(valT(c, t, bp.member, what)), vs.add(valFu(Fu))
+	pLc := vs.add(Value{Name: "lc_min", V: float64(lcMin), Dim: units.DimLength, Sym: "lc,min", What: "least clear distance lc"})
+	pCb := vs.add(Value{Name: "bearing_coefficient", V: cb, Sym: "cb", What: "bearing coefficient cb"})
+	pCt := vs.add(Value{Name: "tearout_coefficient", V: ct, Sym: "ct", What: "tearout coefficient ct"})
+	pBolts := vs.add(Value{Name: "bolts", V: float64(len(shares)), What: "bolts"})
+	r := finish(c, bp.id, "J3.10", Rn, c.Edition.BearingFactor(), vs.list,
 		fmt.Sprintf("%s: sum over %d bolts of min(bearing, tearout); tearout governs %d", bp.note, len(shares), tear))
 	r.PerBolt = shares
 
 	deformation, D := c.Bolt.DeformationConsidered, c.Bolt.D
 	r.explain = func() Working {
+		d, tv, fu, lc, cbv, ctv, bolts := *pD, *pT, *pFu, *pLc, *pCb, *pCt, *pBolts
 		why := "deformation at the bolt hole at service load is a design consideration"
 		if !deformation {
 			why = "deformation at the bolt hole at service load is not a design consideration"

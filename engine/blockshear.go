@@ -318,26 +318,29 @@ func blockResult(c *Connection, id string, blocks []block, p blockPart) Result {
 	b := blocks[w]
 	k := float64(b.Bolts) / float64(max(n, 1))
 	const Ubs = 1.0
-	agv := Value{Name: "Agv", V: float64(b.Agv), Dim: units.DimArea, What: "gross area in shear"}
-	anv := Value{Name: "Anv", V: float64(b.Anv), Dim: units.DimArea, What: "net area in shear"}
-	ant := Value{Name: "Ant", V: float64(b.Ant), Dim: units.DimArea, What: "net area in tension"}
-	ubs := Value{Name: "Ubs", V: Ubs, What: "tension stress factor (uniform tension)"}
-	fy, fu := valFy(p.Fy), valFu(p.Fu)
 	what, title := "thickness", "Block shear of the plate, tearing out toward its free edge"
 	if p.name == "member" {
 		what, title = "thickness (both angles of a pair)", "Block shear of the member, tearing out toward the member end"
 	}
-	r := finishFor(c, units.Force(k)*c.Demand, id, "J4.3", b.Rn, c.Edition.BlockShearFactor(), []Value{
-		agv, anv, ant, ubs, fy, fu, valT(c, p.t, p.name == "member", what),
-		{Name: "blocks", V: float64(len(blocks)), What: "blocks examined"},
-		{Name: "bolts_in_block", V: float64(b.Bolts)},
-		{Name: "bolts", V: float64(n), What: "bolts"},
-		{Name: "share", V: k},
-	}, fmt.Sprintf("worst of %d blocks: %s, tearing out %d of %d bolts and carrying that share of the force (Ubs = 1, uniform tension)",
-		len(blocks), b.desc, b.Bolts, n))
+	vs := newValues(11)
+	pAgv := vs.add(Value{Name: "Agv", V: float64(b.Agv), Dim: units.DimArea, What: "gross area in shear"})
+	pAnv := vs.add(Value{Name: "Anv", V: float64(b.Anv), Dim: units.DimArea, What: "net area in shear"})
+	pAnt := vs.add(Value{Name: "Ant", V: float64(b.Ant), Dim: units.DimArea, What: "net area in tension"})
+	pUbs := vs.add(Value{Name: "Ubs", V: Ubs, What: "tension stress factor (uniform tension)"})
+	pFy, pFu := vs.add(valFy(p.Fy)), vs.add(valFu(p.Fu))
+	vs.add(valT(c, p.t, p.name == "member", what))
+	vs.add(Value{Name: "blocks", V: float64(len(blocks)), What: "blocks examined"})
+	vs.add(Value{Name: "bolts_in_block", V: float64(b.Bolts)})
+	vs.add(Value{Name: "bolts", V: float64(n), What: "bolts"})
+	vs.add(Value{Name: "share", V: k})
+	r := finishFor(c, units.Force(k)*c.Demand, id, "J4.3", b.Rn, c.Edition.BlockShearFactor(), vs.list,
+		fmt.Sprintf("worst of %d blocks: %s, tearing out %d of %d bolts and carrying that share of the force (Ubs = 1, uniform tension)",
+			len(blocks), b.desc, b.Bolts, n))
 
+	Fy, Fu, Agv, Anv, Ant, Rn := p.Fy, p.Fu, b.Agv, b.Anv, b.Ant, b.Rn
 	r.explain = func() Working {
-		rupture, yield := blockShearParts(p.Fy, p.Fu, b.Agv, b.Anv, b.Ant, Ubs)
+		agv, anv, ant, ubs, fy, fu := *pAgv, *pAnv, *pAnt, *pUbs, *pFy, *pFu
+		rupture, yield := blockShearParts(Fy, Fu, Agv, Anv, Ant, Ubs)
 		tension := Mul(Coef(ubs, 1), Of(fu), Of(ant))
 		rup := Step{Value: Value{Sym: "shear rupture + tension", V: float64(rupture), Dim: units.DimForce},
 			Expr: Add(Mul(K(0.6, "0.60"), Of(fu), Of(anv)), tension)}
@@ -348,7 +351,7 @@ func blockResult(c *Connection, id string, blocks []block, p blockPart) Result {
 			Formula: []Step{{Value: Value{Sym: "Rn"}, Expr: rup.Expr, Then: Phrase(Words(" ≤ "), yld.Expr)}},
 			Where:   "Agv and Anv are the gross and net areas in shear, Ant the net area in tension, of one block; every plausible block is examined and the weakest governs",
 			Steps: []Step{rup, yld,
-				{Value: nominal(b.Rn), Expr: Min(Of(rup.Value), Of(yld.Value)), Say: Words("the lesser")}},
+				{Value: nominal(Rn), Expr: Min(Of(rup.Value), Of(yld.Value)), Say: Words("the lesser")}},
 		}
 	}
 	return r

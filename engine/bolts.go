@@ -75,23 +75,26 @@ func BoltShear(c *Connection) Result {
 	if why != "" {
 		note += "; " + why
 	}
-	fnv := Value{Name: "Fnv", V: float64(Fnv), Dim: units.DimStress, What: "nominal shear stress of the bolt"}
-	ab := Value{Name: "Ab", V: float64(Ab), Dim: units.DimArea, What: "nominal unthreaded bolt area, π·d²/4"}
-	nv := valBolts(n)
-	planes := Value{Name: "planes", V: float64(ns), What: "shear planes per bolt"}
-	lj := Value{Name: "long_joint_factor", V: f, Sym: "long-joint factor", What: "long-joint reduction of Fnv (1 when none)"}
-	pl := Value{Name: "pattern_length", V: float64(patternLength(c.Holes)), Dim: units.DimLength, Sym: "pattern length",
-		What: "length of the pattern along the load"}
-	ffv, ft := valFillerFactor(ff), valFillerT(c.Bolt.FillerT)
-	ffv.Omit = ff == 1 && c.Bolt.FillerT == 0 // no fillers: nothing to show
-	ft.Omit = ffv.Omit
-	r := finish(c, "bolts.shear", "J3.6", Rn, c.Edition.BoltShearFactor(), []Value{fnv, ab, nv, planes, lj, pl, ffv, ft}, note)
+	vs := newValues(8)
+	pFnv := vs.add(Value{Name: "Fnv", V: float64(Fnv), Dim: units.DimStress, What: "nominal shear stress of the bolt"})
+	pAb := vs.add(Value{Name: "Ab", V: float64(Ab), Dim: units.DimArea, What: "nominal unthreaded bolt area, π·d²/4"})
+	pN := vs.add(valBolts(n))
+	pPlanes := vs.add(Value{Name: "planes", V: float64(ns), What: "shear planes per bolt"})
+	pLj := vs.add(Value{Name: "long_joint_factor", V: f, Sym: "long-joint factor", What: "long-joint reduction of Fnv (1 when none)"})
+	pPl := vs.add(Value{Name: "pattern_length", V: float64(patternLength(c.Holes)), Dim: units.DimLength, Sym: "pattern length",
+		What: "length of the pattern along the load"})
+	none := ff == 1 && c.Bolt.FillerT == 0 // no fillers: nothing to show
+	pFf := vs.add(valFillerFactor(ff))
+	pFf.Omit = none
+	vs.add(valFillerT(c.Bolt.FillerT)).Omit = none
+	r := finish(c, "bolts.shear", "J3.6", Rn, c.Edition.BoltShearFactor(), vs.list, note)
 	if ff < 1 {
 		r.Clause += ", " + c.Edition.Clause("J5.2")
 	}
 
 	bolt, ed := c.Bolt, c.Edition
 	r.explain = func() Working {
+		fnv, ab, nv, planes, lj, pl, ffv := *pFnv, *pAb, *pN, *pPlanes, *pLj, *pPl, *pFf
 		d := Value{Sym: "d", V: float64(bolt.D), Dim: units.DimLength}
 		abStep := Step{Value: ab, Expr: Div(Mul(K(math.Pi, "π"), Sq(Of(d))), K(4, "4"))}
 		fnvStep := Step{Value: fnv, Then: Phrase(Words(" for "), Words(bolt.Grade.Name), Words(", threads "), Words(bolt.Threads.String()))}
@@ -195,17 +198,18 @@ func BoltSlip(c *Connection) (Result, error) {
 		f = e.SlipFactor(rules.Standard, rules.Transverse)
 	}
 	Rn := units.Force(mu*Du*hf*float64(ns)*float64(n)) * Tb
-	muv := Value{Name: "mu", V: mu, Sym: "μ", What: "mean slip coefficient μ"}
-	duv := Value{Name: "Du", V: Du, What: "mean installed over minimum pretension"}
-	hfv := Value{Name: "hf", V: hf, What: "filler factor"}
-	tb := Value{Name: "Tb", V: float64(Tb), Dim: units.DimForce, What: "minimum bolt pretension"}
-	nsv := Value{Name: "ns", V: float64(ns), What: "slip planes"}
-	nv := valBolts(n)
-	r := finish(c, "bolts.slip", "J3.8", Rn, f, []Value{muv, duv, hfv, tb, nsv, nv,
-		{Name: "phi", V: f.Phi, Sym: "φ", What: "resistance factor φ for slip, by hole type"},
-		{Name: "omega", V: f.Omega, Sym: "Ω", What: "safety factor Ω for slip, by hole type"},
-	}, fmt.Sprintf("class %s surface, %d slip plane(s)", c.Bolt.Surface, ns))
+	vs := newValues(8)
+	pMu := vs.add(Value{Name: "mu", V: mu, Sym: "μ", What: "mean slip coefficient μ"})
+	pDu := vs.add(Value{Name: "Du", V: Du, What: "mean installed over minimum pretension"})
+	pHf := vs.add(Value{Name: "hf", V: hf, What: "filler factor"})
+	pTb := vs.add(Value{Name: "Tb", V: float64(Tb), Dim: units.DimForce, What: "minimum bolt pretension"})
+	pNs := vs.add(Value{Name: "ns", V: float64(ns), What: "slip planes"})
+	pN := vs.add(valBolts(n))
+	vs.add(Value{Name: "phi", V: f.Phi, Sym: "φ", What: "resistance factor φ for slip, by hole type"})
+	vs.add(Value{Name: "omega", V: f.Omega, Sym: "Ω", What: "safety factor Ω for slip, by hole type"})
+	r := finish(c, "bolts.slip", "J3.8", Rn, f, vs.list, fmt.Sprintf("class %s surface, %d slip plane(s)", c.Bolt.Surface, ns))
 	r.explain = func() Working {
+		muv, duv, hfv, tb, nsv, nv := *pMu, *pDu, *pHf, *pTb, *pNs, *pN
 		rn := Step{Value: nominal(Rn), Expr: Mul(Coef(muv, 2), Coef(duv, 2), Coef(hfv, 2), Of(tb), Of(nsv), Of(nv))}
 		return Working{
 			Title:   "Slip resistance of the slip-critical joint",
@@ -249,11 +253,12 @@ func BoltGroup(c *Connection, member, plate []BoltShare) Result {
 		governs[by]++
 		Rn += rn
 	}
-	rnShear := Value{Name: "rn_shear", V: float64(shear), Dim: units.DimForce, Sym: "rn,shear",
-		What: "shear strength of one bolt, Fnv·Ab·ns (× ff with fillers)"}
-	nv, ffv := valBolts(len(c.Holes)), valFillerFactor(ff)
+	vs := newValues(3)
+	pRnShear := vs.add(Value{Name: "rn_shear", V: float64(shear), Dim: units.DimForce, Sym: "rn,shear",
+		What: "shear strength of one bolt, Fnv·Ab·ns (× ff with fillers)"})
+	pN, pFf := vs.add(valBolts(len(c.Holes))), vs.add(valFillerFactor(ff))
 	// bolt shear and bearing share φ = 0.75 and Ω = 2.00 (J3.6, J3.10)
-	r := finish(c, "bolts.group", "J3.6", Rn, c.Edition.BoltShearFactor(), []Value{rnShear, nv, ffv},
+	r := finish(c, "bolts.group", "J3.6", Rn, c.Edition.BoltShearFactor(), vs.list,
 		fmt.Sprintf("per bolt the least of shear, member and plate bearing/tearout; %s", describeCounts(governs)))
 	r.Clause = c.Edition.Clause("J3.6") + ", " + c.Edition.Clause("J3.10")
 	if ff < 1 {
@@ -262,6 +267,7 @@ func BoltGroup(c *Connection, member, plate []BoltShare) Result {
 
 	n := len(c.Holes)
 	r.explain = func() Working {
+		rnShear, nv, ffv := *pRnShear, *pN, *pFf
 		cols := []Column{{Label: "hole", Text: true}, {Label: "shear", Dim: units.DimForce, UnitInHead: true},
 			{Label: "member", Dim: units.DimForce, UnitInHead: true}}
 		if plate != nil {

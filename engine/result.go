@@ -67,3 +67,20 @@ func (r *Result) Working() Working {
 	}
 	return r.explain()
 }
+
+// valueList collects a limit state's values in the order of
+// Result.Values. add returns where the value lies in the list, so that the
+// working, built later, reads it there instead of holding a copy.
+type valueList struct{ list []Value }
+
+func newValues(n int) valueList { return valueList{make([]Value, 0, n)} }
+
+// add appends v; the list never grows past its capacity, so the pointers
+// add returned stay in it.
+func (vs *valueList) add(v Value) *Value {
+	if len(vs.list) == cap(vs.list) {
+		panic("engine: valueList: more values than its capacity")
+	}
+	vs.list = append(vs.list, v)
+	return &vs.list[len(vs.list)-1]
+}

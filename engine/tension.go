@@ -185,9 +185,11 @@ func ShearLagFactor(c *Connection) ShearLag {
 func MemberYield(c *Connection) Result {
 	m := c.Member
 	Rn := m.Fy.Times(m.Ag)
-	Fy, Ag := valFy(m.Fy), valAg(m.Ag)
-	r := finish(c, "member.yield", "D2(a)", Rn, c.Edition.YieldFactor(), []Value{Fy, Ag}, "gross section of the member")
+	vs := newValues(2)
+	pFy, pAg := vs.add(valFy(m.Fy)), vs.add(valAg(m.Ag))
+	r := finish(c, "member.yield", "D2(a)", Rn, c.Edition.YieldFactor(), vs.list, "gross section of the member")
 	r.explain = func() Working {
+		Fy, Ag := *pFy, *pAg
 		rn := Step{Value: nominal(Rn), Expr: Mul(Of(Fy), Of(Ag))}
 		return Working{
 			Title:   "Tensile yielding in the gross section of the member",
@@ -208,25 +210,26 @@ func MemberRupture(c *Connection) Result {
 	sl := ShearLagFactor(c)
 	Ae := units.Area(sl.U) * An
 	Rn := m.Fu.Times(Ae)
-	Fu, Ag := valFu(m.Fu), valAg(m.Ag)
-	an := Value{Name: "An", V: float64(An), Dim: units.DimArea, What: "net area"}
-	u := Value{Name: "U", V: sl.U, What: "shear lag factor (Table D3.1)"}
-	ae := Value{Name: "Ae", V: float64(Ae), Dim: units.DimArea, What: "effective net area, U·An"}
-	dd := valDeduction(ded)
-	vals := []Value{Fu, Ag, an, u, ae, dd}
-	xbar := Value{Name: "xbar", V: float64(m.Xbar), Dim: units.DimLength, Sym: "x̄", What: "connection eccentricity x̄"}
-	l := Value{Name: "l", V: float64(sl.L), Dim: units.DimLength, What: "length of connection, first to last row"}
-	u2 := Value{Name: "U_case2", V: sl.U2, Sym: "U (case 2)", What: "Table D3.1 case 2: 1 − x̄/l"}
-	u8 := Value{Name: "U_case8", V: sl.U8, Sym: "U (case 8)", What: "Table D3.1 case 8, angles (0 when it does not apply)"}
-	ucon := Value{Name: "U_min", V: sl.Ucon, Sym: "U (bound)", What: "connected elements' gross area over Ag (D3)"}
+	vs := newValues(11)
+	pFu, pAg := vs.add(valFu(m.Fu)), vs.add(valAg(m.Ag))
+	pAn := vs.add(Value{Name: "An", V: float64(An), Dim: units.DimArea, What: "net area"})
+	pU := vs.add(Value{Name: "U", V: sl.U, What: "shear lag factor (Table D3.1)"})
+	pAe := vs.add(Value{Name: "Ae", V: float64(Ae), Dim: units.DimArea, What: "effective net area, U·An"})
+	pDd := vs.add(valDeduction(ded))
+	var pXbar, pL, pU2, pU8, pUcon *Value // angles: Table D3.1 cases 2 and 8, the D3 bound
 	if m.Shape != Flat {
-		vals = append(vals, xbar, l, u2, u8, ucon)
+		pXbar = vs.add(Value{Name: "xbar", V: float64(m.Xbar), Dim: units.DimLength, Sym: "x̄", What: "connection eccentricity x̄"})
+		pL = vs.add(Value{Name: "l", V: float64(sl.L), Dim: units.DimLength, What: "length of connection, first to last row"})
+		pU2 = vs.add(Value{Name: "U_case2", V: sl.U2, Sym: "U (case 2)", What: "Table D3.1 case 2: 1 − x̄/l"})
+		pU8 = vs.add(Value{Name: "U_case8", V: sl.U8, Sym: "U (case 8)", What: "Table D3.1 case 8, angles (0 when it does not apply)"})
+		pUcon = vs.add(Value{Name: "U_min", V: sl.Ucon, Sym: "U (bound)", What: "connected elements' gross area over Ag (D3)"})
 	}
-	r := finish(c, "member.rupture", "D2(b)", Rn, c.Edition.RuptureFactor(), vals,
+	r := finish(c, "member.rupture", "D2(b)", Rn, c.Edition.RuptureFactor(), vs.list,
 		"net section, worst path; U from Table D3.1 "+sl.Case)
 
 	ed := c.Edition
 	r.explain = func() Working {
+		Fu, Ag, an, u, ae, dd := *pFu, *pAg, *pAn, *pU, *pAe, *pDd
 		// An = Ag − Σt·deduction, Σt the thickness of every piece
 		tsum := Value{Sym: "Σt", V: float64(m.Pieces) * float64(m.T), Dim: units.DimLength}
 		t := Of(tsum)
@@ -248,6 +251,7 @@ func MemberRupture(c *Connection) Result {
 			where += "; U = 1.0 by Table D3.1 case 1: every part of the section is connected"
 			w.Steps = append(w.Steps, Step{Value: u})
 		} else {
+			xbar, l, u2, u8, ucon := *pXbar, *pL, *pU2, *pU8, *pUcon
 			w.Formula = append(w.Formula, Step{Value: Value{Sym: "U"}, Expr: Max(Sub(K(1, "1"), Div(Of(xbar), Of(l))),
 				Of(Value{Sym: "U case 8", V: sl.U8}), Of(Value{Sym: "U bound", V: sl.Ucon}))})
 			where += "; 1 − x̄/l is Table D3.1 case 2; case 8 for angles is 0.80 with 4 or more bolts in a line, 0.60 with 3; the bound is the connected elements' area over Ag (D3)"

@@ -78,15 +78,17 @@ func PlateYield(c *Connection) Result {
 	w := WhitmoreSection(c)
 	Aw := w.Lw.Mul(p.T)
 	Rn := p.Fy.Times(Aw)
-	Fy, t := valFy(p.Fy), valT(c, p.T, false, "thickness")
-	lw := valLw(w.Lw)
-	spread := Value{Name: "Whitmore_spread", V: float64(w.Spread), Dim: units.DimLength, Sym: "spread",
-		What: "30° spread before the clip by the plate"}
-	ag := Value{Name: "Ag", V: float64(Aw), Dim: units.DimArea, What: "gross area of the Whitmore section, Aw = Lw·t"}
-	r := finish(c, "plate.yield", "J4.1(a)", Rn, c.Edition.YieldFactor(), []Value{Fy, lw, spread, t, ag},
+	vs := newValues(5)
+	pFy, pLw := vs.add(valFy(p.Fy)), vs.add(valLw(w.Lw))
+	pSpread := vs.add(Value{Name: "Whitmore_spread", V: float64(w.Spread), Dim: units.DimLength, Sym: "spread",
+		What: "30° spread before the clip by the plate"})
+	pT := vs.add(valT(c, p.T, false, "thickness"))
+	pAg := vs.add(Value{Name: "Ag", V: float64(Aw), Dim: units.DimArea, What: "gross area of the Whitmore section, Aw = Lw·t"})
+	r := finish(c, "plate.yield", "J4.1(a)", Rn, c.Edition.YieldFactor(), vs.list,
 		whitmoreNote(w, "Whitmore section: 30° from the first bolt of each gage line, clipped by the plate"))
 	lo, hi, ymin, ymax, width := w.Low.Y1, w.High.Y1, p.YMin(), p.YMax(), p.Width
 	r.explain = func() Working {
+		Fy, lw, spread, t, ag := *pFy, *pLw, *pSpread, *pT, *pAg
 		aw := ag
 		aw.Sym = "Aw"
 		length := func(sym string, l units.Length) Expr { return Of(Value{Sym: sym, V: float64(l), Dim: units.DimLength}) }
@@ -127,18 +129,18 @@ func PlateRupture(c *Connection) Result {
 		note += "; An capped at 0.85·Ag for a splice plate"
 	}
 	Rn := p.Fu.Times(An)
-	Fu, lw, t := valFu(p.Fu), valLw(w.Lw), valT(c, p.T, false, "thickness")
-	ag := Value{Name: "Ag", V: float64(Ag), Dim: units.DimArea, What: "gross area of the Whitmore section, Lw·t"}
-	an := Value{Name: "An", V: float64(An), Dim: units.DimArea, What: "net area of the Whitmore section"}
-	holes := Value{Name: "holes", V: float64(w.Holes), What: "holes on the worst path across the section"}
-	dd := valDeduction(w.Deducted)
-	r := finish(c, "plate.rupture", "J4.1(b)", Rn, c.Edition.RuptureFactor(), []Value{
-		Fu, lw, t, ag, an, holes, dd,
-		{Name: "splice_cap_applied", V: capped, Sym: "cap applied", What: "An capped at 0.85·Ag (1 yes, 0 no)"},
-	}, note)
+	vs := newValues(8)
+	pFu, pLw, pT := vs.add(valFu(p.Fu)), vs.add(valLw(w.Lw)), vs.add(valT(c, p.T, false, "thickness"))
+	pAg := vs.add(Value{Name: "Ag", V: float64(Ag), Dim: units.DimArea, What: "gross area of the Whitmore section, Lw·t"})
+	pAn := vs.add(Value{Name: "An", V: float64(An), Dim: units.DimArea, What: "net area of the Whitmore section"})
+	pHoles := vs.add(Value{Name: "holes", V: float64(w.Holes), What: "holes on the worst path across the section"})
+	pDd := vs.add(valDeduction(w.Deducted))
+	vs.add(Value{Name: "splice_cap_applied", V: capped, Sym: "cap applied", What: "An capped at 0.85·Ag (1 yes, 0 no)"})
+	r := finish(c, "plate.rupture", "J4.1(b)", Rn, c.Edition.RuptureFactor(), vs.list, note)
 
 	ed, net := c.Edition, w.Lw-w.Deducted
 	r.explain = func() Working {
+		Fu, lw, t, ag, an, holes, dd := *pFu, *pLw, *pT, *pAg, *pAn, *pHoles, *pDd
 		rn := Step{Value: nominal(Rn), Expr: Mul(Of(Fu), Of(an))}
 		worked := Mul(Sub(Of(lw), Of(dd)), Of(t))
 		var anStep Step

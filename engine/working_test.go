@@ -33,7 +33,9 @@ func (plain) Quantity(v float64, _ units.Dim, places int) string {
 // printed substitution can be read back and worked out.
 type exact struct{}
 
-func (exact) Quantity(v float64, _ units.Dim, _ int) string { return strconv.FormatFloat(v, 'g', -1, 64) }
+func (exact) Quantity(v float64, _ units.Dim, _ int) string {
+	return strconv.FormatFloat(v, 'g', -1, 64)
+}
 
 // The printer writes a formula the way the calculation report always has
 // (the hand-written forms of detail/calc before the working moved here):
