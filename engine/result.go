@@ -84,3 +84,8 @@ func (vs *valueList) add(v Value) *Value {
 	vs.list = append(vs.list, v)
 	return &vs.list[len(vs.list)-1]
 }
+
+// named adds the value name = v of dimension d, printed sym, meaning what.
+func (vs *valueList) named(name string, v float64, d units.Dim, sym, what string) *Value {
+	return vs.add(Value{Name: name, V: v, Dim: d, Sym: sym, What: what})
+}

@@ -215,18 +215,23 @@ func same(a, b float64) bool { return a == b || (math.IsNaN(a) && math.IsNaN(b))
 // a working that adds up.
 func TestPropertyWorkingAddsUp(t *testing.T) {
 	rapid.Check(t, func(rt *rapid.T) {
-		p := drawParams(rt)
-		c := p.build(t)
-		rs, err := Check(c)
-		if err != nil {
-			rt.Fatal(err)
-		}
+		c, rs := checkDrawn(t, rt)
 		for _, r := range rs {
 			for _, b := range CheckWorking(r, c.Method) {
 				rt.Error(b)
 			}
 		}
 	})
+}
+
+// checkDrawn checks a connection drawn by the property tests' generator.
+func checkDrawn(t *testing.T, rt *rapid.T) (*Connection, []Result) {
+	c := drawParams(rt).build(t)
+	rs, err := Check(c)
+	if err != nil {
+		rt.Fatal(err)
+	}
+	return c, rs
 }
 
 // The fillers' steps: 1/2 in of undeveloped fillers (ff 0.90) and 1 in
@@ -398,12 +403,7 @@ func (p *reader) primary() (float64, error) {
 // search does with its candidates) changes nothing in it.
 func TestPropertyWorkingIsFixedAtTheCheck(t *testing.T) {
 	rapid.Check(t, func(rt *rapid.T) {
-		p := drawParams(rt)
-		c := p.build(t)
-		rs, err := Check(c)
-		if err != nil {
-			rt.Fatal(err)
-		}
+		c, rs := checkDrawn(t, rt)
 		before := make([]Working, len(rs))
 		for i := range rs {
 			before[i] = rs[i].Working()
