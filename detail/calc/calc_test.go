@@ -2,6 +2,7 @@ package calc
 
 import (
 	"bytes"
+	"fmt"
 	"math"
 	"path/filepath"
 	"regexp"
@@ -779,5 +780,34 @@ func TestHoleTablePerPly(t *testing.T) {
 	_, b = render(t, check(t, "../../testdata/jobs/us-single-angle.yaml"))
 	if bytes.Contains(b, []byte("plate: type")) {
 		t.Error("a job of one hole type gets per-ply columns")
+	}
+}
+
+// The page knows no limit state by its id: every section is drawn from the
+// result's own working, so a result whose id the page has never seen
+// (here every id renamed) gets the same section, word for word. A new
+// limit state needs nothing in this package (DEVELOPERS.md, "Adding a
+// limit state").
+func TestSectionsDoNotDependOnTheID(t *testing.T) {
+	for _, path := range jobs(t) {
+		r := check(t, path)
+		doc, _ := render(t, r)
+		before := find(doc, func(n *html.Node) bool { _, ok := attr(n, "data-id"); return n.Data == "section" && ok })
+		ids := make([]string, len(r.Results))
+		for i := range r.Results {
+			ids[i] = r.Results[i].ID
+			r.Results[i].ID = fmt.Sprintf("hypothetical.limit-%d", i)
+		}
+		doc, _ = render(t, r)
+		after := find(doc, func(n *html.Node) bool { _, ok := attr(n, "data-id"); return n.Data == "section" && ok })
+		if len(after) != len(before) {
+			t.Fatalf("%s: %d sections, then %d", filepath.Base(path), len(before), len(after))
+		}
+		for i := range before {
+			want := strings.ReplaceAll(text(before[i]), ids[i], r.Results[i].ID)
+			if got := text(after[i]); got != want {
+				t.Errorf("%s %s: renamed, the section reads\n%s\nwant\n%s", filepath.Base(path), ids[i], got, want)
+			}
+		}
 	}
 }
