@@ -144,6 +144,11 @@ func fillerWorking(sys units.System, t units.Length, ff float64) (formula Step, 
 	}
 	const floor = 0.85
 	formula = Step{Value: Value{Sym: "ff"}, Expr: raw, Then: Words(" ≥ 0.85, t in " + unit)}
+	// The formula's value before the floor: the edition applies the
+	// floor inside FillerFactor, so the limit state has no variable of
+	// its own for it. Where the floor does not bind, the step's value is
+	// the edition's factor and the tests hold the formula to it; where it
+	// binds, the second step is held to it.
 	v, _ := raw.Eval()
 	then := Phrase(Words(": fillers "), Of(valFillerT(t)), Words(" thick, not developed"))
 	if v >= ff {

@@ -370,19 +370,24 @@ func (e Expr) join(f Format, sep string) string {
 // 0.60(58.0 ksi)(3.719 in²) (a leading constant bare, every other factor
 // in brackets).
 func (e Expr) product(f Format) string {
+	if len(e.Args) == 0 {
+		panic("engine: a product of nothing")
+	}
 	var b strings.Builder
+	leadK := e.Args[0].Op == OpConst
 	for i, a := range e.Args {
 		s := a.write(f)
-		leadK := i == 0 && a.Op == OpConst
-		if f == nil {
+		switch {
+		case f == nil:
 			bracket := a.additive() || a.Op == OpTimes || (a.Op == OpValue && compound(s))
 			if bracket {
 				s = "(" + s + ")"
 			}
-			if i > 0 && !(bracket && e.Args[i-1].Op == OpConst && i == 1) {
+			if i > 0 && !(bracket && i == 1 && leadK) {
 				b.WriteString("·")
 			}
-		} else if !leadK && !strings.HasPrefix(s, "(") {
+		case i == 0 && leadK, strings.HasPrefix(s, "("):
+		default:
 			s = "(" + s + ")"
 		}
 		b.WriteString(s)
