@@ -3,7 +3,6 @@ package engine
 import (
 	"math"
 	"sort"
-	"strconv"
 
 	"gaugeline/rules"
 	"gaugeline/rules/units"
@@ -303,8 +302,8 @@ func valDeduction(d units.Length) Value {
 // valT is the thickness t of a part: for the member both angles of a pair
 // (what says so for one angle); a report says which.
 func valT(c *Connection, t units.Length, member bool, what string) Value {
-	if member && c.Member.Pieces > 1 {
-		what = "thickness of the " + strconv.Itoa(c.Member.Pieces) + " angles together"
+	if member && c.Member.Pieces == 2 {
+		what = "thickness of the 2 angles together"
 	}
 	return Value{Name: "t", V: float64(t), Dim: units.DimLength, What: what}
 }
