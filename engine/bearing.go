@@ -71,7 +71,13 @@ func bearingShares(c *Connection, ply func(*Hole) HoleShape, t units.Length, Fu 
 	return shares
 }
 
-func bearingResult(c *Connection, id, part string, ply func(*Hole) HoleShape, t units.Length, Fu units.Stress, shares []BoltShare) Result {
+// bearingPart is what the bearing result of a part says of it.
+type bearingPart struct {
+	id, note, title, toward string // toward: where lc is measured, for the table
+	member                  bool
+}
+
+func bearingResult(c *Connection, bp bearingPart, ply func(*Hole) HoleShape, t units.Length, Fu units.Stress, shares []BoltShare) Result {
 	var Rn units.Force
 	lcMin := units.Length(math.Inf(1))
 	tear := 0
@@ -87,16 +93,67 @@ func bearingResult(c *Connection, id, part string, ply func(*Hole) HoleShape, t 
 		hs := ply(&c.Holes[0])
 		cb, ct = c.Edition.BearingCoefficients(hs.Type, hs.Slot, c.Bolt.DeformationConsidered)
 	}
-	r := finish(c, id, "J3.10", Rn, c.Edition.BearingFactor(), []Value{
-		{"d", float64(c.Bolt.D), units.DimLength},
-		{"t", float64(t), units.DimLength},
-		{"Fu", float64(Fu), units.DimStress},
-		{"lc_min", float64(lcMin), units.DimLength},
-		{"bearing_coefficient", cb, units.Dimensionless},
-		{"tearout_coefficient", ct, units.Dimensionless},
-		{"bolts", float64(len(shares)), units.Dimensionless},
-	}, fmt.Sprintf("%s: sum over %d bolts of min(bearing, tearout); tearout governs %d", part, len(shares), tear))
+	what := "thickness"
+	if bp.member {
+		what = "thickness bearing (both angles of a pair)"
+	}
+	vs := newValues(7)
+	pD := vs.add(Value{Name: "d", V: float64(c.Bolt.D), Dim: units.DimLength, What: "bolt diameter"})
+	pT, pFu := vs.add(valT(c, t, bp.member, what)), vs.add(valFu(Fu))
+	pLc := vs.add(Value{Name: "lc_min", V: float64(lcMin), Dim: units.DimLength, Sym: "lc,min", What: "least clear distance lc"})
+	pCb := vs.add(Value{Name: "bearing_coefficient", V: cb, Sym: "cb", What: "bearing coefficient cb"})
+	pCt := vs.add(Value{Name: "tearout_coefficient", V: ct, Sym: "ct", What: "tearout coefficient ct"})
+	pBolts := vs.add(Value{Name: "bolts", V: float64(len(shares)), What: "bolts"})
+	r := finish(c, bp.id, "J3.10", Rn, c.Edition.BearingFactor(), vs.list,
+		fmt.Sprintf("%s: sum over %d bolts of min(bearing, tearout); tearout governs %d", bp.note, len(shares), tear))
 	r.PerBolt = shares
+
+	deformation, D := c.Bolt.DeformationConsidered, c.Bolt.D
+	r.explain = func() Working {
+		d, tv, fu, lc, cbv, ctv, bolts := *pD, *pT, *pFu, *pLc, *pCb, *pCt, *pBolts
+		why := "deformation at the bolt hole at service load is a design consideration"
+		if !deformation {
+			why = "deformation at the bolt hole at service load is not a design consideration"
+		}
+		bearing, tearout := BearingRn(cb, ct, D, lcMin, t, Fu)
+		lcUsed := Of(lc)
+		if lcMin < 0 { // holes that overlap: no tearout strength
+			lcUsed = Max(lcUsed, K(0, "0"))
+		}
+		terms := make([]Expr, len(shares))
+		table := &Table{Title: "Bolt by bolt, lc measured " + bp.toward, Cols: []Column{
+			{Label: "hole", Text: true}, {Label: "lc", Dim: units.DimLength},
+			{Label: "bearing", Dim: units.DimForce, UnitInHead: true}, {Label: "tearout", Dim: units.DimForce, UnitInHead: true},
+			{Label: "rn", Dim: units.DimForce, UnitInHead: true}, {Label: "governs", Text: true},
+		}, Cells: make([]Cell, 0, 6*len(shares))}
+		for i, s := range shares {
+			terms[i] = Of(Value{Sym: "rn", V: float64(s.Rn), Dim: units.DimForce})
+			table.Cells = append(table.Cells, Cell{Text: s.Hole}, Cell{V: float64(s.Lc)}, Cell{V: float64(s.Bearing)},
+				Cell{V: float64(s.Tearout)}, Cell{V: float64(s.Rn)}, Cell{Text: s.Governed})
+		}
+		rn := Step{Value: nominal(Rn), Expr: Sum("rn", terms),
+			Say: Phrase(Words("Σ rn over "), Of(bolts), Words(" bolts (table)"))}
+		each := func(v Value) Expr { return Of(Value{Sym: v.Symbol()}) }
+		return Working{
+			Title: bp.title,
+			Formula: []Step{
+				{Value: Value{Sym: "rn"}, Expr: Min(Mul(each(cbv), each(d), each(tv), each(fu)),
+					Mul(each(ctv), Of(Value{Sym: "lc"}), each(tv), each(fu))), Then: Words(", for each bolt")},
+				rn,
+			},
+			Where: "lc is the clear distance, in the direction of the force, from the edge of the hole to the edge of the next hole or of the part",
+			Steps: []Step{
+				{Value: cbv, Places: 1},
+				{Value: ctv, Places: 1, Join: ", ", Then: Words(": " + why)},
+				{Value: Value{Sym: "bearing, each bolt", V: float64(bearing), Dim: units.DimForce},
+					Expr: Mul(Coef(cbv, 1), Of(d), Of(tv), Of(fu))},
+				{Value: Value{Sym: "tearout, bolt with the least lc", V: float64(tearout), Dim: units.DimForce},
+					Expr: Mul(Coef(ctv, 1), lcUsed, Of(tv), Of(fu))},
+				rn,
+			},
+			Table: table,
+		}
+	}
 	return r
 }
 
@@ -107,7 +164,9 @@ func bearingResult(c *Connection, id, part string, ply func(*Hole) HoleShape, t 
 func MemberBearing(c *Connection) Result {
 	t := units.Length(c.Member.Pieces) * c.Member.T
 	shares := bearingShares(c, memberPly, t, c.Member.Fu, -1, 0)
-	return bearingResult(c, "member.bearing", "member, toward the member end", memberPly, t, c.Member.Fu, shares)
+	return bearingResult(c, bearingPart{id: "member.bearing", note: "member, toward the member end",
+		title: "Bearing and tearout at the member's bolt holes", toward: "toward the member end", member: true},
+		memberPly, t, c.Member.Fu, shares)
 }
 
 // PlateBearing is bearing and tearout at the plate's holes, lc measured
@@ -118,5 +177,7 @@ func MemberBearing(c *Connection) Result {
 func PlateBearing(c *Connection) Result {
 	p := c.Plate
 	shares := bearingShares(c, platePly, p.T, p.Fu, 1, p.FreeEdge)
-	return bearingResult(c, "plate.bearing", "plate, toward its free edge", platePly, p.T, p.Fu, shares)
+	return bearingResult(c, bearingPart{id: "plate.bearing", note: "plate, toward its free edge",
+		title: "Bearing and tearout at the plate's bolt holes", toward: "toward the plate's free edge"},
+		platePly, p.T, p.Fu, shares)
 }

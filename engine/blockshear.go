@@ -12,10 +12,15 @@ import (
 //
 // Clause: J4.3
 func BlockShearRn(Fy, Fu units.Stress, Agv, Anv, Ant units.Area, Ubs float64) units.Force {
-	tension := units.Force(Ubs) * Fu.Times(Ant)
-	rupture := 0.6*Fu.Times(Anv) + tension
-	yield := 0.6*Fy.Times(Agv) + tension
+	rupture, yield := blockShearParts(Fy, Fu, Agv, Anv, Ant, Ubs)
 	return min(rupture, yield)
+}
+
+// blockShearParts are the two sides of J4.3: shear rupture with tension
+// rupture, and shear yielding with tension rupture.
+func blockShearParts(Fy, Fu units.Stress, Agv, Anv, Ant units.Area, Ubs float64) (rupture, yield units.Force) {
+	tension := units.Force(Ubs) * Fu.Times(Ant)
+	return 0.6*Fu.Times(Anv) + tension, 0.6*Fy.Times(Agv) + tension
 }
 
 // block is one candidate block: its boundaries across the load are either a
@@ -312,20 +317,44 @@ func blockResult(c *Connection, id string, blocks []block, p blockPart) Result {
 	}
 	b := blocks[w]
 	k := float64(b.Bolts) / float64(max(n, 1))
-	return finishFor(c, units.Force(k)*c.Demand, id, "J4.3", b.Rn, c.Edition.BlockShearFactor(), []Value{
-		{"Agv", float64(b.Agv), units.DimArea},
-		{"Anv", float64(b.Anv), units.DimArea},
-		{"Ant", float64(b.Ant), units.DimArea},
-		{"Ubs", 1, units.Dimensionless},
-		{"Fy", float64(p.Fy), units.DimStress},
-		{"Fu", float64(p.Fu), units.DimStress},
-		{"t", float64(p.t), units.DimLength},
-		{"blocks", float64(len(blocks)), units.Dimensionless},
-		{"bolts_in_block", float64(b.Bolts), units.Dimensionless},
-		{"bolts", float64(n), units.Dimensionless},
-		{"share", k, units.Dimensionless},
-	}, fmt.Sprintf("worst of %d blocks: %s, tearing out %d of %d bolts and carrying that share of the force (Ubs = 1, uniform tension)",
-		len(blocks), b.desc, b.Bolts, n))
+	const Ubs = 1.0
+	what, title := "thickness", "Block shear of the plate, tearing out toward its free edge"
+	if p.name == "member" {
+		what, title = "thickness (both angles of a pair)", "Block shear of the member, tearing out toward the member end"
+	}
+	vs := newValues(11)
+	pAgv := vs.add(Value{Name: "Agv", V: float64(b.Agv), Dim: units.DimArea, What: "gross area in shear"})
+	pAnv := vs.add(Value{Name: "Anv", V: float64(b.Anv), Dim: units.DimArea, What: "net area in shear"})
+	pAnt := vs.add(Value{Name: "Ant", V: float64(b.Ant), Dim: units.DimArea, What: "net area in tension"})
+	pUbs := vs.add(Value{Name: "Ubs", V: Ubs, What: "tension stress factor (uniform tension)"})
+	pFy, pFu := vs.add(valFy(p.Fy)), vs.add(valFu(p.Fu))
+	vs.add(valT(c, p.t, p.name == "member", what))
+	vs.add(Value{Name: "blocks", V: float64(len(blocks)), What: "blocks examined"})
+	vs.add(Value{Name: "bolts_in_block", V: float64(b.Bolts)})
+	vs.add(Value{Name: "bolts", V: float64(n), What: "bolts"})
+	vs.add(Value{Name: "share", V: k})
+	r := finishFor(c, units.Force(k)*c.Demand, id, "J4.3", b.Rn, c.Edition.BlockShearFactor(), vs.list,
+		fmt.Sprintf("worst of %d blocks: %s, tearing out %d of %d bolts and carrying that share of the force (Ubs = 1, uniform tension)",
+			len(blocks), b.desc, b.Bolts, n))
+
+	Fy, Fu, Agv, Anv, Ant, Rn := p.Fy, p.Fu, b.Agv, b.Anv, b.Ant, b.Rn
+	r.explain = func() Working {
+		agv, anv, ant, ubs, fy, fu := *pAgv, *pAnv, *pAnt, *pUbs, *pFy, *pFu
+		rupture, yield := blockShearParts(Fy, Fu, Agv, Anv, Ant, Ubs)
+		tension := Mul(Coef(ubs, 1), Of(fu), Of(ant))
+		rup := Step{Value: Value{Sym: "shear rupture + tension", V: float64(rupture), Dim: units.DimForce},
+			Expr: Add(Mul(K(0.6, "0.60"), Of(fu), Of(anv)), tension)}
+		yld := Step{Value: Value{Sym: "shear yielding + tension", V: float64(yield), Dim: units.DimForce},
+			Expr: Add(Mul(K(0.6, "0.60"), Of(fy), Of(agv)), tension)}
+		return Working{
+			Title:   title,
+			Formula: []Step{{Value: Value{Sym: "Rn"}, Expr: rup.Expr, Then: Phrase(Words(" ≤ "), yld.Expr)}},
+			Where:   "Agv and Anv are the gross and net areas in shear, Ant the net area in tension, of one block; every plausible block is examined and the weakest governs",
+			Steps: []Step{rup, yld,
+				{Value: nominal(Rn), Expr: Min(Of(rup.Value), Of(yld.Value)), Say: Words("the lesser")}},
+		}
+	}
+	return r
 }
 
 // MemberBlockShear is block shear of the member, the weakest of every

@@ -75,20 +75,104 @@ func BoltShear(c *Connection) Result {
 	if why != "" {
 		note += "; " + why
 	}
-	r := finish(c, "bolts.shear", "J3.6", Rn, c.Edition.BoltShearFactor(), []Value{
-		{"Fnv", float64(Fnv), units.DimStress},
-		{"Ab", float64(Ab), units.DimArea},
-		{"n", float64(n), units.Dimensionless},
-		{"planes", float64(ns), units.Dimensionless},
-		{"long_joint_factor", f, units.Dimensionless},
-		{"pattern_length", float64(patternLength(c.Holes)), units.DimLength},
-		{"filler_factor", ff, units.Dimensionless},
-		{"filler_t", float64(c.Bolt.FillerT), units.DimLength},
-	}, note)
+	vs := newValues(8)
+	pFnv := vs.add(Value{Name: "Fnv", V: float64(Fnv), Dim: units.DimStress, What: "nominal shear stress of the bolt"})
+	pAb := vs.add(Value{Name: "Ab", V: float64(Ab), Dim: units.DimArea, What: "nominal unthreaded bolt area, π·d²/4"})
+	pN := vs.add(valBolts(n))
+	pPlanes := vs.add(Value{Name: "planes", V: float64(ns), What: "shear planes per bolt"})
+	pLj := vs.add(Value{Name: "long_joint_factor", V: f, Sym: "long-joint factor", What: "long-joint reduction of Fnv (1 when none)"})
+	pPl := vs.add(Value{Name: "pattern_length", V: float64(patternLength(c.Holes)), Dim: units.DimLength, Sym: "pattern length",
+		What: "length of the pattern along the load"})
+	none := ff == 1 && c.Bolt.FillerT == 0 // no fillers: nothing to show
+	pFf := vs.add(valFillerFactor(ff))
+	pFf.Omit = none
+	vs.add(valFillerT(c.Bolt.FillerT)).Omit = none
+	r := finish(c, "bolts.shear", "J3.6", Rn, c.Edition.BoltShearFactor(), vs.list, note)
 	if ff < 1 {
 		r.Clause += ", " + c.Edition.Clause("J5.2")
 	}
+
+	bolt, ed := c.Bolt, c.Edition
+	r.explain = func() Working {
+		fnv, ab, nv, planes, lj, pl, ffv := *pFnv, *pAb, *pN, *pPlanes, *pLj, *pPl, *pFf
+		d := Value{Sym: "d", V: float64(bolt.D), Dim: units.DimLength}
+		abStep := Step{Value: ab, Expr: Div(Mul(K(math.Pi, "π"), Sq(Of(d))), K(4, "4"))}
+		fnvStep := Step{Value: fnv, Then: Phrase(Words(" for "), Words(bolt.Grade.Name), Words(", threads "), Words(bolt.Threads.String()))}
+		if f != 0 && f < 1 {
+			long, _ := ed.LongJoint()
+			fnvStep.Expr = Mul(Of(Value{Sym: "Fnv", V: float64(bolt.Grade.Fnv(bolt.Threads)), Dim: units.DimStress}), Coef(lj, 3))
+			fnvStep.Show = ShowValue
+			fnvStep.Then.Args = append(fnvStep.Then.Args, Words(", reduced by the factor "), Coef(lj, 3), Words(": the pattern is "),
+				Of(pl), Words(" long, over "), Of(Value{V: float64(long), Dim: units.DimLength}))
+		}
+		rnExpr := Mul(Of(fnv), Of(ab), Of(nv), Named("ns", Of(planes)))
+		where := "n is the number of bolts and ns the shear planes of each"
+		w := Working{Title: "Shear rupture of the bolts", Steps: []Step{abStep, fnvStep}}
+		if ff < 1 {
+			rnExpr.Args = append(rnExpr.Args, Coef(ffv, 3))
+			formula, steps := fillerWorking(ed.System, bolt.FillerT, ff)
+			w.Formula = append(w.Formula, formula)
+			w.Steps = append(w.Steps, steps...)
+			limit := "1/4 in"
+			if ed.System == units.SI {
+				limit = "6 mm"
+			}
+			where += "; ff is the filler factor for bolts through fillers over " + limit +
+				" thick that are not developed, t the total thickness of the fillers (J5.2(a))"
+		}
+		rn := Step{Value: nominal(Rn), Expr: rnExpr}
+		w.Formula = append([]Step{rn, abStep}, w.Formula...)
+		w.Steps = append(w.Steps, rn)
+		w.Where = where
+		return w
+	}
 	return r
+}
+
+// fillerWorking is the J5.2(a) factor worked from the fillers' thickness,
+// in the formula the edition prints for the job's system: its formula line
+// and its steps (ff is the factor the bolts' shear strength takes, at
+// least 0.85).
+func fillerWorking(sys units.System, t units.Length, ff float64) (formula Step, steps []Step) {
+	var raw Expr
+	unit := "in."
+	if sys == units.SI {
+		raw = Sub(K(1, "1"), Mul(K(0.0154, "0.0154"), Sub(Coef(Value{Sym: "t", V: t.Mm()}, -4), K(6, "6"))))
+		unit = "mm"
+	} else {
+		raw = Sub(K(1, "1"), Mul(K(0.4, "0.4"), Sub(Coef(Value{Sym: "t", V: t.In()}, -4), K(0.25, "0.25"))))
+	}
+	const floor = 0.85
+	formula = Step{Value: Value{Sym: "ff"}, Expr: raw, Then: Words(" ≥ 0.85, t in " + unit)}
+	// The formula's value before the floor: the edition applies the
+	// floor inside FillerFactor, so the limit state has no variable of
+	// its own for it. Where the floor does not bind, the step's value is
+	// the edition's factor and the tests hold the formula to it; where it
+	// binds, the second step is held to it.
+	v, _ := raw.Eval()
+	then := Phrase(Words(": fillers "), Of(valFillerT(t)), Words(" thick, not developed"))
+	if v >= ff {
+		return formula, []Step{{Value: Value{Sym: "ff", V: ff}, Expr: raw, Then: then}}
+	}
+	return formula, []Step{
+		{Value: Value{Sym: "ff", V: v}, Expr: raw},
+		{Value: Value{Sym: "ff", V: ff}, Expr: Max(Of(Value{V: v}), K(floor, "0.85")), Show: ShowValue,
+			Join: ", not less than 0.85: ", Then: then},
+	}
+}
+
+// valBolts is the number of bolts n.
+func valBolts(n int) Value { return Value{Name: "n", V: float64(n), What: "number of bolts"} }
+
+// valFillerFactor is the J5.2(a) factor; a report may leave it out at 1.
+func valFillerFactor(ff float64) Value {
+	return Value{Name: "filler_factor", V: ff, Sym: "ff", What: "filler factor ff of J5.2(a) on the bolts' shear strength (1 when none)", Omit: ff == 1}
+}
+
+// valFillerT is the fillers' thickness; a report may leave it out at 0.
+func valFillerT(t units.Length) Value {
+	return Value{Name: "filler_t", V: float64(t), Dim: units.DimLength, Sym: "t (fillers)",
+		What: "total thickness of the fillers at a shear plane (0 when none given)", Omit: t == 0}
 }
 
 // BoltSlip is the slip resistance of a slip-critical joint:
@@ -119,16 +203,27 @@ func BoltSlip(c *Connection) (Result, error) {
 		f = e.SlipFactor(rules.Standard, rules.Transverse)
 	}
 	Rn := units.Force(mu*Du*hf*float64(ns)*float64(n)) * Tb
-	return finish(c, "bolts.slip", "J3.8", Rn, f, []Value{
-		{"mu", mu, units.Dimensionless},
-		{"Du", Du, units.Dimensionless},
-		{"hf", hf, units.Dimensionless},
-		{"Tb", float64(Tb), units.DimForce},
-		{"ns", float64(ns), units.Dimensionless},
-		{"n", float64(n), units.Dimensionless},
-		{"phi", f.Phi, units.Dimensionless},
-		{"omega", f.Omega, units.Dimensionless},
-	}, fmt.Sprintf("class %s surface, %d slip plane(s)", c.Bolt.Surface, ns)), nil
+	vs := newValues(8)
+	pMu := vs.add(Value{Name: "mu", V: mu, Sym: "μ", What: "mean slip coefficient μ"})
+	pDu := vs.add(Value{Name: "Du", V: Du, What: "mean installed over minimum pretension"})
+	pHf := vs.add(Value{Name: "hf", V: hf, What: "filler factor"})
+	pTb := vs.add(Value{Name: "Tb", V: float64(Tb), Dim: units.DimForce, What: "minimum bolt pretension"})
+	pNs := vs.add(Value{Name: "ns", V: float64(ns), What: "slip planes"})
+	pN := vs.add(valBolts(n))
+	vs.add(Value{Name: "phi", V: f.Phi, Sym: "φ", What: "resistance factor φ for slip, by hole type"})
+	vs.add(Value{Name: "omega", V: f.Omega, Sym: "Ω", What: "safety factor Ω for slip, by hole type"})
+	r := finish(c, "bolts.slip", "J3.8", Rn, f, vs.list, fmt.Sprintf("class %s surface, %d slip plane(s)", c.Bolt.Surface, ns))
+	r.explain = func() Working {
+		muv, duv, hfv, tb, nsv, nv := *pMu, *pDu, *pHf, *pTb, *pNs, *pN
+		rn := Step{Value: nominal(Rn), Expr: Mul(Coef(muv, 2), Coef(duv, 2), Coef(hfv, 2), Of(tb), Of(nsv), Of(nv))}
+		return Working{
+			Title:   "Slip resistance of the slip-critical joint",
+			Formula: []Step{rn},
+			Where:   "μ is the mean slip coefficient of the faying surface, Du the ratio of mean installed to minimum pretension, hf the filler factor, Tb the minimum pretension, ns the slip planes and n the bolts; φ and Ω go by hole type, the most severe hole in the joint governing",
+			Steps:   []Step{rn},
+		}
+	}
+	return r, nil
 }
 
 // BoltGroup is the strength of the bolt group taken bolt by bolt: each
@@ -142,10 +237,11 @@ func BoltSlip(c *Connection) (Result, error) {
 func BoltGroup(c *Connection, member, plate []BoltShare) Result {
 	Fnv, _ := boltShearFnv(c)
 	ff, _ := fillerFactor(c)
-	shear := Fnv.Times(BoltArea(c.Bolt.D)) * units.Force(float64(c.ShearPlanes())*ff)
-	var Rn units.Force
-	governs := map[string]int{}
-	for i := range c.Holes {
+	Ab := BoltArea(c.Bolt.D)
+	ns := c.ShearPlanes()
+	shear := Fnv.Times(Ab) * units.Force(float64(ns)*ff)
+	// least is the strength of bolt i and what governs it.
+	least := func(i int) (units.Force, string) {
 		rn, by := shear, "bolt shear"
 		if member[i].Rn < rn {
 			rn, by = member[i].Rn, "member "+member[i].Governed
@@ -153,18 +249,67 @@ func BoltGroup(c *Connection, member, plate []BoltShare) Result {
 		if plate != nil && plate[i].Rn < rn {
 			rn, by = plate[i].Rn, "plate "+plate[i].Governed
 		}
+		return rn, by
+	}
+	var Rn units.Force
+	governs := map[string]int{}
+	for i := range c.Holes {
+		rn, by := least(i)
 		governs[by]++
 		Rn += rn
 	}
+	vs := newValues(3)
+	pRnShear := vs.add(Value{Name: "rn_shear", V: float64(shear), Dim: units.DimForce, Sym: "rn,shear",
+		What: "shear strength of one bolt, Fnv·Ab·ns (× ff with fillers)"})
+	pN, pFf := vs.add(valBolts(len(c.Holes))), vs.add(valFillerFactor(ff))
 	// bolt shear and bearing share φ = 0.75 and Ω = 2.00 (J3.6, J3.10)
-	r := finish(c, "bolts.group", "J3.6", Rn, c.Edition.BoltShearFactor(), []Value{
-		{"rn_shear", float64(shear), units.DimForce},
-		{"n", float64(len(c.Holes)), units.Dimensionless},
-		{"filler_factor", ff, units.Dimensionless},
-	}, fmt.Sprintf("per bolt the least of shear, member and plate bearing/tearout; %s", describeCounts(governs)))
+	r := finish(c, "bolts.group", "J3.6", Rn, c.Edition.BoltShearFactor(), vs.list,
+		fmt.Sprintf("per bolt the least of shear, member and plate bearing/tearout; %s", describeCounts(governs)))
 	r.Clause = c.Edition.Clause("J3.6") + ", " + c.Edition.Clause("J3.10")
 	if ff < 1 {
 		r.Clause += ", " + c.Edition.Clause("J5.2")
+	}
+
+	n := len(c.Holes)
+	r.explain = func() Working {
+		rnShear, nv, ffv := *pRnShear, *pN, *pFf
+		cols := []Column{{Label: "hole", Text: true}, {Label: "shear", Dim: units.DimForce, UnitInHead: true},
+			{Label: "member", Dim: units.DimForce, UnitInHead: true}}
+		if plate != nil {
+			cols = append(cols, Column{Label: "plate", Dim: units.DimForce, UnitInHead: true})
+		}
+		cols = append(cols, Column{Label: "least", Dim: units.DimForce, UnitInHead: true}, Column{Label: "governed by", Text: true})
+		table := &Table{Title: "Bolt by bolt", Cols: cols, Cells: make([]Cell, 0, len(cols)*n)}
+		terms := make([]Expr, n)
+		for i := range n {
+			rn, by := least(i)
+			table.Cells = append(table.Cells, Cell{Text: member[i].Hole}, Cell{V: float64(shear)}, Cell{V: float64(member[i].Rn)})
+			if plate != nil {
+				table.Cells = append(table.Cells, Cell{V: float64(plate[i].Rn)})
+			}
+			table.Cells = append(table.Cells, Cell{V: float64(rn)}, Cell{Text: by})
+			terms[i] = Of(Value{Sym: "rn", V: float64(rn), Dim: units.DimForce})
+		}
+		perBolt := Step{Value: rnShear, Show: ShowValue,
+			Expr: Mul(Of(Value{Sym: "Fnv", V: float64(Fnv), Dim: units.DimStress}), Of(Value{Sym: "Ab", V: float64(Ab), Dim: units.DimArea}),
+				Of(Value{Sym: "ns", V: float64(ns)}), Of(Value{Sym: "ff", V: ff})),
+			Then: Words(" per bolt")}
+		where := "rn,shear = Fnv·Ab·ns is the shear strength of one bolt"
+		if ff < 1 {
+			perBolt.Then = Phrase(Words(" per bolt, with the filler factor ff = "), Coef(ffv, 3), Words(" (J5.2(a))"))
+			where = "rn,shear = Fnv·Ab·ns·ff is the shear strength of one bolt, ff the filler factor of J5.2(a) (see bolts.shear)"
+		}
+		rn := Step{Value: nominal(Rn), Expr: Sum("min(rn,shear; rn,member; rn,plate)", terms),
+			Say: Phrase(Words("Σ over "), Of(nv), Words(" bolts (table)"))}
+		formula := rn
+		formula.Then = Words(", over the bolts")
+		return Working{
+			Title:   "Strength of the bolt group, bolt by bolt",
+			Formula: []Step{formula},
+			Where:   where + "; rn,member and rn,plate are the bearing or tearout strengths of its holes, from the bearing checks",
+			Steps:   []Step{perBolt, rn},
+			Table:   table,
+		}
 	}
 	return r
 }

@@ -9,7 +9,8 @@ import "gaugeline/rules"
 // failing limit state is a result; the error reports a lookup the edition
 // cannot answer (e.g. the pretension of a bolt grade that has none).
 func Check(c *Connection) ([]Result, error) {
-	out := []Result{MemberYield(c), MemberRupture(c), MemberBlockShear(c)}
+	out := make([]Result, 0, 12) // every limit state a connection can have
+	out = append(out, MemberYield(c), MemberRupture(c), MemberBlockShear(c))
 	mb := MemberBearing(c)
 	out = append(out, mb)
 	if needsCombined(c) {

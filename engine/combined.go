@@ -3,6 +3,9 @@ package engine
 import (
 	"fmt"
 	"math"
+	"strconv"
+
+	"gaugeline/rules"
 
 	"gaugeline/rules/units"
 )
@@ -180,9 +183,39 @@ func MemberCombined(c *Connection) Result {
 	selected, eq := InteractionH1(pRatio, mRatio)
 	ratio := RadialH1(pRatio, mRatio)
 	ratioN := RadialH1(float64(Pr/Pn), float64(Mr/Mn))
-	eqNum := 1.0
-	if eq == "H1-1b" {
-		eqNum = 2
+	eqNum := 1 + b2f(eq == "H1-1b")
+
+	vs := newValues(26)
+	val := vs.named
+	// the values in the order of Result.Values
+	v := combinedParts{
+		Pr:     val("Pr", float64(Pr), units.DimForce, "", "required axial strength (the demand)"),
+		Pc:     val("Pc", float64(Pc), units.DimForce, "", "available tensile strength, the lesser of yielding and rupture (D2)"),
+		PcY:    val("Pc_yield", float64(y.Available), units.DimForce, "Pc,yield", "available strength in tensile yielding, D2(a)"),
+		PcR:    val("Pc_rupture", float64(r.Available), units.DimForce, "Pc,rupture", "available strength in tensile rupture, D2(b)"),
+		Pn:     val("Pn", float64(Pn), units.DimForce, "", "nominal tensile strength, min(Fy·Ag, Fu·Ae)"),
+		e:      val("e", float64(e), units.DimLength, "", "offset of the bolt group's centre of gravity from the bar's centre line"),
+		ybar:   val("ybar", float64(ybar), units.DimLength, "ȳ", "the bolt group's centre of gravity, from the edge y = 0"),
+		d:      val("d", float64(d), units.DimLength, "", "depth of the bar in the plane of bending (its width)"),
+		t:      val("t", float64(t), units.DimLength, "", "thickness of the bar"),
+		Fy:     vs.add(valFy(m.Fy)),
+		Z:      val("Z", float64(Z), units.DimModulus, "", "plastic section modulus of the bar, t·d²/4"),
+		S:      val("S", float64(Sx), units.DimModulus, "", "elastic section modulus of the bar, t·d²/6"),
+		k:      val("Mp_cap", k, units.Dimensionless, "k", "k of F11.1: Mp ≤ k·Fy·Sx"),
+		Mp:     val("Mp", float64(Mp), units.DimMoment, "", "plastic moment, F11.1"),
+		Lb:     val("Lb", float64(Lb), units.DimLength, "", "unbraced length within the connection"),
+		lambda: val("LTB_lambda", lambda, units.Dimensionless, "Lb·d/t²", "Lb·d/t² of F11.2"),
+		limit: val("LTB_limit", 0.08*float64(ed.SteelModulus()/m.Fy), units.Dimensionless, "0.08E/Fy",
+			"0.08E/Fy: below it F11.2(a), no lateral-torsional buckling"),
+		Mn:  val("Mn", float64(Mn), units.DimMoment, "", "nominal flexural strength, F11"),
+		Mc:  val("Mc", float64(Mc), units.DimMoment, "", "available flexural strength"),
+		Mr:  val("Mr", float64(Mr), units.DimMoment, "", "required flexural strength, Pr·e"),
+		p:   val("Pr_Pc", pRatio, units.Dimensionless, "Pr/Pc", "axial term"),
+		m:   val("Mr_Mc", mRatio, units.Dimensionless, "Mr/Mc", "flexural term"),
+		a:   val("H1_1a", H1a(pRatio, mRatio), units.Dimensionless, "H1-1a", "Eq. H1-1a, Pr/Pc + (8/9)·Mr/Mc"),
+		b:   val("H1_1b", H1b(pRatio, mRatio), units.Dimensionless, "H1-1b", "Eq. H1-1b, Pr/(2Pc) + Mr/Mc"),
+		eq:  val("H1_eq", eqNum, units.Dimensionless, "equation", "equation H1.2 selects: 1 for H1-1a (Pr/Pc ≥ 0.2), 2 for H1-1b"),
+		sel: val("H1_value", selected, units.Dimensionless, "H1 value", "value of the selected equation"),
 	}
 
 	res := Result{
@@ -192,34 +225,7 @@ func MemberCombined(c *Connection) Result {
 		Available: Pc,
 		Demand:    Pr,
 		Ratio:     ratio,
-		Values: []Value{
-			{"Pr", float64(Pr), units.DimForce},
-			{"Pc", float64(Pc), units.DimForce},
-			{"Pc_yield", float64(y.Available), units.DimForce},
-			{"Pc_rupture", float64(r.Available), units.DimForce},
-			{"Pn", float64(Pn), units.DimForce},
-			{"e", float64(e), units.DimLength},
-			{"ybar", float64(ybar), units.DimLength},
-			{"d", float64(d), units.DimLength},
-			{"t", float64(t), units.DimLength},
-			{"Fy", float64(m.Fy), units.DimStress},
-			{"Z", float64(Z), units.DimModulus},
-			{"S", float64(Sx), units.DimModulus},
-			{"Mp_cap", k, units.Dimensionless},
-			{"Mp", float64(Mp), units.DimMoment},
-			{"Lb", float64(Lb), units.DimLength},
-			{"LTB_lambda", lambda, units.Dimensionless},
-			{"LTB_limit", 0.08 * float64(ed.SteelModulus()/m.Fy), units.Dimensionless},
-			{"Mn", float64(Mn), units.DimMoment},
-			{"Mc", float64(Mc), units.DimMoment},
-			{"Mr", float64(Mr), units.DimMoment},
-			{"Pr_Pc", pRatio, units.Dimensionless},
-			{"Mr_Mc", mRatio, units.Dimensionless},
-			{"H1_1a", H1a(pRatio, mRatio), units.Dimensionless},
-			{"H1_1b", H1b(pRatio, mRatio), units.Dimensionless},
-			{"H1_eq", eqNum, units.Dimensionless},
-			{"H1_value", selected, units.Dimensionless},
-		},
+		Values:    vs.list,
 		Note: fmt.Sprintf("H1.2 selects Eq. %s (%.3f); Pr with Mr = Pr·e, e the bolt group's offset from the bar's centre line; "+
 			"Pc = D2 %s, the lesser of yielding and rupture; Mc from F11 on the gross bar bent in its plane, "+
 			"Lb = 0 (the bar is bolted to and bears on the plate over the connection), F11.2(%s); "+
@@ -230,7 +236,94 @@ func MemberCombined(c *Connection) Result {
 		res.Nominal = Pr / units.Force(ratioN)
 	}
 	res.Pass = ratio <= 1+1e-9
+	method := c.Method
+	res.explain = func() Working { return combinedWorking(ed, method, ratio, &v, eq) }
 	return res
+}
+
+// combinedParts are the values of member.combined, in its values list.
+type combinedParts struct {
+	Pr, Pc, PcY, PcR, Pn, e, ybar, d, t, Fy, Z, S, k, Mp, Lb, lambda, limit, Mn, Mc, Mr, p, m, a, b, eq, sel *Value
+}
+
+// combinedWorking is the working of member.combined: H1.2 with F11 and
+// D2; its result is an interaction, not a strength with one φ.
+func combinedWorking(ed *rules.Edition, method rules.Method, ratioV float64, v *combinedParts, eq string) Working {
+	lrfd := method == rules.LRFD
+	fb := ed.FlexureFactor()
+	sym := func(s string) Expr { return Of(Value{Sym: s}) }
+	two := K(2, "2")
+
+	eStep := Step{Value: *v.e, Expr: Abs(Sub(Of(*v.ybar), Div(Of(*v.d), two)))}
+	mr := Step{Value: *v.Mr, Expr: Mul(Of(*v.Pr), Of(*v.e))}
+	pc := Step{Value: *v.Pc, Expr: Min(Of(*v.PcY), Of(*v.PcR))}
+	sx := *v.S
+	sx.Sym = "Sx"
+	z := Step{Value: *v.Z, Expr: Div(Mul(Of(*v.t), Sq(Of(*v.d))), K(4, "4"))}
+	s := Step{Value: sx, Expr: Div(Mul(Of(*v.t), Sq(Of(*v.d))), K(6, "6")), Join: "; "}
+	mp := Step{Value: *v.Mp, Expr: Min(Mul(Of(*v.Fy), Of(*v.Z)), Mul(K(v.k.V, strconv.FormatFloat(v.k.V, 'f', 1, 64)), Of(*v.Fy), Of(sx)))}
+	E := Value{Sym: "E", V: float64(ed.SteelModulus()), Dim: units.DimStress}
+	lb := []Step{
+		{Value: *v.Lb},
+		{Value: *v.lambda, Places: 1, Expr: Div(Mul(Of(*v.Lb), Of(*v.d)), Sq(Of(*v.t))), Show: ShowValue, Join: ": "},
+	}
+	if v.lambda.V <= v.limit.V {
+		lb = append(lb,
+			Step{Value: *v.limit, Places: 1, Expr: Div(Mul(K(0.08, "0.08"), Of(E)), Of(*v.Fy)), Show: ShowValue, Join: " ≤ "},
+			Step{Value: *v.Mn, Expr: Of(*v.Mp), Say: Words("Mp"), Join: ", F11.2(a): "})
+	} else {
+		lb = append(lb,
+			Step{Value: *v.limit, Places: 1, Expr: Div(Mul(K(0.08, "0.08"), Of(E)), Of(*v.Fy)), Show: ShowValue, Join: " > "},
+			Step{Value: *v.Mn, Join: ", F11.2: "})
+	}
+	phi, omega := Value{Sym: "φb", V: fb.Phi}, Value{Sym: "Ωb", V: fb.Omega}
+	mc := Step{Value: *v.Mc, Expr: Mul(Coef(phi, 2), Of(*v.Mn))}
+	mcText := ", φb = " + strconv.FormatFloat(fb.Phi, 'f', 2, 64)
+	pcForm := Step{Value: Value{Sym: "Pc"}, Expr: Min(Mul(sym("φt"), sym("Fy"), sym("Ag")), Mul(sym("φt"), sym("Fu"), sym("Ae")))}
+	if !lrfd {
+		mc.Expr = Div(Of(*v.Mn), Coef(omega, 2))
+		mcText = ", Ωb = " + strconv.FormatFloat(fb.Omega, 'f', 2, 64)
+		pcForm.Expr = Min(Div(Mul(sym("Fy"), sym("Ag")), sym("Ωt")), Div(Mul(sym("Fu"), sym("Ae")), sym("Ωt")))
+	}
+	p, m := Step{Value: *v.p, Places: 3, Expr: Div(Of(*v.Pr), Of(*v.Pc))}, Step{Value: *v.m, Places: 3, Expr: Div(Of(*v.Mr), Of(*v.Mc)), Join: "; "}
+	h1a := Step{Value: *v.a, Places: 3, Expr: Add(Coef(*v.p, 3), Mul(K(8.0/9.0, "(8/9)"), Coef(*v.m, 3)))}
+	h1b := Step{Value: *v.b, Places: 3, Expr: Add(Div(Coef(*v.p, 3), two), Coef(*v.m, 3))}
+	ratio := Step{Value: Value{Sym: "ratio", V: ratioV}, Places: 3, Expr: Max(Coef(*v.a, 3), Coef(*v.b, 3))}
+	eqText := "H1-1a (Pr/Pc ≥ 0.2)"
+	if eq == "H1-1b" {
+		eqText = "H1-1b (Pr/Pc < 0.2)"
+	}
+	steps := []Step{eStep, mr, pc, z, s, mp}
+	steps = append(steps, lb...)
+	steps = append(steps, mc, p, m, h1a, h1b,
+		Step{Then: Phrase(Words("H1.2 selects Eq. "+eqText+": "), Coef(*v.sel, 3))},
+		ratio)
+
+	mrForm, eForm := mr, eStep
+	eForm.Join = ", "
+	mcForm := mc
+	mcForm.Then = Words(mcText)
+	ratioForm := ratio
+	ratioForm.Then = Words(" = Pr / (largest force allowed at e)")
+	return Working{
+		Title: "Tension with the moment of the eccentric bolt group (flat bar)",
+		Formula: []Step{
+			mrForm, eForm,
+			pcForm,
+			{Value: Value{Sym: "Mn"}, Expr: Words("Mp"), Then: Phrase(Words(" = "), Mul(Of(*v.Fy), Of(*v.Z)), Words(" ≤ "), Mul(sym("k"), Of(*v.Fy), Of(sx)))},
+			{Value: z.Value, Expr: z.Expr, Join: ", "}, {Value: sx, Expr: s.Expr, Join: ", "},
+			mcForm,
+			{Then: Phrase(Words("Eq. H1-1a, Pr/Pc ≥ 0.2: "), h1a.Expr, Words(" ≤ 1.0"))},
+			{Then: Words("Eq. H1-1b, Pr/Pc < 0.2: Pr/(2Pc) + Mr/Mc ≤ 1.0")},
+			ratioForm,
+		},
+		Where: "ȳ is the mean y of the holes (every bolt the same, each an equal share); d the bar's width, the depth in the plane of bending; " +
+			"the two equations bound one region, so the larger passes exactly when the one H1.2 selects does, and Pr over it is the force the interaction allows; " +
+			"within the connection the bolts and the plate brace the bar, Lb = 0, F11.2(a): no lateral-torsional buckling",
+		Steps: steps,
+		Interaction: &Interaction{Eq: eqText, Value: v.sel.V, Allowed: "Force allowed at this e", Nominal: "The same with Pn and Mn",
+			With: "D2 and F11"},
+	}
 }
 
 func b2f(b bool) float64 {

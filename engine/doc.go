@@ -17,7 +17,10 @@
 // that part's ply.
 //
 // Every limit state returns a Result carrying its id, the clause of the
-// edition in force, nominal and available strength, the demand, the ratio
-// and the intermediate values used, so that reports can quote them. A
-// failing limit state is a result, not an error.
+// edition in force, nominal and available strength, the factor applied,
+// the demand, the ratio and the intermediate values used, so that reports
+// can quote them, and its working (Result.Working): its formula and its
+// steps as expressions over those values, which any report prints without
+// knowing the limit state (working.go). A failing limit state is a result,
+// not an error.
 package engine

@@ -1,13 +1,31 @@
 package engine
 
-import "gaugeline/rules/units"
+import (
+	"gaugeline/rules"
+	"gaugeline/rules/units"
+)
 
 // Value is a named intermediate value of a limit state, with its dimension
-// so that it can be printed in the job's units.
+// so that it can be printed in the job's units, and what a report says of
+// it.
 type Value struct {
-	Name string
+	Name string  // stable key, e.g. "lc_min" (the JSON's values)
 	V    float64 // internal units
 	Dim  units.Dim
+	Sym  string // printed symbol, e.g. "lc,min" ("": Name)
+	What string // what it is, for a report's list of values
+	// Omit: a report's list of values may leave it out (it says nothing
+	// here, e.g. the filler factor of a joint without fillers); the JSON
+	// keeps every value.
+	Omit bool
+}
+
+// Symbol is the value's printed symbol.
+func (v Value) Symbol() string {
+	if v.Sym != "" {
+		return v.Sym
+	}
+	return v.Name
 }
 
 // BoltShare is one bolt's contribution to a per-bolt limit state.
@@ -29,7 +47,45 @@ type Result struct {
 	Demand    units.Force
 	Ratio     float64 // demand / available
 	Pass      bool
-	Values    []Value
-	Note      string      // what was checked, e.g. "toe strip of line 1"
-	PerBolt   []BoltShare // bearing and tearout only
+	// Factor is the φ and Ω applied: Available = Factor.Available(method,
+	// Nominal). Zero for an interaction (Working.Interaction).
+	Factor  rules.Factor
+	Values  []Value
+	Note    string      // what was checked, e.g. "toe strip of line 1"
+	PerBolt []BoltShare // bearing and tearout only
+	// explain builds the working; set by the limit state where it
+	// computes the result, from copies of what it used (never the
+	// Connection, which the caller may change), and called only when a
+	// report asks, so that the layout search pays nothing for it.
+	explain func() Working
+}
+
+// Working is how the result was reached, for a report: see Working.
+func (r *Result) Working() Working {
+	if r.explain == nil {
+		return Working{}
+	}
+	return r.explain()
+}
+
+// valueList collects a limit state's values in the order of
+// Result.Values. add returns where the value lies in the list, so that the
+// working, built later, reads it there instead of holding a copy.
+type valueList struct{ list []Value }
+
+func newValues(n int) valueList { return valueList{make([]Value, 0, n)} }
+
+// add appends v; the list never grows past its capacity, so the pointers
+// add returned stay in it.
+func (vs *valueList) add(v Value) *Value {
+	if len(vs.list) == cap(vs.list) {
+		panic("engine: valueList: more values than its capacity")
+	}
+	vs.list = append(vs.list, v)
+	return &vs.list[len(vs.list)-1]
+}
+
+// named adds the value name = v of dimension d, printed sym, meaning what.
+func (vs *valueList) named(name string, v float64, d units.Dim, sym, what string) *Value {
+	return vs.add(Value{Name: name, V: v, Dim: d, Sym: sym, What: what})
 }

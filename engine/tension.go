@@ -184,10 +184,19 @@ func ShearLagFactor(c *Connection) ShearLag {
 func MemberYield(c *Connection) Result {
 	m := c.Member
 	Rn := m.Fy.Times(m.Ag)
-	return finish(c, "member.yield", "D2(a)", Rn, c.Edition.YieldFactor(), []Value{
-		{"Fy", float64(m.Fy), units.DimStress},
-		{"Ag", float64(m.Ag), units.DimArea},
-	}, "gross section of the member")
+	vs := newValues(2)
+	pFy, pAg := vs.add(valFy(m.Fy)), vs.add(valAg(m.Ag))
+	r := finish(c, "member.yield", "D2(a)", Rn, c.Edition.YieldFactor(), vs.list, "gross section of the member")
+	r.explain = func() Working {
+		Fy, Ag := *pFy, *pAg
+		rn := Step{Value: nominal(Rn), Expr: Mul(Of(Fy), Of(Ag))}
+		return Working{
+			Title:   "Tensile yielding in the gross section of the member",
+			Formula: []Step{rn},
+			Steps:   []Step{rn},
+		}
+	}
+	return r
 }
 
 // MemberRupture is tensile rupture in the net section: Pn = Fu·Ae with
@@ -200,25 +209,103 @@ func MemberRupture(c *Connection) Result {
 	sl := ShearLagFactor(c)
 	Ae := units.Area(sl.U) * An
 	Rn := m.Fu.Times(Ae)
-	vals := []Value{
-		{"Fu", float64(m.Fu), units.DimStress},
-		{"Ag", float64(m.Ag), units.DimArea},
-		{"An", float64(An), units.DimArea},
-		{"U", sl.U, units.Dimensionless},
-		{"Ae", float64(Ae), units.DimArea},
-		{"deduction", float64(ded), units.DimLength},
-	}
+	vs := newValues(11)
+	pFu, pAg := vs.add(valFu(m.Fu)), vs.add(valAg(m.Ag))
+	pAn := vs.add(Value{Name: "An", V: float64(An), Dim: units.DimArea, What: "net area"})
+	pU := vs.add(Value{Name: "U", V: sl.U, What: "shear lag factor (Table D3.1)"})
+	pAe := vs.add(Value{Name: "Ae", V: float64(Ae), Dim: units.DimArea, What: "effective net area, U·An"})
+	pDd := vs.add(valDeduction(ded))
+	var pXbar, pL, pU2, pU8, pUcon *Value // angles: Table D3.1 cases 2 and 8, the D3 bound
 	if m.Shape != Flat {
-		vals = append(vals,
-			Value{"xbar", float64(m.Xbar), units.DimLength},
-			Value{"l", float64(sl.L), units.DimLength},
-			Value{"U_case2", sl.U2, units.Dimensionless},
-			Value{"U_case8", sl.U8, units.Dimensionless},
-			Value{"U_min", sl.Ucon, units.Dimensionless},
-		)
+		pXbar = vs.add(Value{Name: "xbar", V: float64(m.Xbar), Dim: units.DimLength, Sym: "x̄", What: "connection eccentricity x̄"})
+		pL = vs.add(Value{Name: "l", V: float64(sl.L), Dim: units.DimLength, What: "length of connection, first to last row"})
+		pU2 = vs.add(Value{Name: "U_case2", V: sl.U2, Sym: "U (case 2)", What: "Table D3.1 case 2: 1 − x̄/l"})
+		pU8 = vs.add(Value{Name: "U_case8", V: sl.U8, Sym: "U (case 8)", What: "Table D3.1 case 8, angles (0 when it does not apply)"})
+		pUcon = vs.add(Value{Name: "U_min", V: sl.Ucon, Sym: "U (bound)", What: "connected elements' gross area over Ag (D3)"})
 	}
-	return finish(c, "member.rupture", "D2(b)", Rn, c.Edition.RuptureFactor(), vals,
+	r := finish(c, "member.rupture", "D2(b)", Rn, c.Edition.RuptureFactor(), vs.list,
 		"net section, worst path; U from Table D3.1 "+sl.Case)
+
+	ed := c.Edition
+	r.explain = func() Working {
+		Fu, Ag, an, u, ae, dd := *pFu, *pAg, *pAn, *pU, *pAe, *pDd
+		// An = Ag − Σt·deduction, Σt the thickness of every piece
+		tsum := Value{Sym: "Σt", V: float64(m.Pieces) * float64(m.T), Dim: units.DimLength}
+		t := Of(tsum)
+		if m.Pieces > 1 {
+			t = Named("Σt", Times(Of(Value{Sym: "n", V: float64(m.Pieces)}), Of(Value{Sym: "t", V: float64(m.T), Dim: units.DimLength})))
+		}
+		anStep := Step{Value: an, Expr: Sub(Of(Ag), Mul(t, Of(dd)))}
+		aeStep := Step{Value: ae, Expr: Mul(Of(u), Of(an))}
+		rn := Step{Value: nominal(Rn), Expr: Mul(Of(Fu), Of(ae))}
+		where := "the path is the worst straight or zig-zag path across the section (B4.3); s and g are the spacing and gage between consecutive holes of the path; dh = nominal hole + " +
+			units.FormatJob(ed.HoleAllowance(), ed.System)
+		w := Working{
+			Title:   "Tensile rupture in the net section of the member",
+			Formula: []Step{rn, aeStep, anStep},
+			Steps:   []Step{anStep},
+		}
+		if m.Shape == Flat {
+			w.Formula = append(w.Formula, Step{Value: Value{Sym: "U"}, Expr: K(1, "1.0")})
+			where += "; U = 1.0 by Table D3.1 case 1: every part of the section is connected"
+			w.Steps = append(w.Steps, Step{Value: u})
+		} else {
+			xbar, l, u2, u8, ucon := *pXbar, *pL, *pU2, *pU8, *pUcon
+			w.Formula = append(w.Formula, Step{Value: Value{Sym: "U"}, Expr: Max(Sub(K(1, "1"), Div(Of(xbar), Of(l))),
+				Of(Value{Sym: "U case 8", V: sl.U8}), Of(Value{Sym: "U bound", V: sl.Ucon}))})
+			where += "; 1 − x̄/l is Table D3.1 case 2; case 8 for angles is 0.80 with 4 or more bolts in a line, 0.60 with 3; the bound is the connected elements' area over Ag (D3)"
+			if sl.L > eps {
+				w.Steps = append(w.Steps, Step{Value: u2, Expr: Sub(K(1, "1"), Div(Of(xbar), Of(l))), Show: ShowForm})
+			} else {
+				w.Steps = append(w.Steps, Step{Then: Words("U (case 2): one row of bolts, no length of connection")})
+			}
+			if sl.U8 > 0 {
+				w.Steps = append(w.Steps, Step{Value: u8})
+			} else {
+				w.Steps = append(w.Steps, Step{Then: Words("U (case 8) does not apply: fewer than 3 bolts in a line")})
+			}
+			connected := Mul(Of(Value{Sym: "n", V: float64(m.Pieces)}), Of(Value{Sym: "b", V: float64(m.Width), Dim: units.DimLength}),
+				Of(Value{Sym: "t", V: float64(m.T), Dim: units.DimLength}))
+			w.Steps = append(w.Steps,
+				Step{Value: ucon, Expr: Div(connected, Of(Ag)), Say: Words("connected elements' area / Ag")},
+				Step{Value: u, Expr: Max(Of(u2), Of(u8), Of(ucon))})
+		}
+		w.Where = where
+		w.Steps = append(w.Steps, aeStep, rn)
+		return w
+	}
+	return r
+}
+
+// nominal is the nominal strength Rn as the value of a step.
+func nominal(Rn units.Force) Value { return Value{Sym: "Rn", V: float64(Rn), Dim: units.DimForce} }
+
+// Values that several limit states share, with what a report says of them.
+func valFy(Fy units.Stress) Value {
+	return Value{Name: "Fy", V: float64(Fy), Dim: units.DimStress, What: "specified minimum yield stress"}
+}
+
+func valFu(Fu units.Stress) Value {
+	return Value{Name: "Fu", V: float64(Fu), Dim: units.DimStress, What: "specified minimum tensile strength"}
+}
+
+func valAg(Ag units.Area) Value {
+	return Value{Name: "Ag", V: float64(Ag), Dim: units.DimArea, What: "gross area"}
+}
+
+// valDeduction is the width a worst path takes out (B4.3b).
+func valDeduction(d units.Length) Value {
+	return Value{Name: "deduction", V: float64(d), Dim: units.DimLength, Sym: "Σdh − Σs²/4g",
+		What: "width taken out by the worst path, Σdh − Σs²/4g"}
+}
+
+// valT is the thickness t of a part: for the member both angles of a pair
+// (what says so for one angle); a report says which.
+func valT(c *Connection, t units.Length, member bool, what string) Value {
+	if member && c.Member.Pieces == 2 {
+		what = "thickness of the 2 angles together"
+	}
+	return Value{Name: "t", V: float64(t), Dim: units.DimLength, What: what}
 }
 
 // finish fills the common fields of a result loaded by the whole demand.
@@ -236,6 +323,7 @@ func finishFor(c *Connection, demand units.Force, id, clause16 string, Rn units.
 		Nominal:   Rn,
 		Available: avail,
 		Demand:    demand,
+		Factor:    f,
 		Values:    vals,
 		Note:      note,
 	}

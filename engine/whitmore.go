@@ -2,6 +2,7 @@ package engine
 
 import (
 	"math"
+	"strconv"
 
 	"gaugeline/rules/units"
 )
@@ -76,13 +77,36 @@ func PlateYield(c *Connection) Result {
 	p := c.Plate
 	w := WhitmoreSection(c)
 	Aw := w.Lw.Mul(p.T)
-	return finish(c, "plate.yield", "J4.1(a)", p.Fy.Times(Aw), c.Edition.YieldFactor(), []Value{
-		{"Fy", float64(p.Fy), units.DimStress},
-		{"Lw", float64(w.Lw), units.DimLength},
-		{"Whitmore_spread", float64(w.Spread), units.DimLength},
-		{"t", float64(p.T), units.DimLength},
-		{"Ag", float64(Aw), units.DimArea},
-	}, whitmoreNote(w, "Whitmore section: 30° from the first bolt of each gage line, clipped by the plate"))
+	Rn := p.Fy.Times(Aw)
+	vs := newValues(5)
+	pFy, pLw := vs.add(valFy(p.Fy)), vs.add(valLw(w.Lw))
+	pSpread := vs.add(Value{Name: "Whitmore_spread", V: float64(w.Spread), Dim: units.DimLength, Sym: "spread",
+		What: "30° spread before the clip by the plate"})
+	pT := vs.add(valT(c, p.T, false, "thickness"))
+	pAg := vs.add(Value{Name: "Ag", V: float64(Aw), Dim: units.DimArea, What: "gross area of the Whitmore section, Aw = Lw·t"})
+	r := finish(c, "plate.yield", "J4.1(a)", Rn, c.Edition.YieldFactor(), vs.list,
+		whitmoreNote(w, "Whitmore section: 30° from the first bolt of each gage line, clipped by the plate"))
+	lo, hi, ymin, ymax, width := w.Low.Y1, w.High.Y1, p.YMin(), p.YMax(), p.Width
+	r.explain = func() Working {
+		Fy, lw, spread, t, ag := *pFy, *pLw, *pSpread, *pT, *pAg
+		aw := ag
+		aw.Sym = "Aw"
+		length := func(sym string, l units.Length) Expr { return Of(Value{Sym: sym, V: float64(l), Dim: units.DimLength}) }
+		lwStep := Step{Value: lw,
+			// the spread's ends clipped by the plate's side edges
+			Expr: Max(Sub(Min(length("y1", hi), length("ymax", ymax)), Max(length("y0", lo), length("ymin", ymin))), K(0, "0")),
+			Say:  Phrase(Of(spread), Words(" spread, clipped by the "), length("width", width), Words(" plate"))}
+		awStep := Step{Value: aw, Expr: Mul(Of(lw), Of(t))}
+		rn := Step{Value: nominal(Rn), Expr: Mul(Of(Fy), Of(aw))}
+		return Working{
+			Title: "Tensile yielding of the plate on the Whitmore section",
+			Formula: []Step{rn, awStep,
+				{Value: Value{Sym: "Lw"}, Expr: Words("the spread, clipped by the plate's side edges")}},
+			Where: "the spread is the width between 30° lines drawn from the first bolt of each gage line (the one nearest the free edge) to the section through the bolt farthest from it (the Whitmore section); one row of bolts spreads over the row's width only, and a single bolt has no Whitmore section",
+			Steps: []Step{lwStep, awStep, rn},
+		}
+	}
+	return r
 }
 
 // PlateRupture is tensile rupture of the plate on the Whitmore section,
@@ -98,21 +122,58 @@ func PlateRupture(c *Connection) Result {
 	An := max((w.Lw - w.Deducted).Mul(p.T), 0)
 	note := whitmoreNote(w, "net Whitmore section, worst straight or zig-zag path of holes")
 	capped := 0.0
-	if cap, ok := c.Edition.SplicePlateCap(); ok && p.Kind == Splice && An > units.Area(cap)*Ag {
+	cap, hasCap := c.Edition.SplicePlateCap()
+	if hasCap && p.Kind == Splice && An > units.Area(cap)*Ag {
 		An = units.Area(cap) * Ag
 		capped = 1
 		note += "; An capped at 0.85·Ag for a splice plate"
 	}
-	return finish(c, "plate.rupture", "J4.1(b)", p.Fu.Times(An), c.Edition.RuptureFactor(), []Value{
-		{"Fu", float64(p.Fu), units.DimStress},
-		{"Lw", float64(w.Lw), units.DimLength},
-		{"t", float64(p.T), units.DimLength},
-		{"Ag", float64(Ag), units.DimArea},
-		{"An", float64(An), units.DimArea},
-		{"holes", float64(w.Holes), units.Dimensionless},
-		{"deduction", float64(w.Deducted), units.DimLength},
-		{"splice_cap_applied", capped, units.Dimensionless},
-	}, note)
+	Rn := p.Fu.Times(An)
+	vs := newValues(8)
+	pFu, pLw, pT := vs.add(valFu(p.Fu)), vs.add(valLw(w.Lw)), vs.add(valT(c, p.T, false, "thickness"))
+	pAg := vs.add(Value{Name: "Ag", V: float64(Ag), Dim: units.DimArea, What: "gross area of the Whitmore section, Lw·t"})
+	pAn := vs.add(Value{Name: "An", V: float64(An), Dim: units.DimArea, What: "net area of the Whitmore section"})
+	pHoles := vs.add(Value{Name: "holes", V: float64(w.Holes), What: "holes on the worst path across the section"})
+	pDd := vs.add(valDeduction(w.Deducted))
+	vs.add(Value{Name: "splice_cap_applied", V: capped, Sym: "cap applied", What: "An capped at 0.85·Ag (1 yes, 0 no)"})
+	r := finish(c, "plate.rupture", "J4.1(b)", Rn, c.Edition.RuptureFactor(), vs.list, note)
+
+	ed, net := c.Edition, w.Lw-w.Deducted
+	r.explain = func() Working {
+		Fu, lw, t, ag, an, holes, dd := *pFu, *pLw, *pT, *pAg, *pAn, *pHoles, *pDd
+		rn := Step{Value: nominal(Rn), Expr: Mul(Of(Fu), Of(an))}
+		worked := Mul(Sub(Of(lw), Of(dd)), Of(t))
+		var anStep Step
+		switch {
+		case capped != 0:
+			anStep = Step{Value: an, Expr: Mul(K(cap, strconv.FormatFloat(cap, 'f', -1, 64)), Of(ag)), Show: ShowForm, Then: Words(" (the splice-plate cap governs)")}
+		case net > 0:
+			anStep = Step{Value: an, Expr: worked}
+		default:
+			anStep = Step{Value: an, Expr: Max(worked, K(0, "0")), Then: Words(": no net section")}
+		}
+		wk := Working{
+			Title:   "Tensile rupture of the plate on the Whitmore section",
+			Formula: []Step{rn, {Value: Value{Sym: "An"}, Expr: Mul(Add(Sub(Of(lw), Of(Value{Sym: "Σdh"})), Of(Value{Sym: "Σs²/4g"})), Of(t))}},
+			Where: "the holes are those of the worst straight or zig-zag path across the plate (B4.3b, the same search as the member's); dh = nominal hole + " +
+				units.FormatJob(ed.HoleAllowance(), ed.System),
+			Steps: []Step{
+				{Value: ag, Expr: Mul(Of(lw), Of(t))},
+				{Then: Phrase(Words("worst path: "), Of(holes), Words(" hole(s), Σdh − Σs²/4g = "), Of(dd))},
+				anStep, rn,
+			},
+		}
+		if hasCap {
+			wk.Formula = append(wk.Formula, Step{Then: Words("An ≤ 0.85·Ag (splice plates)")})
+		}
+		return wk
+	}
+	return r
+}
+
+// valLw is the width of the Whitmore section.
+func valLw(Lw units.Length) Value {
+	return Value{Name: "Lw", V: float64(Lw), Dim: units.DimLength, What: "Whitmore width"}
 }
 
 func whitmoreNote(w Whitmore, note string) string {

@@ -2,6 +2,7 @@ package calc
 
 import (
 	"bytes"
+	"fmt"
 	"math"
 	"path/filepath"
 	"regexp"
@@ -457,20 +458,43 @@ func TestReportIsSelfContained(t *testing.T) {
 }
 
 // The φ and Ω the page prints are the ones the check used: φRn or Rn/Ω of
-// the printed factor gives the available strength. Exact to rounding.
+// the factor read off the page gives the available strength. Exact to
+// rounding: AISC 360 prints every φ and Ω with two decimals, as the page
+// does.
 func TestPrintedFactorsGiveTheAvailableStrength(t *testing.T) {
 	for _, path := range jobs(t) {
 		r := check(t, path)
 		c := &r.Design.Conn
+		doc, _ := render(t, r)
+		label := "Resistance factor φ"
+		if c.Method == rules.ASD {
+			label = "Safety factor Ω"
+		}
 		for _, x := range r.Results {
 			if x.ID == "member.combined" {
 				continue // an interaction, no single φ: its own rows, checked in TestFormulasOnThePage…
 			}
-			v := vals{m: map[string]engine.Value{}}
-			for _, val := range x.Values {
-				v.m[val.Name] = val
+			s := find(doc, func(n *html.Node) bool { v, _ := attr(n, "data-id"); return n.Data == "section" && v == x.ID })
+			if len(s) != 1 {
+				t.Fatalf("%s: %d sections for %s", filepath.Base(path), len(s), x.ID)
 			}
-			got := factorOf(c.Edition, x, v).Available(c.Method, x.Nominal)
+			var printed []float64
+			for _, tr := range find(s[0], func(n *html.Node) bool { return n.Data == "tr" }) {
+				cells := find(tr, func(n *html.Node) bool { return n.Data == "th" || n.Data == "td" })
+				if len(cells) == 2 && text(cells[0]) == label {
+					v, err := strconv.ParseFloat(text(cells[1]), 64)
+					if err != nil {
+						t.Fatalf("%s %s: factor %q: %v", filepath.Base(path), x.ID, text(cells[1]), err)
+					}
+					printed = append(printed, v)
+				}
+			}
+			if len(printed) != 1 {
+				t.Errorf("%s %s: %d rows %q", filepath.Base(path), x.ID, len(printed), label)
+				continue
+			}
+			f := rules.Factor{Phi: printed[0], Omega: printed[0]}
+			got := f.Available(c.Method, x.Nominal)
 			if math.Abs(float64(got-x.Available)) > 1e-9*math.Max(1, math.Abs(float64(x.Available))) {
 				t.Errorf("%s %s: printed factor gives %g, the check %g", filepath.Base(path), x.ID, got, x.Available)
 			}
@@ -756,5 +780,34 @@ func TestHoleTablePerPly(t *testing.T) {
 	_, b = render(t, check(t, "../../testdata/jobs/us-single-angle.yaml"))
 	if bytes.Contains(b, []byte("plate: type")) {
 		t.Error("a job of one hole type gets per-ply columns")
+	}
+}
+
+// The page knows no limit state by its id: every section is drawn from the
+// result's own working, so a result whose id the page has never seen
+// (here every id renamed) gets the same section, word for word. A new
+// limit state needs nothing in this package (DEVELOPERS.md, "Adding a
+// limit state").
+func TestSectionsDoNotDependOnTheID(t *testing.T) {
+	for _, path := range jobs(t) {
+		r := check(t, path)
+		doc, _ := render(t, r)
+		before := find(doc, func(n *html.Node) bool { _, ok := attr(n, "data-id"); return n.Data == "section" && ok })
+		ids := make([]string, len(r.Results))
+		for i := range r.Results {
+			ids[i] = r.Results[i].ID
+			r.Results[i].ID = fmt.Sprintf("hypothetical.limit-%d", i)
+		}
+		doc, _ = render(t, r)
+		after := find(doc, func(n *html.Node) bool { _, ok := attr(n, "data-id"); return n.Data == "section" && ok })
+		if len(after) != len(before) {
+			t.Fatalf("%s: %d sections, then %d", filepath.Base(path), len(before), len(after))
+		}
+		for i := range before {
+			want := strings.ReplaceAll(text(before[i]), ids[i], r.Results[i].ID)
+			if got := text(after[i]); got != want {
+				t.Errorf("%s %s: renamed, the section reads\n%s\nwant\n%s", filepath.Base(path), ids[i], got, want)
+			}
+		}
 	}
 }
