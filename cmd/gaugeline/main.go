@@ -126,7 +126,8 @@ func newRootCmd(o *rootOptions) *cobra.Command {
 			"splice plate) into a bolt layout the shop can cut: it checks a layout against every detailing rule\n" +
 			"and tension limit state of AISC 360-22 or 360-16 (check), proposes the best compliant one (propose),\n" +
 			"draws the DXF cut sheet and CAM files (sheet), writes the calculation (report), re-verifies a\n" +
-			"fabricated part from its measured holes (reverify) and runs whole job lists (batch).\n" +
+			"fabricated part from its measured holes (reverify), runs whole job lists (batch) and checks that an\n" +
+			"output folder's file sets are whole and of one run (audit).\n" +
 			"Try 'gaugeline demo' for the whole loop on an invented example.\n\n" +
 			detail.Caution,
 		Version:       version(),
