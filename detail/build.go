@@ -152,13 +152,13 @@ func (j *Job) buildMember(ed *rules.Edition, d *Design) error {
 	mem := &d.Conn.Member
 	info := &d.Info
 	mem.Shape = m.Shape
-	mem.Pieces = 1
+	mem.Pieces = m.Shape.Pieces()
 	mem.Eccentricity = m.Eccentricity
 	info.Length = m.Length
 	info.PositionTol = j.positionTolerance()
 
-	switch m.Shape {
-	case engine.Flat:
+	switch low, _ := m.Shape.FreeEdges(); {
+	case low: // a bar, given by width and thickness
 		mem.Width, mem.T = m.Width, m.Thickness
 		mem.Ag = m.Width.Mul(m.Thickness)
 		info.Designation = "PL " + compact(m.Width, j.Units) + "x" + compact(m.Thickness, j.Units)
@@ -168,7 +168,7 @@ func (j *Job) buildMember(ed *rules.Edition, d *Design) error {
 		var err error
 		if m.Size != "" {
 			size := strings.TrimSpace(m.Size)
-			if m.Shape == engine.DoubleAngle {
+			if mem.Pieces == 2 {
 				size = strings.TrimPrefix(size, "2")
 			}
 			a, info.Designation, err = lookupAngle(size, j.Units)
@@ -209,8 +209,7 @@ func (j *Job) buildMember(ed *rules.Edition, d *Design) error {
 			mem.Xbar = m.Xbar
 		}
 		info.Rmin = props.Rmin
-		if m.Shape == engine.DoubleAngle {
-			mem.Pieces = 2
+		if mem.Pieces == 2 {
 			info.Designation = "2" + info.Designation
 			info.Rmin = a.Double(j.gap()).Rmin
 		}
@@ -383,9 +382,9 @@ func (j *Job) buildHoles(ed *rules.Edition, c *engine.Connection) error {
 	}
 	dx, dy := shape.Dx, shape.Dy
 	w := c.Member.Width
-	room, part := w, "flat"
-	if c.Member.Shape != engine.Flat {
-		room, part = w-c.Member.T, "leg"
+	room, part := c.Member.ClearWidth(), "flat"
+	if c.Member.Heel() {
+		part = "leg"
 	}
 	if dy > room+eps {
 		clear := " clear of the thickness"

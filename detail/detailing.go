@@ -452,16 +452,18 @@ type edge struct {
 func edges(c *engine.Connection) []edge {
 	m := &c.Member
 	es := []edge{{name: "member end", dist: func(h *engine.Hole) units.Length { return h.X }, t: m.T, max: true, ply: memberPly}}
-	switch m.Shape {
-	case engine.Angle, engine.DoubleAngle:
-		es = append(es, edge{name: "member toe", alongX: true, t: m.T, max: true, ply: memberPly,
+	low, high := m.Shape.FreeEdges()
+	if low {
+		es = append(es, edge{name: "member edge (y = 0)", alongX: true, t: m.T, max: true, ply: memberPly,
+			dist: func(h *engine.Hole) units.Length { return h.Y }})
+	}
+	if high {
+		name := "member edge (y = width)"
+		if !low {
+			name = "member toe" // across from the heel
+		}
+		es = append(es, edge{name: name, alongX: true, t: m.T, max: true, ply: memberPly,
 			dist: func(h *engine.Hole) units.Length { return m.Width - h.Y }})
-	default:
-		es = append(es,
-			edge{name: "member edge (y = 0)", alongX: true, t: m.T, max: true, ply: memberPly,
-				dist: func(h *engine.Hole) units.Length { return h.Y }},
-			edge{name: "member edge (y = width)", alongX: true, t: m.T, max: true, ply: memberPly,
-				dist: func(h *engine.Hole) units.Length { return m.Width - h.Y }})
 	}
 	if p := c.Plate; p != nil {
 		es = append(es, edge{name: "plate free edge", t: p.T, max: true, ply: platePly,
@@ -631,7 +633,7 @@ func wrenchClearance(d units.Length, sys units.System) units.Length {
 // the socket beside the outstanding leg, y − t ≥ F/√3 + w.
 func gageFindings(c *engine.Connection, info MemberInfo) []Finding {
 	const id = "gage.workable"
-	if len(c.Holes) == 0 || (c.Member.Shape != engine.Angle && c.Member.Shape != engine.DoubleAngle) {
+	if len(c.Holes) == 0 || !c.Member.Heel() {
 		return nil
 	}
 	near := 0
@@ -668,7 +670,7 @@ func gageFindings(c *engine.Connection, info MemberInfo) []Finding {
 // not one of them; angles get no finding.
 func eccentricityFindings(c *engine.Connection, info MemberInfo) []Finding {
 	const id = "eccentricity"
-	if c.Member.Shape != engine.Flat || len(c.Holes) == 0 {
+	if !c.Member.Shape.CentredGroup() || len(c.Holes) == 0 {
 		return nil
 	}
 	e, _ := engine.GroupEccentricity(c)

@@ -827,12 +827,12 @@ func (p *parser) parseLoad(n *yaml.Node) error {
 var memberKeys = []string{"shape", "size", "legs", "thickness", "width", "grade", "fy", "fu", "length", "area", "xbar", "rmin", "gap", "eccentricity", "hole", "slot"}
 
 func parseShape(s string) (engine.Shape, error) {
-	for _, sh := range []engine.Shape{engine.Angle, engine.DoubleAngle, engine.Flat} {
+	for _, sh := range engine.Shapes() {
 		if sh.String() == s {
 			return sh, nil
 		}
 	}
-	return engine.Angle, fmt.Errorf("unknown shape %q (want angle, double-angle or flat)", s)
+	return engine.Angle, fmt.Errorf("unknown shape %q (want %s)", s, engine.ShapeNames())
 }
 
 func parseEccentricity(s string) (engine.EndEccentricity, error) {
@@ -856,7 +856,7 @@ func (p *parser) parseMember(n *yaml.Node) error {
 	if m.Shape, err = enum(p, b.vals["shape"], "member.shape", parseShape); err != nil {
 		return err
 	}
-	if m.Shape == engine.Flat {
+	if low, _ := m.Shape.FreeEdges(); low { // a bar, given by width and thickness
 		for _, k := range []string{"size", "legs", "area", "xbar", "rmin", "gap"} {
 			if b.has(k) {
 				hint := "a flat bar is given by width and thickness, e.g. width: 6 in, thickness: 1/2 in"
@@ -883,7 +883,7 @@ func (p *parser) parseMember(n *yaml.Node) error {
 		}
 	}
 	if v := b.vals["eccentricity"]; v != nil {
-		if m.Shape != engine.Flat {
+		if !m.Shape.CentredGroup() {
 			return p.errAt(v, "member.eccentricity", "eccentricity is for flat bars",
 				"J1.7 does not require the bolt group of a single- or double-angle end to lie on the member's gravity axis; remove the key")
 		}
@@ -973,7 +973,7 @@ func (p *parser) parseAngleSection(b *block) error {
 		return p.errAt(b.vals["width"], "member.width", "width is for flat bars",
 			"an angle is given by size (e.g. L4x4x1/2), or legs: [4 in, 4 in] and thickness")
 	}
-	if m.Shape == engine.Angle && b.has("gap") {
+	if m.Shape.Pieces() == 1 && b.has("gap") {
 		return p.errAt(b.vals["gap"], "member.gap", "gap is for double angles only", "")
 	}
 	switch {

@@ -622,11 +622,7 @@ func (p *problem) ranges(g *group) {
 		plate = *g.plate
 	}
 	dxMax, dyMax := max(g.dx, plate.Dx), max(g.dy, plate.Dy)
-	room := m.Width
-	if m.Shape != engine.Flat {
-		room = m.Width - m.T
-	}
-	g.fits = g.dy <= room+eps
+	g.fits = g.dy <= m.ClearWidth()+eps
 	g.gages = map[int][]units.Length{}
 	four := p.gridDown(4 * g.d)
 
@@ -668,7 +664,7 @@ func (p *problem) ranges(g *group) {
 		g.gage2 = []units.Length{0}
 	case j.Given("bolts.gage2"):
 		g.gage2 = []units.Length{j.Bolts.Gage2}
-	case m.Shape == engine.Flat && j.Given("bolts.gage"):
+	case m.Shape.CentredGroup() && j.Given("bolts.gage"):
 		// J1.7: the fixed first line and the last one equally far from
 		// the bar's edges; unless that is closer than the spacing rule,
 		// when the lines are searched and the group left off-centre.
@@ -727,7 +723,7 @@ func (p *problem) gageSpan(g *group, i int) (gs []units.Length, lo, hi int, onGr
 	span := units.Length(g.lines-1) * g.gage2[i]
 	side := p.minEdgeTo(g, g.shape, true)
 	maxEdge := p.ed.MaxEdge(m.T)
-	if m.Shape == engine.Flat {
+	if m.Shape.CentredGroup() {
 		// J1.7: the group centred on the bar, where the edge rules let
 		// it be.
 		lo := max(side, g.dy/2, m.Width-span-maxEdge)
@@ -1326,7 +1322,7 @@ func (s *searcher) offer(c *cand) {
 }
 
 func (s *searcher) group(g *group) {
-	angle := g.tmpl.Conn.Member.Shape != engine.Flat
+	monotone := g.tmpl.Conn.Member.Shape.MonotoneGage()
 	for g2i := range g.gage2 {
 		for _, g1 := range s.p.gagesFor(g, g2i) {
 			if s.p.stopped {
@@ -1341,7 +1337,7 @@ func (s *searcher) group(g *group) {
 			// Angles: the smallest gage that passes the gage rules
 			// dominates; with nothing tried, the bound cut every
 			// layout, whatever the gage.
-			if angle && (gageOK || !tried) {
+			if monotone && (gageOK || !tried) {
 				break
 			}
 		}

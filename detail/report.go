@@ -97,10 +97,10 @@ func cautions(d *Design) []string {
 	}
 	c = append(c, "Block shear uses Ubs = 1.0 (uniform tension stress); a block that tears out k of the n bolts "+
 		"is compared with k/n of the force, the bolts sharing it equally.")
-	if d.Conn.Member.Shape != engine.Flat {
+	if !d.Conn.Member.Shape.ShearLagCases().Has(engine.D31Case1) {
 		c = append(c, "Shear lag: U is the largest of Table D3.1 case 2, case 8 and the D3 bound for open sections.")
 	}
-	if d.Conn.Member.Shape == engine.Flat && d.Conn.Member.Eccentricity == engine.EccentricityProvided {
+	if d.Conn.Member.Shape.CentredGroup() && d.Conn.Member.Eccentricity == engine.EccentricityProvided {
 		ed := d.Conn.Edition
 		c = append(c, "Eccentric bolt group ("+ed.Clause("J1.7")+", provided for): member.combined checks the bar by "+ed.Clause("H1.2")+
 			" for Pr with Mr = Pr·e, e the offset of the group's centre of gravity from the bar's centre line; "+

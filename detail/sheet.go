@@ -474,17 +474,17 @@ func (l sheetLayout) memberView(d *Design) View {
 	l.annotate(&v, false)
 	h := l.h
 	title := "MEMBER " + d.Info.Designation + " " + d.Info.Grade
-	if m.Shape == engine.Flat {
+	if !m.Heel() {
 		title += " - CONNECTION END"
 	} else {
 		title += " - CONNECTED LEG, CONNECTION END"
 	}
 	v.Texts = append(v.Texts, Text{At: Point{length / 2, width + 2*h}, Height: 1.4 * h, Align: AlignCenterBottom, Value: title, Layer: LayerNotes})
-	if m.Shape == engine.DoubleAngle {
+	if m.Pieces == 2 {
 		v.Texts = append(v.Texts, Text{At: Point{length / 2, width + 0.8*h}, Height: h, Align: AlignCenterBottom,
 			Value: "2 ANGLES BACK TO BACK: MAKE 1 AS SHOWN AND 1 OPPOSITE HAND", Layer: LayerNotes})
 	}
-	if m.Shape != engine.Flat {
+	if m.Heel() {
 		t := l.len(m.T)
 		v.Lines = append(v.Lines, Segment{Point{0, t}, Point{length, t}, LayerReference})
 		v.Texts = append(v.Texts,

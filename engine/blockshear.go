@@ -365,10 +365,11 @@ func blockResult(c *Connection, id string, blocks []block, p blockPart) Result {
 // Clause: J4.3
 func MemberBlockShear(c *Connection) Result {
 	m := c.Member
+	low, high := m.Shape.FreeEdges()
 	p := blockPart{
 		t: units.Length(m.Pieces) * m.T, Fy: m.Fy, Fu: m.Fu,
-		high: m.Width, hasHigh: true,
-		hasLow: m.Shape == Flat,
+		high: m.Width, hasHigh: high,
+		hasLow: low,
 		xEdge:  0, toward: -1, name: "member", ply: memberPly,
 	}
 	return blockResult(c, "member.block-shear", p.blocks(c), p)

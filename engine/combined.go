@@ -336,5 +336,5 @@ func b2f(b bool) float64 {
 // needsCombined reports whether Check adds member.combined: a flat bar
 // whose job provides for the eccentricity of its bolt group.
 func needsCombined(c *Connection) bool {
-	return c.Member.Shape == Flat && c.Member.Eccentricity == EccentricityProvided
+	return c.Member.Shape.CentredGroup() && c.Member.Eccentricity == EccentricityProvided
 }

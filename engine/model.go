@@ -5,20 +5,6 @@ import (
 	"gaugeline/rules/units"
 )
 
-// Shape is the cross-section of the tension member.
-type Shape int
-
-const (
-	Angle       Shape = iota // single angle, one leg bolted
-	DoubleAngle              // two angles back to back, both bolted through the plate
-	Flat                     // flat bar, bolted through its width
-)
-
-var shapeNames = [...]string{"angle", "double-angle", "flat"}
-
-// String returns the job-file spelling.
-func (s Shape) String() string { return shapeNames[s] }
-
 // Member is the tension member at its connected end.
 type Member struct {
 	Shape Shape
@@ -139,11 +125,9 @@ type Connection struct {
 	Demand units.Force
 }
 
-// ShearPlanes is the number of bolt shear planes (and slip planes): two
-// for a double angle on a plate between them, otherwise one.
+// ShearPlanes is the number of bolt shear planes (and slip planes): one
+// per piece of the member, the plate between them (two for a double
+// angle), otherwise one.
 func (c *Connection) ShearPlanes() int {
-	if c.Member.Shape == DoubleAngle {
-		return 2
-	}
-	return 1
+	return c.Member.Shape.Pieces()
 }

@@ -31,7 +31,7 @@ type genParams struct {
 
 func drawParams(t *rapid.T) genParams {
 	p := genParams{
-		shape:   Shape(rapid.IntRange(0, 2).Draw(t, "shape")),
+		shape:   Shapes()[rapid.IntRange(0, 2).Draw(t, "shape")],
 		lines:   rapid.IntRange(1, 3).Draw(t, "lines"),
 		perLine: rapid.IntRange(1, 6).Draw(t, "perLine"),
 		d:       rapid.SampledFrom([]float64{0.5, 0.625, 0.75, 0.875, 1}).Draw(t, "d"),

@@ -143,30 +143,35 @@ type ShearLag struct {
 	PerLn int          // bolts in the line with the most bolts
 }
 
-// ShearLagFactor is U of Table D3.1 for the member: 1.0 for a flat (case
-// 1, every element connected); for angles the largest of case 2
+// ShearLagFactor is U of Table D3.1 for the member, over the cases its
+// shape names (Shape.ShearLagCases): 1.0 for case 1 (a flat, every element
+// connected); otherwise the largest of case 2
 // (U = 1 − x̄/l, l out to out of the fasteners along the load), case 8
 // (0.80 with four or more bolts per line, 0.60 with three) and the D3 bound
 // for open sections (the connected elements' gross area over Ag).
 func ShearLagFactor(c *Connection) ShearLag {
 	m := c.Member
-	if m.Shape == Flat {
+	cases := m.Shape.ShearLagCases()
+	if cases.Has(D31Case1) {
 		return ShearLag{U: 1, Case: "case 1"}
 	}
 	sl := ShearLag{L: patternLength(c.Holes)}
 	for _, line := range GageLines(c) {
 		sl.PerLn = max(sl.PerLn, len(line))
 	}
-	if sl.L > eps {
+	if sl.L > eps && cases.Has(D31Case2) {
 		sl.U2 = 1 - float64(m.Xbar/sl.L)
 	}
 	switch {
+	case !cases.Has(D31Case8):
 	case sl.PerLn >= 4:
 		sl.U8 = 0.80
 	case sl.PerLn == 3:
 		sl.U8 = 0.60
 	}
-	sl.Ucon = float64(m.Pieces) * float64(m.Width) * float64(m.T) / float64(m.Ag)
+	if cases.Has(D31Bound) {
+		sl.Ucon = float64(m.Shape.ConnectedArea(&m)) / float64(m.Ag)
+	}
 	sl.U, sl.Case = sl.U2, "case 2"
 	if sl.U8 > sl.U {
 		sl.U, sl.Case = sl.U8, "case 8"
@@ -216,7 +221,7 @@ func MemberRupture(c *Connection) Result {
 	pAe := vs.add(Value{Name: "Ae", V: float64(Ae), Dim: units.DimArea, What: "effective net area, U·An"})
 	pDd := vs.add(valDeduction(ded))
 	var pXbar, pL, pU2, pU8, pUcon *Value // angles: Table D3.1 cases 2 and 8, the D3 bound
-	if m.Shape != Flat {
+	if !m.Shape.ShearLagCases().Has(D31Case1) {
 		pXbar = vs.add(Value{Name: "xbar", V: float64(m.Xbar), Dim: units.DimLength, Sym: "x̄", What: "connection eccentricity x̄"})
 		pL = vs.add(Value{Name: "l", V: float64(sl.L), Dim: units.DimLength, What: "length of connection, first to last row"})
 		pU2 = vs.add(Value{Name: "U_case2", V: sl.U2, Sym: "U (case 2)", What: "Table D3.1 case 2: 1 − x̄/l"})
@@ -245,7 +250,7 @@ func MemberRupture(c *Connection) Result {
 			Formula: []Step{rn, aeStep, anStep},
 			Steps:   []Step{anStep},
 		}
-		if m.Shape == Flat {
+		if m.Shape.ShearLagCases().Has(D31Case1) {
 			w.Formula = append(w.Formula, Step{Value: Value{Sym: "U"}, Expr: K(1, "1.0")})
 			where += "; U = 1.0 by Table D3.1 case 1: every part of the section is connected"
 			w.Steps = append(w.Steps, Step{Value: u})

@@ -262,7 +262,7 @@ func newPage(r *detail.Report, s *detail.Sheet) page {
 	if c.Plate == nil {
 		views, lines = "the member's connected leg from its end", "gage lines dash-dotted"
 	}
-	if c.Member.Shape == engine.Flat {
+	if !c.Member.Heel() {
 		views = strings.Replace(views, "member's connected leg", "member", 1)
 	}
 	p.DrawingNote = fmt.Sprintf("Drawn from the cut-sheet model of %s.dxf: %s; dimensions in %s; %s. Not to scale on screen.", d.Job.Mark, views, unit, lines)
@@ -344,7 +344,7 @@ func jobRows(d *detail.Design, f fmtr) (job, load []row) {
 	if m.Pieces > 1 {
 		props = fmt.Sprintf("Ag = %s (both angles), t = %s each", f.q(float64(m.Ag), units.DimArea), f.length(m.T))
 	}
-	if m.Shape != engine.Flat {
+	if m.Shape.ShearLagCases().Has(engine.D31Case2) {
 		props += ", x̄ = " + f.length(m.Xbar)
 	}
 	job = append(job, row{"Member properties", props})
@@ -381,7 +381,7 @@ func jobRows(d *detail.Design, f fmtr) (job, load []row) {
 
 func holeTable(c *engine.Connection, f fmtr) table {
 	from := "y from heel"
-	if c.Member.Shape == engine.Flat {
+	if !c.Member.Heel() {
 		from = "y from edge"
 	}
 	// A column for the plate's holes only when a ply differs, so that a

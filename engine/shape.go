@@ -1,0 +1,85 @@
+package engine
+
+import (
+	"strings"
+
+	"gaugeline/rules/units"
+)
+
+// Shape is the cross-section of the tension member, told by what the
+// limit states, the detailing rules and the layout search ask of it. The
+// connected element is the rectangle the holes lie in: Width across the
+// load (y from 0 to Width) by T. A new shape is one file that implements
+// Shape, plus its entry in Shapes (DEVELOPERS.md, "Adding a shape").
+type Shape interface {
+	// String returns the job-file spelling.
+	String() string
+	// Pieces is how many of the section lie back to back with the plate
+	// between them, each bolted through: one shear plane per piece.
+	Pieces() int
+	// FreeEdges reports whether the connected element's long edges at
+	// y = 0 and y = Width are free edges (edge distance, block shear to
+	// the edge). An edge at y = 0 that is not free is a heel: there the
+	// connected element joins the rest of the section, of thickness T,
+	// which the holes stay clear of.
+	FreeEdges() (low, high bool)
+	// ConnectedArea is the gross area of the whole member's connected
+	// elements, the numerator of the D3 bound for open sections.
+	ConnectedArea(m *Member) units.Area
+	// ShearLagCases are the cases of Table D3.1 that apply; U is the
+	// largest of them (x̄ is Member.Xbar, used by case 2).
+	ShearLagCases() D31
+	// CentredGroup reports whether J1.7 asks for the bolt group on the
+	// member's gravity axis: a flat bar; single and double angles "and
+	// similar members" are exempt.
+	CentredGroup() bool
+	// MonotoneGage reports whether, on one gage2, the smallest first gage
+	// that passes the gage rules dominates every larger one, so the layout
+	// search may stop there (propose's pruning).
+	MonotoneGage() bool
+}
+
+// D31 is a set of the cases of Table D3.1 a shape may use.
+type D31 uint8
+
+const (
+	D31Case1 D31 = 1 << iota // every element connected: U = 1.0
+	D31Case2                 // U = 1 − x̄/l
+	D31Case8                 // angles: 0.80 with four or more bolts per line, 0.60 with three
+	D31Bound                 // D3: the connected elements' gross area over Ag
+)
+
+// Has reports whether every case of c is in d.
+func (d D31) Has(c D31) bool { return d&c == c }
+
+// Shapes lists every shape a job may name, in the order its hint names
+// them.
+func Shapes() []Shape { return []Shape{Angle, DoubleAngle, Flat} }
+
+// ShapeNames is the job-file spellings of Shapes for a hint: "a, b or c".
+func ShapeNames() string {
+	var names []string
+	for _, s := range Shapes() {
+		names = append(names, s.String())
+	}
+	if len(names) < 2 {
+		return strings.Join(names, "")
+	}
+	return strings.Join(names[:len(names)-1], ", ") + " or " + names[len(names)-1]
+}
+
+// Heel reports whether the connected element's y = 0 edge is a heel, not
+// a free edge (Shape.FreeEdges).
+func (m *Member) Heel() bool {
+	low, _ := m.Shape.FreeEdges()
+	return !low
+}
+
+// ClearWidth is the room across the connected element a hole may take:
+// Width, less T past a heel.
+func (m *Member) ClearWidth() units.Length {
+	if m.Heel() {
+		return m.Width - m.T
+	}
+	return m.Width
+}
