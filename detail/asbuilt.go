@@ -537,13 +537,7 @@ func (ab *AsBuilt) classify(h engine.Hole, m measured.Hole, x, y units.Length) (
 // allowing the fabrication tolerance.
 func (ab *AsBuilt) check() error {
 	d := ab.Design
-	built := *d
-	built.Conn.Holes = nil
-	built.Info.PositionTol = ab.Tolerance.Position // J1.7's limit: the tolerance reverify applies
-	if d.Conn.Plate != nil {
-		pl := *d.Conn.Plate // the plate as designed: its free edge and centre line stay
-		built.Conn.Plate = &pl
-	}
+	var holes []engine.Hole
 	for i, dv := range ab.Deviations {
 		if dv.Status == HoleMissing {
 			continue
@@ -552,29 +546,18 @@ func (ab *AsBuilt) check() error {
 		if dv.Status != HoleExtra {
 			design = &d.Conn.Holes[i]
 		}
-		built.Conn.Holes = append(built.Conn.Holes, ab.asBuiltHole(dv, design))
+		holes = append(holes, ab.asBuiltHole(dv, design))
 	}
 	// The engine groups holes into gage lines and rows with a slack of a
 	// quarter diameter, so the measured centres go in as they are.
-	model := built
-	rs, err := engine.Check(&model.Conn)
+	built := d.withHoles(holes)
+	built.Info.PositionTol = ab.Tolerance.Position // J1.7's limit: the tolerance reverify applies
+	built.Info.AsBuilt, built.Info.DiameterTol = true, ab.Tolerance.Diameter
+	r, err := Check(built)
 	if err != nil {
 		return err
 	}
-	r := &Report{Design: &built, Results: rs, Findings: Detailing(&built.Conn, built.Info), Governing: engine.Governing(rs)}
-	for i := range r.Findings {
-		f := &r.Findings[i]
-		if f.ID == "hole.size" && f.Dim == units.DimLength {
-			f.Limit += float64(ab.Tolerance.Diameter)
-			f.Pass = f.Measured <= f.Limit+tol
-			f.Where += ", nominal + fabrication tolerance"
-		}
-	}
-	r.Pass = Passes(r.Findings)
-	for _, x := range rs {
-		r.Pass = r.Pass && x.Pass
-	}
-	r.Cautions = append(cautions(&built), ab.partCaution(),
+	r.Cautions = append(r.Cautions, ab.partCaution(),
 		"As built: holes within a quarter of the bolt diameter of one another across (along) the load are taken as one gage line (row).")
 	if ab.Alignment.Mode == AlignBestFit {
 		r.Cautions = append(r.Cautions, "Best-fit alignment places the hole group on the design: edge distances are checked as designed plus the holes' deviations within the group, not measured from the part's own edges; use --align datum to check them.")

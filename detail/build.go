@@ -21,6 +21,45 @@ import (
 // holes at one centre — is an *InputError naming the field; a layout that
 // can be made but breaks a detailing rule is not (the checks report it).
 func (j *Job) Build() (*Design, error) {
+	ed, err := j.edition()
+	if err != nil {
+		return nil, err
+	}
+	d := j.newDesign(ed)
+	if err := j.buildMember(ed, d); err != nil {
+		return nil, err
+	}
+	if err := j.buildBolt(ed, &d.Conn); err != nil {
+		return nil, err
+	}
+	if err := j.buildHoles(ed, d); err != nil {
+		return nil, err
+	}
+	if err := j.buildPlate(ed, d); err != nil {
+		return nil, err
+	}
+	j.setDemand(d)
+	return d, nil
+}
+
+// The model is built in the same steps for every job, whichever way it
+// comes: Build for a job file (check, sheet, report, reverify's design),
+// propose for each candidate layout, reverify for the measured holes.
+//
+//   - the parts: newDesign, buildMember, buildBolt, plateParts, setDemand
+//     (propose resolves them once per plate thickness and bolt);
+//   - the holes: Design.placeHoles puts the centres into the model with
+//     their ids and the hole shapes of both plies and tells the first one
+//     that does not fit the member;
+//   - the plate: Design.placePlate puts the plate's free edge and centre
+//     line after the holes and tells the first hole off the plate;
+//   - as built: Design.withHoles is the design with other holes (the
+//     measured ones), the plate as designed.
+//
+// Check (report.go) then checks whatever the steps made.
+
+// edition resolves the job's standard and checks its stock against it.
+func (j *Job) edition() (*rules.Edition, error) {
 	ed, err := rules.Lookup(j.Standard, j.Units)
 	if err != nil {
 		return nil, j.inputErr("standard", err.Error(), "known standards: "+strings.Join(rules.Names(), ", "))
@@ -28,28 +67,24 @@ func (j *Job) Build() (*Design, error) {
 	if err := j.CheckStock(ed); err != nil {
 		return nil, err
 	}
-	d := &Design{Job: j}
-	c := &d.Conn
-	c.Edition, c.Method = ed, j.Method
+	return ed, nil
+}
 
-	if err := j.buildMember(ed, d); err != nil {
-		return nil, err
-	}
-	if err := j.buildBolt(ed, c); err != nil {
-		return nil, err
-	}
-	if err := j.buildHoles(ed, c); err != nil {
-		return nil, err
-	}
-	if err := j.buildPlate(ed, d); err != nil {
-		return nil, err
-	}
+// newDesign is an empty design of the job under edition ed.
+func (j *Job) newDesign(ed *rules.Edition) *Design {
+	d := &Design{Job: j}
+	d.Conn.Edition, d.Conn.Method = ed, j.Method
+	return d
+}
+
+// setDemand puts the job's demand into the model: as required, or the
+// governing combination of the service loads.
+func (j *Job) setDemand(d *Design) {
 	if j.Load.Combined() {
-		c.Demand, d.Combination = engine.Combine(j.Method, j.Load.Service)
+		d.Conn.Demand, d.Combination = engine.Combine(j.Method, j.Load.Service)
 	} else {
-		c.Demand = j.Load.Required
+		d.Conn.Demand = j.Load.Required
 	}
-	return d, nil
 }
 
 // CheckStock checks the propose stock against the edition: every grade and
@@ -374,16 +409,17 @@ func (j *Job) plyShapes(ed *rules.Edition, d units.Length) (engine.HoleShape, *e
 // eps is the geometric tolerance of the fit checks, in mm.
 const eps = 1e-6
 
-func (j *Job) buildHoles(ed *rules.Edition, c *engine.Connection) error {
+func (j *Job) buildHoles(ed *rules.Edition, d *Design) error {
 	b := j.Bolts
 	shape, plate, err := j.plyShapes(ed, b.Diameter)
 	if err != nil {
 		return j.inputErr("bolts.diameter", tabulatedMsg(err), diametersHint(ed))
 	}
 	dx, dy := shape.Dx, shape.Dy
-	w := c.Member.Width
-	room, part := c.Member.ClearWidth(), "flat"
-	if c.Member.Heel() {
+	m := &d.Conn.Member
+	w := m.Width
+	room, part := m.ClearWidth(), "flat"
+	if m.Heel() {
 		part = "leg"
 	}
 	if dy > room+eps {
@@ -396,86 +432,180 @@ func (j *Job) buildHoles(ed *rules.Edition, c *engine.Connection) error {
 			"use a smaller bolt or a wider "+part)
 	}
 
-	// placed is a hole with the fields of the input that put it there.
-	type placed struct {
-		engine.Hole
-		xField, yField string
-	}
-	var holes []placed
+	var holes []engine.Hole
+	// fields name the input that put hole i there, along x and y.
+	var fields func(i int) (x, y string)
 	if j.Holes != nil {
+		holes = make([]engine.Hole, len(j.Holes))
 		for i, h := range j.Holes {
+			holes[i].X, holes[i].Y = h.X, h.Y
+		}
+		fields = func(i int) (string, string) {
 			f := fmt.Sprintf("holes[%d]", i)
-			holes = append(holes, placed{engine.Hole{X: h.X, Y: h.Y}, f, f})
+			return f, f
 		}
 	} else {
-		if b.PerLine == 0 {
-			return j.inputErr("bolts.per_line", "is required", "per_line: the number of bolts in each gage line")
+		if err := j.checkPattern(); err != nil {
+			return err
 		}
-		if b.PerLine > 1 && b.Pitch == 0 {
-			return j.inputErr("bolts.pitch", "is required with more than one bolt per line", "pitch: 3 in")
-		}
-		if b.End == 0 {
-			return j.inputErr("bolts.end", "is required", "end: the first bolt to the member's end, e.g. 1-1/2 in")
-		}
-		if b.Gage == 0 {
-			return j.inputErr("bolts.gage", "is required", "gage: the first gage line from the heel or edge, e.g. 2-1/2 in")
-		}
-		if b.Lines > 1 && b.Gage2 == 0 {
-			return j.inputErr("bolts.gage2", "is required with more than one gage line", "gage2: spacing between gage lines")
-		}
-		if b.Lines*b.PerLine > maxHoles {
-			return j.inputErr("bolts.per_line", fmt.Sprintf("%d lines of %d make too many bolts (at most %d)", b.Lines, b.PerLine, maxHoles), "")
-		}
-		for i := range b.Lines {
-			y := b.Gage + units.Length(i)*b.Gage2
-			yField := "bolts.gage"
-			if i > 0 {
-				yField = "bolts.gage2"
+		pat := j.pattern()
+		holes = pat.centres(make([]engine.Hole, 0, pat.lines*pat.perLine))
+		fields = func(i int) (string, string) {
+			x, y := "bolts.end", "bolts.gage"
+			if i%pat.perLine > 0 {
+				x = "bolts.pitch" // the pitch put it there
 			}
-			for k := range b.PerLine {
-				x := b.End + units.Length(k)*b.Pitch
-				xField := "bolts.end"
-				if k > 0 {
-					xField = "bolts.pitch" // the pitch put it there
-				}
-				if i%2 == 1 {
-					x += b.Stagger
-				}
-				holes = append(holes, placed{engine.Hole{X: x, Y: y}, xField, yField})
+			if i/pat.perLine > 0 {
+				y = "bolts.gage2"
 			}
+			return x, y
 		}
 	}
 
-	c.Holes = make([]engine.Hole, len(holes))
+	f := d.placeHoles(holes, shape, plate)
+	if f.how == fitOK {
+		return nil
+	}
+	h := &d.Conn.Holes[f.hole]
+	xField, yField := fields(f.hole)
+	switch f.how {
+	case fitPastEnd:
+		return j.inputErr(xField, fmt.Sprintf("hole %s at x = %s runs past the member end", h.ID, units.FormatJob(h.X, j.Units)),
+			"the hole's edge must be inside the member: x ≥ "+units.FormatJob(dx/2, j.Units))
+	case fitOffLow:
+		return j.inputErr(yField, fmt.Sprintf("hole %s at y = %s runs off the %s", h.ID, units.FormatJob(h.Y, j.Units), part),
+			"y is measured from the heel (angles) or one edge (flats)")
+	case fitOffHigh:
+		return j.inputErr(yField, fmt.Sprintf("hole %s at y = %s runs off the %s, which is %s wide",
+			h.ID, units.FormatJob(h.Y, j.Units), part, units.FormatJob(w, j.Units)),
+			"y is measured from the heel (angles) or one edge (flats)")
+	}
+	return j.inputErr(xField, fmt.Sprintf("hole %s has the same centre as %s", h.ID, d.Conn.Holes[f.other].ID), "")
+}
+
+// checkPattern refuses a bolts block that does not lay out a pattern.
+func (j *Job) checkPattern() error {
+	b := j.Bolts
+	switch {
+	case b.PerLine == 0:
+		return j.inputErr("bolts.per_line", "is required", "per_line: the number of bolts in each gage line")
+	case b.PerLine > 1 && b.Pitch == 0:
+		return j.inputErr("bolts.pitch", "is required with more than one bolt per line", "pitch: 3 in")
+	case b.End == 0:
+		return j.inputErr("bolts.end", "is required", "end: the first bolt to the member's end, e.g. 1-1/2 in")
+	case b.Gage == 0:
+		return j.inputErr("bolts.gage", "is required", "gage: the first gage line from the heel or edge, e.g. 2-1/2 in")
+	case b.Lines > 1 && b.Gage2 == 0:
+		return j.inputErr("bolts.gage2", "is required with more than one gage line", "gage2: spacing between gage lines")
+	case b.Lines*b.PerLine > maxHoles:
+		return j.inputErr("bolts.per_line", fmt.Sprintf("%d lines of %d make too many bolts (at most %d)", b.Lines, b.PerLine, maxHoles), "")
+	}
+	return nil
+}
+
+// pattern is a bolt pattern: lines of perLine bolts, the first at end
+// from the member's end on the gage line at gage, the next lines gage2
+// apart, every other line moved stagger along x.
+type pattern struct {
+	lines, perLine                   int
+	pitch, end, gage, gage2, stagger units.Length
+}
+
+// pattern is the bolts block's pattern.
+func (j *Job) pattern() pattern {
+	b := j.Bolts
+	return pattern{lines: b.Lines, perLine: b.PerLine, pitch: b.Pitch, end: b.End, gage: b.Gage, gage2: b.Gage2, stagger: b.Stagger}
+}
+
+// centres appends the pattern's hole centres to holes, line by line.
+func (pat pattern) centres(holes []engine.Hole) []engine.Hole {
+	for i := range pat.lines {
+		y := pat.gage + units.Length(i)*pat.gage2
+		for k := range pat.perLine {
+			x := pat.end + units.Length(k)*pat.pitch
+			if i%2 == 1 {
+				x += pat.stagger
+			}
+			holes = append(holes, engine.Hole{X: x, Y: y})
+		}
+	}
+	return holes
+}
+
+// fitHow is how a hole fails to fit its part.
+type fitHow int
+
+const (
+	fitOK      fitHow = iota
+	fitPastEnd        // past the member's end
+	fitOffLow         // off the leg or flat at y = 0
+	fitOffHigh        // off the leg or flat at its width
+	fitSame           // at the centre of an earlier hole
+)
+
+// holeFit is the first hole that does not fit, and the earlier hole it
+// coincides with (fitSame).
+type holeFit struct {
+	how         fitHow
+	hole, other int
+}
+
+// placeHoles makes holes, of which the centres are set, the model's holes:
+// ids H1, H2, …, the member's hole shape and, where the plate's differs,
+// each hole its own copy of that (as-built copies may change one). It
+// returns the first hole that runs off the member or has the centre of an
+// earlier hole, hole by hole in that order.
+func (d *Design) placeHoles(holes []engine.Hole, shape engine.HoleShape, plate *engine.HoleShape) holeFit {
+	var plates []engine.HoleShape
+	if plate != nil {
+		plates = make([]engine.HoleShape, len(holes))
+	}
+	w := d.Conn.Member.Width
+	dx, dy := shape.Dx, shape.Dy
 	for i := range holes {
 		h := &holes[i]
-		h.ID = fmt.Sprintf("H%d", i+1)
+		h.ID = holeID(i)
 		h.HoleShape = shape
 		if plate != nil {
-			p := *plate // each hole its own: as-built copies may change one
-			h.Plate = &p
+			plates[i] = *plate
+			h.Plate = &plates[i]
 		}
+	}
+	d.Conn.Holes = holes
+	for i := range holes {
+		h := &holes[i]
 		switch {
 		case h.X-dx/2 < -eps:
-			return j.inputErr(h.xField, fmt.Sprintf("hole %s at x = %s runs past the member end", h.ID, units.FormatJob(h.X, j.Units)),
-				"the hole's edge must be inside the member: x ≥ "+units.FormatJob(dx/2, j.Units))
+			return holeFit{how: fitPastEnd, hole: i}
 		case h.Y-dy/2 < -eps:
-			return j.inputErr(h.yField, fmt.Sprintf("hole %s at y = %s runs off the %s", h.ID, units.FormatJob(h.Y, j.Units), part),
-				"y is measured from the heel (angles) or one edge (flats)")
+			return holeFit{how: fitOffLow, hole: i}
 		case h.Y+dy/2 > w+eps:
-			return j.inputErr(h.yField, fmt.Sprintf("hole %s at y = %s runs off the %s, which is %s wide",
-				h.ID, units.FormatJob(h.Y, j.Units), part, units.FormatJob(w, j.Units)),
-				"y is measured from the heel (angles) or one edge (flats)")
+			return holeFit{how: fitOffHigh, hole: i}
 		}
 		for k := range i {
 			o := &holes[k]
 			if math.Abs(float64(o.X-h.X)) < eps && math.Abs(float64(o.Y-h.Y)) < eps {
-				return j.inputErr(h.xField, fmt.Sprintf("hole %s has the same centre as %s", h.ID, o.ID), "")
+				return holeFit{how: fitSame, hole: i, other: k}
 			}
 		}
-		c.Holes[i] = h.Hole
 	}
-	return nil
+	return holeFit{}
+}
+
+var holeIDs = func() []string {
+	ids := make([]string, maxHoles)
+	for i := range ids {
+		ids[i] = fmt.Sprintf("H%d", i+1)
+	}
+	return ids
+}()
+
+// holeID is the id of the i-th hole: H1, H2, …
+func holeID(i int) string {
+	if i < len(holeIDs) {
+		return holeIDs[i]
+	}
+	return fmt.Sprintf("H%d", i+1)
 }
 
 func (j *Job) buildPlate(ed *rules.Edition, d *Design) error {
@@ -489,12 +619,37 @@ func (j *Job) buildPlate(ed *rules.Edition, d *Design) error {
 	if ps.Edge == 0 {
 		return j.inputErr("plate.edge", "is required", "edge: the last bolt to the plate's free edge, e.g. 1-1/2 in")
 	}
+	if err := j.plateParts(ed, d); err != nil {
+		return err
+	}
+	if i := d.placePlate(ps.Edge); i >= 0 {
+		return j.inputErr("plate.width", fmt.Sprintf("hole %s runs off the plate: the plate is %s wide", d.Conn.Holes[i].ID, units.FormatJob(ps.Width, j.Units)),
+			"the plate must be wider than the bolt group plus the hole")
+	}
+	return nil
+}
+
+// plateParts puts the job's plate into the model, all but where it lies
+// (placePlate): its kind, thickness, width and steel.
+func (j *Job) plateParts(ed *rules.Edition, d *Design) error {
+	ps := j.Plate
 	st, err := j.steel(ed, ps.Steel, "plate")
 	if err != nil {
 		return err
 	}
+	d.Conn.Plate = &engine.Plate{Kind: ps.Kind, T: ps.Thickness, Width: ps.Width, Fy: st.Fy, Fu: st.Fu}
+	d.Info.PlateGrade = st.Name
+	d.Info.Weathering = d.Info.Weathering || st.Weathering
+	return nil
+}
+
+// placePlate gives the model its own copy of the plate, with the free
+// edge the distance edge past the last hole and the centre line on the
+// bolt group's; it returns the first hole that runs off the plate's
+// width, or -1.
+func (d *Design) placePlate(edge units.Length) int {
 	c := &d.Conn
-	pl := &engine.Plate{Kind: ps.Kind, T: ps.Thickness, Width: ps.Width, Fy: st.Fy, Fu: st.Fu}
+	pl := *c.Plate
 	var xmax, ysum units.Length
 	for i, h := range c.Holes {
 		if i == 0 || h.X > xmax {
@@ -502,16 +657,26 @@ func (j *Job) buildPlate(ed *rules.Edition, d *Design) error {
 		}
 		ysum += h.Y
 	}
-	pl.FreeEdge = xmax + ps.Edge
+	pl.FreeEdge = xmax + edge
 	pl.YCentre = ysum / units.Length(len(c.Holes))
-	for _, h := range c.Holes {
+	c.Plate = &pl
+	for i, h := range c.Holes {
 		if dy := h.InPlate().Dy; h.Y-dy/2 < pl.YMin()-eps || h.Y+dy/2 > pl.YMax()+eps {
-			return j.inputErr("plate.width", fmt.Sprintf("hole %s runs off the plate: the plate is %s wide", h.ID, units.FormatJob(ps.Width, j.Units)),
-				"the plate must be wider than the bolt group plus the hole")
+			return i
 		}
 	}
-	c.Plate = pl
-	d.Info.PlateGrade = st.Name
-	d.Info.Weathering = d.Info.Weathering || st.Weathering
-	return nil
+	return -1
+}
+
+// withHoles is the design with other holes in place of its own (the
+// measured ones, each set in full): the parts, the plate's free edge and
+// centre line as designed.
+func (d *Design) withHoles(holes []engine.Hole) *Design {
+	out := *d
+	out.Conn.Holes = holes
+	if d.Conn.Plate != nil {
+		pl := *d.Conn.Plate
+		out.Conn.Plate = &pl
+	}
+	return &out
 }

@@ -364,11 +364,8 @@ type option[T any] struct {
 }
 
 func newProblem(j *Job) (*problem, error) {
-	ed, err := rules.Lookup(j.Standard, j.Units)
+	ed, err := j.edition()
 	if err != nil {
-		return nil, j.inputErr("standard", err.Error(), "known standards: "+strings.Join(rules.Names(), ", "))
-	}
-	if err := j.CheckStock(ed); err != nil {
 		return nil, err
 	}
 	if j.Holes != nil {
@@ -507,7 +504,8 @@ func (p *problem) checkStep(diams []option[units.Length], members []*Design) err
 }
 
 // template resolves the member, the plate's steel and the demand for a
-// plate thickness: everything of a Design but the bolt and the holes.
+// plate thickness, as Build does: everything of a Design but the bolt and
+// the holes.
 func (j *Job) template(ed *rules.Edition, tp units.Length) (*Design, error) {
 	jj := *j
 	if j.Plate != nil {
@@ -515,26 +513,16 @@ func (j *Job) template(ed *rules.Edition, tp units.Length) (*Design, error) {
 		pl.Thickness, pl.AutoThickness = tp, false
 		jj.Plate = &pl
 	}
-	des := &Design{Job: &jj}
-	c := &des.Conn
-	c.Edition, c.Method = ed, j.Method
+	des := jj.newDesign(ed)
 	if err := jj.buildMember(ed, des); err != nil {
 		return nil, err
 	}
-	if ps := jj.Plate; ps != nil {
-		st, err := jj.steel(ed, ps.Steel, "plate")
-		if err != nil {
+	if jj.Plate != nil {
+		if err := jj.plateParts(ed, des); err != nil {
 			return nil, err
 		}
-		c.Plate = &engine.Plate{Kind: ps.Kind, T: ps.Thickness, Width: ps.Width, Fy: st.Fy, Fu: st.Fu}
-		des.Info.PlateGrade = st.Name
-		des.Info.Weathering = des.Info.Weathering || st.Weathering
 	}
-	if j.Load.Combined() {
-		c.Demand, des.Combination = engine.Combine(j.Method, j.Load.Service)
-	} else {
-		c.Demand = j.Load.Required
-	}
+	jj.setDemand(des)
 	return des, nil
 }
 
@@ -908,60 +896,22 @@ func (p *problem) newCand(g *group, g2i int, g1 units.Length, i, j, k int) *cand
 	return c
 }
 
-// design builds the candidate's Design the way Build does, from the
-// group's template; false when a hole leaves the member or the plate.
+// design builds the candidate's Design from the group's template in the
+// steps Build takes; false when a hole leaves the member or the plate.
 func (p *problem) design(c *cand) (*Design, bool) {
 	g := c.g
 	t := g.tmpl
 	d := &Design{Job: p.job, Conn: t.Conn, Info: t.Info, Combination: t.Combination}
-	conn := &d.Conn
-	w := conn.Member.Width
-	s, e, g2 := g.pitch[c.i], g.end[c.j], g.gage2[c.g2i]
-	conn.Holes = make([]engine.Hole, 0, g.nT)
-	for li := range g.lines {
-		y := c.g1 + units.Length(li)*g2
-		for k := range g.perLine {
-			x := e + units.Length(k)*s
-			if li%2 == 1 {
-				x += g.stag
-			}
-			if x-g.dx/2 < -eps || y-g.dy/2 < -eps || y+g.dy/2 > w+eps {
-				return nil, false
-			}
-			conn.Holes = append(conn.Holes, engine.Hole{ID: holeID(len(conn.Holes)), X: x, Y: y,
-				HoleShape: g.shape, Plate: g.plate})
-		}
+	pat := pattern{lines: g.lines, perLine: g.perLine, pitch: g.pitch[c.i], end: g.end[c.j],
+		gage: c.g1, gage2: g.gage2[c.g2i], stagger: g.stag}
+	if d.placeHoles(pat.centres(make([]engine.Hole, 0, g.nT)), g.shape, g.plate).how != fitOK {
+		return nil, false
 	}
-	if t.Conn.Plate != nil {
-		pl := *t.Conn.Plate
-		var xmax, ysum units.Length
-		for i, h := range conn.Holes {
-			if i == 0 || h.X > xmax {
-				xmax = h.X
-			}
-			ysum += h.Y
-		}
-		pl.FreeEdge = xmax + g.edge[c.k]
-		pl.YCentre = ysum / units.Length(len(conn.Holes))
-		for _, h := range conn.Holes {
-			if dy := h.InPlate().Dy; h.Y-dy/2 < pl.YMin()-eps || h.Y+dy/2 > pl.YMax()+eps {
-				return nil, false
-			}
-		}
-		conn.Plate = &pl
+	if t.Conn.Plate != nil && d.placePlate(g.edge[c.k]) >= 0 {
+		return nil, false
 	}
 	return d, true
 }
-
-var holeIDs = func() []string {
-	ids := make([]string, maxHoles)
-	for i := range ids {
-		ids[i] = fmt.Sprintf("H%d", i+1)
-	}
-	return ids
-}()
-
-func holeID(i int) string { return holeIDs[i] }
 
 // eval checks the candidate, through the cache when there is one, and
 // counts the check; false when its holes leave a part.

@@ -33,12 +33,28 @@ func Check(d *Design) (*Report, error) {
 		return nil, err
 	}
 	r := &Report{Design: d, Results: rs, Findings: Detailing(&d.Conn, d.Info), Governing: engine.Governing(rs)}
+	if d.Info.AsBuilt {
+		allowFabrication(r.Findings, d.Info.DiameterTol)
+	}
 	r.Pass = Passes(r.Findings)
 	for _, x := range rs {
 		r.Pass = r.Pass && x.Pass
 	}
 	r.Cautions = cautions(d)
 	return r, nil
+}
+
+// allowFabrication lets the hole.size findings of an as-built model allow
+// the fabrication tolerance fab over the nominal size.
+func allowFabrication(fs []Finding, fab units.Length) {
+	for i := range fs {
+		f := &fs[i]
+		if f.ID == "hole.size" && f.Dim == units.DimLength {
+			f.Limit += float64(fab)
+			f.Pass = f.Measured <= f.Limit+tol
+			f.Where += ", nominal + fabrication tolerance"
+		}
+	}
 }
 
 // CheckFile loads a job file, builds it and checks it: what `check`,

@@ -42,6 +42,11 @@ type MemberInfo struct {
 	// job's tolerance.position): how far a flat's bolt group may sit off
 	// the bar's centre line before J1.7's finding fails.
 	PositionTol units.Length
+	// AsBuilt marks a model of measured holes (reverify): its hole.size
+	// finding allows DiameterTol, the fabrication tolerance, over the
+	// nominal size.
+	AsBuilt     bool
+	DiameterTol units.Length
 }
 
 // Design is a job resolved into the engine's model: ready to check.
