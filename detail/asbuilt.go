@@ -10,7 +10,6 @@ import (
 	"math"
 	"path/filepath"
 	"slices"
-	"strconv"
 	"strings"
 	"text/tabwriter"
 
@@ -347,7 +346,7 @@ func (ab *AsBuilt) deviations(aligned []abVec, match []int) error {
 	tol := ab.Tolerance
 	sys := ab.Design.Job.Units
 	ql := func(l units.Length) string { return qaLength(l, sys) }
-	qt := func(l units.Length) string { return exactLength(l, sys) }
+	qt := func(l units.Length) string { return units.FormatLength(l, sys, units.Exact) }
 	for i := range c.Holes {
 		h := ab.designInPart(&c.Holes[i])
 		dv := Deviation{ID: h.ID, Design: h}
@@ -1140,16 +1139,6 @@ func qaLength(l units.Length, sys units.System) string {
 	return fmt.Sprintf("%.2f mm", l.Mm())
 }
 
-// exactLength writes a length in the job's unit with the digits it needs
-// (1/32 in is 0.03125 in), to 1e-6.
-func exactLength(l units.Length, sys units.System) string {
-	v, unit := l.Mm(), "mm"
-	if sys == units.US {
-		v, unit = l.In(), "in"
-	}
-	return strconv.FormatFloat(math.Round(v*1e6)/1e6, 'f', -1, 64) + " " + unit
-}
-
 func qaSigned(l units.Length, sys units.System) string {
 	s := qaLength(l, sys)
 	if s[0] != '-' {
@@ -1213,7 +1202,7 @@ func (ab *AsBuilt) preamble() [][2]string {
 		{"measured", fmt.Sprintf("%s (%s, %s, %d holes)", m.File, m.Format, m.Units, len(m.Holes))},
 		{"part", part},
 		{"tolerance", fmt.Sprintf("position %s radial, size +%s over nominal; holes farther than %s from a design hole are extra",
-			exactLength(ab.Tolerance.Position, sys), exactLength(ab.Tolerance.Diameter, sys), exactLength(ab.Gate, sys))},
+			units.FormatLength(ab.Tolerance.Position, sys, units.Exact), units.FormatLength(ab.Tolerance.Diameter, sys, units.Exact), units.FormatLength(ab.Gate, sys, units.Exact))},
 		{"alignment", align},
 	}
 }

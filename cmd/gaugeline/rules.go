@@ -44,7 +44,7 @@ func runRules(ro rulesOptions, out io.Writer) error {
 	lb := sys.Labels()
 	size := func(l units.Length) string {
 		if sys == units.US {
-			return units.FormatFeetInches(l)
+			return units.FormatLength(l, units.US, units.Shop)
 		}
 		return fmt.Sprintf("%g", float64(l))
 	}

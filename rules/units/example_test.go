@@ -29,11 +29,11 @@ func ExampleParse() {
 	// "3 kip" is a force, not a length
 }
 
-func ExampleFormatFeetInches() {
+func ExampleFormatLength() {
 	for _, in := range []float64{0.75, 3.5, 11.99, 42.5, -15.5} {
-		fmt.Println(units.FormatFeetInches(units.Length(in) * units.Inch))
+		fmt.Println(units.FormatLength(units.Length(in) * units.Inch, units.US, units.Shop))
 	}
-	fmt.Println(units.FormatFeetInches(1000 * units.Millimetre))
+	fmt.Println(units.FormatLength(1000 * units.Millimetre, units.US, units.Shop))
 	// Output:
 	// 3/4"
 	// 3 1/2"
