@@ -208,4 +208,3 @@ bolts:
 		t.Fatal("spacing.min does not fail at 2-5/16 in (AISC 360-22 J3.4: 2.333 in)")
 	}
 }
-

@@ -58,7 +58,9 @@ func (f fmtr) unitLabel(d units.Dim) string {
 }
 
 // num prints a value of dimension d in the job's units, without a unit.
-func (f fmtr) num(v float64, d units.Dim) string { return units.Format(v, d, f.sys, units.Report.Bare()) }
+func (f fmtr) num(v float64, d units.Dim) string {
+	return units.Format(v, d, f.sys, units.Report.Bare())
+}
 
 // q prints a value with its unit.
 func (f fmtr) q(v float64, d units.Dim) string {

@@ -31,9 +31,9 @@ func ExampleParse() {
 
 func ExampleFormatLength() {
 	for _, in := range []float64{0.75, 3.5, 11.99, 42.5, -15.5} {
-		fmt.Println(units.FormatLength(units.Length(in) * units.Inch, units.US, units.Shop))
+		fmt.Println(units.FormatLength(units.Length(in)*units.Inch, units.US, units.Shop))
 	}
-	fmt.Println(units.FormatLength(1000 * units.Millimetre, units.US, units.Shop))
+	fmt.Println(units.FormatLength(1000*units.Millimetre, units.US, units.Shop))
 	// Output:
 	// 3/4"
 	// 3 1/2"
