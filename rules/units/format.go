@@ -26,6 +26,7 @@ const (
 	spellFine                   // as a check's table prints a length
 	spellExact                  // the job's unit to 1e-6
 	spellReport                 // fixed decimals per dimension
+	spellGauge                  // as measuring equipment reports a length
 )
 
 // The styles. Lengths are spelled as each says; a force, stress, area,
@@ -50,6 +51,10 @@ var (
 	// Exact writes a length in the job's unit with the digits it needs, to
 	// 1e-6: "0.03125 in", "25.96 mm".
 	Exact = Style{spell: spellExact}
+	// Gauge writes a length the way measuring equipment reports it: to
+	// 0.0001 in or 0.01 mm, with its unit ("0.8125 in", "21.97 mm"). A
+	// negative value that rounds to zero keeps its sign.
+	Gauge = Style{spell: spellGauge}
 	// Report writes a quantity with the decimals of its dimension
 	// (Places) and its unit: "1.500 in", "95.0 kip", "2.250 in2"; ∞ for
 	// an infinite value and no sign on a zero.
@@ -141,6 +146,11 @@ func formatLength(l Length, sys System, st Style) string {
 		}
 	case spellExact:
 		return exactLength(l, sys)
+	case spellGauge:
+		if sys == US {
+			return fmt.Sprintf("%.4f in", l.In())
+		}
+		return fmt.Sprintf("%.2f mm", l.Mm())
 	}
 	if !st.exact || steps == 0 {
 		return text

@@ -40,6 +40,9 @@ func TestFormatStyles(t *testing.T) {
 		{"exact mm", 25.9600001, DimLength, SI, Exact, "25.96 mm", "rounded to 1e-6 mm"},
 		{"job bare", float64(3.5 * Inch), DimLength, US, Job.Bare(), "3-1/2", srcJob},
 		{"job bare si", 22.5, DimLength, SI, Job.Bare(), "22.5", srcJob},
+		// Gauge: as measuring equipment reports.
+		{"gauge us", float64(Inch * 13 / 16), DimLength, US, Gauge, "0.8125 in", "13/16 = 0.8125, to 0.0001 in (gaugeline convention)"},
+		{"gauge si", 21.966, DimLength, SI, Gauge, "21.97 mm", "to 0.01 mm (gaugeline convention)"},
 		// Report: fixed decimals per dimension.
 		{"report length us", float64(1.5 * Inch), DimLength, US, Report, "1.500 in", "lengths to 0.001 in (gaugeline convention)"},
 		{"report length si", 38.1, DimLength, SI, Report, "38.1 mm", "lengths to 0.1 mm (gaugeline convention)"},
