@@ -70,7 +70,8 @@ func Layers() []Layer {
 	return []Layer{LayerContour, LayerHoles, LayerDimensions, LayerReference, LayerNotes, LayerTitle}
 }
 
-// Point is a point in drawing units.
+// Point is a point of the plane: in drawing units on a sheet, in mm where
+// a detailing check measures between holes.
 type Point struct{ X, Y float64 }
 
 // Add returns p + q.
