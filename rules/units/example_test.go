@@ -52,3 +52,20 @@ func ExampleFormatJob() {
 	// 12-3/16 in
 	// 22.5 mm
 }
+
+func ExampleFormat() {
+	hole := float64(27 * units.Inch / 32) // 13/16 in plus 1/32 in
+	fmt.Println(units.Format(hole, units.DimLength, units.US, units.Job))
+	fmt.Println(units.Format(hole, units.DimLength, units.US, units.Shop))
+	fmt.Println(units.Format(hole, units.DimLength, units.US, units.People))
+	fmt.Println(units.Format(hole, units.DimLength, units.US, units.Report))
+	fmt.Println(units.Format(float64(95*units.Kip), units.DimForce, units.US, units.Report))
+	fmt.Println(units.Format(53.3333333, units.DimLength, units.SI, units.People))
+	// Output:
+	// 0.84375 in
+	// 7/8"
+	// 7/8" (0.84375 in)
+	// 0.844 in
+	// 95.0 kip
+	// 53.3 mm (53.333333 mm)
+}

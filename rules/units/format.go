@@ -8,7 +8,7 @@ import (
 )
 
 // Style is a way of writing a quantity for people or for a job file. Pick
-// one of Job, Shop, People, Exact and Report and refine it with its
+// one of Job, Shop, People, Exact, Gauge and Report and refine it with its
 // methods; the zero Style is Job.
 type Style struct {
 	spell   spelling
@@ -30,7 +30,8 @@ const (
 )
 
 // The styles. Lengths are spelled as each says; a force, stress, area,
-// moment or section modulus is written as Report in every style but Exact.
+// moment or section modulus is written as Report in every style, and a
+// plain number too, except that People writes it to 3 significant figures.
 var (
 	// Job writes a length the way a job file does, so that Parse reads
 	// it back exactly when it lies on a 1/16 in (us) or 0.001 mm (si)
@@ -66,7 +67,8 @@ var (
 // the unit.
 func (s Style) Places(n int) Style { s.spell, s.places = spellReport, n; return s }
 
-// Bare returns s without the unit: "3-1/2" for Job, "1.500" for Report.
+// Bare returns s without the unit: "3-1/2" for Job, "1.500" for Report
+// (the other styles of a length keep theirs).
 func (s Style) Bare() Style { s.bare = true; return s }
 
 // WithExact returns s with the exact value (Exact) beside where the
