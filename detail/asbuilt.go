@@ -10,7 +10,6 @@ import (
 	"math"
 	"path/filepath"
 	"slices"
-	"strconv"
 	"strings"
 	"text/tabwriter"
 
@@ -346,8 +345,8 @@ func (ab *AsBuilt) deviations(aligned []abVec, match []int) error {
 	used := make([]bool, len(set.Holes))
 	tol := ab.Tolerance
 	sys := ab.Design.Job.Units
-	ql := func(l units.Length) string { return qaLength(l, sys) }
-	qt := func(l units.Length) string { return exactLength(l, sys) }
+	ql := func(l units.Length) string { return units.FormatLength(l, sys, units.Gauge) }
+	qt := func(l units.Length) string { return units.FormatLength(l, sys, units.Exact) }
 	for i := range c.Holes {
 		h := ab.designInPart(&c.Holes[i])
 		dv := Deviation{ID: h.ID, Design: h}
@@ -1114,27 +1113,9 @@ func (ab *AsBuilt) JSON() ([]byte, error) {
 	return b.Bytes(), nil
 }
 
-// qaLength writes a measured length for QA: decimals, as measuring
-// equipment reports them (inches to 0.0001, mm to 0.01).
-func qaLength(l units.Length, sys units.System) string {
-	if sys == units.US {
-		return fmt.Sprintf("%.4f in", l.In())
-	}
-	return fmt.Sprintf("%.2f mm", l.Mm())
-}
-
-// exactLength writes a length in the job's unit with the digits it needs
-// (1/32 in is 0.03125 in), to 1e-6.
-func exactLength(l units.Length, sys units.System) string {
-	v, unit := l.Mm(), "mm"
-	if sys == units.US {
-		v, unit = l.In(), "in"
-	}
-	return strconv.FormatFloat(math.Round(v*1e6)/1e6, 'f', -1, 64) + " " + unit
-}
-
+// qaSigned writes a deviation as Gauge does, with its sign; no sign on a zero.
 func qaSigned(l units.Length, sys units.System) string {
-	s := qaLength(l, sys)
+	s := units.FormatLength(l, sys, units.Gauge)
 	if s[0] != '-' {
 		s = "+" + s
 	}
@@ -1147,7 +1128,7 @@ func qaSigned(l units.Length, sys units.System) string {
 // holeRow is one deviation as table cells for people.
 func (ab *AsBuilt) holeRow(dv Deviation) []string {
 	sys := ab.Design.Job.Units
-	l := func(v units.Length) string { return qaLength(v, sys) }
+	l := func(v units.Length) string { return units.FormatLength(v, sys, units.Gauge) }
 	sg := func(v units.Length) string { return qaSigned(v, sys) }
 	dash := "-"
 	row := []string{dv.ID, dv.MeasuredID, dash, dash, dash, dash, dash, dash, dash, dash, dv.Status.String()}
@@ -1182,7 +1163,7 @@ func (ab *AsBuilt) preamble() [][2]string {
 	sys := ab.Design.Job.Units
 	a := ab.Alignment
 	align := fmt.Sprintf("%s: shift x %s, y %s; rotation %.6f deg; rms %s (%s)", a.Mode, qaSigned(a.Shift[0], sys), qaSigned(a.Shift[1], sys),
-		a.Rotation*180/math.Pi, qaLength(a.RMS, sys), a.Note)
+		a.Rotation*180/math.Pi, units.FormatLength(a.RMS, sys, units.Gauge), a.Note)
 	m := ab.Measured
 	part := "member: its holes reclassified from the measured sizes, the plate's as designed; coordinates in the job's frame"
 	switch {
@@ -1196,7 +1177,7 @@ func (ab *AsBuilt) preamble() [][2]string {
 		{"measured", fmt.Sprintf("%s (%s, %s, %d holes)", m.File, m.Format, m.Units, len(m.Holes))},
 		{"part", part},
 		{"tolerance", fmt.Sprintf("position %s radial, size +%s over nominal; holes farther than %s from a design hole are extra",
-			exactLength(ab.Tolerance.Position, sys), exactLength(ab.Tolerance.Diameter, sys), exactLength(ab.Gate, sys))},
+			units.FormatLength(ab.Tolerance.Position, sys, units.Exact), units.FormatLength(ab.Tolerance.Diameter, sys, units.Exact), units.FormatLength(ab.Gate, sys, units.Exact))},
 		{"alignment", align},
 	}
 }

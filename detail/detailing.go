@@ -355,22 +355,19 @@ func minSpacingFindings(c *engine.Connection) []Finding {
 	return fs
 }
 
-// point is a point of the (x, y) plane in mm.
-type point struct{ x, y float64 }
-
 // stadium returns the outline of a hole of shape s centred at (x, y) as a
 // segment along its long axis, of length |Dx − Dy|, swept by a circle of
 // radius min(Dx, Dy)/2: a round hole is a degenerate segment, a slot a
 // stadium.
-func stadium(x, y units.Length, s engine.HoleShape) (a, b point, r float64) {
+func stadium(x, y units.Length, s engine.HoleShape) (a, b Point, r float64) {
 	cx, cy := float64(x), float64(y)
 	dx, dy := float64(s.Dx), float64(s.Dy)
 	if dx >= dy {
 		half := (dx - dy) / 2
-		return point{cx - half, cy}, point{cx + half, cy}, dy / 2
+		return Point{cx - half, cy}, Point{cx + half, cy}, dy / 2
 	}
 	half := (dy - dx) / 2
-	return point{cx, cy - half}, point{cx, cy + half}, dx / 2
+	return Point{cx, cy - half}, Point{cx, cy + half}, dx / 2
 }
 
 // clearDistance is the least distance between the outlines of two holes in
@@ -386,7 +383,7 @@ func clearDistanceIn(h1, h2 *engine.Hole, p ply) float64 {
 }
 
 // segmentDistance is the least distance between segments ab and cd.
-func segmentDistance(a, b, c, d point) float64 {
+func segmentDistance(a, b, c, d Point) float64 {
 	if segmentsCross(a, b, c, d) {
 		return 0
 	}
@@ -394,27 +391,27 @@ func segmentDistance(a, b, c, d point) float64 {
 }
 
 // cross is the z component of (a − o) × (b − o).
-func cross(o, a, b point) float64 { return (a.x-o.x)*(b.y-o.y) - (a.y-o.y)*(b.x-o.x) }
+func cross(o, a, b Point) float64 { return (a.X-o.X)*(b.Y-o.Y) - (a.Y-o.Y)*(b.X-o.X) }
 
 // segmentsCross reports a proper crossing of ab and cd; touching and
 // collinear overlaps put an end point on the other segment, which
 // pointSegment already measures as zero.
-func segmentsCross(a, b, c, d point) bool {
+func segmentsCross(a, b, c, d Point) bool {
 	d1, d2 := cross(c, d, a), cross(c, d, b)
 	d3, d4 := cross(a, b, c), cross(a, b, d)
 	return d1*d2 < 0 && d3*d4 < 0
 }
 
 // pointSegment is the distance from p to segment ab.
-func pointSegment(p, a, b point) float64 {
-	vx, vy := b.x-a.x, b.y-a.y
+func pointSegment(p, a, b Point) float64 {
+	vx, vy := b.X-a.X, b.Y-a.Y
 	l2 := vx*vx + vy*vy
 	if l2 == 0 {
-		return math.Hypot(p.x-a.x, p.y-a.y)
+		return math.Hypot(p.X-a.X, p.Y-a.Y)
 	}
-	s := ((p.x-a.x)*vx + (p.y-a.y)*vy) / l2
+	s := ((p.X-a.X)*vx + (p.Y-a.Y)*vy) / l2
 	s = max(0, min(1, s))
-	return math.Hypot(p.x-(a.x+s*vx), p.y-(a.y+s*vy))
+	return math.Hypot(p.X-(a.X+s*vx), p.Y-(a.Y+s*vy))
 }
 
 // edge is one edge of a part in contact, as seen from the holes.

@@ -825,11 +825,11 @@ func (p *problem) yieldBlocker() *Blocker {
 }
 
 func areaText(a units.Area, sys units.System) string {
-	return fmt.Sprintf("%.3g %s", sys.ToJob(float64(a), units.DimArea), sys.Label(units.DimArea))
+	return units.Format(float64(a), units.DimArea, sys, units.Report.Places(-3))
 }
 
 func forceText(f units.Force, sys units.System) string {
-	return fmt.Sprintf("%.1f %s", sys.ToJob(float64(f), units.DimForce), sys.Label(units.DimForce))
+	return units.Format(float64(f), units.DimForce, sys, units.Report)
 }
 
 // space counts the candidates in the space, math.MaxInt when they are

@@ -3,7 +3,6 @@ package detail
 import (
 	"fmt"
 	"io"
-	"math"
 	"strings"
 	"text/tabwriter"
 
@@ -17,38 +16,10 @@ import (
 type people struct{ sys units.System }
 
 func (p people) force(f units.Force) string {
-	return fmt.Sprintf("%.1f", p.sys.ToJob(float64(f), units.DimForce))
+	return units.Format(float64(f), units.DimForce, p.sys, units.Report.Bare())
 }
 
-func (p people) length(l units.Length) string { return FormatLength(l, p.sys) }
-
-// FormatLength writes a length for a person: US in feet-inches-sixteenths,
-// SI to 0.1 mm. Where that rounds the value, the exact value follows
-// (`7/8" (0.84375 in)`, `53.3 mm (53.333333 mm)`), so that a limit is
-// never printed as one the part meets while it fails it, nor a measured
-// value as one that meets its limit.
-func FormatLength(l units.Length, sys units.System) string {
-	if sys == units.US {
-		return withExact(units.FormatFeetInches(l), l, sys, 16)
-	}
-	return withExact(fmt.Sprintf("%.1f mm", float64(l)), l, sys, 10)
-}
-
-// withExact appends the exact length l (exactLength, to 1e-6 of the job's
-// unit) to text, l rounded to 1/steps of the job's unit, when the rounding
-// changed it.
-func withExact(text string, l units.Length, sys units.System, steps float64) string {
-	v := l.Mm()
-	if sys == units.US {
-		v = l.In()
-	}
-	if exact, grid := math.Round(v*1e6)/1e6, math.Round(v*steps)/steps; math.Abs(exact-grid) < 1e-9 || !finite(v) {
-		return text
-	}
-	return text + " (" + exactLength(l, sys) + ")"
-}
-
-func finite(v float64) bool { return !math.IsNaN(v) && !math.IsInf(v, 0) }
+func (p people) length(l units.Length) string { return units.FormatLength(l, p.sys, units.People) }
 
 func (p people) value(v float64, d units.Dim) string {
 	switch d {
@@ -56,17 +27,8 @@ func (p people) value(v float64, d units.Dim) string {
 		if v == 0 {
 			return "-"
 		}
-	case units.DimLength:
-		return p.length(units.Length(v))
-	case units.DimArea:
-		if p.sys == units.US {
-			return fmt.Sprintf("%.3f in2", units.Area(v).In2())
-		}
-		return fmt.Sprintf("%.0f mm2", v)
-	case units.DimStress:
-		return fmt.Sprintf("%.1f %s", p.sys.ToJob(v, d), p.sys.Label(d))
-	case units.DimForce:
-		return fmt.Sprintf("%.1f %s", p.sys.ToJob(v, d), p.sys.Label(d))
+	case units.DimLength, units.DimArea, units.DimStress, units.DimForce:
+		return units.Format(v, d, p.sys, units.People)
 	}
 	return fmt.Sprintf("%.3g", v)
 }
@@ -155,7 +117,7 @@ func boltSize(d units.Length, sys units.System) string {
 	if sys == units.SI {
 		return fmt.Sprintf("M%g", float64(d))
 	}
-	return units.FormatFeetInches(d)
+	return units.FormatLength(d, units.US, units.Shop)
 }
 
 // VerdictReason says what decided the verdict, for the line after it: a

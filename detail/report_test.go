@@ -208,24 +208,3 @@ bolts:
 		t.Fatal("spacing.min does not fail at 2-5/16 in (AISC 360-22 J3.4: 2.333 in)")
 	}
 }
-
-func TestFormatLength(t *testing.T) {
-	for _, tc := range []struct {
-		l    units.Length
-		sys  units.System
-		want string
-		src  string
-	}{
-		{units.Inch * 13 / 16, units.US, `13/16"`, "AISC 360-22 Table J3.3: 3/4-in bolt, standard hole 13/16 in"},
-		{units.Inch * (13.0/16 + 1.0/32), units.US, `7/8" (0.84375 in)`, "Table J3.3 13/16 in plus 1/32 in (common practice, no source)"},
-		{units.Inch * 1.5, units.US, `1 1/2"`, "on the 1/16 in grid"},
-		{units.Inch * 0.06, units.US, `1/16" (0.06 in)`, "rounds to 1/16 in"},
-		{26, units.SI, "26.0 mm", "AISC 360-16 Table J3.4M: M20, 26 mm"},
-		{20 * 8.0 / 3, units.SI, "53.3 mm (53.333333 mm)", "AISC 360-16 J3.3: 2-2/3 · 20 mm"},
-		{25.96, units.SI, "26.0 mm (25.96 mm)", "rounds to 0.1 mm"},
-	} {
-		if got := FormatLength(tc.l, tc.sys); got != tc.want {
-			t.Errorf("FormatLength(%v mm) = %q, want %q (%s)", float64(tc.l), got, tc.want, tc.src)
-		}
-	}
-}

@@ -70,7 +70,8 @@ func Layers() []Layer {
 	return []Layer{LayerContour, LayerHoles, LayerDimensions, LayerReference, LayerNotes, LayerTitle}
 }
 
-// Point is a point in drawing units.
+// Point is a point of the plane: in drawing units on a sheet, in mm where
+// a detailing check measures between holes.
 type Point struct{ X, Y float64 }
 
 // Add returns p + q.
@@ -435,18 +436,14 @@ func (l sheetLayout) len(v units.Length) float64 {
 
 // people writes a length as a detailer reads it.
 func (l sheetLayout) people(v float64) string {
-	return units.FormatForPeople(units.Length(l.sys.FromJob(v, units.DimLength)), l.sys)
+	return units.FormatLength(units.Length(l.sys.FromJob(v, units.DimLength)), l.sys, units.Shop)
 }
 
 // limit writes a length the shop compares with a limit (a thickness, the
 // punch limit) as people does, with the exact value after it where the
 // rounding to 1/16 in (1 mm) changed it: 7/8" (0.9 in).
 func (l sheetLayout) limit(v float64) string {
-	steps := 16.0
-	if l.sys == units.SI {
-		steps = 1
-	}
-	return withExact(l.people(v), units.Length(l.sys.FromJob(v, units.DimLength)), l.sys, steps)
+	return units.FormatLength(units.Length(l.sys.FromJob(v, units.DimLength)), l.sys, units.Shop.WithExact())
 }
 
 func (l sheetLayout) rect(w, h float64) []Point { return []Point{{0, 0}, {w, 0}, {w, h}, {0, h}} }

@@ -20,18 +20,6 @@ type PathHole struct {
 	X, U, Dh units.Length
 }
 
-// UnfoldAngleHole returns the across-section coordinate of a hole in an
-// angle unfolded at its heel, so that the gage between a hole ga from the
-// heel in the connected leg and one gb from the heel in the outstanding leg
-// is ga + gb − t (B4.3b): connected-leg holes keep U = ga, outstanding-leg
-// holes get U = −(gb − t).
-func UnfoldAngleHole(g, t units.Length, outstanding bool) units.Length {
-	if outstanding {
-		return -(g - t)
-	}
-	return g
-}
-
 // NetWidthDeduction finds the worst straight or zig-zag path across the
 // section (B4.3b): the chain of holes, in increasing U, that maximises
 // Σ Dh − Σ s²/4g, where s is the spacing along the load and g the gage

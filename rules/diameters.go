@@ -77,5 +77,5 @@ func (e *Edition) diameterKey(d units.Length) string {
 		}
 		return fmt.Sprintf("d = %g mm", mm)
 	}
-	return "d = " + units.InchFraction(d) + " in"
+	return "d = " + units.FormatJob(d, units.US)
 }

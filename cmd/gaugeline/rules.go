@@ -44,9 +44,9 @@ func runRules(ro rulesOptions, out io.Writer) error {
 	lb := sys.Labels()
 	size := func(l units.Length) string {
 		if sys == units.US {
-			return units.FormatFeetInches(l)
+			return units.FormatLength(l, units.US, units.Shop)
 		}
-		return fmt.Sprintf("%g", float64(l))
+		return units.FormatLength(l, units.SI, units.Job.Bare())
 	}
 	slot := func(h rules.HoleSize) string { return size(h.Width) + " x " + size(h.Length) }
 	tw := tabwriter.NewWriter(out, 0, 0, 2, ' ', 0)

@@ -57,76 +57,27 @@ func (f fmtr) unitLabel(d units.Dim) string {
 	return strings.NewReplacer("2", "²", "3", "³").Replace(f.sys.Label(d))
 }
 
-// places is how many decimals a value of dimension d is printed with.
-func (f fmtr) places(d units.Dim) int {
-	switch d {
-	case units.DimLength:
-		if f.sys == units.US {
-			return 3
-		}
-		return 1
-	case units.DimArea:
-		if f.sys == units.US {
-			return 3
-		}
-		return 0
-	case units.DimForce, units.DimStress:
-		return 1
-	case units.DimMoment:
-		if f.sys == units.US {
-			return 2
-		}
-		return 3
-	case units.DimModulus:
-		if f.sys == units.US {
-			return 3
-		}
-		return 0
-	}
-	return 3
-}
-
 // num prints a value of dimension d in the job's units, without a unit.
 func (f fmtr) num(v float64, d units.Dim) string {
-	if math.IsInf(v, 0) || math.IsNaN(v) {
-		return "∞"
-	}
-	v = f.sys.ToJob(v, d)
-	if d == units.Dimensionless && v == math.Trunc(v) && math.Abs(v) < 1e6 {
-		return fmt.Sprintf("%d", int64(v))
-	}
-	s := fmt.Sprintf("%.*f", f.places(d), v)
-	if strings.Trim(s, "-0.") == "" {
-		s = strings.TrimPrefix(s, "-")
-	}
-	return s
+	return units.Format(v, d, f.sys, units.Report.Bare())
 }
 
 // q prints a value with its unit.
 func (f fmtr) q(v float64, d units.Dim) string {
-	if u := f.unitLabel(d); u != "" {
-		return f.num(v, d) + " " + u
-	}
-	return f.num(v, d)
+	return units.Format(v, d, f.sys, units.Report.Typeset())
 }
 
 func (f fmtr) force(x units.Force) string   { return f.q(float64(x), units.DimForce) }
 func (f fmtr) length(x units.Length) string { return f.q(float64(x), units.DimLength) }
 
 // people prints a measured or limiting value the way the shop reads it:
-// lengths as the check prints them (detail.FormatLength: US in feet,
-// inches and sixteenths, the exact value after them where they round it).
+// lengths as the check prints them (units.People: US in feet, inches and
+// sixteenths, the exact value after them where they round it).
 func (f fmtr) people(v float64, d units.Dim) string {
-	switch d {
-	case units.DimLength:
-		return detail.FormatLength(units.Length(v), f.sys)
-	case units.Dimensionless:
-		if v == 0 {
-			return "–"
-		}
-		return fmt.Sprintf("%.3g", v)
+	if d == units.Dimensionless && v == 0 {
+		return "–"
 	}
-	return f.q(v, d)
+	return units.Format(v, d, f.sys, units.People.Typeset())
 }
 
 func ratioText(r float64) string {
@@ -415,7 +366,7 @@ func holeCells(h engine.HoleShape, f fmtr) []string {
 	}
 	size := units.FormatJob(h.Dx, f.sys) + " diameter"
 	if h.Type.IsSlot() {
-		size = strings.TrimSuffix(units.FormatJob(h.Dx, f.sys), " "+f.unitLabel(units.DimLength)) + " × " + units.FormatJob(h.Dy, f.sys)
+		size = units.FormatLength(h.Dx, f.sys, units.Job.Bare()) + " × " + units.FormatJob(h.Dy, f.sys)
 	}
 	return []string{size, typ}
 }
@@ -424,21 +375,7 @@ func holeCells(h engine.HoleShape, f fmtr) []string {
 // report's usual way for its dimension, or with the decimals or
 // significant figures the step asks for.
 func (f fmtr) Quantity(v float64, d units.Dim, places int) string {
-	if places == 0 {
-		return f.q(v, d)
-	}
-	if math.IsInf(v, 0) || math.IsNaN(v) {
-		return "∞"
-	}
-	x := f.sys.ToJob(v, d)
-	s := fmt.Sprintf("%.*f", places, x)
-	if places < 0 {
-		s = fmt.Sprintf("%.*g", -places, x)
-	}
-	if u := f.unitLabel(d); u != "" {
-		s += " " + u
-	}
-	return s
+	return units.Format(v, d, f.sys, units.Report.Places(places).Typeset())
 }
 
 // limit builds the section of one limit state from its working.

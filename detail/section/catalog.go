@@ -94,7 +94,7 @@ func sixteenths(n int) units.Length { return units.Length(n) * units.Inch / 16 }
 
 // inches prints sixteenths of an inch the way designations do: "3-1/2",
 // "1/2", "1-1/8", "4".
-func inches(n int) string { return units.InchFraction(sixteenths(n)) }
+func inches(n int) string { return units.FormatLength(sixteenths(n), units.US, units.Job.Bare()) }
 
 // family is one leg pair of a catalog: its "L4x4" prefix and its angles.
 type family struct {

@@ -29,11 +29,11 @@ func ExampleParse() {
 	// "3 kip" is a force, not a length
 }
 
-func ExampleFormatFeetInches() {
+func ExampleFormatLength() {
 	for _, in := range []float64{0.75, 3.5, 11.99, 42.5, -15.5} {
-		fmt.Println(units.FormatFeetInches(units.Length(in) * units.Inch))
+		fmt.Println(units.FormatLength(units.Length(in)*units.Inch, units.US, units.Shop))
 	}
-	fmt.Println(units.FormatFeetInches(1000 * units.Millimetre))
+	fmt.Println(units.FormatLength(1000*units.Millimetre, units.US, units.Shop))
 	// Output:
 	// 3/4"
 	// 3 1/2"
@@ -51,4 +51,21 @@ func ExampleFormatJob() {
 	// 1-1/2 in
 	// 12-3/16 in
 	// 22.5 mm
+}
+
+func ExampleFormat() {
+	hole := float64(27 * units.Inch / 32) // 13/16 in plus 1/32 in
+	fmt.Println(units.Format(hole, units.DimLength, units.US, units.Job))
+	fmt.Println(units.Format(hole, units.DimLength, units.US, units.Shop))
+	fmt.Println(units.Format(hole, units.DimLength, units.US, units.People))
+	fmt.Println(units.Format(hole, units.DimLength, units.US, units.Report))
+	fmt.Println(units.Format(float64(95*units.Kip), units.DimForce, units.US, units.Report))
+	fmt.Println(units.Format(53.3333333, units.DimLength, units.SI, units.People))
+	// Output:
+	// 0.84375 in
+	// 7/8"
+	// 7/8" (0.84375 in)
+	// 0.844 in
+	// 95.0 kip
+	// 53.3 mm (53.333333 mm)
 }

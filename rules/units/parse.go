@@ -135,80 +135,6 @@ func ParseBoltDiameter(s string, sys System) (Length, error) {
 	return Length(v) * Millimetre, nil
 }
 
-// FormatFeetInches formats a length for people in feet, inches and
-// sixteenths, rounded to the nearest 1/16 in: 1'-3 1/2", 3 1/4", 0'-0 3/4"
-// is written 3/4". Lengths of 12 in and more carry feet.
-func FormatFeetInches(l Length) string {
-	in := l.In()
-	if !finite(in) {
-		return strconv.FormatFloat(in, 'g', -1, 64)
-	}
-	n := math.Round(math.Abs(in) * 16) // sixteenths
-	if n == 0 {
-		return `0"`
-	}
-	sign := ""
-	if in < 0 {
-		sign = "-"
-	}
-	rem := math.Mod(n, 12*16) // exact, and an integer in [0, 192)
-	feet := (n - rem) / (12 * 16)
-	whole, frac := int(rem)/16, int(rem)%16
-	if feet == 0 {
-		return sign + formatMixed(whole, frac, " ") + `"`
-	}
-	inches := formatMixed(whole, frac, " ")
-	if whole == 0 && frac != 0 {
-		inches = "0 " + inches // 1'-0 1/2", not 1'-1/2"
-	}
-	return sign + strconv.FormatFloat(feet, 'f', 0, 64) + "'-" + inches + `"`
-}
-
-// FormatJob formats a length the way a job file writes it, so that Parse
-// reads it back exactly when it lies on a 1/16 in (us) or 0.001 mm (si)
-// grid: "1-1/2 in", "3/4 in", "3 in", "20 mm", "22.5 mm".
-func FormatJob(l Length, sys System) string {
-	if sys == SI {
-		return trimDecimal(strconv.FormatFloat(l.Mm(), 'f', 3, 64)) + " mm"
-	}
-	in := l.In()
-	n := math.Round(in * 16)
-	if !finite(in) || math.Abs(in-n/16) > 1e-9 {
-		return trimDecimal(strconv.FormatFloat(in, 'f', 6, 64)) + " in"
-	}
-	if n == 0 {
-		return "0 in"
-	}
-	sign := ""
-	if n < 0 {
-		sign, n = "-", -n
-	}
-	rem := math.Mod(n, 16)
-	whole := strconv.FormatFloat((n-rem)/16, 'f', 0, 64)
-	if rem == 0 {
-		return sign + whole + " in"
-	}
-	frac := formatMixed(0, int(rem), "")
-	if whole == "0" {
-		return sign + frac + " in"
-	}
-	return sign + whole + "-" + frac + " in"
-}
-
-// InchFraction writes a length in inches the way designations and job
-// files do, without a unit: "3-1/2", "1/2", "4", or a decimal ("0.8") off
-// the 1/16 in grid.
-func InchFraction(l Length) string { return strings.TrimSuffix(FormatJob(l, US), " in") }
-
-// FormatForPeople formats a length for a sheet or table: US as
-// FormatFeetInches, SI in whole millimetres ("65").
-func FormatForPeople(l Length, sys System) string {
-	if sys == SI {
-		return trimDecimal(strconv.FormatFloat(math.Round(l.Mm()), 'f', 0, 64))
-	}
-	return FormatFeetInches(l)
-}
-
 // parseError is a problem with the number itself; Parse prefixes the input.
 type parseError string
 
@@ -396,7 +322,7 @@ func inchesAfterFeet(s string, ft float64) (in float64, given bool, err error) {
 		msg := "inches after the feet must be less than 12"
 		if total := ft*12 + v; finite(total) && total*16 == math.Trunc(total*16) && total < 1e9 {
 			msg += fmt.Sprintf(": %s ft %s in is %s", strconv.FormatFloat(ft, 'f', -1, 64),
-				strconv.FormatFloat(v, 'f', -1, 64), FormatFeetInches(Length(total)*Inch))
+				strconv.FormatFloat(v, 'f', -1, 64), feetInches(Length(total)*Inch))
 		}
 		return 0, true, parseError(msg)
 	}
@@ -455,35 +381,6 @@ func normalizeUnit(u string) string {
 	u = strings.ToLower(strings.TrimSpace(u))
 	u = strings.NewReplacer("^", "", "²", "2").Replace(u)
 	return strings.Join(strings.Fields(u), " ")
-}
-
-// formatMixed writes whole and sixteenths as "3", "3/4", "3 1/2" (sep " ")
-// or "1-1/2" (sep "-"); sixteenths are reduced.
-func formatMixed(whole, sixteenths int, sep string) string {
-	w := strconv.Itoa(whole)
-	if sixteenths == 0 {
-		return w
-	}
-	den := 16
-	for sixteenths%2 == 0 {
-		sixteenths, den = sixteenths/2, den/2
-	}
-	frac := strconv.Itoa(sixteenths) + "/" + strconv.Itoa(den)
-	if whole == 0 {
-		return frac
-	}
-	return w + sep + frac
-}
-
-// trimDecimal drops trailing zeros and a trailing point, and a minus on zero.
-func trimDecimal(s string) string {
-	if strings.Contains(s, ".") {
-		s = strings.TrimRight(strings.TrimRight(s, "0"), ".")
-	}
-	if s == "-0" {
-		return "0"
-	}
-	return s
 }
 
 // leadingWord returns the ASCII letters at the start of s.

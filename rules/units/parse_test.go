@@ -290,7 +290,7 @@ func TestParseBoltDiameter(t *testing.T) {
 	}
 }
 
-func TestFormatFeetInches(t *testing.T) {
+func TestFormatLengthShopUS(t *testing.T) {
 	tests := []struct {
 		name string
 		in   float64 // inches
@@ -320,7 +320,7 @@ func TestFormatFeetInches(t *testing.T) {
 	}
 	for _, tt := range tests {
 		t.Run(tt.name, func(t *testing.T) {
-			assert.Equal(t, tt.want, FormatFeetInches(Length(tt.in)*Inch), tt.src)
+			assert.Equal(t, tt.want, FormatLength(Length(tt.in)*Inch, US, Shop), tt.src)
 		})
 	}
 }
@@ -361,7 +361,7 @@ func TestFormatJob(t *testing.T) {
 	}
 }
 
-func TestFormatForPeople(t *testing.T) {
+func TestFormatLengthShop(t *testing.T) {
 	tests := []struct {
 		name string
 		in   Length
@@ -380,7 +380,7 @@ func TestFormatForPeople(t *testing.T) {
 	}
 	for _, tt := range tests {
 		t.Run(tt.name, func(t *testing.T) {
-			assert.Equal(t, tt.want, FormatForPeople(tt.in, tt.sys), tt.src)
+			assert.Equal(t, tt.want, FormatLength(tt.in, tt.sys, Shop), tt.src)
 		})
 	}
 }
@@ -389,7 +389,7 @@ func TestFormatForPeople(t *testing.T) {
 func sixteenths(k int64) Length { return Length(float64(k)/16) * Inch }
 
 // Every 1/16 in from -48 in to 48 in survives FormatJob → Parse exactly,
-// and FormatFeetInches → Parse too.
+// and FormatLength(…, US, Shop) → Parse too.
 func TestRoundTripUSGrid(t *testing.T) {
 	for k := int64(-48 * 16); k <= 48*16; k++ {
 		x := sixteenths(k)
@@ -398,10 +398,10 @@ func TestRoundTripUSGrid(t *testing.T) {
 		require.NoError(t, err, s)
 		require.Equalf(t, x, got, "FormatJob(%d/16 in) = %q", k, s)
 
-		p := FormatFeetInches(x)
+		p := FormatLength(x, US, Shop)
 		got, err = ParseLength(p, US)
 		require.NoError(t, err, p)
-		require.Equalf(t, x, got, "FormatFeetInches(%d/16 in) = %q", k, p)
+		require.Equalf(t, x, got, "FormatLength(%d/16 in, US, Shop) = %q", k, p)
 	}
 }
 
@@ -474,24 +474,24 @@ func TestRapidFormatJobAnyLength(t *testing.T) {
 	})
 }
 
-// FormatFeetInches never panics on a finite length, and for lengths a shop
+// FormatLength(…, US, Shop) never panics on a finite length, and for lengths a shop
 // could meet Parse reads it back to within half a sixteenth.
-func TestRapidFormatFeetInches(t *testing.T) {
+func TestRapidFormatLengthShopUS(t *testing.T) {
 	rapid.Check(t, func(t *rapid.T) {
 		x := rapid.Float64().Draw(t, "mm")
-		s := FormatFeetInches(Length(x))
+		s := FormatLength(Length(x), US, Shop)
 		if len(s) < 2 || s[len(s)-1] != '"' {
-			t.Fatalf("FormatFeetInches(%v mm) = %q, want a length in inches", x, s)
+			t.Fatalf("FormatLength(%v mm, US, Shop) = %q, want a length in inches", x, s)
 		}
 		if math.Abs(x) > 1e9 {
 			return
 		}
 		got, err := Parse(s, DimLength, US)
 		if err != nil {
-			t.Fatalf("Parse(FormatFeetInches(%v mm) = %q): %v", x, s, err)
+			t.Fatalf("Parse(FormatLength(%v mm, US, Shop) = %q): %v", x, s, err)
 		}
 		if d := math.Abs(got - x); d > 25.4/32+1e-9 {
-			t.Fatalf("Parse(FormatFeetInches(%v mm) = %q) = %v, off by %v mm", x, s, got, d)
+			t.Fatalf("Parse(FormatLength(%v mm, US, Shop) = %q) = %v, off by %v mm", x, s, got, d)
 		}
 	})
 }
@@ -517,7 +517,7 @@ func TestFormatNonFinite(t *testing.T) {
 	// Not finite is a programmer's mistake upstream; the formatters still
 	// return something Parse refuses rather than a plausible length.
 	for _, x := range []float64{math.NaN(), math.Inf(1), math.Inf(-1)} {
-		for _, s := range []string{FormatFeetInches(Length(x)), FormatJob(Length(x), US), FormatJob(Length(x), SI)} {
+		for _, s := range []string{FormatLength(Length(x), US, Shop), FormatJob(Length(x), US), FormatJob(Length(x), SI)} {
 			_, err := ParseLength(s, US)
 			assert.Errorf(t, err, "Parse(%q) must fail", s)
 		}
