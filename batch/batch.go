@@ -373,7 +373,6 @@ func jobFiles(cfg Config, job *detail.Job, row *Row) ([]dxfout.File, error) {
 			return []dxfout.File{{Name: job.Mark + ".json", Data: data}}, nil
 		}
 		r = p.Report
-		r.Design.Job.Stamp = job.Stamp // the sheet of the layout job carries the input's stamp
 	} else {
 		d, err := job.Build()
 		if err != nil {

@@ -275,6 +275,7 @@ func Propose(j *Job, opt ProposeOptions) (*Proposal, error) {
 	if err != nil {
 		return nil, fmt.Errorf("detail: propose wrote a job it cannot read: %w", err)
 	}
+	lj.Stamp = j.Stamp // the layout's files belong to the run that proposed it
 	d, err := lj.Build()
 	if err != nil {
 		return nil, fmt.Errorf("detail: propose wrote a job that does not build: %w", err)
@@ -1863,7 +1864,6 @@ func (p *Proposal) JSON(mode SearchMode) ([]byte, error) {
 		d := jsonProposal{jsonReport: p.Report.document(), Layout: jl, Plate: jp, Bolts: p.Layout.Bolts(),
 			Length: lengthJSON(p.Length, sys), Alternatives: []jsonAlternative{},
 			Search: p.search(mode)}
-		d.Stamp = p.Job.Stamp
 		for _, a := range p.Alternatives {
 			al, ap := a.Layout.json(sys)
 			d.Alternatives = append(d.Alternatives, jsonAlternative{Layout: al, Plate: ap, Bolts: a.Layout.Bolts(),

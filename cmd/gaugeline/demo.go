@@ -106,7 +106,6 @@ func demoPropose(name string) (*detail.Proposal, error) {
 	if !p.Found() {
 		return nil, fmt.Errorf("demo: no layout for %s", job.Mark)
 	}
-	p.Report.Design.Job.Stamp = job.Stamp // the sheet and report of the layout carry the input's stamp
 	return p, nil
 }
 

@@ -44,19 +44,12 @@ func runSheet(_ context.Context, o *rootOptions, so sheetOptions, path string, o
 	if so.dir == "" {
 		return usageError{errors.New("-o DIR is required")}
 	}
-	job, err := detail.LoadJob(path)
+	r, err := detail.CheckFile(path)
 	if err != nil {
 		return err
 	}
-	job.Stamp = stampFor("check", job)
-	d, err := job.Build()
-	if err != nil {
-		return err
-	}
-	r, err := detail.Check(d)
-	if err != nil {
-		return &detail.InputError{File: path, Msg: err.Error()}
-	}
+	job := r.Design.Job
+	job.Stamp = stampFor("check", job) // before anything is drawn: every file carries it
 	if !r.Pass && !so.notForFabrication {
 		fmt.Fprintf(o.stderr, "gaugeline: error: %s: %s %s: no sheet written\n", path, r.Design.Job.Mark, r.VerdictReason())
 		fmt.Fprintf(o.stderr, "gaugeline: hint: run 'gaugeline check %s' for every failing rule; --not-for-fabrication writes a stamped sheet\n", path)
