@@ -305,10 +305,21 @@ func Remove(out, name string) {
 }
 
 // IsLeftover reports whether an output folder entry is a staging folder
-// or temporary file an interrupted run left behind.
+// (.NAME.new-RAND, .NAME.old-RAND) or a temporary file (.NAME.RAND.tmp)
+// an interrupted run left behind; a hidden file of anyone else's (.notes,
+// .new-ideas) is not.
 func IsLeftover(name string) bool {
-	return strings.HasPrefix(name, ".") && name != LockName &&
-		(strings.Contains(name, ".new-") || strings.Contains(name, ".old-") || strings.HasSuffix(name, ".tmp"))
+	rest, hidden := strings.CutPrefix(name, ".")
+	if !hidden || name == LockName || rest == "" || rest[0] == '.' {
+		return false
+	}
+	for _, m := range []string{".new-", ".old-"} {
+		if i := strings.LastIndex(rest, m); i > 0 && i+len(m) < len(rest) {
+			return true
+		}
+	}
+	base, tmp := strings.CutSuffix(rest, ".tmp")
+	return tmp && strings.LastIndex(base, ".") > 0
 }
 
 // CleanLeftovers removes what interrupted runs left in out. Call it only

@@ -92,3 +92,18 @@ func TestWriteReplacesWhole(t *testing.T) {
 		t.Errorf("a folder that is not a set was touched: %v", got)
 	}
 }
+
+// Only what gaugeline's writers name (staging folders and temporary files)
+// is a leftover to clean; other hidden files are somebody's.
+func TestIsLeftover(t *testing.T) {
+	for name, want := range map[string]bool{
+		".BR-7.new-123456": true, ".BR-7.old-99": true, ".summary.csv.4711.tmp": true,
+		".A.new-1.new-2": true,
+		LockName: false, ".new-ideas": false, ".notes": false, ".x.tmp": false, "BR-7.new-1": false,
+		".BR-7.new-": false, "..x.new-1": false,
+	} {
+		if got := IsLeftover(name); got != want {
+			t.Errorf("IsLeftover(%q) = %v, want %v", name, got, want)
+		}
+	}
+}
