@@ -351,3 +351,33 @@ func Lock(out string, wait func()) (unlock func(), err error) {
 	CleanLeftovers(out)
 	return unlock, nil
 }
+
+// WriteFile writes one file that is not part of a set (a batch summary, a
+// report or job asked for by path): to a temporary file beside it, then
+// renamed into place, so path is never half-written. The folder is
+// created if missing.
+func WriteFile(path string, data []byte) error {
+	dir := filepath.Dir(path)
+	if err := os.MkdirAll(dir, 0o755); err != nil {
+		return fmt.Errorf("cannot create the output directory: %w", err)
+	}
+	tmp, err := os.CreateTemp(dir, "."+filepath.Base(path)+".*.tmp")
+	if err != nil {
+		return fmt.Errorf("cannot write into %s: %w", dir, err)
+	}
+	_, err = tmp.Write(data)
+	if err == nil {
+		err = tmp.Chmod(0o644)
+	}
+	if cerr := tmp.Close(); err == nil {
+		err = cerr
+	}
+	if err == nil {
+		err = os.Rename(tmp.Name(), path)
+	}
+	if err != nil {
+		os.Remove(tmp.Name())
+		return fmt.Errorf("cannot write %s: %w", filepath.Base(path), err)
+	}
+	return nil
+}

@@ -13,7 +13,7 @@ import (
 
 	"gaugeline/batch"
 	"gaugeline/detail"
-	"gaugeline/dxfout"
+	"gaugeline/fileset"
 )
 
 // batchExit is the batch's exit code: an interruption wins over bad input,
@@ -62,7 +62,7 @@ func runBatch(ctx context.Context, o *rootOptions, bo batchOptions, arg string, 
 	cfg.Workers = min(cfg.Workers, len(files))
 	run := batch.RunLine(cfg, files)
 	os.Remove(filepath.Join(bo.dir, "summary.csv"))
-	if err := writeAll(bo.dir, []dxfout.File{{Name: "summary.md", Data: batch.SummaryRunning(run)}}); err != nil {
+	if err := fileset.WriteFile(filepath.Join(bo.dir, fileset.SummaryMD), batch.SummaryRunning(run)); err != nil {
 		return &detail.InputError{File: bo.dir, Msg: err.Error()}
 	}
 
@@ -83,10 +83,10 @@ func runBatch(ctx context.Context, o *rootOptions, bo batchOptions, arg string, 
 		return err
 	}
 	// summary.md last: until it is replaced it says the run is not finished.
-	if err := writeAll(bo.dir, []dxfout.File{{Name: "summary.csv", Data: csvData}}); err != nil {
+	if err := fileset.WriteFile(filepath.Join(bo.dir, fileset.SummaryCSV), csvData); err != nil {
 		return &detail.InputError{File: bo.dir, Msg: err.Error()}
 	}
-	if err := writeAll(bo.dir, []dxfout.File{{Name: "summary.md", Data: batch.SummaryMarkdown(rows, run)}}); err != nil {
+	if err := fileset.WriteFile(filepath.Join(bo.dir, fileset.SummaryMD), batch.SummaryMarkdown(rows, run)); err != nil {
 		return &detail.InputError{File: bo.dir, Msg: err.Error()}
 	}
 

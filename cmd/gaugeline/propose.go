@@ -5,12 +5,11 @@ import (
 	"errors"
 	"fmt"
 	"io"
-	"path/filepath"
 
 	"github.com/spf13/cobra"
 
 	"gaugeline/detail"
-	"gaugeline/dxfout"
+	"gaugeline/fileset"
 )
 
 // maxAlternatives bounds --alternatives: a longer list is no longer read
@@ -133,9 +132,9 @@ func limitError(job *detail.Job, le *detail.SearchLimitError) error {
 }
 
 // writeAtomic writes data to path through a temporary file in the same
-// directory and a rename (writeAll), so that path is never half-written.
+// directory and a rename (fileset.WriteFile), so path is never half-written.
 func writeAtomic(path string, data []byte) error {
-	if err := writeAll(filepath.Dir(path), []dxfout.File{{Name: filepath.Base(path), Data: data}}); err != nil {
+	if err := fileset.WriteFile(path, data); err != nil {
 		return &detail.InputError{File: path, Msg: "cannot write the job: " + err.Error()}
 	}
 	return nil

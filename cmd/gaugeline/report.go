@@ -5,14 +5,13 @@ import (
 	"errors"
 	"fmt"
 	"io"
-	"path/filepath"
 	"strings"
 
 	"github.com/spf13/cobra"
 
 	"gaugeline/detail"
 	"gaugeline/detail/calc"
-	"gaugeline/dxfout"
+	"gaugeline/fileset"
 )
 
 type reportOptions struct {
@@ -49,7 +48,7 @@ func runReport(_ context.Context, o *rootOptions, ro reportOptions, path string,
 	if err != nil {
 		return err
 	}
-	if err := writeAll(filepath.Dir(ro.out), []dxfout.File{{Name: filepath.Base(ro.out), Data: page}}); err != nil {
+	if err := fileset.WriteFile(ro.out, page); err != nil {
 		return err
 	}
 	fmt.Fprintln(out, ro.out)
