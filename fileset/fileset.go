@@ -220,7 +220,7 @@ func Write(out string, s Set) error {
 	seen := map[string]bool{strings.ToLower(s.Name + ManifestExt): true}
 	for _, f := range s.Files {
 		if f.Name != filepath.Base(f.Name) || !filepath.IsLocal(f.Name) || seen[strings.ToLower(f.Name)] {
-			panic(fmt.Sprintf("gaugeline: file set %s: file name %q is not one of its own", s.Name, f.Name))
+			panic(fmt.Sprintf("fileset: set %s: file name %q is not one of its own", s.Name, f.Name))
 		}
 		seen[strings.ToLower(f.Name)] = true
 	}
@@ -272,7 +272,8 @@ func swapIn(stage, target string) error {
 		os.RemoveAll(stage) // now the old set
 		return nil
 	}
-	old := stage[:strings.LastIndex(stage, ".new-")] + ".old-" + stage[strings.LastIndex(stage, ".new-")+5:]
+	i := strings.LastIndex(stage, ".new-")
+	old := stage[:i] + ".old-" + stage[i+len(".new-"):]
 	if err := os.Rename(target, old); err != nil {
 		os.RemoveAll(stage)
 		return fmt.Errorf("cannot replace %s: %w", target, err)
