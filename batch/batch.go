@@ -21,7 +21,7 @@ import (
 	"sync"
 
 	"gaugeline/detail"
-	"gaugeline/detail/measured"
+	"gaugeline/detail/jobfile"
 	"gaugeline/dxfout"
 	"gaugeline/fileset"
 )
@@ -79,7 +79,7 @@ type Config struct {
 	MaxCandidates int
 	// LimitError words a search stopped at MaxCandidates as the job's
 	// error; nil: the *detail.SearchLimitError itself.
-	LimitError func(*detail.Job, *detail.SearchLimitError) error
+	LimitError func(*jobfile.Job, *detail.SearchLimitError) error
 }
 
 // maxListSize bounds a list file: 10,000 jobs take well under 1 MiB.
@@ -91,12 +91,12 @@ const maxListSize = 16 << 20
 func Inputs(arg string) ([]string, error) {
 	fi, err := os.Stat(arg)
 	if err != nil {
-		return nil, &detail.InputError{File: arg, Msg: "cannot read the jobs: " + errText(err)}
+		return nil, &jobfile.InputError{File: arg, Msg: "cannot read the jobs: " + errText(err)}
 	}
 	if fi.IsDir() {
 		entries, err := os.ReadDir(arg) // sorted by name
 		if err != nil {
-			return nil, &detail.InputError{File: arg, Msg: "cannot read the folder: " + errText(err)}
+			return nil, &jobfile.InputError{File: arg, Msg: "cannot read the folder: " + errText(err)}
 		}
 		var files []string
 		for _, e := range entries {
@@ -105,29 +105,29 @@ func Inputs(arg string) ([]string, error) {
 			}
 		}
 		if len(files) == 0 {
-			return nil, &detail.InputError{File: arg, Msg: "no *.yaml job in the folder",
+			return nil, &jobfile.InputError{File: arg, Msg: "no *.yaml job in the folder",
 				Hint: "batch reads the *.yaml files of the folder itself, not of its subfolders"}
 		}
 		return files, nil
 	}
 	if !fi.Mode().IsRegular() {
-		return nil, &detail.InputError{File: arg, Msg: "not a folder or a regular list file (" + fi.Mode().Type().String() + ")",
+		return nil, &jobfile.InputError{File: arg, Msg: "not a folder or a regular list file (" + fi.Mode().Type().String() + ")",
 			Hint: "batch reads a folder of jobs or a text file listing them"}
 	}
 	if ext := filepath.Ext(arg); ext == ".yaml" || ext == ".yml" {
 		return nil, &NotAListError{Path: arg}
 	}
-	f, err := measured.OpenRegular(arg) // never blocks on a FIFO swapped in after the Stat
+	f, err := fileset.OpenRegular(arg) // never blocks on a FIFO swapped in after the Stat
 	if err != nil {
-		return nil, &detail.InputError{File: arg, Msg: "cannot read the list: " + errText(err)}
+		return nil, &jobfile.InputError{File: arg, Msg: "cannot read the list: " + errText(err)}
 	}
 	defer f.Close()
 	data, err := io.ReadAll(io.LimitReader(f, maxListSize+1))
 	if err != nil {
-		return nil, &detail.InputError{File: arg, Msg: "cannot read the list: " + errText(err)}
+		return nil, &jobfile.InputError{File: arg, Msg: "cannot read the list: " + errText(err)}
 	}
 	if len(data) > maxListSize {
-		return nil, &detail.InputError{File: arg, Msg: fmt.Sprintf("the list is larger than %d MiB", maxListSize>>20),
+		return nil, &jobfile.InputError{File: arg, Msg: fmt.Sprintf("the list is larger than %d MiB", maxListSize>>20),
 			Hint: "a list holds one job path per line"}
 	}
 	base := filepath.Dir(arg)
@@ -144,7 +144,7 @@ func Inputs(arg string) ([]string, error) {
 			continue
 		}
 		if strings.ContainsRune(s, 0) {
-			return nil, &detail.InputError{File: arg, Line: line, Msg: "not a list of job paths (binary data)"}
+			return nil, &jobfile.InputError{File: arg, Line: line, Msg: "not a list of job paths (binary data)"}
 		}
 		if !filepath.IsAbs(s) {
 			s = filepath.Join(base, s)
@@ -152,10 +152,10 @@ func Inputs(arg string) ([]string, error) {
 		files = append(files, s)
 	}
 	if err := sc.Err(); err != nil {
-		return nil, &detail.InputError{File: arg, Msg: "cannot read the list: " + err.Error()}
+		return nil, &jobfile.InputError{File: arg, Msg: "cannot read the list: " + err.Error()}
 	}
 	if len(files) == 0 {
-		return nil, &detail.InputError{File: arg, Msg: "the list names no job",
+		return nil, &jobfile.InputError{File: arg, Msg: "the list names no job",
 			Hint: "a list holds one job path per line, relative to the list; '#' starts a comment"}
 	}
 	return files, nil
@@ -291,7 +291,7 @@ func runJob(cfg Config, gate *markGate, i int, path string) (row Row) {
 			gate.pass(i, path, "")
 		}
 	}()
-	job, err := detail.LoadJob(path)
+	job, err := jobfile.LoadJob(path)
 	mark := ""
 	if err == nil {
 		mark = job.Mark
@@ -335,7 +335,7 @@ func runJob(cfg Config, gate *markGate, i int, path string) (row Row) {
 // errorRow records err as the job's error, keeping file and mark.
 func errorRow(row Row, path string, err error) Row {
 	row.Verdict, row.Governing, row.Ratio, row.Bolts, row.Hint = VerdictError, "", math.NaN(), 0, ""
-	var ie *detail.InputError
+	var ie *jobfile.InputError
 	if errors.As(err, &ie) {
 		row.Message, row.Hint = ie.Error(), ie.Hint
 		return row
@@ -347,7 +347,7 @@ func errorRow(row Row, path string, err error) Row {
 // jobFiles checks (or proposes) the job, fills in its summary row and
 // returns the files to write: the JSON, then the sheet and CAM files of a
 // passing layout when asked.
-func jobFiles(cfg Config, job *detail.Job, row *Row) ([]dxfout.File, error) {
+func jobFiles(cfg Config, job *jobfile.Job, row *Row) ([]dxfout.File, error) {
 	var r *detail.Report
 	var data []byte
 	if cfg.Propose {
@@ -374,12 +374,12 @@ func jobFiles(cfg Config, job *detail.Job, row *Row) ([]dxfout.File, error) {
 		}
 		r = p.Report
 	} else {
-		d, err := job.Build()
+		d, err := detail.Build(job)
 		if err != nil {
 			return nil, err
 		}
 		if r, err = detail.Check(d); err != nil {
-			return nil, &detail.InputError{File: job.File, Msg: err.Error()}
+			return nil, &jobfile.InputError{File: job.File, Msg: err.Error()}
 		}
 		if data, err = r.JSON(); err != nil {
 			return nil, err

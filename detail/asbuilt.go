@@ -13,8 +13,10 @@ import (
 	"strings"
 	"text/tabwriter"
 
+	"gaugeline/detail/jobfile"
 	"gaugeline/detail/measured"
 	"gaugeline/engine"
+	"gaugeline/fileset"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
 )
@@ -187,7 +189,7 @@ type AsBuilt struct {
 	DesignReport *Report
 	Report       *Report // the as-built check
 	Measured     *measured.Set
-	Tolerance    Tolerance
+	Tolerance    jobfile.Tolerance
 	Gate         units.Length
 	Alignment    Alignment
 	Deviations   []Deviation // design holes in order, then extra holes
@@ -199,7 +201,7 @@ type AsBuilt struct {
 // field takes the job's (which defaults to common practice).
 type ReverifyOptions struct {
 	Align     AlignMode
-	Tolerance Tolerance
+	Tolerance jobfile.Tolerance
 	Part      MeasuredPart // the part the measured file is of (default the member)
 }
 
@@ -209,10 +211,10 @@ var ErrNoPlate = errors.New("the job has no plate: a measured plate needs the jo
 // LoadMeasured reads a measured CSV or DXF (by its extension, or its
 // content when the extension says neither), in the job's units unless the
 // file says otherwise. Every error is an *InputError.
-func LoadMeasured(path string, job *Job, layer string) (*measured.Set, error) {
-	f, err := measured.OpenRegular(path)
+func LoadMeasured(path string, job *jobfile.Job, layer string) (*measured.Set, error) {
+	f, err := fileset.OpenRegular(path)
 	if err != nil {
-		return nil, &InputError{File: path, Field: "--measured", Msg: "cannot read the measured file: " + pathErrText(err), Hint: notRegularHint(err)}
+		return nil, &jobfile.InputError{File: path, Field: "--measured", Msg: "cannot read the measured file: " + fileset.ErrText(err), Hint: fileset.NotRegularHint(err)}
 	}
 	defer f.Close()
 	def := measured.Inches
@@ -225,19 +227,19 @@ func LoadMeasured(path string, job *Job, layer string) (*measured.Set, error) {
 		set, err = measured.ReadDXF(f, path, def, layer)
 	case ".csv", ".txt":
 		if layer != "" {
-			return nil, &InputError{File: path, Field: "--layer", Msg: "--layer is for DXF files", Hint: "a CSV lists the holes themselves"}
+			return nil, &jobfile.InputError{File: path, Field: "--layer", Msg: "--layer is for DXF files", Hint: "a CSV lists the holes themselves"}
 		}
 		set, err = measured.ReadCSV(f, path, def)
 	default:
-		return nil, &InputError{File: path, Field: "--measured", Msg: fmt.Sprintf("unknown measured file type %q", ext),
+		return nil, &jobfile.InputError{File: path, Field: "--measured", Msg: fmt.Sprintf("unknown measured file type %q", ext),
 			Hint: "measured holes come as .csv (x,y,diameter[,id]) or .dxf"}
 	}
 	if err != nil {
 		var me *measured.Error
 		if errors.As(err, &me) {
-			return nil, &InputError{File: me.File, Line: me.Line, Field: me.Field, Msg: me.Msg, Hint: me.Hint}
+			return nil, &jobfile.InputError{File: me.File, Line: me.Line, Field: me.Field, Msg: me.Msg, Hint: me.Hint}
 		}
-		return nil, &InputError{File: path, Msg: err.Error()}
+		return nil, &jobfile.InputError{File: path, Msg: err.Error()}
 	}
 	return set, nil
 }
@@ -326,7 +328,7 @@ func Reverify(d *Design, set *measured.Set, opt ReverifyOptions) (*AsBuilt, erro
 // still be that hole: the bolt diameter, or half the least design spacing
 // when that is less, but never under twice the position tolerance. A hole
 // beyond it is an extra hole (and the design hole missing).
-func matchGate(c *engine.Connection, tol Tolerance) units.Length {
+func matchGate(c *engine.Connection, tol jobfile.Tolerance) units.Length {
 	g := c.Bolt.D
 	for i := range c.Holes {
 		for j := i + 1; j < len(c.Holes); j++ {

@@ -10,6 +10,7 @@ import (
 	"strings"
 	"testing"
 
+	"gaugeline/detail/jobfile"
 	"gaugeline/detail/measured"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
@@ -19,11 +20,11 @@ const measuredDir = "../testdata/measured"
 
 func buildJob(t *testing.T, path string) *Design {
 	t.Helper()
-	j, err := LoadJob(path)
+	j, err := jobfile.LoadJob(path)
 	if err != nil {
 		t.Fatal(err)
 	}
-	d, err := j.Build()
+	d, err := Build(j)
 	if err != nil {
 		t.Fatal(err)
 	}

@@ -7,11 +7,16 @@ import (
 	"strconv"
 	"strings"
 
+	"gaugeline/detail/jobfile"
 	"gaugeline/detail/section"
 	"gaugeline/engine"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
 )
+
+// job is a job file seen by the model builder: the steps below are its
+// methods, with the job's fields at hand.
+type job struct{ *jobfile.Job }
 
 // Build resolves the job into the engine's model: the section from the
 // catalog (or explicit dimensions and overrides), the grades and hole sizes
@@ -20,7 +25,8 @@ import (
 // a hole outside the member or the plate, a bolt too big for the leg, two
 // holes at one centre — is an *InputError naming the field; a layout that
 // can be made but breaks a detailing rule is not (the checks report it).
-func (j *Job) Build() (*Design, error) {
+func Build(jf *jobfile.Job) (*Design, error) {
+	j := job{jf}
 	ed, err := j.edition()
 	if err != nil {
 		return nil, err
@@ -59,10 +65,10 @@ func (j *Job) Build() (*Design, error) {
 // Check (report.go) then checks whatever the steps made.
 
 // edition resolves the job's standard and checks its stock against it.
-func (j *Job) edition() (*rules.Edition, error) {
+func (j job) edition() (*rules.Edition, error) {
 	ed, err := rules.Lookup(j.Standard, j.Units)
 	if err != nil {
-		return nil, j.inputErr("standard", err.Error(), "known standards: "+strings.Join(rules.Names(), ", "))
+		return nil, j.FieldError("standard", err.Error(), "known standards: "+strings.Join(rules.Names(), ", "))
 	}
 	if err := j.CheckStock(ed); err != nil {
 		return nil, err
@@ -71,15 +77,15 @@ func (j *Job) edition() (*rules.Edition, error) {
 }
 
 // newDesign is an empty design of the job under edition ed.
-func (j *Job) newDesign(ed *rules.Edition) *Design {
-	d := &Design{Job: j}
+func (j job) newDesign(ed *rules.Edition) *Design {
+	d := &Design{Job: j.Job}
 	d.Conn.Edition, d.Conn.Method = ed, j.Method
 	return d
 }
 
 // setDemand puts the job's demand into the model: as required, or the
 // governing combination of the service loads.
-func (j *Job) setDemand(d *Design) {
+func (j job) setDemand(d *Design) {
 	if j.Load.Combined() {
 		d.Conn.Demand, d.Combination = engine.Combine(j.Method, j.Load.Service)
 	} else {
@@ -89,17 +95,17 @@ func (j *Job) setDemand(d *Design) {
 
 // CheckStock checks the propose stock against the edition: every grade and
 // diameter must be tabulated. A job without a stock block passes.
-func (j *Job) CheckStock(ed *rules.Edition) error {
+func (j job) CheckStock(ed *rules.Edition) error {
 	for i, g := range j.Stock.Grades {
 		if _, err := ed.Bolt(g); err != nil {
 			path := fmt.Sprintf("stock.grades[%d]", i)
-			return j.inputErr(path, fmt.Sprintf("unknown bolt grade %q in %s", g, ed), "known grades: "+strings.Join(ed.BoltGrades(), ", "))
+			return j.FieldError(path, fmt.Sprintf("unknown bolt grade %q in %s", g, ed), "known grades: "+strings.Join(ed.BoltGrades(), ", "))
 		}
 	}
 	for i, dia := range j.Stock.Diameters {
 		if _, err := ed.Hole(dia, j.Bolts.Hole); err != nil {
 			path := fmt.Sprintf("stock.diameters[%d]", i)
-			return j.inputErr(path, tabulatedMsg(err), diametersHint(ed))
+			return j.FieldError(path, tabulatedMsg(err), diametersHint(ed))
 		}
 	}
 	return nil
@@ -130,7 +136,7 @@ func boltName(d units.Length, sys units.System) string {
 }
 
 // steel resolves a catalog grade or explicit Fy/Fu of the block at path.
-func (j *Job) steel(ed *rules.Edition, s SteelSpec, path string) (rules.Steel, error) {
+func (j job) steel(ed *rules.Edition, s jobfile.SteelSpec, path string) (rules.Steel, error) {
 	if s.Grade == "" {
 		lab := j.Units.Label(units.DimStress)
 		name := fmt.Sprintf("Fy %g/Fu %g %s", j.Units.ToJob(float64(s.Fy), units.DimStress), j.Units.ToJob(float64(s.Fu), units.DimStress), lab)
@@ -138,7 +144,7 @@ func (j *Job) steel(ed *rules.Edition, s SteelSpec, path string) (rules.Steel, e
 	}
 	st, err := ed.Steel(s.Grade)
 	if err != nil {
-		return st, j.inputErr(path+".grade", fmt.Sprintf("unknown steel grade %q", s.Grade),
+		return st, j.FieldError(path+".grade", fmt.Sprintf("unknown steel grade %q", s.Grade),
 			"known grades: "+strings.Join(ed.SteelGrades(), ", ")+"; or give fy and fu")
 	}
 	return st, nil
@@ -182,7 +188,7 @@ func swapName(name string) string {
 
 // buildMember resolves the member section and steel into d.Conn.Member
 // and d.Info.
-func (j *Job) buildMember(ed *rules.Edition, d *Design) error {
+func (j job) buildMember(ed *rules.Edition, d *Design) error {
 	m := j.Member
 	mem := &d.Conn.Member
 	info := &d.Info
@@ -219,13 +225,13 @@ func (j *Job) buildMember(ed *rules.Edition, d *Design) error {
 				} else {
 					msg = strings.TrimPrefix(msg, "section: ")
 				}
-				return j.inputErr("member.size", msg, hint)
+				return j.FieldError("member.size", msg, hint)
 			}
 			info.K = a.K
 		} else {
 			a, err = section.Custom(m.Legs[0], m.Legs[1], m.Thickness)
 			if err != nil {
-				return j.inputErr("member.legs", strings.TrimPrefix(err.Error(), "section: "), "")
+				return j.FieldError("member.legs", strings.TrimPrefix(err.Error(), "section: "), "")
 			}
 			info.Designation = "L" + compact(m.Legs[0], j.Units) + "x" + compact(m.Legs[1], j.Units) + "x" + compact(m.Thickness, j.Units)
 			info.K = a.T
@@ -270,7 +276,7 @@ func (j *Job) buildMember(ed *rules.Edition, d *Design) error {
 // of one angle) that no angle of a's legs and thickness can have, whatever
 // its radii (section.Bounds): a typo, the wrong unit or the pair's value.
 // An area below the angle's own is allowed down to half of it.
-func (j *Job) checkOverrides(a section.Angle, name string) error {
+func (j job) checkOverrides(a section.Angle, name string) error {
 	m, b := j.Member, a.Bounds()
 	// three significant figures, whole numbers from 100 on
 	num := func(v float64, d units.Dim) string {
@@ -288,22 +294,22 @@ func (j *Job) checkOverrides(a section.Angle, name string) error {
 	plain := a.A.Mul(t) + (a.B - t).Mul(t) // the two rectangles
 	switch {
 	case m.Area > b.AreaMax:
-		return j.inputErr("member.area", fmt.Sprintf("%s is more than one %s can have: its legs make %s, and with the largest root fillet it is at most %s",
+		return j.FieldError("member.area", fmt.Sprintf("%s is more than one %s can have: its legs make %s, and with the largest root fillet it is at most %s",
 			j.Raw["member.area"], name, area(plain), area(b.AreaMax)),
 			"the area is of one angle, also in a pair; leave it out to have it computed")
 	case m.Area > 0 && m.Area < plain/2:
 		// Less than the angle's own area is a section loss the engineer
 		// may model (an existing, corroded member); under half the legs'
 		// area it is taken for the wrong unit.
-		return j.inputErr("member.area", fmt.Sprintf("%s is under half the area of one %s: its legs make %s",
+		return j.FieldError("member.area", fmt.Sprintf("%s is under half the area of one %s: its legs make %s",
 			j.Raw["member.area"], name, area(plain)),
 			"the area is of one angle, also in a pair; check the unit, or leave it out to have it computed")
 	case outside(float64(m.Xbar), float64(b.XbarMin), float64(b.XbarMax)):
-		return j.inputErr("member.xbar", fmt.Sprintf("%s is not the x̄ of an %s: it lies between %s (half the thickness) and %s (half the outstanding leg)",
+		return j.FieldError("member.xbar", fmt.Sprintf("%s is not the x̄ of an %s: it lies between %s (half the thickness) and %s (half the outstanding leg)",
 			j.Raw["member.xbar"], name, length(t/2), length(a.B/2)),
 			"x̄ is of one angle, from the back of the connected leg to the centroid; leave it out to have it computed")
 	case outside(float64(m.Rmin), float64(b.RminMin), float64(b.RminMax)):
-		return j.inputErr("member.rmin", fmt.Sprintf("%s is not the least radius of gyration of an %s: it lies between %s (t/√12) and %s (half the shorter leg)",
+		return j.FieldError("member.rmin", fmt.Sprintf("%s is not the least radius of gyration of an %s: it lies between %s (t/√12) and %s (half the shorter leg)",
 			j.Raw["member.rmin"], name, length(units.Length(float64(t)/math.Sqrt(12))), length(leg/2)),
 			"rmin is of one angle (rz), also in a pair; leave it out to have it computed")
 	}
@@ -313,7 +319,7 @@ func (j *Job) checkOverrides(a section.Angle, name string) error {
 // positionTolerance is the job's tolerance.position, or where a job was
 // not read from a file the common-practice default, ±1/16 in (2 mm)
 // (common practice, no source; REFERENCE.md, fabrication).
-func (j *Job) positionTolerance() units.Length {
+func (j job) positionTolerance() units.Length {
 	switch {
 	case j.Tolerance.Position > 0:
 		return j.Tolerance.Position
@@ -325,7 +331,7 @@ func (j *Job) positionTolerance() units.Length {
 
 // gap is the space between double angles: as given, else the plate's
 // thickness, else 3/8 in (10 mm) (common practice, no source).
-func (j *Job) gap() units.Length {
+func (j job) gap() units.Length {
 	switch {
 	case j.Member.Gap > 0:
 		return j.Member.Gap
@@ -337,22 +343,22 @@ func (j *Job) gap() units.Length {
 	return units.Inch * 3 / 8
 }
 
-func (j *Job) buildBolt(ed *rules.Edition, c *engine.Connection) error {
+func (j job) buildBolt(ed *rules.Edition, c *engine.Connection) error {
 	b := j.Bolts
 	if b.Diameter == 0 {
-		return j.inputErr("bolts.diameter", "is required", `diameter: 3/4 in (us) or M20 (si)`)
+		return j.FieldError("bolts.diameter", "is required", `diameter: 3/4 in (us) or M20 (si)`)
 	}
 	if b.Grade == "" {
-		return j.inputErr("bolts.grade", "is required", "known grades: "+strings.Join(ed.BoltGrades(), ", "))
+		return j.FieldError("bolts.grade", "is required", "known grades: "+strings.Join(ed.BoltGrades(), ", "))
 	}
 	g, err := ed.Bolt(b.Grade)
 	if err != nil {
-		return j.inputErr("bolts.grade", fmt.Sprintf("unknown bolt grade %q in %s", b.Grade, ed), "known grades: "+strings.Join(ed.BoltGrades(), ", "))
+		return j.FieldError("bolts.grade", fmt.Sprintf("unknown bolt grade %q in %s", b.Grade, ed), "known grades: "+strings.Join(ed.BoltGrades(), ", "))
 	}
 	if b.Joint != rules.Bearing {
 		// pretensioned and slip-critical joints need a tabulated pretension
 		if _, err := ed.Pretension(g, b.Diameter); err != nil {
-			return j.inputErr("bolts.grade", fmt.Sprintf("%s bolts cannot be used in a %s joint: %v", g.Name, b.Joint, err),
+			return j.FieldError("bolts.grade", fmt.Sprintf("%s bolts cannot be used in a %s joint: %v", g.Name, b.Joint, err),
 				"use a high-strength grade (Group A or B) or a bearing joint")
 		}
 	}
@@ -392,7 +398,7 @@ func plyShape(ed *rules.Edition, d units.Length, t rules.HoleType, dir rules.Slo
 // plyShapes returns the member's and the plate's hole shape for bolt
 // diameter d; the plate's is nil when it is the member's (or there is no
 // plate).
-func (j *Job) plyShapes(ed *rules.Edition, d units.Length) (engine.HoleShape, *engine.HoleShape, error) {
+func (j job) plyShapes(ed *rules.Edition, d units.Length) (engine.HoleShape, *engine.HoleShape, error) {
 	mt, mdir := j.MemberHole()
 	ms, err := plyShape(ed, d, mt, mdir)
 	if err != nil || j.Plate == nil {
@@ -409,11 +415,11 @@ func (j *Job) plyShapes(ed *rules.Edition, d units.Length) (engine.HoleShape, *e
 // eps is the geometric tolerance of the fit checks, in mm.
 const eps = 1e-6
 
-func (j *Job) buildHoles(ed *rules.Edition, d *Design) error {
+func (j job) buildHoles(ed *rules.Edition, d *Design) error {
 	b := j.Bolts
 	shape, plate, err := j.plyShapes(ed, b.Diameter)
 	if err != nil {
-		return j.inputErr("bolts.diameter", tabulatedMsg(err), diametersHint(ed))
+		return j.FieldError("bolts.diameter", tabulatedMsg(err), diametersHint(ed))
 	}
 	dx, dy := shape.Dx, shape.Dy
 	m := &d.Conn.Member
@@ -427,7 +433,7 @@ func (j *Job) buildHoles(ed *rules.Edition, d *Design) error {
 		if part == "flat" {
 			clear = " wide"
 		}
-		return j.inputErr("bolts.diameter", fmt.Sprintf("the hole of a %s bolt (%s across) does not fit the %s (%s%s)",
+		return j.FieldError("bolts.diameter", fmt.Sprintf("the hole of a %s bolt (%s across) does not fit the %s (%s%s)",
 			boltName(b.Diameter, j.Units), units.FormatJob(dy, j.Units), part, units.FormatJob(room, j.Units), clear),
 			"use a smaller bolt or a wider "+part)
 	}
@@ -470,35 +476,35 @@ func (j *Job) buildHoles(ed *rules.Edition, d *Design) error {
 	xField, yField := fields(f.hole)
 	switch f.how {
 	case fitPastEnd:
-		return j.inputErr(xField, fmt.Sprintf("hole %s at x = %s runs past the member end", h.ID, units.FormatJob(h.X, j.Units)),
+		return j.FieldError(xField, fmt.Sprintf("hole %s at x = %s runs past the member end", h.ID, units.FormatJob(h.X, j.Units)),
 			"the hole's edge must be inside the member: x ≥ "+units.FormatJob(dx/2, j.Units))
 	case fitOffLow:
-		return j.inputErr(yField, fmt.Sprintf("hole %s at y = %s runs off the %s", h.ID, units.FormatJob(h.Y, j.Units), part),
+		return j.FieldError(yField, fmt.Sprintf("hole %s at y = %s runs off the %s", h.ID, units.FormatJob(h.Y, j.Units), part),
 			"y is measured from the heel (angles) or one edge (flats)")
 	case fitOffHigh:
-		return j.inputErr(yField, fmt.Sprintf("hole %s at y = %s runs off the %s, which is %s wide",
+		return j.FieldError(yField, fmt.Sprintf("hole %s at y = %s runs off the %s, which is %s wide",
 			h.ID, units.FormatJob(h.Y, j.Units), part, units.FormatJob(w, j.Units)),
 			"y is measured from the heel (angles) or one edge (flats)")
 	}
-	return j.inputErr(xField, fmt.Sprintf("hole %s has the same centre as %s", h.ID, d.Conn.Holes[f.other].ID), "")
+	return j.FieldError(xField, fmt.Sprintf("hole %s has the same centre as %s", h.ID, d.Conn.Holes[f.other].ID), "")
 }
 
 // checkPattern refuses a bolts block that does not lay out a pattern.
-func (j *Job) checkPattern() error {
+func (j job) checkPattern() error {
 	b := j.Bolts
 	switch {
 	case b.PerLine == 0:
-		return j.inputErr("bolts.per_line", "is required", "per_line: the number of bolts in each gage line")
+		return j.FieldError("bolts.per_line", "is required", "per_line: the number of bolts in each gage line")
 	case b.PerLine > 1 && b.Pitch == 0:
-		return j.inputErr("bolts.pitch", "is required with more than one bolt per line", "pitch: 3 in")
+		return j.FieldError("bolts.pitch", "is required with more than one bolt per line", "pitch: 3 in")
 	case b.End == 0:
-		return j.inputErr("bolts.end", "is required", "end: the first bolt to the member's end, e.g. 1-1/2 in")
+		return j.FieldError("bolts.end", "is required", "end: the first bolt to the member's end, e.g. 1-1/2 in")
 	case b.Gage == 0:
-		return j.inputErr("bolts.gage", "is required", "gage: the first gage line from the heel or edge, e.g. 2-1/2 in")
+		return j.FieldError("bolts.gage", "is required", "gage: the first gage line from the heel or edge, e.g. 2-1/2 in")
 	case b.Lines > 1 && b.Gage2 == 0:
-		return j.inputErr("bolts.gage2", "is required with more than one gage line", "gage2: spacing between gage lines")
-	case b.Lines*b.PerLine > maxHoles:
-		return j.inputErr("bolts.per_line", fmt.Sprintf("%d lines of %d make too many bolts (at most %d)", b.Lines, b.PerLine, maxHoles), "")
+		return j.FieldError("bolts.gage2", "is required with more than one gage line", "gage2: spacing between gage lines")
+	case b.Lines*b.PerLine > jobfile.MaxHoles:
+		return j.FieldError("bolts.per_line", fmt.Sprintf("%d lines of %d make too many bolts (at most %d)", b.Lines, b.PerLine, jobfile.MaxHoles), "")
 	}
 	return nil
 }
@@ -512,7 +518,7 @@ type pattern struct {
 }
 
 // pattern is the bolts block's pattern.
-func (j *Job) pattern() pattern {
+func (j job) pattern() pattern {
 	b := j.Bolts
 	return pattern{lines: b.Lines, perLine: b.PerLine, pitch: b.Pitch, end: b.End, gage: b.Gage, gage2: b.Gage2, stagger: b.Stagger}
 }
@@ -593,7 +599,7 @@ func (d *Design) placeHoles(holes []engine.Hole, shape engine.HoleShape, plate *
 }
 
 var holeIDs = func() []string {
-	ids := make([]string, maxHoles)
+	ids := make([]string, jobfile.MaxHoles)
 	for i := range ids {
 		ids[i] = fmt.Sprintf("H%d", i+1)
 	}
@@ -608,22 +614,22 @@ func holeID(i int) string {
 	return fmt.Sprintf("H%d", i+1)
 }
 
-func (j *Job) buildPlate(ed *rules.Edition, d *Design) error {
+func (j job) buildPlate(ed *rules.Edition, d *Design) error {
 	ps := j.Plate
 	if ps == nil {
 		return nil
 	}
 	if ps.AutoThickness {
-		return j.inputErr("plate.thickness", "auto is for propose", "give the plate thickness to check, or run gaugeline propose")
+		return j.FieldError("plate.thickness", "auto is for propose", "give the plate thickness to check, or run gaugeline propose")
 	}
 	if ps.Edge == 0 {
-		return j.inputErr("plate.edge", "is required", "edge: the last bolt to the plate's free edge, e.g. 1-1/2 in")
+		return j.FieldError("plate.edge", "is required", "edge: the last bolt to the plate's free edge, e.g. 1-1/2 in")
 	}
 	if err := j.plateParts(ed, d); err != nil {
 		return err
 	}
 	if i := d.placePlate(ps.Edge); i >= 0 {
-		return j.inputErr("plate.width", fmt.Sprintf("hole %s runs off the plate: the plate is %s wide", d.Conn.Holes[i].ID, units.FormatJob(ps.Width, j.Units)),
+		return j.FieldError("plate.width", fmt.Sprintf("hole %s runs off the plate: the plate is %s wide", d.Conn.Holes[i].ID, units.FormatJob(ps.Width, j.Units)),
 			"the plate must be wider than the bolt group plus the hole")
 	}
 	return nil
@@ -631,7 +637,7 @@ func (j *Job) buildPlate(ed *rules.Edition, d *Design) error {
 
 // plateParts puts the job's plate into the model, all but where it lies
 // (placePlate): its kind, thickness, width and steel.
-func (j *Job) plateParts(ed *rules.Edition, d *Design) error {
+func (j job) plateParts(ed *rules.Edition, d *Design) error {
 	ps := j.Plate
 	st, err := j.steel(ed, ps.Steel, "plate")
 	if err != nil {

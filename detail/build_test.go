@@ -9,26 +9,27 @@ import (
 	"strings"
 	"testing"
 
+	"gaugeline/detail/jobfile"
 	"gaugeline/detail/section"
 	"gaugeline/engine"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
 )
 
-func mustBuild(t *testing.T, j *Job) *Design {
+func mustBuild(t *testing.T, j *jobfile.Job) *Design {
 	t.Helper()
-	d, err := j.Build()
+	d, err := Build(j)
 	if err != nil {
 		t.Fatalf("Build: %v", err)
 	}
 	return d
 }
 
-func buildErr(t *testing.T, src string) *InputError {
+func buildErr(t *testing.T, src string) *jobfile.InputError {
 	t.Helper()
 	j := mustParse(t, src)
-	_, err := j.Build()
-	var ie *InputError
+	_, err := Build(j)
+	var ie *jobfile.InputError
 	if !errors.As(err, &ie) {
 		t.Fatalf("Build: %v (%T), want an *InputError", err, err)
 	}
@@ -179,7 +180,7 @@ func TestBuildSwappedSize(t *testing.T) {
 }
 
 func TestBuildSIDoubleAngle(t *testing.T) {
-	j, err := LoadJob(filepath.Join("..", "testdata", "jobs", "si-double-angle.yaml"))
+	j, err := jobfile.LoadJob(filepath.Join("..", "testdata", "jobs", "si-double-angle.yaml"))
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -244,7 +245,7 @@ func TestBuildDoubleAngleGapAndOverrides(t *testing.T) {
 }
 
 func TestBuildUSStaggeredFlat(t *testing.T) {
-	j, err := LoadJob(filepath.Join("..", "testdata", "jobs", "us-staggered-flat.yaml"))
+	j, err := jobfile.LoadJob(filepath.Join("..", "testdata", "jobs", "us-staggered-flat.yaml"))
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -283,7 +284,7 @@ func TestBuildUSStaggeredFlat(t *testing.T) {
 }
 
 func TestBuildSISlotted(t *testing.T) {
-	j, err := LoadJob(filepath.Join("..", "testdata", "jobs", "si-slotted.yaml"))
+	j, err := jobfile.LoadJob(filepath.Join("..", "testdata", "jobs", "si-slotted.yaml"))
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -423,11 +424,11 @@ func TestBuildGoodJobs(t *testing.T) {
 	}
 	for _, f := range files {
 		t.Run(filepath.Base(f), func(t *testing.T) {
-			j, err := LoadJob(f)
+			j, err := jobfile.LoadJob(f)
 			if err != nil {
 				t.Fatal(err)
 			}
-			d, err := j.Build()
+			d, err := Build(j)
 			if err != nil {
 				t.Fatal(err)
 			}
@@ -500,11 +501,11 @@ func TestBuildBadJobs(t *testing.T) {
 		listed[c.file] = true
 		t.Run(c.file, func(t *testing.T) {
 			path := filepath.Join(dir, c.file)
-			j, err := LoadJob(path)
+			j, err := jobfile.LoadJob(path)
 			if err == nil {
-				_, err = j.Build()
+				_, err = Build(j)
 			}
-			var ie *InputError
+			var ie *jobfile.InputError
 			if !errors.As(err, &ie) {
 				t.Fatalf("got %v (%T), want an *InputError", err, err)
 			}
@@ -644,11 +645,11 @@ func TestLengthFieldsNameThemselves(t *testing.T) {
 		for _, v := range values {
 			t.Run(f.path+"="+v, func(t *testing.T) {
 				src := setLine(lengthJob, f.line, v+unit)
-				j, err := ParseJob("len.yaml", []byte(src))
+				j, err := jobfile.ParseJob("len.yaml", []byte(src))
 				if err == nil {
-					_, err = j.Build()
+					_, err = Build(j)
 				}
-				var ie *InputError
+				var ie *jobfile.InputError
 				if !errors.As(err, &ie) {
 					t.Fatalf("got %v, want an *InputError at %s", err, f.path)
 				}
@@ -701,11 +702,11 @@ bolts: {diameter: 3/4 in, grade: A325, per_line: 2, pitch: 3 in, end: 1-1/2 in, 
 			t.Run(c.path+"="+v, func(t *testing.T) {
 				to := strings.NewReplacer("[4 in", "["+v, "3 in]", v+"]", "1/2 in", v, "6 in", v, "[4.5 in", "["+v).Replace(c.from)
 				src := strings.Replace(c.src, c.from, to, 1)
-				j, err := ParseJob("dim.yaml", []byte(src))
+				j, err := jobfile.ParseJob("dim.yaml", []byte(src))
 				if err == nil {
-					_, err = j.Build()
+					_, err = Build(j)
 				}
-				var ie *InputError
+				var ie *jobfile.InputError
 				if !errors.As(err, &ie) {
 					t.Fatalf("got %v, want an *InputError at %s", err, c.path)
 				}
@@ -803,11 +804,11 @@ func TestBuildOverridesNeverRefuseACatalogAngle(t *testing.T) {
 				for _, k := range []float64{0.995, 1.005} {
 					for _, shape := range []string{"angle", "double-angle"} {
 						src := overrideJob(sys, shape, size, c, p, k)
-						j, err := ParseJob("catalog.yaml", []byte(src))
+						j, err := jobfile.ParseJob("catalog.yaml", []byte(src))
 						if err != nil {
 							t.Fatalf("%s: %v\n%s", size, err, src)
 						}
-						if _, err := j.Build(); err != nil {
+						if _, err := Build(j); err != nil {
 							t.Errorf("%s %s ×%g: %v", shape, size, k, err)
 						}
 						n++

@@ -2,6 +2,7 @@ package detail
 
 import (
 	"bytes"
+	"gaugeline/detail/jobfile"
 	"path/filepath"
 	"reflect"
 	"slices"
@@ -19,7 +20,7 @@ func TestProposeModelIsBuilds(t *testing.T) {
 	files = append(files, more...)
 	compared := 0
 	for _, f := range files {
-		j, err := LoadJob(f)
+		j, err := jobfile.LoadJob(f)
 		if err != nil {
 			continue
 		}
@@ -36,11 +37,11 @@ func TestProposeModelIsBuilds(t *testing.T) {
 		if !ok {
 			t.Fatalf("%s: the chosen candidate does not build", f)
 		}
-		data, err := j.WithLayout(p.layout(tops[0]))
+		data, err := WriteJob(j, p.layout(tops[0]))
 		if err != nil {
 			t.Fatal(err)
 		}
-		lj, err := ParseJob(f, data)
+		lj, err := jobfile.ParseJob(f, data)
 		if err != nil {
 			t.Fatal(err)
 		}

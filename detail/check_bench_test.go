@@ -1,6 +1,7 @@
 package detail
 
 import (
+	"gaugeline/detail/jobfile"
 	"path/filepath"
 	"testing"
 )
@@ -9,11 +10,11 @@ import (
 // rule) of a built design: a single angle and a two-line staggered flat.
 func BenchmarkCheck(b *testing.B) {
 	for _, job := range []string{"us-single-angle.yaml", "us-staggered-flat.yaml"} {
-		j, err := LoadJob(filepath.Join("..", "testdata", "jobs", job))
+		j, err := jobfile.LoadJob(filepath.Join("..", "testdata", "jobs", job))
 		if err != nil {
 			b.Fatal(err)
 		}
-		d, err := j.Build()
+		d, err := Build(j)
 		if err != nil {
 			b.Fatal(err)
 		}

@@ -9,6 +9,7 @@ import (
 	"strings"
 	"testing"
 
+	"gaugeline/detail/jobfile"
 	"gaugeline/engine"
 	"gaugeline/rules/units"
 )
@@ -221,7 +222,7 @@ func TestReverifyEccentricityUsesTheTolerance(t *testing.T) {
 		pos  units.Length
 		pass bool
 	}{{0, false}, {units.Inch / 8, true}} {
-		ab, err := Reverify(d, set, ReverifyOptions{Align: AlignDatum, Tolerance: Tolerance{Position: c.pos}})
+		ab, err := Reverify(d, set, ReverifyOptions{Align: AlignDatum, Tolerance: jobfile.Tolerance{Position: c.pos}})
 		if err != nil {
 			t.Fatal(err)
 		}

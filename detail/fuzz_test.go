@@ -2,6 +2,7 @@ package detail
 
 import (
 	"errors"
+	"gaugeline/detail/jobfile"
 	"math"
 	"os"
 	"path/filepath"
@@ -33,13 +34,13 @@ func FuzzParseJob(f *testing.F) {
 		f.Add(b)
 	}
 	f.Fuzz(func(t *testing.T, data []byte) {
-		j, err := ParseJob("fuzz.yaml", data)
+		j, err := jobfile.ParseJob("fuzz.yaml", data)
 		if err != nil {
 			checkInputError(t, "ParseJob", err)
 			return
 		}
 		checkFinite(t, "job", reflect.ValueOf(j))
-		d, err := j.Build()
+		d, err := Build(j)
 		if err != nil {
 			checkInputError(t, "Build", err)
 			return
@@ -51,7 +52,7 @@ func FuzzParseJob(f *testing.F) {
 
 func checkInputError(t *testing.T, fn string, err error) {
 	t.Helper()
-	var ie *InputError
+	var ie *jobfile.InputError
 	if !errors.As(err, &ie) || ie.File != "fuzz.yaml" || ie.Msg == "" {
 		t.Fatalf("%s: %v (%T) is not an *InputError naming the file", fn, err, err)
 	}

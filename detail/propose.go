@@ -9,10 +9,12 @@ import (
 	"math"
 	"runtime"
 	"slices"
+	"strconv"
 	"strings"
 	"sync"
 	"text/tabwriter"
 
+	"gaugeline/detail/jobfile"
 	"gaugeline/engine"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
@@ -168,7 +170,7 @@ type Blocker struct {
 
 // Proposal is the outcome of Propose.
 type Proposal struct {
-	Job    *Job
+	Job    *jobfile.Job
 	Layout Layout
 	// Report is the check of the chosen layout (nil when nothing passes),
 	// built from LayoutJob exactly as `gaugeline check` builds it.
@@ -198,7 +200,7 @@ func (p *Proposal) Found() bool { return p.Report != nil }
 // *InputError, a search larger than opt.MaxCandidates a
 // *SearchLimitError; a job where nothing passes is a Proposal with
 // Blockers.
-func Propose(j *Job, opt ProposeOptions) (*Proposal, error) {
+func Propose(j *jobfile.Job, opt ProposeOptions) (*Proposal, error) {
 	p, err := newProblem(j)
 	if err != nil {
 		return nil, err
@@ -243,7 +245,7 @@ func Propose(j *Job, opt ProposeOptions) (*Proposal, error) {
 		out.Evaluated = p.evals
 		if len(tops) > 0 && nAlt > 0 {
 			tops = p.bestPerGroup(p.obj, k)
-			if o := p.bestPerGroup(p.obj.other(), 1); len(o) > 0 {
+			if o := p.bestPerGroup(p.obj.Other(), 1); len(o) > 0 {
 				other = o[0]
 			}
 			out.AltEvaluated = p.evals - out.Evaluated
@@ -267,16 +269,16 @@ func Propose(j *Job, opt ProposeOptions) (*Proposal, error) {
 	if nAlt > 0 {
 		out.Alternatives = p.alternatives(tops, other, nAlt)
 	}
-	data, err := j.WithLayout(out.Layout)
+	data, err := WriteJob(j, out.Layout)
 	if err != nil {
 		return nil, err
 	}
-	lj, err := ParseJob(j.File, data)
+	lj, err := jobfile.ParseJob(j.File, data)
 	if err != nil {
 		return nil, fmt.Errorf("detail: propose wrote a job it cannot read: %w", err)
 	}
 	lj.Stamp = j.Stamp // the layout's files belong to the run that proposed it
-	d, err := lj.Build()
+	d, err := Build(lj)
 	if err != nil {
 		return nil, fmt.Errorf("detail: propose wrote a job that does not build: %w", err)
 	}
@@ -301,22 +303,14 @@ func firstN(cs []*cand, n int) []*cand {
 	return cs
 }
 
-// other is the other objective.
-func (o Objective) other() Objective {
-	if o == FewestBolts {
-		return ShortestLength
-	}
-	return FewestBolts
-}
-
 // ---------------------------------------------------------------------
 // The problem: groups and their ranges.
 
 type problem struct {
-	job    *Job
+	job    *jobfile.Job
 	ed     *rules.Edition
 	step   units.Length
-	obj    Objective
+	obj    jobfile.Objective
 	groups []*group
 
 	diams  []option[units.Length]
@@ -364,13 +358,13 @@ type option[T any] struct {
 	text string // as written in the job
 }
 
-func newProblem(j *Job) (*problem, error) {
-	ed, err := j.edition()
+func newProblem(j *jobfile.Job) (*problem, error) {
+	ed, err := job{j}.edition()
 	if err != nil {
 		return nil, err
 	}
 	if j.Holes != nil {
-		return nil, j.inputErr("holes", "propose lays out the bolts itself; explicit holes leave nothing to choose",
+		return nil, j.FieldError("holes", "propose lays out the bolts itself; explicit holes leave nothing to choose",
 			"remove the holes list, or run gaugeline check")
 	}
 	p := &problem{job: j, ed: ed, step: j.Stock.Step, obj: j.Stock.Objective, snapped: map[int]units.Length{},
@@ -385,20 +379,20 @@ func newProblem(j *Job) (*problem, error) {
 			diams = append(diams, option[units.Length]{d, j.Raw[fmt.Sprintf("stock.diameters[%d]", i)]})
 		}
 	default:
-		return nil, j.inputErr("stock.diameters", "propose needs the bolt diameters to try",
+		return nil, j.FieldError("stock.diameters", "propose needs the bolt diameters to try",
 			"give stock.diameters: [3/4 in, 7/8 in] (us) or [M20, M22] (si), or fix bolts.diameter")
 	}
 	var grades []string
 	switch {
 	case j.Bolts.Grade != "":
 		if _, err := ed.Bolt(j.Bolts.Grade); err != nil {
-			return nil, j.inputErr("bolts.grade", fmt.Sprintf("unknown bolt grade %q in %s", j.Bolts.Grade, ed), "known grades: "+strings.Join(ed.BoltGrades(), ", "))
+			return nil, j.FieldError("bolts.grade", fmt.Sprintf("unknown bolt grade %q in %s", j.Bolts.Grade, ed), "known grades: "+strings.Join(ed.BoltGrades(), ", "))
 		}
 		grades = []string{j.Bolts.Grade}
 	case len(j.Stock.Grades) > 0:
 		grades = j.Stock.Grades
 	default:
-		return nil, j.inputErr("stock.grades", "propose needs the bolt grades to try",
+		return nil, j.FieldError("stock.grades", "propose needs the bolt grades to try",
 			"give stock.grades: [A325] (us) or [A325M] (si), or fix bolts.grade")
 	}
 	thick := []option[units.Length]{{0, ""}}
@@ -412,7 +406,7 @@ func newProblem(j *Job) (*problem, error) {
 				thick = append(thick, option[units.Length]{t, j.Raw[fmt.Sprintf("stock.thicknesses[%d]", i)]})
 			}
 		default:
-			return nil, j.inputErr("stock.thicknesses", "plate.thickness is auto but the stock has no thicknesses",
+			return nil, j.FieldError("stock.thicknesses", "plate.thickness is auto but the stock has no thicknesses",
 				"give stock.thicknesses: [3/8 in, 1/2 in, 5/8 in], or a plate thickness")
 		}
 	}
@@ -439,7 +433,7 @@ func newProblem(j *Job) (*problem, error) {
 	// angle); the bolt on diameter and grade.
 	members := make([]*Design, len(thick))
 	for ti, t := range thick {
-		if members[ti], err = j.template(ed, t.v); err != nil {
+		if members[ti], err = (job{j}).template(ed, t.v); err != nil {
 			return nil, err
 		}
 	}
@@ -448,7 +442,7 @@ func newProblem(j *Job) (*problem, error) {
 	}
 	for di, d := range diams {
 		if _, err := ed.Hole(d.v, j.Bolts.Hole); err != nil {
-			return nil, j.inputErr("bolts.diameter", tabulatedMsg(err), diametersHint(ed))
+			return nil, j.FieldError("bolts.diameter", tabulatedMsg(err), diametersHint(ed))
 		}
 		for gi, gr := range grades {
 			for ti, t := range thick {
@@ -498,7 +492,7 @@ func (p *problem) checkStep(diams []option[units.Length], members []*Design) err
 		return nil
 	}
 	sys := p.job.Units
-	return p.job.inputErr("stock.step", fmt.Sprintf("is too fine: %s, %s, would hold %.3g steps, at most %d",
+	return p.job.FieldError("stock.step", fmt.Sprintf("is too fine: %s, %s, would hold %.3g steps, at most %d",
 		what, units.FormatJob(reach, sys), n, maxGridValues),
 		fmt.Sprintf("use a step of at least %s (a shop lays bolts out on 1/16 in or 1 mm or coarser)",
 			units.FormatJob(reach/maxGridValues, sys)))
@@ -507,13 +501,14 @@ func (p *problem) checkStep(diams []option[units.Length], members []*Design) err
 // template resolves the member, the plate's steel and the demand for a
 // plate thickness, as Build does: everything of a Design but the bolt and
 // the holes.
-func (j *Job) template(ed *rules.Edition, tp units.Length) (*Design, error) {
-	jj := *j
+func (j job) template(ed *rules.Edition, tp units.Length) (*Design, error) {
+	jf := *j.Job
 	if j.Plate != nil {
 		pl := *j.Plate
 		pl.Thickness, pl.AutoThickness = tp, false
-		jj.Plate = &pl
+		jf.Plate = &pl
 	}
+	jj := job{&jf}
 	des := jj.newDesign(ed)
 	if err := jj.buildMember(ed, des); err != nil {
 		return nil, err
@@ -530,11 +525,11 @@ func (j *Job) template(ed *rules.Edition, tp units.Length) (*Design, error) {
 // withBolt returns a copy of the template with the bolt of diameter d and
 // grade resolved.
 func (t *Design) withBolt(ed *rules.Edition, d units.Length, grade string) (*Design, error) {
-	jj := *t.Job
-	jj.Bolts.Diameter, jj.Bolts.Grade = d, grade
+	jf := *t.Job
+	jf.Bolts.Diameter, jf.Bolts.Grade = d, grade
 	out := *t
-	out.Job = &jj
-	if err := jj.buildBolt(ed, &out.Conn); err != nil {
+	out.Job = &jf
+	if err := (job{&jf}).buildBolt(ed, &out.Conn); err != nil {
 		return nil, err
 	}
 	return &out, nil
@@ -603,7 +598,7 @@ func (p *problem) ranges(g *group) {
 	j, ed := p.job, p.ed
 	c := &g.tmpl.Conn
 	m := &c.Member
-	g.shape, g.plate, _ = j.plyShapes(ed, g.d) // tabulated: checked by newProblem
+	g.shape, g.plate, _ = job{j}.plyShapes(ed, g.d) // tabulated: checked by newProblem
 	g.dx, g.dy = g.shape.Dx, g.shape.Dy
 	// Clear distances (360-22) hold in both plies: the larger hole sets them.
 	plate := g.shape
@@ -789,7 +784,7 @@ func (b boltBounds) pass(n int) bool {
 func (p *problem) perBolt(t *Design) boltBounds {
 	c := t.Conn
 	far := units.Length(1e7)
-	shape, plate, _ := p.job.plyShapes(p.ed, c.Bolt.D) // tabulated: checked by newProblem
+	shape, plate, _ := job{p.job}.plyShapes(p.ed, c.Bolt.D) // tabulated: checked by newProblem
 	c.Holes = []engine.Hole{{X: far, Y: shape.Dy, HoleShape: shape, Plate: plate}}
 	b := boltBounds{demand: c.Demand}
 	b.avail = append(b.avail, engine.BoltShear(&c).Available, engine.MemberBearing(&c).Available)
@@ -979,15 +974,15 @@ func ratioBucket(ratio float64) int64 {
 func (c *cand) feasible() bool { return c.rep != nil && c.rep.Pass }
 
 // cmpPrefix orders by the objective's first three keys.
-func cmpPrefix(obj Objective, nA int, lenA int64, dA units.Length, nB int, lenB int64, dB units.Length) int {
-	if obj == ShortestLength {
+func cmpPrefix(obj jobfile.Objective, nA int, lenA int64, dA units.Length, nB int, lenB int64, dB units.Length) int {
+	if obj == jobfile.ShortestLength {
 		return cmp.Or(cmp.Compare(lenA, lenB), cmp.Compare(nA, nB), cmp.Compare(dA, dB))
 	}
 	return cmp.Or(cmp.Compare(nA, nB), cmp.Compare(lenA, lenB), cmp.Compare(dA, dB))
 }
 
 // compare is the total order of SPEC §6 with its deterministic tie-breaks.
-func compare(obj Objective, a, b *cand) int {
+func compare(obj jobfile.Objective, a, b *cand) int {
 	ga, gb := a.g, b.g
 	return cmp.Or(
 		cmpPrefix(obj, ga.nT, a.lenNm, ga.d, gb.nT, b.lenNm, gb.d),
@@ -1085,7 +1080,7 @@ func (p *problem) exhaustive(space int, progress func(done, total int)) (bests, 
 	}
 	others = slices.Clone(bests)
 	slices.SortFunc(bests, func(a, b *cand) int { return compare(p.obj, a, b) })
-	slices.SortFunc(others, func(a, b *cand) int { return compare(p.obj.other(), a, b) })
+	slices.SortFunc(others, func(a, b *cand) int { return compare(p.obj.Other(), a, b) })
 	return onePerArrangement(bests), others
 }
 
@@ -1162,7 +1157,7 @@ func (g *group) lowerLen() int64 {
 // under obj, best first, pruning groups and layouts that cannot enter the
 // k best. (A group whose bound is the k-th best cannot improve on an
 // arrangement already among them either: that one is better still.)
-func (p *problem) bestPerGroup(obj Objective, k int) []*cand {
+func (p *problem) bestPerGroup(obj jobfile.Objective, k int) []*cand {
 	order := slices.Clone(p.groups)
 	slices.SortStableFunc(order, func(a, b *group) int {
 		return cmp.Or(cmpPrefix(obj, a.nT, a.lowerLen(), a.d, b.nT, b.lowerLen(), b.d), cmp.Compare(a.idx, b.idx))
@@ -1197,7 +1192,7 @@ func (p *problem) bestPerGroup(obj Objective, k int) []*cand {
 // searcher finds the best layout of one group that could beat bound.
 type searcher struct {
 	p     *problem
-	obj   Objective
+	obj   jobfile.Objective
 	bound *cand // nil: none
 	best  *cand // best in the group so far
 	// lastDead: the last run searched had no passing layout.
@@ -1735,6 +1730,39 @@ func (l Layout) Describe(sys units.System) string {
 	return s
 }
 
+// WriteJob returns the job file with the layout filled in: the pattern keys
+// of the bolts block, and the plate's thickness and edge. Values the job
+// fixed keep the user's spelling, chosen values are written as the job file
+// writes them (jobfile.LengthText; stock spellings for diameters and
+// thicknesses); every other key and comment stays as it was.
+func WriteJob(j *jobfile.Job, l Layout) ([]byte, error) {
+	sys := j.Units
+	f := func(v units.Length) string { return jobfile.LengthText(v, sys) }
+	bolt := func(key, value, tag string) jobfile.Setting {
+		return jobfile.Setting{Block: "bolts", Key: key, Value: value, Tag: tag, Free: true}
+	}
+	set := []jobfile.Setting{
+		bolt("diameter", l.diameterValue(sys), "!!str"),
+		bolt("grade", l.Grade, "!!str"),
+		bolt("lines", strconv.Itoa(l.Lines), "!!int"),
+		bolt("per_line", strconv.Itoa(l.PerLine), "!!int"),
+	}
+	if l.PerLine > 1 {
+		set = append(set, bolt("pitch", f(l.Pitch), "!!str"))
+	}
+	set = append(set, bolt("end", f(l.End), "!!str"), bolt("gage", f(l.Gage), "!!str"))
+	if l.Lines > 1 {
+		set = append(set, bolt("gage2", f(l.Gage2), "!!str"))
+	}
+	if j.Plate != nil {
+		if j.Plate.AutoThickness {
+			set = append(set, jobfile.Setting{Block: "plate", Key: "thickness", Value: l.thicknessValue(sys), Tag: "!!str"})
+		}
+		set = append(set, jobfile.Setting{Block: "plate", Key: "edge", Value: f(l.PlateEdge), Tag: "!!str", Free: true})
+	}
+	return j.Rewrite(set)
+}
+
 // diameterValue is the diameter as the job file writes it.
 func (l Layout) diameterValue(sys units.System) string {
 	if l.diameterText != "" {
@@ -1771,7 +1799,7 @@ type jsonPlateLayout struct {
 }
 
 func (l Layout) json(sys units.System) (jsonLayout, *jsonPlateLayout) {
-	f := func(v units.Length) string { return jobLength(v, sys) }
+	f := func(v units.Length) string { return jobfile.LengthText(v, sys) }
 	jl := jsonLayout{Diameter: l.diameterValue(sys), Grade: l.Grade, Lines: l.Lines, PerLine: l.PerLine,
 		End: f(l.End), Gage: f(l.Gage)}
 	if l.PerLine > 1 {
@@ -1894,7 +1922,7 @@ func (p *Proposal) writeHead(b *strings.Builder, mode SearchMode, md bool) {
 	sys := p.Job.Units
 	s := p.search(mode)
 	obj := "fewest bolts, then shortest"
-	if p.Job.Stock.Objective == ShortestLength {
+	if p.Job.Stock.Objective == jobfile.ShortestLength {
 		obj = "shortest, then fewest bolts"
 	}
 	if md {

@@ -1,6 +1,7 @@
 package detail
 
 import (
+	"gaugeline/detail/jobfile"
 	"path/filepath"
 	"testing"
 )
@@ -13,7 +14,7 @@ var benchProposeJobs = []string{"us-angle-brace.yaml", "us-flat-shear.yaml", "si
 
 func benchPropose(b *testing.B, mode SearchMode) {
 	for _, name := range benchProposeJobs {
-		job, err := LoadJob(filepath.Join("..", "testdata", "propose", name))
+		job, err := jobfile.LoadJob(filepath.Join("..", "testdata", "propose", name))
 		if err != nil {
 			b.Fatal(err)
 		}
@@ -45,9 +46,9 @@ func BenchmarkProposeRate(b *testing.B) {
 	for _, mode := range []SearchMode{Exhaustive, Pruned} {
 		name := map[SearchMode]string{Exhaustive: "exhaustive", Pruned: "pruned"}[mode]
 		b.Run(name, func(b *testing.B) {
-			var jobs []*Job
+			var jobs []*jobfile.Job
 			for _, f := range benchProposeJobs {
-				job, err := LoadJob(filepath.Join("..", "testdata", "propose", f))
+				job, err := jobfile.LoadJob(filepath.Join("..", "testdata", "propose", f))
 				if err != nil {
 					b.Fatal(err)
 				}

@@ -4,6 +4,7 @@ import (
 	"bytes"
 	"errors"
 	"fmt"
+	"gaugeline/detail/jobfile"
 	"math"
 	"os"
 	"path/filepath"
@@ -14,9 +15,9 @@ import (
 )
 
 // loadProposeJob reads a job of testdata/propose.
-func loadProposeJob(t *testing.T, name string) *Job {
+func loadProposeJob(t *testing.T, name string) *jobfile.Job {
 	t.Helper()
-	job, err := LoadJob(filepath.Join("..", "testdata", "propose", name))
+	job, err := jobfile.LoadJob(filepath.Join("..", "testdata", "propose", name))
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -25,7 +26,7 @@ func loadProposeJob(t *testing.T, name string) *Job {
 
 // proposeJSON runs Propose and returns its JSON, failing the test on an
 // error or a panic (a caller must not be able to make Propose panic).
-func proposeJSON(t *testing.T, job *Job, opt ProposeOptions) []byte {
+func proposeJSON(t *testing.T, job *jobfile.Job, opt ProposeOptions) []byte {
 	t.Helper()
 	var p *Proposal
 	var err error
@@ -84,7 +85,7 @@ func TestProposeStepTooFine(t *testing.T) {
 		{"1e-300 in", false}, {"1e-9 in", false}, {"1/512 in", false}, {"1/64 in", true},
 	} {
 		t.Run(c.step, func(t *testing.T) {
-			job, err := ParseJob("fine.yaml", []byte(strings.Replace(string(src), "step: 1/4 in", "step: "+c.step, 1)))
+			job, err := jobfile.ParseJob("fine.yaml", []byte(strings.Replace(string(src), "step: 1/4 in", "step: "+c.step, 1)))
 			if err != nil {
 				// The parser already refuses lengths under 0.001 mm (1e-300 in, 1e-9 in).
 				if c.ok || !strings.Contains(err.Error(), "stock.step") {
@@ -93,7 +94,7 @@ func TestProposeStepTooFine(t *testing.T) {
 				return
 			}
 			p, err := Propose(job, ProposeOptions{})
-			var ie *InputError
+			var ie *jobfile.InputError
 			switch {
 			case c.ok && err != nil:
 				t.Fatalf("step %s: %v", c.step, err)

@@ -15,6 +15,7 @@ import (
 
 	"pgregory.net/rapid"
 
+	"gaugeline/detail/jobfile"
 	"gaugeline/detail/section"
 	"gaugeline/engine"
 	"gaugeline/rules"
@@ -233,7 +234,7 @@ func TestProposeFastEqualsExhaustive(t *testing.T) {
 	shapes := map[string]int{}
 	rapid.Check(t, func(rt *rapid.T) {
 		src := drawProposeJob(rt)
-		job, err := ParseJob("gen.yaml", []byte(src))
+		job, err := jobfile.ParseJob("gen.yaml", []byte(src))
 		if err != nil {
 			rt.Fatalf("generated job does not parse: %v\n%s", err, src)
 		}
@@ -243,7 +244,7 @@ func TestProposeFastEqualsExhaustive(t *testing.T) {
 			rt.Fatalf("errors differ: pruned %v, exhaustive %v\n%s", errF, errE, src)
 		}
 		if errF != nil {
-			var ie *InputError
+			var ie *jobfile.InputError
 			if !errors.As(errF, &ie) {
 				rt.Fatalf("not an input error: %v", errF)
 			}
@@ -281,11 +282,11 @@ func TestProposeFastEqualsExhaustive(t *testing.T) {
 			rt.Fatalf("alternatives differ:\npruned     %+v\nexhaustive %+v\n%s", fast.Alternatives, ex.Alternatives, src)
 		}
 		// The written job checks as it was chosen.
-		lj, err := ParseJob("written.yaml", fast.LayoutJob)
+		lj, err := jobfile.ParseJob("written.yaml", fast.LayoutJob)
 		if err != nil {
 			rt.Fatalf("written job: %v\n%s", err, fast.LayoutJob)
 		}
-		d, err := lj.Build()
+		d, err := Build(lj)
 		if err != nil {
 			rt.Fatalf("written job: %v\n%s", err, fast.LayoutJob)
 		}
@@ -312,7 +313,7 @@ var exhaustiveAll = flag.Bool("propose.exhaustive-all", false,
 // the exhaustive one too, and requires them to agree.
 func proposeFile(t *testing.T, name string, exhaustive bool) *Proposal {
 	t.Helper()
-	job, err := LoadJob(filepath.Join("..", "testdata", "propose", name))
+	job, err := jobfile.LoadJob(filepath.Join("..", "testdata", "propose", name))
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -418,12 +419,12 @@ func TestProposeBadInput(t *testing.T) {
 		{"explicit holes", "mark: X\nload: {required: 10 kip}\nmember: {shape: flat, width: 6 in, thickness: 1/2 in, grade: A36}\nbolts: {diameter: 3/4 in, grade: A325}\nholes: [[2 in, 3 in]]\n", "holes"},
 	} {
 		t.Run(c.name, func(t *testing.T) {
-			job, err := ParseJob("bad.yaml", []byte(c.src))
+			job, err := jobfile.ParseJob("bad.yaml", []byte(c.src))
 			if err != nil {
 				t.Fatal(err)
 			}
 			_, err = Propose(job, ProposeOptions{})
-			var ie *InputError
+			var ie *jobfile.InputError
 			if !errors.As(err, &ie) || ie.Field != c.field {
 				t.Fatalf("error %v, want an input error at %s", err, c.field)
 			}
@@ -473,7 +474,7 @@ func TestProposeOddStep(t *testing.T) {
 		t.Fatal(err)
 	}
 	for _, step := range []string{"5 mm", "1/3 in", "0.3 in"} {
-		job, err := ParseJob("odd.yaml", []byte(strings.Replace(string(src), "step: 1/4 in", "step: "+step, 1)))
+		job, err := jobfile.ParseJob("odd.yaml", []byte(strings.Replace(string(src), "step: 1/4 in", "step: "+step, 1)))
 		if err != nil {
 			t.Fatal(err)
 		}
@@ -540,7 +541,7 @@ func TestProposeHoldsAFixedOffCentreGage(t *testing.T) {
 		t.Fatal(err)
 	}
 	fixed := strings.Replace(string(src), "  joint: bearing\n", "  joint: bearing\n  gage: 2 in\n", 1)
-	job, err := ParseJob("fixed.yaml", []byte(fixed))
+	job, err := jobfile.ParseJob("fixed.yaml", []byte(fixed))
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -554,7 +555,7 @@ func TestProposeHoldsAFixedOffCentreGage(t *testing.T) {
 		}
 	}
 	provided := strings.Replace(fixed, "  grade: A572-50\nplate:", "  grade: A572-50\n  eccentricity: provided\nplate:", 1)
-	job, err = ParseJob("provided.yaml", []byte(provided))
+	job, err = jobfile.ParseJob("provided.yaml", []byte(provided))
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -597,13 +598,13 @@ func TestPropertyProposedFlatsAreCentred(t *testing.T) {
 	rapid.Check(t, func(rt *rapid.T) {
 		runs++
 		src := drawProposeJobOf(rt, []string{"flat"}, false)
-		job, err := ParseJob("gen.yaml", []byte(src))
+		job, err := jobfile.ParseJob("gen.yaml", []byte(src))
 		if err != nil {
 			rt.Fatalf("generated job does not parse: %v\n%s", err, src)
 		}
 		p, err := Propose(job, ProposeOptions{})
 		if err != nil {
-			var ie *InputError
+			var ie *jobfile.InputError
 			if !errors.As(err, &ie) {
 				rt.Fatalf("not an input error: %v", err)
 			}
@@ -616,7 +617,7 @@ func TestPropertyProposedFlatsAreCentred(t *testing.T) {
 		if e := centroidOffset(p.Report); e > 1e-6 {
 			rt.Fatalf("group %v mm off centre: %s\n%s", float64(e), p.Layout.Describe(job.Units), src)
 		}
-		lj, err := ParseJob("written.yaml", p.LayoutJob)
+		lj, err := jobfile.ParseJob("written.yaml", p.LayoutJob)
 		if err != nil {
 			rt.Fatal(err)
 		}
@@ -634,8 +635,8 @@ func TestPropertyProposedFlatsAreCentred(t *testing.T) {
 	t.Logf("%d of %d generated flats got a layout", found, runs)
 }
 
-func mustBuildRapid(rt *rapid.T, j *Job) *Design {
-	d, err := j.Build()
+func mustBuildRapid(rt *rapid.T, j *jobfile.Job) *Design {
+	d, err := Build(j)
 	if err != nil {
 		rt.Fatal(err)
 	}

@@ -7,6 +7,7 @@ import (
 	"math"
 	"slices"
 
+	"gaugeline/detail/jobfile"
 	"gaugeline/engine"
 	"gaugeline/rules/units"
 )
@@ -60,17 +61,17 @@ func allowFabrication(fs []Finding, fab units.Length) {
 // CheckFile loads a job file, builds it and checks it: what `check`,
 // `sheet` and `report` all start with. Every error is an *InputError.
 func CheckFile(path string) (*Report, error) {
-	job, err := LoadJob(path)
+	job, err := jobfile.LoadJob(path)
 	if err != nil {
 		return nil, err
 	}
-	d, err := job.Build()
+	d, err := Build(job)
 	if err != nil {
 		return nil, err
 	}
 	r, err := Check(d)
 	if err != nil {
-		return nil, &InputError{File: path, Msg: err.Error()}
+		return nil, &jobfile.InputError{File: path, Msg: err.Error()}
 	}
 	return r, nil
 }

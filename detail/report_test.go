@@ -8,6 +8,7 @@ import (
 	"strings"
 	"testing"
 
+	"gaugeline/detail/jobfile"
 	"gaugeline/rules/units"
 )
 
@@ -15,11 +16,11 @@ import (
 // project read them.
 func TestJSONContract(t *testing.T) {
 	for _, job := range []string{"us-single-angle.yaml", "si-double-angle.yaml"} {
-		j, err := LoadJob(filepath.Join("..", "testdata", "jobs", job))
+		j, err := jobfile.LoadJob(filepath.Join("..", "testdata", "jobs", job))
 		if err != nil {
 			t.Fatal(err)
 		}
-		d, err := j.Build()
+		d, err := Build(j)
 		if err != nil {
 			t.Fatal(err)
 		}

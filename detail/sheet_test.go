@@ -8,6 +8,7 @@ import (
 	"strings"
 	"testing"
 
+	"gaugeline/detail/jobfile"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
 )
@@ -26,11 +27,11 @@ var sheetJobs = []string{
 
 func checkedJob(t *testing.T, path string) *Report {
 	t.Helper()
-	j, err := LoadJob(path)
+	j, err := jobfile.LoadJob(path)
 	if err != nil {
 		t.Fatal(err)
 	}
-	d, err := j.Build()
+	d, err := Build(j)
 	if err != nil {
 		t.Fatal(err)
 	}

@@ -4,6 +4,7 @@ package detail
 
 import (
 	"errors"
+	"gaugeline/detail/jobfile"
 	"os"
 	"path/filepath"
 	"strings"
@@ -51,8 +52,8 @@ func TestLoadJobRefusesSpecialFiles(t *testing.T) {
 		{os.DevNull, "device"},
 	} {
 		t.Run(c.kind, func(t *testing.T) {
-			err := within(t, fifo, func() error { _, err := LoadJob(c.path); return err })
-			var ie *InputError
+			err := within(t, fifo, func() error { _, err := jobfile.LoadJob(c.path); return err })
+			var ie *jobfile.InputError
 			if !errors.As(err, &ie) || ie.File != c.path || !strings.Contains(ie.Msg, c.kind) || !strings.Contains(ie.Msg, "not a regular file") {
 				t.Errorf("LoadJob(%s): %v, want an *InputError naming the file, saying it is a %s", c.path, err, c.kind)
 			}
@@ -62,7 +63,7 @@ func TestLoadJobRefusesSpecialFiles(t *testing.T) {
 
 // So is a measured CSV or DXF that is a FIFO, a directory or a device.
 func TestLoadMeasuredRefusesSpecialFiles(t *testing.T) {
-	j, err := LoadJob(filepath.Join("..", "testdata", "measured", "hb-7-qa.yaml"))
+	j, err := jobfile.LoadJob(filepath.Join("..", "testdata", "measured", "hb-7-qa.yaml"))
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -75,7 +76,7 @@ func TestLoadMeasuredRefusesSpecialFiles(t *testing.T) {
 		for _, c := range []struct{ path, kind string }{{fifo, "named pipe"}, {dir, "directory"}} {
 			t.Run(ext+" "+c.kind, func(t *testing.T) {
 				err := within(t, fifo, func() error { _, err := LoadMeasured(c.path, j, ""); return err })
-				var ie *InputError
+				var ie *jobfile.InputError
 				if !errors.As(err, &ie) || ie.File != c.path || !strings.Contains(ie.Msg, c.kind) {
 					t.Errorf("LoadMeasured(%s): %v, want an *InputError naming the file, saying it is a %s", c.path, err, c.kind)
 				}

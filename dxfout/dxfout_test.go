@@ -12,6 +12,7 @@ import (
 	"time"
 
 	"gaugeline/detail"
+	"gaugeline/detail/jobfile"
 	"gaugeline/rules/units"
 )
 
@@ -56,11 +57,11 @@ bolts: {diameter: M20, grade: A325M, joint: slip-critical, hole: oversized,
 }
 
 // loadJob reads a job file, or an inline job named "inline:NAME".
-func loadJob(path string) (*detail.Job, error) {
+func loadJob(path string) (*jobfile.Job, error) {
 	if name, ok := strings.CutPrefix(path, "inline:"); ok {
-		return detail.ParseJob(name, []byte(inlineJobs[name]))
+		return jobfile.ParseJob(name, []byte(inlineJobs[name]))
 	}
-	return detail.LoadJob(path)
+	return jobfile.LoadJob(path)
 }
 
 // tol is SPEC §7's read-back tolerance, in the job's units.
@@ -72,7 +73,7 @@ func checked(t testing.TB, path string) *detail.Report {
 	if err != nil {
 		t.Fatal(err)
 	}
-	d, err := j.Build()
+	d, err := detail.Build(j)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -347,7 +348,7 @@ func allFiles(path string) ([]File, error) {
 	if err != nil {
 		return nil, err
 	}
-	d, err := j.Build()
+	d, err := detail.Build(j)
 	if err != nil {
 		return nil, err
 	}

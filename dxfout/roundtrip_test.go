@@ -14,6 +14,7 @@ import (
 	"pgregory.net/rapid"
 
 	"gaugeline/detail"
+	"gaugeline/detail/jobfile"
 	"gaugeline/detail/measured"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
@@ -84,11 +85,11 @@ type tb interface {
 // CAM files by part name.
 func camFiles(t tb, src string) (*detail.Design, map[string][]byte) {
 	t.Helper()
-	j, err := detail.ParseJob("roundtrip.yaml", []byte(src))
+	j, err := jobfile.ParseJob("roundtrip.yaml", []byte(src))
 	if err != nil {
 		t.Fatalf("%v\n%s", err, src)
 	}
-	d, err := j.Build()
+	d, err := detail.Build(j)
 	if err != nil {
 		t.Fatalf("%v\n%s", err, src)
 	}

@@ -5,6 +5,7 @@ import (
 	"testing"
 
 	"gaugeline/detail"
+	"gaugeline/detail/jobfile"
 	"gaugeline/engine"
 )
 
@@ -24,12 +25,12 @@ func TestWorkingOfEveryTestdataJob(t *testing.T) {
 	}
 	checked := 0
 	for _, path := range paths {
-		j, err := detail.LoadJob(path)
+		j, err := jobfile.LoadJob(path)
 		if err != nil {
 			continue // bad on purpose (the batch folder's typo, dimension, YAML)
 		}
 		var d *detail.Design
-		if d, err = j.Build(); err != nil {
+		if d, err = detail.Build(j); err != nil {
 			p, perr := detail.Propose(j, detail.ProposeOptions{})
 			if perr != nil || !p.Found() {
 				continue // an unknown size, or stock in which nothing passes

@@ -8,7 +8,7 @@ import (
 
 	"github.com/spf13/cobra"
 
-	"gaugeline/detail"
+	"gaugeline/detail/jobfile"
 	"gaugeline/fileset"
 )
 
@@ -32,7 +32,7 @@ func newAuditCmd(o *rootOptions) *cobra.Command {
 func runAudit(_ context.Context, o *rootOptions, dir string, out io.Writer) error {
 	a, err := fileset.Audit(dir)
 	if err != nil {
-		return &detail.InputError{File: dir, Msg: err.Error()}
+		return &jobfile.InputError{File: dir, Msg: err.Error()}
 	}
 	for _, f := range a.Findings {
 		label := "problem"

@@ -12,7 +12,7 @@ import (
 	"syscall"
 
 	"gaugeline/batch"
-	"gaugeline/detail"
+	"gaugeline/detail/jobfile"
 	"gaugeline/fileset"
 )
 
@@ -63,7 +63,7 @@ func runBatch(ctx context.Context, o *rootOptions, bo batchOptions, arg string, 
 	run := batch.RunLine(cfg, files)
 	os.Remove(filepath.Join(bo.dir, "summary.csv"))
 	if err := fileset.WriteFile(filepath.Join(bo.dir, fileset.SummaryMD), batch.SummaryRunning(run)); err != nil {
-		return &detail.InputError{File: bo.dir, Msg: err.Error()}
+		return &jobfile.InputError{File: bo.dir, Msg: err.Error()}
 	}
 
 	// Ctrl-C stops the batch between jobs: the jobs running finish, the
@@ -84,10 +84,10 @@ func runBatch(ctx context.Context, o *rootOptions, bo batchOptions, arg string, 
 	}
 	// summary.md last: until it is replaced it says the run is not finished.
 	if err := fileset.WriteFile(filepath.Join(bo.dir, fileset.SummaryCSV), csvData); err != nil {
-		return &detail.InputError{File: bo.dir, Msg: err.Error()}
+		return &jobfile.InputError{File: bo.dir, Msg: err.Error()}
 	}
 	if err := fileset.WriteFile(filepath.Join(bo.dir, fileset.SummaryMD), batch.SummaryMarkdown(rows, run)); err != nil {
-		return &detail.InputError{File: bo.dir, Msg: err.Error()}
+		return &jobfile.InputError{File: bo.dir, Msg: err.Error()}
 	}
 
 	shown := 0

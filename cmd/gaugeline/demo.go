@@ -14,6 +14,7 @@ import (
 
 	"gaugeline/detail"
 	"gaugeline/detail/calc"
+	"gaugeline/detail/jobfile"
 	"gaugeline/detail/measured"
 	"gaugeline/dxfout"
 	"gaugeline/fileset"
@@ -94,7 +95,7 @@ func demoPropose(name string) (*detail.Proposal, error) {
 	if err != nil {
 		return nil, err
 	}
-	job, err := detail.ParseJob(name, data)
+	job, err := jobfile.ParseJob(name, data)
 	if err != nil {
 		return nil, err
 	}

@@ -15,6 +15,7 @@ import (
 	"github.com/spf13/cobra"
 
 	"gaugeline/detail"
+	"gaugeline/detail/jobfile"
 )
 
 // Exit codes, one table for every command (SPEC §2).
@@ -149,7 +150,7 @@ func exitCode(err error, stderr io.Writer) int {
 	if errors.As(err, &ee) {
 		return ee.code
 	}
-	var ie *detail.InputError
+	var ie *jobfile.InputError
 	if errors.As(err, &ie) {
 		fmt.Fprintf(stderr, "gaugeline: error: %s\n", ie.Error())
 		if ie.Hint != "" {

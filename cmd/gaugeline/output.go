@@ -3,7 +3,7 @@ package main
 import (
 	"fmt"
 
-	"gaugeline/detail"
+	"gaugeline/detail/jobfile"
 	"gaugeline/fileset"
 )
 
@@ -12,7 +12,7 @@ func toolVersion() string { return "gaugeline " + version() }
 
 // stampFor is the stamp of a set made by mode ("check", "propose") from
 // the job's file.
-func stampFor(mode string, job *detail.Job) string {
+func stampFor(mode string, job *jobfile.Job) string {
 	return fileset.Stamp(toolVersion(), mode, job.SHA256)
 }
 
@@ -24,7 +24,7 @@ func lockOutput(out string, note func(string)) (unlock func(), err error) {
 		note(fmt.Sprintf("waiting for another gaugeline run writing into %s", out))
 	})
 	if err != nil {
-		return nil, &detail.InputError{File: out, Msg: err.Error()}
+		return nil, &jobfile.InputError{File: out, Msg: err.Error()}
 	}
 	return unlock, nil
 }

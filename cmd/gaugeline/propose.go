@@ -9,6 +9,7 @@ import (
 	"github.com/spf13/cobra"
 
 	"gaugeline/detail"
+	"gaugeline/detail/jobfile"
 	"gaugeline/fileset"
 )
 
@@ -69,7 +70,7 @@ func runPropose(_ context.Context, o *rootOptions, po proposeOptions, path strin
 	if po.maxCand < 1 {
 		return usageError{fmt.Errorf("--max-candidates: want 1 or more, not %d", po.maxCand)}
 	}
-	job, err := detail.LoadJob(path)
+	job, err := jobfile.LoadJob(path)
 	if err != nil {
 		return err
 	}
@@ -120,7 +121,7 @@ func runPropose(_ context.Context, o *rootOptions, po proposeOptions, path strin
 
 // limitError words a search refused or stopped at --max-candidates as
 // bad input at the job's stock, which is what makes the search that large.
-func limitError(job *detail.Job, le *detail.SearchLimitError) error {
+func limitError(job *jobfile.Job, le *detail.SearchLimitError) error {
 	hint := "narrow the stock (fewer diameters, grades or thicknesses, a smaller max_lines or max_per_line, a coarser step, " +
 		"or fix what you know in the bolts block), or raise --max-candidates"
 	msg := fmt.Sprintf("the search reached --max-candidates (%d candidates checked) before finishing; the space has %d candidates", le.Limit, le.Space)
@@ -128,14 +129,14 @@ func limitError(job *detail.Job, le *detail.SearchLimitError) error {
 		msg = fmt.Sprintf("the exhaustive search would check all %d candidates of the space, more than --max-candidates %d", le.Space, le.Limit)
 		hint += "; the search without --exhaustive returns the same layout"
 	}
-	return &detail.InputError{File: job.File, Line: job.Line("stock"), Field: "stock", Msg: msg, Hint: hint}
+	return &jobfile.InputError{File: job.File, Line: job.Line("stock"), Field: "stock", Msg: msg, Hint: hint}
 }
 
 // writeAtomic writes data to path through a temporary file in the same
 // directory and a rename (fileset.WriteFile), so path is never half-written.
 func writeAtomic(path string, data []byte) error {
 	if err := fileset.WriteFile(path, data); err != nil {
-		return &detail.InputError{File: path, Msg: "cannot write the job: " + err.Error()}
+		return &jobfile.InputError{File: path, Msg: "cannot write the job: " + err.Error()}
 	}
 	return nil
 }

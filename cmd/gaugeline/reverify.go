@@ -8,6 +8,7 @@ import (
 	"github.com/spf13/cobra"
 
 	"gaugeline/detail"
+	"gaugeline/detail/jobfile"
 	"gaugeline/rules/units"
 )
 
@@ -70,12 +71,12 @@ func runReverify(_ context.Context, _ *rootOptions, ro reverifyOptions, path str
 	if err != nil {
 		return usageError{fmt.Errorf("--part: %w", err)}
 	}
-	job, err := detail.LoadJob(path)
+	job, err := jobfile.LoadJob(path)
 	if err != nil {
 		return err
 	}
 	if part == detail.MeasuredPlate && job.Plate == nil {
-		return &detail.InputError{File: path, Field: "--part", Msg: "the job has no plate to measure",
+		return &jobfile.InputError{File: path, Field: "--part", Msg: "the job has no plate to measure",
 			Hint: "--part plate needs the job's plate block; a measured member is --part member"}
 	}
 	opt := detail.ReverifyOptions{Align: align, Part: part}
@@ -100,7 +101,7 @@ func runReverify(_ context.Context, _ *rootOptions, ro reverifyOptions, path str
 		}
 		*t.dst = v
 	}
-	d, err := job.Build()
+	d, err := detail.Build(job)
 	if err != nil {
 		return err
 	}
@@ -110,7 +111,7 @@ func runReverify(_ context.Context, _ *rootOptions, ro reverifyOptions, path str
 	}
 	ab, err := detail.Reverify(d, set, opt)
 	if err != nil {
-		return &detail.InputError{File: path, Msg: err.Error()}
+		return &jobfile.InputError{File: path, Msg: err.Error()}
 	}
 	switch ro.format {
 	case "json":

@@ -10,6 +10,7 @@ import (
 	"github.com/spf13/cobra"
 
 	"gaugeline/detail"
+	"gaugeline/detail/jobfile"
 	"gaugeline/dxfout"
 	"gaugeline/fileset"
 )
@@ -69,7 +70,7 @@ func runSheet(_ context.Context, o *rootOptions, so sheetOptions, path string, o
 	}
 	defer unlock()
 	if err := fileset.Write(so.dir, fileset.Set{Name: job.Mark, Stamp: job.Stamp, Files: files}); err != nil {
-		return &detail.InputError{File: so.dir, Msg: err.Error()}
+		return &jobfile.InputError{File: so.dir, Msg: err.Error()}
 	}
 	for _, f := range files {
 		fmt.Fprintln(out, filepath.Join(so.dir, job.Mark, f.Name))

@@ -13,6 +13,7 @@ import (
 	"golang.org/x/net/html"
 
 	"gaugeline/detail"
+	"gaugeline/detail/jobfile"
 	"gaugeline/engine"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
@@ -180,17 +181,17 @@ bolts:
 
 func check(t *testing.T, path string) *detail.Report {
 	t.Helper()
-	var j *detail.Job
+	var j *jobfile.Job
 	var err error
 	if name, ok := strings.CutPrefix(path, "inline:"); ok {
-		j, err = detail.ParseJob(name, []byte(inline[name]))
+		j, err = jobfile.ParseJob(name, []byte(inline[name]))
 	} else {
-		j, err = detail.LoadJob(path)
+		j, err = jobfile.LoadJob(path)
 	}
 	if err != nil {
 		t.Fatal(err)
 	}
-	d, err := j.Build()
+	d, err := detail.Build(j)
 	if err != nil {
 		t.Fatal(err)
 	}

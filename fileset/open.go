@@ -1,6 +1,7 @@
-package measured
+package fileset
 
 import (
+	"errors"
 	"fmt"
 	"io/fs"
 	"os"
@@ -60,4 +61,30 @@ func OpenRegular(path string) (*os.File, error) {
 		return nil, &NotRegularError{Path: path, Mode: st.Mode()}
 	}
 	return f, nil
+}
+
+// ErrText is the message of a failure to read or write a named file, for a
+// line that names the file itself: the path a *fs.PathError repeats is
+// dropped, and a *NotRegularError says what the path is ("it is a
+// directory, not a regular file").
+func ErrText(err error) string {
+	var nr *NotRegularError
+	if errors.As(err, &nr) {
+		return "it is " + nr.Kind() + ", not a regular file"
+	}
+	var pe *fs.PathError
+	if errors.As(err, &pe) {
+		return pe.Err.Error()
+	}
+	return err.Error()
+}
+
+// NotRegularHint is the hint for a path that is not a regular file, ""
+// for any other failure.
+func NotRegularHint(err error) string {
+	var nr *NotRegularError
+	if errors.As(err, &nr) {
+		return "give the path of a file; a pipe or device is not read, so that it cannot stall the run"
+	}
+	return ""
 }

@@ -1,12 +1,10 @@
-package detail
+package jobfile
 
 import (
 	"bytes"
 	"crypto/sha256"
-	"errors"
 	"fmt"
 	"io"
-	"io/fs"
 	"math"
 	"regexp"
 	"slices"
@@ -15,8 +13,8 @@ import (
 
 	"go.yaml.in/yaml/v3"
 
-	"gaugeline/detail/measured"
 	"gaugeline/engine"
+	"gaugeline/fileset"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
 )
@@ -162,6 +160,14 @@ const (
 	ShortestLength                  // "length"
 )
 
+// Other is the other objective: the tie-break of this one.
+func (o Objective) Other() Objective {
+	if o == FewestBolts {
+		return ShortestLength
+	}
+	return FewestBolts
+}
+
 // String returns the job-file spelling.
 func (o Objective) String() string {
 	if o == ShortestLength {
@@ -246,13 +252,18 @@ func parentPath(p string) string {
 	return p[:i]
 }
 
-// inputErr builds an InputError at path, on the line the job recorded.
-func (j *Job) inputErr(path, msg, hint string) *InputError {
+// FieldError is an InputError at the field path, on the line the job
+// recorded.
+func (j *Job) FieldError(path, msg, hint string) *InputError {
 	return &InputError{File: j.File, Line: j.Line(path), Field: path, Msg: msg, Hint: hint}
 }
 
 // MaxJobSize is the largest job file read.
 const MaxJobSize = 1 << 20
+
+// MaxHoles is the most holes a job may ask for: beyond it the input is a
+// typo.
+const MaxHoles = 1000
 
 // Bounds on what a job may ask for: beyond them the input is a typo.
 const (
@@ -267,7 +278,6 @@ const (
 	maxQuantity = 100000
 	maxLines    = 20
 	maxPerLine  = 200
-	maxHoles    = 1000
 	maxFillers  = 100
 	// A stack of fillers 150 mm (6 in) thick is no filler: a unit typed
 	// wrong (common practice, no source).
@@ -276,39 +286,16 @@ const (
 
 // LoadJob reads and parses a job file.
 func LoadJob(path string) (*Job, error) {
-	f, err := measured.OpenRegular(path)
+	f, err := fileset.OpenRegular(path)
 	if err != nil {
-		return nil, &InputError{File: path, Msg: "cannot read the job: " + pathErrText(err), Hint: notRegularHint(err)}
+		return nil, &InputError{File: path, Msg: "cannot read the job: " + fileset.ErrText(err), Hint: fileset.NotRegularHint(err)}
 	}
 	defer f.Close()
 	data, err := io.ReadAll(io.LimitReader(f, MaxJobSize+1))
 	if err != nil {
-		return nil, &InputError{File: path, Msg: "cannot read the job: " + pathErrText(err)}
+		return nil, &InputError{File: path, Msg: "cannot read the job: " + fileset.ErrText(err)}
 	}
 	return ParseJob(path, data)
-}
-
-// pathErrText drops the path a *fs.PathError or *measured.NotRegularError
-// repeats.
-func pathErrText(err error) string {
-	var pe *fs.PathError
-	if errors.As(err, &pe) {
-		return pe.Err.Error()
-	}
-	var nr *measured.NotRegularError
-	if errors.As(err, &nr) {
-		return "it is " + nr.Kind() + ", not a regular file"
-	}
-	return err.Error()
-}
-
-// notRegularHint is the hint for a path that is not a regular file.
-func notRegularHint(err error) string {
-	var nr *measured.NotRegularError
-	if errors.As(err, &nr) {
-		return "give the path of a file; a pipe or device is not read, so that it cannot stall the run"
-	}
-	return ""
 }
 
 var yamlLine = regexp.MustCompile(`^yaml: line (\d+): (.*)$`)
@@ -950,7 +937,7 @@ func (p *parser) checkPlyHoles() error {
 		if !h.HasType {
 			from = "bolts.hole"
 		}
-		return j.inputErr(ply+".slot", fmt.Sprintf("is for slotted holes, and the %s's holes are %s (%s)", ply, t, from),
+		return j.FieldError(ply+".slot", fmt.Sprintf("is for slotted holes, and the %s's holes are %s (%s)", ply, t, from),
 			fmt.Sprintf("give %s.hole: short-slot or long-slot, or remove %s.slot", ply, ply))
 	}
 	mt, _ := j.MemberHole()
@@ -1200,9 +1187,9 @@ func (p *parser) parseBolts(n *yaml.Node) error {
 		if bs.PerLine, err = p.integer(b.vals["per_line"], "bolts.per_line", 1, maxPerLine); err != nil {
 			return err
 		}
-		if bs.Lines*bs.PerLine > maxHoles {
+		if bs.Lines*bs.PerLine > MaxHoles {
 			return p.errAt(b.vals["per_line"], "bolts.per_line", fmt.Sprintf("%d lines of %d make %d bolts (at most %d)",
-				bs.Lines, bs.PerLine, bs.Lines*bs.PerLine, maxHoles), "")
+				bs.Lines, bs.PerLine, bs.Lines*bs.PerLine, MaxHoles), "")
 		}
 	}
 	for _, o := range []struct {
@@ -1266,7 +1253,7 @@ func (p *parser) parseFiller(b *block, bs *BoltSpec) error {
 }
 
 func (p *parser) parseHoles(n *yaml.Node) error {
-	items, err := p.list(n, "holes", "[[1.5 in, 2.5 in], [4.5 in, 2.5 in]]", maxHoles)
+	items, err := p.list(n, "holes", "[[1.5 in, 2.5 in], [4.5 in, 2.5 in]]", MaxHoles)
 	if err != nil {
 		return err
 	}

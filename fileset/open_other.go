@@ -1,6 +1,6 @@
 //go:build !unix
 
-package measured
+package fileset
 
 // openNonBlock: the system has no O_NONBLOCK; the check before opening
 // stands alone.

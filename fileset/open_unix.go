@@ -1,6 +1,6 @@
 //go:build unix
 
-package measured
+package fileset
 
 import "syscall"
 

@@ -1,4 +1,4 @@
-package detail
+package jobfile
 
 import (
 	"bytes"
@@ -10,44 +10,36 @@ import (
 	"gaugeline/rules/units"
 )
 
-// WithLayout returns the job file with the layout filled in: the pattern
-// keys of the bolts block, and the plate's thickness and edge. Values the
-// job fixed keep the user's spelling, chosen values are written as the
-// job file writes them (units.FormatJob; stock spellings for diameters and
-// thicknesses); every other key and comment stays as it was.
-func (j *Job) WithLayout(l Layout) ([]byte, error) {
+// A Setting is one value a rewritten job file takes: Key in the top-level
+// block Block ("bolts", "plate"), written as Value with the YAML tag Tag
+// ("!!str", "!!int"). Free leaves a value the job gives as the user wrote
+// it.
+type Setting struct {
+	Block, Key, Value, Tag string
+	Free                   bool
+}
+
+// blockBefore is where a block the job lacks is added: before the first of
+// these keys of the document (at the end when none is there).
+var blockBefore = map[string][]string{
+	"bolts": {"holes", "stock", "tolerance"},
+	"plate": {"bolts"},
+}
+
+// Rewrite returns the job file with the settings made, in order; every
+// other key and comment stays as it was.
+func (j *Job) Rewrite(settings []Setting) ([]byte, error) {
 	if j.root == nil || len(j.root.Content) == 0 {
 		return nil, fmt.Errorf("detail: job %s was not parsed from a file", j.File)
 	}
-	sys := j.Units
 	doc := cloneNode(j.root)
 	root := doc.Content[0]
-	f := func(v units.Length) string { return jobLength(v, sys) }
-
-	bolts := childMapping(root, "bolts", "holes", "stock", "tolerance")
-	setIfFree := func(m *yaml.Node, path, key, value, tag string) {
-		if !j.Given(path + "." + key) {
-			setScalar(m, key, value, tag)
+	for _, st := range settings {
+		m := childMapping(root, st.Block, blockBefore[st.Block]...)
+		if st.Free && j.Given(st.Block+"."+st.Key) {
+			continue
 		}
-	}
-	setIfFree(bolts, "bolts", "diameter", l.diameterValue(sys), "!!str")
-	setIfFree(bolts, "bolts", "grade", l.Grade, "!!str")
-	setIfFree(bolts, "bolts", "lines", strconv.Itoa(l.Lines), "!!int")
-	setIfFree(bolts, "bolts", "per_line", strconv.Itoa(l.PerLine), "!!int")
-	if l.PerLine > 1 {
-		setIfFree(bolts, "bolts", "pitch", f(l.Pitch), "!!str")
-	}
-	setIfFree(bolts, "bolts", "end", f(l.End), "!!str")
-	setIfFree(bolts, "bolts", "gage", f(l.Gage), "!!str")
-	if l.Lines > 1 {
-		setIfFree(bolts, "bolts", "gage2", f(l.Gage2), "!!str")
-	}
-	if j.Plate != nil {
-		plate := childMapping(root, "plate", "bolts")
-		if j.Plate.AutoThickness {
-			setScalar(plate, "thickness", l.thicknessValue(sys), "!!str")
-		}
-		setIfFree(plate, "plate", "edge", f(l.PlateEdge), "!!str")
+		setScalar(m, st.Key, st.Value, st.Tag)
 	}
 
 	var b bytes.Buffer
@@ -114,11 +106,11 @@ func setScalar(m *yaml.Node, key, value, tag string) {
 		&yaml.Node{Kind: yaml.ScalarNode, Tag: tag, Value: value})
 }
 
-// jobLength writes a length the way a job file does (units.FormatJob)
+// LengthText writes a length the way a job file does (units.FormatJob)
 // when that reads back to exactly the same value, else in millimetres
 // with every digit needed, so that a written layout checks exactly as it
 // was chosen.
-func jobLength(v units.Length, sys units.System) string {
+func LengthText(v units.Length, sys units.System) string {
 	s := units.FormatJob(v, sys)
 	if back, err := units.ParseLength(s, sys); err == nil && back == v {
 		return s

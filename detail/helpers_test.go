@@ -1,0 +1,55 @@
+package detail
+
+import (
+	"errors"
+	"math"
+	"testing"
+
+	"gaugeline/detail/jobfile"
+)
+
+func mustParse(t *testing.T, src string) *jobfile.Job {
+	t.Helper()
+	j, err := jobfile.ParseJob("test.yaml", []byte(src))
+	if err != nil {
+		t.Fatalf("ParseJob: %v", err)
+	}
+	return j
+}
+
+func parseErr(t *testing.T, src string) *jobfile.InputError {
+	t.Helper()
+	_, err := jobfile.ParseJob("test.yaml", []byte(src))
+	if err == nil {
+		t.Fatalf("ParseJob succeeded, want an error")
+	}
+	var ie *jobfile.InputError
+	if !errors.As(err, &ie) {
+		t.Fatalf("error %v (%T) is not an *InputError", err, err)
+	}
+	if ie.File != "test.yaml" {
+		t.Errorf("File = %q, want test.yaml", ie.File)
+	}
+	return ie
+}
+
+// near compares with a relative tolerance.
+func closeTo(got, want, rel float64) bool {
+	if want == 0 {
+		return math.Abs(got) <= rel
+	}
+	return math.Abs(got-want) <= rel*math.Abs(want)
+}
+
+// readBack is the tolerance for inputs read back: only float rounding.
+const readBack = 1e-12
+
+const minimalUS = `mark: M1
+load:
+  required: 95 kip
+member:
+  shape: angle
+  size: L4x4x1/2
+  grade: A36
+`
+
