@@ -22,6 +22,7 @@ import (
 
 	"gaugeline/detail"
 	"gaugeline/detail/jobfile"
+	"gaugeline/detail/sheet"
 	"gaugeline/dxfout"
 	"gaugeline/fileset"
 )
@@ -396,7 +397,7 @@ func jobFiles(cfg Config, job *jobfile.Job, row *Row) ([]dxfout.File, error) {
 	if !cfg.Sheets {
 		return files, nil
 	}
-	s, err := detail.NewSheet(r, false)
+	s, err := sheet.NewSheet(r, false)
 	if err != nil {
 		return nil, err
 	}

@@ -19,6 +19,8 @@ import (
 	"gaugeline/fileset"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
+
+	"gonum.org/v1/gonum/spatial/r2"
 )
 
 // Reverify (SPEC §8): measured holes matched to the design, per-hole
@@ -691,7 +693,7 @@ func fitRigid(ps, qs []abVec, keep float64) abRigid {
 // among fits as good as each other (a symmetric pattern), the part's
 // contour decides (the start whose contour lies from the datum into +x and
 // +y), then the smallest rotation.
-func bestFit(des, mea []abVec, gate float64, contour []measured.Point) (abRigid, []int, int) {
+func bestFit(des, mea []abVec, gate float64, contour []r2.Vec) (abRigid, []int, int) {
 	dc, mc := abCentroid(des), abCentroid(mea)
 	var starts []abRigid
 	centred := func(th float64) abRigid {
@@ -851,7 +853,7 @@ func principalAxis(ps []abVec) (float64, bool) {
 	return 0.5 * math.Atan2(2*sxy, sxx-syy), true
 }
 
-func contourMin(ps []measured.Point) abVec {
+func contourMin(ps []r2.Vec) abVec {
 	lo := abVec{math.Inf(1), math.Inf(1)}
 	for _, p := range ps {
 		lo.x, lo.y = min(lo.x, p.X), min(lo.y, p.Y)
@@ -1194,7 +1196,7 @@ func (ab *AsBuilt) ratioRows() [][]string {
 	for i, x := range ab.Report.Results {
 		dr, change := "-", "-"
 		if v, ok := design[x.ID]; ok {
-			dr, change = ratio(v), fmt.Sprintf("%+.3f", x.Ratio-v)
+			dr, change = RatioText(v), fmt.Sprintf("%+.3f", x.Ratio-v)
 			if math.Abs(x.Ratio-v) < 5e-4 {
 				change = "0.000"
 			}
@@ -1203,7 +1205,7 @@ func (ab *AsBuilt) ratioRows() [][]string {
 		if i == ab.Report.Governing {
 			mark += " <"
 		}
-		rows = append(rows, []string{x.ID, x.Clause, dr, ratio(x.Ratio), change, mark})
+		rows = append(rows, []string{x.ID, x.Clause, dr, RatioText(x.Ratio), change, mark})
 	}
 	return rows
 }

@@ -14,6 +14,8 @@ import (
 	"gaugeline/detail/measured"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
+
+	"gonum.org/v1/gonum/spatial/r2"
 )
 
 const measuredDir = "../testdata/measured"
@@ -241,7 +243,7 @@ func TestBestFitRecoversRigidMotion(t *testing.T) {
 			set := synthetic(d)
 			if tt.contour {
 				w, l := float64(d.Conn.Member.Width), float64(lastX(d.Conn.Holes))+150
-				set.Contour = []measured.Point{{X: 0, Y: 0}, {X: l, Y: 0}, {X: l, Y: w}, {X: 0, Y: w}}
+				set.Contour = []r2.Vec{{X: 0, Y: 0}, {X: l, Y: 0}, {X: l, Y: w}, {X: 0, Y: w}}
 			}
 			rotateSet(set, tt.deg*math.Pi/180, tt.tx, tt.ty)
 			ab, err := Reverify(d, set, ReverifyOptions{Align: AlignBestFit})

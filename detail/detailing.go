@@ -10,6 +10,8 @@ import (
 	"gaugeline/engine"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
+
+	"gonum.org/v1/gonum/spatial/r2"
 )
 
 // tol is the slack of every detailing comparison, in mm: a layout exactly
@@ -359,15 +361,15 @@ func minSpacingFindings(c *engine.Connection) []Finding {
 // segment along its long axis, of length |Dx − Dy|, swept by a circle of
 // radius min(Dx, Dy)/2: a round hole is a degenerate segment, a slot a
 // stadium.
-func stadium(x, y units.Length, s engine.HoleShape) (a, b Point, r float64) {
+func stadium(x, y units.Length, s engine.HoleShape) (a, b r2.Vec, r float64) {
 	cx, cy := float64(x), float64(y)
 	dx, dy := float64(s.Dx), float64(s.Dy)
 	if dx >= dy {
 		half := (dx - dy) / 2
-		return Point{cx - half, cy}, Point{cx + half, cy}, dy / 2
+		return r2.Vec{X: cx - half, Y: cy}, r2.Vec{X: cx + half, Y: cy}, dy / 2
 	}
 	half := (dy - dx) / 2
-	return Point{cx, cy - half}, Point{cx, cy + half}, dx / 2
+	return r2.Vec{X: cx, Y: cy - half}, r2.Vec{X: cx, Y: cy + half}, dx / 2
 }
 
 // clearDistance is the least distance between the outlines of two holes in
@@ -383,7 +385,7 @@ func clearDistanceIn(h1, h2 *engine.Hole, p ply) float64 {
 }
 
 // segmentDistance is the least distance between segments ab and cd.
-func segmentDistance(a, b, c, d Point) float64 {
+func segmentDistance(a, b, c, d r2.Vec) float64 {
 	if segmentsCross(a, b, c, d) {
 		return 0
 	}
@@ -391,19 +393,19 @@ func segmentDistance(a, b, c, d Point) float64 {
 }
 
 // cross is the z component of (a − o) × (b − o).
-func cross(o, a, b Point) float64 { return (a.X-o.X)*(b.Y-o.Y) - (a.Y-o.Y)*(b.X-o.X) }
+func cross(o, a, b r2.Vec) float64 { return (a.X-o.X)*(b.Y-o.Y) - (a.Y-o.Y)*(b.X-o.X) }
 
 // segmentsCross reports a proper crossing of ab and cd; touching and
 // collinear overlaps put an end point on the other segment, which
 // pointSegment already measures as zero.
-func segmentsCross(a, b, c, d Point) bool {
+func segmentsCross(a, b, c, d r2.Vec) bool {
 	d1, d2 := cross(c, d, a), cross(c, d, b)
 	d3, d4 := cross(a, b, c), cross(a, b, d)
 	return d1*d2 < 0 && d3*d4 < 0
 }
 
 // pointSegment is the distance from p to segment ab.
-func pointSegment(p, a, b Point) float64 {
+func pointSegment(p, a, b r2.Vec) float64 {
 	vx, vy := b.X-a.X, b.Y-a.Y
 	l2 := vx*vx + vy*vy
 	if l2 == 0 {

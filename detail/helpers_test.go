@@ -53,3 +53,20 @@ member:
   grade: A36
 `
 
+// checkedJob checks the job file at path.
+func checkedJob(t *testing.T, path string) *Report {
+	t.Helper()
+	j, err := jobfile.LoadJob(path)
+	if err != nil {
+		t.Fatal(err)
+	}
+	d, err := Build(j)
+	if err != nil {
+		t.Fatal(err)
+	}
+	r, err := Check(d)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return r
+}

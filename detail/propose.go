@@ -1675,7 +1675,7 @@ func (p *problem) lift(x engine.Result, c *cand, maxBolts int) (text, lift strin
 		per := x.Available / units.Force(max(val("n"), 1))
 		need := int(math.Ceil(float64(x.Demand/per) - 1e-9))
 		text = fmt.Sprintf("%s needs at least %d bolts of %s %s (the stock allows %d; at best ratio %.3f)",
-			x.ID, need, boltSize(g.d, sys), p.grades[g.gi], maxBolts, x.Ratio)
+			x.ID, need, BoltSize(g.d, sys), p.grades[g.gi], maxBolts, x.Ratio)
 		lift = "allow more bolts (stock.max_per_line, stock.max_lines), a larger diameter or a stronger grade"
 		if x.ID == "bolts.slip" {
 			lift += ", or a class B faying surface"
@@ -1716,7 +1716,7 @@ func findingLift(id string) string {
 
 // Describe writes the layout in one line for people.
 func (l Layout) Describe(sys units.System) string {
-	s := fmt.Sprintf("%d × %s %s", l.Bolts(), boltSize(l.Diameter, sys), l.Grade)
+	s := fmt.Sprintf("%d × %s %s", l.Bolts(), BoltSize(l.Diameter, sys), l.Grade)
 	if l.Lines > 1 {
 		s += fmt.Sprintf(" in %d lines of %d, gage2 %s", l.Lines, l.PerLine, units.FormatJob(l.Gage2, sys))
 	}

@@ -33,7 +33,9 @@ func (p people) value(v float64, d units.Dim) string {
 	return fmt.Sprintf("%.3g", v)
 }
 
-func ratio(r float64) string {
+// RatioText writes a demand-to-capacity ratio to three decimals, ">99.99"
+// past that.
+func RatioText(r float64) string {
 	if r > 99.99 {
 		return ">99.99"
 	}
@@ -67,7 +69,7 @@ func (d *Design) Summary() [][2]string {
 	}
 	b := c.Bolt
 	bolts := fmt.Sprintf("%d × %s %s, threads %s, %s joint, %s",
-		len(c.Holes), boltSize(b.D, d.Job.Units), b.Grade.Name, b.Threads, b.Joint, holeKinds(&c))
+		len(c.Holes), BoltSize(b.D, d.Job.Units), b.Grade.Name, b.Threads, b.Joint, HoleKinds(&c))
 	if b.FillerT > 0 {
 		bolts += ", fillers " + p.length(b.FillerT)
 		if b.FillerDeveloped {
@@ -87,7 +89,7 @@ func (d *Design) Summary() [][2]string {
 // "standard holes", "long-slot transverse holes"; when the plate's ply
 // differs, "long-slot transverse holes in the member, standard in the
 // plate".
-func holeKinds(c *engine.Connection) string {
+func HoleKinds(c *engine.Connection) string {
 	if len(c.Holes) == 0 {
 		return "standard holes"
 	}
@@ -112,8 +114,8 @@ func lastX(hs []engine.Hole) units.Length {
 	return x
 }
 
-// boltSize names a bolt diameter: 3/4" or M20.
-func boltSize(d units.Length, sys units.System) string {
+// BoltSize names a bolt diameter: 3/4" or M20.
+func BoltSize(d units.Length, sys units.System) string {
 	if sys == units.SI {
 		return fmt.Sprintf("M%g", float64(d))
 	}
@@ -126,13 +128,13 @@ func boltSize(d units.Length, sys units.System) string {
 // for information, saying so when it passes (a detailing rule failed).
 func (r *Report) VerdictReason() string {
 	g := r.GoverningResult()
-	gov := fmt.Sprintf("governing %s (%s), ratio %s", g.ID, g.Clause, ratio(g.Ratio))
+	gov := fmt.Sprintf("governing %s (%s), ratio %s", g.ID, g.Clause, RatioText(g.Ratio))
 	if r.Pass {
 		return gov
 	}
 	fails := "fails " + strings.Join(r.Failing(), ", ")
 	if g.Pass {
-		return fmt.Sprintf("%s; governing limit state %s (%s) passes, ratio %s", fails, g.ID, g.Clause, ratio(g.Ratio))
+		return fmt.Sprintf("%s; governing limit state %s (%s) passes, ratio %s", fails, g.ID, g.Clause, RatioText(g.Ratio))
 	}
 	return fails + "; " + gov
 }
@@ -157,7 +159,7 @@ func (r *Report) WriteText(w io.Writer) error {
 		if i == r.Governing {
 			mark += " <"
 		}
-		fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\t%s\t%s\n", x.ID, x.Clause, p.force(x.Nominal), p.force(x.Available), ratio(x.Ratio), mark, x.Note)
+		fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\t%s\t%s\n", x.ID, x.Clause, p.force(x.Nominal), p.force(x.Available), RatioText(x.Ratio), mark, x.Note)
 	}
 	tw.Flush()
 	fmt.Fprintf(&b, "\n")
@@ -199,7 +201,7 @@ func (r *Report) WriteMarkdown(w io.Writer) error {
 			id = "**" + id + "**"
 			res += " (governs)"
 		}
-		fmt.Fprintf(&b, "| %s | %s | %s | %s | %s | %s | %s | %s |\n", id, x.Clause, p.force(x.Nominal), p.force(x.Available), p.force(x.Demand), ratio(x.Ratio), res, mdEscape(x.Note))
+		fmt.Fprintf(&b, "| %s | %s | %s | %s | %s | %s | %s | %s |\n", id, x.Clause, p.force(x.Nominal), p.force(x.Available), p.force(x.Demand), RatioText(x.Ratio), res, mdEscape(x.Note))
 	}
 	p.findingsMarkdown(&b, "Detailing", r.Findings)
 	fmt.Fprintf(&b, "\n**Verdict: %s** — %s.\n\n", strings.ToUpper(r.Verdict()), mdEscape(r.VerdictReason()))

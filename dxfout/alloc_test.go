@@ -35,7 +35,7 @@ func TestAllocationsPerEntity(t *testing.T) {
 		t.Skip("counts allocations")
 	}
 	for _, p := range jobs {
-		_, s := sheet(t, p)
+		_, s := sheetOf(t, p)
 		s.NotForFabrication = false
 		fs, err := Files(s)
 		if err != nil {

@@ -1,9 +1,9 @@
-// Package dxfout draws a cut sheet it is handed (a *detail.Sheet) as DXF
+// Package dxfout draws a cut sheet it is handed (a *sheet.Sheet) as DXF
 // (AutoCAD 2000 ASCII, written with github.com/yofu/dxf): the cut sheet
 // for people and the geometry-only CAM file of each part. It knows nothing
 // of limit states or of how the sheet was laid out, nor what a sheet
 // holds: the walk over the model is detail's (Sheet.Paint, Part.Paint),
-// and dxfout only implements detail.Painter, one entity a call.
+// and dxfout only implements sheet.Painter, one entity a call.
 //
 // Units: drawing units are the sheet's (inches for us, $INSUNITS 1 and
 // $MEASUREMENT 0; millimetres for si, $INSUNITS 4 and $MEASUREMENT 1),

@@ -10,8 +10,9 @@ import (
 	"github.com/yofu/dxf/format"
 	"github.com/yofu/dxf/object"
 	"github.com/yofu/dxf/table"
+	"gonum.org/v1/gonum/spatial/r2"
 
-	"gaugeline/detail"
+	"gaugeline/detail/sheet"
 	"gaugeline/fileset"
 	"gaugeline/rules/units"
 )
@@ -24,7 +25,7 @@ type File = fileset.File
 // fabrication, the CAM file MARK-PART.cam.dxf of each part, in that order,
 // each starting with the sheet's stamp (see Comment). Drawing cannot fail
 // today; the error is there for a writer that can.
-func Files(s *detail.Sheet) ([]File, error) {
+func Files(s *sheet.Sheet) ([]File, error) {
 	out := []File{{Name: s.Mark + ".dxf", Data: drawSheet(s, s.Stamp)}}
 	if s.NotForFabrication {
 		return out, nil
@@ -37,19 +38,19 @@ func Files(s *detail.Sheet) ([]File, error) {
 }
 
 // Sheet draws the cut sheet, without a stamp. The error is always nil.
-func Sheet(s *detail.Sheet) ([]byte, error) { return drawSheet(s, ""), nil }
+func Sheet(s *sheet.Sheet) ([]byte, error) { return drawSheet(s, ""), nil }
 
 // CAM draws one part alone in its own frame: the closed contour and the
 // holes, nothing else; without a stamp. The error is always nil.
-func CAM(part *detail.Part, sys units.System) ([]byte, error) { return drawCAM(part, sys, ""), nil }
+func CAM(part *sheet.Part, sys units.System) ([]byte, error) { return drawCAM(part, sys, ""), nil }
 
-func drawSheet(s *detail.Sheet, stamp string) []byte {
+func drawSheet(s *sheet.Sheet, stamp string) []byte {
 	p := newPen(256)
 	lo, hi := s.Paint(p)
 	return p.write(s.Units, s.TextHeight, lo, hi, stamp)
 }
 
-func drawCAM(part *detail.Part, sys units.System, stamp string) []byte {
+func drawCAM(part *sheet.Part, sys units.System, stamp string) []byte {
 	p := newPen(1 + len(part.Holes))
 	lo, hi := part.Paint(p)
 	return p.write(sys, 1, lo, hi, stamp)
@@ -75,13 +76,13 @@ func oneLine(s string) string { return strings.NewReplacer("\r", " ", "\n", " ")
 
 // layerColor is the ACI colour of a layer: parts in the foreground
 // colour, holes red, dimensions cyan, reference lines grey.
-func layerColor(l detail.Layer) color.ColorNumber {
+func layerColor(l sheet.Layer) color.ColorNumber {
 	switch l {
-	case detail.LayerHoles:
+	case sheet.LayerHoles:
 		return color.Red
-	case detail.LayerDimensions:
+	case sheet.LayerDimensions:
 		return color.Cyan
-	case detail.LayerReference:
+	case sheet.LayerReference:
 		return color.Grey128
 	}
 	return color.White
@@ -89,25 +90,25 @@ func layerColor(l detail.Layer) color.ColorNumber {
 
 // anchor maps our alignments onto the library's; all of them write the
 // alignment point.
-func anchor(a detail.Align) int {
+func anchor(a sheet.Align) int {
 	switch a {
-	case detail.AlignCenterBottom:
+	case sheet.AlignCenterBottom:
 		return entity.CENTER_BOTTOM
-	case detail.AlignCenterMiddle:
+	case sheet.AlignCenterMiddle:
 		return entity.CENTER_CENTER
-	case detail.AlignCenterTop:
+	case sheet.AlignCenterTop:
 		return entity.CENTER_TOP
-	case detail.AlignRightBottom:
+	case sheet.AlignRightBottom:
 		return entity.RIGHT_BOTTOM
-	case detail.AlignRightMiddle:
+	case sheet.AlignRightMiddle:
 		return entity.RIGHT_CENTER
-	case detail.AlignRightTop:
+	case sheet.AlignRightTop:
 		return entity.RIGHT_TOP
 	}
 	return entity.LEFT_BASE
 }
 
-// pen is one DXF file being drawn: a detail.Painter that turns each item
+// pen is one DXF file being drawn: a sheet.Painter that turns each item
 // into the library's entity. It builds the file's skeleton itself rather
 // than through drawing.New, which hands every drawing the library's
 // package-level layer "0", line types and text style and writes handles,
@@ -116,7 +117,7 @@ func anchor(a detail.Align) int {
 type pen struct {
 	continuous *table.LineType
 	layer0     *table.Layer
-	layers     []*table.Layer // by detail.Layer; nil where not declared
+	layers     []*table.Layer // by sheet.Layer; nil where not declared
 	style      *table.Style
 	tables     table.Tables
 	blocks     block.Blocks
@@ -166,7 +167,7 @@ func newPen(n int) *pen {
 }
 
 // Layers adds the layers to the layer table, after layer 0.
-func (p *pen) Layers(ls []detail.Layer) {
+func (p *pen) Layers(ls []sheet.Layer) {
 	for _, l := range ls {
 		ly := table.NewLayer(l.String(), layerColor(l), p.continuous)
 		ly.SetPlotStyle(p.layer0.PlotStyle)
@@ -178,14 +179,14 @@ func (p *pen) Layers(ls []detail.Layer) {
 	}
 }
 
-func (p *pen) layer(l detail.Layer) *table.Layer {
+func (p *pen) layer(l sheet.Layer) *table.Layer {
 	if int(l) >= len(p.layers) || p.layers[l] == nil {
 		panic("dxfout: layer " + l.String() + " not declared by the painter's Layers")
 	}
 	return p.layers[l]
 }
 
-func (p *pen) Line(a, b detail.Point, l detail.Layer) {
+func (p *pen) Line(a, b r2.Vec, l sheet.Layer) {
 	e := entity.NewLine()
 	e.Start[0], e.Start[1] = a.X, a.Y
 	e.End[0], e.End[1] = b.X, b.Y
@@ -193,7 +194,7 @@ func (p *pen) Line(a, b detail.Point, l detail.Layer) {
 	p.entities = append(p.entities, e)
 }
 
-func (p *pen) Circle(c detail.Point, r float64, l detail.Layer) {
+func (p *pen) Circle(c r2.Vec, r float64, l sheet.Layer) {
 	e := entity.NewCircle()
 	e.Center[0], e.Center[1] = c.X, c.Y
 	e.Radius = r
@@ -202,7 +203,7 @@ func (p *pen) Circle(c detail.Point, r float64, l detail.Layer) {
 }
 
 // ClosedPolyline draws a closed LWPOLYLINE; bulges may be nil.
-func (p *pen) ClosedPolyline(pts []detail.Point, bulges []float64, l detail.Layer) {
+func (p *pen) ClosedPolyline(pts []r2.Vec, bulges []float64, l sheet.Layer) {
 	e := entity.NewLwPolyline(len(pts))
 	for i, q := range pts {
 		e.Vertices[i][0], e.Vertices[i][1] = q.X, q.Y
@@ -214,7 +215,7 @@ func (p *pen) ClosedPolyline(pts []detail.Point, bulges []float64, l detail.Laye
 }
 
 // Text draws a TEXT in the one text style.
-func (p *pen) Text(t detail.Text) {
+func (p *pen) Text(t sheet.Text) {
 	e := entity.NewText()
 	e.Coord1[0], e.Coord1[1] = t.At.X, t.At.Y
 	e.Height = t.Height
@@ -237,7 +238,7 @@ type section interface {
 // after the header in order, then the header, which records the next free
 // one) and writes the file: the stamp's comment, the sections, EOF.
 // textHeight is recorded as the text style's last height used.
-func (p *pen) write(sys units.System, textHeight float64, lo, hi detail.Point, stamp string) []byte {
+func (p *pen) write(sys units.System, textHeight float64, lo, hi r2.Vec, stamp string) []byte {
 	p.style.LastHeightUsed = textHeight
 	h := &header{insunits: 1, measurement: 0, extmin: lo, extmax: hi}
 	if sys == units.SI {
@@ -265,7 +266,7 @@ func (p *pen) write(sys units.System, textHeight float64, lo, hi detail.Point, s
 // write our own.
 type header struct {
 	insunits, measurement int
-	extmin, extmax        detail.Point
+	extmin, extmax        r2.Vec
 	handseed              int
 }
 

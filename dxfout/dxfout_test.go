@@ -13,6 +13,7 @@ import (
 
 	"gaugeline/detail"
 	"gaugeline/detail/jobfile"
+	"gaugeline/detail/sheet"
 	"gaugeline/rules/units"
 )
 
@@ -84,11 +85,11 @@ func checked(t testing.TB, path string) *detail.Report {
 	return r
 }
 
-// sheet lays out the job's sheet, stamped when the connection fails.
-func sheet(t testing.TB, path string) (*detail.Report, *detail.Sheet) {
+// sheetOf lays out the job's sheet, stamped when the connection fails.
+func sheetOf(t testing.TB, path string) (*detail.Report, *sheet.Sheet) {
 	t.Helper()
 	r := checked(t, path)
-	s, err := detail.NewSheet(r, !r.Pass)
+	s, err := sheet.NewSheet(r, !r.Pass)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -103,7 +104,7 @@ type wantHole struct {
 
 // jobHoles returns the design's holes in the job's units: the member's ply
 // in the member's frame, or the plate's ply in the plate's frame (x' =
-// FreeEdge − x, y' = YMax − y, see detail.Sheet), computed here from the
+// FreeEdge − x, y' = YMax − y, see sheet.Sheet), computed here from the
 // engine's model.
 func jobHoles(r *detail.Report, plate bool) []wantHole {
 	c := &r.Design.Conn
@@ -214,7 +215,7 @@ func checkHeader(t *testing.T, f *dxfFile, sys units.System) {
 func TestCAMReadsBackToTheJob(t *testing.T) {
 	for _, path := range jobs {
 		t.Run(filepath.Base(path), func(t *testing.T) {
-			r, s := sheet(t, path)
+			r, s := sheetOf(t, path)
 			for vi, v := range s.Views {
 				b, err := CAM(&v.Part, s.Units)
 				if err != nil {
@@ -260,7 +261,7 @@ func TestCAMReadsBackToTheJob(t *testing.T) {
 func TestSheetReadsBack(t *testing.T) {
 	for _, path := range jobs {
 		t.Run(filepath.Base(path), func(t *testing.T) {
-			r, s := sheet(t, path)
+			r, s := sheetOf(t, path)
 			b, err := Sheet(s)
 			if err != nil {
 				t.Fatal(err)
@@ -297,8 +298,8 @@ func TestSheetReadsBack(t *testing.T) {
 				}
 			}
 			sameHoles(t, "sheet", holes, want)
-			for _, w := range []string{r.Design.Job.Mark, detail.Stamp, "HOLE SCHEDULE"} {
-				if w == detail.Stamp && r.Pass {
+			for _, w := range []string{r.Design.Job.Mark, sheet.Stamp, "HOLE SCHEDULE"} {
+				if w == sheet.Stamp && r.Pass {
 					continue
 				}
 				if !texts[w] {
@@ -310,7 +311,7 @@ func TestSheetReadsBack(t *testing.T) {
 }
 
 func TestFilesNames(t *testing.T) {
-	_, s := sheet(t, "../testdata/jobs/us-pipe-rack-brace.yaml")
+	_, s := sheetOf(t, "../testdata/jobs/us-pipe-rack-brace.yaml")
 	fs, err := Files(s)
 	if err != nil {
 		t.Fatal(err)
@@ -322,7 +323,7 @@ func TestFilesNames(t *testing.T) {
 	if want := []string{"PR-VB2.dxf", "PR-VB2-member.cam.dxf", "PR-VB2-plate.cam.dxf"}; !equal(names, want) {
 		t.Errorf("files %v, want %v", names, want)
 	}
-	_, s = sheet(t, "../testdata/jobs/us-single-angle.yaml") // fails: stamped, no CAM
+	_, s = sheetOf(t, "../testdata/jobs/us-single-angle.yaml") // fails: stamped, no CAM
 	fs, err = Files(s)
 	if err != nil || len(fs) != 1 || fs[0].Name != "HB-7.dxf" {
 		t.Errorf("stamped sheet: %v files, err %v", len(fs), err)
@@ -356,7 +357,7 @@ func allFiles(path string) ([]File, error) {
 	if err != nil {
 		return nil, err
 	}
-	s, err := detail.NewSheet(r, !r.Pass)
+	s, err := sheet.NewSheet(r, !r.Pass)
 	if err != nil {
 		return nil, err
 	}
@@ -426,7 +427,7 @@ func cpuTime() time.Duration {
 // BenchmarkFiles draws one sheet's files (the cut sheet and two CAM
 // files of the SI double angle, 181 entities).
 func BenchmarkFiles(b *testing.B) {
-	_, s := sheet(b, "../testdata/jobs/si-double-angle.yaml")
+	_, s := sheetOf(b, "../testdata/jobs/si-double-angle.yaml")
 	cpu0 := cpuTime()
 	for b.Loop() {
 		if _, err := Files(s); err != nil {
@@ -439,7 +440,7 @@ func BenchmarkFiles(b *testing.B) {
 // BenchmarkFilesParallel draws the same on every core at once: with
 // nothing shared between drawings, ns/op falls with the cores.
 func BenchmarkFilesParallel(b *testing.B) {
-	_, s := sheet(b, "../testdata/jobs/si-double-angle.yaml")
+	_, s := sheetOf(b, "../testdata/jobs/si-double-angle.yaml")
 	cpu0 := cpuTime()
 	b.RunParallel(func(pb *testing.PB) {
 		for pb.Next() {

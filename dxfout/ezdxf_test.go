@@ -115,7 +115,7 @@ func TestEzdxfReadsBack(t *testing.T) {
 	want := map[string]expect{}
 	var paths []string
 	for _, job := range jobs {
-		r, s := sheet(t, job)
+		r, s := sheetOf(t, job)
 		b, err := Sheet(s)
 		if err != nil {
 			t.Fatal(err)
@@ -234,7 +234,7 @@ func TestEzdxfDraws(t *testing.T) {
 	if why := matplotlibMissing(); why != "" {
 		t.Skip("skipping the render: " + why)
 	}
-	_, s := sheet(t, "../testdata/jobs/si-slotted.yaml")
+	_, s := sheetOf(t, "../testdata/jobs/si-slotted.yaml")
 	b, err := Sheet(s)
 	if err != nil {
 		t.Fatal(err)

@@ -83,7 +83,7 @@ func diffDXF(got, want []byte) string {
 func TestGolden(t *testing.T) {
 	for _, job := range goldenJobs {
 		t.Run(filepath.Base(job), func(t *testing.T) {
-			_, s := sheet(t, job)
+			_, s := sheetOf(t, job)
 			fs, err := Files(s)
 			if err != nil {
 				t.Fatal(err)

@@ -11,11 +11,13 @@ import (
 	"strings"
 	"testing"
 
+	"gonum.org/v1/gonum/spatial/r2"
 	"pgregory.net/rapid"
 
 	"gaugeline/detail"
 	"gaugeline/detail/jobfile"
 	"gaugeline/detail/measured"
+	"gaugeline/detail/sheet"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
 )
@@ -100,7 +102,7 @@ func camFiles(t tb, src string) (*detail.Design, map[string][]byte) {
 	if !r.Pass {
 		t.Fatalf("the test job fails %v:\n%s", r.Failing(), src)
 	}
-	s, err := detail.NewSheet(r, false)
+	s, err := sheet.NewSheet(r, false)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -305,7 +307,7 @@ func TestPerPlyRoundTripEzdxf(t *testing.T) {
 				Width: h.Width * k, Length: h.Length * k, Axis: h.Axis, Slot: h.Slot})
 		}
 		for _, q := range r.Contour {
-			set.Contour = append(set.Contour, measured.Point{X: q[0] * k, Y: q[1] * k})
+			set.Contour = append(set.Contour, r2.Vec{X: q[0] * k, Y: q[1] * k})
 		}
 		if len(set.Holes) != len(f.d.Conn.Holes) || len(set.Contour) == 0 {
 			t.Fatalf("%s: ezdxf read %d holes and a contour of %d points, want %d holes", f.path, len(set.Holes), len(set.Contour), len(f.d.Conn.Holes))

@@ -83,7 +83,7 @@ func TestConcurrentWithOtherLibraryUsers(t *testing.T) {
 // drawing with Comment's line before it, a stamp with line breaks on one
 // line.
 func TestFilesStampLikeComment(t *testing.T) {
-	_, s := sheet(t, "../testdata/jobs/us-pipe-rack-brace.yaml")
+	_, s := sheetOf(t, "../testdata/jobs/us-pipe-rack-brace.yaml")
 	s.Stamp = "gaugeline v1 sheet\r\nsha256:0123"
 	fs, err := Files(s)
 	if err != nil {

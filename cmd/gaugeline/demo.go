@@ -16,6 +16,7 @@ import (
 	"gaugeline/detail/calc"
 	"gaugeline/detail/jobfile"
 	"gaugeline/detail/measured"
+	"gaugeline/detail/sheet"
 	"gaugeline/dxfout"
 	"gaugeline/fileset"
 	"gaugeline/rules/units"
@@ -123,7 +124,7 @@ func demoWrite(p *detail.Proposal, dir string, out io.Writer) error {
 	if err != nil {
 		return err
 	}
-	s, err := detail.NewSheet(r, !r.Pass)
+	s, err := sheet.NewSheet(r, !r.Pass)
 	if err != nil {
 		return err
 	}

@@ -11,6 +11,7 @@ import (
 
 	"gaugeline/detail"
 	"gaugeline/detail/jobfile"
+	"gaugeline/detail/sheet"
 	"gaugeline/dxfout"
 	"gaugeline/fileset"
 )
@@ -56,7 +57,7 @@ func runSheet(_ context.Context, o *rootOptions, so sheetOptions, path string, o
 		fmt.Fprintf(o.stderr, "gaugeline: hint: run 'gaugeline check %s' for every failing rule; --not-for-fabrication writes a stamped sheet\n", path)
 		return exitError{exitFail}
 	}
-	s, err := detail.NewSheet(r, so.notForFabrication)
+	s, err := sheet.NewSheet(r, so.notForFabrication)
 	if err != nil {
 		return err
 	}
@@ -76,7 +77,7 @@ func runSheet(_ context.Context, o *rootOptions, so sheetOptions, path string, o
 		fmt.Fprintln(out, filepath.Join(so.dir, job.Mark, f.Name))
 	}
 	if so.notForFabrication {
-		fmt.Fprintf(o.stderr, "gaugeline: note: %s stamped %s; no CAM file written\n", files[0].Name, detail.Stamp)
+		fmt.Fprintf(o.stderr, "gaugeline: note: %s stamped %s; no CAM file written\n", files[0].Name, sheet.Stamp)
 	}
 	if !r.Pass {
 		return exitError{exitFail}

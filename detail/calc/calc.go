@@ -2,7 +2,7 @@
 // a single self-contained HTML page (inline CSS and SVG, no script, no
 // font or image fetched) that a reviewer reads and an engineer of record
 // signs. It shows the job, the layout drawn from the cut-sheet model
-// (detail.Sheet, the one the DXF is drawn from), every limit state with
+// (sheet.Sheet, the one the DXF is drawn from), every limit state with
 // its formula, the values put into it, the result and the clause, the
 // detailing findings, the verdict and the caution.
 //
@@ -25,6 +25,7 @@ import (
 	"strings"
 
 	"gaugeline/detail"
+	"gaugeline/detail/sheet"
 	"gaugeline/engine"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
@@ -37,7 +38,7 @@ func HTML(r *detail.Report) ([]byte, error) {
 	if r == nil || r.Design == nil || len(r.Results) == 0 {
 		panic("calc: a report needs a checked design")
 	}
-	s, err := detail.NewSheet(r, !r.Pass)
+	s, err := sheet.NewSheet(r, !r.Pass)
 	if err != nil {
 		return nil, fmt.Errorf("calc: %w", err)
 	}
@@ -143,7 +144,7 @@ type page struct {
 	AvailableSymbol      string
 }
 
-func newPage(r *detail.Report, s *detail.Sheet) page {
+func newPage(r *detail.Report, s *sheet.Sheet) page {
 	d := r.Design
 	c := &d.Conn
 	f := fmtr{d.Job.Units}
@@ -218,7 +219,7 @@ func newPage(r *detail.Report, s *detail.Sheet) page {
 	}
 	p.DrawingNote = fmt.Sprintf("Drawn from the cut-sheet model of %s.dxf: %s; dimensions in %s; %s. Not to scale on screen.", d.Job.Mark, views, unit, lines)
 	if !r.Pass {
-		p.DrawingNote += " The connection fails: the views are stamped " + detail.Stamp + "."
+		p.DrawingNote += " The connection fails: the views are stamped " + sheet.Stamp + "."
 	}
 	if wide {
 		p.DrawingNote += " The drawing is long: scroll it sideways on screen; it prints scaled to the page."

@@ -2,15 +2,16 @@ package calc
 
 import (
 	"fmt"
+	"gaugeline/detail/sheet"
 	"html/template"
 	"math"
 	"strconv"
 	"strings"
 
-	"gaugeline/detail"
+	"gonum.org/v1/gonum/spatial/r2"
 )
 
-// This file draws the views of a cut sheet (detail.Sheet, the model the
+// This file draws the views of a cut sheet (sheet.Sheet, the model the
 // DXF is drawn from) as one inline SVG. The SVG's user unit is the sheet's
 // drawing unit (inches for us, millimetres for si), so the browser scales
 // the drawing to fit through the viewBox alone.
@@ -56,30 +57,30 @@ func exact(v float64) string { return strconv.FormatFloat(v, 'g', -1, 64) }
 // view's (y-up) frame.
 type svgPen struct {
 	b      strings.Builder
-	lo, hi detail.Point
+	lo, hi r2.Vec
 	empty  bool
 }
 
-func (p *svgPen) grow(q detail.Point) {
+func (p *svgPen) grow(q r2.Vec) {
 	if p.empty {
 		p.lo, p.hi, p.empty = q, q, false
 		return
 	}
-	p.lo = detail.Point{X: min(p.lo.X, q.X), Y: min(p.lo.Y, q.Y)}
-	p.hi = detail.Point{X: max(p.hi.X, q.X), Y: max(p.hi.Y, q.Y)}
+	p.lo = r2.Vec{X: min(p.lo.X, q.X), Y: min(p.lo.Y, q.Y)}
+	p.hi = r2.Vec{X: max(p.hi.X, q.X), Y: max(p.hi.Y, q.Y)}
 }
 
 // pt writes a point flipped to SVG's y-down sense.
-func pt(q detail.Point) string { return svgNum(q.X) + "," + svgNum(-q.Y) }
+func pt(q r2.Vec) string { return svgNum(q.X) + "," + svgNum(-q.Y) }
 
-func (p *svgPen) line(a, b detail.Point, class string) {
+func (p *svgPen) line(a, b r2.Vec, class string) {
 	fmt.Fprintf(&p.b, `<line class="%s" x1="%s" y1="%s" x2="%s" y2="%s"/>`+"\n",
 		class, svgNum(a.X), svgNum(-a.Y), svgNum(b.X), svgNum(-b.Y))
 	p.grow(a)
 	p.grow(b)
 }
 
-func (p *svgPen) polygon(pts []detail.Point, class string) {
+func (p *svgPen) polygon(pts []r2.Vec, class string) {
 	s := make([]string, len(pts))
 	for i, q := range pts {
 		s[i] = pt(q)
@@ -88,13 +89,13 @@ func (p *svgPen) polygon(pts []detail.Point, class string) {
 	fmt.Fprintf(&p.b, `<polygon class="%s" points="%s"/>`+"\n", class, strings.Join(s, " "))
 }
 
-func (p *svgPen) hole(part string, h detail.SheetHole) {
+func (p *svgPen) hole(part string, h sheet.SheetHole) {
 	data := fmt.Sprintf(`data-part="%s" data-hole="%s" data-x="%s" data-y="%s" data-dx="%s" data-dy="%s"`,
 		template.HTMLEscapeString(part), template.HTMLEscapeString(h.ID),
 		exact(h.Centre.X), exact(h.Centre.Y), exact(h.Dx), exact(h.Dy))
-	half := detail.Point{X: h.Dx / 2, Y: h.Dy / 2}
-	p.grow(detail.Point{X: h.Centre.X - half.X, Y: h.Centre.Y - half.Y})
-	p.grow(h.Centre.Add(half))
+	half := r2.Vec{X: h.Dx / 2, Y: h.Dy / 2}
+	p.grow(r2.Vec{X: h.Centre.X - half.X, Y: h.Centre.Y - half.Y})
+	p.grow(r2.Add(h.Centre, half))
 	if h.Round() {
 		fmt.Fprintf(&p.b, `<circle class="hole" cx="%s" cy="%s" r="%s" %s><title>%s</title></circle>`+"\n",
 			svgNum(h.Centre.X), svgNum(-h.Centre.Y), svgNum(h.Diameter()/2), data, template.HTMLEscapeString(h.ID))
@@ -125,25 +126,25 @@ func (p *svgPen) hole(part string, h detail.SheetHole) {
 
 // anchors maps a sheet alignment onto SVG's text-anchor and
 // dominant-baseline.
-func anchors(a detail.Align) (anchor, baseline string) {
+func anchors(a sheet.Align) (anchor, baseline string) {
 	switch a {
-	case detail.AlignCenterBottom:
+	case sheet.AlignCenterBottom:
 		return "middle", "alphabetic"
-	case detail.AlignCenterMiddle:
+	case sheet.AlignCenterMiddle:
 		return "middle", "central"
-	case detail.AlignCenterTop:
+	case sheet.AlignCenterTop:
 		return "middle", "hanging"
-	case detail.AlignRightBottom:
+	case sheet.AlignRightBottom:
 		return "end", "alphabetic"
-	case detail.AlignRightMiddle:
+	case sheet.AlignRightMiddle:
 		return "end", "central"
-	case detail.AlignRightTop:
+	case sheet.AlignRightTop:
 		return "end", "hanging"
 	}
 	return "start", "alphabetic"
 }
 
-func (p *svgPen) text(t detail.Text, class string) {
+func (p *svgPen) text(t sheet.Text, class string) {
 	anchor, base := anchors(t.Align)
 	rot := ""
 	if t.Rotation != 0 {
@@ -161,8 +162,8 @@ func (p *svgPen) text(t detail.Text, class string) {
 
 // dimension draws a dimension as the sheet model lays it out (the same
 // layout the DXF draws).
-func (p *svgPen) dimension(d detail.Dimension, h float64) {
-	cls := detail.LayerDimensions.String()
+func (p *svgPen) dimension(d sheet.Dimension, h float64) {
+	cls := sheet.LayerDimensions.String()
 	g := d.Graphics(h)
 	for _, l := range g.Lines {
 		p.line(l.A, l.B, cls)
@@ -179,7 +180,7 @@ func (p *svgPen) dimension(d detail.Dimension, h float64) {
 }
 
 // viewSVG draws one view in its part's frame.
-func viewSVG(v *detail.View, h float64) *svgPen {
+func viewSVG(v *sheet.View, h float64) *svgPen {
 	p := &svgPen{empty: true}
 	part := v.Part.Name
 	pts := make([]string, len(v.Part.Contour))
@@ -199,7 +200,7 @@ func viewSVG(v *detail.View, h float64) *svgPen {
 	}
 	for _, t := range v.Texts {
 		class := t.Layer.String()
-		if t.Value == detail.Stamp {
+		if t.Value == sheet.Stamp {
 			class += " stamp"
 		}
 		p.text(t, class)
@@ -212,7 +213,7 @@ func viewSVG(v *detail.View, h float64) *svgPen {
 //
 // wide reports whether the drawing is wider on screen than a page (about
 // 1000 CSS pixels) at its least text size.
-func drawing(s *detail.Sheet) (svg template.HTML, wide bool) {
+func drawing(s *sheet.Sheet) (svg template.HTML, wide bool) {
 	h := s.TextHeight
 	margin, gap := 2*h, 6*h
 	var body strings.Builder

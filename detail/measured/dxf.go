@@ -7,6 +7,8 @@ import (
 	"math"
 	"strconv"
 	"strings"
+
+	"gonum.org/v1/gonum/spatial/r2"
 )
 
 // DXF reading: a small group-code reader that takes what reverify needs
@@ -122,7 +124,7 @@ type drawing struct {
 }
 
 type circle struct {
-	c     Point
+	c     r2.Vec
 	r     float64
 	layer string
 	line  int
@@ -131,7 +133,7 @@ type circle struct {
 // seg is a straight or arc segment from a to b: bulge is tan(θ/4), θ the
 // included angle, positive counter-clockwise (0: straight).
 type seg struct {
-	a, b  Point
+	a, b  r2.Vec
 	bulge float64
 	line  int
 }
@@ -391,7 +393,7 @@ func (d *drawing) addEntity(file string, e *entity) error {
 		d.oddExtruded++
 		return nil
 	}
-	mir := func(p Point) Point {
+	mir := func(p r2.Vec) r2.Vec {
 		if c.mirror && e.kind != "LINE" {
 			p.X = -p.X
 		}
@@ -411,7 +413,7 @@ func (d *drawing) addEntity(file string, e *entity) error {
 		if !(f[40] > 0) {
 			return &Error{File: file, Line: e.line, Field: e.kind + " group 40", Msg: "radius is not positive"}
 		}
-		ctr := Point{f[10], f[20]}
+		ctr := r2.Vec{X: f[10], Y: f[20]}
 		if e.kind == "CIRCLE" {
 			d.circles = append(d.circles, circle{mir(ctr), f[40], c.layer, e.line})
 			return nil
@@ -422,8 +424,8 @@ func (d *drawing) addEntity(file string, e *entity) error {
 			sweep += 2 * math.Pi
 		}
 		s := seg{
-			a:     mir(Point{ctr.X + f[40]*math.Cos(a0), ctr.Y + f[40]*math.Sin(a0)}),
-			b:     mir(Point{ctr.X + f[40]*math.Cos(a0+sweep), ctr.Y + f[40]*math.Sin(a0+sweep)}),
+			a:     mir(r2.Vec{X: ctr.X + f[40]*math.Cos(a0), Y: ctr.Y + f[40]*math.Sin(a0)}),
+			b:     mir(r2.Vec{X: ctr.X + f[40]*math.Cos(a0+sweep), Y: ctr.Y + f[40]*math.Sin(a0+sweep)}),
 			bulge: math.Tan(sweep / 4), line: e.line,
 		}
 		if c.mirror {
@@ -446,11 +448,11 @@ func (d *drawing) addEntity(file string, e *entity) error {
 				return missing(file, e, k)
 			}
 		}
-		d.segs = append(d.segs, seg{a: Point{f[10], f[20]}, b: Point{f[11], f[21]}, line: e.line})
+		d.segs = append(d.segs, seg{a: r2.Vec{X: f[10], Y: f[20]}, b: r2.Vec{X: f[11], Y: f[21]}, line: e.line})
 		d.segLayers = append(d.segLayers, c.layer)
 	case "LWPOLYLINE":
 		type vtx struct {
-			p     Point
+			p     r2.Vec
 			bulge float64
 			hasY  bool
 		}
@@ -471,7 +473,7 @@ func (d *drawing) addEntity(file string, e *entity) error {
 				}
 				switch p.code {
 				case 10:
-					vs = append(vs, vtx{p: Point{X: v}})
+					vs = append(vs, vtx{p: r2.Vec{X: v}})
 				case 20:
 					if len(vs) == 0 || vs[len(vs)-1].hasY {
 						return &Error{File: file, Line: p.line, Field: "LWPOLYLINE group 20", Msg: "y without its x (group 10)"}
@@ -486,7 +488,7 @@ func (d *drawing) addEntity(file string, e *entity) error {
 				}
 			}
 		}
-		pts := make([]Point, len(vs))
+		pts := make([]r2.Vec, len(vs))
 		bul := make([]float64, len(vs))
 		for i, v := range vs {
 			if !v.hasY {
@@ -520,7 +522,7 @@ func (d *drawing) addPolyline(file string, pl *entity, verts []entity) error {
 		d.skip("POLYLINE (3D, mesh or paper space)")
 		return nil
 	}
-	var pts []Point
+	var pts []r2.Vec
 	var bul []float64
 	for i := range verts {
 		v := &verts[i]
@@ -537,7 +539,7 @@ func (d *drawing) addPolyline(file string, pl *entity, verts []entity) error {
 		if _, ok := f[20]; !ok {
 			return missing(file, v, 20)
 		}
-		p, b := Point{f[10], f[20]}, f[42]
+		p, b := r2.Vec{X: f[10], Y: f[20]}, f[42]
 		if c.mirror {
 			p.X, b = -p.X, -b
 		}
@@ -547,7 +549,7 @@ func (d *drawing) addPolyline(file string, pl *entity, verts []entity) error {
 	return nil
 }
 
-func (d *drawing) addVertices(pts []Point, bul []float64, closed bool, layer string, line int) {
+func (d *drawing) addVertices(pts []r2.Vec, bul []float64, closed bool, layer string, line int) {
 	n := len(pts)
 	if n < 2 {
 		return
@@ -571,4 +573,4 @@ func (d *drawing) addVertices(pts []Point, bul []float64, closed bool, layer str
 	}
 }
 
-func dist(a, b Point) float64 { return math.Hypot(a.X-b.X, a.Y-b.Y) }
+func dist(a, b r2.Vec) float64 { return math.Hypot(a.X-b.X, a.Y-b.Y) }

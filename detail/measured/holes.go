@@ -6,6 +6,8 @@ import (
 	"math"
 	"slices"
 	"strings"
+
+	"gonum.org/v1/gonum/spatial/r2"
 )
 
 // chainTol is how close, in mm, two segment ends must be to join.
@@ -28,7 +30,7 @@ func (d *drawing) holes(file string, def Unit, layer string) (*Set, error) {
 		set.Notes = append(set.Notes, "the DXF does not set $INSUNITS: read in the job's units ("+def.Name+")")
 	}
 	k := u.MM
-	sc := func(p Point) Point { return Point{p.X * k, p.Y * k} }
+	sc := func(p r2.Vec) r2.Vec { return r2.Vec{X: p.X * k, Y: p.Y * k} }
 	for i := range d.circles {
 		d.circles[i].c, d.circles[i].r = sc(d.circles[i].c), d.circles[i].r*k
 	}
@@ -46,7 +48,7 @@ func (d *drawing) holes(file string, def Unit, layer string) (*Set, error) {
 	loops, layers = append(loops, chained...), append(layers, chainedLayers...)
 
 	// The contour is the closed loop of the largest area.
-	polys := make([][]Point, len(loops))
+	polys := make([][]r2.Vec, len(loops))
 	best, bestArea := -1, 0.0
 	for i, l := range loops {
 		polys[i] = flatten(l)
@@ -104,7 +106,7 @@ func (d *drawing) holes(file string, def Unit, layer string) (*Set, error) {
 				Hint: "name the holes' layer with --layer, or export only the part"}
 		}
 		for _, c := range cands {
-			if inside(Point{c.X, c.Y}, set.Contour) {
+			if inside(r2.Vec{X: c.X, Y: c.Y}, set.Contour) {
 				holes = append(holes, c.Hole)
 			} else {
 				outside++
@@ -193,7 +195,7 @@ func roundOrSlot(l []seg) (Hole, bool) {
 	}
 	half := func(s seg) bool { return math.Abs(math.Abs(s.bulge)-1) < 1e-3 }
 	straight := func(s seg) bool { return math.Abs(s.bulge) < 1e-9 }
-	mid := func(s seg) Point { return Point{(s.a.X + s.b.X) / 2, (s.a.Y + s.b.Y) / 2} }
+	mid := func(s seg) r2.Vec { return r2.Vec{X: (s.a.X + s.b.X) / 2, Y: (s.a.Y + s.b.Y) / 2} }
 	switch len(ss) {
 	case 2:
 		if half(ss[0]) && half(ss[1]) && ss[0].bulge*ss[1].bulge > 0 && math.Abs(dist(ss[0].a, ss[0].b)-dist(ss[1].a, ss[1].b)) < 1e-6*(1+dist(ss[0].a, ss[0].b)) {
@@ -214,7 +216,7 @@ func roundOrSlot(l []seg) (Hole, bool) {
 			if math.Abs(w1-w2) > tol || math.Abs(dist(s1.a, s1.b)-span) > tol || math.Abs(dist(s2.a, s2.b)-span) > tol {
 				continue
 			}
-			c := Point{(c1.X + c2.X) / 2, (c1.Y + c2.Y) / 2}
+			c := r2.Vec{X: (c1.X + c2.X) / 2, Y: (c1.Y + c2.Y) / 2}
 			axis := math.Atan2(c2.Y-c1.Y, c2.X-c1.X) // an axis has no sense: in [0, π)
 			if axis < 0 {
 				axis += math.Pi
@@ -236,7 +238,7 @@ func roundOrSlot(l []seg) (Hole, bool) {
 // radius), as scanners and some CAM exports write them: a round hole of
 // the circle's diameter.
 func regularPolygon(ss []seg) (Hole, bool) {
-	var c Point
+	var c r2.Vec
 	for _, s := range ss {
 		if s.bulge != 0 {
 			return Hole{}, false
@@ -267,7 +269,7 @@ func chain(segs []seg, layers []string) ([][]seg, []string) {
 		start bool
 	}
 	type key struct{ x, y int64 }
-	keyOf := func(p Point) key { return key{int64(math.Floor(p.X / chainTol)), int64(math.Floor(p.Y / chainTol))} }
+	keyOf := func(p r2.Vec) key { return key{int64(math.Floor(p.X / chainTol)), int64(math.Floor(p.Y / chainTol))} }
 	grid := map[key][]end{}
 	for i, s := range segs {
 		grid[keyOf(s.a)] = append(grid[keyOf(s.a)], end{i, true})
@@ -277,7 +279,7 @@ func chain(segs []seg, layers []string) ([][]seg, []string) {
 	// budget bounds the work of a hostile file (many ends in one place):
 	// past it, chaining stops and what is chained so far is kept.
 	budget := 64 * (len(segs) + 1000)
-	find := func(p Point) (end, bool) {
+	find := func(p r2.Vec) (end, bool) {
 		k := keyOf(p)
 		for dx := int64(-1); dx <= 1; dx++ {
 			for dy := int64(-1); dy <= 1; dy++ {
@@ -338,8 +340,8 @@ func chain(segs []seg, layers []string) ([][]seg, []string) {
 
 // flatten returns the loop as a polygon, arcs cut into chords of at most
 // 10°.
-func flatten(l []seg) []Point {
-	var pts []Point
+func flatten(l []seg) []r2.Vec {
+	var pts []r2.Vec
 	for _, s := range l {
 		pts = append(pts, s.a)
 		if s.bulge == 0 {
@@ -352,20 +354,20 @@ func flatten(l []seg) []Point {
 		theta := 4 * math.Atan(s.bulge)
 		off := L * (1 - s.bulge*s.bulge) / (4 * s.bulge)
 		nx, ny := -(s.b.Y-s.a.Y)/L, (s.b.X-s.a.X)/L
-		c := Point{(s.a.X+s.b.X)/2 + off*nx, (s.a.Y+s.b.Y)/2 + off*ny}
+		c := r2.Vec{X: (s.a.X+s.b.X)/2 + off*nx, Y: (s.a.Y+s.b.Y)/2 + off*ny}
 		r := dist(c, s.a)
 		a0 := math.Atan2(s.a.Y-c.Y, s.a.X-c.X)
 		n := min(36, int(math.Ceil(math.Abs(theta)/(math.Pi/18))))
 		for k := 1; k < n; k++ {
 			a := a0 + theta*float64(k)/float64(n)
-			pts = append(pts, Point{c.X + r*math.Cos(a), c.Y + r*math.Sin(a)})
+			pts = append(pts, r2.Vec{X: c.X + r*math.Cos(a), Y: c.Y + r*math.Sin(a)})
 		}
 	}
 	return pts
 }
 
 // area is the signed shoelace area of a polygon.
-func area(p []Point) float64 {
+func area(p []r2.Vec) float64 {
 	var s float64
 	for i := range p {
 		j := (i + 1) % len(p)
@@ -375,7 +377,7 @@ func area(p []Point) float64 {
 }
 
 // inside is the even-odd test of p against polygon poly.
-func inside(p Point, poly []Point) bool {
+func inside(p r2.Vec, poly []r2.Vec) bool {
 	in := false
 	for i, j := 0, len(poly)-1; i < len(poly); j, i = i, i+1 {
 		a, b := poly[i], poly[j]

@@ -3,6 +3,8 @@ package measured
 import (
 	"fmt"
 	"math"
+
+	"gonum.org/v1/gonum/spatial/r2"
 )
 
 // Caps on what a measured file may hold: beyond them it is not the
@@ -28,8 +30,7 @@ type Hole struct {
 	Line   int // line of the file where the hole is written
 }
 
-// Point is a point of the plane in millimetres.
-type Point struct{ X, Y float64 }
+// Points (a contour's vertices) are r2.Vec, in millimetres.
 
 // Set is what a measured file holds.
 type Set struct {
@@ -41,7 +42,7 @@ type Set struct {
 	Holes []Hole
 	// Contour is the part's outer contour (DXF only; nil when the file has
 	// no closed contour), arcs flattened to short chords.
-	Contour []Point
+	Contour []r2.Vec
 	// Notes are things a QA engineer should know about how the file was
 	// read (skipped entities, assumed units).
 	Notes []string

@@ -1,4 +1,4 @@
-package detail
+package sheet
 
 import (
 	"errors"
@@ -7,9 +7,12 @@ import (
 	"slices"
 	"strings"
 
+	"gaugeline/detail"
 	"gaugeline/engine"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
+
+	"gonum.org/v1/gonum/spatial/r2"
 )
 
 // This file is the cut-sheet model: what a shop drawing of one connection
@@ -70,16 +73,12 @@ func Layers() []Layer {
 	return []Layer{LayerContour, LayerHoles, LayerDimensions, LayerReference, LayerNotes, LayerTitle}
 }
 
-// Point is a point of the plane: in drawing units on a sheet, in mm where
-// a detailing check measures between holes.
-type Point struct{ X, Y float64 }
-
-// Add returns p + q.
-func (p Point) Add(q Point) Point { return Point{p.X + q.X, p.Y + q.Y} }
+// Points of the sheet are r2.Vec (gonum.org/v1/gonum/spatial/r2), in
+// drawing units; the whole program uses that one point type.
 
 // Segment is a straight line on a layer.
 type Segment struct {
-	A, B  Point
+	A, B  r2.Vec
 	Layer Layer
 }
 
@@ -100,7 +99,7 @@ const (
 
 // Text is one line of text.
 type Text struct {
-	At       Point
+	At       r2.Vec
 	Height   float64
 	Rotation float64 // degrees
 	Align    Align
@@ -115,7 +114,7 @@ type Text struct {
 const charWidth = 0.9
 
 // Box returns the corners of a generous rectangle around the text.
-func (t Text) Box() (lo, hi Point) {
+func (t Text) Box() (lo, hi r2.Vec) {
 	w := float64(len(t.Value)) * charWidth * t.Height
 	h := t.Height
 	var x0, y0 float64 // lower-left corner relative to the anchor, unrotated
@@ -135,12 +134,12 @@ func (t Text) Box() (lo, hi Point) {
 	}
 	h += 0.3 * h
 	s, c := math.Sincos(t.Rotation * math.Pi / 180)
-	lo = Point{math.Inf(1), math.Inf(1)}
-	hi = Point{math.Inf(-1), math.Inf(-1)}
-	for _, p := range []Point{{x0, y0}, {x0 + w, y0}, {x0, y0 + h}, {x0 + w, y0 + h}} {
-		q := Point{t.At.X + p.X*c - p.Y*s, t.At.Y + p.X*s + p.Y*c}
-		lo = Point{min(lo.X, q.X), min(lo.Y, q.Y)}
-		hi = Point{max(hi.X, q.X), max(hi.Y, q.Y)}
+	lo = r2.Vec{X: math.Inf(1), Y: math.Inf(1)}
+	hi = r2.Vec{X: math.Inf(-1), Y: math.Inf(-1)}
+	for _, p := range []r2.Vec{{X: x0, Y: y0}, {X: x0 + w, Y: y0}, {X: x0, Y: y0 + h}, {X: x0 + w, Y: y0 + h}} {
+		q := r2.Vec{X: t.At.X + p.X*c - p.Y*s, Y: t.At.Y + p.X*s + p.Y*c}
+		lo = r2.Vec{X: min(lo.X, q.X), Y: min(lo.Y, q.Y)}
+		hi = r2.Vec{X: max(hi.X, q.X), Y: max(hi.Y, q.Y)}
 	}
 	return lo, hi
 }
@@ -150,7 +149,7 @@ func (t Text) Box() (lo, hi Point) {
 // its long axis and its width across it.
 type SheetHole struct {
 	ID     string // the job's hole id, H1…
-	Centre Point
+	Centre r2.Vec
 	Dx, Dy float64
 	Type   rules.HoleType
 }
@@ -165,16 +164,16 @@ func (h SheetHole) Diameter() float64 { return min(h.Dx, h.Dy) }
 // SlotOutline returns the closed outline of a slot as four vertices and
 // the bulge of the segment leaving each: two straight sides and two
 // half-circle ends (bulge 1, counter-clockwise).
-func (h SheetHole) SlotOutline() ([]Point, []float64) {
+func (h SheetHole) SlotOutline() ([]r2.Vec, []float64) {
 	c := h.Centre
 	r := h.Diameter() / 2
 	if h.Dy >= h.Dx { // long axis along y
 		a := h.Dy/2 - r
-		return []Point{{c.X + r, c.Y - a}, {c.X + r, c.Y + a}, {c.X - r, c.Y + a}, {c.X - r, c.Y - a}},
+		return []r2.Vec{{X: c.X + r, Y: c.Y - a}, {X: c.X + r, Y: c.Y + a}, {X: c.X - r, Y: c.Y + a}, {X: c.X - r, Y: c.Y - a}},
 			[]float64{0, 1, 0, 1}
 	}
 	a := h.Dx/2 - r
-	return []Point{{c.X - a, c.Y - r}, {c.X + a, c.Y - r}, {c.X + a, c.Y + r}, {c.X - a, c.Y + r}},
+	return []r2.Vec{{X: c.X - a, Y: c.Y - r}, {X: c.X + a, Y: c.Y - r}, {X: c.X + a, Y: c.Y + r}, {X: c.X - a, Y: c.Y + r}},
 		[]float64{0, 1, 0, 1}
 }
 
@@ -182,19 +181,19 @@ func (h SheetHole) SlotOutline() ([]Point, []float64) {
 // part's frame (datum at the origin). A CAM file holds exactly this.
 type Part struct {
 	Name      string // "member" or "plate": the CAM file is MARK-NAME.cam.dxf
-	Contour   []Point
+	Contour   []r2.Vec
 	Holes     []SheetHole
 	Thickness float64
 	Pieces    int // pieces of this part per assembly (2 for a double angle)
 }
 
 // Bounds returns the corners of the part's contour.
-func (p *Part) Bounds() (lo, hi Point) {
-	lo = Point{math.Inf(1), math.Inf(1)}
-	hi = Point{math.Inf(-1), math.Inf(-1)}
+func (p *Part) Bounds() (lo, hi r2.Vec) {
+	lo = r2.Vec{X: math.Inf(1), Y: math.Inf(1)}
+	hi = r2.Vec{X: math.Inf(-1), Y: math.Inf(-1)}
 	for _, q := range p.Contour {
-		lo = Point{min(lo.X, q.X), min(lo.Y, q.Y)}
-		hi = Point{max(hi.X, q.X), max(hi.Y, q.Y)}
+		lo = r2.Vec{X: min(lo.X, q.X), Y: min(lo.Y, q.Y)}
+		hi = r2.Vec{X: max(hi.X, q.X), Y: max(hi.Y, q.Y)}
 	}
 	return lo, hi
 }
@@ -211,7 +210,7 @@ const (
 // extension lines, a dimension line at Offset (y for AlongX, x for
 // AlongY), two arrowheads and the text.
 type Dimension struct {
-	A, B   Point
+	A, B   r2.Vec
 	Axis   Axis
 	Offset float64
 	Text   string
@@ -221,7 +220,7 @@ type Dimension struct {
 // in it is in the part's frame; Origin places that frame on the sheet.
 type View struct {
 	Part   Part
-	Origin Point
+	Origin r2.Vec
 	Lines  []Segment
 	Dims   []Dimension
 	Texts  []Text
@@ -257,7 +256,7 @@ var ErrRefused = errors.New("detail: the connection fails; a sheet for fabricati
 // NewSheet lays out the cut sheet of a checked design. A connection that
 // fails is refused (ErrRefused) unless notForFabrication, which stamps
 // every view.
-func NewSheet(r *Report, notForFabrication bool) (*Sheet, error) {
+func NewSheet(r *detail.Report, notForFabrication bool) (*Sheet, error) {
 	if !r.Pass && !notForFabrication {
 		return nil, ErrRefused
 	}
@@ -282,11 +281,11 @@ func NewSheet(r *Report, notForFabrication bool) (*Sheet, error) {
 			// Above the view's title, clear of every hole and dimension.
 			_, top := v.extents()
 			_, phi := v.Part.Bounds()
-			v.Texts = append(v.Texts, Text{At: Point{phi.X / 2, top.Y + s.TextHeight}, Height: 2 * s.TextHeight,
+			v.Texts = append(v.Texts, Text{At: r2.Vec{X: phi.X / 2, Y: top.Y + s.TextHeight}, Height: 2 * s.TextHeight,
 				Align: AlignCenterBottom, Value: Stamp, Layer: LayerNotes})
 		}
 		lo, hi := v.extents()
-		v.Origin = Point{x - lo.X, 0}
+		v.Origin = r2.Vec{X: x - lo.X, Y: 0}
 		x += hi.X - lo.X + 8*s.TextHeight
 		bottom = min(bottom, lo.Y)
 	}
@@ -319,11 +318,11 @@ func textHeight(sys units.System) float64 {
 }
 
 // extents returns the corners of everything in the view, in its frame.
-func (v *View) extents() (lo, hi Point) {
+func (v *View) extents() (lo, hi r2.Vec) {
 	lo, hi = v.Part.Bounds()
-	grow := func(p Point) {
-		lo = Point{min(lo.X, p.X), min(lo.Y, p.Y)}
-		hi = Point{max(hi.X, p.X), max(hi.Y, p.Y)}
+	grow := func(p r2.Vec) {
+		lo = r2.Vec{X: min(lo.X, p.X), Y: min(lo.Y, p.Y)}
+		hi = r2.Vec{X: max(hi.X, p.X), Y: max(hi.Y, p.Y)}
 	}
 	for _, s := range v.Lines {
 		grow(s.A)
@@ -343,9 +342,9 @@ func (v *View) extents() (lo, hi Point) {
 			grow(b)
 		}
 		if d.Axis == AlongX {
-			grow(Point{d.A.X, d.Offset})
+			grow(r2.Vec{X: d.A.X, Y: d.Offset})
 		} else {
-			grow(Point{d.Offset, d.A.Y})
+			grow(r2.Vec{X: d.Offset, Y: d.A.Y})
 		}
 	}
 	return lo, hi
@@ -359,7 +358,7 @@ func (v *View) extents() (lo, hi Point) {
 // Texts.
 type DimensionGraphics struct {
 	Lines, Leaders []Segment
-	Arrows         [][3]Point
+	Arrows         [][3]r2.Vec
 	Texts          []Text
 }
 
@@ -367,36 +366,36 @@ type DimensionGraphics struct {
 func (d Dimension) Graphics(h float64) DimensionGraphics {
 	gap, over, n := h/4, h/2, 0.8*h
 	var g DimensionGraphics
-	seg := func(a, b Point) Segment { return Segment{A: a, B: b, Layer: LayerDimensions} }
-	ext := func(f, to Point) {
+	seg := func(a, b r2.Vec) Segment { return Segment{A: a, B: b, Layer: LayerDimensions} }
+	ext := func(f, to r2.Vec) {
 		dx, dy := to.X-f.X, to.Y-f.Y
 		l := math.Hypot(dx, dy)
 		if l < gap {
 			return
 		}
 		ux, uy := dx/l, dy/l
-		g.Lines = append(g.Lines, seg(Point{X: f.X + ux*gap, Y: f.Y + uy*gap}, Point{X: to.X + ux*over, Y: to.Y + uy*over}))
+		g.Lines = append(g.Lines, seg(r2.Vec{X: f.X + ux*gap, Y: f.Y + uy*gap}, r2.Vec{X: to.X + ux*over, Y: to.Y + uy*over}))
 	}
 	// u is along the dimension line, from A to B.
-	var a, b, u Point
+	var a, b, u r2.Vec
 	var span float64
 	if d.Axis == AlongX {
-		a, b = Point{X: d.A.X, Y: d.Offset}, Point{X: d.B.X, Y: d.Offset}
+		a, b = r2.Vec{X: d.A.X, Y: d.Offset}, r2.Vec{X: d.B.X, Y: d.Offset}
 		span = b.X - a.X
-		u = Point{X: math.Copysign(1, span)}
+		u = r2.Vec{X: math.Copysign(1, span)}
 	} else {
-		a, b = Point{X: d.Offset, Y: d.A.Y}, Point{X: d.Offset, Y: d.B.Y}
+		a, b = r2.Vec{X: d.Offset, Y: d.A.Y}, r2.Vec{X: d.Offset, Y: d.B.Y}
 		span = b.Y - a.Y
-		u = Point{Y: math.Copysign(1, span)}
+		u = r2.Vec{Y: math.Copysign(1, span)}
 	}
 	ext(d.A, a)
 	ext(d.B, b)
 	g.Lines = append(g.Lines, seg(a, b))
-	neg := Point{X: -u.X, Y: -u.Y}
-	arrow := func(tip, dir Point) {
-		back := Point{X: tip.X - dir.X*n, Y: tip.Y - dir.Y*n}
-		side := Point{X: -dir.Y * n / 6, Y: dir.X * n / 6}
-		g.Arrows = append(g.Arrows, [3]Point{tip, back.Add(side), {X: back.X - side.X, Y: back.Y - side.Y}})
+	neg := r2.Vec{X: -u.X, Y: -u.Y}
+	arrow := func(tip, dir r2.Vec) {
+		back := r2.Vec{X: tip.X - dir.X*n, Y: tip.Y - dir.Y*n}
+		side := r2.Vec{X: -dir.Y * n / 6, Y: dir.X * n / 6}
+		g.Arrows = append(g.Arrows, [3]r2.Vec{tip, r2.Add(back, side), {X: back.X - side.X, Y: back.Y - side.Y}})
 	}
 	if math.Abs(span) >= 2.5*n {
 		arrow(a, neg)
@@ -404,7 +403,7 @@ func (d Dimension) Graphics(h float64) DimensionGraphics {
 	} else {
 		arrow(a, u)
 		arrow(b, neg)
-		g.Leaders = append(g.Leaders, seg(a, Point{X: a.X - u.X*2*n, Y: a.Y - u.Y*2*n}), seg(b, Point{X: b.X + u.X*2*n, Y: b.Y + u.Y*2*n}))
+		g.Leaders = append(g.Leaders, seg(a, r2.Vec{X: a.X - u.X*2*n, Y: a.Y - u.Y*2*n}), seg(b, r2.Vec{X: b.X + u.X*2*n, Y: b.Y + u.Y*2*n}))
 	}
 	g.Texts = DimensionText(d, h)
 	return g
@@ -415,10 +414,10 @@ func (d Dimension) Graphics(h float64) DimensionGraphics {
 // one (reading upward).
 func DimensionText(d Dimension, h float64) []Text {
 	if d.Axis == AlongX {
-		return []Text{{At: Point{(d.A.X + d.B.X) / 2, d.Offset + h/3}, Height: h, Align: AlignCenterBottom,
+		return []Text{{At: r2.Vec{X: (d.A.X + d.B.X) / 2, Y: d.Offset + h/3}, Height: h, Align: AlignCenterBottom,
 			Value: d.Text, Layer: LayerDimensions}}
 	}
-	return []Text{{At: Point{d.Offset - h/3, (d.A.Y + d.B.Y) / 2}, Height: h, Rotation: 90, Align: AlignCenterBottom,
+	return []Text{{At: r2.Vec{X: d.Offset - h/3, Y: (d.A.Y + d.B.Y) / 2}, Height: h, Rotation: 90, Align: AlignCenterBottom,
 		Value: d.Text, Layer: LayerDimensions}}
 }
 
@@ -446,7 +445,7 @@ func (l sheetLayout) limit(v float64) string {
 	return units.FormatLength(units.Length(l.sys.FromJob(v, units.DimLength)), l.sys, units.Shop.WithExact())
 }
 
-func (l sheetLayout) rect(w, h float64) []Point { return []Point{{0, 0}, {w, 0}, {w, h}, {0, h}} }
+func (l sheetLayout) rect(w, h float64) []r2.Vec { return []r2.Vec{{X: 0, Y: 0}, {X: w, Y: 0}, {X: w, Y: h}, {X: 0, Y: h}} }
 
 // patternX returns the least and greatest hole x of the connection.
 func patternX(hs []engine.Hole) (lo, hi units.Length) {
@@ -457,7 +456,7 @@ func patternX(hs []engine.Hole) (lo, hi units.Length) {
 	return lo, hi
 }
 
-func (l sheetLayout) memberView(d *Design) View {
+func (l sheetLayout) memberView(d *detail.Design) View {
 	c := &d.Conn
 	m := c.Member
 	xlo, xhi := patternX(c.Holes)
@@ -465,7 +464,7 @@ func (l sheetLayout) memberView(d *Design) View {
 	width := l.len(m.Width)
 	p := Part{Name: "member", Contour: l.rect(length, width), Thickness: l.len(m.T), Pieces: m.Pieces}
 	for _, h := range c.Holes {
-		p.Holes = append(p.Holes, SheetHole{ID: h.ID, Centre: Point{l.len(h.X), l.len(h.Y)}, Dx: l.len(h.Dx), Dy: l.len(h.Dy), Type: h.Type})
+		p.Holes = append(p.Holes, SheetHole{ID: h.ID, Centre: r2.Vec{X: l.len(h.X), Y: l.len(h.Y)}, Dx: l.len(h.Dx), Dy: l.len(h.Dy), Type: h.Type})
 	}
 	v := View{Part: p}
 	l.annotate(&v, false)
@@ -476,26 +475,26 @@ func (l sheetLayout) memberView(d *Design) View {
 	} else {
 		title += " - CONNECTED LEG, CONNECTION END"
 	}
-	v.Texts = append(v.Texts, Text{At: Point{length / 2, width + 2*h}, Height: 1.4 * h, Align: AlignCenterBottom, Value: title, Layer: LayerNotes})
+	v.Texts = append(v.Texts, Text{At: r2.Vec{X: length / 2, Y: width + 2*h}, Height: 1.4 * h, Align: AlignCenterBottom, Value: title, Layer: LayerNotes})
 	if m.Pieces == 2 {
-		v.Texts = append(v.Texts, Text{At: Point{length / 2, width + 0.8*h}, Height: h, Align: AlignCenterBottom,
+		v.Texts = append(v.Texts, Text{At: r2.Vec{X: length / 2, Y: width + 0.8*h}, Height: h, Align: AlignCenterBottom,
 			Value: "2 ANGLES BACK TO BACK: MAKE 1 AS SHOWN AND 1 OPPOSITE HAND", Layer: LayerNotes})
 	}
 	if m.Heel() {
 		t := l.len(m.T)
-		v.Lines = append(v.Lines, Segment{Point{0, t}, Point{length, t}, LayerReference})
+		v.Lines = append(v.Lines, Segment{r2.Vec{X: 0, Y: t}, r2.Vec{X: length, Y: t}, LayerReference})
 		v.Texts = append(v.Texts,
-			Text{At: Point{length + 2.5*h, 0}, Height: h, Align: AlignLeftBase, Value: "HEEL", Layer: LayerNotes},
-			Text{At: Point{length + 2.5*h, width - h}, Height: h, Align: AlignLeftBase, Value: "TOE", Layer: LayerNotes})
+			Text{At: r2.Vec{X: length + 2.5*h, Y: 0}, Height: h, Align: AlignLeftBase, Value: "HEEL", Layer: LayerNotes},
+			Text{At: r2.Vec{X: length + 2.5*h, Y: width - h}, Height: h, Align: AlignLeftBase, Value: "TOE", Layer: LayerNotes})
 	}
 	// Rotated a quarter turn, the text stands left of its anchor: clear of
 	// the edge and of the gage lines' ends.
-	v.Texts = append(v.Texts, Text{At: Point{length + 2*h, width / 2}, Height: 0.8 * h, Rotation: 90, Align: AlignCenterBottom,
+	v.Texts = append(v.Texts, Text{At: r2.Vec{X: length + 2*h, Y: width / 2}, Height: 0.8 * h, Rotation: 90, Align: AlignCenterBottom,
 		Value: "BREAK", Layer: LayerNotes})
 	return v
 }
 
-func (l sheetLayout) plateView(d *Design) View {
+func (l sheetLayout) plateView(d *detail.Design) View {
 	c := &d.Conn
 	pl := c.Plate
 	xlo, xhi := patternX(c.Holes)
@@ -503,7 +502,7 @@ func (l sheetLayout) plateView(d *Design) View {
 	width := l.len(pl.Width)
 	fe, ymax := l.len(pl.FreeEdge), l.len(pl.YMax())
 	// turn maps the member frame onto the plate frame (half a turn).
-	turn := func(x, y float64) Point { return Point{fe - x, ymax - y} }
+	turn := func(x, y float64) r2.Vec { return r2.Vec{X: fe - x, Y: ymax - y} }
 	p := Part{Name: "plate", Contour: l.rect(length, width), Thickness: l.len(pl.T), Pieces: 1}
 	for i := range c.Holes {
 		h := &c.Holes[i]
@@ -524,9 +523,9 @@ func (l sheetLayout) plateView(d *Design) View {
 	far := l.len(w.X)
 	ymin := l.len(pl.YMin())
 	for _, s := range []Segment{
-		{Point{l.len(lo.X0), l.len(lo.Y0)}, Point{l.len(lo.X1), l.len(lo.Y1)}, LayerReference},
-		{Point{l.len(hi.X0), l.len(hi.Y0)}, Point{l.len(hi.X1), l.len(hi.Y1)}, LayerReference},
-		{Point{far, l.len(lo.Y1)}, Point{far, l.len(hi.Y1)}, LayerReference},
+		{r2.Vec{X: l.len(lo.X0), Y: l.len(lo.Y0)}, r2.Vec{X: l.len(lo.X1), Y: l.len(lo.Y1)}, LayerReference},
+		{r2.Vec{X: l.len(hi.X0), Y: l.len(hi.Y0)}, r2.Vec{X: l.len(hi.X1), Y: l.len(hi.Y1)}, LayerReference},
+		{r2.Vec{X: far, Y: l.len(lo.Y1)}, r2.Vec{X: far, Y: l.len(hi.Y1)}, LayerReference},
 	} {
 		if a, b, ok := clipY(s.A, s.B, ymin, ymax); ok && a != b {
 			v.Lines = append(v.Lines, Segment{turn(a.X, a.Y), turn(b.X, b.Y), LayerReference})
@@ -535,18 +534,18 @@ func (l sheetLayout) plateView(d *Design) View {
 	// The label goes past the section, where there are no holes, near the
 	// top edge: holes keep at least an edge distance from it.
 	sec := fe - far
-	v.Texts = append(v.Texts, Text{At: Point{sec + h/2, width - 1.5*h}, Height: h, Align: AlignLeftBase,
+	v.Texts = append(v.Texts, Text{At: r2.Vec{X: sec + h/2, Y: width - 1.5*h}, Height: h, Align: AlignLeftBase,
 		Value: "WHITMORE Lw = " + l.people(l.len(w.Lw)), Layer: LayerReference})
 
 	title := fmt.Sprintf("PLATE %s x %s x %s %s %s - FREE EDGE AT LEFT", l.people(p.Thickness), l.people(width), l.people(length),
 		d.Info.PlateGrade, strings.ToUpper(pl.Kind.String()))
 	v.Texts = append(v.Texts,
-		Text{At: Point{length / 2, width + 2*h}, Height: 1.4 * h, Align: AlignCenterBottom, Value: title, Layer: LayerNotes})
+		Text{At: r2.Vec{X: length / 2, Y: width + 2*h}, Height: 1.4 * h, Align: AlignCenterBottom, Value: title, Layer: LayerNotes})
 	return v
 }
 
 // clipY clips the segment a–b to lo ≤ y ≤ hi.
-func clipY(a, b Point, lo, hi float64) (Point, Point, bool) {
+func clipY(a, b r2.Vec, lo, hi float64) (r2.Vec, r2.Vec, bool) {
 	t0, t1 := 0.0, 1.0
 	dy := b.Y - a.Y
 	for _, e := range [][2]float64{{-dy, a.Y - lo}, {dy, hi - a.Y}} {
@@ -567,7 +566,7 @@ func clipY(a, b Point, lo, hi float64) (Point, Point, bool) {
 	if t0 >= t1 {
 		return a, b, false
 	}
-	at := func(t float64) Point { return Point{a.X + t*(b.X-a.X), a.Y + t*dy} }
+	at := func(t float64) r2.Vec { return r2.Vec{X: a.X + t*(b.X-a.X), Y: a.Y + t*dy} }
 	return at(t0), at(t1), true
 }
 
@@ -630,16 +629,16 @@ func (l sheetLayout) annotate(v *View, overallX bool) {
 
 	// Gage lines, a little past the part each way.
 	for _, y := range ys {
-		v.Lines = append(v.Lines, Segment{Point{-h, y}, Point{hi.X + h/2, y}, LayerReference})
+		v.Lines = append(v.Lines, Segment{r2.Vec{X: -h, Y: y}, r2.Vec{X: hi.X + h/2, Y: y}, LayerReference})
 	}
 }
 
 func (l sheetLayout) dimX(a, b, at float64) Dimension {
-	return Dimension{A: Point{a, 0}, B: Point{b, 0}, Axis: AlongX, Offset: at, Text: l.people(b - a)}
+	return Dimension{A: r2.Vec{X: a, Y: 0}, B: r2.Vec{X: b, Y: 0}, Axis: AlongX, Offset: at, Text: l.people(b - a)}
 }
 
 func (l sheetLayout) dimY(a, b, at float64) Dimension {
-	return Dimension{A: Point{0, a}, B: Point{0, b}, Axis: AlongY, Offset: at, Text: l.people(b - a)}
+	return Dimension{A: r2.Vec{X: 0, Y: a}, B: r2.Vec{X: 0, Y: b}, Axis: AlongY, Offset: at, Text: l.people(b - a)}
 }
 
 // PunchLimit is the thickest material punched full size for a bolt of
@@ -671,7 +670,7 @@ func (l sheetLayout) holeText(h engine.HoleShape) string {
 
 // schedule writes the hole schedule from the given top down and returns
 // the y below it.
-func (l sheetLayout) schedule(s *Sheet, d *Design, top float64) float64 {
+func (l sheetLayout) schedule(s *Sheet, d *detail.Design, top float64) float64 {
 	h := l.h
 	c := &d.Conn
 	hole, plate := c.Holes[0].HoleShape, c.Holes[0].InPlate() // each ply's holes are all alike in a design
@@ -702,12 +701,12 @@ func (l sheetLayout) schedule(s *Sheet, d *Design, top float64) float64 {
 		cols[i] = cols[i-1] + w + 2*h
 	}
 	y := top - 1.4*h
-	s.Texts = append(s.Texts, Text{At: Point{0, y}, Height: 1.4 * h, Align: AlignLeftBase, Value: "HOLE SCHEDULE", Layer: LayerNotes})
+	s.Texts = append(s.Texts, Text{At: r2.Vec{X: 0, Y: y}, Height: 1.4 * h, Align: AlignLeftBase, Value: "HOLE SCHEDULE", Layer: LayerNotes})
 	y -= 0.4 * h
 	for _, r := range rows {
 		y -= 1.6 * h
 		for i, val := range r {
-			s.Texts = append(s.Texts, Text{At: Point{cols[i], y}, Height: h, Align: AlignLeftBase, Value: val, Layer: LayerNotes})
+			s.Texts = append(s.Texts, Text{At: r2.Vec{X: cols[i], Y: y}, Height: h, Align: AlignLeftBase, Value: val, Layer: LayerNotes})
 		}
 	}
 	return y - h
@@ -715,7 +714,7 @@ func (l sheetLayout) schedule(s *Sheet, d *Design, top float64) float64 {
 
 // titleBlock writes the title block from the given top down: a framed box
 // of labelled fields and the caution line.
-func (l sheetLayout) titleBlock(s *Sheet, r *Report, top float64) {
+func (l sheetLayout) titleBlock(s *Sheet, r *detail.Report, top float64) {
 	h := l.h
 	d := r.Design
 	c := &d.Conn
@@ -749,9 +748,9 @@ func (l sheetLayout) titleBlock(s *Sheet, r *Report, top float64) {
 	}
 	fields = append(fields,
 		[2]string{"BOLTS", fmt.Sprintf("(%d) %s %s, threads %s, %s joint, %s", len(c.Holes),
-			boltSize(c.Bolt.D, l.sys), c.Bolt.Grade.Name, c.Bolt.Threads, c.Bolt.Joint, holeKinds(c))},
+			detail.BoltSize(c.Bolt.D, l.sys), c.Bolt.Grade.Name, c.Bolt.Threads, c.Bolt.Joint, detail.HoleKinds(c))},
 		[2]string{"STANDARD", fmt.Sprintf("AISC %s %s", strings.TrimPrefix(c.Edition.Name, "aisc"), strings.ToUpper(c.Method.String()))},
-		[2]string{"GOVERNING", fmt.Sprintf("%s (%s) ratio %s - %s", g.ID, g.Clause, ratio(g.Ratio), verdict)},
+		[2]string{"GOVERNING", fmt.Sprintf("%s (%s) ratio %s - %s", g.ID, g.Clause, detail.RatioText(g.Ratio), verdict)},
 		[2]string{"UNITS", unitName},
 	)
 	if s.NotForFabrication {
@@ -768,23 +767,23 @@ func (l sheetLayout) titleBlock(s *Sheet, r *Report, top float64) {
 	for _, f := range fields {
 		y -= 1.8 * h
 		s.Texts = append(s.Texts,
-			Text{At: Point{h, y + 0.5*h}, Height: h, Align: AlignLeftBase, Value: f[0], Layer: LayerTitle},
-			Text{At: Point{12 * h, y + 0.5*h}, Height: h, Align: AlignLeftBase, Value: ascii(f[1]), Layer: LayerTitle})
+			Text{At: r2.Vec{X: h, Y: y + 0.5*h}, Height: h, Align: AlignLeftBase, Value: f[0], Layer: LayerTitle},
+			Text{At: r2.Vec{X: 12 * h, Y: y + 0.5*h}, Height: h, Align: AlignLeftBase, Value: ascii(f[1]), Layer: LayerTitle})
 		ruleYs = append(ruleYs, y)
 	}
-	for _, ln := range wrap(Caution, 100) {
+	for _, ln := range wrap(detail.Caution, 100) {
 		y -= 1.4 * h
-		s.Texts = append(s.Texts, Text{At: Point{h, y + 0.4*h}, Height: 0.8 * h, Align: AlignLeftBase, Value: ascii(ln), Layer: LayerTitle})
+		s.Texts = append(s.Texts, Text{At: r2.Vec{X: h, Y: y + 0.4*h}, Height: 0.8 * h, Align: AlignLeftBase, Value: ascii(ln), Layer: LayerTitle})
 	}
 	y -= 0.6 * h
 	ruleYs = append(ruleYs, y)
 	for _, ry := range ruleYs {
-		s.Lines = append(s.Lines, Segment{Point{0, ry}, Point{width, ry}, LayerTitle})
+		s.Lines = append(s.Lines, Segment{r2.Vec{X: 0, Y: ry}, r2.Vec{X: width, Y: ry}, LayerTitle})
 	}
 	s.Lines = append(s.Lines,
-		Segment{Point{0, top}, Point{0, y}, LayerTitle},
-		Segment{Point{width, top}, Point{width, y}, LayerTitle},
-		Segment{Point{11 * h, top}, Point{11 * h, ruleYs[len(fields)]}, LayerTitle})
+		Segment{r2.Vec{X: 0, Y: top}, r2.Vec{X: 0, Y: y}, LayerTitle},
+		Segment{r2.Vec{X: width, Y: top}, r2.Vec{X: width, Y: y}, LayerTitle},
+		Segment{r2.Vec{X: 11 * h, Y: top}, r2.Vec{X: 11 * h, Y: ruleYs[len(fields)]}, LayerTitle})
 }
 
 // wrap breaks s into lines of at most n bytes at spaces.

@@ -1,4 +1,4 @@
-package detail
+package sheet
 
 import (
 	"math"
@@ -6,12 +6,14 @@ import (
 	"testing"
 
 	"gaugeline/rules"
+
+	"gonum.org/v1/gonum/spatial/r2"
 )
 
 // item is one call a recording painter received.
 type item struct {
 	kind   string // line, circle, polyline, text
-	pts    []Point
+	pts    []r2.Vec
 	bulges []float64
 	r      float64
 	text   Text
@@ -30,13 +32,13 @@ func (r *recorder) Layers(ls []Layer) {
 	}
 	r.layers = append(r.layers, slices.Clone(ls))
 }
-func (r *recorder) Line(a, b Point, l Layer) {
-	r.items = append(r.items, item{kind: "line", pts: []Point{a, b}, layer: l})
+func (r *recorder) Line(a, b r2.Vec, l Layer) {
+	r.items = append(r.items, item{kind: "line", pts: []r2.Vec{a, b}, layer: l})
 }
-func (r *recorder) Circle(c Point, rad float64, l Layer) {
-	r.items = append(r.items, item{kind: "circle", pts: []Point{c}, r: rad, layer: l})
+func (r *recorder) Circle(c r2.Vec, rad float64, l Layer) {
+	r.items = append(r.items, item{kind: "circle", pts: []r2.Vec{c}, r: rad, layer: l})
 }
-func (r *recorder) ClosedPolyline(pts []Point, bulges []float64, l Layer) {
+func (r *recorder) ClosedPolyline(pts []r2.Vec, bulges []float64, l Layer) {
 	r.items = append(r.items, item{kind: "polyline", pts: slices.Clone(pts), bulges: slices.Clone(bulges), layer: l})
 }
 func (r *recorder) Text(t Text) {
@@ -47,12 +49,12 @@ func (r *recorder) Text(t Text) {
 // themselves: a polyline's arcs by their centre and sweep (a bulge b
 // spans 4·atan(b), SPEC §7's bulge convention, the DXF one), a text by
 // Text.Box.
-func (r *recorder) box() (lo, hi Point) {
-	lo = Point{math.Inf(1), math.Inf(1)}
-	hi = Point{math.Inf(-1), math.Inf(-1)}
-	grow := func(q Point) {
-		lo = Point{min(lo.X, q.X), min(lo.Y, q.Y)}
-		hi = Point{max(hi.X, q.X), max(hi.Y, q.Y)}
+func (r *recorder) box() (lo, hi r2.Vec) {
+	lo = r2.Vec{X: math.Inf(1), Y: math.Inf(1)}
+	hi = r2.Vec{X: math.Inf(-1), Y: math.Inf(-1)}
+	grow := func(q r2.Vec) {
+		lo = r2.Vec{X: min(lo.X, q.X), Y: min(lo.Y, q.Y)}
+		hi = r2.Vec{X: max(hi.X, q.X), Y: max(hi.Y, q.Y)}
 	}
 	for _, it := range r.items {
 		switch it.kind {
@@ -61,8 +63,8 @@ func (r *recorder) box() (lo, hi Point) {
 			grow(it.pts[1])
 		case "circle":
 			c := it.pts[0]
-			grow(Point{c.X - it.r, c.Y - it.r})
-			grow(Point{c.X + it.r, c.Y + it.r})
+			grow(r2.Vec{X: c.X - it.r, Y: c.Y - it.r})
+			grow(r2.Vec{X: c.X + it.r, Y: c.Y + it.r})
 		case "polyline":
 			for i, p := range it.pts {
 				grow(p)
@@ -76,12 +78,12 @@ func (r *recorder) box() (lo, hi Point) {
 				// The centre is off the chord's midpoint, to the left of p→q
 				// for a counter-clockwise arc.
 				off := rad * math.Cos(theta/2)
-				c := Point{(p.X+q.X)/2 - (q.Y-p.Y)/chord*off, (p.Y+q.Y)/2 + (q.X-p.X)/chord*off}
+				c := r2.Vec{X: (p.X+q.X)/2 - (q.Y-p.Y)/chord*off, Y: (p.Y+q.Y)/2 + (q.X-p.X)/chord*off}
 				a0 := math.Atan2(p.Y-c.Y, p.X-c.X)
 				for k := range 4 {
 					phi := float64(k) * math.Pi / 2
 					if math.Mod(phi-a0+4*math.Pi, 2*math.Pi) <= theta+1e-12 {
-						grow(Point{c.X + math.Abs(rad)*math.Cos(phi), c.Y + math.Abs(rad)*math.Sin(phi)})
+						grow(r2.Vec{X: c.X + math.Abs(rad)*math.Cos(phi), Y: c.Y + math.Abs(rad)*math.Sin(phi)})
 					}
 				}
 			}
@@ -94,7 +96,7 @@ func (r *recorder) box() (lo, hi Point) {
 	return lo, hi
 }
 
-func nearPoint(a, b Point) bool { return near(a.X, b.X) && near(a.Y, b.Y) }
+func nearPoint(a, b r2.Vec) bool { return near(a.X, b.X) && near(a.Y, b.Y) }
 
 // The sheet's walk declares every layer first, draws each view's part at
 // its origin (one item per hole, a circle or a slot's outline), every
@@ -120,7 +122,7 @@ func TestSheetPaint(t *testing.T) {
 				wantTexts += len(g.Texts)
 			}
 			for _, h := range v.Part.Holes {
-				h.Centre = h.Centre.Add(v.Origin)
+				h.Centre = r2.Add(h.Centre, v.Origin)
 				holes = append(holes, h)
 			}
 		}
@@ -206,13 +208,13 @@ func TestPartPaint(t *testing.T) {
 // right edge of a 100 × 50 part reaches 13 past it; a 20 round hole on the
 // top edge reaches 10 above (the sizes of TestSlotOutline).
 func TestPaintExtentsReachHoles(t *testing.T) {
-	p := Part{Contour: []Point{{0, 0}, {100, 0}, {100, 50}, {0, 50}}, Holes: []SheetHole{
-		{ID: "H1", Centre: Point{100, 25}, Dx: 26, Dy: 22, Type: rules.ShortSlot},
-		{ID: "H2", Centre: Point{40, 50}, Dx: 20, Dy: 20, Type: rules.Standard},
+	p := Part{Contour: []r2.Vec{{X: 0, Y: 0}, {X: 100, Y: 0}, {X: 100, Y: 50}, {X: 0, Y: 50}}, Holes: []SheetHole{
+		{ID: "H1", Centre: r2.Vec{X: 100, Y: 25}, Dx: 26, Dy: 22, Type: rules.ShortSlot},
+		{ID: "H2", Centre: r2.Vec{X: 40, Y: 50}, Dx: 20, Dy: 20, Type: rules.Standard},
 	}}
 	var r recorder
 	lo, hi := p.Paint(&r)
-	if want := (Point{113, 60}); lo != (Point{0, 0}) || hi != want {
+	if want := (r2.Vec{X: 113, Y: 60}); lo != (r2.Vec{X: 0, Y: 0}) || hi != want {
 		t.Errorf("extents %v–%v, want (0,0)–%v", lo, hi, want)
 	}
 	if wlo, whi := r.box(); !nearPoint(lo, wlo) || !nearPoint(hi, whi) {

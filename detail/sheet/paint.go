@@ -1,4 +1,6 @@
-package detail
+package sheet
+
+import "gonum.org/v1/gonum/spatial/r2"
 
 // This file is the one walk over the sheet model: what a drawing of a cut
 // sheet or of one part holds, in which order, and how far it reaches. A
@@ -12,14 +14,14 @@ type Painter interface {
 	// Layers comes first, once, with every layer the drawing may use, in
 	// the order a layer table lists them.
 	Layers(ls []Layer)
-	Line(a, b Point, l Layer)
-	Circle(centre Point, r float64, l Layer)
+	Line(a, b r2.Vec, l Layer)
+	Circle(centre r2.Vec, r float64, l Layer)
 	// ClosedPolyline draws a closed outline through pts. The side from
 	// pts[i] to the next vertex is straight where bulges is nil or
 	// bulges[i] is 0, else an arc of bulge bulges[i] (the tangent of a
 	// quarter of its included angle, positive counter-clockwise): a slot's
 	// ends are half circles of bulge 1.
-	ClosedPolyline(pts []Point, bulges []float64, l Layer)
+	ClosedPolyline(pts []r2.Vec, bulges []float64, l Layer)
 	// Text draws one line of text at t.At with its height, rotation and
 	// alignment.
 	Text(t Text)
@@ -33,7 +35,7 @@ func PartLayers() []Layer { return []Layer{LayerContour, LayerHoles} }
 // contour and holes, then its reference lines, dimensions and texts), then
 // the sheet's own lines and texts (title block, hole schedule). It returns
 // the corners of what it drew, text by Text.Box, a slot by its extents.
-func (s *Sheet) Paint(to Painter) (lo, hi Point) {
+func (s *Sheet) Paint(to Painter) (lo, hi r2.Vec) {
 	w := walk{p: to, empty: true}
 	to.Layers(Layers())
 	for i := range s.Views {
@@ -50,7 +52,7 @@ func (s *Sheet) Paint(to Painter) (lo, hi Point) {
 			w.text(t)
 		}
 	}
-	w.at = Point{}
+	w.at = r2.Vec{}
 	for _, l := range s.Lines {
 		w.line(l)
 	}
@@ -63,7 +65,7 @@ func (s *Sheet) Paint(to Painter) (lo, hi Point) {
 // Paint draws the part alone in its own frame, as its CAM file holds it:
 // the closed contour and the holes, nothing else. It returns the corners
 // of what it drew.
-func (p *Part) Paint(to Painter) (lo, hi Point) {
+func (p *Part) Paint(to Painter) (lo, hi r2.Vec) {
 	w := walk{p: to, empty: true}
 	to.Layers(PartLayers())
 	w.part(p)
@@ -74,23 +76,23 @@ func (p *Part) Paint(to Painter) (lo, hi Point) {
 // view, and keeps the extents of what it handed over.
 type walk struct {
 	p      Painter
-	at     Point // origin of the current view on the drawing
-	lo, hi Point
+	at     r2.Vec // origin of the current view on the drawing
+	lo, hi r2.Vec
 	empty  bool
-	pts    []Point // reused for the vertices handed to ClosedPolyline
+	pts    []r2.Vec // reused for the vertices handed to ClosedPolyline
 }
 
-func (w *walk) grow(q Point) {
+func (w *walk) grow(q r2.Vec) {
 	if w.empty {
 		w.lo, w.hi, w.empty = q, q, false
 		return
 	}
-	w.lo = Point{X: min(w.lo.X, q.X), Y: min(w.lo.Y, q.Y)}
-	w.hi = Point{X: max(w.hi.X, q.X), Y: max(w.hi.Y, q.Y)}
+	w.lo = r2.Vec{X: min(w.lo.X, q.X), Y: min(w.lo.Y, q.Y)}
+	w.hi = r2.Vec{X: max(w.hi.X, q.X), Y: max(w.hi.Y, q.Y)}
 }
 
 func (w *walk) line(s Segment) {
-	a, b := s.A.Add(w.at), s.B.Add(w.at)
+	a, b := r2.Add(s.A, w.at), r2.Add(s.B, w.at)
 	w.p.Line(a, b, s.Layer)
 	w.grow(a)
 	w.grow(b)
@@ -98,14 +100,14 @@ func (w *walk) line(s Segment) {
 
 // polyline hands over a closed outline given in the view's frame; lo and
 // hi bound it there.
-func (w *walk) polyline(pts []Point, bulges []float64, l Layer, lo, hi Point) {
+func (w *walk) polyline(pts []r2.Vec, bulges []float64, l Layer, lo, hi r2.Vec) {
 	w.pts = w.pts[:0]
 	for _, q := range pts {
-		w.pts = append(w.pts, q.Add(w.at))
+		w.pts = append(w.pts, r2.Add(q, w.at))
 	}
 	w.p.ClosedPolyline(w.pts, bulges, l)
-	w.grow(lo.Add(w.at))
-	w.grow(hi.Add(w.at))
+	w.grow(r2.Add(lo, w.at))
+	w.grow(r2.Add(hi, w.at))
 }
 
 func (w *walk) part(p *Part) {
@@ -120,20 +122,20 @@ func (w *walk) part(p *Part) {
 // two straight sides and two half circles.
 func (w *walk) hole(h SheetHole) {
 	if h.Round() {
-		c := h.Centre.Add(w.at)
+		c := r2.Add(h.Centre, w.at)
 		r := h.Diameter() / 2
 		w.p.Circle(c, r, LayerHoles)
-		w.grow(Point{X: c.X - r, Y: c.Y - r})
-		w.grow(Point{X: c.X + r, Y: c.Y + r})
+		w.grow(r2.Vec{X: c.X - r, Y: c.Y - r})
+		w.grow(r2.Vec{X: c.X + r, Y: c.Y + r})
 		return
 	}
 	pts, bulges := h.SlotOutline()
-	half := Point{X: h.Dx / 2, Y: h.Dy / 2}
-	w.polyline(pts, bulges, LayerHoles, Point{X: h.Centre.X - half.X, Y: h.Centre.Y - half.Y}, h.Centre.Add(half))
+	half := r2.Vec{X: h.Dx / 2, Y: h.Dy / 2}
+	w.polyline(pts, bulges, LayerHoles, r2.Vec{X: h.Centre.X - half.X, Y: h.Centre.Y - half.Y}, r2.Add(h.Centre, half))
 }
 
 func (w *walk) text(t Text) {
-	t.At = t.At.Add(w.at)
+	t.At = r2.Add(t.At, w.at)
 	w.p.Text(t)
 	lo, hi := t.Box()
 	w.grow(lo)
@@ -161,11 +163,14 @@ func (w *walk) dimension(d Dimension, h float64) {
 }
 
 // corners returns the corners of the box around pts (at least one).
-func corners(pts []Point) (lo, hi Point) {
+func corners(pts []r2.Vec) (lo, hi r2.Vec) {
 	lo, hi = pts[0], pts[0]
 	for _, q := range pts {
-		lo = Point{X: min(lo.X, q.X), Y: min(lo.Y, q.Y)}
-		hi = Point{X: max(hi.X, q.X), Y: max(hi.Y, q.Y)}
+		lo = r2.Vec{X: min(lo.X, q.X), Y: min(lo.Y, q.Y)}
+		hi = r2.Vec{X: max(hi.X, q.X), Y: max(hi.Y, q.Y)}
 	}
 	return lo, hi
 }
+
+// eps is the geometric tolerance of the sheet's comparisons, in mm.
+const eps = 1e-6

@@ -1,48 +1,52 @@
-package detail
+package sheet
 
 import (
 	"errors"
 	"math"
+	"os"
 	"path/filepath"
 	"slices"
 	"strings"
 	"testing"
 
+	"gaugeline/detail"
 	"gaugeline/detail/jobfile"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
+
+	"gonum.org/v1/gonum/spatial/r2"
 )
 
 // sheetJobs are the job files the sheet tests draw: a US angle, a US
 // two-line staggered flat, an SI double angle, an SI slotted angle, the
 // demo and AISC Design Example D.2 (a member without a plate).
 var sheetJobs = []string{
-	"../testdata/jobs/us-single-angle.yaml",
-	"../testdata/jobs/us-staggered-flat.yaml",
-	"../testdata/jobs/si-double-angle.yaml",
-	"../testdata/jobs/si-slotted.yaml",
-	"../testdata/jobs/us-pipe-rack-brace.yaml",
-	"../testdata/examples/aisc-d2.yaml",
+	"../../testdata/jobs/us-single-angle.yaml",
+	"../../testdata/jobs/us-staggered-flat.yaml",
+	"../../testdata/jobs/si-double-angle.yaml",
+	"../../testdata/jobs/si-slotted.yaml",
+	"../../testdata/jobs/us-pipe-rack-brace.yaml",
+	"../../testdata/examples/aisc-d2.yaml",
 }
 
-func checkedJob(t *testing.T, path string) *Report {
+func checkedJob(t *testing.T, path string) *detail.Report {
 	t.Helper()
 	j, err := jobfile.LoadJob(path)
 	if err != nil {
 		t.Fatal(err)
 	}
-	d, err := Build(j)
+	d, err := detail.Build(j)
 	if err != nil {
 		t.Fatal(err)
 	}
-	r, err := Check(d)
+	r, err := detail.Check(d)
 	if err != nil {
 		t.Fatal(err)
 	}
 	return r
 }
 
-func sheetOf(t *testing.T, path string) (*Report, *Sheet) {
+func sheetOf(t *testing.T, path string) (*detail.Report, *Sheet) {
 	t.Helper()
 	r := checkedJob(t, path)
 	s, err := NewSheet(r, true)
@@ -76,9 +80,9 @@ func TestSheetHolesAreTheJobs(t *testing.T) {
 					t.Fatalf("%s: %d holes, want %d", v.Part.Name, len(v.Part.Holes), len(c.Holes))
 				}
 				for i, h := range c.Holes {
-					want := Point{in(h.X), in(h.Y)}
+					want := r2.Vec{X: in(h.X), Y: in(h.Y)}
 					if vi == 1 {
-						want = Point{in(c.Plate.FreeEdge) - in(h.X), in(c.Plate.YMax()) - in(h.Y)}
+						want = r2.Vec{X: in(c.Plate.FreeEdge) - in(h.X), Y: in(c.Plate.YMax()) - in(h.Y)}
 					}
 					got := v.Part.Holes[i]
 					if !near(got.Centre.X, want.X) || !near(got.Centre.Y, want.Y) {
@@ -99,17 +103,17 @@ func TestSheetHolesAreTheJobs(t *testing.T) {
 // 6 in: 10-1/2 + 9 = 19-1/2; the plate from its free edge through the
 // pattern (1-1/2 + 9) and 9 in on: 19-1/2.
 func TestSheetOutlines(t *testing.T) {
-	_, s := sheetOf(t, "../testdata/jobs/us-single-angle.yaml")
+	_, s := sheetOf(t, "../../testdata/jobs/us-single-angle.yaml")
 	member, plate := s.Views[0].Part, s.Views[1].Part
-	if want := []Point{{0, 0}, {19.5, 0}, {19.5, 4}, {0, 4}}; !slices.Equal(member.Contour, want) {
+	if want := []r2.Vec{{X: 0, Y: 0}, {X: 19.5, Y: 0}, {X: 19.5, Y: 4}, {X: 0, Y: 4}}; !slices.Equal(member.Contour, want) {
 		t.Errorf("member contour %v, want %v", member.Contour, want)
 	}
-	if want := []Point{{0, 0}, {19.5, 0}, {19.5, 12}, {0, 12}}; !slices.Equal(plate.Contour, want) {
+	if want := []r2.Vec{{X: 0, Y: 0}, {X: 19.5, Y: 0}, {X: 19.5, Y: 12}, {X: 0, Y: 12}}; !slices.Equal(plate.Contour, want) {
 		t.Errorf("plate contour %v, want %v", plate.Contour, want)
 	}
 	// The edge distance to the free edge is the job's 1-1/2 in; the bolt
 	// group sits mid-width.
-	if h := plate.Holes[3]; h.Centre != (Point{1.5, 6}) {
+	if h := plate.Holes[3]; h.Centre != (r2.Vec{X: 1.5, Y: 6}) {
 		t.Errorf("plate H4 at %v, want (1.5, 6)", h.Centre)
 	}
 	if member.Thickness != 0.5 || plate.Thickness != 0.5 || member.Pieces != 1 {
@@ -160,12 +164,12 @@ func TestSlotOutline(t *testing.T) {
 	for _, tt := range []struct {
 		name string
 		h    SheetHole
-		want []Point
+		want []r2.Vec
 	}{
-		{"along y", SheetHole{Centre: Point{100, 50}, Dx: 22, Dy: 26, Type: rules.ShortSlot},
-			[]Point{{111, 48}, {111, 52}, {89, 52}, {89, 48}}},
-		{"along x", SheetHole{Centre: Point{100, 50}, Dx: 26, Dy: 22, Type: rules.ShortSlot},
-			[]Point{{98, 39}, {102, 39}, {102, 61}, {98, 61}}},
+		{"along y", SheetHole{Centre: r2.Vec{X: 100, Y: 50}, Dx: 22, Dy: 26, Type: rules.ShortSlot},
+			[]r2.Vec{{X: 111, Y: 48}, {X: 111, Y: 52}, {X: 89, Y: 52}, {X: 89, Y: 48}}},
+		{"along x", SheetHole{Centre: r2.Vec{X: 100, Y: 50}, Dx: 26, Dy: 22, Type: rules.ShortSlot},
+			[]r2.Vec{{X: 98, Y: 39}, {X: 102, Y: 39}, {X: 102, Y: 61}, {X: 98, Y: 61}}},
 	} {
 		pts, bulges := tt.h.SlotOutline()
 		if !slices.Equal(pts, tt.want) || !slices.Equal(bulges, []float64{0, 1, 0, 1}) {
@@ -188,17 +192,17 @@ func TestSheetDimensions(t *testing.T) {
 		chainY     []string
 	}{
 		// HB-7: end 1-1/2, pitch 3 (× 3), gage 2-1/2 on a 4-in leg.
-		{"../testdata/jobs/us-single-angle.yaml", 0, []string{`1 1/2"`, `3"`, `3"`, `3"`},
+		{"../../testdata/jobs/us-single-angle.yaml", 0, []string{`1 1/2"`, `3"`, `3"`, `3"`},
 			[]string{`4 1/2"`, `7 1/2"`, `10 1/2"`}, []string{`2 1/2"`, `1 1/2"`}},
 		// HB-7 plate: edge 1-1/2 from the free edge; 12 in wide, bolts mid-width;
 		// overall 1'-7 1/2" (19.5 in).
-		{"../testdata/jobs/us-single-angle.yaml", 1, []string{`1 1/2"`, `3"`, `3"`, `3"`},
+		{"../../testdata/jobs/us-single-angle.yaml", 1, []string{`1 1/2"`, `3"`, `3"`, `3"`},
 			[]string{`4 1/2"`, `7 1/2"`, `10 1/2"`, `1'-7 1/2"`}, []string{`6"`, `6"`}},
 		// KB-40: end 40, pitch 65, gage 65 on the 120 leg.
-		{"../testdata/jobs/si-slotted.yaml", 0, []string{"40", "65", "65", "65"},
+		{"../../testdata/jobs/si-slotted.yaml", 0, []string{"40", "65", "65", "65"},
 			[]string{"105", "170", "235"}, []string{"65", "55"}},
 		// FT_03: end 2, pitch 3, stagger 1-1/2; gages 2 and 2 + 4 on an 8-in flat.
-		{"../testdata/jobs/us-staggered-flat.yaml", 0, []string{`2"`, `1 1/2"`, `1 1/2"`, `1 1/2"`, `1 1/2"`, `1 1/2"`},
+		{"../../testdata/jobs/us-staggered-flat.yaml", 0, []string{`2"`, `1 1/2"`, `1 1/2"`, `1 1/2"`, `1 1/2"`, `1 1/2"`},
 			[]string{`3 1/2"`, `5"`, `6 1/2"`, `8"`, `9 1/2"`}, []string{`2"`, `4"`, `2"`}},
 	} {
 		_, s := sheetOf(t, tt.path)
@@ -244,7 +248,7 @@ func TestSheetDimensions(t *testing.T) {
 }
 
 func TestSheetRefusesFailing(t *testing.T) {
-	r := checkedJob(t, "../testdata/jobs/us-single-angle.yaml")
+	r := checkedJob(t, "../../testdata/jobs/us-single-angle.yaml")
 	if r.Pass {
 		t.Fatal("HB-7 passes; the test needs a failing job")
 	}
@@ -263,7 +267,7 @@ func TestSheetRefusesFailing(t *testing.T) {
 }
 
 func TestSheetTitleBlock(t *testing.T) {
-	_, s := sheetOf(t, "../testdata/jobs/si-double-angle.yaml")
+	_, s := sheetOf(t, "../../testdata/jobs/si-double-angle.yaml")
 	var all []string
 	for _, x := range s.Texts {
 		all = append(all, x.Value)
@@ -327,7 +331,7 @@ func titleField(t *testing.T, s *Sheet, label string) string {
 func TestSheetTitleNamesWhatFails(t *testing.T) {
 	// TE-9: end distance 5/8 in < 1 in for a 3/4-in bolt (AISC 360-16
 	// Table J3.4); every limit state passes.
-	r, s := sheetOf(t, "../testdata/batch/e-tight-edge.yaml")
+	r, s := sheetOf(t, "../../testdata/batch/e-tight-edge.yaml")
 	g := r.GoverningResult()
 	if !g.Pass {
 		t.Fatalf("TE-9: %s fails; the test needs a failing rule and passing limit states", g.ID)
@@ -336,7 +340,7 @@ func TestSheetTitleNamesWhatFails(t *testing.T) {
 		t.Errorf("GOVERNING %q, want %s ... FAIL: edge.min", got, g.ID)
 	}
 	// Where the governing limit state fails, it is what the title names.
-	_, s = sheetOf(t, "../testdata/jobs/us-single-angle.yaml")
+	_, s = sheetOf(t, "../../testdata/jobs/us-single-angle.yaml")
 	if got := titleField(t, s, "GOVERNING"); !strings.HasPrefix(got, "bolts.shear") || !strings.HasSuffix(got, " - FAIL") {
 		t.Errorf("GOVERNING %q, want bolts.shear ... - FAIL", got)
 	}
@@ -400,4 +404,13 @@ bolts:
 			}
 		})
 	}
+}
+
+func writeJob(t *testing.T, name, yaml string) string {
+	t.Helper()
+	p := filepath.Join(t.TempDir(), name)
+	if err := os.WriteFile(p, []byte(yaml), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	return p
 }
