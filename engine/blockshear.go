@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 
+	"gaugeline/engine/working"
 	"gaugeline/rules/units"
 )
 
@@ -341,17 +342,17 @@ func blockResult(c *Connection, id string, blocks []block, p blockPart) Result {
 	r.explain = func() Working {
 		agv, anv, ant, ubs, fy, fu := *pAgv, *pAnv, *pAnt, *pUbs, *pFy, *pFu
 		rupture, yield := blockShearParts(Fy, Fu, Agv, Anv, Ant, Ubs)
-		tension := Mul(Coef(ubs, 1), Of(fu), Of(ant))
+		tension := working.Mul(working.Coef(ubs, 1), working.Of(fu), working.Of(ant))
 		rup := Step{Value: Value{Sym: "shear rupture + tension", V: float64(rupture), Dim: units.DimForce},
-			Expr: Add(Mul(K(0.6, "0.60"), Of(fu), Of(anv)), tension)}
+			Expr: working.Add(working.Mul(working.K(0.6, "0.60"), working.Of(fu), working.Of(anv)), tension)}
 		yld := Step{Value: Value{Sym: "shear yielding + tension", V: float64(yield), Dim: units.DimForce},
-			Expr: Add(Mul(K(0.6, "0.60"), Of(fy), Of(agv)), tension)}
+			Expr: working.Add(working.Mul(working.K(0.6, "0.60"), working.Of(fy), working.Of(agv)), tension)}
 		return Working{
 			Title:   title,
-			Formula: []Step{{Value: Value{Sym: "Rn"}, Expr: rup.Expr, Then: Phrase(Words(" ≤ "), yld.Expr)}},
+			Formula: []Step{{Value: Value{Sym: "Rn"}, Expr: rup.Expr, Then: working.Phrase(working.Words(" ≤ "), yld.Expr)}},
 			Where:   "Agv and Anv are the gross and net areas in shear, Ant the net area in tension, of one block; every plausible block is examined and the weakest governs",
 			Steps: []Step{rup, yld,
-				{Value: nominal(Rn), Expr: Min(Of(rup.Value), Of(yld.Value)), Say: Words("the lesser")}},
+				{Value: nominal(Rn), Expr: working.Min(working.Of(rup.Value), working.Of(yld.Value)), Say: working.Words("the lesser")}},
 		}
 	}
 	return r
