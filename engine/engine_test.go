@@ -5,6 +5,7 @@ import (
 	"math"
 	"testing"
 
+	"gaugeline/engine/netsection"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
 )
@@ -222,15 +223,15 @@ func TestNetWidthStaggered(t *testing.T) {
 	// Two lines 3 in apart, holes 1 in wide (with the allowance), stagger
 	// 1.5 in: the zig-zag deduction is 1 + 1 − 1.5²/(4·3) = 1.8125 in, more
 	// than the straight 1 in (hand calculation per AISC 360-22 B4.3b).
-	holes := []PathHole{{X: 0, U: in(1.5), Dh: in(1)}, {X: in(1.5), U: in(4.5), Dh: in(1)}}
-	d, path := NetWidthDeduction(holes)
+	holes := []netsection.PathHole{{X: 0, U: in(1.5), Dh: in(1)}, {X: in(1.5), U: in(4.5), Dh: in(1)}}
+	d, path := netsection.NetWidthDeduction(holes)
 	near(t, "deduction", d.In(), 2-1.5*1.5/12, 1e-12, "AISC 360-22 B4.3b, hand calculation")
 	if len(path) != 2 {
 		t.Errorf("path %v, want both holes", path)
 	}
 	// With a 4-in stagger the straight path governs: 2 − 16/12 < 1.
 	holes[1].X = in(4)
-	d, path = NetWidthDeduction(holes)
+	d, path = netsection.NetWidthDeduction(holes)
 	near(t, "deduction", d.In(), 1, 1e-12, "AISC 360-22 B4.3b, hand calculation")
 	if len(path) != 1 {
 		t.Errorf("path %v, want one hole", path)
@@ -244,12 +245,12 @@ func TestSeguiStaggeredPlate(t *testing.T) {
 	// 13.75 in; path abcde: wn = 16 − 3(1.125) + 2(3²)/(4·5) = 13.52 in,
 	// which governs: An = 0.75(13.52) = 10.14 in².
 	const src = "Segui, Steel Design, Example 3.6 (from memory)"
-	holes := []PathHole{
+	holes := []netsection.PathHole{
 		{X: 0, U: in(3), Dh: in(1.125)},
 		{X: in(3), U: in(8), Dh: in(1.125)},
 		{X: 0, U: in(13), Dh: in(1.125)},
 	}
-	d, path := NetWidthDeduction(holes)
+	d, path := netsection.NetWidthDeduction(holes)
 	near(t, "wn", (in(16) - d).In(), 13.52, pubTol, src)
 	near(t, "An", (in(16)-d).In()*0.75, 10.14, pubTol, src)
 	if len(path) != 3 {

@@ -4,80 +4,24 @@ import (
 	"math"
 	"sort"
 
+	"gaugeline/engine/netsection"
 	"gaugeline/engine/working"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
 )
 
-// eps is the geometric tolerance in mm: holes closer than this in y are on
-// one gage line, in x in one row.
-const eps = 1e-6
-
-// PathHole is a hole as a net-section path sees it: its position along the
-// load (X), its position across the section (U: y in a flat part, or the
-// unfolded coordinate of an angle) and the width it removes (Dh: nominal
-// hole across the load plus the B4.3 allowance).
-type PathHole struct {
-	X, U, Dh units.Length
-}
-
-// NetWidthDeduction finds the worst straight or zig-zag path across the
-// section (B4.3b): the chain of holes, in increasing U, that maximises
-// Σ Dh − Σ s²/4g, where s is the spacing along the load and g the gage
-// between consecutive holes of the chain. It returns that deduction and
-// the indexes of the holes on the path. Holes on one gage line (g ≈ 0)
-// are never on one path.
-func NetWidthDeduction(holes []PathHole) (units.Length, []int) {
-	n := len(holes)
-	if n == 0 {
-		return 0, nil
-	}
-	order := make([]int, n)
-	for i := range order {
-		order[i] = i
-	}
-	sort.SliceStable(order, func(a, b int) bool { return holes[order[a]].U < holes[order[b]].U })
-	best := make([]float64, n) // best deduction of a chain ending at order[k]
-	prev := make([]int, n)
-	for k := 0; k < n; k++ {
-		hk := holes[order[k]]
-		best[k], prev[k] = float64(hk.Dh), -1
-		for j := 0; j < k; j++ {
-			hj := holes[order[j]]
-			g := float64(hk.U - hj.U)
-			if g <= eps {
-				continue
-			}
-			s := float64(hk.X - hj.X)
-			if d := best[j] - s*s/(4*g) + float64(hk.Dh); d > best[k] {
-				best[k], prev[k] = d, j
-			}
-		}
-	}
-	end := 0
-	for k := 1; k < n; k++ {
-		if best[k] > best[end] {
-			end = k
-		}
-	}
-	var path []int
-	for k := end; k >= 0; k = prev[k] {
-		path = append(path, order[k])
-	}
-	for i, j := 0, len(path)-1; i < j; i, j = i+1, j-1 {
-		path[i], path[j] = path[j], path[i]
-	}
-	return units.Length(best[end]), path
-}
+// eps is the geometric tolerance in mm (netsection.Tolerance): holes
+// closer than this in y are on one gage line, in x in one row.
+const eps = netsection.Tolerance
 
 // pathHoles returns one part's holes for the net-section search, each of
 // the shape ply gives it in that part (memberPly or platePly).
-func pathHoles(c *Connection, ply func(*Hole) HoleShape) []PathHole {
+func pathHoles(c *Connection, ply func(*Hole) HoleShape) []netsection.PathHole {
 	allow := c.Edition.HoleAllowance()
-	ph := make([]PathHole, len(c.Holes))
+	ph := make([]netsection.PathHole, len(c.Holes))
 	for i := range c.Holes {
 		h := &c.Holes[i]
-		ph[i] = PathHole{X: h.X, U: h.Y, Dh: ply(h).Dy + allow}
+		ph[i] = netsection.PathHole{X: h.X, U: h.Y, Dh: ply(h).Dy + allow}
 	}
 	return ph
 }
@@ -86,7 +30,7 @@ func pathHoles(c *Connection, ply func(*Hole) HoleShape) []PathHole {
 // worst path's deduction times the thickness of every piece.
 func NetArea(c *Connection) (An units.Area, deduction units.Length) {
 	m := c.Member
-	deduction, _ = NetWidthDeduction(pathHoles(c, memberPly))
+	deduction, _ = netsection.NetWidthDeduction(pathHoles(c, memberPly))
 	return m.Ag - units.Area(float64(m.Pieces)*float64(deduction)*float64(m.T)), deduction
 }
 

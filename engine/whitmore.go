@@ -4,6 +4,7 @@ import (
 	"math"
 	"strconv"
 
+	"gaugeline/engine/netsection"
 	"gaugeline/engine/working"
 	"gaugeline/rules/units"
 )
@@ -65,7 +66,7 @@ func WhitmoreSection(c *Connection) Whitmore {
 	w.Spread = w.High.Y1 - w.Low.Y1
 	w.YLo, w.YHi = max(w.Low.Y1, c.Plate.YMin()), min(w.High.Y1, c.Plate.YMax())
 	w.Lw = max(w.YHi-w.YLo, 0)
-	ded, path := NetWidthDeduction(pathHoles(c, platePly))
+	ded, path := netsection.NetWidthDeduction(pathHoles(c, platePly))
 	w.Holes, w.Deducted = len(path), ded
 	return w
 }
