@@ -227,10 +227,7 @@ func MemberCombined(c *Connection) Result {
 		Demand:    Pr,
 		Ratio:     ratio,
 		Values:    vs.list,
-		Note: fmt.Sprintf("H1.2 selects Eq. %s (%.3f); Pr with Mr = Pr·e, e the bolt group's offset from the bar's centre line; "+
-			"Pc = D2 %s, the lesser of yielding and rupture; Mc from F11 on the gross bar bent in its plane, "+
-			"Lb = 0 (the bar is bolted to and bears on the plate over the connection), F11.2(%s); "+
-			"ratio = Pr over the largest force the interaction allows at this e", eq, selected, axial, ltb),
+		Note:      combinedNote(eq, selected, axial, ltb),
 	}
 	if ratio > 0 {
 		res.Available = Pr / units.Force(ratio)
@@ -240,6 +237,16 @@ func MemberCombined(c *Connection) Result {
 	method := c.Method
 	res.explain = func() Working { return combinedWorking(ed, method, ratio, &v, eq) }
 	return res
+}
+
+// combinedNote says what member.combined checked: the equation H1.2
+// selects and its value, the axial limit state that gives Pc (axial) and
+// the case of F11.2 (ltb).
+func combinedNote(eq string, selected float64, axial, ltb string) string {
+	return fmt.Sprintf("H1.2 selects Eq. %s (%.3f); Pr with Mr = Pr·e, e the bolt group's offset from the bar's centre line; "+
+		"Pc = D2 %s, the lesser of yielding and rupture; Mc from F11 on the gross bar bent in its plane, "+
+		"Lb = 0 (the bar is bolted to and bears on the plate over the connection), F11.2(%s); "+
+		"ratio = Pr over the largest force the interaction allows at this e", eq, selected, axial, ltb)
 }
 
 // combinedParts are the values of member.combined, in its values list.
