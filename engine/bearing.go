@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 
+	"gaugeline/engine/working"
 	"gaugeline/rules/units"
 )
 
@@ -116,9 +117,9 @@ func bearingResult(c *Connection, bp bearingPart, ply func(*Hole) HoleShape, t u
 			why = "deformation at the bolt hole at service load is not a design consideration"
 		}
 		bearing, tearout := BearingRn(cb, ct, D, lcMin, t, Fu)
-		lcUsed := Of(lc)
+		lcUsed := working.Of(lc)
 		if lcMin < 0 { // holes that overlap: no tearout strength
-			lcUsed = Max(lcUsed, K(0, "0"))
+			lcUsed = working.Max(lcUsed, working.K(0, "0"))
 		}
 		terms := make([]Expr, len(shares))
 		table := &Table{Title: "Bolt by bolt, lc measured " + bp.toward, Cols: []Column{
@@ -127,28 +128,28 @@ func bearingResult(c *Connection, bp bearingPart, ply func(*Hole) HoleShape, t u
 			{Label: "rn", Dim: units.DimForce, UnitInHead: true}, {Label: "governs", Text: true},
 		}, Cells: make([]Cell, 0, 6*len(shares))}
 		for i, s := range shares {
-			terms[i] = Of(Value{Sym: "rn", V: float64(s.Rn), Dim: units.DimForce})
+			terms[i] = working.Of(Value{Sym: "rn", V: float64(s.Rn), Dim: units.DimForce})
 			table.Cells = append(table.Cells, Cell{Text: s.Hole}, Cell{V: float64(s.Lc)}, Cell{V: float64(s.Bearing)},
 				Cell{V: float64(s.Tearout)}, Cell{V: float64(s.Rn)}, Cell{Text: s.Governed})
 		}
-		rn := Step{Value: nominal(Rn), Expr: Sum("rn", terms),
-			Say: Phrase(Words("Σ rn over "), Of(bolts), Words(" bolts (table)"))}
-		each := func(v Value) Expr { return Of(Value{Sym: v.Symbol()}) }
+		rn := Step{Value: nominal(Rn), Expr: working.Sum("rn", terms),
+			Say: working.Phrase(working.Words("Σ rn over "), working.Of(bolts), working.Words(" bolts (table)"))}
+		each := func(v Value) Expr { return working.Of(Value{Sym: v.Symbol()}) }
 		return Working{
 			Title: bp.title,
 			Formula: []Step{
-				{Value: Value{Sym: "rn"}, Expr: Min(Mul(each(cbv), each(d), each(tv), each(fu)),
-					Mul(each(ctv), Of(Value{Sym: "lc"}), each(tv), each(fu))), Then: Words(", for each bolt")},
+				{Value: Value{Sym: "rn"}, Expr: working.Min(working.Mul(each(cbv), each(d), each(tv), each(fu)),
+					working.Mul(each(ctv), working.Of(Value{Sym: "lc"}), each(tv), each(fu))), Then: working.Words(", for each bolt")},
 				rn,
 			},
 			Where: "lc is the clear distance, in the direction of the force, from the edge of the hole to the edge of the next hole or of the part",
 			Steps: []Step{
 				{Value: cbv, Places: 1},
-				{Value: ctv, Places: 1, Join: ", ", Then: Words(": " + why)},
+				{Value: ctv, Places: 1, Join: ", ", Then: working.Words(": " + why)},
 				{Value: Value{Sym: "bearing, each bolt", V: float64(bearing), Dim: units.DimForce},
-					Expr: Mul(Coef(cbv, 1), Of(d), Of(tv), Of(fu))},
+					Expr: working.Mul(working.Coef(cbv, 1), working.Of(d), working.Of(tv), working.Of(fu))},
 				{Value: Value{Sym: "tearout, bolt with the least lc", V: float64(tearout), Dim: units.DimForce},
-					Expr: Mul(Coef(ctv, 1), lcUsed, Of(tv), Of(fu))},
+					Expr: working.Mul(working.Coef(ctv, 1), lcUsed, working.Of(tv), working.Of(fu))},
 				rn,
 			},
 			Table: table,

@@ -2,8 +2,9 @@ package engine
 
 import (
 	"fmt"
-	"math"
 
+	"gaugeline/engine/netsection"
+	"gaugeline/engine/working"
 	"gaugeline/rules/units"
 )
 
@@ -23,22 +24,11 @@ func blockShearParts(Fy, Fu units.Stress, Agv, Anv, Ant units.Area, Ubs float64)
 	return 0.6*Fu.Times(Anv) + tension, 0.6*Fy.Times(Agv) + tension
 }
 
-// block is one candidate block: its boundaries across the load are either a
-// free edge or a gage line (a shear plane runs along every gage-line
-// boundary); the tension plane runs between the boundaries through the
-// innermost hole of every line it crosses. Bolts is the number of bolts
-// whose holes the block tears out.
+// block is one candidate block of the search (netsection.Block) and how
+// a report names it.
 type block struct {
-	desc          string
-	Agv, Anv, Ant units.Area
-	Rn            units.Force
-	Bolts         int
-}
-
-// worseThan orders blocks by ratio at any demand: the bolts a block tears
-// out (its share of the force) over its strength.
-func (b block) worseThan(o block) bool {
-	return float64(b.Bolts)*float64(o.Rn) > float64(o.Bolts)*float64(b.Rn)*(1+1e-12)
+	netsection.Block
+	desc string
 }
 
 // blockPart describes one part for the block search.
@@ -56,236 +46,36 @@ type blockPart struct {
 	ply    func(*Hole) HoleShape
 }
 
-// HoleChord is the length along the load that a line parallel to the load,
-// dy off the hole's centre, cuts through a hole a long (along the load)
-// and b wide (across it): the whole length a on the centre line, less as
-// the line moves off it, and zero once it clears the hole. Round holes and
-// slots (stadiums) are exact.
-func HoleChord(a, b, dy units.Length) units.Length {
-	dy = units.Length(math.Abs(float64(dy)))
-	if dy >= b/2 {
-		return 0
-	}
-	if b >= a { // round, or a slot across the load: straight sides along x
-		straight := (b - a) / 2
-		if dy <= straight {
-			return a
-		}
-		r, e := float64(a/2), float64(dy-straight)
-		return units.Length(2 * math.Sqrt(max(r*r-e*e, 0)))
-	}
-	r := float64(b / 2) // a slot along the load: round ends of radius b/2
-	return a - b + units.Length(2*math.Sqrt(max(r*r-float64(dy*dy), 0)))
-}
-
-// blocks enumerates every block of the part and returns them all.
+// blocks enumerates every block of the part (netsection.Blocks) and
+// names each.
 func (p blockPart) blocks(c *Connection) []block {
 	// every hole as this part has it (the member's ply or the plate's)
-	holes := make([]Hole, len(c.Holes))
+	holes := make([]netsection.Hole, len(c.Holes))
 	for i := range c.Holes {
-		holes[i] = c.Holes[i]
-		holes[i].HoleShape, holes[i].Plate = p.ply(&c.Holes[i]), nil
+		h := &c.Holes[i]
+		s := p.ply(h)
+		holes[i] = netsection.Hole{X: h.X, Y: h.Y, Dx: s.Dx, Dy: s.Dy}
 	}
-	allow := c.Edition.HoleAllowance()
+	part := netsection.Part{T: p.t, Low: p.low, High: p.high, HasLow: p.hasLow, HasHigh: p.hasHigh, XEdge: p.xEdge, Toward: p.toward}
+	rn := func(Agv, Anv, Ant units.Area) units.Force { return BlockShearRn(p.Fy, p.Fu, Agv, Anv, Ant, 1) }
 	lines := GageLines(c)
-	nl := len(lines)
-	// dist is a hole's distance from the tear-out edge along the load.
-	dist := func(h Hole) units.Length { return units.Length(p.toward) * (p.xEdge - h.X) }
-	// innermost hole of each line: farthest from the tear-out edge
-	inner := make([]int, nl)
-	for i, ln := range lines {
-		inner[i] = ln[0]
-		for _, h := range ln {
-			if dist(holes[h]) > dist(holes[inner[i]]) {
-				inner[i] = h
-			}
-		}
-	}
-	// shearTo is the shear plane along y from the edge to the distance D:
-	// it takes out the part between the edge and D of every hole it cuts
-	// (B4.3 width along the load): half of one centred where it ends. As-
-	// built holes a little off the line are cut over their chord, not over
-	// their whole length.
-	shearTo := func(y, D units.Length) (Agv, Anv units.Area) {
-		net := D
-		for _, h := range holes {
-			cut := HoleChord(h.Dx+allow, h.Dy+allow, h.Y-y)
-			d := dist(h)
-			if lo, hi := max(d-cut/2, 0), min(d+cut/2, D); hi > lo {
-				net -= hi - lo
-			}
-		}
-		return D.Mul(p.t), net.Mul(p.t)
-	}
-	// inside reports whether the hole of h reaches inside a block whose
-	// tension plane is at the distance D where h lies across the load: its
-	// bolt is then torn out with the block (a bolt whose hole the plane
-	// cuts counts, which is the larger share).
-	inside := func(h Hole, D units.Length) bool { return dist(h) < D+h.Dx/2-eps }
-	// torn counts the bolts a block between y0 and y1 tears out, its
-	// tension plane at the distance at(y).
-	torn := func(y0, y1 units.Length, at func(units.Length) units.Length) int {
-		n := 0
-		for _, h := range holes {
-			if h.Y+h.Dy/2 > y0-eps && h.Y-h.Dy/2 < y1+eps && inside(h, at(h.Y)) {
-				n++
-			}
-		}
-		return n
-	}
-	// shear is the shear plane along line i to its innermost hole.
-	shear := func(i int) (Agv, Anv units.Area) {
-		hi := holes[inner[i]]
-		return shearTo(hi.Y, dist(hi))
-	}
-	// across is a tension plane square to the load at the distance D from
-	// y0 to y1: it takes out the part between y0 and y1 of every hole it
-	// cuts (B4.3 width across the load).
-	across := func(y0, y1, D units.Length) units.Area {
-		net := y1 - y0
-		for _, h := range holes {
-			w := HoleChord(h.Dy+allow, h.Dx+allow, dist(h)-D)
-			lo, hi := max(h.Y-w/2, y0), min(h.Y+w/2, y1)
-			if hi > lo {
-				net -= hi - lo
-			}
-		}
-		return max(net, 0).Mul(p.t)
-	}
-	// plane is one tension plane from boundary a to boundary b (line
-	// indexes; -1 is the low free edge, nl the high free edge): it ends at
-	// the boundaries' innermost holes (taking half of each) and, between
-	// them, passes through the innermost hole of each line in the mask
-	// (the whole hole, plus s²/4g for each diagonal, B4.3b) and past the
-	// others. It returns Ant and the bolts the block tears out: every hole
-	// between the boundaries (or cut by a boundary's shear plane) on the
-	// edge side of the plane.
-	plane := func(a, b int, y0, y1 units.Length, between []int, mask int) (units.Area, int) {
-		var stops []Hole
-		net := y1 - y0
-		half := func(i int) {
-			h := holes[inner[i]]
-			stops = append(stops, h)
-			net -= (h.Dy + allow) / 2
-		}
-		if a >= 0 {
-			half(a)
-		}
-		for k, i := range between {
-			if mask&(1<<k) != 0 {
-				h := holes[inner[i]]
-				stops = append(stops, h)
-				net -= h.Dy + allow
-			}
-		}
-		if b < nl {
-			half(b)
-		}
-		for k := 1; k < len(stops); k++ {
-			g, s := stops[k].Y-stops[k-1].Y, stops[k].X-stops[k-1].X
-			if g > eps {
-				net += units.Length(float64(s*s) / float64(4*g))
-			}
-		}
-		// the plane's distance from the edge at y: straight between its
-		// stops, square to the load beyond the first and the last
-		at := func(y units.Length) units.Length {
-			if y <= stops[0].Y {
-				return dist(stops[0])
-			}
-			for k := 1; k < len(stops); k++ {
-				if y <= stops[k].Y {
-					f := (y - stops[k-1].Y) / max(stops[k].Y-stops[k-1].Y, eps)
-					return dist(stops[k-1]) + f*(dist(stops[k])-dist(stops[k-1]))
-				}
-			}
-			return dist(stops[len(stops)-1])
-		}
-		return net.Mul(p.t), torn(y0, y1, at)
-	}
-	// most is how many lines in between are tried every way; beyond it
-	// the plane goes through all of them or through none.
-	const most = 8
-	var out []block
-	add := func(a, b int, desc string) {
-		var Agv, Anv units.Area
-		for _, i := range []int{a, b} {
-			if i >= 0 && i < nl {
-				g, n := shear(i)
-				Agv, Anv = Agv+g, Anv+n
-			}
-		}
-		Agv, Anv = max(Agv, 0), max(Anv, 0)
-		y0, y1 := p.low, p.high
-		if a >= 0 {
-			y0 = holes[inner[a]].Y
-		}
-		if b < nl {
-			y1 = holes[inner[b]].Y
-		}
-		var between []int
-		for i := a + 1; i < b; i++ {
-			if i >= 0 && i < nl {
-				between = append(between, i)
-			}
-		}
-		masks := []int{1<<len(between) - 1, 0}
-		if len(between) <= most {
-			masks = masks[:0]
-			for m := 1<<len(between) - 1; m >= 0; m-- {
-				masks = append(masks, m)
-			}
-		}
-		// the plane that makes the block worst
-		var worst block
-		first := true
-		consider := func(bl block) {
-			if first || bl.worseThan(worst) {
-				worst, first = bl, false
-			}
-		}
-		for _, m := range masks {
-			Ant, bolts := plane(a, b, y0, y1, between, m)
-			Ant = max(Ant, 0)
-			consider(block{desc, Agv, Anv, Ant, BlockShearRn(p.Fy, p.Fu, Agv, Anv, Ant, 1), bolts})
-		}
-		// square blocks: the shear planes along the boundaries run to the
-		// distance D of a hole between them and the tension plane goes
-		// straight across there, past the boundaries' own last holes when
-		// they end nearer the edge (a measured hole off its line makes a
-		// line of its own that ends early)
-		for _, h := range holes {
-			if h.Y+h.Dy/2 <= y0+eps || h.Y-h.Dy/2 >= y1-eps {
-				continue
-			}
-			D := dist(h)
-			var gv, nv units.Area
-			if a >= 0 {
-				gv, nv = shearTo(y0, D)
-			}
-			if b < nl {
-				g, n := shearTo(y1, D)
-				gv, nv = gv+g, nv+n
-			}
-			nt := across(y0, y1, D)
-			bolts := torn(y0, y1, func(units.Length) units.Length { return D })
-			gv, nv = max(gv, 0), max(nv, 0)
-			consider(block{desc, gv, nv, nt, BlockShearRn(p.Fy, p.Fu, gv, nv, nt, 1), bolts})
-		}
-		out = append(out, worst)
-	}
-	for a := 0; a < nl; a++ {
-		if p.hasLow {
-			add(-1, a, fmt.Sprintf("%s: line %d to the %s", p.name, a+1, p.edgeName(false)))
-		}
-		if p.hasHigh {
-			add(a, nl, fmt.Sprintf("%s: line %d to the %s", p.name, a+1, p.edgeName(true)))
-		}
-		for b := a + 1; b < nl; b++ {
-			add(a, b, fmt.Sprintf("%s: between lines %d and %d", p.name, a+1, b+1))
-		}
+	found := netsection.Blocks(part, holes, lines, c.Edition.HoleAllowance(), rn)
+	out := make([]block, len(found))
+	for i, b := range found {
+		out[i] = block{b, p.describe(b, len(lines))}
 	}
 	return out
+}
+
+// describe names a block by its boundaries.
+func (p blockPart) describe(b netsection.Block, lines int) string {
+	switch {
+	case b.Low < 0:
+		return fmt.Sprintf("%s: line %d to the %s", p.name, b.High+1, p.edgeName(false))
+	case b.High >= lines:
+		return fmt.Sprintf("%s: line %d to the %s", p.name, b.Low+1, p.edgeName(true))
+	}
+	return fmt.Sprintf("%s: between lines %d and %d", p.name, b.Low+1, b.High+1)
 }
 
 func (p blockPart) edgeName(high bool) string {
@@ -311,7 +101,7 @@ func blockResult(c *Connection, id string, blocks []block, p blockPart) Result {
 	n := len(c.Holes)
 	w := 0
 	for i, b := range blocks {
-		if b.worseThan(blocks[w]) {
+		if b.WorseThan(blocks[w].Block) {
 			w = i
 		}
 	}
@@ -341,17 +131,17 @@ func blockResult(c *Connection, id string, blocks []block, p blockPart) Result {
 	r.explain = func() Working {
 		agv, anv, ant, ubs, fy, fu := *pAgv, *pAnv, *pAnt, *pUbs, *pFy, *pFu
 		rupture, yield := blockShearParts(Fy, Fu, Agv, Anv, Ant, Ubs)
-		tension := Mul(Coef(ubs, 1), Of(fu), Of(ant))
+		tension := working.Mul(working.Coef(ubs, 1), working.Of(fu), working.Of(ant))
 		rup := Step{Value: Value{Sym: "shear rupture + tension", V: float64(rupture), Dim: units.DimForce},
-			Expr: Add(Mul(K(0.6, "0.60"), Of(fu), Of(anv)), tension)}
+			Expr: working.Add(working.Mul(working.K(0.6, "0.60"), working.Of(fu), working.Of(anv)), tension)}
 		yld := Step{Value: Value{Sym: "shear yielding + tension", V: float64(yield), Dim: units.DimForce},
-			Expr: Add(Mul(K(0.6, "0.60"), Of(fy), Of(agv)), tension)}
+			Expr: working.Add(working.Mul(working.K(0.6, "0.60"), working.Of(fy), working.Of(agv)), tension)}
 		return Working{
 			Title:   title,
-			Formula: []Step{{Value: Value{Sym: "Rn"}, Expr: rup.Expr, Then: Phrase(Words(" ≤ "), yld.Expr)}},
+			Formula: []Step{{Value: Value{Sym: "Rn"}, Expr: rup.Expr, Then: working.Phrase(working.Words(" ≤ "), yld.Expr)}},
 			Where:   "Agv and Anv are the gross and net areas in shear, Ant the net area in tension, of one block; every plausible block is examined and the weakest governs",
 			Steps: []Step{rup, yld,
-				{Value: nominal(Rn), Expr: Min(Of(rup.Value), Of(yld.Value)), Say: Words("the lesser")}},
+				{Value: nominal(Rn), Expr: working.Min(working.Of(rup.Value), working.Of(yld.Value)), Say: working.Words("the lesser")}},
 		}
 	}
 	return r

@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 
+	"gaugeline/engine/working"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
 )
@@ -96,20 +97,20 @@ func BoltShear(c *Connection) Result {
 	r.explain = func() Working {
 		fnv, ab, nv, planes, lj, pl, ffv := *pFnv, *pAb, *pN, *pPlanes, *pLj, *pPl, *pFf
 		d := Value{Sym: "d", V: float64(bolt.D), Dim: units.DimLength}
-		abStep := Step{Value: ab, Expr: Div(Mul(K(math.Pi, "π"), Sq(Of(d))), K(4, "4"))}
-		fnvStep := Step{Value: fnv, Then: Phrase(Words(" for "), Words(bolt.Grade.Name), Words(", threads "), Words(bolt.Threads.String()))}
+		abStep := Step{Value: ab, Expr: working.Div(working.Mul(working.K(math.Pi, "π"), working.Sq(working.Of(d))), working.K(4, "4"))}
+		fnvStep := Step{Value: fnv, Then: working.Phrase(working.Words(" for "), working.Words(bolt.Grade.Name), working.Words(", threads "), working.Words(bolt.Threads.String()))}
 		if f != 0 && f < 1 {
 			long, _ := ed.LongJoint()
-			fnvStep.Expr = Mul(Of(Value{Sym: "Fnv", V: float64(bolt.Grade.Fnv(bolt.Threads)), Dim: units.DimStress}), Coef(lj, 3))
-			fnvStep.Show = ShowValue
-			fnvStep.Then.Args = append(fnvStep.Then.Args, Words(", reduced by the factor "), Coef(lj, 3), Words(": the pattern is "),
-				Of(pl), Words(" long, over "), Of(Value{V: float64(long), Dim: units.DimLength}))
+			fnvStep.Expr = working.Mul(working.Of(Value{Sym: "Fnv", V: float64(bolt.Grade.Fnv(bolt.Threads)), Dim: units.DimStress}), working.Coef(lj, 3))
+			fnvStep.Show = working.ShowValue
+			fnvStep.Then.Args = append(fnvStep.Then.Args, working.Words(", reduced by the factor "), working.Coef(lj, 3), working.Words(": the pattern is "),
+				working.Of(pl), working.Words(" long, over "), working.Of(Value{V: float64(long), Dim: units.DimLength}))
 		}
-		rnExpr := Mul(Of(fnv), Of(ab), Of(nv), Named("ns", Of(planes)))
+		rnExpr := working.Mul(working.Of(fnv), working.Of(ab), working.Of(nv), working.Named("ns", working.Of(planes)))
 		where := "n is the number of bolts and ns the shear planes of each"
 		w := Working{Title: "Shear rupture of the bolts", Steps: []Step{abStep, fnvStep}}
 		if ff < 1 {
-			rnExpr.Args = append(rnExpr.Args, Coef(ffv, 3))
+			rnExpr.Args = append(rnExpr.Args, working.Coef(ffv, 3))
 			formula, steps := fillerWorking(ed.System, bolt.FillerT, ff)
 			w.Formula = append(w.Formula, formula)
 			w.Steps = append(w.Steps, steps...)
@@ -137,26 +138,26 @@ func fillerWorking(sys units.System, t units.Length, ff float64) (formula Step, 
 	var raw Expr
 	unit := "in."
 	if sys == units.SI {
-		raw = Sub(K(1, "1"), Mul(K(0.0154, "0.0154"), Sub(Coef(Value{Sym: "t", V: t.Mm()}, -4), K(6, "6"))))
+		raw = working.Sub(working.K(1, "1"), working.Mul(working.K(0.0154, "0.0154"), working.Sub(working.Coef(Value{Sym: "t", V: t.Mm()}, -4), working.K(6, "6"))))
 		unit = "mm"
 	} else {
-		raw = Sub(K(1, "1"), Mul(K(0.4, "0.4"), Sub(Coef(Value{Sym: "t", V: t.In()}, -4), K(0.25, "0.25"))))
+		raw = working.Sub(working.K(1, "1"), working.Mul(working.K(0.4, "0.4"), working.Sub(working.Coef(Value{Sym: "t", V: t.In()}, -4), working.K(0.25, "0.25"))))
 	}
 	const floor = 0.85
-	formula = Step{Value: Value{Sym: "ff"}, Expr: raw, Then: Words(" ≥ 0.85, t in " + unit)}
+	formula = Step{Value: Value{Sym: "ff"}, Expr: raw, Then: working.Words(" ≥ 0.85, t in " + unit)}
 	// The formula's value before the floor: the edition applies the
 	// floor inside FillerFactor, so the limit state has no variable of
 	// its own for it. Where the floor does not bind, the step's value is
 	// the edition's factor and the tests hold the formula to it; where it
 	// binds, the second step is held to it.
 	v, _ := raw.Eval()
-	then := Phrase(Words(": fillers "), Of(valFillerT(t)), Words(" thick, not developed"))
+	then := working.Phrase(working.Words(": fillers "), working.Of(valFillerT(t)), working.Words(" thick, not developed"))
 	if v >= ff {
 		return formula, []Step{{Value: Value{Sym: "ff", V: ff}, Expr: raw, Then: then}}
 	}
 	return formula, []Step{
 		{Value: Value{Sym: "ff", V: v}, Expr: raw},
-		{Value: Value{Sym: "ff", V: ff}, Expr: Max(Of(Value{V: v}), K(floor, "0.85")), Show: ShowValue,
+		{Value: Value{Sym: "ff", V: ff}, Expr: working.Max(working.Of(Value{V: v}), working.K(floor, "0.85")), Show: working.ShowValue,
 			Join: ", not less than 0.85: ", Then: then},
 	}
 }
@@ -215,7 +216,7 @@ func BoltSlip(c *Connection) (Result, error) {
 	r := finish(c, "bolts.slip", "J3.8", Rn, f, vs.list, fmt.Sprintf("class %s surface, %d slip plane(s)", c.Bolt.Surface, ns))
 	r.explain = func() Working {
 		muv, duv, hfv, tb, nsv, nv := *pMu, *pDu, *pHf, *pTb, *pNs, *pN
-		rn := Step{Value: nominal(Rn), Expr: Mul(Coef(muv, 2), Coef(duv, 2), Coef(hfv, 2), Of(tb), Of(nsv), Of(nv))}
+		rn := Step{Value: nominal(Rn), Expr: working.Mul(working.Coef(muv, 2), working.Coef(duv, 2), working.Coef(hfv, 2), working.Of(tb), working.Of(nsv), working.Of(nv))}
 		return Working{
 			Title:   "Slip resistance of the slip-critical joint",
 			Formula: []Step{rn},
@@ -288,21 +289,21 @@ func BoltGroup(c *Connection, member, plate []BoltShare) Result {
 				table.Cells = append(table.Cells, Cell{V: float64(plate[i].Rn)})
 			}
 			table.Cells = append(table.Cells, Cell{V: float64(rn)}, Cell{Text: by})
-			terms[i] = Of(Value{Sym: "rn", V: float64(rn), Dim: units.DimForce})
+			terms[i] = working.Of(Value{Sym: "rn", V: float64(rn), Dim: units.DimForce})
 		}
-		perBolt := Step{Value: rnShear, Show: ShowValue,
-			Expr: Mul(Of(Value{Sym: "Fnv", V: float64(Fnv), Dim: units.DimStress}), Of(Value{Sym: "Ab", V: float64(Ab), Dim: units.DimArea}),
-				Of(Value{Sym: "ns", V: float64(ns)}), Of(Value{Sym: "ff", V: ff})),
-			Then: Words(" per bolt")}
+		perBolt := Step{Value: rnShear, Show: working.ShowValue,
+			Expr: working.Mul(working.Of(Value{Sym: "Fnv", V: float64(Fnv), Dim: units.DimStress}), working.Of(Value{Sym: "Ab", V: float64(Ab), Dim: units.DimArea}),
+				working.Of(Value{Sym: "ns", V: float64(ns)}), working.Of(Value{Sym: "ff", V: ff})),
+			Then: working.Words(" per bolt")}
 		where := "rn,shear = Fnv·Ab·ns is the shear strength of one bolt"
 		if ff < 1 {
-			perBolt.Then = Phrase(Words(" per bolt, with the filler factor ff = "), Coef(ffv, 3), Words(" (J5.2(a))"))
+			perBolt.Then = working.Phrase(working.Words(" per bolt, with the filler factor ff = "), working.Coef(ffv, 3), working.Words(" (J5.2(a))"))
 			where = "rn,shear = Fnv·Ab·ns·ff is the shear strength of one bolt, ff the filler factor of J5.2(a) (see bolts.shear)"
 		}
-		rn := Step{Value: nominal(Rn), Expr: Sum("min(rn,shear; rn,member; rn,plate)", terms),
-			Say: Phrase(Words("Σ over "), Of(nv), Words(" bolts (table)"))}
+		rn := Step{Value: nominal(Rn), Expr: working.Sum("min(rn,shear; rn,member; rn,plate)", terms),
+			Say: working.Phrase(working.Words("Σ over "), working.Of(nv), working.Words(" bolts (table)"))}
 		formula := rn
-		formula.Then = Words(", over the bolts")
+		formula.Then = working.Words(", over the bolts")
 		return Working{
 			Title:   "Strength of the bolt group, bolt by bolt",
 			Formula: []Step{formula},

@@ -7,6 +7,7 @@ import (
 
 	"gaugeline/rules"
 
+	"gaugeline/engine/working"
 	"gaugeline/rules/units"
 )
 
@@ -226,10 +227,7 @@ func MemberCombined(c *Connection) Result {
 		Demand:    Pr,
 		Ratio:     ratio,
 		Values:    vs.list,
-		Note: fmt.Sprintf("H1.2 selects Eq. %s (%.3f); Pr with Mr = Pr·e, e the bolt group's offset from the bar's centre line; "+
-			"Pc = D2 %s, the lesser of yielding and rupture; Mc from F11 on the gross bar bent in its plane, "+
-			"Lb = 0 (the bar is bolted to and bears on the plate over the connection), F11.2(%s); "+
-			"ratio = Pr over the largest force the interaction allows at this e", eq, selected, axial, ltb),
+		Note:      combinedNote(eq, selected, axial, ltb),
 	}
 	if ratio > 0 {
 		res.Available = Pr / units.Force(ratio)
@@ -239,6 +237,16 @@ func MemberCombined(c *Connection) Result {
 	method := c.Method
 	res.explain = func() Working { return combinedWorking(ed, method, ratio, &v, eq) }
 	return res
+}
+
+// combinedNote says what member.combined checked: the equation H1.2
+// selects and its value, the axial limit state that gives Pc (axial) and
+// the case of F11.2 (ltb).
+func combinedNote(eq string, selected float64, axial, ltb string) string {
+	return fmt.Sprintf("H1.2 selects Eq. %s (%.3f); Pr with Mr = Pr·e, e the bolt group's offset from the bar's centre line; "+
+		"Pc = D2 %s, the lesser of yielding and rupture; Mc from F11 on the gross bar bent in its plane, "+
+		"Lb = 0 (the bar is bolted to and bears on the plate over the connection), F11.2(%s); "+
+		"ratio = Pr over the largest force the interaction allows at this e", eq, selected, axial, ltb)
 }
 
 // combinedParts are the values of member.combined, in its values list.
@@ -251,44 +259,44 @@ type combinedParts struct {
 func combinedWorking(ed *rules.Edition, method rules.Method, ratioV float64, v *combinedParts, eq string) Working {
 	lrfd := method == rules.LRFD
 	fb := ed.FlexureFactor()
-	sym := func(s string) Expr { return Of(Value{Sym: s}) }
-	two := K(2, "2")
+	sym := func(s string) Expr { return working.Of(Value{Sym: s}) }
+	two := working.K(2, "2")
 
-	eStep := Step{Value: *v.e, Expr: Abs(Sub(Of(*v.ybar), Div(Of(*v.d), two)))}
-	mr := Step{Value: *v.Mr, Expr: Mul(Of(*v.Pr), Of(*v.e))}
-	pc := Step{Value: *v.Pc, Expr: Min(Of(*v.PcY), Of(*v.PcR))}
+	eStep := Step{Value: *v.e, Expr: working.Abs(working.Sub(working.Of(*v.ybar), working.Div(working.Of(*v.d), two)))}
+	mr := Step{Value: *v.Mr, Expr: working.Mul(working.Of(*v.Pr), working.Of(*v.e))}
+	pc := Step{Value: *v.Pc, Expr: working.Min(working.Of(*v.PcY), working.Of(*v.PcR))}
 	sx := *v.S
 	sx.Sym = "Sx"
-	z := Step{Value: *v.Z, Expr: Div(Mul(Of(*v.t), Sq(Of(*v.d))), K(4, "4"))}
-	s := Step{Value: sx, Expr: Div(Mul(Of(*v.t), Sq(Of(*v.d))), K(6, "6")), Join: "; "}
-	mp := Step{Value: *v.Mp, Expr: Min(Mul(Of(*v.Fy), Of(*v.Z)), Mul(K(v.k.V, strconv.FormatFloat(v.k.V, 'f', 1, 64)), Of(*v.Fy), Of(sx)))}
+	z := Step{Value: *v.Z, Expr: working.Div(working.Mul(working.Of(*v.t), working.Sq(working.Of(*v.d))), working.K(4, "4"))}
+	s := Step{Value: sx, Expr: working.Div(working.Mul(working.Of(*v.t), working.Sq(working.Of(*v.d))), working.K(6, "6")), Join: "; "}
+	mp := Step{Value: *v.Mp, Expr: working.Min(working.Mul(working.Of(*v.Fy), working.Of(*v.Z)), working.Mul(working.K(v.k.V, strconv.FormatFloat(v.k.V, 'f', 1, 64)), working.Of(*v.Fy), working.Of(sx)))}
 	E := Value{Sym: "E", V: float64(ed.SteelModulus()), Dim: units.DimStress}
 	lb := []Step{
 		{Value: *v.Lb},
-		{Value: *v.lambda, Places: 1, Expr: Div(Mul(Of(*v.Lb), Of(*v.d)), Sq(Of(*v.t))), Show: ShowValue, Join: ": "},
+		{Value: *v.lambda, Places: 1, Expr: working.Div(working.Mul(working.Of(*v.Lb), working.Of(*v.d)), working.Sq(working.Of(*v.t))), Show: working.ShowValue, Join: ": "},
 	}
 	if v.lambda.V <= v.limit.V {
 		lb = append(lb,
-			Step{Value: *v.limit, Places: 1, Expr: Div(Mul(K(0.08, "0.08"), Of(E)), Of(*v.Fy)), Show: ShowValue, Join: " ≤ "},
-			Step{Value: *v.Mn, Expr: Of(*v.Mp), Say: Words("Mp"), Join: ", F11.2(a): "})
+			Step{Value: *v.limit, Places: 1, Expr: working.Div(working.Mul(working.K(0.08, "0.08"), working.Of(E)), working.Of(*v.Fy)), Show: working.ShowValue, Join: " ≤ "},
+			Step{Value: *v.Mn, Expr: working.Of(*v.Mp), Say: working.Words("Mp"), Join: ", F11.2(a): "})
 	} else {
 		lb = append(lb,
-			Step{Value: *v.limit, Places: 1, Expr: Div(Mul(K(0.08, "0.08"), Of(E)), Of(*v.Fy)), Show: ShowValue, Join: " > "},
+			Step{Value: *v.limit, Places: 1, Expr: working.Div(working.Mul(working.K(0.08, "0.08"), working.Of(E)), working.Of(*v.Fy)), Show: working.ShowValue, Join: " > "},
 			Step{Value: *v.Mn, Join: ", F11.2: "})
 	}
 	phi, omega := Value{Sym: "φb", V: fb.Phi}, Value{Sym: "Ωb", V: fb.Omega}
-	mc := Step{Value: *v.Mc, Expr: Mul(Coef(phi, 2), Of(*v.Mn))}
+	mc := Step{Value: *v.Mc, Expr: working.Mul(working.Coef(phi, 2), working.Of(*v.Mn))}
 	mcText := ", φb = " + strconv.FormatFloat(fb.Phi, 'f', 2, 64)
-	pcForm := Step{Value: Value{Sym: "Pc"}, Expr: Min(Mul(sym("φt"), sym("Fy"), sym("Ag")), Mul(sym("φt"), sym("Fu"), sym("Ae")))}
+	pcForm := Step{Value: Value{Sym: "Pc"}, Expr: working.Min(working.Mul(sym("φt"), sym("Fy"), sym("Ag")), working.Mul(sym("φt"), sym("Fu"), sym("Ae")))}
 	if !lrfd {
-		mc.Expr = Div(Of(*v.Mn), Coef(omega, 2))
+		mc.Expr = working.Div(working.Of(*v.Mn), working.Coef(omega, 2))
 		mcText = ", Ωb = " + strconv.FormatFloat(fb.Omega, 'f', 2, 64)
-		pcForm.Expr = Min(Div(Mul(sym("Fy"), sym("Ag")), sym("Ωt")), Div(Mul(sym("Fu"), sym("Ae")), sym("Ωt")))
+		pcForm.Expr = working.Min(working.Div(working.Mul(sym("Fy"), sym("Ag")), sym("Ωt")), working.Div(working.Mul(sym("Fu"), sym("Ae")), sym("Ωt")))
 	}
-	p, m := Step{Value: *v.p, Places: 3, Expr: Div(Of(*v.Pr), Of(*v.Pc))}, Step{Value: *v.m, Places: 3, Expr: Div(Of(*v.Mr), Of(*v.Mc)), Join: "; "}
-	h1a := Step{Value: *v.a, Places: 3, Expr: Add(Coef(*v.p, 3), Mul(K(8.0/9.0, "(8/9)"), Coef(*v.m, 3)))}
-	h1b := Step{Value: *v.b, Places: 3, Expr: Add(Div(Coef(*v.p, 3), two), Coef(*v.m, 3))}
-	ratio := Step{Value: Value{Sym: "ratio", V: ratioV}, Places: 3, Expr: Max(Coef(*v.a, 3), Coef(*v.b, 3))}
+	p, m := Step{Value: *v.p, Places: 3, Expr: working.Div(working.Of(*v.Pr), working.Of(*v.Pc))}, Step{Value: *v.m, Places: 3, Expr: working.Div(working.Of(*v.Mr), working.Of(*v.Mc)), Join: "; "}
+	h1a := Step{Value: *v.a, Places: 3, Expr: working.Add(working.Coef(*v.p, 3), working.Mul(working.K(8.0/9.0, "(8/9)"), working.Coef(*v.m, 3)))}
+	h1b := Step{Value: *v.b, Places: 3, Expr: working.Add(working.Div(working.Coef(*v.p, 3), two), working.Coef(*v.m, 3))}
+	ratio := Step{Value: Value{Sym: "ratio", V: ratioV}, Places: 3, Expr: working.Max(working.Coef(*v.a, 3), working.Coef(*v.b, 3))}
 	eqText := "H1-1a (Pr/Pc ≥ 0.2)"
 	if eq == "H1-1b" {
 		eqText = "H1-1b (Pr/Pc < 0.2)"
@@ -296,25 +304,25 @@ func combinedWorking(ed *rules.Edition, method rules.Method, ratioV float64, v *
 	steps := []Step{eStep, mr, pc, z, s, mp}
 	steps = append(steps, lb...)
 	steps = append(steps, mc, p, m, h1a, h1b,
-		Step{Then: Phrase(Words("H1.2 selects Eq. "+eqText+": "), Coef(*v.sel, 3))},
+		Step{Then: working.Phrase(working.Words("H1.2 selects Eq. "+eqText+": "), working.Coef(*v.sel, 3))},
 		ratio)
 
 	mrForm, eForm := mr, eStep
 	eForm.Join = ", "
 	mcForm := mc
-	mcForm.Then = Words(mcText)
+	mcForm.Then = working.Words(mcText)
 	ratioForm := ratio
-	ratioForm.Then = Words(" = Pr / (largest force allowed at e)")
+	ratioForm.Then = working.Words(" = Pr / (largest force allowed at e)")
 	return Working{
 		Title: "Tension with the moment of the eccentric bolt group (flat bar)",
 		Formula: []Step{
 			mrForm, eForm,
 			pcForm,
-			{Value: Value{Sym: "Mn"}, Expr: Words("Mp"), Then: Phrase(Words(" = "), Mul(Of(*v.Fy), Of(*v.Z)), Words(" ≤ "), Mul(sym("k"), Of(*v.Fy), Of(sx)))},
+			{Value: Value{Sym: "Mn"}, Expr: working.Words("Mp"), Then: working.Phrase(working.Words(" = "), working.Mul(working.Of(*v.Fy), working.Of(*v.Z)), working.Words(" ≤ "), working.Mul(sym("k"), working.Of(*v.Fy), working.Of(sx)))},
 			{Value: z.Value, Expr: z.Expr, Join: ", "}, {Value: sx, Expr: s.Expr, Join: ", "},
 			mcForm,
-			{Then: Phrase(Words("Eq. H1-1a, Pr/Pc ≥ 0.2: "), h1a.Expr, Words(" ≤ 1.0"))},
-			{Then: Words("Eq. H1-1b, Pr/Pc < 0.2: Pr/(2Pc) + Mr/Mc ≤ 1.0")},
+			{Then: working.Phrase(working.Words("Eq. H1-1a, Pr/Pc ≥ 0.2: "), h1a.Expr, working.Words(" ≤ 1.0"))},
+			{Then: working.Words("Eq. H1-1b, Pr/Pc < 0.2: Pr/(2Pc) + Mr/Mc ≤ 1.0")},
 			ratioForm,
 		},
 		Where: "ȳ is the mean y of the holes (every bolt the same, each an equal share); d the bar's width, the depth in the plane of bending; " +

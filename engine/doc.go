@@ -21,6 +21,13 @@
 // the demand, the ratio and the intermediate values used, so that reports
 // can quote them, and its working (Result.Working): its formula and its
 // steps as expressions over those values, which any report prints without
-// knowing the limit state (working.go). A failing limit state is a result,
-// not an error.
+// knowing the limit state (package engine/working). A failing limit state
+// is a result, not an error.
+//
+// Three packages below this one hold what is not a limit state: the
+// working's expressions and printer (engine/working), the geometry of net
+// sections and block-shear blocks (engine/netsection) and the ASCE 7 load
+// combinations (engine/loads). They import none of each other nor this
+// package; the aliases here (Working, Value, ServiceLoads …) keep callers
+// on package engine alone.
 package engine

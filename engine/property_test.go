@@ -8,6 +8,7 @@ import (
 
 	"pgregory.net/rapid"
 
+	"gaugeline/engine/netsection"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
 )
@@ -139,7 +140,7 @@ func TestPropertyWorstPathNotExceeded(t *testing.T) {
 	rapid.Check(t, func(rt *rapid.T) {
 		c := drawParams(rt).build(t)
 		ph := pathHoles(c, memberPly)
-		worst, _ := NetWidthDeduction(ph)
+		worst, _ := netsection.NetWidthDeduction(ph)
 		lines := GageLines(c)
 		// one hole from each of a run of consecutive lines
 		from := rapid.IntRange(0, len(lines)-1).Draw(rt, "from")
@@ -168,9 +169,9 @@ func TestPropertyWorstPathNotExceeded(t *testing.T) {
 
 // handChain is the B4.3b deduction of a chain built by hand through one
 // hole, drawn at random, of each gage line from..to: Σ Dh − Σ s²/4g.
-func handChain(rt *rapid.T, ph []PathHole, lines [][]int, from, to int, label string) units.Length {
+func handChain(rt *rapid.T, ph []netsection.PathHole, lines [][]int, from, to int, label string) units.Length {
 	var chain units.Length
-	var last *PathHole
+	var last *netsection.PathHole
 	for i := from; i <= to; i++ {
 		k := lines[i][rapid.IntRange(0, len(lines[i])-1).Draw(rt, fmt.Sprintf("%s%d", label, i))]
 		h := ph[k]

@@ -5,29 +5,6 @@ import (
 	"gaugeline/rules/units"
 )
 
-// Value is a named intermediate value of a limit state, with its dimension
-// so that it can be printed in the job's units, and what a report says of
-// it.
-type Value struct {
-	Name string  // stable key, e.g. "lc_min" (the JSON's values)
-	V    float64 // internal units
-	Dim  units.Dim
-	Sym  string // printed symbol, e.g. "lc,min" ("": Name)
-	What string // what it is, for a report's list of values
-	// Omit: a report's list of values may leave it out (it says nothing
-	// here, e.g. the filler factor of a joint without fillers); the JSON
-	// keeps every value.
-	Omit bool
-}
-
-// Symbol is the value's printed symbol.
-func (v Value) Symbol() string {
-	if v.Sym != "" {
-		return v.Sym
-	}
-	return v.Name
-}
-
 // BoltShare is one bolt's contribution to a per-bolt limit state.
 type BoltShare struct {
 	Hole     string

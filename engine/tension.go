@@ -4,79 +4,24 @@ import (
 	"math"
 	"sort"
 
+	"gaugeline/engine/netsection"
+	"gaugeline/engine/working"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
 )
 
-// eps is the geometric tolerance in mm: holes closer than this in y are on
-// one gage line, in x in one row.
-const eps = 1e-6
-
-// PathHole is a hole as a net-section path sees it: its position along the
-// load (X), its position across the section (U: y in a flat part, or the
-// unfolded coordinate of an angle) and the width it removes (Dh: nominal
-// hole across the load plus the B4.3 allowance).
-type PathHole struct {
-	X, U, Dh units.Length
-}
-
-// NetWidthDeduction finds the worst straight or zig-zag path across the
-// section (B4.3b): the chain of holes, in increasing U, that maximises
-// Σ Dh − Σ s²/4g, where s is the spacing along the load and g the gage
-// between consecutive holes of the chain. It returns that deduction and
-// the indexes of the holes on the path. Holes on one gage line (g ≈ 0)
-// are never on one path.
-func NetWidthDeduction(holes []PathHole) (units.Length, []int) {
-	n := len(holes)
-	if n == 0 {
-		return 0, nil
-	}
-	order := make([]int, n)
-	for i := range order {
-		order[i] = i
-	}
-	sort.SliceStable(order, func(a, b int) bool { return holes[order[a]].U < holes[order[b]].U })
-	best := make([]float64, n) // best deduction of a chain ending at order[k]
-	prev := make([]int, n)
-	for k := 0; k < n; k++ {
-		hk := holes[order[k]]
-		best[k], prev[k] = float64(hk.Dh), -1
-		for j := 0; j < k; j++ {
-			hj := holes[order[j]]
-			g := float64(hk.U - hj.U)
-			if g <= eps {
-				continue
-			}
-			s := float64(hk.X - hj.X)
-			if d := best[j] - s*s/(4*g) + float64(hk.Dh); d > best[k] {
-				best[k], prev[k] = d, j
-			}
-		}
-	}
-	end := 0
-	for k := 1; k < n; k++ {
-		if best[k] > best[end] {
-			end = k
-		}
-	}
-	var path []int
-	for k := end; k >= 0; k = prev[k] {
-		path = append(path, order[k])
-	}
-	for i, j := 0, len(path)-1; i < j; i, j = i+1, j-1 {
-		path[i], path[j] = path[j], path[i]
-	}
-	return units.Length(best[end]), path
-}
+// eps is the geometric tolerance in mm (netsection.Tolerance): holes
+// closer than this in y are on one gage line, in x in one row.
+const eps = netsection.Tolerance
 
 // pathHoles returns one part's holes for the net-section search, each of
 // the shape ply gives it in that part (memberPly or platePly).
-func pathHoles(c *Connection, ply func(*Hole) HoleShape) []PathHole {
+func pathHoles(c *Connection, ply func(*Hole) HoleShape) []netsection.PathHole {
 	allow := c.Edition.HoleAllowance()
-	ph := make([]PathHole, len(c.Holes))
+	ph := make([]netsection.PathHole, len(c.Holes))
 	for i := range c.Holes {
 		h := &c.Holes[i]
-		ph[i] = PathHole{X: h.X, U: h.Y, Dh: ply(h).Dy + allow}
+		ph[i] = netsection.PathHole{X: h.X, U: h.Y, Dh: ply(h).Dy + allow}
 	}
 	return ph
 }
@@ -85,7 +30,7 @@ func pathHoles(c *Connection, ply func(*Hole) HoleShape) []PathHole {
 // worst path's deduction times the thickness of every piece.
 func NetArea(c *Connection) (An units.Area, deduction units.Length) {
 	m := c.Member
-	deduction, _ = NetWidthDeduction(pathHoles(c, memberPly))
+	deduction, _ = netsection.NetWidthDeduction(pathHoles(c, memberPly))
 	return m.Ag - units.Area(float64(m.Pieces)*float64(deduction)*float64(m.T)), deduction
 }
 
@@ -182,7 +127,7 @@ func MemberYield(c *Connection) Result {
 	r := finish(c, "member.yield", "D2(a)", Rn, c.Edition.YieldFactor(), vs.list, "gross section of the member")
 	r.explain = func() Working {
 		Fy, Ag := *pFy, *pAg
-		rn := Step{Value: nominal(Rn), Expr: Mul(Of(Fy), Of(Ag))}
+		rn := Step{Value: nominal(Rn), Expr: working.Mul(working.Of(Fy), working.Of(Ag))}
 		return Working{
 			Title:   "Tensile yielding in the gross section of the member",
 			Formula: []Step{rn},
@@ -224,13 +169,13 @@ func MemberRupture(c *Connection) Result {
 		Fu, Ag, an, u, ae, dd := *pFu, *pAg, *pAn, *pU, *pAe, *pDd
 		// An = Ag − Σt·deduction, Σt the thickness of every piece
 		tsum := Value{Sym: "Σt", V: float64(m.Pieces) * float64(m.T), Dim: units.DimLength}
-		t := Of(tsum)
+		t := working.Of(tsum)
 		if m.Pieces > 1 {
-			t = Named("Σt", Times(Of(Value{Sym: "n", V: float64(m.Pieces)}), Of(Value{Sym: "t", V: float64(m.T), Dim: units.DimLength})))
+			t = working.Named("Σt", working.Times(working.Of(Value{Sym: "n", V: float64(m.Pieces)}), working.Of(Value{Sym: "t", V: float64(m.T), Dim: units.DimLength})))
 		}
-		anStep := Step{Value: an, Expr: Sub(Of(Ag), Mul(t, Of(dd)))}
-		aeStep := Step{Value: ae, Expr: Mul(Of(u), Of(an))}
-		rn := Step{Value: nominal(Rn), Expr: Mul(Of(Fu), Of(ae))}
+		anStep := Step{Value: an, Expr: working.Sub(working.Of(Ag), working.Mul(t, working.Of(dd)))}
+		aeStep := Step{Value: ae, Expr: working.Mul(working.Of(u), working.Of(an))}
+		rn := Step{Value: nominal(Rn), Expr: working.Mul(working.Of(Fu), working.Of(ae))}
 		where := "the path is the worst straight or zig-zag path across the section (B4.3); s and g are the spacing and gage between consecutive holes of the path; dh = nominal hole + " +
 			units.FormatJob(ed.HoleAllowance(), ed.System)
 		w := Working{
@@ -239,29 +184,29 @@ func MemberRupture(c *Connection) Result {
 			Steps:   []Step{anStep},
 		}
 		if m.Shape.ShearLagCases().Has(D31Case1) {
-			w.Formula = append(w.Formula, Step{Value: Value{Sym: "U"}, Expr: K(1, "1.0")})
+			w.Formula = append(w.Formula, Step{Value: Value{Sym: "U"}, Expr: working.K(1, "1.0")})
 			where += "; U = 1.0 by Table D3.1 case 1: every part of the section is connected"
 			w.Steps = append(w.Steps, Step{Value: u})
 		} else {
 			xbar, l, u2, u8, ucon := *pXbar, *pL, *pU2, *pU8, *pUcon
-			w.Formula = append(w.Formula, Step{Value: Value{Sym: "U"}, Expr: Max(Sub(K(1, "1"), Div(Of(xbar), Of(l))),
-				Of(Value{Sym: "U case 8", V: sl.U8}), Of(Value{Sym: "U bound", V: sl.Ucon}))})
+			w.Formula = append(w.Formula, Step{Value: Value{Sym: "U"}, Expr: working.Max(working.Sub(working.K(1, "1"), working.Div(working.Of(xbar), working.Of(l))),
+				working.Of(Value{Sym: "U case 8", V: sl.U8}), working.Of(Value{Sym: "U bound", V: sl.Ucon}))})
 			where += "; 1 − x̄/l is Table D3.1 case 2; case 8 for angles is 0.80 with 4 or more bolts in a line, 0.60 with 3; the bound is the connected elements' area over Ag (D3)"
 			if sl.L > eps {
-				w.Steps = append(w.Steps, Step{Value: u2, Expr: Sub(K(1, "1"), Div(Of(xbar), Of(l))), Show: ShowForm})
+				w.Steps = append(w.Steps, Step{Value: u2, Expr: working.Sub(working.K(1, "1"), working.Div(working.Of(xbar), working.Of(l))), Show: working.ShowForm})
 			} else {
-				w.Steps = append(w.Steps, Step{Then: Words("U (case 2): one row of bolts, no length of connection")})
+				w.Steps = append(w.Steps, Step{Then: working.Words("U (case 2): one row of bolts, no length of connection")})
 			}
 			if sl.U8 > 0 {
 				w.Steps = append(w.Steps, Step{Value: u8})
 			} else {
-				w.Steps = append(w.Steps, Step{Then: Words("U (case 8) does not apply: fewer than 3 bolts in a line")})
+				w.Steps = append(w.Steps, Step{Then: working.Words("U (case 8) does not apply: fewer than 3 bolts in a line")})
 			}
-			connected := Mul(Of(Value{Sym: "n", V: float64(m.Pieces)}), Of(Value{Sym: "b", V: float64(m.Width), Dim: units.DimLength}),
-				Of(Value{Sym: "t", V: float64(m.T), Dim: units.DimLength}))
+			connected := working.Mul(working.Of(Value{Sym: "n", V: float64(m.Pieces)}), working.Of(Value{Sym: "b", V: float64(m.Width), Dim: units.DimLength}),
+				working.Of(Value{Sym: "t", V: float64(m.T), Dim: units.DimLength}))
 			w.Steps = append(w.Steps,
-				Step{Value: ucon, Expr: Div(connected, Of(Ag)), Say: Words("connected elements' area / Ag")},
-				Step{Value: u, Expr: Max(Of(u2), Of(u8), Of(ucon))})
+				Step{Value: ucon, Expr: working.Div(connected, working.Of(Ag)), Say: working.Words("connected elements' area / Ag")},
+				Step{Value: u, Expr: working.Max(working.Of(u2), working.Of(u8), working.Of(ucon))})
 		}
 		w.Where = where
 		w.Steps = append(w.Steps, aeStep, rn)

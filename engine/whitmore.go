@@ -4,6 +4,8 @@ import (
 	"math"
 	"strconv"
 
+	"gaugeline/engine/netsection"
+	"gaugeline/engine/working"
 	"gaugeline/rules/units"
 )
 
@@ -64,7 +66,7 @@ func WhitmoreSection(c *Connection) Whitmore {
 	w.Spread = w.High.Y1 - w.Low.Y1
 	w.YLo, w.YHi = max(w.Low.Y1, c.Plate.YMin()), min(w.High.Y1, c.Plate.YMax())
 	w.Lw = max(w.YHi-w.YLo, 0)
-	ded, path := NetWidthDeduction(pathHoles(c, platePly))
+	ded, path := netsection.NetWidthDeduction(pathHoles(c, platePly))
 	w.Holes, w.Deducted = len(path), ded
 	return w
 }
@@ -91,17 +93,19 @@ func PlateYield(c *Connection) Result {
 		Fy, lw, spread, t, ag := *pFy, *pLw, *pSpread, *pT, *pAg
 		aw := ag
 		aw.Sym = "Aw"
-		length := func(sym string, l units.Length) Expr { return Of(Value{Sym: sym, V: float64(l), Dim: units.DimLength}) }
+		length := func(sym string, l units.Length) Expr {
+			return working.Of(Value{Sym: sym, V: float64(l), Dim: units.DimLength})
+		}
 		lwStep := Step{Value: lw,
 			// the spread's ends clipped by the plate's side edges
-			Expr: Max(Sub(Min(length("y1", hi), length("ymax", ymax)), Max(length("y0", lo), length("ymin", ymin))), K(0, "0")),
-			Say:  Phrase(Of(spread), Words(" spread, clipped by the "), length("width", width), Words(" plate"))}
-		awStep := Step{Value: aw, Expr: Mul(Of(lw), Of(t))}
-		rn := Step{Value: nominal(Rn), Expr: Mul(Of(Fy), Of(aw))}
+			Expr: working.Max(working.Sub(working.Min(length("y1", hi), length("ymax", ymax)), working.Max(length("y0", lo), length("ymin", ymin))), working.K(0, "0")),
+			Say:  working.Phrase(working.Of(spread), working.Words(" spread, clipped by the "), length("width", width), working.Words(" plate"))}
+		awStep := Step{Value: aw, Expr: working.Mul(working.Of(lw), working.Of(t))}
+		rn := Step{Value: nominal(Rn), Expr: working.Mul(working.Of(Fy), working.Of(aw))}
 		return Working{
 			Title: "Tensile yielding of the plate on the Whitmore section",
 			Formula: []Step{rn, awStep,
-				{Value: Value{Sym: "Lw"}, Expr: Words("the spread, clipped by the plate's side edges")}},
+				{Value: Value{Sym: "Lw"}, Expr: working.Words("the spread, clipped by the plate's side edges")}},
 			Where: "the spread is the width between 30° lines drawn from the first bolt of each gage line (the one nearest the free edge) to the section through the bolt farthest from it (the Whitmore section); one row of bolts spreads over the row's width only, and a single bolt has no Whitmore section",
 			Steps: []Step{lwStep, awStep, rn},
 		}
@@ -141,30 +145,30 @@ func PlateRupture(c *Connection) Result {
 	ed, net := c.Edition, w.Lw-w.Deducted
 	r.explain = func() Working {
 		Fu, lw, t, ag, an, holes, dd := *pFu, *pLw, *pT, *pAg, *pAn, *pHoles, *pDd
-		rn := Step{Value: nominal(Rn), Expr: Mul(Of(Fu), Of(an))}
-		worked := Mul(Sub(Of(lw), Of(dd)), Of(t))
+		rn := Step{Value: nominal(Rn), Expr: working.Mul(working.Of(Fu), working.Of(an))}
+		worked := working.Mul(working.Sub(working.Of(lw), working.Of(dd)), working.Of(t))
 		var anStep Step
 		switch {
 		case capped != 0:
-			anStep = Step{Value: an, Expr: Mul(K(cap, strconv.FormatFloat(cap, 'f', -1, 64)), Of(ag)), Show: ShowForm, Then: Words(" (the splice-plate cap governs)")}
+			anStep = Step{Value: an, Expr: working.Mul(working.K(cap, strconv.FormatFloat(cap, 'f', -1, 64)), working.Of(ag)), Show: working.ShowForm, Then: working.Words(" (the splice-plate cap governs)")}
 		case net > 0:
 			anStep = Step{Value: an, Expr: worked}
 		default:
-			anStep = Step{Value: an, Expr: Max(worked, K(0, "0")), Then: Words(": no net section")}
+			anStep = Step{Value: an, Expr: working.Max(worked, working.K(0, "0")), Then: working.Words(": no net section")}
 		}
 		wk := Working{
 			Title:   "Tensile rupture of the plate on the Whitmore section",
-			Formula: []Step{rn, {Value: Value{Sym: "An"}, Expr: Mul(Add(Sub(Of(lw), Of(Value{Sym: "Σdh"})), Of(Value{Sym: "Σs²/4g"})), Of(t))}},
+			Formula: []Step{rn, {Value: Value{Sym: "An"}, Expr: working.Mul(working.Add(working.Sub(working.Of(lw), working.Of(Value{Sym: "Σdh"})), working.Of(Value{Sym: "Σs²/4g"})), working.Of(t))}},
 			Where: "the holes are those of the worst straight or zig-zag path across the plate (B4.3b, the same search as the member's); dh = nominal hole + " +
 				units.FormatJob(ed.HoleAllowance(), ed.System),
 			Steps: []Step{
-				{Value: ag, Expr: Mul(Of(lw), Of(t))},
-				{Then: Phrase(Words("worst path: "), Of(holes), Words(" hole(s), Σdh − Σs²/4g = "), Of(dd))},
+				{Value: ag, Expr: working.Mul(working.Of(lw), working.Of(t))},
+				{Then: working.Phrase(working.Words("worst path: "), working.Of(holes), working.Words(" hole(s), Σdh − Σs²/4g = "), working.Of(dd))},
 				anStep, rn,
 			},
 		}
 		if hasCap {
-			wk.Formula = append(wk.Formula, Step{Then: Words("An ≤ 0.85·Ag (splice plates)")})
+			wk.Formula = append(wk.Formula, Step{Then: working.Words("An ≤ 0.85·Ag (splice plates)")})
 		}
 		return wk
 	}

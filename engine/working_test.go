@@ -11,6 +11,7 @@ import (
 
 	"pgregory.net/rapid"
 
+	"gaugeline/engine/working"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
 )
@@ -42,25 +43,25 @@ func (exact) Quantity(v float64, _ units.Dim, _ int) string {
 // symbols joined by ·, a leading constant against a bracket, values in
 // brackets in a product, a constant divisor without spaces.
 func TestWorkingPrinter(t *testing.T) {
-	q := func(sym string, v float64) Expr { return Of(Value{Sym: sym, V: v}) }
+	q := func(sym string, v float64) Expr { return working.Of(Value{Sym: sym, V: v}) }
 	tests := []struct {
 		name       string
 		e          Expr
 		sym, subst string
 		want       float64 // the expression worked out by hand from the values
 	}{
-		{"product", Mul(q("Fy", 36), q("Ag", 3.75)), "Fy·Ag", "(36.000)(3.750)", 135},
-		{"constant first", Add(Mul(K(0.6, "0.60"), q("Fu", 58), q("Anv", 2)), Mul(Coef(Value{Sym: "Ubs", V: 1}, 1), q("Fu", 58), q("Ant", 0.5))),
+		{"product", working.Mul(q("Fy", 36), q("Ag", 3.75)), "Fy·Ag", "(36.000)(3.750)", 135},
+		{"constant first", working.Add(working.Mul(working.K(0.6, "0.60"), q("Fu", 58), q("Anv", 2)), working.Mul(working.Coef(Value{Sym: "Ubs", V: 1}, 1), q("Fu", 58), q("Ant", 0.5))),
 			"0.60·Fu·Anv + Ubs·Fu·Ant", "0.60(58.000)(2.000) + (1.0)(58.000)(0.500)", 0.6*58*2 + 58*0.5},
-		{"against a bracket", Sub(K(1, "1"), Mul(K(0.4, "0.4"), Sub(Coef(Value{Sym: "t", V: 0.5}, -4), K(0.25, "0.25")))),
+		{"against a bracket", working.Sub(working.K(1, "1"), working.Mul(working.K(0.4, "0.4"), working.Sub(working.Coef(Value{Sym: "t", V: 0.5}, -4), working.K(0.25, "0.25")))),
 			"1 − 0.4(t − 0.25)", "1 − 0.4(0.5 − 0.25)", 0.9},
-		{"square over a constant", Div(Mul(K(math.Pi, "π"), Sq(q("d", 2))), K(4, "4")), "π·d²/4", "π(2.000)²/4", math.Pi},
-		{"quotient of values", Sub(K(1, "1"), Div(q("x̄", 1), q("l", 4))), "1 − x̄/l", "1 − 1.000 / 4.000", 0.75},
-		{"compound symbol", Sub(q("Ag", 4), Mul(q("Σt", 0.5), q("Σdh − Σs²/4g", 1))), "Ag − Σt·(Σdh − Σs²/4g)", "4.000 − (0.500)(1.000)", 3.5},
-		{"named count", Mul(Named("Σt", Times(q("n", 2), q("t", 0.5))), q("w", 3)), "Σt·w", "(2.000 × 0.500)(3.000)", 3},
-		{"least", Min(Mul(q("Fy", 2), q("Z", 3)), Mul(K(1.5, "1.5"), q("Fy", 2), q("S", 2))), "min(Fy·Z, 1.5·Fy·S)", "min((2.000)(3.000), 1.5(2.000)(2.000))", 6},
-		{"absolute", Abs(Sub(q("ȳ", 1), Div(q("d", 6), K(2, "2")))), "|ȳ − d/2|", "|1.000 − 6.000/2|", 2},
-		{"sum", Sum("rn", []Expr{q("rn", 1), q("rn", 2)}), "Σ rn", "1.000 + 2.000", 3},
+		{"square over a constant", working.Div(working.Mul(working.K(math.Pi, "π"), working.Sq(q("d", 2))), working.K(4, "4")), "π·d²/4", "π(2.000)²/4", math.Pi},
+		{"quotient of values", working.Sub(working.K(1, "1"), working.Div(q("x̄", 1), q("l", 4))), "1 − x̄/l", "1 − 1.000 / 4.000", 0.75},
+		{"compound symbol", working.Sub(q("Ag", 4), working.Mul(q("Σt", 0.5), q("Σdh − Σs²/4g", 1))), "Ag − Σt·(Σdh − Σs²/4g)", "4.000 − (0.500)(1.000)", 3.5},
+		{"named count", working.Mul(working.Named("Σt", working.Times(q("n", 2), q("t", 0.5))), q("w", 3)), "Σt·w", "(2.000 × 0.500)(3.000)", 3},
+		{"least", working.Min(working.Mul(q("Fy", 2), q("Z", 3)), working.Mul(working.K(1.5, "1.5"), q("Fy", 2), q("S", 2))), "min(Fy·Z, 1.5·Fy·S)", "min((2.000)(3.000), 1.5(2.000)(2.000))", 6},
+		{"absolute", working.Abs(working.Sub(q("ȳ", 1), working.Div(q("d", 6), working.K(2, "2")))), "|ȳ − d/2|", "|1.000 − 6.000/2|", 2},
+		{"sum", working.Sum("rn", []Expr{q("rn", 1), q("rn", 2)}), "Σ rn", "1.000 + 2.000", 3},
 	}
 	for _, tt := range tests {
 		if got := tt.e.Symbolic(); got != tt.sym {
@@ -76,14 +77,14 @@ func TestWorkingPrinter(t *testing.T) {
 			t.Errorf("%s: read back %g (%v), want %g", tt.name, v, err, tt.want)
 		}
 	}
-	if _, ok := Phrase(Words("over "), q("n", 2)).Eval(); ok {
+	if _, ok := working.Phrase(working.Words("over "), q("n", 2)).Eval(); ok {
 		t.Error("words evaluate")
 	}
 	s := []Step{
-		{Value: Value{Sym: "Z", V: 9}, Expr: Mul(q("t", 1), q("d", 9))},
+		{Value: Value{Sym: "Z", V: 9}, Expr: working.Mul(q("t", 1), q("d", 9))},
 		{Value: Value{Sym: "Sx", V: 6}, Join: "; "},
-		{Value: Value{Sym: "Rn", V: 3}, Expr: Min(q("a", 3), q("b", 4)), Say: Words("the lesser"), Then: Words(" (table)")},
-		{Then: Words("a line of words")},
+		{Value: Value{Sym: "Rn", V: 3}, Expr: working.Min(q("a", 3), q("b", 4)), Say: working.Words("the lesser"), Then: working.Words(" (table)")},
+		{Then: working.Words("a line of words")},
 	}
 	w := Working{Steps: s}
 	want := []string{"Z = (1.000)(9.000) = 9.000; Sx = 6.000", "Rn = the lesser = 3.000 (table)", "a line of words"}
@@ -131,7 +132,7 @@ func CheckWorking(r Result, m rules.Method) []string {
 	}
 	var leaves func(where string, e Expr)
 	leaves = func(where string, e Expr) {
-		if e.Op == OpValue {
+		if e.Op == working.OpValue {
 			named(where, e.Value)
 		}
 		for _, a := range e.Args {
@@ -167,7 +168,7 @@ func CheckWorking(r Result, m rules.Method) []string {
 		if !closeTo(v, s.V) {
 			fail("%s: %s evaluates to %g, the limit state used %g", where, s.Expr.Substitute(plain{}), v, s.V)
 		}
-		if s.Show == ShowValue || !s.Say.IsZero() {
+		if s.Show == working.ShowValue || !s.Say.IsZero() {
 			continue // the substitution is not printed
 		}
 		text := s.Expr.Substitute(exact{})
