@@ -59,7 +59,7 @@ func Build(jf *jobfile.Job) (*Design, error) {
 //     that does not fit the member;
 //   - the plate: Design.placePlate puts the plate's free edge and centre
 //     line after the holes and tells the first hole off the plate;
-//   - as built: Design.withHoles is the design with other holes (the
+//   - as built: Design.WithHoles is the design with other holes (the
 //     measured ones), the plate as designed.
 //
 // Check (report.go) then checks whatever the steps made.
@@ -674,10 +674,10 @@ func (d *Design) placePlate(edge units.Length) int {
 	return -1
 }
 
-// withHoles is the design with other holes in place of its own (the
+// WithHoles is the design with other holes in place of its own (the
 // measured ones, each set in full): the parts, the plate's free edge and
 // centre line as designed.
-func (d *Design) withHoles(holes []engine.Hole) *Design {
+func (d *Design) WithHoles(holes []engine.Hole) *Design {
 	out := *d
 	out.Conn.Holes = holes
 	if d.Conn.Plate != nil {

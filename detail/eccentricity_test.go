@@ -9,7 +9,6 @@ import (
 	"strings"
 	"testing"
 
-	"gaugeline/detail/jobfile"
 	"gaugeline/engine"
 	"gaugeline/rules/units"
 )
@@ -204,31 +203,5 @@ func TestEccentricityKeyAndAngles(t *testing.T) {
 	r := checkSource(t, usAngle)
 	if _, ok := findingOf(r, "eccentricity"); ok {
 		t.Error("an angle got the J1.7 finding")
-	}
-}
-
-// As built, the group's offset is judged against the tolerance reverify
-// applies: FT_03 (testdata/jobs/us-staggered-flat.yaml, centred: gage
-// 2 in + gage2 4 in / 2 = 4 in on an 8-in bar) with every hole drilled
-// 0.1 in high has e = 0.1 in (hand calculation): over the default 1/16 in
-// (common practice, no source), within a --position of 1/8 in.
-func TestReverifyEccentricityUsesTheTolerance(t *testing.T) {
-	d := buildJob(t, filepath.Join("..", "testdata", "jobs", "us-staggered-flat.yaml"))
-	set := synthetic(d)
-	for i := range set.Holes {
-		set.Holes[i].Y += 0.1 * float64(units.Inch)
-	}
-	for _, c := range []struct {
-		pos  units.Length
-		pass bool
-	}{{0, false}, {units.Inch / 8, true}} {
-		ab, err := Reverify(d, set, ReverifyOptions{Align: AlignDatum, Tolerance: jobfile.Tolerance{Position: c.pos}})
-		if err != nil {
-			t.Fatal(err)
-		}
-		f, ok := findingOf(ab.Report, "eccentricity")
-		if !ok || math.Abs(units.Length(f.Measured).In()-0.1) > 1e-9 || f.Pass != c.pass {
-			t.Errorf("position tolerance %v in: finding %+v, want e = 0.1 in, pass %v", c.pos.In(), f, c.pass)
-		}
 	}
 }

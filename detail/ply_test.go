@@ -3,7 +3,6 @@ package detail
 import (
 	"encoding/json"
 	"math"
-	"path/filepath"
 	"strings"
 	"testing"
 
@@ -280,77 +279,5 @@ func TestReportPerPly(t *testing.T) {
 	}
 	if b, _ := r1.JSON(); strings.Contains(string(b), `"plate": {`) {
 		t.Errorf("a job of one hole type writes plate holes:\n%s", b)
-	}
-}
-
-// TestReverifyKeepsTheOtherPly: a measured part's holes are that part's
-// only. TD-21.sc (slip-critical, M20 in standard 22-mm holes, AISC 360-16
-// Table J3.3M) with H2 made 23.5 mm, an oversized hole as built (24 mm,
-// Table J3.3M; +1 mm tolerance, common practice): measured on the member,
-// the plate's H2 stays a standard 22-mm hole, and the plate's limit states
-// keep their design ratios; measured on the plate (in the plate's frame,
-// x' = FreeEdge − x, y' = YMax − y, as its CAM file), the member's do.
-func TestReverifyKeepsTheOtherPly(t *testing.T) {
-	d := buildJob(t, filepath.Join(measuredDir, "td-21-sc.yaml"))
-	std := d.Conn.Holes[1].HoleShape
-	if std.Type != rules.Standard || math.Abs(float64(std.Dx)-22) > 1e-9 {
-		t.Fatalf("design hole %+v, want standard 22 mm", std)
-	}
-	ratios := func(r *Report, part string) map[string]float64 {
-		m := map[string]float64{}
-		for _, x := range r.Results {
-			if strings.HasPrefix(x.ID, part+".") {
-				m[x.ID] = x.Ratio
-			}
-		}
-		return m
-	}
-	for _, part := range []MeasuredPart{MeasuredMember, MeasuredPlate} {
-		t.Run(part.String(), func(t *testing.T) {
-			set := synthetic(d)
-			if part == MeasuredPlate {
-				pl := d.Conn.Plate
-				for i := range set.Holes {
-					h := &set.Holes[i]
-					h.X, h.Y = float64(pl.FreeEdge)-h.X, float64(pl.YMax())-h.Y
-				}
-			}
-			set.Holes[1].Width, set.Holes[1].Length = 23.5, 23.5
-			ab, err := Reverify(d, set, ReverifyOptions{Part: part})
-			if err != nil {
-				t.Fatal(err)
-			}
-			for _, dv := range ab.Deviations {
-				if dv.Status == HoleMissing || dv.Status == HoleExtra {
-					t.Fatalf("%s %s: the part's frame was not taken: %q", part, dv.ID, statuses(ab))
-				}
-			}
-			built := ab.Report.Design.Conn.Holes[1]
-			measured, other := built.HoleShape, built.InPlate()
-			otherName := "plate"
-			if part == MeasuredPlate {
-				measured, other, otherName = other, measured, "member"
-			}
-			// As built a hole is the larger of measured and its type's
-			// nominal: oversized M20, 24 mm (Table J3.3M).
-			if measured.Type != rules.Oversized || math.Abs(float64(measured.Dx)-24) > 1e-9 {
-				t.Errorf("measured %s's H2 as built %+v, want oversized 24 mm", part, measured)
-			}
-			if other != std {
-				t.Errorf("the %s's H2 as built %+v, want as designed %+v", otherName, other, std)
-			}
-			want, got := ratios(ab.DesignReport, otherName), ratios(ab.Report, otherName)
-			for id, r := range want {
-				if math.Abs(got[id]-r) > 1e-12 {
-					t.Errorf("%s: ratio %g as built, %g designed; nothing of the %s was measured", id, got[id], r, otherName)
-				}
-			}
-			if !strings.Contains(strings.Join(ab.Report.Cautions, " "), "the "+part.String()+" was measured") {
-				t.Errorf("the report does not say the %s was measured: %q", part, ab.Report.Cautions)
-			}
-		})
-	}
-	if _, err := Reverify(buildJob(t, "../testdata/examples/aisc-d2.yaml"), synthetic(d), ReverifyOptions{Part: MeasuredPlate}); err != ErrNoPlate {
-		t.Errorf("a plate measured for a job without one: %v, want ErrNoPlate", err)
 	}
 }

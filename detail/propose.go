@@ -1819,17 +1819,17 @@ func (l Layout) json(sys units.System) (jsonLayout, *jsonPlateLayout) {
 
 // lengthJSON is a connection length in the job's units, rid of the
 // rounding noise of summing grid values (they lie on a 1e-9 grid).
-func lengthJSON(l units.Length, sys units.System) jsonNum {
-	return jsonNum(math.Round(sys.ToJob(float64(l), units.DimLength)*1e9) / 1e9)
+func lengthJSON(l units.Length, sys units.System) JSONNum {
+	return JSONNum(math.Round(sys.ToJob(float64(l), units.DimLength)*1e9) / 1e9)
 }
 
 type jsonAlternative struct {
 	Layout    jsonLayout       `json:"layout"`
 	Plate     *jsonPlateLayout `json:"plate,omitempty"`
 	Bolts     int              `json:"bolts"`
-	Length    jsonNum          `json:"length"`
+	Length    JSONNum          `json:"length"`
 	Governing string           `json:"governing"`
-	Ratio     jsonNum          `json:"ratio"`
+	Ratio     JSONNum          `json:"ratio"`
 }
 
 type jsonSearch struct {
@@ -1842,18 +1842,18 @@ type jsonSearch struct {
 }
 
 type jsonProposal struct {
-	jsonReport
+	Document
 	Layout       jsonLayout        `json:"layout"`
 	Plate        *jsonPlateLayout  `json:"plate,omitempty"`
 	Bolts        int               `json:"bolts"`
-	Length       jsonNum           `json:"length"`
+	Length       JSONNum           `json:"length"`
 	Alternatives []jsonAlternative `json:"alternatives"`
 	Search       jsonSearch        `json:"search"`
 }
 
 type jsonBlocker struct {
 	ID    string  `json:"id"`
-	Ratio jsonNum `json:"ratio,omitempty"`
+	Ratio JSONNum `json:"ratio,omitempty"`
 	What  string  `json:"what"`
 	Lift  string  `json:"lift"`
 }
@@ -1889,13 +1889,13 @@ func (p *Proposal) JSON(mode SearchMode) ([]byte, error) {
 	var doc any
 	if p.Found() {
 		jl, jp := p.Layout.json(sys)
-		d := jsonProposal{jsonReport: p.Report.document(), Layout: jl, Plate: jp, Bolts: p.Layout.Bolts(),
+		d := jsonProposal{Document: p.Report.Document(), Layout: jl, Plate: jp, Bolts: p.Layout.Bolts(),
 			Length: lengthJSON(p.Length, sys), Alternatives: []jsonAlternative{},
 			Search: p.search(mode)}
 		for _, a := range p.Alternatives {
 			al, ap := a.Layout.json(sys)
 			d.Alternatives = append(d.Alternatives, jsonAlternative{Layout: al, Plate: ap, Bolts: a.Layout.Bolts(),
-				Length: lengthJSON(a.Length, sys), Governing: a.Governing, Ratio: jsonNum(a.Ratio)})
+				Length: lengthJSON(a.Length, sys), Governing: a.Governing, Ratio: JSONNum(a.Ratio)})
 		}
 		doc = d
 	} else {
@@ -1903,7 +1903,7 @@ func (p *Proposal) JSON(mode SearchMode) ([]byte, error) {
 			UnitLabels: sys.Labels(), Verdict: "infeasible", Message: p.Summary, Blocking: []jsonBlocker{},
 			Search: p.search(mode), Cautions: []string{Caution}, Stamp: p.Job.Stamp}
 		for _, b := range p.Blockers {
-			d.Blocking = append(d.Blocking, jsonBlocker{ID: b.ID, Ratio: jsonNum(b.Ratio), What: b.Text, Lift: b.Lift})
+			d.Blocking = append(d.Blocking, jsonBlocker{ID: b.ID, Ratio: JSONNum(b.Ratio), What: b.Text, Lift: b.Lift})
 		}
 		doc = d
 	}

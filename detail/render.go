@@ -42,7 +42,8 @@ func RatioText(r float64) string {
 	return fmt.Sprintf("%.3f", r)
 }
 
-func okFail(pass, advisory bool) string {
+// PassMark is a result's mark in a table: ok, note (advisory) or FAIL.
+func PassMark(pass, advisory bool) string {
 	switch {
 	case pass:
 		return "ok"
@@ -155,7 +156,7 @@ func (r *Report) WriteText(w io.Writer) error {
 	tw = tabwriter.NewWriter(&b, 0, 0, 2, ' ', 0)
 	fmt.Fprintf(tw, "LIMIT STATE\tCLAUSE\tNOMINAL %s\tAVAILABLE %s\tRATIO\t\tWHAT\n", lb.Force, lb.Force)
 	for i, x := range r.Results {
-		mark := okFail(x.Pass, false)
+		mark := PassMark(x.Pass, false)
 		if i == r.Governing {
 			mark += " <"
 		}
@@ -163,7 +164,7 @@ func (r *Report) WriteText(w io.Writer) error {
 	}
 	tw.Flush()
 	fmt.Fprintf(&b, "\n")
-	p.findingsText(&b, "DETAILING", r.Findings)
+	FindingsText(&b, p.sys, "DETAILING", r.Findings)
 	fmt.Fprintf(&b, "\nverdict: %s — %s\n", strings.ToUpper(r.Verdict()), r.VerdictReason())
 	for _, f := range r.Findings {
 		switch {
@@ -195,16 +196,16 @@ func (r *Report) WriteMarkdown(w io.Writer) error {
 	}
 	fmt.Fprintf(&b, "\n## Limit states\n\n| id | clause | nominal (%s) | available (%s) | demand (%s) | ratio | result | what |\n|---|---|---:|---:|---:|---:|---|---|\n", lb.Force, lb.Force, lb.Force)
 	for i, x := range r.Results {
-		res := okFail(x.Pass, false)
+		res := PassMark(x.Pass, false)
 		id := x.ID
 		if i == r.Governing {
 			id = "**" + id + "**"
 			res += " (governs)"
 		}
-		fmt.Fprintf(&b, "| %s | %s | %s | %s | %s | %s | %s | %s |\n", id, x.Clause, p.force(x.Nominal), p.force(x.Available), p.force(x.Demand), RatioText(x.Ratio), res, mdEscape(x.Note))
+		fmt.Fprintf(&b, "| %s | %s | %s | %s | %s | %s | %s | %s |\n", id, x.Clause, p.force(x.Nominal), p.force(x.Available), p.force(x.Demand), RatioText(x.Ratio), res, MarkdownEscape(x.Note))
 	}
-	p.findingsMarkdown(&b, "Detailing", r.Findings)
-	fmt.Fprintf(&b, "\n**Verdict: %s** — %s.\n\n", strings.ToUpper(r.Verdict()), mdEscape(r.VerdictReason()))
+	FindingsMarkdown(&b, p.sys, "Detailing", r.Findings)
+	fmt.Fprintf(&b, "\n**Verdict: %s** — %s.\n\n", strings.ToUpper(r.Verdict()), MarkdownEscape(r.VerdictReason()))
 	for _, c := range r.Cautions {
 		fmt.Fprintf(&b, "> %s\n>\n", c)
 	}
@@ -212,23 +213,27 @@ func (r *Report) WriteMarkdown(w io.Writer) error {
 	return err
 }
 
-// findingsText writes the detailing findings as an aligned table under a
-// title column heading.
-func (p people) findingsText(b *strings.Builder, title string, fs []Finding) {
+// FindingsText writes detailing findings as an aligned table under a
+// title column heading, values in the units of sys.
+func FindingsText(b *strings.Builder, sys units.System, title string, fs []Finding) {
+	p := people{sys}
 	tw := tabwriter.NewWriter(b, 0, 0, 2, ' ', 0)
 	fmt.Fprintf(tw, "%s\tCLAUSE\tMEASURED\tLIMIT\t\tWHERE\n", title)
 	for _, f := range fs {
-		fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\t%s\n", f.ID, f.Clause, p.value(f.Measured, f.Dim), p.value(f.Limit, f.Dim), okFail(f.Pass, f.Advisory), f.Where)
+		fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\t%s\n", f.ID, f.Clause, p.value(f.Measured, f.Dim), p.value(f.Limit, f.Dim), PassMark(f.Pass, f.Advisory), f.Where)
 	}
 	tw.Flush()
 }
 
-// findingsMarkdown writes the detailing findings as a Markdown section.
-func (p people) findingsMarkdown(b *strings.Builder, title string, fs []Finding) {
+// FindingsMarkdown writes detailing findings as a Markdown section, values
+// in the units of sys.
+func FindingsMarkdown(b *strings.Builder, sys units.System, title string, fs []Finding) {
+	p := people{sys}
 	fmt.Fprintf(b, "\n## %s\n\n| id | clause | measured | limit | result | where |\n|---|---|---:|---:|---|---|\n", title)
 	for _, f := range fs {
-		fmt.Fprintf(b, "| %s | %s | %s | %s | %s | %s |\n", f.ID, f.Clause, mdEscape(p.value(f.Measured, f.Dim)), mdEscape(p.value(f.Limit, f.Dim)), okFail(f.Pass, f.Advisory), mdEscape(f.Where))
+		fmt.Fprintf(b, "| %s | %s | %s | %s | %s | %s |\n", f.ID, f.Clause, MarkdownEscape(p.value(f.Measured, f.Dim)), MarkdownEscape(p.value(f.Limit, f.Dim)), PassMark(f.Pass, f.Advisory), MarkdownEscape(f.Where))
 	}
 }
 
-func mdEscape(s string) string { return strings.ReplaceAll(s, "|", `\|`) }
+// MarkdownEscape escapes a table cell's pipes.
+func MarkdownEscape(s string) string { return strings.ReplaceAll(s, "|", `\|`) }

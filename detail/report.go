@@ -129,10 +129,10 @@ func cautions(d *Design) []string {
 	return c
 }
 
-// jsonNum is a float that encodes non-finite values as null.
-type jsonNum float64
+// JSONNum is a float that encodes non-finite values as null.
+type JSONNum float64
 
-func (n jsonNum) MarshalJSON() ([]byte, error) {
+func (n JSONNum) MarshalJSON() ([]byte, error) {
 	if math.IsNaN(float64(n)) || math.IsInf(float64(n), 0) {
 		return []byte("null"), nil
 	}
@@ -142,30 +142,30 @@ func (n jsonNum) MarshalJSON() ([]byte, error) {
 type jsonLimit struct {
 	ID        string             `json:"id"`
 	Clause    string             `json:"clause"`
-	Nominal   jsonNum            `json:"nominal"`
-	Available jsonNum            `json:"available"`
-	Demand    jsonNum            `json:"demand"`
-	Ratio     jsonNum            `json:"ratio"`
+	Nominal   JSONNum            `json:"nominal"`
+	Available JSONNum            `json:"available"`
+	Demand    JSONNum            `json:"demand"`
+	Ratio     JSONNum            `json:"ratio"`
 	Pass      bool               `json:"pass"`
-	Values    map[string]jsonNum `json:"values"`
+	Values    map[string]JSONNum `json:"values"`
 	Note      string             `json:"note,omitempty"`
 	PerBolt   []jsonBolt         `json:"per_bolt,omitempty"`
 }
 
 type jsonBolt struct {
 	Hole     string  `json:"hole"`
-	Lc       jsonNum `json:"lc"`
-	Bearing  jsonNum `json:"bearing"`
-	Tearout  jsonNum `json:"tearout"`
-	Rn       jsonNum `json:"rn"`
+	Lc       JSONNum `json:"lc"`
+	Bearing  JSONNum `json:"bearing"`
+	Tearout  JSONNum `json:"tearout"`
+	Rn       JSONNum `json:"rn"`
 	Governed string  `json:"governs"`
 }
 
 type jsonFinding struct {
 	ID       string  `json:"id"`
 	Clause   string  `json:"clause"`
-	Measured jsonNum `json:"measured"`
-	Limit    jsonNum `json:"limit"`
+	Measured JSONNum `json:"measured"`
+	Limit    JSONNum `json:"limit"`
 	Unit     string  `json:"unit"`
 	Pass     bool    `json:"pass"`
 	Advisory bool    `json:"advisory"`
@@ -174,10 +174,10 @@ type jsonFinding struct {
 
 type jsonHole struct {
 	ID       string  `json:"id"`
-	X        jsonNum `json:"x"`
-	Y        jsonNum `json:"y"`
-	Diameter jsonNum `json:"diameter"`
-	Length   jsonNum `json:"length,omitempty"`
+	X        JSONNum `json:"x"`
+	Y        JSONNum `json:"y"`
+	Diameter JSONNum `json:"diameter"`
+	Length   JSONNum `json:"length,omitempty"`
 	Type     string  `json:"type"`
 	Slot     string  `json:"slot,omitempty"`
 	// Plate is the hole in the plate's ply where it differs from the
@@ -186,23 +186,25 @@ type jsonHole struct {
 }
 
 type jsonPlyHole struct {
-	Diameter jsonNum `json:"diameter"`
-	Length   jsonNum `json:"length,omitempty"`
+	Diameter JSONNum `json:"diameter"`
+	Length   JSONNum `json:"length,omitempty"`
 	Type     string  `json:"type"`
 	Slot     string  `json:"slot,omitempty"`
 }
 
-type jsonReport struct {
+// Document is the check report as JSON (SPEC §9): the reverify and
+// propose documents embed it.
+type Document struct {
 	Mark           string        `json:"mark"`
 	Standard       string        `json:"standard"`
 	Method         string        `json:"method"`
 	Units          string        `json:"units"`
 	UnitLabels     units.Labels  `json:"unit_labels"`
-	Demand         jsonNum       `json:"demand"`
+	Demand         JSONNum       `json:"demand"`
 	Combination    string        `json:"combination,omitempty"`
 	Verdict        string        `json:"verdict"`
 	Governing      string        `json:"governing"`
-	GoverningRatio jsonNum       `json:"governing_ratio"`
+	GoverningRatio JSONNum       `json:"governing_ratio"`
 	Failing        []string      `json:"failing"` // Report.Failing; [] when it passes
 	LimitStates    []jsonLimit   `json:"limit_states"`
 	Detailing      []jsonFinding `json:"detailing"`
@@ -211,18 +213,18 @@ type jsonReport struct {
 	Stamp          string        `json:"stamp,omitempty"` // Job.Stamp: the run that wrote the file set
 }
 
-// document converts the report to the JSON contract of SPEC §9, every
+// Document converts the report to the JSON contract of SPEC §9, every
 // value in the job's units.
-func (r *Report) document() jsonReport {
+func (r *Report) Document() Document {
 	d := r.Design
 	sys := d.Job.Units
-	force := func(f units.Force) jsonNum { return jsonNum(sys.ToJob(float64(f), units.DimForce)) }
-	length := func(l units.Length) jsonNum { return jsonNum(sys.ToJob(float64(l), units.DimLength)) }
+	force := func(f units.Force) JSONNum { return JSONNum(sys.ToJob(float64(f), units.DimForce)) }
+	length := func(l units.Length) JSONNum { return JSONNum(sys.ToJob(float64(l), units.DimLength)) }
 	g := r.GoverningResult()
-	doc := jsonReport{
+	doc := Document{
 		Mark: d.Job.Mark, Standard: d.Conn.Edition.Name, Method: d.Conn.Method.String(), Units: sys.String(),
 		UnitLabels: sys.Labels(), Demand: force(d.Conn.Demand), Combination: d.Combination,
-		Verdict: r.Verdict(), Governing: g.ID, GoverningRatio: jsonNum(g.Ratio), Failing: r.Failing(),
+		Verdict: r.Verdict(), Governing: g.ID, GoverningRatio: JSONNum(g.Ratio), Failing: r.Failing(),
 		LimitStates: []jsonLimit{}, Detailing: []jsonFinding{}, Holes: []jsonHole{}, Cautions: r.Cautions,
 		Stamp: d.Job.Stamp,
 	}
@@ -231,9 +233,9 @@ func (r *Report) document() jsonReport {
 	}
 	for _, x := range r.Results {
 		l := jsonLimit{ID: x.ID, Clause: x.Clause, Nominal: force(x.Nominal), Available: force(x.Available),
-			Demand: force(x.Demand), Ratio: jsonNum(x.Ratio), Pass: x.Pass, Values: map[string]jsonNum{}, Note: x.Note}
+			Demand: force(x.Demand), Ratio: JSONNum(x.Ratio), Pass: x.Pass, Values: map[string]JSONNum{}, Note: x.Note}
 		for _, v := range x.Values {
-			l.Values[v.Name] = jsonNum(sys.ToJob(v.V, v.Dim))
+			l.Values[v.Name] = JSONNum(sys.ToJob(v.V, v.Dim))
 		}
 		for _, b := range x.PerBolt {
 			l.PerBolt = append(l.PerBolt, jsonBolt{Hole: b.Hole, Lc: length(b.Lc), Bearing: force(b.Bearing),
@@ -243,7 +245,7 @@ func (r *Report) document() jsonReport {
 	}
 	for _, f := range r.Findings {
 		doc.Detailing = append(doc.Detailing, jsonFinding{ID: f.ID, Clause: f.Clause,
-			Measured: jsonNum(sys.ToJob(f.Measured, f.Dim)), Limit: jsonNum(sys.ToJob(f.Limit, f.Dim)),
+			Measured: JSONNum(sys.ToJob(f.Measured, f.Dim)), Limit: JSONNum(sys.ToJob(f.Limit, f.Dim)),
 			Unit: sys.Label(f.Dim), Pass: f.Pass, Advisory: f.Advisory, Where: f.Where})
 	}
 	ply := func(s engine.HoleShape) jsonPlyHole {
@@ -272,7 +274,7 @@ func (r *Report) JSON() ([]byte, error) {
 	var b bytes.Buffer
 	enc := json.NewEncoder(&b)
 	enc.SetIndent("", "  ")
-	if err := enc.Encode(r.document()); err != nil {
+	if err := enc.Encode(r.Document()); err != nil {
 		return nil, fmt.Errorf("detail: encoding report: %w", err)
 	}
 	return b.Bytes(), nil

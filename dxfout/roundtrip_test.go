@@ -17,6 +17,7 @@ import (
 	"gaugeline/detail"
 	"gaugeline/detail/jobfile"
 	"gaugeline/detail/measured"
+	"gaugeline/detail/qa"
 	"gaugeline/detail/sheet"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
@@ -124,17 +125,17 @@ func camFiles(t tb, src string) (*detail.Design, map[string][]byte) {
 
 // checkRoundTrip re-verifies set as part and checks the verdict and both
 // plies of every as-built hole.
-func checkRoundTrip(t tb, d *detail.Design, set *measured.Set, part detail.MeasuredPart, align detail.AlignMode, m, p plyKind) {
+func checkRoundTrip(t tb, d *detail.Design, set *measured.Set, part qa.MeasuredPart, align qa.AlignMode, m, p plyKind) {
 	t.Helper()
-	ab, err := detail.Reverify(d, set, detail.ReverifyOptions{Part: part, Align: align})
+	ab, err := qa.Reverify(d, set, qa.ReverifyOptions{Part: part, Align: align})
 	if err != nil {
 		t.Fatal(err)
 	}
-	if ab.Verdict != detail.Accept || ab.Part != part {
+	if ab.Verdict != qa.Accept || ab.Part != part {
 		t.Fatalf("%s (%s): verdict %s, reasons %q", part, align, ab.Verdict, ab.Reasons)
 	}
 	measuredKind, other := m, p
-	if part == detail.MeasuredPlate {
+	if part == qa.MeasuredPlate {
 		measuredKind, other = p, m
 	}
 	for _, dv := range ab.Deviations {
@@ -142,7 +143,7 @@ func checkRoundTrip(t tb, d *detail.Design, set *measured.Set, part detail.Measu
 		if !got.t.IsSlot() {
 			got.dir = rules.Transverse
 		}
-		if dv.Status != detail.HoleOK || dv.Reclassified || got != measuredKind {
+		if dv.Status != qa.HoleOK || dv.Reclassified || got != measuredKind {
 			t.Errorf("%s %s: %s, %s %s (reclassified %v), want ok and %s %s; %q", part, dv.ID, dv.Status, got.t, got.dir,
 				dv.Reclassified, measuredKind.t, measuredKind.dir, dv.Why)
 		}
@@ -151,7 +152,7 @@ func checkRoundTrip(t tb, d *detail.Design, set *measured.Set, part detail.Measu
 		h := &ab.Report.Design.Conn.Holes[i]
 		des := &d.Conn.Holes[i]
 		otherShape, want := h.InPlate(), des.InPlate()
-		if part == detail.MeasuredPlate {
+		if part == qa.MeasuredPlate {
 			otherShape, want = h.HoleShape, des.HoleShape
 		}
 		if otherShape != want || (plyKind{otherShape.Type, otherShape.Slot}) != other {
@@ -181,15 +182,15 @@ func TestPerPlyRoundTrip(t *testing.T) {
 		if si {
 			def = measured.Millimetres
 		}
-		for _, part := range []detail.MeasuredPart{detail.MeasuredMember, detail.MeasuredPlate} {
+		for _, part := range []qa.MeasuredPart{qa.MeasuredMember, qa.MeasuredPlate} {
 			set, err := measured.ReadDXF(bytes.NewReader(cams[part.String()]), part.String()+".cam.dxf", def, "")
 			if err != nil {
 				rt.Fatal(err)
 			}
-			align := detail.AlignDatum
+			align := qa.AlignDatum
 			if rapid.Bool().Draw(rt, "bestFit") {
 				// A part lying anywhere on the scanner's table.
-				align = detail.AlignBestFit
+				align = qa.AlignBestFit
 				moveSet(set, rapid.Float64Range(-math.Pi, math.Pi).Draw(rt, "turn"),
 					rapid.Float64Range(-500, 500).Draw(rt, "tx"), rapid.Float64Range(-500, 500).Draw(rt, "ty"))
 			}
@@ -249,7 +250,7 @@ func TestPerPlyRoundTripEzdxf(t *testing.T) {
 	dir := t.TempDir()
 	type file struct {
 		d    *detail.Design
-		part detail.MeasuredPart
+		part qa.MeasuredPart
 		m, p plyKind
 		path string
 	}
@@ -261,7 +262,7 @@ func TestPerPlyRoundTripEzdxf(t *testing.T) {
 					continue
 				}
 				d, cams := camFiles(t, plyJobYAML(si, m, p, 3, map[bool]float64{false: 3.5, true: 90}[si]))
-				for _, part := range []detail.MeasuredPart{detail.MeasuredMember, detail.MeasuredPlate} {
+				for _, part := range []qa.MeasuredPart{qa.MeasuredMember, qa.MeasuredPlate} {
 					path := filepath.Join(dir, fmt.Sprintf("%d-%s.cam.dxf", len(files), part))
 					if err := os.WriteFile(path, cams[part.String()], 0o644); err != nil {
 						t.Fatal(err)
@@ -313,7 +314,7 @@ func TestPerPlyRoundTripEzdxf(t *testing.T) {
 			t.Fatalf("%s: ezdxf read %d holes and a contour of %d points, want %d holes", f.path, len(set.Holes), len(set.Contour), len(f.d.Conn.Holes))
 		}
 		t.Run(fmt.Sprintf("%s %s member %s %s plate %s %s", sys, f.part, f.m.t, f.m.dir, f.p.t, f.p.dir), func(t *testing.T) {
-			checkRoundTrip(t, f.d, set, f.part, detail.AlignDatum, f.m, f.p)
+			checkRoundTrip(t, f.d, set, f.part, qa.AlignDatum, f.m, f.p)
 		})
 	}
 }

@@ -16,6 +16,7 @@ import (
 	"gaugeline/detail/calc"
 	"gaugeline/detail/jobfile"
 	"gaugeline/detail/measured"
+	"gaugeline/detail/qa"
 	"gaugeline/detail/sheet"
 	"gaugeline/dxfout"
 	"gaugeline/fileset"
@@ -67,7 +68,7 @@ func runDemo(do demoOptions, out io.Writer) error {
 		return err
 	}
 	defer unlock()
-	var qa *detail.Proposal
+	var qaJob *detail.Proposal
 	for _, e := range entries {
 		name := path.Join("demo", e.Name())
 		p, err := demoPropose(name)
@@ -75,18 +76,18 @@ func runDemo(do demoOptions, out io.Writer) error {
 			return err
 		}
 		if p.Job.Mark == demoQAMark {
-			qa = p
+			qaJob = p
 		}
 		if err := demoWrite(p, do.dir, out); err != nil {
 			return err
 		}
 	}
-	if err := demoReverify(qa, do.dir, out); err != nil {
+	if err := demoReverify(qaJob, do.dir, out); err != nil {
 		return err
 	}
 	fmt.Fprintf(out, "\nNext: open the .html reports in a browser and the .dxf sheets in a CAD viewer; run\n")
 	fmt.Fprintf(out, "'gaugeline check %s' to see a full check table. The README walks through each step.\n",
-		filepath.Join(do.dir, qa.Job.Mark, qa.Job.Mark+".yaml"))
+		filepath.Join(do.dir, qaJob.Job.Mark, qaJob.Job.Mark+".yaml"))
 	fmt.Fprintf(out, "\n%s\n", detail.Caution)
 	return nil
 }
@@ -189,7 +190,7 @@ func demoReverify(p *detail.Proposal, dir string, out io.Writer) error {
 	if err != nil {
 		return err
 	}
-	ab, err := detail.Reverify(d, set, detail.ReverifyOptions{})
+	ab, err := qa.Reverify(d, set, qa.ReverifyOptions{})
 	if err != nil {
 		return err
 	}
@@ -197,21 +198,21 @@ func demoReverify(p *detail.Proposal, dir string, out io.Writer) error {
 	if err := ab.WriteMarkdown(&md); err != nil {
 		return err
 	}
-	qa := fileset.Stamped(dxfout.File{Name: mark + "-qa.md", Data: []byte(md.String())}, stamp)
-	if err := fileset.Write(dir, fileset.Set{Name: qaSet, Stamp: stamp, Files: []dxfout.File{meas, qa}}); err != nil {
+	report := fileset.Stamped(dxfout.File{Name: mark + "-qa.md", Data: []byte(md.String())}, stamp)
+	if err := fileset.Write(dir, fileset.Set{Name: qaSet, Stamp: stamp, Files: []dxfout.File{meas, report}}); err != nil {
 		return err
 	}
 	fmt.Fprintf(out, "QA  %s as fabricated, measured holes in %s\n", mark, csv)
 	fmt.Fprintf(out, "  reverify  verdict %s", strings.ToUpper(ab.Verdict.String()))
 	switch ab.Verdict {
-	case detail.Accept:
+	case qa.Accept:
 		fmt.Fprintf(out, ": every hole within tolerance and everything passes\n")
-	case detail.Review:
+	case qa.Review:
 		fmt.Fprintf(out, ": a hole is out of tolerance but every rule and limit state passes as built;\n")
 		fmt.Fprintf(out, "            send it to the engineer of record (the command exits 3)\n")
 	default:
 		fmt.Fprintf(out, ": the part fails as built (the command exits 1)\n")
 	}
-	fmt.Fprintf(out, "  wrote     %s/: %s, %s\n", qaSet, meas.Name, qa.Name)
+	fmt.Fprintf(out, "  wrote     %s/: %s, %s\n", qaSet, meas.Name, report.Name)
 	return nil
 }

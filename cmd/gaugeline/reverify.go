@@ -9,6 +9,7 @@ import (
 
 	"gaugeline/detail"
 	"gaugeline/detail/jobfile"
+	"gaugeline/detail/qa"
 	"gaugeline/rules/units"
 )
 
@@ -63,11 +64,11 @@ func runReverify(_ context.Context, _ *rootOptions, ro reverifyOptions, path str
 	if ro.measured == "" {
 		return usageError{fmt.Errorf("--measured is required: the measured holes as .csv or .dxf")}
 	}
-	align, err := detail.ParseAlign(ro.align)
+	align, err := qa.ParseAlign(ro.align)
 	if err != nil {
 		return usageError{fmt.Errorf("--align: %w", err)}
 	}
-	part, err := detail.ParsePart(ro.part)
+	part, err := qa.ParsePart(ro.part)
 	if err != nil {
 		return usageError{fmt.Errorf("--part: %w", err)}
 	}
@@ -75,11 +76,11 @@ func runReverify(_ context.Context, _ *rootOptions, ro reverifyOptions, path str
 	if err != nil {
 		return err
 	}
-	if part == detail.MeasuredPlate && job.Plate == nil {
+	if part == qa.MeasuredPlate && job.Plate == nil {
 		return &jobfile.InputError{File: path, Field: "--part", Msg: "the job has no plate to measure",
 			Hint: "--part plate needs the job's plate block; a measured member is --part member"}
 	}
-	opt := detail.ReverifyOptions{Align: align, Part: part}
+	opt := qa.ReverifyOptions{Align: align, Part: part}
 	for _, t := range []struct {
 		flag, val string
 		dst       *units.Length
@@ -105,11 +106,11 @@ func runReverify(_ context.Context, _ *rootOptions, ro reverifyOptions, path str
 	if err != nil {
 		return err
 	}
-	set, err := detail.LoadMeasured(ro.measured, job, ro.layer)
+	set, err := qa.LoadMeasured(ro.measured, job, ro.layer)
 	if err != nil {
 		return err
 	}
-	ab, err := detail.Reverify(d, set, opt)
+	ab, err := qa.Reverify(d, set, opt)
 	if err != nil {
 		return &jobfile.InputError{File: path, Msg: err.Error()}
 	}

@@ -1,4 +1,4 @@
-package detail
+package qa
 
 import (
 	"bytes"
@@ -13,6 +13,7 @@ import (
 	"strings"
 	"text/tabwriter"
 
+	"gaugeline/detail"
 	"gaugeline/detail/jobfile"
 	"gaugeline/detail/measured"
 	"gaugeline/engine"
@@ -97,7 +98,7 @@ type partFrame struct {
 	fe, ymax float64 // mm
 }
 
-func newPartFrame(d *Design, p MeasuredPart) partFrame {
+func newPartFrame(d *detail.Design, p MeasuredPart) partFrame {
 	if p != MeasuredPlate {
 		return partFrame{}
 	}
@@ -185,11 +186,11 @@ type Alignment struct {
 
 // AsBuilt is the outcome of reverify.
 type AsBuilt struct {
-	Design       *Design
+	Design       *detail.Design
 	Part         MeasuredPart // the part measured
 	frame        partFrame
-	DesignReport *Report
-	Report       *Report // the as-built check
+	DesignReport *detail.Report
+	Report       *detail.Report // the as-built check
 	Measured     *measured.Set
 	Tolerance    jobfile.Tolerance
 	Gate         units.Length
@@ -248,14 +249,14 @@ func LoadMeasured(path string, job *jobfile.Job, layer string) (*measured.Set, e
 
 // Reverify matches the measured holes to the design, reports deviations,
 // and checks the as-built geometry.
-func Reverify(d *Design, set *measured.Set, opt ReverifyOptions) (*AsBuilt, error) {
+func Reverify(d *detail.Design, set *measured.Set, opt ReverifyOptions) (*AsBuilt, error) {
 	if d == nil || set == nil || len(set.Holes) == 0 {
 		panic("detail: Reverify needs a design and measured holes")
 	}
 	if opt.Part == MeasuredPlate && d.Conn.Plate == nil {
 		return nil, ErrNoPlate
 	}
-	dr, err := Check(d)
+	dr, err := detail.Check(d)
 	if err != nil {
 		return nil, err
 	}
@@ -553,10 +554,10 @@ func (ab *AsBuilt) check() error {
 	}
 	// The engine groups holes into gage lines and rows with a slack of a
 	// quarter diameter, so the measured centres go in as they are.
-	built := d.withHoles(holes)
+	built := d.WithHoles(holes)
 	built.Info.PositionTol = ab.Tolerance.Position // J1.7's limit: the tolerance reverify applies
 	built.Info.AsBuilt, built.Info.DiameterTol = true, ab.Tolerance.Diameter
-	r, err := Check(built)
+	r, err := detail.Check(built)
 	if err != nil {
 		return err
 	}
@@ -984,38 +985,38 @@ func hungarian(cost [][]float64) []int {
 // geometry, its verdict replaced by accept, review or reject.
 
 type jsonDeviation struct {
-	ID           string   `json:"id"`
-	MeasuredID   string   `json:"measured_id,omitempty"`
-	Line         int      `json:"line,omitempty"`
-	Status       string   `json:"status"`
-	DesignX      *jsonNum `json:"design_x,omitempty"`
-	DesignY      *jsonNum `json:"design_y,omitempty"`
-	X            *jsonNum `json:"x,omitempty"`
-	Y            *jsonNum `json:"y,omitempty"`
-	Dx           *jsonNum `json:"dx,omitempty"`
-	Dy           *jsonNum `json:"dy,omitempty"`
-	Radial       *jsonNum `json:"radial,omitempty"`
-	TruePosition *jsonNum `json:"true_position,omitempty"` // GD&T: the diameter of the zone, 2 × radial
-	Diameter     *jsonNum `json:"diameter,omitempty"`
-	Length       *jsonNum `json:"length,omitempty"`
-	DesignDia    *jsonNum `json:"design_diameter,omitempty"`
-	DDiameter    *jsonNum `json:"diameter_deviation,omitempty"`
-	DesignType   string   `json:"design_type,omitempty"`
-	Type         string   `json:"type,omitempty"`
-	Slot         string   `json:"slot,omitempty"`
-	Reclassified bool     `json:"reclassified"`
-	InTolerance  bool     `json:"within_tolerance"`
-	Why          []string `json:"why,omitempty"`
+	ID           string          `json:"id"`
+	MeasuredID   string          `json:"measured_id,omitempty"`
+	Line         int             `json:"line,omitempty"`
+	Status       string          `json:"status"`
+	DesignX      *detail.JSONNum `json:"design_x,omitempty"`
+	DesignY      *detail.JSONNum `json:"design_y,omitempty"`
+	X            *detail.JSONNum `json:"x,omitempty"`
+	Y            *detail.JSONNum `json:"y,omitempty"`
+	Dx           *detail.JSONNum `json:"dx,omitempty"`
+	Dy           *detail.JSONNum `json:"dy,omitempty"`
+	Radial       *detail.JSONNum `json:"radial,omitempty"`
+	TruePosition *detail.JSONNum `json:"true_position,omitempty"` // GD&T: the diameter of the zone, 2 × radial
+	Diameter     *detail.JSONNum `json:"diameter,omitempty"`
+	Length       *detail.JSONNum `json:"length,omitempty"`
+	DesignDia    *detail.JSONNum `json:"design_diameter,omitempty"`
+	DDiameter    *detail.JSONNum `json:"diameter_deviation,omitempty"`
+	DesignType   string          `json:"design_type,omitempty"`
+	Type         string          `json:"type,omitempty"`
+	Slot         string          `json:"slot,omitempty"`
+	Reclassified bool            `json:"reclassified"`
+	InTolerance  bool            `json:"within_tolerance"`
+	Why          []string        `json:"why,omitempty"`
 }
 
 type jsonAlignment struct {
-	Mode        string  `json:"mode"`
-	ShiftX      jsonNum `json:"shift_x"`
-	ShiftY      jsonNum `json:"shift_y"`
-	RotationDeg jsonNum `json:"rotation_deg"`
-	RMS         jsonNum `json:"rms"`
-	Iterations  int     `json:"iterations,omitempty"`
-	Note        string  `json:"note"`
+	Mode        string         `json:"mode"`
+	ShiftX      detail.JSONNum `json:"shift_x"`
+	ShiftY      detail.JSONNum `json:"shift_y"`
+	RotationDeg detail.JSONNum `json:"rotation_deg"`
+	RMS         detail.JSONNum `json:"rms"`
+	Iterations  int            `json:"iterations,omitempty"`
+	Note        string         `json:"note"`
 }
 
 type jsonMeasured struct {
@@ -1027,44 +1028,44 @@ type jsonMeasured struct {
 }
 
 type jsonReverify struct {
-	jsonReport
-	Verdict         string             `json:"verdict"`
-	AsBuilt         string             `json:"as_built"`
-	Part            string             `json:"part"`
-	DesignVerdict   string             `json:"design_verdict"`
-	Reasons         []string           `json:"reasons"`
-	Measured        jsonMeasured       `json:"measured"`
-	Tolerance       map[string]jsonNum `json:"tolerance"`
-	Gate            jsonNum            `json:"match_gate"`
-	Alignment       jsonAlignment      `json:"alignment"`
-	Deviations      []jsonDeviation    `json:"deviations"`
-	DesignGoverning string             `json:"design_governing"`
-	DesignFailing   []string           `json:"design_failing"` // [] when the design passes
-	DesignRatios    map[string]jsonNum `json:"design_ratios"`
-	RatioChange     map[string]jsonNum `json:"ratio_change"`
+	detail.Document
+	Verdict         string                    `json:"verdict"`
+	AsBuilt         string                    `json:"as_built"`
+	Part            string                    `json:"part"`
+	DesignVerdict   string                    `json:"design_verdict"`
+	Reasons         []string                  `json:"reasons"`
+	Measured        jsonMeasured              `json:"measured"`
+	Tolerance       map[string]detail.JSONNum `json:"tolerance"`
+	Gate            detail.JSONNum            `json:"match_gate"`
+	Alignment       jsonAlignment             `json:"alignment"`
+	Deviations      []jsonDeviation           `json:"deviations"`
+	DesignGoverning string                    `json:"design_governing"`
+	DesignFailing   []string                  `json:"design_failing"` // [] when the design passes
+	DesignRatios    map[string]detail.JSONNum `json:"design_ratios"`
+	RatioChange     map[string]detail.JSONNum `json:"ratio_change"`
 }
 
 func (ab *AsBuilt) document() jsonReverify {
 	sys := ab.Design.Job.Units
-	length := func(l units.Length) *jsonNum {
-		v := jsonNum(sys.ToJob(float64(l), units.DimLength))
+	length := func(l units.Length) *detail.JSONNum {
+		v := detail.JSONNum(sys.ToJob(float64(l), units.DimLength))
 		return &v
 	}
 	doc := jsonReverify{
-		jsonReport: ab.Report.document(), Verdict: ab.Verdict.String(), AsBuilt: ab.Report.Verdict(), Part: ab.Part.String(),
+		Document: ab.Report.Document(), Verdict: ab.Verdict.String(), AsBuilt: ab.Report.Verdict(), Part: ab.Part.String(),
 		DesignVerdict: ab.DesignReport.Verdict(), Reasons: ab.Reasons,
 		Measured: jsonMeasured{File: ab.Measured.File, Format: ab.Measured.Format, Units: ab.Measured.Units,
 			Holes: len(ab.Measured.Holes), Notes: ab.Measured.Notes},
-		Tolerance: map[string]jsonNum{"position": *length(ab.Tolerance.Position), "diameter": *length(ab.Tolerance.Diameter)},
+		Tolerance: map[string]detail.JSONNum{"position": *length(ab.Tolerance.Position), "diameter": *length(ab.Tolerance.Diameter)},
 		Gate:      *length(ab.Gate),
 		Alignment: jsonAlignment{Mode: ab.Alignment.Mode.String(), ShiftX: *length(ab.Alignment.Shift[0]), ShiftY: *length(ab.Alignment.Shift[1]),
-			RotationDeg: jsonNum(ab.Alignment.Rotation * 180 / math.Pi), RMS: *length(ab.Alignment.RMS),
+			RotationDeg: detail.JSONNum(ab.Alignment.Rotation * 180 / math.Pi), RMS: *length(ab.Alignment.RMS),
 			Iterations: ab.Alignment.Iterations, Note: ab.Alignment.Note},
 		Deviations:      []jsonDeviation{},
 		DesignGoverning: ab.DesignReport.GoverningResult().ID,
 		DesignFailing:   append([]string{}, ab.DesignReport.Failing()...),
-		DesignRatios:    map[string]jsonNum{},
-		RatioChange:     map[string]jsonNum{},
+		DesignRatios:    map[string]detail.JSONNum{},
+		RatioChange:     map[string]detail.JSONNum{},
 	}
 	if doc.Reasons == nil {
 		doc.Reasons = []string{}
@@ -1095,12 +1096,12 @@ func (ab *AsBuilt) document() jsonReverify {
 	}
 	design := map[string]float64{}
 	for _, x := range ab.DesignReport.Results {
-		doc.DesignRatios[x.ID] = jsonNum(x.Ratio)
+		doc.DesignRatios[x.ID] = detail.JSONNum(x.Ratio)
 		design[x.ID] = x.Ratio
 	}
 	for _, x := range ab.Report.Results {
 		if dr, ok := design[x.ID]; ok {
-			doc.RatioChange[x.ID] = jsonNum(x.Ratio - dr)
+			doc.RatioChange[x.ID] = detail.JSONNum(x.Ratio - dr)
 		}
 	}
 	return doc
@@ -1196,16 +1197,16 @@ func (ab *AsBuilt) ratioRows() [][]string {
 	for i, x := range ab.Report.Results {
 		dr, change := "-", "-"
 		if v, ok := design[x.ID]; ok {
-			dr, change = RatioText(v), fmt.Sprintf("%+.3f", x.Ratio-v)
+			dr, change = detail.RatioText(v), fmt.Sprintf("%+.3f", x.Ratio-v)
 			if math.Abs(x.Ratio-v) < 5e-4 {
 				change = "0.000"
 			}
 		}
-		mark := okFail(x.Pass, false)
+		mark := detail.PassMark(x.Pass, false)
 		if i == ab.Report.Governing {
 			mark += " <"
 		}
-		rows = append(rows, []string{x.ID, x.Clause, dr, RatioText(x.Ratio), change, mark})
+		rows = append(rows, []string{x.ID, x.Clause, dr, detail.RatioText(x.Ratio), change, mark})
 	}
 	return rows
 }
@@ -1213,7 +1214,7 @@ func (ab *AsBuilt) ratioRows() [][]string {
 // WriteText writes the reverify report as aligned tables for a terminal.
 func (ab *AsBuilt) WriteText(w io.Writer) error {
 	d := ab.Design
-	p := people{d.Job.Units}
+	sys := d.Job.Units
 	var b strings.Builder
 	fmt.Fprintf(&b, "%s — as-built re-verification, %s, %s, %s units\n", d.Job.Mark, d.Conn.Edition.Name, strings.ToUpper(d.Conn.Method.String()), d.Job.Units)
 	tw := tabwriter.NewWriter(&b, 0, 0, 2, ' ', 0)
@@ -1239,7 +1240,7 @@ func (ab *AsBuilt) WriteText(w io.Writer) error {
 	}
 	tw.Flush()
 	b.WriteString("\n")
-	p.findingsText(&b, "DETAILING (AS BUILT)", ab.Report.Findings)
+	detail.FindingsText(&b, sys, "DETAILING (AS BUILT)", ab.Report.Findings)
 	fmt.Fprintf(&b, "\nverdict: %s\n", strings.ToUpper(ab.Verdict.String()))
 	for _, r := range ab.Reasons {
 		fmt.Fprintf(&b, "  %s\n", r)
@@ -1255,33 +1256,33 @@ func (ab *AsBuilt) WriteText(w io.Writer) error {
 // WriteMarkdown writes the reverify report for the QA record.
 func (ab *AsBuilt) WriteMarkdown(w io.Writer) error {
 	d := ab.Design
-	p := people{d.Job.Units}
+	sys := d.Job.Units
 	var b strings.Builder
 	fmt.Fprintf(&b, "# %s — as-built re-verification\n\n", d.Job.Mark)
 	fmt.Fprintf(&b, "%s, %s, %s units.\n\n", d.Conn.Edition.Name, strings.ToUpper(d.Conn.Method.String()), d.Job.Units)
 	for _, row := range append(d.Summary(), ab.preamble()...) {
-		fmt.Fprintf(&b, "- **%s**: %s\n", row[0], mdEscape(row[1]))
+		fmt.Fprintf(&b, "- **%s**: %s\n", row[0], detail.MarkdownEscape(row[1]))
 	}
 	for _, n := range ab.Measured.Notes {
-		fmt.Fprintf(&b, "- file: %s\n", mdEscape(n))
+		fmt.Fprintf(&b, "- file: %s\n", detail.MarkdownEscape(n))
 	}
 	fmt.Fprintf(&b, "\n**Verdict: %s**\n\n", strings.ToUpper(ab.Verdict.String()))
 	for _, r := range ab.Reasons {
-		fmt.Fprintf(&b, "- %s\n", mdEscape(r))
+		fmt.Fprintf(&b, "- %s\n", detail.MarkdownEscape(r))
 	}
 	b.WriteString("\n## Holes\n\n| " + strings.ToLower(strings.Join(holeHeader, " | ")) + " | why |\n|" + strings.Repeat("---|", len(holeHeader)+1) + "\n")
 	for _, dv := range ab.Deviations {
 		row := ab.holeRow(dv)
 		for i := range row {
-			row[i] = mdEscape(row[i])
+			row[i] = detail.MarkdownEscape(row[i])
 		}
-		fmt.Fprintf(&b, "| %s | %s |\n", strings.Join(row, " | "), mdEscape(strings.Join(dv.Why, "; ")))
+		fmt.Fprintf(&b, "| %s | %s |\n", strings.Join(row, " | "), detail.MarkdownEscape(strings.Join(dv.Why, "; ")))
 	}
 	b.WriteString("\n## Limit states as built\n\n| id | clause | design ratio | as-built ratio | change | result |\n|---|---|---:|---:|---:|---|\n")
 	for _, row := range ab.ratioRows() {
 		fmt.Fprintf(&b, "| %s |\n", strings.Join(row, " | "))
 	}
-	p.findingsMarkdown(&b, "Detailing as built", ab.Report.Findings)
+	detail.FindingsMarkdown(&b, sys, "Detailing as built", ab.Report.Findings)
 	b.WriteString("\n")
 	for _, c := range ab.Report.Cautions {
 		fmt.Fprintf(&b, "> %s\n>\n", c)

@@ -1,15 +1,19 @@
-package detail
+package qa
 
 import (
+	"bytes"
 	"encoding/json"
+	"errors"
 	"math"
 	"math/rand/v2"
 	"os"
 	"path/filepath"
+	"reflect"
 	"slices"
 	"strings"
 	"testing"
 
+	"gaugeline/detail"
 	"gaugeline/detail/jobfile"
 	"gaugeline/detail/measured"
 	"gaugeline/rules"
@@ -18,15 +22,15 @@ import (
 	"gonum.org/v1/gonum/spatial/r2"
 )
 
-const measuredDir = "../testdata/measured"
+const measuredDir = "../../testdata/measured"
 
-func buildJob(t *testing.T, path string) *Design {
+func buildJob(t *testing.T, path string) *detail.Design {
 	t.Helper()
 	j, err := jobfile.LoadJob(path)
 	if err != nil {
 		t.Fatal(err)
 	}
-	d, err := Build(j)
+	d, err := detail.Build(j)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -61,10 +65,10 @@ func statuses(ab *AsBuilt) []string {
 // the source named.
 func TestReverifyVerdicts(t *testing.T) {
 	us := filepath.Join(measuredDir, "hb-7-qa.yaml")
-	usFails := "../testdata/jobs/us-single-angle.yaml"
-	si := "../testdata/jobs/si-double-angle.yaml"
+	usFails := "../../testdata/jobs/us-single-angle.yaml"
+	si := "../../testdata/jobs/si-double-angle.yaml"
 	siSC := filepath.Join(measuredDir, "td-21-sc.yaml")
-	slotted := "../testdata/jobs/si-slotted.yaml"
+	slotted := "../../testdata/jobs/si-slotted.yaml"
 	tests := []struct {
 		name, job, file string
 		align           AlignMode
@@ -143,7 +147,7 @@ func TestReverifyVerdicts(t *testing.T) {
 
 // synthetic returns measured holes at the design's centres with the
 // design's sizes, in mm.
-func synthetic(d *Design) *measured.Set {
+func synthetic(d *detail.Design) *measured.Set {
 	s := &measured.Set{File: "synthetic", Format: "csv", Units: "mm"}
 	for i, h := range d.Conn.Holes {
 		w := float64(min(h.Dx, h.Dy))
@@ -229,9 +233,9 @@ func TestBestFitRecoversRigidMotion(t *testing.T) {
 		contour bool
 		want    float64 // degrees recovered
 	}{
-		{"staggered flat, 7°", "../testdata/jobs/us-staggered-flat.yaml", 7, 40, -25, false, 7},
-		{"staggered flat, −31.5°", "../testdata/jobs/us-staggered-flat.yaml", -31.5, -1000, 2500, false, -31.5},
-		{"SI double angle, 2.5°", "../testdata/jobs/si-double-angle.yaml", 2.5, 123.4, -56.7, false, 2.5},
+		{"staggered flat, 7°", "../../testdata/jobs/us-staggered-flat.yaml", 7, 40, -25, false, 7},
+		{"staggered flat, −31.5°", "../../testdata/jobs/us-staggered-flat.yaml", -31.5, -1000, 2500, false, -31.5},
+		{"SI double angle, 2.5°", "../../testdata/jobs/si-double-angle.yaml", 2.5, 123.4, -56.7, false, 2.5},
 		// One gage line is symmetric under a half turn: the contour says
 		// which way round the part lies.
 		{"single line turned round, contour", "measured/hb-7-qa.yaml", 183, 500, 80, true, -177},
@@ -239,7 +243,7 @@ func TestBestFitRecoversRigidMotion(t *testing.T) {
 	}
 	for _, tt := range tests {
 		t.Run(tt.name, func(t *testing.T) {
-			d := buildJob(t, filepath.Join("..", "testdata", strings.TrimPrefix(tt.job, "../testdata/")))
+			d := buildJob(t, filepath.Join("../..", "testdata", strings.TrimPrefix(tt.job, "../../testdata/")))
 			set := synthetic(d)
 			if tt.contour {
 				w, l := float64(d.Conn.Member.Width), float64(lastX(d.Conn.Holes))+150
@@ -275,7 +279,7 @@ func TestBestFitWithMissingAndExtraHoles(t *testing.T) {
 	// Inputs: the staggered flat turned 30° and shifted (200, 100) mm,
 	// its first hole missing and a stray hole 300 mm away. The fit must
 	// still recover the motion within 1e-6 from the five holes left.
-	d := buildJob(t, "../testdata/jobs/us-staggered-flat.yaml")
+	d := buildJob(t, "../../testdata/jobs/us-staggered-flat.yaml")
 	set := synthetic(d)
 	set.Holes = append(set.Holes[1:], measured.Hole{ID: "S", X: 600, Y: -300, Width: 20, Length: 20})
 	rotateSet(set, 30*math.Pi/180, 200, 100)
@@ -439,14 +443,14 @@ func TestReverifyJSONAndMarkdown(t *testing.T) {
 	if err := ab.WriteMarkdown(&md); err != nil {
 		t.Fatal(err)
 	}
-	if !strings.Contains(md.String(), Caution) || !strings.Contains(md.String(), "**Verdict: REVIEW**") {
+	if !strings.Contains(md.String(), detail.Caution) || !strings.Contains(md.String(), "**Verdict: REVIEW**") {
 		t.Errorf("markdown lacks the caution or the verdict:\n%s", md.String())
 	}
 	var txt strings.Builder
 	if err := ab.WriteText(&txt); err != nil {
 		t.Fatal(err)
 	}
-	if !strings.Contains(txt.String(), "verdict: REVIEW") || !strings.Contains(txt.String(), Caution) {
+	if !strings.Contains(txt.String(), "verdict: REVIEW") || !strings.Contains(txt.String(), detail.Caution) {
 		t.Errorf("text report:\n%s", txt.String())
 	}
 }
@@ -454,7 +458,7 @@ func TestReverifyJSONAndMarkdown(t *testing.T) {
 // TestReverifyNeverPanics feeds random measured sets, near the design and
 // far from it, to every shipped job: reverify must always give a verdict.
 func TestReverifyNeverPanics(t *testing.T) {
-	jobs, _ := filepath.Glob("../testdata/jobs/*.yaml")
+	jobs, _ := filepath.Glob("../../testdata/jobs/*.yaml")
 	jobs = append(jobs, filepath.Join(measuredDir, "hb-7-qa.yaml"), filepath.Join(measuredDir, "td-21-sc.yaml"))
 	rng := rand.New(rand.NewPCG(3, 4))
 	for _, job := range jobs {
@@ -544,7 +548,7 @@ func reverifyCSV(t *testing.T, job, csv string) *AsBuilt {
 func TestReverifyNamesWhatTheDesignFails(t *testing.T) {
 	// TE-9 as designed: end 5/8 in < 1 in for a 3/4-in bolt (AISC 360-16
 	// Table J3.4); 13/16-in standard holes (Table J3.3).
-	ab := reverifyCSV(t, "../testdata/batch/e-tight-edge.yaml", "x,y,diameter\n"+
+	ab := reverifyCSV(t, "../../testdata/batch/e-tight-edge.yaml", "x,y,diameter\n"+
 		"0.625,1.5,0.8125\n3.625,1.5,0.8125\n0.625,3.5,0.8125\n3.625,3.5,0.8125\n")
 	if ab.Verdict != Reject {
 		t.Fatalf("verdict %s, want reject; reasons %q", ab.Verdict, ab.Reasons)
@@ -601,6 +605,177 @@ func TestReverifyPrintsExactValues(t *testing.T) {
 		// is 0.84375 in, which 1/16 in rounds to 7/8 in.
 		if !strings.Contains(out, `7/8" (0.84375 in)`) {
 			t.Errorf("%s: hole.size limit not printed as 7/8\" (0.84375 in)", name)
+		}
+	}
+}
+
+// TestAsBuiltReportIsCheck: reverify's as-built report is Check of its
+// as-built model, plus reverify's own cautions; in particular hole.size
+// allows the fabrication tolerance through Check (MemberInfo.AsBuilt),
+// not through a check of reverify's own. Fixtures: the measured files of
+// testdata/measured (make_fixtures.py, ezdxf) with their jobs.
+func TestAsBuiltReportIsCheck(t *testing.T) {
+	us := filepath.Join(measuredDir, "hb-7-qa.yaml")
+	sc := filepath.Join(measuredDir, "td-21-sc.yaml")
+	for _, tc := range []struct {
+		job, file string
+		align     AlignMode
+	}{
+		{us, "hb-7-qa-enlarged-r2018.dxf", AlignDatum},
+		{us, "hb-7-qa-shifted.csv", AlignBestFit},
+		{us, "hb-7-qa-missing-r12.dxf", AlignDatum},
+		{sc, "td-21-sc-enlarged-r2000.dxf", AlignDatum},
+	} {
+		ab := reverifyFile(t, tc.job, filepath.Join(measuredDir, tc.file), tc.align)
+		r, err := detail.Check(ab.Report.Design)
+		if err != nil {
+			t.Fatal(err)
+		}
+		if !reflect.DeepEqual(r.Findings, ab.Report.Findings) || r.Pass != ab.Report.Pass || r.Governing != ab.Report.Governing {
+			t.Errorf("%s: Check of the as-built model differs from the as-built report:\n%+v\n%+v", tc.file, r.Findings, ab.Report.Findings)
+		}
+		if n := len(r.Cautions); n >= len(ab.Report.Cautions) || !slices.Equal(r.Cautions, ab.Report.Cautions[:n]) {
+			t.Errorf("%s: the as-built cautions %q do not extend Check's %q", tc.file, ab.Report.Cautions, r.Cautions)
+		}
+		// Results hold functions (their working), which DeepEqual cannot
+		// compare: the JSON of the two reports, cautions aside, holds
+		// every number.
+		r.Cautions = ab.Report.Cautions
+		got, err1 := r.JSON()
+		want, err2 := ab.Report.JSON()
+		if err1 != nil || err2 != nil || !bytes.Equal(got, want) {
+			t.Errorf("%s: the JSON of Check of the as-built model differs from the as-built report's (%v, %v)", tc.file, err1, err2)
+		}
+		sized := 0
+		for _, f := range r.Findings {
+			if f.ID == "hole.size" {
+				sized++
+			}
+		}
+		if sized == 0 {
+			t.Errorf("%s: no hole.size finding to allow the tolerance on", tc.file)
+		}
+	}
+}
+
+// As built, the group's offset is judged against the tolerance reverify
+// applies: FT_03 (testdata/jobs/us-staggered-flat.yaml, centred: gage
+// 2 in + gage2 4 in / 2 = 4 in on an 8-in bar) with every hole drilled
+// 0.1 in high has e = 0.1 in (hand calculation): over the default 1/16 in
+// (common practice, no source), within a --position of 1/8 in.
+func TestReverifyEccentricityUsesTheTolerance(t *testing.T) {
+	d := buildJob(t, filepath.Join("../..", "testdata", "jobs", "us-staggered-flat.yaml"))
+	set := synthetic(d)
+	for i := range set.Holes {
+		set.Holes[i].Y += 0.1 * float64(units.Inch)
+	}
+	for _, c := range []struct {
+		pos  units.Length
+		pass bool
+	}{{0, false}, {units.Inch / 8, true}} {
+		ab, err := Reverify(d, set, ReverifyOptions{Align: AlignDatum, Tolerance: jobfile.Tolerance{Position: c.pos}})
+		if err != nil {
+			t.Fatal(err)
+		}
+		f, ok := findingOf(ab.Report, "eccentricity")
+		if !ok || math.Abs(units.Length(f.Measured).In()-0.1) > 1e-9 || f.Pass != c.pass {
+			t.Errorf("position tolerance %v in: finding %+v, want e = 0.1 in, pass %v", c.pos.In(), f, c.pass)
+		}
+	}
+}
+
+// TestReverifyKeepsTheOtherPly: a measured part's holes are that part's
+// only. TD-21.sc (slip-critical, M20 in standard 22-mm holes, AISC 360-16
+// Table J3.3M) with H2 made 23.5 mm, an oversized hole as built (24 mm,
+// Table J3.3M; +1 mm tolerance, common practice): measured on the member,
+// the plate's H2 stays a standard 22-mm hole, and the plate's limit states
+// keep their design ratios; measured on the plate (in the plate's frame,
+// x' = FreeEdge − x, y' = YMax − y, as its CAM file), the member's do.
+func TestReverifyKeepsTheOtherPly(t *testing.T) {
+	d := buildJob(t, filepath.Join(measuredDir, "td-21-sc.yaml"))
+	std := d.Conn.Holes[1].HoleShape
+	if std.Type != rules.Standard || math.Abs(float64(std.Dx)-22) > 1e-9 {
+		t.Fatalf("design hole %+v, want standard 22 mm", std)
+	}
+	ratios := func(r *detail.Report, part string) map[string]float64 {
+		m := map[string]float64{}
+		for _, x := range r.Results {
+			if strings.HasPrefix(x.ID, part+".") {
+				m[x.ID] = x.Ratio
+			}
+		}
+		return m
+	}
+	for _, part := range []MeasuredPart{MeasuredMember, MeasuredPlate} {
+		t.Run(part.String(), func(t *testing.T) {
+			set := synthetic(d)
+			if part == MeasuredPlate {
+				pl := d.Conn.Plate
+				for i := range set.Holes {
+					h := &set.Holes[i]
+					h.X, h.Y = float64(pl.FreeEdge)-h.X, float64(pl.YMax())-h.Y
+				}
+			}
+			set.Holes[1].Width, set.Holes[1].Length = 23.5, 23.5
+			ab, err := Reverify(d, set, ReverifyOptions{Part: part})
+			if err != nil {
+				t.Fatal(err)
+			}
+			for _, dv := range ab.Deviations {
+				if dv.Status == HoleMissing || dv.Status == HoleExtra {
+					t.Fatalf("%s %s: the part's frame was not taken: %q", part, dv.ID, statuses(ab))
+				}
+			}
+			built := ab.Report.Design.Conn.Holes[1]
+			measured, other := built.HoleShape, built.InPlate()
+			otherName := "plate"
+			if part == MeasuredPlate {
+				measured, other, otherName = other, measured, "member"
+			}
+			// As built a hole is the larger of measured and its type's
+			// nominal: oversized M20, 24 mm (Table J3.3M).
+			if measured.Type != rules.Oversized || math.Abs(float64(measured.Dx)-24) > 1e-9 {
+				t.Errorf("measured %s's H2 as built %+v, want oversized 24 mm", part, measured)
+			}
+			if other != std {
+				t.Errorf("the %s's H2 as built %+v, want as designed %+v", otherName, other, std)
+			}
+			want, got := ratios(ab.DesignReport, otherName), ratios(ab.Report, otherName)
+			for id, r := range want {
+				if math.Abs(got[id]-r) > 1e-12 {
+					t.Errorf("%s: ratio %g as built, %g designed; nothing of the %s was measured", id, got[id], r, otherName)
+				}
+			}
+			if !strings.Contains(strings.Join(ab.Report.Cautions, " "), "the "+part.String()+" was measured") {
+				t.Errorf("the report does not say the %s was measured: %q", part, ab.Report.Cautions)
+			}
+		})
+	}
+	if _, err := Reverify(buildJob(t, "../../testdata/examples/aisc-d2.yaml"), synthetic(d), ReverifyOptions{Part: MeasuredPlate}); err != ErrNoPlate {
+		t.Errorf("a plate measured for a job without one: %v, want ErrNoPlate", err)
+	}
+}
+
+// So is a measured CSV or DXF that is a FIFO, a directory or a device.
+func TestLoadMeasuredRefusesSpecialFiles(t *testing.T) {
+	j, err := jobfile.LoadJob(filepath.Join("../..", "testdata", "measured", "hb-7-qa.yaml"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, ext := range []string{".csv", ".dxf"} {
+		fifo := mkfifo(t, "holes"+ext)
+		dir := filepath.Join(t.TempDir(), "holes"+ext)
+		if err := os.Mkdir(dir, 0o700); err != nil {
+			t.Fatal(err)
+		}
+		for _, c := range []struct{ path, kind string }{{fifo, "named pipe"}, {dir, "directory"}} {
+			t.Run(ext+" "+c.kind, func(t *testing.T) {
+				err := within(t, fifo, func() error { _, err := LoadMeasured(c.path, j, ""); return err })
+				var ie *jobfile.InputError
+				if !errors.As(err, &ie) || ie.File != c.path || !strings.Contains(ie.Msg, c.kind) {
+					t.Errorf("LoadMeasured(%s): %v, want an *InputError naming the file, saying it is a %s", c.path, err, c.kind)
+				}
+			})
 		}
 	}
 }

@@ -1,10 +1,9 @@
 //go:build unix
 
-package detail
+package jobfile
 
 import (
 	"errors"
-	"gaugeline/detail/jobfile"
 	"os"
 	"path/filepath"
 	"strings"
@@ -52,35 +51,11 @@ func TestLoadJobRefusesSpecialFiles(t *testing.T) {
 		{os.DevNull, "device"},
 	} {
 		t.Run(c.kind, func(t *testing.T) {
-			err := within(t, fifo, func() error { _, err := jobfile.LoadJob(c.path); return err })
-			var ie *jobfile.InputError
+			err := within(t, fifo, func() error { _, err := LoadJob(c.path); return err })
+			var ie *InputError
 			if !errors.As(err, &ie) || ie.File != c.path || !strings.Contains(ie.Msg, c.kind) || !strings.Contains(ie.Msg, "not a regular file") {
 				t.Errorf("LoadJob(%s): %v, want an *InputError naming the file, saying it is a %s", c.path, err, c.kind)
 			}
 		})
-	}
-}
-
-// So is a measured CSV or DXF that is a FIFO, a directory or a device.
-func TestLoadMeasuredRefusesSpecialFiles(t *testing.T) {
-	j, err := jobfile.LoadJob(filepath.Join("..", "testdata", "measured", "hb-7-qa.yaml"))
-	if err != nil {
-		t.Fatal(err)
-	}
-	for _, ext := range []string{".csv", ".dxf"} {
-		fifo := mkfifo(t, "holes"+ext)
-		dir := filepath.Join(t.TempDir(), "holes"+ext)
-		if err := os.Mkdir(dir, 0o700); err != nil {
-			t.Fatal(err)
-		}
-		for _, c := range []struct{ path, kind string }{{fifo, "named pipe"}, {dir, "directory"}} {
-			t.Run(ext+" "+c.kind, func(t *testing.T) {
-				err := within(t, fifo, func() error { _, err := LoadMeasured(c.path, j, ""); return err })
-				var ie *jobfile.InputError
-				if !errors.As(err, &ie) || ie.File != c.path || !strings.Contains(ie.Msg, c.kind) {
-					t.Errorf("LoadMeasured(%s): %v, want an *InputError naming the file, saying it is a %s", c.path, err, c.kind)
-				}
-			})
-		}
 	}
 }
