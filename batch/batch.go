@@ -22,6 +22,7 @@ import (
 
 	"gaugeline/detail"
 	"gaugeline/detail/jobfile"
+	"gaugeline/detail/propose"
 	"gaugeline/detail/sheet"
 	"gaugeline/dxfout"
 	"gaugeline/fileset"
@@ -76,11 +77,11 @@ type Config struct {
 	Workers int
 	// Tool names the build in each set's stamp (fileset.Stamp).
 	Tool string
-	// MaxCandidates bounds each proposal's search (detail.ProposeOptions).
+	// MaxCandidates bounds each proposal's search (propose.ProposeOptions).
 	MaxCandidates int
 	// LimitError words a search stopped at MaxCandidates as the job's
-	// error; nil: the *detail.SearchLimitError itself.
-	LimitError func(*jobfile.Job, *detail.SearchLimitError) error
+	// error; nil: the *propose.SearchLimitError itself.
+	LimitError func(*jobfile.Job, *propose.SearchLimitError) error
 }
 
 // maxListSize bounds a list file: 10,000 jobs take well under 1 MiB.
@@ -352,15 +353,15 @@ func jobFiles(cfg Config, job *jobfile.Job, row *Row) ([]dxfout.File, error) {
 	var r *detail.Report
 	var data []byte
 	if cfg.Propose {
-		p, err := detail.Propose(job, detail.ProposeOptions{Mode: detail.Pruned, MaxCandidates: cfg.MaxCandidates})
-		var le *detail.SearchLimitError
+		p, err := propose.Propose(job, propose.ProposeOptions{Mode: propose.Pruned, MaxCandidates: cfg.MaxCandidates})
+		var le *propose.SearchLimitError
 		if errors.As(err, &le) && cfg.LimitError != nil {
 			return nil, cfg.LimitError(job, le)
 		}
 		if err != nil {
 			return nil, err
 		}
-		if data, err = p.JSON(detail.Pruned); err != nil {
+		if data, err = p.JSON(propose.Pruned); err != nil {
 			return nil, err
 		}
 		if !p.Found() {

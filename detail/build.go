@@ -54,15 +54,82 @@ func Build(jf *jobfile.Job) (*Design, error) {
 //
 //   - the parts: newDesign, buildMember, buildBolt, plateParts, setDemand
 //     (propose resolves them once per plate thickness and bolt);
-//   - the holes: Design.placeHoles puts the centres into the model with
+//   - the holes: Design.PlaceHoles puts the centres into the model with
 //     their ids and the hole shapes of both plies and tells the first one
 //     that does not fit the member;
-//   - the plate: Design.placePlate puts the plate's free edge and centre
+//   - the plate: Design.PlacePlate puts the plate's free edge and centre
 //     line after the holes and tells the first hole off the plate;
 //   - as built: Design.WithHoles is the design with other holes (the
 //     measured ones), the plate as designed.
 //
 // Check (report.go) then checks whatever the steps made.
+
+// A Builder makes the designs of one job under its edition step by step:
+// what Build does once, for a caller that makes many (the layout search).
+type Builder struct {
+	j       job
+	Edition *rules.Edition
+}
+
+// NewBuilder resolves the job's standard and checks its stock against it.
+func NewBuilder(jf *jobfile.Job) (*Builder, error) {
+	j := job{jf}
+	ed, err := j.edition()
+	if err != nil {
+		return nil, err
+	}
+	return &Builder{j: j, Edition: ed}, nil
+}
+
+// Template resolves the member, the plate's steel and the demand for a
+// plate thickness tp, as Build does: everything of a Design but the bolt
+// and the holes.
+func (b *Builder) Template(tp units.Length) (*Design, error) {
+	ed := b.Edition
+	jf := *b.j.Job
+	if jf.Plate != nil {
+		pl := *jf.Plate
+		pl.Thickness, pl.AutoThickness = tp, false
+		jf.Plate = &pl
+	}
+	jj := job{&jf}
+	des := jj.newDesign(ed)
+	if err := jj.buildMember(ed, des); err != nil {
+		return nil, err
+	}
+	if jj.Plate != nil {
+		if err := jj.plateParts(ed, des); err != nil {
+			return nil, err
+		}
+	}
+	jj.setDemand(des)
+	return des, nil
+}
+
+// PlyShapes is the hole shapes of the member's ply and, where it differs,
+// the plate's (else nil) for a bolt of diameter d.
+func (b *Builder) PlyShapes(d units.Length) (engine.HoleShape, *engine.HoleShape, error) {
+	return b.j.plyShapes(b.Edition, d)
+}
+
+// WithBolt returns a copy of the template with the bolt of diameter d and
+// grade resolved.
+func (t *Design) WithBolt(ed *rules.Edition, d units.Length, grade string) (*Design, error) {
+	jf := *t.Job
+	jf.Bolts.Diameter, jf.Bolts.Grade = d, grade
+	out := *t
+	out.Job = &jf
+	if err := (job{&jf}).buildBolt(ed, &out.Conn); err != nil {
+		return nil, err
+	}
+	return &out, nil
+}
+
+// DiameterError is the bad input of a bolt diameter the edition's hole
+// table does not list (err from rules.Edition.Hole).
+func DiameterError(j *jobfile.Job, ed *rules.Edition, err error) *jobfile.InputError {
+	return j.FieldError("bolts.diameter", tabulatedMsg(err), diametersHint(ed))
+}
 
 // edition resolves the job's standard and checks its stock against it.
 func (j job) edition() (*rules.Edition, error) {
@@ -419,7 +486,7 @@ func (j job) buildHoles(ed *rules.Edition, d *Design) error {
 	b := j.Bolts
 	shape, plate, err := j.plyShapes(ed, b.Diameter)
 	if err != nil {
-		return j.FieldError("bolts.diameter", tabulatedMsg(err), diametersHint(ed))
+		return DiameterError(j.Job, ed, err)
 	}
 	dx, dy := shape.Dx, shape.Dy
 	m := &d.Conn.Member
@@ -455,20 +522,20 @@ func (j job) buildHoles(ed *rules.Edition, d *Design) error {
 			return err
 		}
 		pat := j.pattern()
-		holes = pat.centres(make([]engine.Hole, 0, pat.lines*pat.perLine))
+		holes = pat.Centres(make([]engine.Hole, 0, pat.Lines*pat.PerLine))
 		fields = func(i int) (string, string) {
 			x, y := "bolts.end", "bolts.gage"
-			if i%pat.perLine > 0 {
+			if i%pat.PerLine > 0 {
 				x = "bolts.pitch" // the pitch put it there
 			}
-			if i/pat.perLine > 0 {
+			if i/pat.PerLine > 0 {
 				y = "bolts.gage2"
 			}
 			return x, y
 		}
 	}
 
-	f := d.placeHoles(holes, shape, plate)
+	f := d.PlaceHoles(holes, shape, plate)
 	if f.how == fitOK {
 		return nil
 	}
@@ -509,28 +576,28 @@ func (j job) checkPattern() error {
 	return nil
 }
 
-// pattern is a bolt pattern: lines of perLine bolts, the first at end
-// from the member's end on the gage line at gage, the next lines gage2
-// apart, every other line moved stagger along x.
-type pattern struct {
-	lines, perLine                   int
-	pitch, end, gage, gage2, stagger units.Length
+// Pattern is a bolt pattern: Lines of PerLine bolts, the first at End
+// from the member's end on the gage line at Gage, the next lines Gage2
+// apart, every other line moved Stagger along x.
+type Pattern struct {
+	Lines, PerLine                   int
+	Pitch, End, Gage, Gage2, Stagger units.Length
 }
 
 // pattern is the bolts block's pattern.
-func (j job) pattern() pattern {
+func (j job) pattern() Pattern {
 	b := j.Bolts
-	return pattern{lines: b.Lines, perLine: b.PerLine, pitch: b.Pitch, end: b.End, gage: b.Gage, gage2: b.Gage2, stagger: b.Stagger}
+	return Pattern{Lines: b.Lines, PerLine: b.PerLine, Pitch: b.Pitch, End: b.End, Gage: b.Gage, Gage2: b.Gage2, Stagger: b.Stagger}
 }
 
-// centres appends the pattern's hole centres to holes, line by line.
-func (pat pattern) centres(holes []engine.Hole) []engine.Hole {
-	for i := range pat.lines {
-		y := pat.gage + units.Length(i)*pat.gage2
-		for k := range pat.perLine {
-			x := pat.end + units.Length(k)*pat.pitch
+// Centres appends the pattern's hole centres to holes, line by line.
+func (pat Pattern) Centres(holes []engine.Hole) []engine.Hole {
+	for i := range pat.Lines {
+		y := pat.Gage + units.Length(i)*pat.Gage2
+		for k := range pat.PerLine {
+			x := pat.End + units.Length(k)*pat.Pitch
 			if i%2 == 1 {
-				x += pat.stagger
+				x += pat.Stagger
 			}
 			holes = append(holes, engine.Hole{X: x, Y: y})
 		}
@@ -549,19 +616,22 @@ const (
 	fitSame           // at the centre of an earlier hole
 )
 
-// holeFit is the first hole that does not fit, and the earlier hole it
+// HoleFit is the first hole that does not fit, and the earlier hole it
 // coincides with (fitSame).
-type holeFit struct {
+type HoleFit struct {
 	how         fitHow
 	hole, other int
 }
 
-// placeHoles makes holes, of which the centres are set, the model's holes:
+// OK reports whether every hole fits.
+func (f HoleFit) OK() bool { return f.how == fitOK }
+
+// PlaceHoles makes holes, of which the centres are set, the model's holes:
 // ids H1, H2, …, the member's hole shape and, where the plate's differs,
 // each hole its own copy of that (as-built copies may change one). It
 // returns the first hole that runs off the member or has the centre of an
 // earlier hole, hole by hole in that order.
-func (d *Design) placeHoles(holes []engine.Hole, shape engine.HoleShape, plate *engine.HoleShape) holeFit {
+func (d *Design) PlaceHoles(holes []engine.Hole, shape engine.HoleShape, plate *engine.HoleShape) HoleFit {
 	var plates []engine.HoleShape
 	if plate != nil {
 		plates = make([]engine.HoleShape, len(holes))
@@ -582,20 +652,20 @@ func (d *Design) placeHoles(holes []engine.Hole, shape engine.HoleShape, plate *
 		h := &holes[i]
 		switch {
 		case h.X-dx/2 < -eps:
-			return holeFit{how: fitPastEnd, hole: i}
+			return HoleFit{how: fitPastEnd, hole: i}
 		case h.Y-dy/2 < -eps:
-			return holeFit{how: fitOffLow, hole: i}
+			return HoleFit{how: fitOffLow, hole: i}
 		case h.Y+dy/2 > w+eps:
-			return holeFit{how: fitOffHigh, hole: i}
+			return HoleFit{how: fitOffHigh, hole: i}
 		}
 		for k := range i {
 			o := &holes[k]
 			if math.Abs(float64(o.X-h.X)) < eps && math.Abs(float64(o.Y-h.Y)) < eps {
-				return holeFit{how: fitSame, hole: i, other: k}
+				return HoleFit{how: fitSame, hole: i, other: k}
 			}
 		}
 	}
-	return holeFit{}
+	return HoleFit{}
 }
 
 var holeIDs = func() []string {
@@ -628,7 +698,7 @@ func (j job) buildPlate(ed *rules.Edition, d *Design) error {
 	if err := j.plateParts(ed, d); err != nil {
 		return err
 	}
-	if i := d.placePlate(ps.Edge); i >= 0 {
+	if i := d.PlacePlate(ps.Edge); i >= 0 {
 		return j.FieldError("plate.width", fmt.Sprintf("hole %s runs off the plate: the plate is %s wide", d.Conn.Holes[i].ID, units.FormatJob(ps.Width, j.Units)),
 			"the plate must be wider than the bolt group plus the hole")
 	}
@@ -649,11 +719,11 @@ func (j job) plateParts(ed *rules.Edition, d *Design) error {
 	return nil
 }
 
-// placePlate gives the model its own copy of the plate, with the free
+// PlacePlate gives the model its own copy of the plate, with the free
 // edge the distance edge past the last hole and the centre line on the
 // bolt group's; it returns the first hole that runs off the plate's
 // width, or -1.
-func (d *Design) placePlate(edge units.Length) int {
+func (d *Design) PlacePlate(edge units.Length) int {
 	c := &d.Conn
 	pl := *c.Plate
 	var xmax, ysum units.Length

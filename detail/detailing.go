@@ -479,16 +479,17 @@ func edges(c *engine.Connection) []edge {
 	return es
 }
 
-// incrementType is the hole type whose C2 (Table J3.5) applies at edge e
-// to a hole of shape h in that edge's part: oversized holes at every edge,
+// IncrementType is the hole type whose C2 (Table J3.5) applies at an edge
+// to a hole of shape h in that edge's part (alongX: the edge runs along x,
+// a side or toe; else along y, an end): oversized holes at every edge,
 // slots whose long axis is perpendicular to the edge, otherwise none
 // (Standard). The reduction of C2 for slots shorter than the maximum is
 // not taken (conservative).
-func incrementType(h engine.HoleShape, e edge) rules.HoleType {
+func IncrementType(h engine.HoleShape, alongX bool) rules.HoleType {
 	switch {
 	case h.Type == rules.Oversized:
 		return h.Type
-	case h.Type.IsSlot() && (h.Slot == rules.Transverse) == e.alongX:
+	case h.Type.IsSlot() && (h.Slot == rules.Transverse) == alongX:
 		return h.Type
 	}
 	return rules.Standard
@@ -514,7 +515,7 @@ func minEdgeFindings(c *engine.Connection) []Finding {
 		margin := units.Length(math.Inf(1))
 		for i := range c.Holes {
 			h := &c.Holes[i]
-			c2, err := c.Edition.EdgeIncrement(c.Bolt.D, incrementType(e.ply.shape(h), e))
+			c2, err := c.Edition.EdgeIncrement(c.Bolt.D, IncrementType(e.ply.shape(h), e.alongX))
 			if err != nil {
 				return append(fs, untabulated(id, clause, err))
 			}
@@ -620,10 +621,10 @@ func socketWall(sys units.System) units.Length {
 	return 5
 }
 
-// wrenchClearance is the least distance from the bolt centre to the face
+// WrenchClearance is the least distance from the bolt centre to the face
 // of an obstruction that lets a socket reach the nut: the nut's corner
 // radius F/√3 plus the socket wall w. Common practice, not AISC 360.
-func wrenchClearance(d units.Length, sys units.System) units.Length {
+func WrenchClearance(d units.Length, sys units.System) units.Length {
 	return nutAcrossFlats(d, sys)/units.Length(math.Sqrt(3)) + socketWall(sys)
 }
 
@@ -644,7 +645,7 @@ func gageFindings(c *engine.Connection, info MemberInfo) []Finding {
 	h, name := &c.Holes[near], holeName(c, near)
 	fillet := h.Y - h.Dy/2
 	leg := h.Y - c.Member.T
-	wrench := wrenchClearance(c.Bolt.D, c.Edition.System)
+	wrench := WrenchClearance(c.Bolt.D, c.Edition.System)
 	return []Finding{
 		lengthFinding(id, commonPractice, fillet, info.K, atLeast(fillet, info.K), name+" to fillet (k)"),
 		lengthFinding(id, commonPractice, leg, wrench, atLeast(leg, wrench), name+" to outstanding leg (wrench clearance)"),

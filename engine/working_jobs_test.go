@@ -6,6 +6,7 @@ import (
 
 	"gaugeline/detail"
 	"gaugeline/detail/jobfile"
+	"gaugeline/detail/propose"
 	"gaugeline/engine"
 )
 
@@ -31,7 +32,7 @@ func TestWorkingOfEveryTestdataJob(t *testing.T) {
 		}
 		var d *detail.Design
 		if d, err = detail.Build(j); err != nil {
-			p, perr := detail.Propose(j, detail.ProposeOptions{})
+			p, perr := propose.Propose(j, propose.ProposeOptions{})
 			if perr != nil || !p.Found() {
 				continue // an unknown size, or stock in which nothing passes
 			}

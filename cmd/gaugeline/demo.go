@@ -16,6 +16,7 @@ import (
 	"gaugeline/detail/calc"
 	"gaugeline/detail/jobfile"
 	"gaugeline/detail/measured"
+	"gaugeline/detail/propose"
 	"gaugeline/detail/qa"
 	"gaugeline/detail/sheet"
 	"gaugeline/dxfout"
@@ -68,7 +69,7 @@ func runDemo(do demoOptions, out io.Writer) error {
 		return err
 	}
 	defer unlock()
-	var qaJob *detail.Proposal
+	var qaJob *propose.Proposal
 	for _, e := range entries {
 		name := path.Join("demo", e.Name())
 		p, err := demoPropose(name)
@@ -92,7 +93,7 @@ func runDemo(do demoOptions, out io.Writer) error {
 	return nil
 }
 
-func demoPropose(name string) (*detail.Proposal, error) {
+func demoPropose(name string) (*propose.Proposal, error) {
 	data, err := demoJobs.ReadFile(name)
 	if err != nil {
 		return nil, err
@@ -102,7 +103,7 @@ func demoPropose(name string) (*detail.Proposal, error) {
 		return nil, err
 	}
 	job.Stamp = stampFor("propose", job)
-	p, err := detail.Propose(job, detail.ProposeOptions{})
+	p, err := propose.Propose(job, propose.ProposeOptions{})
 	if err != nil {
 		return nil, err
 	}
@@ -113,7 +114,7 @@ func demoPropose(name string) (*detail.Proposal, error) {
 }
 
 // demoWrite writes everything the loop makes of one proposal and says so.
-func demoWrite(p *detail.Proposal, dir string, out io.Writer) error {
+func demoWrite(p *propose.Proposal, dir string, out io.Writer) error {
 	r := p.Report
 	d := r.Design
 	mark := d.Job.Mark
@@ -173,7 +174,7 @@ func demoMeasured(d *detail.Design) []byte {
 	return []byte(b.String())
 }
 
-func demoReverify(p *detail.Proposal, dir string, out io.Writer) error {
+func demoReverify(p *propose.Proposal, dir string, out io.Writer) error {
 	d := p.Report.Design
 	mark := d.Job.Mark
 	// The QA records are a set of their own: the inspection is not the

@@ -8,8 +8,8 @@ import (
 
 	"github.com/spf13/cobra"
 
-	"gaugeline/detail"
 	"gaugeline/detail/jobfile"
+	"gaugeline/detail/propose"
 	"gaugeline/fileset"
 )
 
@@ -74,15 +74,15 @@ func runPropose(_ context.Context, o *rootOptions, po proposeOptions, path strin
 	if err != nil {
 		return err
 	}
-	mode, desc := detail.Pruned, "propose"
+	mode, desc := propose.Pruned, "propose"
 	if po.exhaustive {
-		mode, desc = detail.Exhaustive, "propose --exhaustive"
+		mode, desc = propose.Exhaustive, "propose --exhaustive"
 	}
 	report, finish := progressBar(o.stderr, desc, "candidates")
-	p, err := detail.Propose(job, detail.ProposeOptions{Mode: mode, Alternatives: po.alternatives,
+	p, err := propose.Propose(job, propose.ProposeOptions{Mode: mode, Alternatives: po.alternatives,
 		MaxCandidates: po.maxCand, Progress: report})
 	finish()
-	var le *detail.SearchLimitError
+	var le *propose.SearchLimitError
 	if errors.As(err, &le) {
 		return limitError(job, le)
 	}
@@ -121,11 +121,11 @@ func runPropose(_ context.Context, o *rootOptions, po proposeOptions, path strin
 
 // limitError words a search refused or stopped at --max-candidates as
 // bad input at the job's stock, which is what makes the search that large.
-func limitError(job *jobfile.Job, le *detail.SearchLimitError) error {
+func limitError(job *jobfile.Job, le *propose.SearchLimitError) error {
 	hint := "narrow the stock (fewer diameters, grades or thicknesses, a smaller max_lines or max_per_line, a coarser step, " +
 		"or fix what you know in the bolts block), or raise --max-candidates"
 	msg := fmt.Sprintf("the search reached --max-candidates (%d candidates checked) before finishing; the space has %d candidates", le.Limit, le.Space)
-	if le.Mode == detail.Exhaustive {
+	if le.Mode == propose.Exhaustive {
 		msg = fmt.Sprintf("the exhaustive search would check all %d candidates of the space, more than --max-candidates %d", le.Space, le.Limit)
 		hint += "; the search without --exhaustive returns the same layout"
 	}

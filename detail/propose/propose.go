@@ -1,4 +1,4 @@
-package detail
+package propose
 
 import (
 	"bytes"
@@ -14,6 +14,7 @@ import (
 	"sync"
 	"text/tabwriter"
 
+	"gaugeline/detail"
 	"gaugeline/detail/jobfile"
 	"gaugeline/engine"
 	"gaugeline/rules"
@@ -174,7 +175,7 @@ type Proposal struct {
 	Layout Layout
 	// Report is the check of the chosen layout (nil when nothing passes),
 	// built from LayoutJob exactly as `gaugeline check` builds it.
-	Report *Report
+	Report *detail.Report
 	// LayoutJob is the job file with the layout filled in (nil when
 	// nothing passes).
 	LayoutJob    []byte
@@ -239,7 +240,7 @@ func Propose(j *jobfile.Job, opt ProposeOptions) (*Proposal, error) {
 			other = others[0]
 		}
 	} else {
-		p.cache = map[candKey]*Report{}
+		p.cache = map[candKey]*detail.Report{}
 		p.progress = opt.Progress
 		tops = p.bestPerGroup(p.obj, 1)
 		out.Evaluated = p.evals
@@ -278,11 +279,11 @@ func Propose(j *jobfile.Job, opt ProposeOptions) (*Proposal, error) {
 		return nil, fmt.Errorf("detail: propose wrote a job it cannot read: %w", err)
 	}
 	lj.Stamp = j.Stamp // the layout's files belong to the run that proposed it
-	d, err := Build(lj)
+	d, err := detail.Build(lj)
 	if err != nil {
 		return nil, fmt.Errorf("detail: propose wrote a job that does not build: %w", err)
 	}
-	r, err := Check(d)
+	r, err := detail.Check(d)
 	if err != nil {
 		return nil, err
 	}
@@ -303,11 +304,15 @@ func firstN(cs []*cand, n int) []*cand {
 	return cs
 }
 
+// eps is the geometric tolerance of the search, in mm.
+const eps = 1e-6
+
 // ---------------------------------------------------------------------
 // The problem: groups and their ranges.
 
 type problem struct {
 	job    *jobfile.Job
+	build  *detail.Builder
 	ed     *rules.Edition
 	step   units.Length
 	obj    jobfile.Objective
@@ -321,7 +326,7 @@ type problem struct {
 	grids   map[[2]int][]units.Length // grid index range → values, shared by the groups
 
 	evals int
-	cache map[candKey]*Report // pruned search only; nil: no cache
+	cache map[candKey]*detail.Report // pruned search only; nil: no cache
 
 	// checks counts the candidates eval checked (not from the cache);
 	// at limit (0: none) eval checks no more and sets stopped.
@@ -339,7 +344,7 @@ type group struct {
 	tp             units.Length
 	lines, perLine int
 	nT             int
-	tmpl           *Design           // member, bolt, plate steel, demand; no holes
+	tmpl           *detail.Design    // member, bolt, plate steel, demand; no holes
 	shape          engine.HoleShape  // the member's holes
 	plate          *engine.HoleShape // the plate's, nil when the member's; shared, never changed
 	dx, dy         units.Length      // the member's hole extents
@@ -359,15 +364,16 @@ type option[T any] struct {
 }
 
 func newProblem(j *jobfile.Job) (*problem, error) {
-	ed, err := job{j}.edition()
+	bld, err := detail.NewBuilder(j)
 	if err != nil {
 		return nil, err
 	}
+	ed := bld.Edition
 	if j.Holes != nil {
 		return nil, j.FieldError("holes", "propose lays out the bolts itself; explicit holes leave nothing to choose",
 			"remove the holes list, or run gaugeline check")
 	}
-	p := &problem{job: j, ed: ed, step: j.Stock.Step, obj: j.Stock.Objective, snapped: map[int]units.Length{},
+	p := &problem{job: j, build: bld, ed: ed, step: j.Stock.Step, obj: j.Stock.Objective, snapped: map[int]units.Length{},
 		grids: map[[2]int][]units.Length{}}
 
 	var diams []option[units.Length]
@@ -431,9 +437,9 @@ func newProblem(j *jobfile.Job) (*problem, error) {
 
 	// The member depends on the plate thickness only (the gap of a double
 	// angle); the bolt on diameter and grade.
-	members := make([]*Design, len(thick))
+	members := make([]*detail.Design, len(thick))
 	for ti, t := range thick {
-		if members[ti], err = (job{j}).template(ed, t.v); err != nil {
+		if members[ti], err = bld.Template(t.v); err != nil {
 			return nil, err
 		}
 	}
@@ -442,11 +448,11 @@ func newProblem(j *jobfile.Job) (*problem, error) {
 	}
 	for di, d := range diams {
 		if _, err := ed.Hole(d.v, j.Bolts.Hole); err != nil {
-			return nil, j.FieldError("bolts.diameter", tabulatedMsg(err), diametersHint(ed))
+			return nil, detail.DiameterError(j, ed, err)
 		}
 		for gi, gr := range grades {
 			for ti, t := range thick {
-				tmpl, err := members[ti].withBolt(ed, d.v, gr)
+				tmpl, err := members[ti].WithBolt(ed, d.v, gr)
 				if err != nil {
 					return nil, err
 				}
@@ -475,7 +481,7 @@ const maxGridValues = 1000
 // checkStep refuses a step that puts more than maxGridValues values on
 // the widest range searched: 4·d of the largest bolt (pitch, end, edge,
 // gage2) or the member's width (the gage).
-func (p *problem) checkStep(diams []option[units.Length], members []*Design) error {
+func (p *problem) checkStep(diams []option[units.Length], members []*detail.Design) error {
 	reach, what := units.Length(0), ""
 	for _, d := range diams {
 		if 4*d.v > reach {
@@ -496,43 +502,6 @@ func (p *problem) checkStep(diams []option[units.Length], members []*Design) err
 		what, units.FormatJob(reach, sys), n, maxGridValues),
 		fmt.Sprintf("use a step of at least %s (a shop lays bolts out on 1/16 in or 1 mm or coarser)",
 			units.FormatJob(reach/maxGridValues, sys)))
-}
-
-// template resolves the member, the plate's steel and the demand for a
-// plate thickness, as Build does: everything of a Design but the bolt and
-// the holes.
-func (j job) template(ed *rules.Edition, tp units.Length) (*Design, error) {
-	jf := *j.Job
-	if j.Plate != nil {
-		pl := *j.Plate
-		pl.Thickness, pl.AutoThickness = tp, false
-		jf.Plate = &pl
-	}
-	jj := job{&jf}
-	des := jj.newDesign(ed)
-	if err := jj.buildMember(ed, des); err != nil {
-		return nil, err
-	}
-	if jj.Plate != nil {
-		if err := jj.plateParts(ed, des); err != nil {
-			return nil, err
-		}
-	}
-	jj.setDemand(des)
-	return des, nil
-}
-
-// withBolt returns a copy of the template with the bolt of diameter d and
-// grade resolved.
-func (t *Design) withBolt(ed *rules.Edition, d units.Length, grade string) (*Design, error) {
-	jf := *t.Job
-	jf.Bolts.Diameter, jf.Bolts.Grade = d, grade
-	out := *t
-	out.Job = &jf
-	if err := (job{&jf}).buildBolt(ed, &out.Conn); err != nil {
-		return nil, err
-	}
-	return &out, nil
 }
 
 // gridUp and gridDown round a length up or down to the step grid.
@@ -584,7 +553,7 @@ func (p *problem) minEdgeTo(g *group, hs engine.HoleShape, alongX bool) units.Le
 	if err != nil {
 		return 0
 	}
-	c2, err := p.ed.EdgeIncrement(g.d, incrementType(hs, edge{alongX: alongX}))
+	c2, err := p.ed.EdgeIncrement(g.d, detail.IncrementType(hs, alongX))
 	if err != nil {
 		return emin
 	}
@@ -598,7 +567,7 @@ func (p *problem) ranges(g *group) {
 	j, ed := p.job, p.ed
 	c := &g.tmpl.Conn
 	m := &c.Member
-	g.shape, g.plate, _ = job{j}.plyShapes(ed, g.d) // tabulated: checked by newProblem
+	g.shape, g.plate, _ = p.build.PlyShapes(g.d) // tabulated: checked by newProblem
 	g.dx, g.dy = g.shape.Dx, g.shape.Dy
 	// Clear distances (360-22) hold in both plies: the larger hole sets them.
 	plate := g.shape
@@ -717,7 +686,7 @@ func (p *problem) gageSpan(g *group, i int) (gs []units.Length, lo, hi int, onGr
 		}
 		return nil, 0, 0, false
 	}
-	gLo := max(g.tmpl.Info.K+g.dy/2, m.T+wrenchClearance(g.d, p.ed.System), g.dy/2, m.Width-span-maxEdge)
+	gLo := max(g.tmpl.Info.K+g.dy/2, m.T+detail.WrenchClearance(g.d, p.ed.System), g.dy/2, m.Width-span-maxEdge)
 	gHi := m.Width - span - side
 	return nil, p.gridUp(gLo), p.gridDown(gHi), true
 }
@@ -781,10 +750,10 @@ func (b boltBounds) pass(n int) bool {
 
 // perBolt computes the bounds with the engine's own formulas on one hole
 // far from every edge.
-func (p *problem) perBolt(t *Design) boltBounds {
+func (p *problem) perBolt(t *detail.Design) boltBounds {
 	c := t.Conn
 	far := units.Length(1e7)
-	shape, plate, _ := job{p.job}.plyShapes(p.ed, c.Bolt.D) // tabulated: checked by newProblem
+	shape, plate, _ := p.build.PlyShapes(c.Bolt.D) // tabulated: checked by newProblem
 	c.Holes = []engine.Hole{{X: far, Y: shape.Dy, HoleShape: shape, Plate: plate}}
 	b := boltBounds{demand: c.Demand}
 	b.avail = append(b.avail, engine.BoltShear(&c).Available, engine.MemberBearing(&c).Available)
@@ -867,7 +836,7 @@ type cand struct {
 	g1      units.Length
 	i, j, k int // pitch, end, edge
 	lenNm   int64
-	rep     *Report
+	rep     *detail.Report
 	ratioB  int64
 }
 
@@ -894,16 +863,16 @@ func (p *problem) newCand(g *group, g2i int, g1 units.Length, i, j, k int) *cand
 
 // design builds the candidate's Design from the group's template in the
 // steps Build takes; false when a hole leaves the member or the plate.
-func (p *problem) design(c *cand) (*Design, bool) {
+func (p *problem) design(c *cand) (*detail.Design, bool) {
 	g := c.g
 	t := g.tmpl
-	d := &Design{Job: p.job, Conn: t.Conn, Info: t.Info, Combination: t.Combination}
-	pat := pattern{lines: g.lines, perLine: g.perLine, pitch: g.pitch[c.i], end: g.end[c.j],
-		gage: c.g1, gage2: g.gage2[c.g2i], stagger: g.stag}
-	if d.placeHoles(pat.centres(make([]engine.Hole, 0, g.nT)), g.shape, g.plate).how != fitOK {
+	d := &detail.Design{Job: p.job, Conn: t.Conn, Info: t.Info, Combination: t.Combination}
+	pat := detail.Pattern{Lines: g.lines, PerLine: g.perLine, Pitch: g.pitch[c.i], End: g.end[c.j],
+		Gage: c.g1, Gage2: g.gage2[c.g2i], Stagger: g.stag}
+	if !d.PlaceHoles(pat.Centres(make([]engine.Hole, 0, g.nT)), g.shape, g.plate).OK() {
 		return nil, false
 	}
-	if t.Conn.Plate != nil && d.placePlate(g.edge[c.k]) >= 0 {
+	if t.Conn.Plate != nil && d.PlacePlate(g.edge[c.k]) >= 0 {
 		return nil, false
 	}
 	return d, true
@@ -946,7 +915,7 @@ func (p *problem) check(c *cand) bool {
 	if !ok {
 		return false
 	}
-	r, err := Check(d)
+	r, err := detail.Check(d)
 	if err != nil {
 		return false // a lookup the edition cannot answer: not a candidate
 	}
@@ -954,7 +923,7 @@ func (p *problem) check(c *cand) bool {
 	return true
 }
 
-func (c *cand) setReport(r *Report) {
+func (c *cand) setReport(r *detail.Report) {
 	c.rep = r
 	if r != nil {
 		c.ratioB = ratioBucket(r.GoverningResult().Ratio)
@@ -1239,7 +1208,7 @@ func (s *searcher) lowRatioOf(g2i, i, j, k int) int64 {
 
 // noteRatio records the gage-independent part of a checked layout's
 // ratio for every gage.
-func (s *searcher) noteRatio(g2i, i, j, k int, r *Report) {
+func (s *searcher) noteRatio(g2i, i, j, k int, r *detail.Report) {
 	low := 0.0
 	for _, x := range r.Results {
 		if !gageDependent(x.ID) {
@@ -1445,7 +1414,7 @@ func (s *searcher) sub(g *group, g2i int, g1 units.Length, ia, ib int) (tried, g
 // eccentricity rules and the edge distances to the member's toe or sides. Plate
 // checks see the plate centred on the bolt group; net sections, Whitmore
 // sections, bearing and spacing see only distances between holes.
-func failsAtEveryGage(r *Report) bool {
+func failsAtEveryGage(r *detail.Report) bool {
 	failing := false
 	for _, x := range r.Results {
 		if x.Pass {
@@ -1478,7 +1447,7 @@ func gageDependent(id string) bool {
 
 // isGageFinding: a detailing finding that depends on where the gage
 // lines sit across the member.
-func isGageFinding(f Finding) bool {
+func isGageFinding(f detail.Finding) bool {
 	return f.ID == "gage.workable" || f.ID == "eccentricity" || (f.ID == "edge.min" || f.ID == "edge.max") &&
 		(strings.HasSuffix(f.Where, "member toe") || strings.Contains(f.Where, "member edge (y"))
 }
@@ -1486,7 +1455,7 @@ func isGageFinding(f Finding) bool {
 // gageRulesPass reports whether the rules that depend on where the gage
 // lines sit across an angle leg pass: gage.workable and the edge
 // distances to the member toe.
-func gageRulesPass(r *Report) bool {
+func gageRulesPass(r *detail.Report) bool {
 	for _, f := range r.Findings {
 		if !f.Pass && !f.Advisory && isGageFinding(f) {
 			return false
@@ -1572,7 +1541,7 @@ func (p *problem) diagnose(out *Proposal) {
 	var ids []string
 	bestOf := map[string]best{}
 	failsAll := map[string]bool{}
-	findingFailsAll := map[string]*Finding{}
+	findingFailsAll := map[string]*detail.Finding{}
 	for n, c := range corners {
 		for _, x := range c.rep.Results {
 			b, seen := bestOf[x.ID]
@@ -1585,7 +1554,7 @@ func (p *problem) diagnose(out *Proposal) {
 			}
 			failsAll[x.ID] = failsAll[x.ID] && !x.Pass
 		}
-		failing := map[string]*Finding{}
+		failing := map[string]*detail.Finding{}
 		for i := range c.rep.Findings {
 			f := &c.rep.Findings[i]
 			if !f.Pass && !f.Advisory && failing[f.ID] == nil {
@@ -1675,7 +1644,7 @@ func (p *problem) lift(x engine.Result, c *cand, maxBolts int) (text, lift strin
 		per := x.Available / units.Force(max(val("n"), 1))
 		need := int(math.Ceil(float64(x.Demand/per) - 1e-9))
 		text = fmt.Sprintf("%s needs at least %d bolts of %s %s (the stock allows %d; at best ratio %.3f)",
-			x.ID, need, BoltSize(g.d, sys), p.grades[g.gi], maxBolts, x.Ratio)
+			x.ID, need, detail.BoltSize(g.d, sys), p.grades[g.gi], maxBolts, x.Ratio)
 		lift = "allow more bolts (stock.max_per_line, stock.max_lines), a larger diameter or a stronger grade"
 		if x.ID == "bolts.slip" {
 			lift += ", or a class B faying surface"
@@ -1716,7 +1685,7 @@ func findingLift(id string) string {
 
 // Describe writes the layout in one line for people.
 func (l Layout) Describe(sys units.System) string {
-	s := fmt.Sprintf("%d × %s %s", l.Bolts(), BoltSize(l.Diameter, sys), l.Grade)
+	s := fmt.Sprintf("%d × %s %s", l.Bolts(), detail.BoltSize(l.Diameter, sys), l.Grade)
 	if l.Lines > 1 {
 		s += fmt.Sprintf(" in %d lines of %d, gage2 %s", l.Lines, l.PerLine, units.FormatJob(l.Gage2, sys))
 	}
@@ -1819,17 +1788,17 @@ func (l Layout) json(sys units.System) (jsonLayout, *jsonPlateLayout) {
 
 // lengthJSON is a connection length in the job's units, rid of the
 // rounding noise of summing grid values (they lie on a 1e-9 grid).
-func lengthJSON(l units.Length, sys units.System) JSONNum {
-	return JSONNum(math.Round(sys.ToJob(float64(l), units.DimLength)*1e9) / 1e9)
+func lengthJSON(l units.Length, sys units.System) detail.JSONNum {
+	return detail.JSONNum(math.Round(sys.ToJob(float64(l), units.DimLength)*1e9) / 1e9)
 }
 
 type jsonAlternative struct {
 	Layout    jsonLayout       `json:"layout"`
 	Plate     *jsonPlateLayout `json:"plate,omitempty"`
 	Bolts     int              `json:"bolts"`
-	Length    JSONNum          `json:"length"`
+	Length    detail.JSONNum   `json:"length"`
 	Governing string           `json:"governing"`
-	Ratio     JSONNum          `json:"ratio"`
+	Ratio     detail.JSONNum   `json:"ratio"`
 }
 
 type jsonSearch struct {
@@ -1842,20 +1811,20 @@ type jsonSearch struct {
 }
 
 type jsonProposal struct {
-	Document
+	detail.Document
 	Layout       jsonLayout        `json:"layout"`
 	Plate        *jsonPlateLayout  `json:"plate,omitempty"`
 	Bolts        int               `json:"bolts"`
-	Length       JSONNum           `json:"length"`
+	Length       detail.JSONNum    `json:"length"`
 	Alternatives []jsonAlternative `json:"alternatives"`
 	Search       jsonSearch        `json:"search"`
 }
 
 type jsonBlocker struct {
-	ID    string  `json:"id"`
-	Ratio JSONNum `json:"ratio,omitempty"`
-	What  string  `json:"what"`
-	Lift  string  `json:"lift"`
+	ID    string         `json:"id"`
+	Ratio detail.JSONNum `json:"ratio,omitempty"`
+	What  string         `json:"what"`
+	Lift  string         `json:"lift"`
 }
 
 type jsonInfeasible struct {
@@ -1895,15 +1864,15 @@ func (p *Proposal) JSON(mode SearchMode) ([]byte, error) {
 		for _, a := range p.Alternatives {
 			al, ap := a.Layout.json(sys)
 			d.Alternatives = append(d.Alternatives, jsonAlternative{Layout: al, Plate: ap, Bolts: a.Layout.Bolts(),
-				Length: lengthJSON(a.Length, sys), Governing: a.Governing, Ratio: JSONNum(a.Ratio)})
+				Length: lengthJSON(a.Length, sys), Governing: a.Governing, Ratio: detail.JSONNum(a.Ratio)})
 		}
 		doc = d
 	} else {
 		d := jsonInfeasible{Mark: p.Job.Mark, Standard: p.Job.Standard, Method: p.Job.Method.String(), Units: sys.String(),
 			UnitLabels: sys.Labels(), Verdict: "infeasible", Message: p.Summary, Blocking: []jsonBlocker{},
-			Search: p.search(mode), Cautions: []string{Caution}, Stamp: p.Job.Stamp}
+			Search: p.search(mode), Cautions: []string{detail.Caution}, Stamp: p.Job.Stamp}
 		for _, b := range p.Blockers {
-			d.Blocking = append(d.Blocking, jsonBlocker{ID: b.ID, Ratio: JSONNum(b.Ratio), What: b.Text, Lift: b.Lift})
+			d.Blocking = append(d.Blocking, jsonBlocker{ID: b.ID, Ratio: detail.JSONNum(b.Ratio), What: b.Text, Lift: b.Lift})
 		}
 		doc = d
 	}
@@ -1994,7 +1963,7 @@ func (p *Proposal) WriteText(w io.Writer, mode SearchMode) error {
 	if p.Found() {
 		return p.Report.WriteText(w)
 	}
-	_, err := fmt.Fprintf(w, "\nnote: %s\n", Caution)
+	_, err := fmt.Fprintf(w, "\nnote: %s\n", detail.Caution)
 	return err
 }
 
@@ -2008,6 +1977,6 @@ func (p *Proposal) WriteMarkdown(w io.Writer, mode SearchMode) error {
 	if p.Found() {
 		return p.Report.WriteMarkdown(w)
 	}
-	_, err := fmt.Fprintf(w, "\n> %s\n", Caution)
+	_, err := fmt.Fprintf(w, "\n> %s\n", detail.Caution)
 	return err
 }

@@ -1,4 +1,4 @@
-package detail
+package propose
 
 import (
 	"errors"
@@ -15,6 +15,7 @@ import (
 
 	"pgregory.net/rapid"
 
+	"gaugeline/detail"
 	"gaugeline/detail/jobfile"
 	"gaugeline/detail/section"
 	"gaugeline/engine"
@@ -286,11 +287,11 @@ func TestProposeFastEqualsExhaustive(t *testing.T) {
 		if err != nil {
 			rt.Fatalf("written job: %v\n%s", err, fast.LayoutJob)
 		}
-		d, err := Build(lj)
+		d, err := detail.Build(lj)
 		if err != nil {
 			rt.Fatalf("written job: %v\n%s", err, fast.LayoutJob)
 		}
-		r, err := Check(d)
+		r, err := detail.Check(d)
 		if err != nil || !r.Pass {
 			rt.Fatalf("written job does not pass check (%v)\n%s", err, fast.LayoutJob)
 		}
@@ -313,7 +314,7 @@ var exhaustiveAll = flag.Bool("propose.exhaustive-all", false,
 // the exhaustive one too, and requires them to agree.
 func proposeFile(t *testing.T, name string, exhaustive bool) *Proposal {
 	t.Helper()
-	job, err := jobfile.LoadJob(filepath.Join("..", "testdata", "propose", name))
+	job, err := jobfile.LoadJob(filepath.Join("../..", "testdata", "propose", name))
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -436,7 +437,7 @@ func TestProposeBadInput(t *testing.T) {
 // writes: a job that parses and passes check, with the user's comments
 // and stock spellings kept.
 func TestProposeEveryFile(t *testing.T) {
-	files, _ := filepath.Glob(filepath.Join("..", "testdata", "propose", "*.yaml"))
+	files, _ := filepath.Glob(filepath.Join("../..", "testdata", "propose", "*.yaml"))
 	if len(files) < 5 {
 		t.Fatalf("want at least 5 propose jobs, found %d", len(files))
 	}
@@ -469,7 +470,7 @@ func TestProposeEveryFile(t *testing.T) {
 // 1/3 in in a US job) still writes a layout that reads back exactly, so
 // the written job checks as it was chosen (Propose panics otherwise).
 func TestProposeOddStep(t *testing.T) {
-	src, err := os.ReadFile(filepath.Join("..", "testdata", "propose", "us-flat-shear.yaml"))
+	src, err := os.ReadFile(filepath.Join("../..", "testdata", "propose", "us-flat-shear.yaml"))
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -491,7 +492,7 @@ func TestProposeOddStep(t *testing.T) {
 }
 
 // centroidOffset is the bolt group's offset from a flat's centre line.
-func centroidOffset(r *Report) units.Length {
+func centroidOffset(r *detail.Report) units.Length {
 	e, _ := engine.GroupEccentricity(&r.Design.Conn)
 	return e
 }
@@ -536,7 +537,7 @@ func TestProposeCentresFlats(t *testing.T) {
 // and the diagnosis says so; provided for, the layout is found off-centre
 // and checked for the combined force (member.combined).
 func TestProposeHoldsAFixedOffCentreGage(t *testing.T) {
-	src, err := os.ReadFile(filepath.Join("..", "testdata", "propose", "us-flat-shear.yaml"))
+	src, err := os.ReadFile(filepath.Join("../..", "testdata", "propose", "us-flat-shear.yaml"))
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -621,7 +622,7 @@ func TestPropertyProposedFlatsAreCentred(t *testing.T) {
 		if err != nil {
 			rt.Fatal(err)
 		}
-		r, err := Check(mustBuildRapid(rt, lj))
+		r, err := detail.Check(mustBuildRapid(rt, lj))
 		if err != nil || !r.Pass {
 			rt.Fatalf("the written layout does not pass check (%v)\n%s", err, p.LayoutJob)
 		}
@@ -635,8 +636,8 @@ func TestPropertyProposedFlatsAreCentred(t *testing.T) {
 	t.Logf("%d of %d generated flats got a layout", found, runs)
 }
 
-func mustBuildRapid(rt *rapid.T, j *jobfile.Job) *Design {
-	d, err := Build(j)
+func mustBuildRapid(rt *rapid.T, j *jobfile.Job) *detail.Design {
+	d, err := detail.Build(j)
 	if err != nil {
 		rt.Fatal(err)
 	}

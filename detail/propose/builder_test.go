@@ -1,6 +1,7 @@
-package detail
+package propose
 
 import (
+	"gaugeline/detail"
 	"gaugeline/detail/jobfile"
 	"path/filepath"
 	"reflect"
@@ -13,8 +14,8 @@ import (
 // The fixtures are the repository's own propose jobs; the expectation is
 // the identity of two paths, no outside value.
 func TestProposeModelIsBuilds(t *testing.T) {
-	files, _ := filepath.Glob("../testdata/propose/*.yaml")
-	more, _ := filepath.Glob("../testdata/jobs/*.yaml")
+	files, _ := filepath.Glob("../../testdata/propose/*.yaml")
+	more, _ := filepath.Glob("../../testdata/jobs/*.yaml")
 	files = append(files, more...)
 	compared := 0
 	for _, f := range files {
@@ -26,7 +27,7 @@ func TestProposeModelIsBuilds(t *testing.T) {
 		if err != nil || p.yieldBlocker() != nil {
 			continue
 		}
-		p.cache = map[candKey]*Report{}
+		p.cache = map[candKey]*detail.Report{}
 		tops := p.bestPerGroup(p.obj, 1)
 		if len(tops) == 0 {
 			continue

@@ -1,4 +1,4 @@
-package detail
+package propose
 
 import (
 	"gaugeline/detail/jobfile"
@@ -14,7 +14,7 @@ var benchProposeJobs = []string{"us-angle-brace.yaml", "us-flat-shear.yaml", "si
 
 func benchPropose(b *testing.B, mode SearchMode) {
 	for _, name := range benchProposeJobs {
-		job, err := jobfile.LoadJob(filepath.Join("..", "testdata", "propose", name))
+		job, err := jobfile.LoadJob(filepath.Join("../..", "testdata", "propose", name))
 		if err != nil {
 			b.Fatal(err)
 		}
@@ -48,7 +48,7 @@ func BenchmarkProposeRate(b *testing.B) {
 		b.Run(name, func(b *testing.B) {
 			var jobs []*jobfile.Job
 			for _, f := range benchProposeJobs {
-				job, err := jobfile.LoadJob(filepath.Join("..", "testdata", "propose", f))
+				job, err := jobfile.LoadJob(filepath.Join("../..", "testdata", "propose", f))
 				if err != nil {
 					b.Fatal(err)
 				}

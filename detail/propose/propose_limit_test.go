@@ -1,4 +1,4 @@
-package detail
+package propose
 
 import (
 	"bytes"
@@ -17,7 +17,7 @@ import (
 // loadProposeJob reads a job of testdata/propose.
 func loadProposeJob(t *testing.T, name string) *jobfile.Job {
 	t.Helper()
-	job, err := jobfile.LoadJob(filepath.Join("..", "testdata", "propose", name))
+	job, err := jobfile.LoadJob(filepath.Join("../..", "testdata", "propose", name))
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -71,7 +71,7 @@ func TestProposeHugeAlternatives(t *testing.T) {
 // the grid indexes overflow (the search then found "no candidate fits");
 // 1e-9 in tried to list billions of pitches and ran out of memory.
 func TestProposeStepTooFine(t *testing.T) {
-	src, err := os.ReadFile(filepath.Join("..", "testdata", "propose", "us-angle-brace.yaml"))
+	src, err := os.ReadFile(filepath.Join("../..", "testdata", "propose", "us-angle-brace.yaml"))
 	if err != nil {
 		t.Fatal(err)
 	}
