@@ -9,6 +9,7 @@ import (
 	"strings"
 	"testing"
 
+	"gaugeline/detail/detailing"
 	"gaugeline/engine"
 	"gaugeline/rules/units"
 )
@@ -49,13 +50,13 @@ func checkSource(t *testing.T, src string) *Report {
 	return r
 }
 
-func findingOf(r *Report, id string) (Finding, bool) {
+func findingOf(r *Report, id string) (detailing.Finding, bool) {
 	for _, f := range r.Findings {
 		if f.ID == id {
 			return f, true
 		}
 	}
-	return Finding{}, false
+	return detailing.Finding{}, false
 }
 
 func resultOf(r *Report, id string) (engine.Result, bool) {

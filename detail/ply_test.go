@@ -6,6 +6,7 @@ import (
 	"strings"
 	"testing"
 
+	"gaugeline/detail/detailing"
 	"gaugeline/engine"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
@@ -128,13 +129,13 @@ func TestPlyHoleKeyErrors(t *testing.T) {
 
 // fayingFinding returns the hole.type finding on long slots at the faying
 // surfaces, and whether there is one.
-func fayingFinding(r *Report) (Finding, bool) {
+func fayingFinding(r *Report) (detailing.Finding, bool) {
 	for _, f := range r.Findings {
 		if f.ID == "hole.type" && strings.Contains(f.Where, "faying surface") {
 			return f, true
 		}
 	}
-	return Finding{}, false
+	return detailing.Finding{}, false
 }
 
 // TestLongSlotsOneFayingSurface: AISC 360-22 J3.3 (360-16 J3.2) permits
@@ -195,13 +196,13 @@ func TestDetailingPerPly(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	find := func(id, where string) (Finding, bool) {
+	find := func(id, where string) (detailing.Finding, bool) {
 		for _, f := range r.Findings {
 			if f.ID == id && f.Where == where {
 				return f, true
 			}
 		}
-		return Finding{}, false
+		return detailing.Finding{}, false
 	}
 	in := float64(units.Inch)
 	for _, w := range []struct {

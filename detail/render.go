@@ -6,6 +6,7 @@ import (
 	"strings"
 	"text/tabwriter"
 
+	"gaugeline/detail/detailing"
 	"gaugeline/engine"
 	"gaugeline/rules/units"
 )
@@ -215,7 +216,7 @@ func (r *Report) WriteMarkdown(w io.Writer) error {
 
 // FindingsText writes detailing findings as an aligned table under a
 // title column heading, values in the units of sys.
-func FindingsText(b *strings.Builder, sys units.System, title string, fs []Finding) {
+func FindingsText(b *strings.Builder, sys units.System, title string, fs []detailing.Finding) {
 	p := people{sys}
 	tw := tabwriter.NewWriter(b, 0, 0, 2, ' ', 0)
 	fmt.Fprintf(tw, "%s\tCLAUSE\tMEASURED\tLIMIT\t\tWHERE\n", title)
@@ -227,7 +228,7 @@ func FindingsText(b *strings.Builder, sys units.System, title string, fs []Findi
 
 // FindingsMarkdown writes detailing findings as a Markdown section, values
 // in the units of sys.
-func FindingsMarkdown(b *strings.Builder, sys units.System, title string, fs []Finding) {
+func FindingsMarkdown(b *strings.Builder, sys units.System, title string, fs []detailing.Finding) {
 	p := people{sys}
 	fmt.Fprintf(b, "\n## %s\n\n| id | clause | measured | limit | result | where |\n|---|---|---:|---:|---|---|\n", title)
 	for _, f := range fs {

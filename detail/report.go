@@ -7,6 +7,7 @@ import (
 	"math"
 	"slices"
 
+	"gaugeline/detail/detailing"
 	"gaugeline/detail/jobfile"
 	"gaugeline/engine"
 	"gaugeline/rules/units"
@@ -21,7 +22,7 @@ const Caution = "Results must be checked against the governing code and approved
 type Report struct {
 	Design    *Design
 	Results   []engine.Result
-	Findings  []Finding
+	Findings  []detailing.Finding
 	Governing int // index of the governing limit state in Results
 	Pass      bool
 	Cautions  []string
@@ -33,29 +34,13 @@ func Check(d *Design) (*Report, error) {
 	if err != nil {
 		return nil, err
 	}
-	r := &Report{Design: d, Results: rs, Findings: Detailing(&d.Conn, d.Info), Governing: engine.Governing(rs)}
-	if d.Info.AsBuilt {
-		allowFabrication(r.Findings, d.Info.DiameterTol)
-	}
-	r.Pass = Passes(r.Findings)
+	r := &Report{Design: d, Results: rs, Findings: detailing.Check(&d.Conn, d.Info), Governing: engine.Governing(rs)}
+	r.Pass = detailing.Passes(r.Findings)
 	for _, x := range rs {
 		r.Pass = r.Pass && x.Pass
 	}
 	r.Cautions = cautions(d)
 	return r, nil
-}
-
-// allowFabrication lets the hole.size findings of an as-built model allow
-// the fabrication tolerance fab over the nominal size.
-func allowFabrication(fs []Finding, fab units.Length) {
-	for i := range fs {
-		f := &fs[i]
-		if f.ID == "hole.size" && f.Dim == units.DimLength {
-			f.Limit += float64(fab)
-			f.Pass = f.Measured <= f.Limit+tol
-			f.Where += ", nominal + fabrication tolerance"
-		}
-	}
 }
 
 // CheckFile loads a job file, builds it and checks it: what `check`,

@@ -4,6 +4,7 @@ import (
 	"testing"
 
 	"gaugeline/detail"
+	"gaugeline/detail/detailing"
 	"gaugeline/detail/jobfile"
 	"gaugeline/engine"
 )
@@ -18,13 +19,13 @@ func mustBuild(t *testing.T, j *jobfile.Job) *detail.Design {
 }
 
 // findingOf is the finding id of the report.
-func findingOf(r *detail.Report, id string) (detail.Finding, bool) {
+func findingOf(r *detail.Report, id string) (detailing.Finding, bool) {
 	for _, f := range r.Findings {
 		if f.ID == id {
 			return f, true
 		}
 	}
-	return detail.Finding{}, false
+	return detailing.Finding{}, false
 }
 
 // resultOf is the limit state id of the report.

@@ -15,6 +15,7 @@ import (
 	"text/tabwriter"
 
 	"gaugeline/detail"
+	"gaugeline/detail/detailing"
 	"gaugeline/detail/jobfile"
 	"gaugeline/engine"
 	"gaugeline/rules"
@@ -553,7 +554,7 @@ func (p *problem) minEdgeTo(g *group, hs engine.HoleShape, alongX bool) units.Le
 	if err != nil {
 		return 0
 	}
-	c2, err := p.ed.EdgeIncrement(g.d, detail.IncrementType(hs, alongX))
+	c2, err := p.ed.EdgeIncrement(g.d, detailing.IncrementType(hs, alongX))
 	if err != nil {
 		return emin
 	}
@@ -686,7 +687,7 @@ func (p *problem) gageSpan(g *group, i int) (gs []units.Length, lo, hi int, onGr
 		}
 		return nil, 0, 0, false
 	}
-	gLo := max(g.tmpl.Info.K+g.dy/2, m.T+detail.WrenchClearance(g.d, p.ed.System), g.dy/2, m.Width-span-maxEdge)
+	gLo := max(g.tmpl.Info.K+g.dy/2, m.T+detailing.WrenchClearance(g.d, p.ed.System), g.dy/2, m.Width-span-maxEdge)
 	gHi := m.Width - span - side
 	return nil, p.gridUp(gLo), p.gridDown(gHi), true
 }
@@ -1447,7 +1448,7 @@ func gageDependent(id string) bool {
 
 // isGageFinding: a detailing finding that depends on where the gage
 // lines sit across the member.
-func isGageFinding(f detail.Finding) bool {
+func isGageFinding(f detailing.Finding) bool {
 	return f.ID == "gage.workable" || f.ID == "eccentricity" || (f.ID == "edge.min" || f.ID == "edge.max") &&
 		(strings.HasSuffix(f.Where, "member toe") || strings.Contains(f.Where, "member edge (y"))
 }
@@ -1541,7 +1542,7 @@ func (p *problem) diagnose(out *Proposal) {
 	var ids []string
 	bestOf := map[string]best{}
 	failsAll := map[string]bool{}
-	findingFailsAll := map[string]*detail.Finding{}
+	findingFailsAll := map[string]*detailing.Finding{}
 	for n, c := range corners {
 		for _, x := range c.rep.Results {
 			b, seen := bestOf[x.ID]
@@ -1554,7 +1555,7 @@ func (p *problem) diagnose(out *Proposal) {
 			}
 			failsAll[x.ID] = failsAll[x.ID] && !x.Pass
 		}
-		failing := map[string]*detail.Finding{}
+		failing := map[string]*detailing.Finding{}
 		for i := range c.rep.Findings {
 			f := &c.rep.Findings[i]
 			if !f.Pass && !f.Advisory && failing[f.ID] == nil {

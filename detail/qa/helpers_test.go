@@ -2,6 +2,7 @@ package qa
 
 import (
 	"gaugeline/detail"
+	"gaugeline/detail/detailing"
 	"gaugeline/engine"
 	"gaugeline/rules/units"
 	"os"
@@ -39,13 +40,13 @@ func mkfifo(t *testing.T, name string) string {
 }
 
 // findingOf is the finding id of the report.
-func findingOf(r *detail.Report, id string) (detail.Finding, bool) {
+func findingOf(r *detail.Report, id string) (detailing.Finding, bool) {
 	for _, f := range r.Findings {
 		if f.ID == id {
 			return f, true
 		}
 	}
-	return detail.Finding{}, false
+	return detailing.Finding{}, false
 }
 
 // lastX is the largest x of the holes.

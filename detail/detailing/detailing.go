@@ -1,4 +1,4 @@
-package detail
+package detailing
 
 import (
 	"cmp"
@@ -25,16 +25,18 @@ const commonPractice = "common practice"
 // Slenderness limit of the User Note to D1: L/r preferably ≤ 300.
 const maxSlenderness = 300
 
-// Detailing runs every detailing check of SPEC §5 on the connection and
+// Check runs every detailing check of SPEC §5 on the connection and
 // returns every finding, passing or not, in a fixed order: hole.size,
 // hole.type, spacing.min, edge.min, edge.max, spacing.max, gage.workable,
 // eccentricity, slenderness. Within a check, findings follow hole types, edges and gage
 // lines in a fixed order, so the same connection always gives the same
 // list. A bolt diameter the edition does not tabulate gives a failing
 // finding naming the table, not an error.
-func Detailing(c *engine.Connection, info MemberInfo) []Finding {
+// An as-built model (info.AsBuilt) allows info.DiameterTol over the
+// nominal hole size.
+func Check(c *engine.Connection, info MemberInfo) []Finding {
 	if c == nil || c.Edition == nil {
-		panic("detail: Detailing needs a connection with an edition")
+		panic("detailing: Check needs a connection with an edition")
 	}
 	var fs []Finding
 	fs = append(fs, holeSizeFindings(c)...)
@@ -46,7 +48,23 @@ func Detailing(c *engine.Connection, info MemberInfo) []Finding {
 	fs = append(fs, gageFindings(c, info)...)
 	fs = append(fs, eccentricityFindings(c, info)...)
 	fs = append(fs, slendernessFindings(c, info)...)
+	if info.AsBuilt {
+		allowFabrication(fs, info.DiameterTol)
+	}
 	return fs
+}
+
+// allowFabrication lets the hole.size findings of an as-built model allow
+// the fabrication tolerance fab over the nominal size.
+func allowFabrication(fs []Finding, fab units.Length) {
+	for i := range fs {
+		f := &fs[i]
+		if f.ID == "hole.size" && f.Dim == units.DimLength {
+			f.Limit += float64(fab)
+			f.Pass = f.Measured <= f.Limit+tol
+			f.Where += ", nominal + fabrication tolerance"
+		}
+	}
 }
 
 // Passes reports whether every finding that is not advisory passes.

@@ -1,4 +1,4 @@
-package detail
+package detailing
 
 import (
 	"math"
@@ -438,7 +438,7 @@ func TestDetailing(t *testing.T) {
 	}
 	for _, tc := range tests {
 		t.Run(tc.name, func(t *testing.T) {
-			fs := Detailing(tc.conn, tc.info)
+			fs := Check(tc.conn, tc.info)
 			sys := tc.conn.Edition.System
 			for _, w := range tc.want {
 				f, ok := find(fs, w.id, w.where)
@@ -501,7 +501,7 @@ func TestDetailingClauses(t *testing.T) {
 			l := layout{d: in(0.75), joint: rules.Bearing, hole: rules.Standard,
 				end: in(1.5), pitch: in(3), perLine: 4, gages: []units.Length{in(2.5)}}
 			c := withPlate(l4x4(t, ed, l), in(0.5), in(12), in(1.5))
-			fs := Detailing(c, MemberInfo{K: in(7.0 / 8), Length: in(144), Rmin: in(0.776)})
+			fs := Check(c, MemberInfo{K: in(7.0 / 8), Length: in(144), Rmin: in(0.776)})
 			seen := map[string]bool{}
 			for _, f := range fs {
 				want, ok := tc.want[f.ID]
@@ -531,12 +531,12 @@ func TestDetailingStable(t *testing.T) {
 		end: in(1.5), pitch: in(3), perLine: 3, gages: []units.Length{in(1.5), in(4)}}
 	c := withPlate(flat(t, ed, in(6), in(0.5), l), in(0.5), in(12), in(1.5))
 	info := MemberInfo{Length: in(120), Rmin: in(0.5)}
-	first := Detailing(c, info)
+	first := Check(c, info)
 	if len(first) == 0 {
 		t.Fatal("no findings")
 	}
 	for range 3 {
-		if again := Detailing(c, info); !reflect.DeepEqual(first, again) {
+		if again := Check(c, info); !reflect.DeepEqual(first, again) {
 			t.Fatalf("findings differ between runs:\n%v\n%v", first, again)
 		}
 	}
@@ -545,7 +545,7 @@ func TestDetailingStable(t *testing.T) {
 	for i, j := 0, len(rev.Holes)-1; i < j; i, j = i+1, j-1 {
 		rev.Holes[i], rev.Holes[j] = rev.Holes[j], rev.Holes[i]
 	}
-	got := Detailing(&rev, info)
+	got := Check(&rev, info)
 	if len(got) != len(first) {
 		t.Fatalf("%d findings with the holes reversed, want %d", len(got), len(first))
 	}
@@ -569,7 +569,7 @@ func TestDetailingCollectsEverything(t *testing.T) {
 	c.Holes = append(c.Holes, engine.Hole{ID: "H3", X: c.Holes[1].X + in(9.5), Y: in(2),
 		HoleShape: engine.HoleShape{Type: rules.Oversized, Dx: in(15.0 / 16), Dy: in(15.0 / 16)}})
 	c.Plate.FreeEdge = c.Holes[2].X + in(1.5)
-	fs := Detailing(c, MemberInfo{})
+	fs := Check(c, MemberInfo{})
 	failed := map[string]bool{}
 	for _, f := range fs {
 		if !f.Pass {
@@ -606,7 +606,7 @@ func TestDetailingPasses(t *testing.T) {
 	ed := edition(t, "aisc360-22", units.US)
 	c := l4x4(t, ed, layout{d: in(0.75), joint: rules.Bearing, hole: rules.Standard,
 		end: in(1.5), pitch: in(3), perLine: 4, gages: []units.Length{in(2.5)}})
-	fs := Detailing(c, MemberInfo{K: in(7.0 / 8), Length: in(360), Rmin: in(0.776)}) // L/r 464
+	fs := Check(c, MemberInfo{K: in(7.0 / 8), Length: in(360), Rmin: in(0.776)}) // L/r 464
 	if f, ok := find(fs, "slenderness", "member L/r"); !ok || f.Pass {
 		t.Fatalf("slenderness finding %+v (found %v), want a failing advisory", f, ok)
 	}
