@@ -13,9 +13,13 @@ import (
 )
 
 // This file draws the views of a cut sheet (sheet.Sheet, the model the
-// DXF is drawn from) as one inline SVG. The SVG's user unit is the sheet's
-// drawing unit (inches for us, millimetres for si), so the browser scales
-// the drawing to fit through the viewBox alone.
+// DXF is drawn from) as one inline SVG, through the sheet's one walk
+// (Sheet.PaintView) with svgPainter as its back end: what is drawn, in
+// which order (the SVG's document order, so the reference lines lie over
+// the holes) and how far it reaches is the walk's, as in the DXF. The
+// SVG's user unit is the sheet's drawing unit (inches for us, millimetres
+// for si), so the browser scales the drawing to fit through the viewBox
+// alone.
 //
 // The sheet is y up, SVG is y down: a view's point (x, y) in its part's
 // frame is drawn at (x + tx, ty − y), where translate(tx ty) is the
@@ -26,7 +30,8 @@ import (
 //
 // Every hole carries data-part, data-hole, data-x and data-y (its centre
 // in the part's frame, in the job's units, full precision), so that a
-// reader can match the drawing to the job without undoing the transform.
+// reader can match the drawing to the job without undoing the transform;
+// the walk tells the painter which hole it draws (sheet.HoleMarker).
 
 // capHeight is the height of capitals over the font size of a plain
 // sans-serif font: a sheet text of height h is drawn at font size
