@@ -428,6 +428,116 @@ func TestDrawingHolesMatchTheJob(t *testing.T) {
 	}
 }
 
+// pathStep is one command of a slot's path: M, L or A to (x, y), an arc
+// of radius r.
+type pathStep struct {
+	cmd  byte
+	r    float64
+	x, y float64
+}
+
+var pathCmd = regexp.MustCompile(`([MLA])((?:[-0-9.e]+,[-0-9.e]+ 0 [01] [01] )?)([-0-9.e]+),([-0-9.e]+)|Z`)
+
+func slotPath(t *testing.T, d string) []pathStep {
+	t.Helper()
+	var out []pathStep
+	for _, m := range pathCmd.FindAllStringSubmatch(d, -1) {
+		if m[0] == "Z" {
+			break
+		}
+		st := pathStep{cmd: m[1][0]}
+		if st.cmd == 'A' {
+			rs := strings.SplitN(m[2], ",", 2)[0]
+			st.r, _ = strconv.ParseFloat(rs, 64)
+		}
+		st.x, _ = strconv.ParseFloat(m[3], 64)
+		st.y, _ = strconv.ParseFloat(m[4], 64)
+		out = append(out, st)
+	}
+	return out
+}
+
+// A slot is drawn as its shape in the job: two straight sides and two half
+// circles of the slot's width (an arc's ends a width apart), its outline
+// reaching the slot's length along its long axis and its width across,
+// about the centre the hole's data gives; a mark follows it at that
+// centre. Geometry of a slot (straight sides, semicircular ends), no other
+// source; tolerance 1e-6 of a drawing unit as for the circles.
+func TestDrawingSlotsMatchTheJob(t *testing.T) {
+	const tol = 1e-6
+	seen := 0
+	for _, path := range jobs(t) {
+		r := check(t, path)
+		doc, _ := render(t, r)
+		c := &r.Design.Conn
+		sys := r.Design.Job.Units
+		job := func(l units.Length) float64 { return sys.ToJob(float64(l), units.DimLength) }
+		for _, n := range find(doc, func(n *html.Node) bool { c, _ := attr(n, "class"); return n.Data == "path" && c == "hole slot" }) {
+			seen++
+			part, _ := attr(n, "data-part")
+			id, _ := attr(n, "data-hole")
+			shape := c.Holes[0].HoleShape
+			if part == "plate" {
+				shape = c.Holes[0].InPlate()
+			}
+			if !shape.Type.IsSlot() {
+				t.Errorf("%s %s %s: drawn as a slot, a %s hole in the job", filepath.Base(path), part, id, shape.Type)
+				continue
+			}
+			dx, dy := job(shape.Dx), job(shape.Dy)
+			rad := min(dx, dy) / 2
+			cx, cy := num(t, n, "data-x"), num(t, n, "data-y")
+			d, _ := attr(n, "d")
+			steps := slotPath(t, d)
+			if len(steps) != 5 || steps[0].cmd != 'M' {
+				t.Fatalf("%s %s %s: path %q", filepath.Base(path), part, id, d)
+			}
+			arcs := 0
+			lo := [2]float64{math.Inf(1), math.Inf(1)}
+			hi := [2]float64{math.Inf(-1), math.Inf(-1)}
+			for k, st := range steps {
+				x, y := st.x, -st.y // back to the part's frame, y up
+				lo = [2]float64{min(lo[0], x), min(lo[1], y)}
+				hi = [2]float64{max(hi[0], x), max(hi[1], y)}
+				if st.cmd != 'A' {
+					continue
+				}
+				arcs++
+				prev := steps[k-1]
+				if math.Abs(st.r-rad) > tol || math.Abs(math.Hypot(st.x-prev.x, st.y-prev.y)-2*rad) > tol {
+					t.Errorf("%s %s %s: arc of radius %g over a chord of %g, want half circles of radius %g", filepath.Base(path), part, id,
+						st.r, math.Hypot(st.x-prev.x, st.y-prev.y), rad)
+				}
+			}
+			if arcs != 2 {
+				t.Errorf("%s %s %s: %d arcs, want 2", filepath.Base(path), part, id, arcs)
+			}
+			// The half circles reach r past the vertices along the long axis.
+			if dx > dy {
+				lo[0], hi[0] = lo[0]-rad, hi[0]+rad
+			} else {
+				lo[1], hi[1] = lo[1]-rad, hi[1]+rad
+			}
+			for k, w := range [][2]float64{{lo[0], cx - dx/2}, {hi[0], cx + dx/2}, {lo[1], cy - dy/2}, {hi[1], cy + dy/2}} {
+				if math.Abs(w[0]-w[1]) > tol {
+					t.Errorf("%s %s %s: outline edge %d at %g, want %g", filepath.Base(path), part, id, k, w[0], w[1])
+				}
+			}
+			mark := n.NextSibling
+			for mark != nil && mark.Type != html.ElementNode {
+				mark = mark.NextSibling
+			}
+			if c, _ := attr(mark, "class"); mark == nil || c != "slot-centre" ||
+				math.Abs(num(t, mark, "cx")-cx) > tol || math.Abs(-num(t, mark, "cy")-cy) > tol {
+				t.Errorf("%s %s %s: no centre mark at (%g, %g) after the slot", filepath.Base(path), part, id, cx, cy)
+			}
+		}
+	}
+	if seen == 0 {
+		t.Fatal("no job draws a slot")
+	}
+}
+
 // The page is a pure function of the job: checked twice, rendered twice,
 // the same bytes.
 func TestReportIsDeterministic(t *testing.T) {

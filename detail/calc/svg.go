@@ -5,6 +5,7 @@ import (
 	"gaugeline/detail/sheet"
 	"html/template"
 	"math"
+	"slices"
 	"strconv"
 	"strings"
 
@@ -12,9 +13,13 @@ import (
 )
 
 // This file draws the views of a cut sheet (sheet.Sheet, the model the
-// DXF is drawn from) as one inline SVG. The SVG's user unit is the sheet's
-// drawing unit (inches for us, millimetres for si), so the browser scales
-// the drawing to fit through the viewBox alone.
+// DXF is drawn from) as one inline SVG, through the sheet's one walk
+// (Sheet.PaintView) with svgPainter as its back end: what is drawn, in
+// which order (the SVG's document order, so the reference lines lie over
+// the holes) and how far it reaches is the walk's, as in the DXF. The
+// SVG's user unit is the sheet's drawing unit (inches for us, millimetres
+// for si), so the browser scales the drawing to fit through the viewBox
+// alone.
 //
 // The sheet is y up, SVG is y down: a view's point (x, y) in its part's
 // frame is drawn at (x + tx, ty − y), where translate(tx ty) is the
@@ -25,7 +30,8 @@ import (
 //
 // Every hole carries data-part, data-hole, data-x and data-y (its centre
 // in the part's frame, in the job's units, full precision), so that a
-// reader can match the drawing to the job without undoing the transform.
+// reader can match the drawing to the job without undoing the transform;
+// the walk tells the painter which hole it draws (sheet.HoleMarker).
 
 // capHeight is the height of capitals over the font size of a plain
 // sans-serif font: a sheet text of height h is drawn at font size
@@ -53,75 +59,120 @@ func svgNum(v float64) string {
 // exact writes a value at full precision (data attributes).
 func exact(v float64) string { return strconv.FormatFloat(v, 'g', -1, 64) }
 
-// svgPen writes the elements of one view and keeps their extents in the
-// view's (y-up) frame.
-type svgPen struct {
-	b      strings.Builder
-	lo, hi r2.Vec
-	empty  bool
+// svgPainter is the sheet.Painter of one view of the report's SVG: it
+// writes each item it is handed as an element whose class is its layer
+// (a closed outline of the dimensions layer is an "arrow", a text that is
+// the stamp is also a "stamp"), in the order it is handed. It is also a
+// sheet.HoleMarker: a hole carries its data and a title, and a slot gets
+// a small mark at its centre, for a reader checking positions.
+type svgPainter struct {
+	b    strings.Builder
+	hole *svgHole // the hole the next Circle or ClosedPolyline draws, if any
 }
 
-func (p *svgPen) grow(q r2.Vec) {
-	if p.empty {
-		p.lo, p.hi, p.empty = q, q, false
-		return
-	}
-	p.lo = r2.Vec{X: min(p.lo.X, q.X), Y: min(p.lo.Y, q.Y)}
-	p.hi = r2.Vec{X: max(p.hi.X, q.X), Y: max(p.hi.Y, q.Y)}
+// svgHole is a hole as BeginHole announced it.
+type svgHole struct {
+	part string
+	h    sheet.SheetHole
+	at   r2.Vec // its centre on the drawing
 }
 
 // pt writes a point flipped to SVG's y-down sense.
 func pt(q r2.Vec) string { return svgNum(q.X) + "," + svgNum(-q.Y) }
 
-func (p *svgPen) line(a, b r2.Vec, class string) {
-	fmt.Fprintf(&p.b, `<line class="%s" x1="%s" y1="%s" x2="%s" y2="%s"/>`+"\n",
-		class, svgNum(a.X), svgNum(-a.Y), svgNum(b.X), svgNum(-b.Y))
-	p.grow(a)
-	p.grow(b)
+// Layers declares nothing: the SVG's layers are its classes.
+func (p *svgPainter) Layers([]sheet.Layer) {}
+
+func (p *svgPainter) BeginHole(part string, h sheet.SheetHole, at r2.Vec) {
+	p.hole = &svgHole{part: part, h: h, at: at}
 }
 
-func (p *svgPen) polygon(pts []r2.Vec, class string) {
-	s := make([]string, len(pts))
-	for i, q := range pts {
-		s[i] = pt(q)
-		p.grow(q)
+// takeHole returns the hole an item on layer l draws, nil for none.
+func (p *svgPainter) takeHole(l sheet.Layer) *svgHole {
+	h := p.hole
+	if l != sheet.LayerHoles {
+		return nil
 	}
-	fmt.Fprintf(&p.b, `<polygon class="%s" points="%s"/>`+"\n", class, strings.Join(s, " "))
+	p.hole = nil
+	return h
 }
 
-func (p *svgPen) hole(part string, h sheet.SheetHole) {
-	data := fmt.Sprintf(`data-part="%s" data-hole="%s" data-x="%s" data-y="%s" data-dx="%s" data-dy="%s"`,
-		template.HTMLEscapeString(part), template.HTMLEscapeString(h.ID),
-		exact(h.Centre.X), exact(h.Centre.Y), exact(h.Dx), exact(h.Dy))
-	half := r2.Vec{X: h.Dx / 2, Y: h.Dy / 2}
-	p.grow(r2.Vec{X: h.Centre.X - half.X, Y: h.Centre.Y - half.Y})
-	p.grow(r2.Add(h.Centre, half))
-	if h.Round() {
+// data writes a hole's attributes: its part, id, centre and extents in the
+// part's frame, in the job's units, at full precision.
+func (h *svgHole) data() string {
+	return fmt.Sprintf(`data-part="%s" data-hole="%s" data-x="%s" data-y="%s" data-dx="%s" data-dy="%s"`,
+		template.HTMLEscapeString(h.part), template.HTMLEscapeString(h.h.ID),
+		exact(h.h.Centre.X), exact(h.h.Centre.Y), exact(h.h.Dx), exact(h.h.Dy))
+}
+
+func (p *svgPainter) Line(a, b r2.Vec, l sheet.Layer) {
+	fmt.Fprintf(&p.b, `<line class="%s" x1="%s" y1="%s" x2="%s" y2="%s"/>`+"\n",
+		l, svgNum(a.X), svgNum(-a.Y), svgNum(b.X), svgNum(-b.Y))
+}
+
+func (p *svgPainter) Circle(c r2.Vec, r float64, l sheet.Layer) {
+	if h := p.takeHole(l); h != nil {
 		fmt.Fprintf(&p.b, `<circle class="hole" cx="%s" cy="%s" r="%s" %s><title>%s</title></circle>`+"\n",
-			svgNum(h.Centre.X), svgNum(-h.Centre.Y), svgNum(h.Diameter()/2), data, template.HTMLEscapeString(h.ID))
+			svgNum(c.X), svgNum(-c.Y), svgNum(r), h.data(), template.HTMLEscapeString(h.h.ID))
 		return
 	}
-	// Straight sides and half-circle ends, counter-clockwise in the y-up
-	// frame; the flip keeps the picture's sense, so each end is an arc
-	// with sweep flag 0.
-	pts, bulges := h.SlotOutline()
-	r := svgNum(h.Diameter() / 2)
+	fmt.Fprintf(&p.b, `<circle class="%s" cx="%s" cy="%s" r="%s"/>`+"\n", l, svgNum(c.X), svgNum(-c.Y), svgNum(r))
+}
+
+// ClosedPolyline writes an outline of straight sides as a polygon, one
+// with arcs as a path; a hole's path carries its data and is followed by
+// the mark at its centre.
+func (p *svgPainter) ClosedPolyline(pts []r2.Vec, bulges []float64, l sheet.Layer) {
+	h := p.takeHole(l)
+	if h == nil && !slices.ContainsFunc(bulges, func(b float64) bool { return b != 0 }) {
+		class := l.String()
+		if l == sheet.LayerDimensions {
+			class = "arrow"
+		}
+		s := make([]string, len(pts))
+		for i, q := range pts {
+			s[i] = pt(q)
+		}
+		fmt.Fprintf(&p.b, `<polygon class="%s" points="%s"/>`+"\n", class, strings.Join(s, " "))
+		return
+	}
+	d := outlinePath(pts, bulges)
+	if h == nil {
+		fmt.Fprintf(&p.b, `<path class="%s" d="%s"/>`+"\n", l, d)
+		return
+	}
+	fmt.Fprintf(&p.b, `<path class="hole slot" d="%s" %s><title>%s</title></path>`+"\n",
+		d, h.data(), template.HTMLEscapeString(h.h.ID))
+	fmt.Fprintf(&p.b, `<circle class="slot-centre" cx="%s" cy="%s" r="%s"/>`+"\n",
+		svgNum(h.at.X), svgNum(-h.at.Y), svgNum(h.h.Diameter()/10))
+}
+
+// outlinePath writes a closed outline as path data: a side of bulge b is
+// an arc of included angle 4·atan(b) (the Painter's convention), radius
+// chord / (2 sin(angle/2)). The flip to y down keeps the picture's sense,
+// so a counter-clockwise arc (b > 0) has sweep flag 0.
+func outlinePath(pts []r2.Vec, bulges []float64) string {
 	var d strings.Builder
 	d.WriteString("M" + pt(pts[0]))
-	for i := range pts {
+	for i, q := range pts {
 		next := pts[(i+1)%len(pts)]
-		if bulges[i] != 0 {
-			d.WriteString(" A" + r + "," + r + " 0 0 0 " + pt(next))
-		} else {
+		if bulges == nil || bulges[i] == 0 {
 			d.WriteString(" L" + pt(next))
+			continue
 		}
+		theta := 4 * math.Atan(bulges[i])
+		r := svgNum(math.Hypot(next.X-q.X, next.Y-q.Y) / 2 / math.Abs(math.Sin(theta/2)))
+		large, sweep := "0", "0"
+		if math.Abs(theta) > math.Pi {
+			large = "1"
+		}
+		if theta < 0 {
+			sweep = "1"
+		}
+		d.WriteString(" A" + r + "," + r + " 0 " + large + " " + sweep + " " + pt(next))
 	}
 	d.WriteString(" Z")
-	fmt.Fprintf(&p.b, `<path class="hole slot" d="%s" %s><title>%s</title></path>`+"\n",
-		d.String(), data, template.HTMLEscapeString(h.ID))
-	// The centre, for a reader checking positions.
-	fmt.Fprintf(&p.b, `<circle class="slot-centre" cx="%s" cy="%s" r="%s"/>`+"\n",
-		svgNum(h.Centre.X), svgNum(-h.Centre.Y), svgNum(h.Diameter()/10))
+	return d.String()
 }
 
 // anchors maps a sheet alignment onto SVG's text-anchor and
@@ -144,7 +195,11 @@ func anchors(a sheet.Align) (anchor, baseline string) {
 	return "start", "alphabetic"
 }
 
-func (p *svgPen) text(t sheet.Text, class string) {
+func (p *svgPainter) Text(t sheet.Text) {
+	class := t.Layer.String()
+	if t.Value == sheet.Stamp {
+		class += " stamp"
+	}
 	anchor, base := anchors(t.Align)
 	rot := ""
 	if t.Rotation != 0 {
@@ -155,57 +210,6 @@ func (p *svgPen) text(t sheet.Text, class string) {
 	fmt.Fprintf(&p.b, `<text class="%s" x="%s" y="%s" font-size="%s" text-anchor="%s" dominant-baseline="%s"%s>%s</text>`+"\n",
 		class, svgNum(t.At.X), svgNum(-t.At.Y), svgNum(t.Height/capHeight), anchor, base, rot,
 		template.HTMLEscapeString(t.Value))
-	lo, hi := t.Box()
-	p.grow(lo)
-	p.grow(hi)
-}
-
-// dimension draws a dimension as the sheet model lays it out (the same
-// layout the DXF draws).
-func (p *svgPen) dimension(d sheet.Dimension, h float64) {
-	cls := sheet.LayerDimensions.String()
-	g := d.Graphics(h)
-	for _, l := range g.Lines {
-		p.line(l.A, l.B, cls)
-	}
-	for _, tri := range g.Arrows {
-		p.polygon(tri[:], "arrow")
-	}
-	for _, l := range g.Leaders {
-		p.line(l.A, l.B, cls)
-	}
-	for _, t := range g.Texts {
-		p.text(t, cls)
-	}
-}
-
-// viewSVG draws one view in its part's frame.
-func viewSVG(v *sheet.View, h float64) *svgPen {
-	p := &svgPen{empty: true}
-	part := v.Part.Name
-	pts := make([]string, len(v.Part.Contour))
-	for i, q := range v.Part.Contour {
-		pts[i] = pt(q)
-		p.grow(q)
-	}
-	fmt.Fprintf(&p.b, `<polygon class="contour" points="%s"/>`+"\n", strings.Join(pts, " "))
-	for _, l := range v.Lines {
-		p.line(l.A, l.B, l.Layer.String())
-	}
-	for _, hole := range v.Part.Holes {
-		p.hole(part, hole)
-	}
-	for _, d := range v.Dims {
-		p.dimension(d, h)
-	}
-	for _, t := range v.Texts {
-		class := t.Layer.String()
-		if t.Value == sheet.Stamp {
-			class += " stamp"
-		}
-		p.text(t, class)
-	}
-	return p
 }
 
 // drawing returns the views of the sheet as one SVG element, stacked top
@@ -220,12 +224,13 @@ func drawing(s *sheet.Sheet) (svg template.HTML, wide bool) {
 	width, cursor := 0.0, margin
 	for i := range s.Views {
 		v := &s.Views[i]
-		p := viewSVG(v, h)
-		tx, ty := margin-p.lo.X, cursor+p.hi.Y
+		var p svgPainter
+		lo, hi := s.PaintView(&p, i, r2.Vec{})
+		tx, ty := margin-lo.X, cursor+hi.Y
 		fmt.Fprintf(&body, `<g class="view" data-part="%s" transform="translate(%s %s)">`+"\n%s</g>\n",
 			template.HTMLEscapeString(v.Part.Name), svgNum(tx), svgNum(ty), p.b.String())
-		width = max(width, p.hi.X-p.lo.X+2*margin)
-		cursor = ty - p.lo.Y + gap
+		width = max(width, hi.X-lo.X+2*margin)
+		cursor = ty - lo.Y + gap
 	}
 	height := cursor - gap + margin
 	unit := "in"

@@ -31,26 +31,25 @@ type Painter interface {
 // has entities on these only.
 func PartLayers() []Layer { return []Layer{LayerContour, LayerHoles} }
 
-// Paint draws the cut sheet on p: every view at its origin (the part's
-// contour and holes, then its reference lines, dimensions and texts), then
-// the sheet's own lines and texts (title block, hole schedule). It returns
-// the corners of what it drew, text by Text.Box, a slot by its extents.
+// HoleMarker is what a Painter implements to learn which hole it draws
+// (the report's SVG tags each hole with its part, id and position). The
+// walk calls BeginHole before the Circle or ClosedPolyline of each hole:
+// the part's name, the hole in the part's frame and its centre on the
+// drawing. A painter without it is handed the same items.
+type HoleMarker interface {
+	BeginHole(part string, h SheetHole, at r2.Vec)
+}
+
+// Paint draws the cut sheet on p: every view at its origin (as PaintView
+// draws it), then the sheet's own lines and texts (title block, hole
+// schedule). It returns the corners of what it drew, text by Text.Box, a
+// slot by its extents.
 func (s *Sheet) Paint(to Painter) (lo, hi r2.Vec) {
-	w := walk{p: to, empty: true}
+	w := newWalk(to)
 	to.Layers(Layers())
 	for i := range s.Views {
 		v := &s.Views[i]
-		w.at = v.Origin
-		w.part(&v.Part)
-		for _, l := range v.Lines {
-			w.line(l)
-		}
-		for _, d := range v.Dims {
-			w.dimension(d, s.TextHeight)
-		}
-		for _, t := range v.Texts {
-			w.text(t)
-		}
+		w.view(v, v.Origin, s.TextHeight)
 	}
 	w.at = r2.Vec{}
 	for _, l := range s.Lines {
@@ -62,11 +61,23 @@ func (s *Sheet) Paint(to Painter) (lo, hi r2.Vec) {
 	return w.lo, w.hi
 }
 
+// PaintView draws view i alone, with its part's frame at `at` rather than
+// at the view's Origin: the part's contour and holes, then the view's
+// reference lines, dimensions and texts, as Paint draws each view. It
+// returns the corners of what it drew. The report stacks the views this
+// way, each in its own frame.
+func (s *Sheet) PaintView(to Painter, i int, at r2.Vec) (lo, hi r2.Vec) {
+	w := newWalk(to)
+	to.Layers(Layers())
+	w.view(&s.Views[i], at, s.TextHeight)
+	return w.lo, w.hi
+}
+
 // Paint draws the part alone in its own frame, as its CAM file holds it:
 // the closed contour and the holes, nothing else. It returns the corners
 // of what it drew.
 func (p *Part) Paint(to Painter) (lo, hi r2.Vec) {
-	w := walk{p: to, empty: true}
+	w := newWalk(to)
 	to.Layers(PartLayers())
 	w.part(p)
 	return w.lo, w.hi
@@ -76,10 +87,31 @@ func (p *Part) Paint(to Painter) (lo, hi r2.Vec) {
 // view, and keeps the extents of what it handed over.
 type walk struct {
 	p      Painter
-	at     r2.Vec // origin of the current view on the drawing
+	marker HoleMarker // p, when it wants to know its holes; else nil
+	at     r2.Vec     // origin of the current view on the drawing
 	lo, hi r2.Vec
 	empty  bool
 	pts    []r2.Vec // reused for the vertices handed to ClosedPolyline
+}
+
+func newWalk(p Painter) *walk {
+	m, _ := p.(HoleMarker)
+	return &walk{p: p, marker: m, empty: true}
+}
+
+// view draws v with its part's frame at `at`, dimensions for text height h.
+func (w *walk) view(v *View, at r2.Vec, h float64) {
+	w.at = at
+	w.part(&v.Part)
+	for _, l := range v.Lines {
+		w.line(l)
+	}
+	for _, d := range v.Dims {
+		w.dimension(d, h)
+	}
+	for _, t := range v.Texts {
+		w.text(t)
+	}
 }
 
 func (w *walk) grow(q r2.Vec) {
@@ -114,6 +146,9 @@ func (w *walk) part(p *Part) {
 	lo, hi := corners(p.Contour)
 	w.polyline(p.Contour, nil, LayerContour, lo, hi)
 	for _, h := range p.Holes {
+		if w.marker != nil {
+			w.marker.BeginHole(p.Name, h, r2.Add(h.Centre, w.at))
+		}
 		w.hole(h)
 	}
 }

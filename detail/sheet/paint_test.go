@@ -221,3 +221,139 @@ func TestPaintExtentsReachHoles(t *testing.T) {
 		t.Errorf("extents %v–%v, box of what was drawn %v–%v", lo, hi, wlo, whi)
 	}
 }
+
+// marker is a recorder that is also a HoleMarker: it keeps each
+// BeginHole with the number of items drawn before it.
+type marker struct {
+	recorder
+	begun []begun
+}
+
+type begun struct {
+	part   string
+	h      SheetHole
+	at     r2.Vec
+	before int // items drawn before the call
+}
+
+func (m *marker) BeginHole(part string, h SheetHole, at r2.Vec) {
+	m.begun = append(m.begun, begun{part: part, h: h, at: at, before: len(m.items)})
+}
+
+// Paint draws each view as PaintView draws it at the view's origin, one
+// after the other, and then the sheet's own lines and texts; PaintView at
+// another point draws the same items moved by the difference, and returns
+// the box around them.
+func TestPaintDrawsEachViewAsPaintView(t *testing.T) {
+	for _, path := range sheetJobs {
+		_, s := sheetOf(t, path)
+		var whole recorder
+		s.Paint(&whole)
+		var views []item
+		for i, v := range s.Views {
+			var r recorder
+			s.PaintView(&r, i, v.Origin)
+			if len(r.layers) != 1 || !slices.Equal(r.layers[0], Layers()) {
+				t.Fatalf("%s view %d: layers %v, want %v once", path, i, r.layers, Layers())
+			}
+			views = append(views, r.items...)
+
+			var at recorder
+			lo, hi := s.PaintView(&at, i, r2.Vec{})
+			if len(at.items) != len(r.items) {
+				t.Fatalf("%s view %d: %d items at the origin, %d at the view's origin", path, i, len(at.items), len(r.items))
+			}
+			for k, it := range at.items {
+				want := r.items[k]
+				moved := it.kind == want.kind && it.layer == want.layer && len(it.pts) == len(want.pts) && near(it.r, want.r) &&
+					slices.Equal(it.bulges, want.bulges)
+				for j := range it.pts {
+					moved = moved && nearPoint(r2.Add(it.pts[j], v.Origin), want.pts[j])
+				}
+				if it.kind == "text" {
+					tt := it.text
+					tt.At = r2.Add(tt.At, v.Origin)
+					moved = moved && nearPoint(tt.At, want.text.At) && tt.Value == want.text.Value
+				}
+				if !moved {
+					t.Errorf("%s view %d item %d: %+v at the origin, %+v at %v", path, i, k, it, want, v.Origin)
+				}
+			}
+			if wlo, whi := at.box(); !nearPoint(lo, wlo) || !nearPoint(hi, whi) {
+				t.Errorf("%s view %d: extents %v–%v, box of what was drawn %v–%v", path, i, lo, hi, wlo, whi)
+			}
+		}
+		if len(whole.items) != len(views)+len(s.Lines)+len(s.Texts) {
+			t.Fatalf("%s: Paint drew %d items; the views %d, the sheet's lines and texts %d", path,
+				len(whole.items), len(views), len(s.Lines)+len(s.Texts))
+		}
+		for k, it := range views {
+			w := whole.items[k]
+			if it.kind != w.kind || it.layer != w.layer || !slices.Equal(it.pts, w.pts) || it.text != w.text {
+				t.Errorf("%s item %d: Paint drew %+v, PaintView %+v", path, k, w, it)
+			}
+		}
+	}
+}
+
+// A painter that is a HoleMarker is told of every hole, in the part's
+// frame, just before the one item that draws it, with its centre on the
+// drawing; Paint, PaintView and Part.Paint all tell it.
+func TestHoleMarker(t *testing.T) {
+	for _, path := range sheetJobs {
+		_, s := sheetOf(t, path)
+		type drawing struct {
+			name  string
+			paint func(*marker)
+			views []View // the views drawn, with the origin each is drawn at
+		}
+		var ds []drawing
+		ds = append(ds, drawing{"sheet", func(m *marker) { s.Paint(m) }, s.Views})
+		for i, v := range s.Views {
+			at := r2.Vec{X: 1.5, Y: -2}
+			moved := v
+			moved.Origin = at
+			ds = append(ds, drawing{"view " + v.Part.Name, func(m *marker) { s.PaintView(m, i, at) }, []View{moved}})
+			alone := v
+			alone.Origin = r2.Vec{}
+			ds = append(ds, drawing{"part " + v.Part.Name, func(m *marker) { v.Part.Paint(m) }, []View{alone}})
+		}
+		for _, d := range ds {
+			var m marker
+			d.paint(&m)
+			var want []begun
+			for _, v := range d.views {
+				for _, h := range v.Part.Holes {
+					want = append(want, begun{part: v.Part.Name, h: h, at: r2.Add(h.Centre, v.Origin)})
+				}
+			}
+			if len(m.begun) != len(want) {
+				t.Fatalf("%s %s: %d holes begun, want %d", path, d.name, len(m.begun), len(want))
+			}
+			for k, b := range m.begun {
+				w := want[k]
+				if b.part != w.part || b.h != w.h || !nearPoint(b.at, w.at) {
+					t.Errorf("%s %s: hole %d begun as %s %+v at %v, want %s %+v at %v", path, d.name, k, b.part, b.h, b.at, w.part, w.h, w.at)
+				}
+				if b.before >= len(m.items) {
+					t.Fatalf("%s %s: hole %s begun after the last item", path, d.name, b.h.ID)
+				}
+				it := m.items[b.before]
+				if it.layer != LayerHoles || b.h.Round() && (it.kind != "circle" || !nearPoint(it.pts[0], b.at)) ||
+					!b.h.Round() && it.kind != "polyline" {
+					t.Errorf("%s %s: hole %s drawn as %+v", path, d.name, b.h.ID, it)
+				}
+			}
+			// Every item on the holes layer is one that a BeginHole announced.
+			announced := map[int]bool{}
+			for _, b := range m.begun {
+				announced[b.before] = true
+			}
+			for k, it := range m.items {
+				if it.layer == LayerHoles && !announced[k] {
+					t.Errorf("%s %s: item %d on the holes layer without BeginHole", path, d.name, k)
+				}
+			}
+		}
+	}
+}
