@@ -445,7 +445,9 @@ func (l sheetLayout) limit(v float64) string {
 	return units.FormatLength(units.Length(l.sys.FromJob(v, units.DimLength)), l.sys, units.Shop.WithExact())
 }
 
-func (l sheetLayout) rect(w, h float64) []r2.Vec { return []r2.Vec{{X: 0, Y: 0}, {X: w, Y: 0}, {X: w, Y: h}, {X: 0, Y: h}} }
+func (l sheetLayout) rect(w, h float64) []r2.Vec {
+	return []r2.Vec{{X: 0, Y: 0}, {X: w, Y: 0}, {X: w, Y: h}, {X: 0, Y: h}}
+}
 
 // patternX returns the least and greatest hole x of the connection.
 func patternX(hs []engine.Hole) (lo, hi units.Length) {
