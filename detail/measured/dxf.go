@@ -428,6 +428,10 @@ func missing(file string, e *entity, code int) error {
 
 func (d *drawing) skip(kind string) { d.skipped[kind]++ }
 
+// addEntity adds a CIRCLE, ARC, LINE or LWPOLYLINE of model space to the
+// drawing. Other kinds and entities in paper space are counted as skipped;
+// entities drawn out of the XY plane are counted apart, except a LINE,
+// whose points are world coordinates whatever its extrusion.
 func (d *drawing) addEntity(file string, e *entity) error {
 	switch e.kind {
 	case "CIRCLE", "ARC", "LINE", "LWPOLYLINE":
@@ -444,115 +448,152 @@ func (d *drawing) addEntity(file string, e *entity) error {
 		d.oddExtruded++
 		return nil
 	}
-	mir := func(p r2.Vec) r2.Vec {
-		if c.mirror && e.kind != "LINE" {
-			p.X = -p.X
-		}
-		return p
-	}
 	switch e.kind {
 	case "CIRCLE", "ARC":
-		f, err := fields(file, e, 10, 20, 40, 50, 51)
-		if err != nil {
-			return err
-		}
-		for _, k := range []int{10, 20, 40} {
-			if _, ok := f[k]; !ok {
-				return missing(file, e, k)
-			}
-		}
-		if !(f[40] > 0) {
-			return &Error{File: file, Line: e.line, Field: e.kind + " group 40", Msg: "radius is not positive"}
-		}
-		ctr := r2.Vec{X: f[10], Y: f[20]}
-		if e.kind == "CIRCLE" {
-			d.circles = append(d.circles, circle{mir(ctr), f[40], c.layer, e.line})
-			return nil
-		}
-		a0, a1 := f[50]*math.Pi/180, f[51]*math.Pi/180
-		sweep := math.Mod(a1-a0, 2*math.Pi)
-		if sweep <= 0 {
-			sweep += 2 * math.Pi
-		}
-		s := seg{
-			a:     mir(r2.Vec{X: ctr.X + f[40]*math.Cos(a0), Y: ctr.Y + f[40]*math.Sin(a0)}),
-			b:     mir(r2.Vec{X: ctr.X + f[40]*math.Cos(a0+sweep), Y: ctr.Y + f[40]*math.Sin(a0+sweep)}),
-			bulge: math.Tan(sweep / 4), line: e.line,
-		}
-		if c.mirror {
-			s.bulge = -s.bulge
-		}
-		if sweep >= 2*math.Pi-1e-12 {
-			// a full-circle arc is a circle
-			d.circles = append(d.circles, circle{mir(ctr), f[40], c.layer, e.line})
-			return nil
-		}
-		d.segs = append(d.segs, s)
-		d.segLayers = append(d.segLayers, c.layer)
+		return d.addCircleOrArc(file, e, c)
 	case "LINE":
-		f, err := fields(file, e, 10, 20, 11, 21)
-		if err != nil {
-			return err
-		}
-		for _, k := range []int{10, 20, 11, 21} {
-			if _, ok := f[k]; !ok {
-				return missing(file, e, k)
-			}
-		}
-		d.segs = append(d.segs, seg{a: r2.Vec{X: f[10], Y: f[20]}, b: r2.Vec{X: f[11], Y: f[21]}, line: e.line})
-		d.segLayers = append(d.segLayers, c.layer)
-	case "LWPOLYLINE":
-		type vtx struct {
-			p     r2.Vec
-			bulge float64
-			hasY  bool
-		}
-		var vs []vtx
-		flags := 0
-		for _, p := range e.pairs {
-			switch p.code {
-			case 70:
-				v, err := strconv.Atoi(p.val)
-				if err != nil {
-					return &Error{File: file, Line: p.line, Field: "LWPOLYLINE group 70", Msg: fmt.Sprintf("%q is not an integer", clip(p.val))}
-				}
-				flags = v
-			case 10, 20, 42:
-				v, err := num(file, p)
-				if err != nil {
-					return err
-				}
-				switch p.code {
-				case 10:
-					vs = append(vs, vtx{p: r2.Vec{X: v}})
-				case 20:
-					if len(vs) == 0 || vs[len(vs)-1].hasY {
-						return &Error{File: file, Line: p.line, Field: "LWPOLYLINE group 20", Msg: "y without its x (group 10)"}
-					}
-					vs[len(vs)-1].p.Y, vs[len(vs)-1].hasY = v, true
-				case 42:
-					// the bulge belongs to the vertex it follows: the
-					// segment from that vertex to the next
-					if len(vs) > 0 {
-						vs[len(vs)-1].bulge = v
-					}
-				}
-			}
-		}
-		pts := make([]r2.Vec, len(vs))
-		bul := make([]float64, len(vs))
-		for i, v := range vs {
-			if !v.hasY {
-				return &Error{File: file, Line: e.line, Field: "LWPOLYLINE group 20", Msg: fmt.Sprintf("vertex %d has no y", i+1)}
-			}
-			pts[i], bul[i] = mir(v.p), v.bulge
-			if c.mirror {
-				bul[i] = -bul[i]
-			}
-		}
-		d.addVertices(pts, bul, flags&1 == 1, c.layer, e.line)
+		return d.addLine(file, e, c)
+	default:
+		return d.addLWPolyline(file, e, c)
 	}
+}
+
+// toWorld maps a point of an entity's object coordinates to world
+// coordinates: with the extrusion (0, 0, −1) x changes sign.
+func (c common) toWorld(p r2.Vec) r2.Vec {
+	if c.mirror {
+		p.X = -p.X
+	}
+	return p
+}
+
+// addCircleOrArc adds a CIRCLE, or an ARC: a segment, or a circle when it
+// sweeps the full turn. Centre (10, 20) and radius (40, positive) must be
+// given; an ARC runs counter-clockwise from angle 50 to angle 51 (degrees).
+func (d *drawing) addCircleOrArc(file string, e *entity, c common) error {
+	f, err := fields(file, e, 10, 20, 40, 50, 51)
+	if err != nil {
+		return err
+	}
+	for _, k := range []int{10, 20, 40} {
+		if _, ok := f[k]; !ok {
+			return missing(file, e, k)
+		}
+	}
+	if !(f[40] > 0) {
+		return &Error{File: file, Line: e.line, Field: e.kind + " group 40", Msg: "radius is not positive"}
+	}
+	ctr, r := r2.Vec{X: f[10], Y: f[20]}, f[40]
+	if e.kind == "CIRCLE" {
+		d.circles = append(d.circles, circle{c.toWorld(ctr), r, c.layer, e.line})
+		return nil
+	}
+	a0, a1 := f[50]*math.Pi/180, f[51]*math.Pi/180
+	sweep := math.Mod(a1-a0, 2*math.Pi)
+	if sweep <= 0 {
+		sweep += 2 * math.Pi
+	}
+	if sweep >= 2*math.Pi-1e-12 {
+		// a full-circle arc is a circle
+		d.circles = append(d.circles, circle{c.toWorld(ctr), r, c.layer, e.line})
+		return nil
+	}
+	s := seg{
+		a:     c.toWorld(r2.Vec{X: ctr.X + r*math.Cos(a0), Y: ctr.Y + r*math.Sin(a0)}),
+		b:     c.toWorld(r2.Vec{X: ctr.X + r*math.Cos(a0+sweep), Y: ctr.Y + r*math.Sin(a0+sweep)}),
+		bulge: math.Tan(sweep / 4), line: e.line,
+	}
+	if c.mirror {
+		s.bulge = -s.bulge
+	}
+	d.segs = append(d.segs, s)
+	d.segLayers = append(d.segLayers, c.layer)
 	return nil
+}
+
+// addLine adds a LINE from (10, 20) to (11, 21), world coordinates, as a
+// segment.
+func (d *drawing) addLine(file string, e *entity, c common) error {
+	f, err := fields(file, e, 10, 20, 11, 21)
+	if err != nil {
+		return err
+	}
+	for _, k := range []int{10, 20, 11, 21} {
+		if _, ok := f[k]; !ok {
+			return missing(file, e, k)
+		}
+	}
+	d.segs = append(d.segs, seg{a: r2.Vec{X: f[10], Y: f[20]}, b: r2.Vec{X: f[11], Y: f[21]}, line: e.line})
+	d.segLayers = append(d.segLayers, c.layer)
+	return nil
+}
+
+// lwVertex is a vertex of an LWPOLYLINE as read: its point, the bulge of
+// the segment it starts, and whether its y was given.
+type lwVertex struct {
+	p     r2.Vec
+	bulge float64
+	hasY  bool
+}
+
+// addLWPolyline adds an LWPOLYLINE as a loop (closed: flag 1 of group 70,
+// or its last vertex on its first) or as segments. Every vertex must have
+// its y.
+func (d *drawing) addLWPolyline(file string, e *entity, c common) error {
+	vs, flags, err := lwVertices(file, e)
+	if err != nil {
+		return err
+	}
+	pts := make([]r2.Vec, len(vs))
+	bul := make([]float64, len(vs))
+	for i, v := range vs {
+		if !v.hasY {
+			return &Error{File: file, Line: e.line, Field: "LWPOLYLINE group 20", Msg: fmt.Sprintf("vertex %d has no y", i+1)}
+		}
+		pts[i], bul[i] = c.toWorld(v.p), v.bulge
+		if c.mirror {
+			bul[i] = -bul[i]
+		}
+	}
+	d.addVertices(pts, bul, flags&1 == 1, c.layer, e.line)
+	return nil
+}
+
+// lwVertices reads the flags (group 70) and the vertices of an
+// LWPOLYLINE: a group 10 starts a vertex, the 20 after it is its y, and a
+// 42 is the bulge of the vertex it follows.
+func lwVertices(file string, e *entity) (vs []lwVertex, flags int, err error) {
+	for _, p := range e.pairs {
+		switch p.code {
+		case 70:
+			v, err := strconv.Atoi(p.val)
+			if err != nil {
+				return nil, 0, &Error{File: file, Line: p.line, Field: "LWPOLYLINE group 70", Msg: fmt.Sprintf("%q is not an integer", clip(p.val))}
+			}
+			flags = v
+		case 10, 20, 42:
+			v, err := num(file, p)
+			if err != nil {
+				return nil, 0, err
+			}
+			switch p.code {
+			case 10:
+				vs = append(vs, lwVertex{p: r2.Vec{X: v}})
+			case 20:
+				if len(vs) == 0 || vs[len(vs)-1].hasY {
+					return nil, 0, &Error{File: file, Line: p.line, Field: "LWPOLYLINE group 20", Msg: "y without its x (group 10)"}
+				}
+				vs[len(vs)-1].p.Y, vs[len(vs)-1].hasY = v, true
+			case 42:
+				// the bulge belongs to the vertex it follows: the
+				// segment from that vertex to the next
+				if len(vs) > 0 {
+					vs[len(vs)-1].bulge = v
+				}
+			}
+		}
+	}
+	return vs, flags, nil
 }
 
 // addPolyline turns an R12 POLYLINE and its VERTEX entities into a loop
