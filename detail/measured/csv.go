@@ -57,159 +57,239 @@ func ReadCSV(r io.Reader, file string, def Unit) (*Set, error) {
 	if err != nil {
 		return nil, err
 	}
-	set := &Set{File: file, Format: "csv", Units: def.Name + " (the job's units)"}
+	rd := &csvReader{file: file, def: def, ids: map[string]int{},
+		set: &Set{File: file, Format: "csv", Units: def.Name + " (the job's units)"}}
 	sc := bufio.NewScanner(bytes.NewReader(data))
 	sc.Buffer(make([]byte, 0, 1024), maxLineLen)
-	type col struct {
-		name string
-		unit Unit
-	}
-	var cols []col // nil until the first row decides
-	var delim string
 	lineNo := 0
-	ids := map[string]int{}
 	for sc.Scan() {
 		lineNo++
-		line := sc.Text()
-		if lineNo == 1 {
-			line = strings.TrimPrefix(line, "\ufeff")
-		}
-		line = strings.TrimSpace(line)
-		if line == "" || strings.HasPrefix(line, "#") {
-			continue
-		}
-		if delim == "" {
-			delim = pickDelimiter(line)
-		}
-		cells, err := splitCells(line, delim)
-		if err != nil {
-			err.File, err.Line = file, lineNo
+		if err := rd.line(lineNo, sc.Text()); err != nil {
 			return nil, err
 		}
-		if cols == nil {
-			if isHeader(cells) {
-				seen := map[string]bool{}
-				units := ""
-				for i, c := range cells {
-					lc := strings.ToLower(c)
-					m := headerCell.FindStringSubmatch(lc)
-					name, ok := csvColumn[lc]
-					switch {
-					case ok:
-						m = []string{lc, lc, "", ""}
-					case m != nil:
-						name, ok = csvColumn[m[1]]
-					}
-					if !ok {
-						cols = append(cols, col{}) // an unused column: ignored
-						continue
-					}
-					if seen[name] {
-						return nil, &Error{File: file, Line: lineNo, Field: fmt.Sprintf("column %d", i+1),
-							Msg: fmt.Sprintf("column %q given twice", name)}
-					}
-					seen[name] = true
-					u := def
-					if us := m[2] + m[3]; us != "" {
-						if u, ok = csvUnits[us]; !ok {
-							return nil, &Error{File: file, Line: lineNo, Field: c, Msg: fmt.Sprintf("unknown unit %q", us),
-								Hint: "write the unit as x_mm or x_in (mm, cm, m, in, ft)"}
-						}
-						if name != "id" {
-							units = u.Name + " (from the header)"
-						}
-					}
-					cols = append(cols, col{name, u})
-				}
-				if seen["radius"] && seen["diameter"] {
-					return nil, &Error{File: file, Line: lineNo, Field: "radius", Msg: "give diameter or radius, not both"}
-				}
-				if seen["radius"] {
-					seen["diameter"] = true
-				}
-				for _, need := range []string{"x", "y", "diameter"} {
-					if !seen[need] {
-						return nil, &Error{File: file, Line: lineNo, Field: need, Msg: "the header has no " + need + " column",
-							Hint: "a measured CSV has columns x, y, diameter and optionally id, e.g. x_mm,y_mm,diameter_mm,id"}
-					}
-				}
-				if units != "" {
-					set.Units = units
-				}
-				continue
-			}
-			cols = []col{{"x", def}, {"y", def}, {"diameter", def}, {"id", def}}
-			if len(cells) > 4 {
-				return nil, &Error{File: file, Line: lineNo, Msg: fmt.Sprintf("%d columns, want x,y,diameter and optionally id", len(cells)),
-					Hint: "add a header row naming the columns to use more"}
-			}
-		}
-		h := Hole{Line: lineNo}
-		for i, c := range cols {
-			if c.name == "" {
-				continue
-			}
-			if i >= len(cells) || cells[i] == "" {
-				if c.name == "id" {
-					continue
-				}
-				return nil, &Error{File: file, Line: lineNo, Field: c.name, Msg: "is missing",
-					Hint: "each row is x,y,diameter[,id]"}
-			}
-			if c.name == "id" {
-				h.ID = cells[i]
-				continue
-			}
-			cell := cells[i]
-			if delim != "," {
-				cell = strings.ReplaceAll(cell, ",", ".")
-			}
-			v, err := csvLength(cell, c.unit)
-			if err != nil {
-				return nil, &Error{File: file, Line: lineNo, Field: c.name, Msg: err.Error()}
-			}
-			switch c.name {
-			case "x":
-				h.X = v
-			case "y":
-				h.Y = v
-			case "diameter", "radius":
-				if c.name == "radius" {
-					v *= 2
-				}
-				if !(v > 0) || v > 500 {
-					return nil, &Error{File: file, Line: lineNo, Field: c.name, Msg: fmt.Sprintf("%q is not a hole %s", cells[i], c.name)}
-				}
-				h.Width, h.Length = v, v
-			}
-		}
-		if len(cells) > len(cols) {
-			return nil, &Error{File: file, Line: lineNo, Msg: fmt.Sprintf("%d columns, the first row has %d", len(cells), len(cols))}
-		}
-		if len(set.Holes) >= MaxHoles {
-			return nil, &Error{File: file, Line: lineNo, Msg: fmt.Sprintf("more than %d holes", MaxHoles),
-				Hint: "a measured file holds the holes of one part"}
-		}
-		if h.ID == "" {
-			h.ID = fmt.Sprintf("M%d", len(set.Holes)+1)
-		}
-		if first, dup := ids[h.ID]; dup {
-			return nil, &Error{File: file, Line: lineNo, Field: "id", Msg: fmt.Sprintf("id %q already used on line %d", h.ID, first)}
-		}
-		ids[h.ID] = lineNo
-		set.Holes = append(set.Holes, h)
 	}
 	if err := sc.Err(); err != nil {
-		msg := err.Error()
-		if err == bufio.ErrTooLong {
-			msg = fmt.Sprintf("a line is longer than %d bytes", maxLineLen)
-		}
-		return nil, &Error{File: file, Line: lineNo + 1, Msg: msg, Hint: "is this a CSV of hole centres?"}
+		return nil, scanError(file, lineNo, err)
 	}
-	if len(set.Holes) == 0 {
+	if len(rd.set.Holes) == 0 {
 		return nil, &Error{File: file, Msg: "no holes in the file", Hint: "each row is x,y,diameter[,id]"}
 	}
-	return set, nil
+	return rd.set, nil
+}
+
+// csvCol is what a CSV column holds: a column name of csvColumn ("" for a
+// column not used) and the unit its numbers are in.
+type csvCol struct {
+	name string
+	unit Unit
+}
+
+// csvReader is the state of ReadCSV between lines.
+type csvReader struct {
+	file  string
+	def   Unit
+	set   *Set
+	cols  []csvCol // nil until the first row decides
+	delim string   // "" until the first row decides
+	ids   map[string]int
+}
+
+// line reads line lineNo of the file: a blank or comment line is skipped,
+// the first row decides the delimiter and the columns (a header names
+// them), and every other row is a hole.
+func (rd *csvReader) line(lineNo int, line string) error {
+	if lineNo == 1 {
+		line = strings.TrimPrefix(line, "\ufeff")
+	}
+	line = strings.TrimSpace(line)
+	if line == "" || strings.HasPrefix(line, "#") {
+		return nil
+	}
+	if rd.delim == "" {
+		rd.delim = pickDelimiter(line)
+	}
+	cells, serr := splitCells(line, rd.delim)
+	if serr != nil {
+		serr.File, serr.Line = rd.file, lineNo
+		return serr
+	}
+	if rd.cols == nil {
+		if isHeader(cells) {
+			return rd.header(lineNo, cells)
+		}
+		rd.cols = []csvCol{{"x", rd.def}, {"y", rd.def}, {"diameter", rd.def}, {"id", rd.def}}
+		if len(cells) > 4 {
+			return &Error{File: rd.file, Line: lineNo, Msg: fmt.Sprintf("%d columns, want x,y,diameter and optionally id", len(cells)),
+				Hint: "add a header row naming the columns to use more"}
+		}
+	}
+	h, err := rd.hole(lineNo, cells)
+	if err != nil {
+		return err
+	}
+	return rd.add(lineNo, cells, h)
+}
+
+// header takes the columns from a header row: each cell names a column
+// (with an optional unit) or is a column not used. A column named twice,
+// an unknown unit, both diameter and radius, or a header without x, y and
+// diameter (or radius) is an error. A unit on a length column names the
+// set's units.
+func (rd *csvReader) header(lineNo int, cells []string) error {
+	seen := map[string]bool{}
+	units := ""
+	for i, c := range cells {
+		name, us, ok := headerName(c)
+		if !ok {
+			rd.cols = append(rd.cols, csvCol{}) // an unused column: ignored
+			continue
+		}
+		if seen[name] {
+			return &Error{File: rd.file, Line: lineNo, Field: fmt.Sprintf("column %d", i+1),
+				Msg: fmt.Sprintf("column %q given twice", name)}
+		}
+		seen[name] = true
+		u := rd.def
+		if us != "" {
+			if u, ok = csvUnits[us]; !ok {
+				return &Error{File: rd.file, Line: lineNo, Field: c, Msg: fmt.Sprintf("unknown unit %q", us),
+					Hint: "write the unit as x_mm or x_in (mm, cm, m, in, ft)"}
+			}
+			if name != "id" {
+				units = u.Name + " (from the header)"
+			}
+		}
+		rd.cols = append(rd.cols, csvCol{name, u})
+	}
+	if err := rd.headerComplete(lineNo, seen); err != nil {
+		return err
+	}
+	if units != "" {
+		rd.set.Units = units
+	}
+	return nil
+}
+
+// headerName reads a header cell ("x_mm", "Dia", "y (in)"): the column of
+// csvColumn it names and the unit it carries ("" for none). ok is false
+// for a cell that names no column of csvColumn.
+func headerName(cell string) (name, unit string, ok bool) {
+	lc := strings.ToLower(cell)
+	if name, ok := csvColumn[lc]; ok {
+		return name, "", true
+	}
+	m := headerCell.FindStringSubmatch(lc)
+	if m == nil {
+		return "", "", false
+	}
+	name, ok = csvColumn[m[1]]
+	return name, m[2] + m[3], ok
+}
+
+// headerComplete checks that a header with the columns seen gives x, y
+// and one of diameter or radius.
+func (rd *csvReader) headerComplete(lineNo int, seen map[string]bool) error {
+	if seen["radius"] && seen["diameter"] {
+		return &Error{File: rd.file, Line: lineNo, Field: "radius", Msg: "give diameter or radius, not both"}
+	}
+	if seen["radius"] {
+		seen["diameter"] = true
+	}
+	for _, need := range []string{"x", "y", "diameter"} {
+		if !seen[need] {
+			return &Error{File: rd.file, Line: lineNo, Field: need, Msg: "the header has no " + need + " column",
+				Hint: "a measured CSV has columns x, y, diameter and optionally id, e.g. x_mm,y_mm,diameter_mm,id"}
+		}
+	}
+	return nil
+}
+
+// hole reads the hole of a data row from its cells, column by column; a
+// missing x, y or diameter is an error, a missing id is left empty.
+func (rd *csvReader) hole(lineNo int, cells []string) (Hole, error) {
+	h := Hole{Line: lineNo}
+	for i, c := range rd.cols {
+		if c.name == "" {
+			continue
+		}
+		if i >= len(cells) || cells[i] == "" {
+			if c.name == "id" {
+				continue
+			}
+			return h, &Error{File: rd.file, Line: lineNo, Field: c.name, Msg: "is missing",
+				Hint: "each row is x,y,diameter[,id]"}
+		}
+		if c.name == "id" {
+			h.ID = cells[i]
+			continue
+		}
+		if err := rd.setLength(&h, lineNo, c, cells[i]); err != nil {
+			return h, err
+		}
+	}
+	return h, nil
+}
+
+// setLength reads cell, a length in column c, into h: x, y, or the
+// diameter (a radius doubled), which must be a hole's size (above 0, at
+// most 500 mm).
+func (rd *csvReader) setLength(h *Hole, lineNo int, c csvCol, cell string) error {
+	num := cell
+	if rd.delim != "," {
+		num = strings.ReplaceAll(num, ",", ".")
+	}
+	v, err := csvLength(num, c.unit)
+	if err != nil {
+		return &Error{File: rd.file, Line: lineNo, Field: c.name, Msg: err.Error()}
+	}
+	switch c.name {
+	case "x":
+		h.X = v
+	case "y":
+		h.Y = v
+	case "diameter", "radius":
+		if c.name == "radius" {
+			v *= 2
+		}
+		if !(v > 0) || v > 500 {
+			return &Error{File: rd.file, Line: lineNo, Field: c.name, Msg: fmt.Sprintf("%q is not a hole %s", cell, c.name)}
+		}
+		h.Width, h.Length = v, v
+	}
+	return nil
+}
+
+// add adds hole h, read from a row of cells, to the set: the row may have
+// no more columns than the first, the set no more than MaxHoles holes, and
+// an id (given, or made up as M1, M2, …) is used once.
+func (rd *csvReader) add(lineNo int, cells []string, h Hole) error {
+	set := rd.set
+	if len(cells) > len(rd.cols) {
+		return &Error{File: rd.file, Line: lineNo, Msg: fmt.Sprintf("%d columns, the first row has %d", len(cells), len(rd.cols))}
+	}
+	if len(set.Holes) >= MaxHoles {
+		return &Error{File: rd.file, Line: lineNo, Msg: fmt.Sprintf("more than %d holes", MaxHoles),
+			Hint: "a measured file holds the holes of one part"}
+	}
+	if h.ID == "" {
+		h.ID = fmt.Sprintf("M%d", len(set.Holes)+1)
+	}
+	if first, dup := rd.ids[h.ID]; dup {
+		return &Error{File: rd.file, Line: lineNo, Field: "id", Msg: fmt.Sprintf("id %q already used on line %d", h.ID, first)}
+	}
+	rd.ids[h.ID] = lineNo
+	set.Holes = append(set.Holes, h)
+	return nil
+}
+
+// scanError is the error of a scanner stopped after line lineNo: a line
+// too long, or a read that failed.
+func scanError(file string, lineNo int, err error) error {
+	msg := err.Error()
+	if err == bufio.ErrTooLong {
+		msg = fmt.Sprintf("a line is longer than %d bytes", maxLineLen)
+	}
+	return &Error{File: file, Line: lineNo + 1, Msg: msg, Hint: "is this a CSV of hole centres?"}
 }
 
 // readCapped reads all of r, refusing more than MaxFileSize bytes.

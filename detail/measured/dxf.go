@@ -162,149 +162,200 @@ func ReadDXF(r io.Reader, file string, def Unit, layer string) (*Set, error) {
 	return d.holes(file, def, layer)
 }
 
-// parseDXF reads the groups reverify needs.
+// parseDXF reads the groups reverify needs: a record (group 0) opens a
+// section or an entity, and the groups after it belong to the HEADER
+// variable or the ENTITIES entity it opened. The file must end with 0/EOF.
 func parseDXF(file string, data []byte) (*drawing, error) {
-	s := &dxfScanner{file: file, data: data}
-	d := &drawing{insUnits: -1, measurement: -1, skipped: map[string]int{}}
-	section := ""
-	var cur *entity
-	var poly *entity // an open R12 POLYLINE collecting VERTEX entities
-	var verts []entity
-	count := 0
-	sawSection := false
-	headerVar := ""
-	flush := func() error {
-		if cur == nil {
-			return nil
-		}
-		e := cur
-		cur = nil
-		switch e.kind {
-		case "POLYLINE":
-			poly, verts = e, nil
-			return nil
-		case "VERTEX":
-			if poly != nil {
-				verts = append(verts, *e)
-			}
-			return nil
-		case "SEQEND":
-			if poly != nil {
-				err := d.addPolyline(file, poly, verts)
-				poly, verts = nil, nil
-				return err
-			}
-			return nil
-		}
-		if poly != nil { // a POLYLINE without its SEQEND
-			if err := d.addPolyline(file, poly, verts); err != nil {
-				return err
-			}
-			poly, verts = nil, nil
-		}
-		return d.addEntity(file, e)
-	}
-scan:
+	ps := &dxfParser{file: file, s: &dxfScanner{file: file, data: data},
+		d: &drawing{insUnits: -1, measurement: -1, skipped: map[string]int{}}}
 	for {
-		p, ok, err := s.next()
+		p, ok, err := ps.s.next()
 		if err != nil {
 			return nil, err
 		}
 		if !ok {
-			if !sawSection {
-				return nil, &Error{File: file, Msg: "no DXF sections", Hint: "is this an ASCII DXF file?"}
-			}
-			// Judging the holes of a cut-off file would report the holes
-			// it lost as missing.
-			return nil, &Error{File: file, Line: s.line, Msg: "the file ends before EOF: truncated transfer?",
-				Hint: "a DXF ends with the record 0/EOF; copy or export the file again"}
+			return nil, ps.endsEarly()
 		}
-		if p.code == 0 {
-			if err := flush(); err != nil {
+		if p.code != 0 {
+			if err := ps.group(p); err != nil {
 				return nil, err
-			}
-			switch p.val {
-			case "SECTION":
-				sawSection = true
-				n, ok, err := s.next()
-				if err != nil {
-					return nil, err
-				}
-				if !ok || n.code != 2 {
-					return nil, &Error{File: file, Line: p.line, Msg: "SECTION without its name (group 2)"}
-				}
-				section = strings.ToUpper(n.val)
-				continue
-			case "ENDSEC":
-				section = ""
-				if poly != nil {
-					if err := d.addPolyline(file, poly, verts); err != nil {
-						return nil, err
-					}
-					poly, verts = nil, nil
-				}
-				continue
-			case "EOF":
-				break scan
-			}
-			if section == "ENTITIES" {
-				count++
-				if count > MaxEntities {
-					return nil, &Error{File: file, Line: p.line, Msg: fmt.Sprintf("more than %d entities", MaxEntities),
-						Hint: "export only the part: its contour and holes"}
-				}
-				cur = &entity{kind: strings.ToUpper(p.val), line: p.line}
 			}
 			continue
 		}
-		switch section {
-		case "HEADER":
-			if p.code == 9 {
-				headerVar = strings.ToUpper(p.val)
-				continue
-			}
-			if p.code == 70 && (headerVar == "$INSUNITS" || headerVar == "$MEASUREMENT") {
-				v, err := strconv.Atoi(p.val)
-				if err != nil {
-					return nil, &Error{File: file, Line: p.line, Field: headerVar, Msg: fmt.Sprintf("%q is not an integer", clip(p.val))}
-				}
-				if headerVar == "$INSUNITS" {
-					if v < 0 || v > maxInsUnits {
-						return nil, &Error{File: file, Line: p.line, Field: headerVar, Msg: fmt.Sprintf("%d is not a $INSUNITS code (0 to %d)", v, maxInsUnits),
-							Hint: "set $INSUNITS to 1 (inches) or 4 (millimetres)"}
-					}
-					d.insUnits, d.unitsLine = v, p.line
-				} else {
-					d.measurement = v
-				}
-			}
-		case "ENTITIES":
-			if cur != nil && wanted[cur.kind] {
-				if len(cur.pairs) >= maxGroups {
-					return nil, &Error{File: file, Line: cur.line, Field: cur.kind, Msg: fmt.Sprintf("more than %d groups in one entity", maxGroups)}
-				}
-				cur.pairs = append(cur.pairs, p)
-			}
-			if cur != nil && cur.kind == "LWPOLYLINE" && p.code == 10 {
-				count++ // vertices count toward the cap
-				if count > MaxEntities {
-					return nil, &Error{File: file, Line: p.line, Msg: fmt.Sprintf("more than %d entities and vertices", MaxEntities)}
-				}
-			}
-		}
-	}
-	if err := flush(); err != nil {
-		return nil, err
-	}
-	if poly != nil {
-		if err := d.addPolyline(file, poly, verts); err != nil {
+		eof, err := ps.record(p)
+		if err != nil {
 			return nil, err
 		}
+		if eof {
+			break
+		}
 	}
-	if !sawSection {
+	if err := ps.flush(); err != nil {
+		return nil, err
+	}
+	if err := ps.endPolyline(); err != nil {
+		return nil, err
+	}
+	if !ps.sawSection {
 		return nil, &Error{File: file, Msg: "no DXF sections", Hint: "is this an ASCII DXF file?"}
 	}
-	return d, nil
+	return ps.d, nil
+}
+
+// dxfParser is the state of parseDXF between groups.
+type dxfParser struct {
+	file       string
+	s          *dxfScanner
+	d          *drawing
+	section    string  // the open section's name, upper case ("" between sections)
+	cur        *entity // the entity whose groups are being read
+	poly       *entity // an open R12 POLYLINE collecting VERTEX entities
+	verts      []entity
+	count      int // entities and LWPOLYLINE vertices read
+	sawSection bool
+	headerVar  string // the HEADER variable whose groups are being read
+}
+
+// endsEarly is the error of a file whose data ends before its 0/EOF record.
+func (ps *dxfParser) endsEarly() error {
+	if !ps.sawSection {
+		return &Error{File: ps.file, Msg: "no DXF sections", Hint: "is this an ASCII DXF file?"}
+	}
+	// Judging the holes of a cut-off file would report the holes
+	// it lost as missing.
+	return &Error{File: ps.file, Line: ps.s.line, Msg: "the file ends before EOF: truncated transfer?",
+		Hint: "a DXF ends with the record 0/EOF; copy or export the file again"}
+}
+
+// record reads a group-0 record p: it ends the entity before it, and opens
+// or closes a section, opens an entity (in ENTITIES), or ends the file
+// (eof).
+func (ps *dxfParser) record(p pair) (eof bool, err error) {
+	if err := ps.flush(); err != nil {
+		return false, err
+	}
+	switch p.val {
+	case "SECTION":
+		ps.sawSection = true
+		n, ok, err := ps.s.next()
+		if err != nil {
+			return false, err
+		}
+		if !ok || n.code != 2 {
+			return false, &Error{File: ps.file, Line: p.line, Msg: "SECTION without its name (group 2)"}
+		}
+		ps.section = strings.ToUpper(n.val)
+		return false, nil
+	case "ENDSEC":
+		ps.section = ""
+		return false, ps.endPolyline()
+	case "EOF":
+		return true, nil
+	}
+	if ps.section == "ENTITIES" {
+		ps.count++
+		if ps.count > MaxEntities {
+			return false, &Error{File: ps.file, Line: p.line, Msg: fmt.Sprintf("more than %d entities", MaxEntities),
+				Hint: "export only the part: its contour and holes"}
+		}
+		ps.cur = &entity{kind: strings.ToUpper(p.val), line: p.line}
+	}
+	return false, nil
+}
+
+// group reads a group other than 0 in the open section.
+func (ps *dxfParser) group(p pair) error {
+	switch ps.section {
+	case "HEADER":
+		return ps.headerGroup(p)
+	case "ENTITIES":
+		return ps.entityGroup(p)
+	}
+	return nil
+}
+
+// headerGroup reads a HEADER group: group 9 names a variable, and group 70
+// of $INSUNITS or $MEASUREMENT is its integer value ($INSUNITS a code
+// from 0 to maxInsUnits).
+func (ps *dxfParser) headerGroup(p pair) error {
+	if p.code == 9 {
+		ps.headerVar = strings.ToUpper(p.val)
+		return nil
+	}
+	if p.code != 70 || (ps.headerVar != "$INSUNITS" && ps.headerVar != "$MEASUREMENT") {
+		return nil
+	}
+	v, err := strconv.Atoi(p.val)
+	if err != nil {
+		return &Error{File: ps.file, Line: p.line, Field: ps.headerVar, Msg: fmt.Sprintf("%q is not an integer", clip(p.val))}
+	}
+	if ps.headerVar != "$INSUNITS" {
+		ps.d.measurement = v
+		return nil
+	}
+	if v < 0 || v > maxInsUnits {
+		return &Error{File: ps.file, Line: p.line, Field: ps.headerVar, Msg: fmt.Sprintf("%d is not a $INSUNITS code (0 to %d)", v, maxInsUnits),
+			Hint: "set $INSUNITS to 1 (inches) or 4 (millimetres)"}
+	}
+	ps.d.insUnits, ps.d.unitsLine = v, p.line
+	return nil
+}
+
+// entityGroup keeps a group of the open entity when it is a wanted kind,
+// at most maxGroups of them; an LWPOLYLINE's vertices count toward
+// MaxEntities.
+func (ps *dxfParser) entityGroup(p pair) error {
+	cur := ps.cur
+	if cur != nil && wanted[cur.kind] {
+		if len(cur.pairs) >= maxGroups {
+			return &Error{File: ps.file, Line: cur.line, Field: cur.kind, Msg: fmt.Sprintf("more than %d groups in one entity", maxGroups)}
+		}
+		cur.pairs = append(cur.pairs, p)
+	}
+	if cur != nil && cur.kind == "LWPOLYLINE" && p.code == 10 {
+		ps.count++ // vertices count toward the cap
+		if ps.count > MaxEntities {
+			return &Error{File: ps.file, Line: p.line, Msg: fmt.Sprintf("more than %d entities and vertices", MaxEntities)}
+		}
+	}
+	return nil
+}
+
+// flush ends the entity being read: a POLYLINE opens a polyline, a VERTEX
+// joins the open one, a SEQEND ends it, and any other entity ends an open
+// polyline (one without its SEQEND) and is added to the drawing.
+func (ps *dxfParser) flush() error {
+	if ps.cur == nil {
+		return nil
+	}
+	e := ps.cur
+	ps.cur = nil
+	switch e.kind {
+	case "POLYLINE":
+		ps.poly, ps.verts = e, nil
+		return nil
+	case "VERTEX":
+		if ps.poly != nil {
+			ps.verts = append(ps.verts, *e)
+		}
+		return nil
+	case "SEQEND":
+		return ps.endPolyline()
+	}
+	if err := ps.endPolyline(); err != nil { // a POLYLINE without its SEQEND
+		return err
+	}
+	return ps.d.addEntity(ps.file, e)
+}
+
+// endPolyline adds the open R12 POLYLINE, if any, with its vertices.
+func (ps *dxfParser) endPolyline() error {
+	if ps.poly == nil {
+		return nil
+	}
+	err := ps.d.addPolyline(ps.file, ps.poly, ps.verts)
+	ps.poly, ps.verts = nil, nil
+	return err
 }
 
 // common holds the groups every entity shares.
@@ -377,6 +428,10 @@ func missing(file string, e *entity, code int) error {
 
 func (d *drawing) skip(kind string) { d.skipped[kind]++ }
 
+// addEntity adds a CIRCLE, ARC, LINE or LWPOLYLINE of model space to the
+// drawing. Other kinds and entities in paper space are counted as skipped;
+// entities drawn out of the XY plane are counted apart, except a LINE,
+// whose points are world coordinates whatever its extrusion.
 func (d *drawing) addEntity(file string, e *entity) error {
 	switch e.kind {
 	case "CIRCLE", "ARC", "LINE", "LWPOLYLINE":
@@ -393,115 +448,152 @@ func (d *drawing) addEntity(file string, e *entity) error {
 		d.oddExtruded++
 		return nil
 	}
-	mir := func(p r2.Vec) r2.Vec {
-		if c.mirror && e.kind != "LINE" {
-			p.X = -p.X
-		}
-		return p
-	}
 	switch e.kind {
 	case "CIRCLE", "ARC":
-		f, err := fields(file, e, 10, 20, 40, 50, 51)
-		if err != nil {
-			return err
-		}
-		for _, k := range []int{10, 20, 40} {
-			if _, ok := f[k]; !ok {
-				return missing(file, e, k)
-			}
-		}
-		if !(f[40] > 0) {
-			return &Error{File: file, Line: e.line, Field: e.kind + " group 40", Msg: "radius is not positive"}
-		}
-		ctr := r2.Vec{X: f[10], Y: f[20]}
-		if e.kind == "CIRCLE" {
-			d.circles = append(d.circles, circle{mir(ctr), f[40], c.layer, e.line})
-			return nil
-		}
-		a0, a1 := f[50]*math.Pi/180, f[51]*math.Pi/180
-		sweep := math.Mod(a1-a0, 2*math.Pi)
-		if sweep <= 0 {
-			sweep += 2 * math.Pi
-		}
-		s := seg{
-			a:     mir(r2.Vec{X: ctr.X + f[40]*math.Cos(a0), Y: ctr.Y + f[40]*math.Sin(a0)}),
-			b:     mir(r2.Vec{X: ctr.X + f[40]*math.Cos(a0+sweep), Y: ctr.Y + f[40]*math.Sin(a0+sweep)}),
-			bulge: math.Tan(sweep / 4), line: e.line,
-		}
-		if c.mirror {
-			s.bulge = -s.bulge
-		}
-		if sweep >= 2*math.Pi-1e-12 {
-			// a full-circle arc is a circle
-			d.circles = append(d.circles, circle{mir(ctr), f[40], c.layer, e.line})
-			return nil
-		}
-		d.segs = append(d.segs, s)
-		d.segLayers = append(d.segLayers, c.layer)
+		return d.addCircleOrArc(file, e, c)
 	case "LINE":
-		f, err := fields(file, e, 10, 20, 11, 21)
-		if err != nil {
-			return err
-		}
-		for _, k := range []int{10, 20, 11, 21} {
-			if _, ok := f[k]; !ok {
-				return missing(file, e, k)
-			}
-		}
-		d.segs = append(d.segs, seg{a: r2.Vec{X: f[10], Y: f[20]}, b: r2.Vec{X: f[11], Y: f[21]}, line: e.line})
-		d.segLayers = append(d.segLayers, c.layer)
-	case "LWPOLYLINE":
-		type vtx struct {
-			p     r2.Vec
-			bulge float64
-			hasY  bool
-		}
-		var vs []vtx
-		flags := 0
-		for _, p := range e.pairs {
-			switch p.code {
-			case 70:
-				v, err := strconv.Atoi(p.val)
-				if err != nil {
-					return &Error{File: file, Line: p.line, Field: "LWPOLYLINE group 70", Msg: fmt.Sprintf("%q is not an integer", clip(p.val))}
-				}
-				flags = v
-			case 10, 20, 42:
-				v, err := num(file, p)
-				if err != nil {
-					return err
-				}
-				switch p.code {
-				case 10:
-					vs = append(vs, vtx{p: r2.Vec{X: v}})
-				case 20:
-					if len(vs) == 0 || vs[len(vs)-1].hasY {
-						return &Error{File: file, Line: p.line, Field: "LWPOLYLINE group 20", Msg: "y without its x (group 10)"}
-					}
-					vs[len(vs)-1].p.Y, vs[len(vs)-1].hasY = v, true
-				case 42:
-					// the bulge belongs to the vertex it follows: the
-					// segment from that vertex to the next
-					if len(vs) > 0 {
-						vs[len(vs)-1].bulge = v
-					}
-				}
-			}
-		}
-		pts := make([]r2.Vec, len(vs))
-		bul := make([]float64, len(vs))
-		for i, v := range vs {
-			if !v.hasY {
-				return &Error{File: file, Line: e.line, Field: "LWPOLYLINE group 20", Msg: fmt.Sprintf("vertex %d has no y", i+1)}
-			}
-			pts[i], bul[i] = mir(v.p), v.bulge
-			if c.mirror {
-				bul[i] = -bul[i]
-			}
-		}
-		d.addVertices(pts, bul, flags&1 == 1, c.layer, e.line)
+		return d.addLine(file, e, c)
+	default:
+		return d.addLWPolyline(file, e, c)
 	}
+}
+
+// toWorld maps a point of an entity's object coordinates to world
+// coordinates: with the extrusion (0, 0, −1) x changes sign.
+func (c common) toWorld(p r2.Vec) r2.Vec {
+	if c.mirror {
+		p.X = -p.X
+	}
+	return p
+}
+
+// addCircleOrArc adds a CIRCLE, or an ARC: a segment, or a circle when it
+// sweeps the full turn. Centre (10, 20) and radius (40, positive) must be
+// given; an ARC runs counter-clockwise from angle 50 to angle 51 (degrees).
+func (d *drawing) addCircleOrArc(file string, e *entity, c common) error {
+	f, err := fields(file, e, 10, 20, 40, 50, 51)
+	if err != nil {
+		return err
+	}
+	for _, k := range []int{10, 20, 40} {
+		if _, ok := f[k]; !ok {
+			return missing(file, e, k)
+		}
+	}
+	if !(f[40] > 0) {
+		return &Error{File: file, Line: e.line, Field: e.kind + " group 40", Msg: "radius is not positive"}
+	}
+	ctr, r := r2.Vec{X: f[10], Y: f[20]}, f[40]
+	if e.kind == "CIRCLE" {
+		d.circles = append(d.circles, circle{c.toWorld(ctr), r, c.layer, e.line})
+		return nil
+	}
+	a0, a1 := f[50]*math.Pi/180, f[51]*math.Pi/180
+	sweep := math.Mod(a1-a0, 2*math.Pi)
+	if sweep <= 0 {
+		sweep += 2 * math.Pi
+	}
+	if sweep >= 2*math.Pi-1e-12 {
+		// a full-circle arc is a circle
+		d.circles = append(d.circles, circle{c.toWorld(ctr), r, c.layer, e.line})
+		return nil
+	}
+	s := seg{
+		a:     c.toWorld(r2.Vec{X: ctr.X + r*math.Cos(a0), Y: ctr.Y + r*math.Sin(a0)}),
+		b:     c.toWorld(r2.Vec{X: ctr.X + r*math.Cos(a0+sweep), Y: ctr.Y + r*math.Sin(a0+sweep)}),
+		bulge: math.Tan(sweep / 4), line: e.line,
+	}
+	if c.mirror {
+		s.bulge = -s.bulge
+	}
+	d.segs = append(d.segs, s)
+	d.segLayers = append(d.segLayers, c.layer)
 	return nil
+}
+
+// addLine adds a LINE from (10, 20) to (11, 21), world coordinates, as a
+// segment.
+func (d *drawing) addLine(file string, e *entity, c common) error {
+	f, err := fields(file, e, 10, 20, 11, 21)
+	if err != nil {
+		return err
+	}
+	for _, k := range []int{10, 20, 11, 21} {
+		if _, ok := f[k]; !ok {
+			return missing(file, e, k)
+		}
+	}
+	d.segs = append(d.segs, seg{a: r2.Vec{X: f[10], Y: f[20]}, b: r2.Vec{X: f[11], Y: f[21]}, line: e.line})
+	d.segLayers = append(d.segLayers, c.layer)
+	return nil
+}
+
+// lwVertex is a vertex of an LWPOLYLINE as read: its point, the bulge of
+// the segment it starts, and whether its y was given.
+type lwVertex struct {
+	p     r2.Vec
+	bulge float64
+	hasY  bool
+}
+
+// addLWPolyline adds an LWPOLYLINE as a loop (closed: flag 1 of group 70,
+// or its last vertex on its first) or as segments. Every vertex must have
+// its y.
+func (d *drawing) addLWPolyline(file string, e *entity, c common) error {
+	vs, flags, err := lwVertices(file, e)
+	if err != nil {
+		return err
+	}
+	pts := make([]r2.Vec, len(vs))
+	bul := make([]float64, len(vs))
+	for i, v := range vs {
+		if !v.hasY {
+			return &Error{File: file, Line: e.line, Field: "LWPOLYLINE group 20", Msg: fmt.Sprintf("vertex %d has no y", i+1)}
+		}
+		pts[i], bul[i] = c.toWorld(v.p), v.bulge
+		if c.mirror {
+			bul[i] = -bul[i]
+		}
+	}
+	d.addVertices(pts, bul, flags&1 == 1, c.layer, e.line)
+	return nil
+}
+
+// lwVertices reads the flags (group 70) and the vertices of an
+// LWPOLYLINE: a group 10 starts a vertex, the 20 after it is its y, and a
+// 42 is the bulge of the vertex it follows.
+func lwVertices(file string, e *entity) (vs []lwVertex, flags int, err error) {
+	for _, p := range e.pairs {
+		switch p.code {
+		case 70:
+			v, err := strconv.Atoi(p.val)
+			if err != nil {
+				return nil, 0, &Error{File: file, Line: p.line, Field: "LWPOLYLINE group 70", Msg: fmt.Sprintf("%q is not an integer", clip(p.val))}
+			}
+			flags = v
+		case 10, 20, 42:
+			v, err := num(file, p)
+			if err != nil {
+				return nil, 0, err
+			}
+			switch p.code {
+			case 10:
+				vs = append(vs, lwVertex{p: r2.Vec{X: v}})
+			case 20:
+				if len(vs) == 0 || vs[len(vs)-1].hasY {
+					return nil, 0, &Error{File: file, Line: p.line, Field: "LWPOLYLINE group 20", Msg: "y without its x (group 10)"}
+				}
+				vs[len(vs)-1].p.Y, vs[len(vs)-1].hasY = v, true
+			case 42:
+				// the bulge belongs to the vertex it follows: the
+				// segment from that vertex to the next
+				if len(vs) > 0 {
+					vs[len(vs)-1].bulge = v
+				}
+			}
+		}
+	}
+	return vs, flags, nil
 }
 
 // addPolyline turns an R12 POLYLINE and its VERTEX entities into a loop

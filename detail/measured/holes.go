@@ -13,136 +13,30 @@ import (
 // chainTol is how close, in mm, two segment ends must be to join.
 const chainTol = 0.01
 
-// holes turns a parsed drawing into the set of measured holes.
+// holes turns a parsed drawing into the set of measured holes: it scales
+// the drawing to millimetres, takes the closed loop of the largest area as
+// the part's contour, picks the holes among the circles and hole-shaped
+// loops (on layer, inside the contour, or all of them), keeps the smallest
+// of concentric ones and names them C1, C2, … in the order of the file.
 func (d *drawing) holes(file string, def Unit, layer string) (*Set, error) {
 	set := &Set{File: file, Format: "dxf"}
-	u := def
-	switch {
-	case d.insUnits > 0:
-		var ok bool
-		if u, ok = insUnits[d.insUnits]; !ok {
-			return nil, &Error{File: file, Line: d.unitsLine, Field: "$INSUNITS", Msg: fmt.Sprintf("unit code %d is not a unit a part is drawn in", d.insUnits),
-				Hint: "set $INSUNITS to 1 (inches) or 4 (millimetres)"}
-		}
-		set.Units = u.Name + " ($INSUNITS)"
-	default:
-		set.Units = def.Name + " (no $INSUNITS: the job's units)"
-		set.Notes = append(set.Notes, "the DXF does not set $INSUNITS: read in the job's units ("+def.Name+")")
+	u, err := d.unit(file, def, set)
+	if err != nil {
+		return nil, err
 	}
-	k := u.MM
-	sc := func(p r2.Vec) r2.Vec { return r2.Vec{X: p.X * k, Y: p.Y * k} }
-	for i := range d.circles {
-		d.circles[i].c, d.circles[i].r = sc(d.circles[i].c), d.circles[i].r*k
+	d.scale(u.MM)
+	loops, layers := d.allLoops()
+	contour, best := largestLoop(loops)
+	set.Contour = contour
+	cands, err := d.candidates(file, loops, layers, best)
+	if err != nil {
+		return nil, err
 	}
-	scaleSegs := func(ss []seg) {
-		for i := range ss {
-			ss[i].a, ss[i].b = sc(ss[i].a), sc(ss[i].b)
-		}
+	holes, err := pickHoles(file, set, cands, layer, best >= 0)
+	if err != nil {
+		return nil, err
 	}
-	for _, l := range d.loops {
-		scaleSegs(l)
-	}
-	scaleSegs(d.segs)
-	loops, layers := d.loops, d.loopLayers
-	chained, chainedLayers := chain(d.segs, d.segLayers)
-	loops, layers = append(loops, chained...), append(layers, chainedLayers...)
-
-	// The contour is the closed loop of the largest area.
-	polys := make([][]r2.Vec, len(loops))
-	best, bestArea := -1, 0.0
-	for i, l := range loops {
-		polys[i] = flatten(l)
-		if a := math.Abs(area(polys[i])); a > bestArea {
-			best, bestArea = i, a
-		}
-	}
-	if best >= 0 {
-		set.Contour = polys[best]
-	}
-
-	type cand struct {
-		Hole
-		layer string
-	}
-	var cands []cand
-	if len(d.circles) > 20*MaxHoles {
-		return nil, &Error{File: file, Msg: fmt.Sprintf("%d circles, more than %d", len(d.circles), 20*MaxHoles), Hint: "export only the part: its contour and holes"}
-	}
-	for _, c := range d.circles {
-		cands = append(cands, cand{Hole{X: c.c.X, Y: c.c.Y, Width: 2 * c.r, Length: 2 * c.r, Line: c.line}, c.layer})
-	}
-	for i, l := range loops {
-		if i == best {
-			continue
-		}
-		if h, ok := roundOrSlot(l); ok {
-			cands = append(cands, cand{h, layers[i]})
-		}
-	}
-	slices.SortStableFunc(cands, func(a, b cand) int { return cmp.Compare(a.Line, b.Line) })
-
-	var holes []Hole
-	outside := 0
-	switch {
-	case layer != "":
-		var onLayer []string
-		for _, c := range cands {
-			if strings.EqualFold(c.layer, layer) {
-				holes = append(holes, c.Hole)
-			} else if !slices.Contains(onLayer, c.layer) {
-				onLayer = append(onLayer, c.layer)
-			}
-		}
-		if len(holes) == 0 {
-			hint := "the file has no circles"
-			if len(onLayer) > 0 {
-				hint = "layers with circles: " + strings.Join(onLayer, ", ")
-			}
-			return nil, &Error{File: file, Field: "--layer", Msg: fmt.Sprintf("no circles on layer %q", layer), Hint: hint}
-		}
-	case best >= 0:
-		if len(cands)*len(set.Contour) > 2e8 {
-			return nil, &Error{File: file, Msg: fmt.Sprintf("%d circles and a contour of %d points are too many to sort out", len(cands), len(set.Contour)),
-				Hint: "name the holes' layer with --layer, or export only the part"}
-		}
-		for _, c := range cands {
-			if inside(r2.Vec{X: c.X, Y: c.Y}, set.Contour) {
-				holes = append(holes, c.Hole)
-			} else {
-				outside++
-			}
-		}
-		if outside > 0 {
-			set.Notes = append(set.Notes, fmt.Sprintf("%d circle(s) outside the part's contour ignored", outside))
-		}
-	default:
-		for _, c := range cands {
-			holes = append(holes, c.Hole)
-		}
-		if len(holes) > 0 {
-			set.Notes = append(set.Notes, "the DXF has no closed contour: every circle taken as a hole")
-		}
-	}
-	// Concentric circles (a hole drawn twice, or with a chamfer ring or a bolt head): the
-	// smallest is the hole.
-	var kept []Hole
-	dup := 0
-	at := map[[2]float64]int{} // centre rounded to 1e-6 mm → index in kept
-	for _, h := range holes {
-		k := [2]float64{math.Round(h.X * 1e6), math.Round(h.Y * 1e6)}
-		j, seen := at[k]
-		if !seen {
-			at[k] = len(kept)
-			kept = append(kept, h)
-			continue
-		}
-		dup++
-		if h.Width < kept[j].Width {
-			line := kept[j].Line
-			kept[j] = h
-			kept[j].Line = line
-		}
-	}
+	kept, dup := dropConcentric(holes)
 	if dup > 0 {
 		set.Notes = append(set.Notes, fmt.Sprintf("%d concentric circle(s) dropped: the smallest at a centre is the hole", dup))
 	}
@@ -162,6 +56,186 @@ func (d *drawing) holes(file string, def Unit, layer string) (*Set, error) {
 	set.Holes = kept
 	set.Notes = append(set.Notes, d.skippedNote()...)
 	return set, nil
+}
+
+// unit is the unit the drawing is in, $INSUNITS or else def (with a
+// note); it names it in set.Units. An $INSUNITS code that is no length a
+// part is drawn in is an error.
+func (d *drawing) unit(file string, def Unit, set *Set) (Unit, error) {
+	if d.insUnits <= 0 {
+		set.Units = def.Name + " (no $INSUNITS: the job's units)"
+		set.Notes = append(set.Notes, "the DXF does not set $INSUNITS: read in the job's units ("+def.Name+")")
+		return def, nil
+	}
+	u, ok := insUnits[d.insUnits]
+	if !ok {
+		return def, &Error{File: file, Line: d.unitsLine, Field: "$INSUNITS", Msg: fmt.Sprintf("unit code %d is not a unit a part is drawn in", d.insUnits),
+			Hint: "set $INSUNITS to 1 (inches) or 4 (millimetres)"}
+	}
+	set.Units = u.Name + " ($INSUNITS)"
+	return u, nil
+}
+
+// scale multiplies every length of the drawing by k (millimetres per unit
+// of the file).
+func (d *drawing) scale(k float64) {
+	sc := func(p r2.Vec) r2.Vec { return r2.Vec{X: p.X * k, Y: p.Y * k} }
+	for i := range d.circles {
+		d.circles[i].c, d.circles[i].r = sc(d.circles[i].c), d.circles[i].r*k
+	}
+	scaleSegs := func(ss []seg) {
+		for i := range ss {
+			ss[i].a, ss[i].b = sc(ss[i].a), sc(ss[i].b)
+		}
+	}
+	for _, l := range d.loops {
+		scaleSegs(l)
+	}
+	scaleSegs(d.segs)
+}
+
+// allLoops is every closed loop of the drawing with its layer: the closed
+// polylines, then the loops chained from lines and arcs.
+func (d *drawing) allLoops() ([][]seg, []string) {
+	loops, layers := d.loops, d.loopLayers
+	chained, chainedLayers := chain(d.segs, d.segLayers)
+	return append(loops, chained...), append(layers, chainedLayers...)
+}
+
+// largestLoop is the contour of the part, the loop of the largest area, as
+// a polygon, and its index in loops; -1 (and a nil polygon) when no loop
+// encloses an area.
+func largestLoop(loops [][]seg) ([]r2.Vec, int) {
+	polys := make([][]r2.Vec, len(loops))
+	best, bestArea := -1, 0.0
+	for i, l := range loops {
+		polys[i] = flatten(l)
+		if a := math.Abs(area(polys[i])); a > bestArea {
+			best, bestArea = i, a
+		}
+	}
+	if best < 0 {
+		return nil, -1
+	}
+	return polys[best], best
+}
+
+// candidate is a circle, or a loop shaped as a hole, with its layer.
+type candidate struct {
+	Hole
+	layer string
+}
+
+// candidates are the drawing's circles and its loops shaped as holes
+// (roundOrSlot), the contour loops[contour] apart, in the order of their
+// lines in the file. More than 20·MaxHoles circles is an error.
+func (d *drawing) candidates(file string, loops [][]seg, layers []string, contour int) ([]candidate, error) {
+	var cands []candidate
+	if len(d.circles) > 20*MaxHoles {
+		return nil, &Error{File: file, Msg: fmt.Sprintf("%d circles, more than %d", len(d.circles), 20*MaxHoles), Hint: "export only the part: its contour and holes"}
+	}
+	for _, c := range d.circles {
+		cands = append(cands, candidate{Hole{X: c.c.X, Y: c.c.Y, Width: 2 * c.r, Length: 2 * c.r, Line: c.line}, c.layer})
+	}
+	for i, l := range loops {
+		if i == contour {
+			continue
+		}
+		if h, ok := roundOrSlot(l); ok {
+			cands = append(cands, candidate{h, layers[i]})
+		}
+	}
+	slices.SortStableFunc(cands, func(a, b candidate) int { return cmp.Compare(a.Line, b.Line) })
+	return cands, nil
+}
+
+// pickHoles chooses the holes among the candidates: those on layer when
+// one is named, else those inside set.Contour when the drawing has one,
+// else all of them; how they were chosen is noted in set.
+func pickHoles(file string, set *Set, cands []candidate, layer string, hasContour bool) ([]Hole, error) {
+	switch {
+	case layer != "":
+		return holesOnLayer(file, cands, layer)
+	case hasContour:
+		return holesInside(file, set, cands)
+	}
+	var holes []Hole
+	for _, c := range cands {
+		holes = append(holes, c.Hole)
+	}
+	if len(holes) > 0 {
+		set.Notes = append(set.Notes, "the DXF has no closed contour: every circle taken as a hole")
+	}
+	return holes, nil
+}
+
+// holesOnLayer are the candidates on layer (case-insensitive); none is an
+// error whose hint names the layers that have circles.
+func holesOnLayer(file string, cands []candidate, layer string) ([]Hole, error) {
+	var holes []Hole
+	var onLayer []string
+	for _, c := range cands {
+		if strings.EqualFold(c.layer, layer) {
+			holes = append(holes, c.Hole)
+		} else if !slices.Contains(onLayer, c.layer) {
+			onLayer = append(onLayer, c.layer)
+		}
+	}
+	if len(holes) == 0 {
+		hint := "the file has no circles"
+		if len(onLayer) > 0 {
+			hint = "layers with circles: " + strings.Join(onLayer, ", ")
+		}
+		return nil, &Error{File: file, Field: "--layer", Msg: fmt.Sprintf("no circles on layer %q", layer), Hint: hint}
+	}
+	return holes, nil
+}
+
+// holesInside are the candidates inside set.Contour; those outside are
+// counted in a note. Too many candidates and contour points to test is an
+// error.
+func holesInside(file string, set *Set, cands []candidate) ([]Hole, error) {
+	if len(cands)*len(set.Contour) > 2e8 {
+		return nil, &Error{File: file, Msg: fmt.Sprintf("%d circles and a contour of %d points are too many to sort out", len(cands), len(set.Contour)),
+			Hint: "name the holes' layer with --layer, or export only the part"}
+	}
+	var holes []Hole
+	outside := 0
+	for _, c := range cands {
+		if inside(r2.Vec{X: c.X, Y: c.Y}, set.Contour) {
+			holes = append(holes, c.Hole)
+		} else {
+			outside++
+		}
+	}
+	if outside > 0 {
+		set.Notes = append(set.Notes, fmt.Sprintf("%d circle(s) outside the part's contour ignored", outside))
+	}
+	return holes, nil
+}
+
+// dropConcentric keeps one hole per centre (rounded to 1e-6 mm), the
+// smallest, with the line of the first drawn there; dup counts
+// those dropped. Concentric circles are a hole drawn twice, or with a
+// chamfer ring or a bolt head.
+func dropConcentric(holes []Hole) (kept []Hole, dup int) {
+	at := map[[2]float64]int{} // centre rounded to 1e-6 mm → index in kept
+	for _, h := range holes {
+		k := [2]float64{math.Round(h.X * 1e6), math.Round(h.Y * 1e6)}
+		j, seen := at[k]
+		if !seen {
+			at[k] = len(kept)
+			kept = append(kept, h)
+			continue
+		}
+		dup++
+		if h.Width < kept[j].Width {
+			line := kept[j].Line
+			kept[j] = h
+			kept[j].Line = line
+		}
+	}
+	return kept, dup
 }
 
 func (d *drawing) skippedNote() []string {
