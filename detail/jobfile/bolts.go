@@ -26,6 +26,9 @@ func parseDeformation(s string) (bool, error) {
 	return true, fmt.Errorf("unknown deformation setting %q (want considered or not-considered)", s)
 }
 
+// parseBolts reads the bolts block: the bolt, its fillers, the hole type
+// and the pattern, in that order. Without the block only the defaults are
+// set.
 func (p *parser) parseBolts(n *yaml.Node) error {
 	bs := &p.job.Bolts
 	bs.DeformationConsidered = true
@@ -37,6 +40,22 @@ func (p *parser) parseBolts(n *yaml.Node) error {
 	if err != nil {
 		return err
 	}
+	if err := p.parseBolt(b, bs); err != nil {
+		return err
+	}
+	if err := p.parseFiller(b, bs); err != nil {
+		return err
+	}
+	if err := p.parseBoltHole(b, bs); err != nil {
+		return err
+	}
+	return p.parsePattern(b, bs)
+}
+
+// parseBolt reads the bolt itself: diameter, grade, threads, joint,
+// faying surface and the count of fillers.
+func (p *parser) parseBolt(b *block, bs *BoltSpec) error {
+	var err error
 	if b.has("diameter") {
 		v := b.vals["diameter"]
 		s, err := p.word(v, "bolts.diameter")
@@ -81,9 +100,14 @@ func (p *parser) parseBolts(n *yaml.Node) error {
 			return err
 		}
 	}
-	if err := p.parseFiller(b, bs); err != nil {
-		return err
-	}
+	return nil
+}
+
+// parseBoltHole reads the hole type and slot direction both plies take
+// unless they give their own, and whether deformation at the bolt holes
+// is a design consideration.
+func (p *parser) parseBoltHole(b *block, bs *BoltSpec) error {
+	var err error
 	if b.has("hole") {
 		if bs.Hole, err = enum(p, b.vals["hole"], "bolts.hole", rules.ParseHoleType); err != nil {
 			return err
@@ -99,6 +123,13 @@ func (p *parser) parseBolts(n *yaml.Node) error {
 			return err
 		}
 	}
+	return nil
+}
+
+// parsePattern reads the pattern keys: lines, bolts per line, and the
+// pitch, end, gage and stagger distances.
+func (p *parser) parsePattern(b *block, bs *BoltSpec) error {
+	var err error
 	if b.has("lines") {
 		if bs.Lines, err = p.integer(b.vals["lines"], "bolts.lines", 1, maxLines); err != nil {
 			return err

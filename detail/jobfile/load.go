@@ -96,12 +96,23 @@ var markPattern = regexp.MustCompile(`^[A-Za-z0-9_][A-Za-z0-9._-]{0,39}$`)
 
 var rootKeys = []string{"mark", "units", "standard", "method", "quantity", "load", "member", "plate", "bolts", "holes", "stock", "tolerance"}
 
+// parseRoot reads the job's root mapping: its scalars, then its blocks.
 func (p *parser) parseRoot(root *yaml.Node) error {
-	j := p.job
 	b, err := p.mapping(root, "", rootKeys)
 	if err != nil {
 		return err
 	}
+	if err := p.parseHeader(b); err != nil {
+		return err
+	}
+	return p.parseBlocks(b)
+}
+
+// parseHeader reads the scalars of the root: units, mark, standard,
+// method and quantity, each with its default.
+func (p *parser) parseHeader(b *block) error {
+	j := p.job
+	var err error
 	// Units first: bare numbers everywhere else are read in its defaults.
 	j.Units = units.US
 	if n := b.vals["units"]; n != nil {
@@ -142,6 +153,13 @@ func (p *parser) parseRoot(root *yaml.Node) error {
 			return err
 		}
 	}
+	return nil
+}
+
+// parseBlocks reads the root's blocks in the order their checks depend on:
+// load, member, plate, bolts (then the plies' hole types), holes, stock
+// and tolerance.
+func (p *parser) parseBlocks(b *block) error {
 	if n := b.vals["load"]; n != nil {
 		if err := p.parseLoad(n); err != nil {
 			return err

@@ -253,54 +253,51 @@ func (p *parser) length(n *yaml.Node, path string, r lengthRule) (units.Length, 
 	return l, nil
 }
 
-// force reads a load at path: finite, ≥ 0, at most 1e6 kip.
-func (p *parser) force(n *yaml.Node, path string) (units.Force, error) {
-	v, err := p.quantity(n, path, units.DimForce)
+// bound is one limit a quantity must keep: out says the value breaks it,
+// msg and hint are the error that says so.
+type bound struct {
+	out       func(v float64) bool
+	msg, hint string
+}
+
+// bounded reads a quantity of dimension d at path and refuses it at the
+// first bound it breaks, in the order given.
+func (p *parser) bounded(n *yaml.Node, path string, d units.Dim, bounds ...bound) (float64, error) {
+	v, err := p.quantity(n, path, d)
 	if err != nil {
 		return 0, err
 	}
-	f := units.Force(v)
-	switch {
-	case f < 0:
-		return 0, p.errAt(n, path, "must not be negative", "a tension member's load is given as a positive tension")
-	case f > maxForce:
-		return 0, p.errAt(n, path, "is absurdly large (over 1,000,000 kip)", "check the unit")
+	for _, b := range bounds {
+		if b.out(v) {
+			return 0, p.errAt(n, path, b.msg, b.hint)
+		}
 	}
-	return f, nil
+	return v, nil
+}
+
+// force reads a load at path: finite, ≥ 0, at most 1e6 kip.
+func (p *parser) force(n *yaml.Node, path string) (units.Force, error) {
+	v, err := p.bounded(n, path, units.DimForce,
+		bound{func(v float64) bool { return v < 0 }, "must not be negative", "a tension member's load is given as a positive tension"},
+		bound{func(v float64) bool { return v > float64(maxForce) }, "is absurdly large (over 1,000,000 kip)", "check the unit"})
+	return units.Force(v), err
 }
 
 // stress reads a yield or tensile stress at path.
 func (p *parser) stress(n *yaml.Node, path string) (units.Stress, error) {
-	v, err := p.quantity(n, path, units.DimStress)
-	if err != nil {
-		return 0, err
-	}
-	s := units.Stress(v)
-	switch {
-	case s <= 0:
-		return 0, p.errAt(n, path, "must be greater than zero", "")
-	case s > maxStress:
-		return 0, p.errAt(n, path, "is absurdly large for structural steel (over 2000 MPa)", "check the unit")
-	}
-	return s, nil
+	v, err := p.bounded(n, path, units.DimStress,
+		bound{func(v float64) bool { return v <= 0 }, "must be greater than zero", ""},
+		bound{func(v float64) bool { return v > float64(maxStress) }, "is absurdly large for structural steel (over 2000 MPa)", "check the unit"})
+	return units.Stress(v), err
 }
 
 // area reads an area override at path.
 func (p *parser) area(n *yaml.Node, path string) (units.Area, error) {
-	v, err := p.quantity(n, path, units.DimArea)
-	if err != nil {
-		return 0, err
-	}
-	a := units.Area(v)
-	switch {
-	case a <= 0:
-		return 0, p.errAt(n, path, "must be greater than zero", "")
-	case a >= maxArea:
-		return 0, p.errAt(n, path, "is absurdly large (10 m² or more)", "check the unit")
-	case a < minArea:
-		return 0, p.errAt(n, path, "is absurdly small (under 0.000001 mm²)", "check the unit and the exponent")
-	}
-	return a, nil
+	v, err := p.bounded(n, path, units.DimArea,
+		bound{func(v float64) bool { return v <= 0 }, "must be greater than zero", ""},
+		bound{func(v float64) bool { return v >= float64(maxArea) }, "is absurdly large (10 m² or more)", "check the unit"},
+		bound{func(v float64) bool { return v < float64(minArea) }, "is absurdly small (under 0.000001 mm²)", "check the unit and the exponent"})
+	return units.Area(v), err
 }
 
 // integer reads a whole number in [lo, hi] at path.

@@ -20,6 +20,8 @@ func parseObjective(s string) (Objective, error) {
 	return FewestBolts, fmt.Errorf("unknown objective %q (want bolts or length)", s)
 }
 
+// parseStock reads the stock block (propose), with the default step of
+// the job's unit system.
 func (p *parser) parseStock(n *yaml.Node) error {
 	st := &p.job.Stock
 	st.Step = units.Inch / 4 // common practice, no source
@@ -34,37 +36,13 @@ func (p *parser) parseStock(n *yaml.Node) error {
 		return err
 	}
 	if v := b.vals["diameters"]; v != nil {
-		items, err := p.list(v, "stock.diameters", "[3/4 in, 7/8 in]", 50)
-		if err != nil {
+		if st.Diameters, err = p.stockDiameters(v); err != nil {
 			return err
-		}
-		for i, it := range items {
-			path := fmt.Sprintf("stock.diameters[%d]", i)
-			s, err := p.word(it, path)
-			if err != nil {
-				return err
-			}
-			d, err := units.ParseBoltDiameter(s, p.sys())
-			if err != nil {
-				return p.errAt(it, path, err.Error(), `write a diameter such as "3/4 in", "20 mm" or "M20"`)
-			}
-			if !(d > 0) || d >= 10*units.Inch {
-				return p.errAt(it, path, "is not a bolt diameter", "")
-			}
-			st.Diameters = append(st.Diameters, d)
 		}
 	}
 	if v := b.vals["grades"]; v != nil {
-		items, err := p.list(v, "stock.grades", "[A325, A490]", 50)
-		if err != nil {
+		if st.Grades, err = p.stockGrades(v); err != nil {
 			return err
-		}
-		for i, it := range items {
-			g, err := p.word(it, fmt.Sprintf("stock.grades[%d]", i))
-			if err != nil {
-				return err
-			}
-			st.Grades = append(st.Grades, g)
 		}
 	}
 	if v := b.vals["max_lines"]; v != nil {
@@ -83,16 +61,8 @@ func (p *parser) parseStock(n *yaml.Node) error {
 		}
 	}
 	if v := b.vals["thicknesses"]; v != nil {
-		items, err := p.list(v, "stock.thicknesses", "[3/8 in, 1/2 in]", 50)
-		if err != nil {
+		if st.Thicknesses, err = p.stockThicknesses(v); err != nil {
 			return err
-		}
-		for i, it := range items {
-			t, err := p.length(it, fmt.Sprintf("stock.thicknesses[%d]", i), positive)
-			if err != nil {
-				return err
-			}
-			st.Thicknesses = append(st.Thicknesses, t)
 		}
 	}
 	if v := b.vals["objective"]; v != nil {
@@ -101,6 +71,65 @@ func (p *parser) parseStock(n *yaml.Node) error {
 		}
 	}
 	return nil
+}
+
+// stockDiameters reads stock.diameters, a list of bolt diameters.
+func (p *parser) stockDiameters(v *yaml.Node) ([]units.Length, error) {
+	items, err := p.list(v, "stock.diameters", "[3/4 in, 7/8 in]", 50)
+	if err != nil {
+		return nil, err
+	}
+	var ds []units.Length
+	for i, it := range items {
+		path := fmt.Sprintf("stock.diameters[%d]", i)
+		s, err := p.word(it, path)
+		if err != nil {
+			return nil, err
+		}
+		d, err := units.ParseBoltDiameter(s, p.sys())
+		if err != nil {
+			return nil, p.errAt(it, path, err.Error(), `write a diameter such as "3/4 in", "20 mm" or "M20"`)
+		}
+		if !(d > 0) || d >= 10*units.Inch {
+			return nil, p.errAt(it, path, "is not a bolt diameter", "")
+		}
+		ds = append(ds, d)
+	}
+	return ds, nil
+}
+
+// stockGrades reads stock.grades, a list of bolt grades.
+func (p *parser) stockGrades(v *yaml.Node) ([]string, error) {
+	items, err := p.list(v, "stock.grades", "[A325, A490]", 50)
+	if err != nil {
+		return nil, err
+	}
+	var gs []string
+	for i, it := range items {
+		g, err := p.word(it, fmt.Sprintf("stock.grades[%d]", i))
+		if err != nil {
+			return nil, err
+		}
+		gs = append(gs, g)
+	}
+	return gs, nil
+}
+
+// stockThicknesses reads stock.thicknesses, a list of plate thicknesses.
+func (p *parser) stockThicknesses(v *yaml.Node) ([]units.Length, error) {
+	items, err := p.list(v, "stock.thicknesses", "[3/8 in, 1/2 in]", 50)
+	if err != nil {
+		return nil, err
+	}
+	var ts []units.Length
+	for i, it := range items {
+		t, err := p.length(it, fmt.Sprintf("stock.thicknesses[%d]", i), positive)
+		if err != nil {
+			return nil, err
+		}
+		ts = append(ts, t)
+	}
+	return ts, nil
 }
 
 func (p *parser) parseTolerance(n *yaml.Node) error {
