@@ -8,6 +8,7 @@ import (
 	"gaugeline/engine"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
+	"gaugeline/rules/words"
 )
 
 // Job is a parsed job file (SPEC §3). Quantities are in the internal units
@@ -159,13 +160,13 @@ func (o Objective) Other() Objective {
 	return FewestBolts
 }
 
+var objectives = words.New[Objective]("objective", "bolts", "length")
+
 // String returns the job-file spelling.
-func (o Objective) String() string {
-	if o == ShortestLength {
-		return "length"
-	}
-	return "bolts"
-}
+func (o Objective) String() string { return objectives.Name(o) }
+
+// parseObjective reads the job-file spelling.
+func parseObjective(s string) (Objective, error) { return objectives.Parse(s) }
 
 // Stock is what the shop stocks and prefers (propose only).
 type Stock struct {

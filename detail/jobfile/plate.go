@@ -1,7 +1,6 @@
 package jobfile
 
 import (
-	"fmt"
 	"strings"
 
 	"go.yaml.in/yaml/v3"
@@ -11,16 +10,6 @@ import (
 
 var plateKeys = []string{"kind", "thickness", "grade", "fy", "fu", "width", "edge", "hole", "slot"}
 
-func parsePlateKind(s string) (engine.PlateKind, error) {
-	switch s {
-	case "gusset":
-		return engine.Gusset, nil
-	case "splice":
-		return engine.Splice, nil
-	}
-	return engine.Gusset, fmt.Errorf("unknown plate kind %q (want gusset or splice)", s)
-}
-
 func (p *parser) parsePlate(n *yaml.Node) error {
 	b, err := p.mapping(n, "plate", plateKeys)
 	if err != nil {
@@ -28,7 +17,7 @@ func (p *parser) parsePlate(n *yaml.Node) error {
 	}
 	pl := &PlateSpec{}
 	if b.has("kind") {
-		if pl.Kind, err = enum(p, b.vals["kind"], "plate.kind", parsePlateKind); err != nil {
+		if pl.Kind, err = enum(p, b.vals["kind"], "plate.kind", engine.ParsePlateKind); err != nil {
 			return err
 		}
 	}

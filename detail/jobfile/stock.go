@@ -10,16 +10,6 @@ import (
 
 var stockKeys = []string{"diameters", "grades", "max_lines", "max_per_line", "step", "thicknesses", "objective"}
 
-func parseObjective(s string) (Objective, error) {
-	switch s {
-	case "bolts":
-		return FewestBolts, nil
-	case "length":
-		return ShortestLength, nil
-	}
-	return FewestBolts, fmt.Errorf("unknown objective %q (want bolts or length)", s)
-}
-
 // parseStock reads the stock block (propose), with the default step of
 // the job's unit system.
 func (p *parser) parseStock(n *yaml.Node) error {
