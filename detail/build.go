@@ -7,6 +7,7 @@ import (
 	"strconv"
 	"strings"
 
+	"gaugeline/detail/detailing"
 	"gaugeline/detail/jobfile"
 	"gaugeline/detail/section"
 	"gaugeline/engine"
@@ -267,66 +268,11 @@ func (j job) buildMember(ed *rules.Edition, d *Design) error {
 
 	switch low, _ := m.Shape.FreeEdges(); {
 	case low: // a bar, given by width and thickness
-		mem.Width, mem.T = m.Width, m.Thickness
-		mem.Ag = m.Width.Mul(m.Thickness)
-		info.Designation = "PL " + compact(m.Width, j.Units) + "x" + compact(m.Thickness, j.Units)
-		info.Rmin = units.Length(float64(min(m.Width, m.Thickness)) / math.Sqrt(12))
+		j.buildFlat(mem, info)
 	default:
-		var a section.Angle
-		var err error
-		if m.Size != "" {
-			size := strings.TrimSpace(m.Size)
-			if mem.Pieces == 2 {
-				size = strings.TrimPrefix(size, "2")
-			}
-			a, info.Designation, err = lookupAngle(size, j.Units)
-			if err != nil {
-				hint := "sizes are catalog designations such as L4x4x1/2 (us) or L100x100x10 (si); or give legs and thickness"
-				var ua *section.UnknownAngleError
-				msg := err.Error()
-				if errors.As(err, &ua) {
-					msg = fmt.Sprintf("no angle %q in the %s catalog", m.Size, j.Units)
-					if h := ua.Hint(); h != "" {
-						hint = h
-					}
-				} else {
-					msg = strings.TrimPrefix(msg, "section: ")
-				}
-				return j.FieldError("member.size", msg, hint)
-			}
-			info.K = a.K
-		} else {
-			a, err = section.Custom(m.Legs[0], m.Legs[1], m.Thickness)
-			if err != nil {
-				return j.FieldError("member.legs", strings.TrimPrefix(err.Error(), "section: "), "")
-			}
-			info.Designation = "L" + compact(m.Legs[0], j.Units) + "x" + compact(m.Legs[1], j.Units) + "x" + compact(m.Thickness, j.Units)
-			info.K = a.T
-		}
-		if err := j.checkOverrides(a, info.Designation); err != nil {
+		if err := j.buildAngle(mem, info); err != nil {
 			return err
 		}
-		props := a.Properties()
-		mem.Width, mem.Outstanding, mem.T = a.A, a.B, a.T
-		area := props.Area
-		if m.Area > 0 {
-			area = m.Area
-		}
-		mem.Xbar = props.Xbar
-		if m.Xbar > 0 {
-			mem.Xbar = m.Xbar
-		}
-		info.Rmin = props.Rmin
-		if mem.Pieces == 2 {
-			info.Designation = "2" + info.Designation
-			info.Rmin = a.Double(j.gap()).Rmin
-		}
-		// An rmin override is of one angle: for a pair it is a lower bound
-		// on the pair's least r, so using it is conservative.
-		if m.Rmin > 0 {
-			info.Rmin = m.Rmin
-		}
-		mem.Ag = area * units.Area(mem.Pieces)
 	}
 
 	st, err := j.steel(ed, m.Steel, "member")
@@ -337,6 +283,88 @@ func (j job) buildMember(ed *rules.Edition, d *Design) error {
 	info.Grade = st.Name
 	info.Weathering = st.Weathering
 	return nil
+}
+
+// buildFlat sets the section of a flat bar from its width and thickness.
+func (j job) buildFlat(mem *engine.Member, info *detailing.MemberInfo) {
+	m := j.Member
+	mem.Width, mem.T = m.Width, m.Thickness
+	mem.Ag = m.Width.Mul(m.Thickness)
+	info.Designation = "PL " + compact(m.Width, j.Units) + "x" + compact(m.Thickness, j.Units)
+	info.Rmin = units.Length(float64(min(m.Width, m.Thickness)) / math.Sqrt(12))
+}
+
+// buildAngle sets the section of a single or double angle, from the
+// catalog or from legs and thickness, with the job's overrides of one
+// angle's properties.
+func (j job) buildAngle(mem *engine.Member, info *detailing.MemberInfo) error {
+	m := j.Member
+	a, err := j.angle(mem, info)
+	if err != nil {
+		return err
+	}
+	if err := j.checkOverrides(a, info.Designation); err != nil {
+		return err
+	}
+	props := a.Properties()
+	mem.Width, mem.Outstanding, mem.T = a.A, a.B, a.T
+	area := props.Area
+	if m.Area > 0 {
+		area = m.Area
+	}
+	mem.Xbar = props.Xbar
+	if m.Xbar > 0 {
+		mem.Xbar = m.Xbar
+	}
+	info.Rmin = props.Rmin
+	if mem.Pieces == 2 {
+		info.Designation = "2" + info.Designation
+		info.Rmin = a.Double(j.gap()).Rmin
+	}
+	// An rmin override is of one angle: for a pair it is a lower bound
+	// on the pair's least r, so using it is conservative.
+	if m.Rmin > 0 {
+		info.Rmin = m.Rmin
+	}
+	mem.Ag = area * units.Area(mem.Pieces)
+	return nil
+}
+
+// angle returns one angle of the member, looked up by member.size or made
+// from member.legs and thickness, and sets its designation and k.
+func (j job) angle(mem *engine.Member, info *detailing.MemberInfo) (section.Angle, error) {
+	m := j.Member
+	if m.Size == "" {
+		a, err := section.Custom(m.Legs[0], m.Legs[1], m.Thickness)
+		if err != nil {
+			return a, j.FieldError("member.legs", strings.TrimPrefix(err.Error(), "section: "), "")
+		}
+		info.Designation = "L" + compact(m.Legs[0], j.Units) + "x" + compact(m.Legs[1], j.Units) + "x" + compact(m.Thickness, j.Units)
+		info.K = a.T
+		return a, nil
+	}
+	size := strings.TrimSpace(m.Size)
+	if mem.Pieces == 2 {
+		size = strings.TrimPrefix(size, "2")
+	}
+	a, designation, err := lookupAngle(size, j.Units)
+	info.Designation = designation
+	if err != nil {
+		hint := "sizes are catalog designations such as L4x4x1/2 (us) or L100x100x10 (si); or give legs and thickness"
+		var ua *section.UnknownAngleError
+		msg := err.Error()
+		if errors.As(err, &ua) {
+			msg = fmt.Sprintf("no angle %q in the %s catalog", m.Size, j.Units)
+			if h := ua.Hint(); h != "" {
+				hint = h
+			}
+		} else {
+			msg = strings.TrimPrefix(msg, "section: ")
+		}
+		return a, j.FieldError("member.size", msg, hint)
+	}
+	info.K = a.K
+	return a, nil
 }
 
 // checkOverrides refuses a section override (member.area, xbar, rmin, all

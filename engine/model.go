@@ -3,6 +3,7 @@ package engine
 import (
 	"gaugeline/rules"
 	"gaugeline/rules/units"
+	"gaugeline/rules/words"
 )
 
 // Member is the tension member at its connected end.
@@ -37,13 +38,13 @@ const (
 	Splice
 )
 
+var plateKinds = words.New[PlateKind]("plate kind", "gusset", "splice")
+
 // String returns the job-file spelling.
-func (k PlateKind) String() string {
-	if k == Splice {
-		return "splice"
-	}
-	return "gusset"
-}
+func (k PlateKind) String() string { return plateKinds.Name(k) }
+
+// ParsePlateKind reads the job-file spelling.
+func ParsePlateKind(s string) (PlateKind, error) { return plateKinds.Parse(s) }
 
 // Plate is the gusset or splice plate the member bolts to: a rectangle
 // Width across the load, centred in y on the bolt group, ending at its

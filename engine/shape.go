@@ -1,9 +1,8 @@
 package engine
 
 import (
-	"strings"
-
 	"gaugeline/rules/units"
+	"gaugeline/rules/words"
 )
 
 // Shape is the cross-section of the tension member, told by what the
@@ -62,10 +61,7 @@ func ShapeNames() string {
 	for _, s := range Shapes() {
 		names = append(names, s.String())
 	}
-	if len(names) < 2 {
-		return strings.Join(names, "")
-	}
-	return strings.Join(names[:len(names)-1], ", ") + " or " + names[len(names)-1]
+	return words.Alternatives(names)
 }
 
 // Heel reports whether the connected element's y = 0 edge is a heel, not

@@ -4,6 +4,7 @@ import (
 	"fmt"
 
 	"gaugeline/rules/units"
+	"gaugeline/rules/words"
 )
 
 // HoleType is the kind of bolt hole (AISC 360 J3.2 [J3.3]).
@@ -16,23 +17,16 @@ const (
 	LongSlot
 )
 
-var holeTypeNames = [...]string{"standard", "oversized", "short-slot", "long-slot"}
+var holeTypes = words.New[HoleType]("hole type", "standard", "oversized", "short-slot", "long-slot")
 
 // String returns the job-file spelling.
-func (h HoleType) String() string { return holeTypeNames[h] }
+func (h HoleType) String() string { return holeTypes.Name(h) }
 
 // IsSlot reports whether the hole is slotted.
 func (h HoleType) IsSlot() bool { return h == ShortSlot || h == LongSlot }
 
 // ParseHoleType reads the job-file spelling.
-func ParseHoleType(s string) (HoleType, error) {
-	for i, n := range holeTypeNames {
-		if n == s {
-			return HoleType(i), nil
-		}
-	}
-	return Standard, fmt.Errorf("unknown hole type %q (want standard, oversized, short-slot or long-slot)", s)
-}
+func ParseHoleType(s string) (HoleType, error) { return holeTypes.Parse(s) }
 
 // SlotDir is the direction of a slot's long axis relative to the load.
 type SlotDir int
@@ -42,24 +36,13 @@ const (
 	Longitudinal                // long axis along the load (along x)
 )
 
+var slotDirs = words.New[SlotDir]("slot direction", "transverse", "longitudinal")
+
 // String returns the job-file spelling.
-func (d SlotDir) String() string {
-	if d == Longitudinal {
-		return "longitudinal"
-	}
-	return "transverse"
-}
+func (d SlotDir) String() string { return slotDirs.Name(d) }
 
 // ParseSlotDir reads the job-file spelling.
-func ParseSlotDir(s string) (SlotDir, error) {
-	switch s {
-	case "transverse":
-		return Transverse, nil
-	case "longitudinal":
-		return Longitudinal, nil
-	}
-	return Transverse, fmt.Errorf("unknown slot direction %q (want transverse or longitudinal)", s)
-}
+func ParseSlotDir(s string) (SlotDir, error) { return slotDirs.Parse(s) }
 
 // Joint is the type of bolted joint.
 type Joint int
@@ -70,20 +53,13 @@ const (
 	SlipCritical
 )
 
-var jointNames = [...]string{"bearing", "pretensioned", "slip-critical"}
+var joints = words.New[Joint]("joint type", "bearing", "pretensioned", "slip-critical")
 
 // String returns the job-file spelling.
-func (j Joint) String() string { return jointNames[j] }
+func (j Joint) String() string { return joints.Name(j) }
 
 // ParseJoint reads the job-file spelling.
-func ParseJoint(s string) (Joint, error) {
-	for i, n := range jointNames {
-		if n == s {
-			return Joint(i), nil
-		}
-	}
-	return Bearing, fmt.Errorf("unknown joint type %q (want bearing, pretensioned or slip-critical)", s)
-}
+func ParseJoint(s string) (Joint, error) { return joints.Parse(s) }
 
 // Threads says whether bolt threads are in or out of the shear planes.
 type Threads int
@@ -93,24 +69,13 @@ const (
 	ThreadsExcluded                // X
 )
 
+var threadsConditions = words.New[Threads]("threads condition", "included", "excluded")
+
 // String returns the job-file spelling.
-func (t Threads) String() string {
-	if t == ThreadsExcluded {
-		return "excluded"
-	}
-	return "included"
-}
+func (t Threads) String() string { return threadsConditions.Name(t) }
 
 // ParseThreads reads the job-file spelling.
-func ParseThreads(s string) (Threads, error) {
-	switch s {
-	case "included":
-		return ThreadsIncluded, nil
-	case "excluded":
-		return ThreadsExcluded, nil
-	}
-	return ThreadsIncluded, fmt.Errorf("unknown threads condition %q (want included or excluded)", s)
-}
+func ParseThreads(s string) (Threads, error) { return threadsConditions.Parse(s) }
 
 // SlipClass is the faying-surface class of a slip-critical joint.
 type SlipClass int
@@ -120,24 +85,13 @@ const (
 	ClassB
 )
 
+var slipClasses = words.New[SlipClass]("slip class", "A", "B")
+
 // String returns the job-file spelling.
-func (c SlipClass) String() string {
-	if c == ClassB {
-		return "B"
-	}
-	return "A"
-}
+func (c SlipClass) String() string { return slipClasses.Name(c) }
 
 // ParseSlipClass reads the job-file spelling.
-func ParseSlipClass(s string) (SlipClass, error) {
-	switch s {
-	case "A":
-		return ClassA, nil
-	case "B":
-		return ClassB, nil
-	}
-	return ClassA, fmt.Errorf("unknown slip class %q (want A or B)", s)
-}
+func ParseSlipClass(s string) (SlipClass, error) { return slipClasses.Parse(s) }
 
 // Method is the design method: LRFD or ASD.
 type Method int
@@ -147,24 +101,13 @@ const (
 	ASD
 )
 
+var methods = words.New[Method]("method", "lrfd", "asd")
+
 // String returns the job-file spelling.
-func (m Method) String() string {
-	if m == ASD {
-		return "asd"
-	}
-	return "lrfd"
-}
+func (m Method) String() string { return methods.Name(m) }
 
 // ParseMethod reads the job-file spelling.
-func ParseMethod(s string) (Method, error) {
-	switch s {
-	case "lrfd":
-		return LRFD, nil
-	case "asd":
-		return ASD, nil
-	}
-	return LRFD, fmt.Errorf("unknown method %q (want lrfd or asd)", s)
-}
+func ParseMethod(s string) (Method, error) { return methods.Parse(s) }
 
 // Factor is a resistance factor φ (LRFD) with its safety factor Ω (ASD).
 type Factor struct {

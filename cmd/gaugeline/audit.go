@@ -13,20 +13,18 @@ import (
 )
 
 func newAuditCmd(o *rootOptions) *cobra.Command {
-	return &cobra.Command{
-		Use:   "audit DIR",
-		Short: "Check that every mark's file set in an output folder is whole and of one run",
-		Long: "audit reads an output folder of sheet, batch or demo and checks each mark's folder: its manifest\n" +
-			"MARK.files is there, every file it lists is there unchanged (SHA-256), every file carries the\n" +
-			"set's stamp (tool version, mode, input SHA-256), and nothing else is in it. It also reports files\n" +
-			"that belong to no set, a summary of a batch that did not finish, and summary rows that do not\n" +
-			"describe the set beside them. Leftovers of an interrupted run are noted (the next run removes\n" +
+	return command("audit DIR",
+		"Check that every mark's file set in an output folder is whole and of one run",
+		"audit reads an output folder of sheet, batch or demo and checks each mark's folder: its manifest\n"+
+			"MARK.files is there, every file it lists is there unchanged (SHA-256), every file carries the\n"+
+			"set's stamp (tool version, mode, input SHA-256), and nothing else is in it. It also reports files\n"+
+			"that belong to no set, a summary of a batch that did not finish, and summary rows that do not\n"+
+			"describe the set beside them. Leftovers of an interrupted run are noted (the next run removes\n"+
 			"them). Exit 0 when every set is whole, 1 when any problem is found, 2 when DIR cannot be read.",
-		Args: argsExactly(1, "one output folder"),
-		RunE: func(cmd *cobra.Command, args []string) error {
-			return runAudit(cmd.Context(), o, args[0], o.stdout)
-		},
-	}
+		argsExactly(1, "one output folder"),
+		func(ctx context.Context, args []string) error {
+			return runAudit(ctx, o, args[0], o.stdout)
+		})
 }
 
 func runAudit(_ context.Context, o *rootOptions, dir string, out io.Writer) error {

@@ -16,31 +16,28 @@ type checkOptions struct {
 
 func newCheckCmd(o *rootOptions) *cobra.Command {
 	var co checkOptions
-	cmd := &cobra.Command{
-		Use:   "check JOB.yaml",
-		Short: "Check a layout: every detailing rule and tension limit state",
-		Long: "check reads a job file and checks the bolt layout in it against every detailing rule and every\n" +
-			"tension limit state, on the member and on the plate. Exit 0 when everything passes, 1 when\n" +
+	cmd := command("check JOB.yaml",
+		"Check a layout: every detailing rule and tension limit state",
+		"check reads a job file and checks the bolt layout in it against every detailing rule and every\n"+
+			"tension limit state, on the member and on the plate. Exit 0 when everything passes, 1 when\n"+
 			"anything fails, 2 on bad input.",
-		Args: argsExactly(1, "one job file"),
-		RunE: func(cmd *cobra.Command, args []string) error {
-			return runCheck(cmd.Context(), o, co, args[0], o.stdout)
-		},
-	}
-	cmd.Flags().StringVar(&co.format, "format", "text", "output format: text, json or markdown")
+		argsExactly(1, "one job file"),
+		func(ctx context.Context, args []string) error {
+			return runCheck(ctx, o, co, args[0], o.stdout)
+		})
+	formatFlag(cmd, &co.format)
 	return cmd
 }
 
 func runCheck(_ context.Context, _ *rootOptions, co checkOptions, path string, out io.Writer) error {
-	write, err := reportWriter(co.format)
-	if err != nil {
+	if err := checkFormat(co.format); err != nil {
 		return err
 	}
 	r, err := detail.CheckFile(path)
 	if err != nil {
 		return err
 	}
-	if err := write(r, out); err != nil {
+	if err := writeFormat(out, co.format, r.JSON, r.WriteMarkdown, r.WriteText); err != nil {
 		return err
 	}
 	if !r.Pass {
@@ -49,22 +46,34 @@ func runCheck(_ context.Context, _ *rootOptions, co checkOptions, path string, o
 	return nil
 }
 
-// reportWriter picks the writer for --format.
-func reportWriter(format string) (func(*detail.Report, io.Writer) error, error) {
+// formatFlag adds --format, the output format of check, propose and
+// reverify, to cmd.
+func formatFlag(cmd *cobra.Command, format *string) {
+	cmd.Flags().StringVar(format, "format", "text", "output format: text, json or markdown")
+}
+
+// checkFormat refuses a --format that is not text, json or markdown.
+func checkFormat(format string) error {
 	switch format {
-	case "text":
-		return (*detail.Report).WriteText, nil
-	case "markdown":
-		return (*detail.Report).WriteMarkdown, nil
-	case "json":
-		return func(r *detail.Report, w io.Writer) error {
-			b, err := r.JSON()
-			if err != nil {
-				return err
-			}
-			_, err = w.Write(b)
-			return err
-		}, nil
+	case "text", "json", "markdown":
+		return nil
 	}
-	return nil, usageError{fmt.Errorf("--format: unknown format %q (want text, json or markdown)", format)}
+	return usageError{fmt.Errorf("--format: unknown format %q (want text, json or markdown)", format)}
+}
+
+// writeFormat writes a result to out in the format checkFormat passed:
+// the bytes of its JSON, its Markdown or its text.
+func writeFormat(out io.Writer, format string, json func() ([]byte, error), markdown, text func(io.Writer) error) error {
+	switch format {
+	case "json":
+		b, err := json()
+		if err != nil {
+			return err
+		}
+		_, err = out.Write(b)
+		return err
+	case "markdown":
+		return markdown(out)
+	}
+	return text(out)
 }

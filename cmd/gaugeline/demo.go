@@ -2,6 +2,7 @@ package main
 
 import (
 	"bytes"
+	"context"
 	"embed"
 	"fmt"
 	"io"
@@ -40,18 +41,16 @@ type demoOptions struct {
 
 func newDemoCmd(o *rootOptions) *cobra.Command {
 	var do demoOptions
-	cmd := &cobra.Command{
-		Use:   "demo [-o DIR]",
-		Short: "Run the built-in tour: propose, check, draw and re-verify an invented pipe rack's bracing",
-		Long: "demo walks the whole loop on three invented connections of a small pipe rack: it proposes a\n" +
-			"bolt layout for each, checks it, writes the filled-in job, the check as JSON, the DXF cut sheet,\n" +
-			"the CAM files and the HTML calculation report, then re-verifies one fabricated part from an\n" +
+	cmd := command("demo [-o DIR]",
+		"Run the built-in tour: propose, check, draw and re-verify an invented pipe rack's bracing",
+		"demo walks the whole loop on three invented connections of a small pipe rack: it proposes a\n"+
+			"bolt layout for each, checks it, writes the filled-in job, the check as JSON, the DXF cut sheet,\n"+
+			"the CAM files and the HTML calculation report, then re-verifies one fabricated part from an\n"+
 			"invented measured file and prints the QA verdict.",
-		Args: argsExactly(0, "no arguments"),
-		RunE: func(cmd *cobra.Command, _ []string) error {
+		argsExactly(0, "no arguments"),
+		func(_ context.Context, _ []string) error {
 			return runDemo(do, o.stdout)
-		},
-	}
+		})
 	cmd.Flags().StringVarP(&do.dir, "output", "o", filepath.Join(os.TempDir(), "gaugeline-demo"),
 		"directory for everything the demo writes")
 	return cmd

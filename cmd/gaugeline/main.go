@@ -187,3 +187,11 @@ func argsExactly(n int, what string) cobra.PositionalArgs {
 		return nil
 	}
 }
+
+// command is a subcommand: its usage line, its one-line and its long help
+// ("" for none), the arguments it takes and what it runs with the
+// command's context and those arguments. The constructor adds the flags.
+func command(use, short, long string, args cobra.PositionalArgs, run func(ctx context.Context, args []string) error) *cobra.Command {
+	return &cobra.Command{Use: use, Short: short, Long: long, Args: args,
+		RunE: func(cmd *cobra.Command, args []string) error { return run(cmd.Context(), args) }}
+}

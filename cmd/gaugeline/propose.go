@@ -36,20 +36,18 @@ type proposeOptions struct {
 
 func newProposeCmd(o *rootOptions) *cobra.Command {
 	var po proposeOptions
-	cmd := &cobra.Command{
-		Use:   "propose JOB.yaml",
-		Short: "Find the best passing bolt layout within the job's stock",
-		Long: "propose searches the job's stock (diameters, grades, plate thicknesses, lines and bolts per line,\n" +
-			"pitch, end, gage and edge distances on the step grid) for the layout with the fewest bolts (or the\n" +
-			"shortest, with stock.objective: length) that passes every detailing rule and limit state, and prints\n" +
-			"its full check. Exit 0 when a layout is found, 1 when nothing in the stock passes (the message says\n" +
+	cmd := command("propose JOB.yaml",
+		"Find the best passing bolt layout within the job's stock",
+		"propose searches the job's stock (diameters, grades, plate thicknesses, lines and bolts per line,\n"+
+			"pitch, end, gage and edge distances on the step grid) for the layout with the fewest bolts (or the\n"+
+			"shortest, with stock.objective: length) that passes every detailing rule and limit state, and prints\n"+
+			"its full check. Exit 0 when a layout is found, 1 when nothing in the stock passes (the message says\n"+
 			"what blocks and what would lift it), 2 on bad input.",
-		Args: argsExactly(1, "one job file"),
-		RunE: func(cmd *cobra.Command, args []string) error {
-			return runPropose(cmd.Context(), o, po, args[0], o.stdout)
-		},
-	}
-	cmd.Flags().StringVar(&po.format, "format", "text", "output format: text, json or markdown")
+		argsExactly(1, "one job file"),
+		func(ctx context.Context, args []string) error {
+			return runPropose(ctx, o, po, args[0], o.stdout)
+		})
+	formatFlag(cmd, &po.format)
 	cmd.Flags().IntVar(&po.alternatives, "alternatives", 3, fmt.Sprintf("how many other layouts to list (0 to %d)", maxAlternatives))
 	cmd.Flags().BoolVar(&po.exhaustive, "exhaustive", false, "check every candidate (reference mode; slow)")
 	cmd.Flags().IntVar(&po.maxCand, "max-candidates", defaultMaxCandidates,
@@ -59,10 +57,8 @@ func newProposeCmd(o *rootOptions) *cobra.Command {
 }
 
 func runPropose(_ context.Context, o *rootOptions, po proposeOptions, path string, out io.Writer) error {
-	switch po.format {
-	case "text", "json", "markdown":
-	default:
-		return usageError{fmt.Errorf("--format: unknown format %q (want text, json or markdown)", po.format)}
+	if err := checkFormat(po.format); err != nil {
+		return err
 	}
 	if po.alternatives < 0 || po.alternatives > maxAlternatives {
 		return usageError{fmt.Errorf("--alternatives: want 0 to %d, not %d", maxAlternatives, po.alternatives)}
@@ -94,23 +90,10 @@ func runPropose(_ context.Context, o *rootOptions, po proposeOptions, path strin
 			return err
 		}
 	}
-	switch po.format {
-	case "json":
-		b, err := p.JSON(mode)
-		if err != nil {
-			return err
-		}
-		if _, err := out.Write(b); err != nil {
-			return err
-		}
-	case "markdown":
-		if err := p.WriteMarkdown(out, mode); err != nil {
-			return err
-		}
-	default:
-		if err := p.WriteText(out, mode); err != nil {
-			return err
-		}
+	err = writeFormat(out, po.format, func() ([]byte, error) { return p.JSON(mode) },
+		func(w io.Writer) error { return p.WriteMarkdown(w, mode) }, func(w io.Writer) error { return p.WriteText(w, mode) })
+	if err != nil {
+		return err
 	}
 	if !p.Found() {
 		fmt.Fprintf(o.stderr, "gaugeline: no layout passes: %s\n", p.Summary)

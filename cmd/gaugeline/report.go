@@ -20,18 +20,16 @@ type reportOptions struct {
 
 func newReportCmd(o *rootOptions) *cobra.Command {
 	var ro reportOptions
-	cmd := &cobra.Command{
-		Use:   "report JOB.yaml -o FILE.html",
-		Short: "Write the calculation report of a job as one self-contained HTML page",
-		Long: "report checks the job and writes its calculation report to FILE.html: the connection, a drawing\n" +
-			"of the layout from the cut-sheet model, every limit state with its formula, the values put into it,\n" +
-			"the result and the clause, the detailing findings, the verdict and the caution. The page needs no\n" +
+	cmd := command("report JOB.yaml -o FILE.html",
+		"Write the calculation report of a job as one self-contained HTML page",
+		"report checks the job and writes its calculation report to FILE.html: the connection, a drawing\n"+
+			"of the layout from the cut-sheet model, every limit state with its formula, the values put into it,\n"+
+			"the result and the clause, the detailing findings, the verdict and the caution. The page needs no\n"+
 			"network. A failing connection gets its report too, then exits 1; bad input exits 2 and writes nothing.",
-		Args: argsExactly(1, "one job file"),
-		RunE: func(cmd *cobra.Command, args []string) error {
-			return runReport(cmd.Context(), o, ro, args[0], o.stdout)
-		},
-	}
+		argsExactly(1, "one job file"),
+		func(ctx context.Context, args []string) error {
+			return runReport(ctx, o, ro, args[0], o.stdout)
+		})
 	cmd.Flags().StringVarP(&ro.out, "output", "o", "", "the HTML file to write (its directory is created if missing)")
 	return cmd
 }

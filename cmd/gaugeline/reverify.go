@@ -25,21 +25,19 @@ type reverifyOptions struct {
 
 func newReverifyCmd(o *rootOptions) *cobra.Command {
 	var ro reverifyOptions
-	cmd := &cobra.Command{
-		Use:   "reverify JOB.yaml --measured FILE",
-		Short: "QA: check an as-fabricated part from its measured holes",
-		Long: "reverify matches the holes measured on a fabricated part (a CSV of x,y,diameter[,id] or a DXF of\n" +
-			"the part) to the design in the job, reports each hole's deviation against the fabrication\n" +
-			"tolerance, reclassifies enlarged holes, and recomputes every detailing rule and limit state on\n" +
-			"the as-built geometry. A measured file is of one part (--part): that part's holes are taken as\n" +
-			"measured, the other part's as designed. Exit 0 accept (within tolerance and passing), 3 review\n" +
-			"(out of tolerance but passing as built: engineer of record), 1 reject (fails as built, or holes\n" +
+	cmd := command("reverify JOB.yaml --measured FILE",
+		"QA: check an as-fabricated part from its measured holes",
+		"reverify matches the holes measured on a fabricated part (a CSV of x,y,diameter[,id] or a DXF of\n"+
+			"the part) to the design in the job, reports each hole's deviation against the fabrication\n"+
+			"tolerance, reclassifies enlarged holes, and recomputes every detailing rule and limit state on\n"+
+			"the as-built geometry. A measured file is of one part (--part): that part's holes are taken as\n"+
+			"measured, the other part's as designed. Exit 0 accept (within tolerance and passing), 3 review\n"+
+			"(out of tolerance but passing as built: engineer of record), 1 reject (fails as built, or holes\n"+
 			"missing), 2 bad input.",
-		Args: argsExactly(1, "one job file"),
-		RunE: func(cmd *cobra.Command, args []string) error {
-			return runReverify(cmd.Context(), o, ro, args[0], o.stdout)
-		},
-	}
+		argsExactly(1, "one job file"),
+		func(ctx context.Context, args []string) error {
+			return runReverify(ctx, o, ro, args[0], o.stdout)
+		})
 	f := cmd.Flags()
 	f.StringVar(&ro.measured, "measured", "", "measured holes: a .csv (x,y,diameter[,id]) or a .dxf of the part")
 	f.StringVar(&ro.layer, "layer", "", "DXF: take the circles on this layer (default: every circle inside the part's contour)")
@@ -47,7 +45,7 @@ func newReverifyCmd(o *rootOptions) *cobra.Command {
 	f.StringVar(&ro.part, "part", "member", "the part measured: member (job frame, as its CAM file) or plate (the plate's frame, as its CAM file)")
 	f.StringVar(&ro.position, "position", "", "position tolerance, radial (default: the job's tolerance, else 1/16 in or 2 mm)")
 	f.StringVar(&ro.diameter, "diameter", "", "diameter tolerance over nominal (default: the job's tolerance, else 1/32 in or 1 mm)")
-	f.StringVar(&ro.format, "format", "text", "output format: text, json or markdown")
+	formatFlag(cmd, &ro.format)
 	return cmd
 }
 
@@ -56,51 +54,20 @@ func newReverifyCmd(o *rootOptions) *cobra.Command {
 const maxTolerance = 100 * units.Millimetre
 
 func runReverify(_ context.Context, _ *rootOptions, ro reverifyOptions, path string, out io.Writer) error {
-	switch ro.format {
-	case "text", "json", "markdown":
-	default:
-		return usageError{fmt.Errorf("--format: unknown format %q (want text, json or markdown)", ro.format)}
-	}
-	if ro.measured == "" {
-		return usageError{fmt.Errorf("--measured is required: the measured holes as .csv or .dxf")}
-	}
-	align, err := qa.ParseAlign(ro.align)
+	opt, err := reverifyFlags(ro)
 	if err != nil {
-		return usageError{fmt.Errorf("--align: %w", err)}
-	}
-	part, err := qa.ParsePart(ro.part)
-	if err != nil {
-		return usageError{fmt.Errorf("--part: %w", err)}
+		return err
 	}
 	job, err := jobfile.LoadJob(path)
 	if err != nil {
 		return err
 	}
-	if part == qa.MeasuredPlate && job.Plate == nil {
+	if opt.Part == qa.MeasuredPlate && job.Plate == nil {
 		return &jobfile.InputError{File: path, Field: "--part", Msg: "the job has no plate to measure",
 			Hint: "--part plate needs the job's plate block; a measured member is --part member"}
 	}
-	opt := qa.ReverifyOptions{Align: align, Part: part}
-	for _, t := range []struct {
-		flag, val string
-		dst       *units.Length
-	}{{"position", ro.position, &opt.Tolerance.Position}, {"diameter", ro.diameter, &opt.Tolerance.Diameter}} {
-		if t.val == "" {
-			continue
-		}
-		v, err := units.ParseLength(t.val, job.Units)
-		if err != nil || !(v > 0) || v > maxTolerance {
-			most := "100 mm"
-			if job.Units == units.US {
-				most += " (3.94 in)"
-			}
-			msg := fmt.Sprintf("want a length above 0 and at most %s, not %s", most, t.val)
-			if err != nil {
-				msg += " (" + err.Error() + ")"
-			}
-			return usageError{fmt.Errorf("--%s: %s", t.flag, msg)}
-		}
-		*t.dst = v
+	if err := toleranceFlags(ro, job.Units, &opt.Tolerance); err != nil {
+		return err
 	}
 	d, err := detail.Build(job)
 	if err != nil {
@@ -114,26 +81,58 @@ func runReverify(_ context.Context, _ *rootOptions, ro reverifyOptions, path str
 	if err != nil {
 		return &jobfile.InputError{File: path, Msg: err.Error()}
 	}
-	switch ro.format {
-	case "json":
-		b, err := ab.JSON()
-		if err != nil {
-			return err
-		}
-		if _, err := out.Write(b); err != nil {
-			return err
-		}
-	case "markdown":
-		if err := ab.WriteMarkdown(out); err != nil {
-			return err
-		}
-	default:
-		if err := ab.WriteText(out); err != nil {
-			return err
-		}
+	if err := writeFormat(out, ro.format, ab.JSON, ab.WriteMarkdown, ab.WriteText); err != nil {
+		return err
 	}
 	if code := ab.Exit(); code != exitOK {
 		return exitError{code}
+	}
+	return nil
+}
+
+// reverifyFlags checks the flags that need no job (--format, --measured,
+// --align, --part) and returns the options they set.
+func reverifyFlags(ro reverifyOptions) (qa.ReverifyOptions, error) {
+	var opt qa.ReverifyOptions
+	if err := checkFormat(ro.format); err != nil {
+		return opt, err
+	}
+	if ro.measured == "" {
+		return opt, usageError{fmt.Errorf("--measured is required: the measured holes as .csv or .dxf")}
+	}
+	var err error
+	if opt.Align, err = qa.ParseAlign(ro.align); err != nil {
+		return opt, usageError{fmt.Errorf("--align: %w", err)}
+	}
+	if opt.Part, err = qa.ParsePart(ro.part); err != nil {
+		return opt, usageError{fmt.Errorf("--part: %w", err)}
+	}
+	return opt, nil
+}
+
+// toleranceFlags reads --position and --diameter, lengths in the job's
+// units, into tol where they are given.
+func toleranceFlags(ro reverifyOptions, sys units.System, tol *jobfile.Tolerance) error {
+	for _, t := range []struct {
+		flag, val string
+		dst       *units.Length
+	}{{"position", ro.position, &tol.Position}, {"diameter", ro.diameter, &tol.Diameter}} {
+		if t.val == "" {
+			continue
+		}
+		v, err := units.ParseLength(t.val, sys)
+		if err != nil || !(v > 0) || v > maxTolerance {
+			most := "100 mm"
+			if sys == units.US {
+				most += " (3.94 in)"
+			}
+			msg := fmt.Sprintf("want a length above 0 and at most %s, not %s", most, t.val)
+			if err != nil {
+				msg += " (" + err.Error() + ")"
+			}
+			return usageError{fmt.Errorf("--%s: %s", t.flag, msg)}
+		}
+		*t.dst = v
 	}
 	return nil
 }

@@ -1,6 +1,7 @@
 package main
 
 import (
+	"context"
 	"fmt"
 	"io"
 	"strings"
@@ -19,14 +20,13 @@ type rulesOptions struct {
 
 func newRulesCmd(o *rootOptions) *cobra.Command {
 	var ro rulesOptions
-	cmd := &cobra.Command{
-		Use:   "rules",
-		Short: "Print the rule tables in force for a standard and unit system",
-		Args:  argsExactly(0, "no arguments"),
-		RunE: func(cmd *cobra.Command, _ []string) error {
+	cmd := command("rules",
+		"Print the rule tables in force for a standard and unit system",
+		"",
+		argsExactly(0, "no arguments"),
+		func(_ context.Context, _ []string) error {
 			return runRules(ro, o.stdout)
-		},
-	}
+		})
 	cmd.Flags().StringVar(&ro.standard, "standard", "aisc360-22", "edition: "+strings.Join(rules.Names(), " or "))
 	cmd.Flags().StringVar(&ro.units, "units", "us", "unit system: us or si")
 	return cmd
@@ -41,15 +41,36 @@ func runRules(ro rulesOptions, out io.Writer) error {
 	if err != nil {
 		return usageError{fmt.Errorf("--standard: %w", err)}
 	}
-	lb := sys.Labels()
-	size := func(l units.Length) string {
-		if sys == units.US {
-			return units.FormatLength(l, units.US, units.Shop)
-		}
-		return units.FormatLength(l, units.SI, units.Job.Bare())
+	t := ruleTables{e: e, sys: sys, lb: sys.Labels(), tw: tabwriter.NewWriter(out, 0, 0, 2, ' ', 0)}
+	t.holes()
+	t.boltGrades()
+	t.pretension()
+	t.steels()
+	return t.factors()
+}
+
+// ruleTables prints the tables of an edition in one unit system, one
+// block after another, each flushed so its columns are its own.
+type ruleTables struct {
+	e   *rules.Edition
+	sys units.System
+	lb  units.Labels
+	tw  *tabwriter.Writer
+}
+
+// size prints a length: US as the shop reads it, SI in bare mm.
+func (t ruleTables) size(l units.Length) string {
+	if t.sys == units.US {
+		return units.FormatLength(l, units.US, units.Shop)
 	}
-	slot := func(h rules.HoleSize) string { return size(h.Width) + " x " + size(h.Length) }
-	tw := tabwriter.NewWriter(out, 0, 0, 2, ' ', 0)
+	return units.FormatLength(l, units.SI, units.Job.Bare())
+}
+
+// holes prints the title and, per bolt diameter, the hole sizes, the
+// minimum edge distance and its increments (Tables J3.3, J3.4).
+func (t ruleTables) holes() {
+	e, sys, tw := t.e, t.sys, t.tw
+	slot := func(h rules.HoleSize) string { return t.size(h.Width) + " x " + t.size(h.Length) }
 	lenUnit := "inches"
 	if sys == units.SI {
 		lenUnit = "mm"
@@ -67,15 +88,21 @@ func runRules(ro rulesOptions, out io.Writer) error {
 			c2[i], _ = e.EdgeIncrement(d, rules.HoleType(i+1))
 		}
 		me, _ := e.MinEdge(d)
-		name := size(d)
+		name := t.size(d)
 		if sys == units.SI {
 			name = fmt.Sprintf("M%g", float64(d))
 		}
-		fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\n", name, size(h[0].Width), size(h[1].Width), slot(h[2]), slot(h[3]),
-			size(me), size(c2[0]), size(c2[1]), size(c2[2]))
+		fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\n", name, t.size(h[0].Width), t.size(h[1].Width), slot(h[2]), slot(h[3]),
+			t.size(me), t.size(c2[0]), t.size(c2[1]), t.size(c2[2]))
 	}
 	tw.Flush()
-	fmt.Fprintf(tw, "\nBOLT GRADE\tGROUP\tFnt %s\tFnv threads included\tFnv threads excluded\t(Table J3.2)\n", lb.Stress)
+}
+
+// boltGrades prints the nominal stresses of every bolt grade (Table
+// J3.2), then the long-joint reduction.
+func (t ruleTables) boltGrades() {
+	e, sys, tw := t.e, t.sys, t.tw
+	fmt.Fprintf(tw, "\nBOLT GRADE\tGROUP\tFnt %s\tFnv threads included\tFnv threads excluded\t(Table J3.2)\n", t.lb.Stress)
 	for _, g := range e.BoltGrades() {
 		b, err := e.Bolt(g)
 		if err != nil {
@@ -86,10 +113,16 @@ func runRules(ro rulesOptions, out io.Writer) error {
 	}
 	tw.Flush()
 	lim, f := e.LongJoint()
-	fmt.Fprintf(tw, "long joints: Fnv x %g when the pattern is longer than %s\n", f, size(lim)+mmSuffix(sys))
-	fmt.Fprintf(tw, "\nPRETENSION Tb %s\t", lb.Force)
+	fmt.Fprintf(tw, "long joints: Fnv x %g when the pattern is longer than %s\n", f, t.size(lim)+mmSuffix(sys))
+}
+
+// pretension prints the minimum pretension of each high-strength grade
+// by diameter ("-" where none is tabulated).
+func (t ruleTables) pretension() {
+	e, sys, tw := t.e, t.sys, t.tw
+	fmt.Fprintf(tw, "\nPRETENSION Tb %s\t", t.lb.Force)
 	for _, d := range e.Diameters() {
-		fmt.Fprintf(tw, "%s\t", size(d))
+		fmt.Fprintf(tw, "%s\t", t.size(d))
 	}
 	fmt.Fprintln(tw)
 	for _, g := range e.BoltGrades() {
@@ -109,7 +142,12 @@ func runRules(ro rulesOptions, out io.Writer) error {
 		fmt.Fprintln(tw)
 	}
 	tw.Flush()
-	fmt.Fprintf(tw, "\nSTEEL\tFy %s\tFu %s\n", lb.Stress, lb.Stress)
+}
+
+// steels prints Fy and Fu of every steel grade.
+func (t ruleTables) steels() {
+	e, sys, tw := t.e, t.sys, t.tw
+	fmt.Fprintf(tw, "\nSTEEL\tFy %s\tFu %s\n", t.lb.Stress, t.lb.Stress)
 	for _, g := range e.SteelGrades() {
 		s, err := e.Steel(g)
 		if err != nil {
@@ -118,6 +156,12 @@ func runRules(ro rulesOptions, out io.Writer) error {
 		fmt.Fprintf(tw, "%s\t%g\t%g\n", s.Name, sys.ToJob(float64(s.Fy), units.DimStress), sys.ToJob(float64(s.Fu), units.DimStress))
 	}
 	tw.Flush()
+}
+
+// factors prints the slip coefficients and the φ and Ω of the limit
+// states, the net-area hole allowance and the splice-plate cap.
+func (t ruleTables) factors() error {
+	e, sys, tw := t.e, t.sys, t.tw
 	std, ovs, lng := e.SlipFactor(rules.Standard, rules.Transverse), e.SlipFactor(rules.Oversized, rules.Transverse), e.SlipFactor(rules.LongSlot, rules.Transverse)
 	fmt.Fprintf(tw, "\nslip (%s): mu class A %g, class B %g; Du %g; hf %g (one filler or none), %g (two or more)\n",
 		e.Clause("J3.8"), e.Mu(rules.ClassA), e.Mu(rules.ClassB), e.Du(), e.Hf(0), e.Hf(2))
@@ -125,7 +169,7 @@ func runRules(ro rulesOptions, out io.Writer) error {
 		std.Phi, std.Omega, ovs.Phi, ovs.Omega, lng.Phi, lng.Omega)
 	y, r := e.YieldFactor(), e.RuptureFactor()
 	fmt.Fprintf(tw, "yielding phi/Omega %g/%g; rupture, block shear, bolt shear, bearing %g/%g\n", y.Phi, y.Omega, r.Phi, r.Omega)
-	fmt.Fprintf(tw, "hole width for net area: nominal + %s (B4.3)\n", size(e.HoleAllowance())+mmSuffix(sys))
+	fmt.Fprintf(tw, "hole width for net area: nominal + %s (B4.3)\n", t.size(e.HoleAllowance())+mmSuffix(sys))
 	if c, ok := e.SplicePlateCap(); ok {
 		fmt.Fprintf(tw, "splice plates: An <= %g Ag (J4.1(b))\n", c)
 	}

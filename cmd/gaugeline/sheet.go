@@ -23,19 +23,17 @@ type sheetOptions struct {
 
 func newSheetCmd(o *rootOptions) *cobra.Command {
 	var so sheetOptions
-	cmd := &cobra.Command{
-		Use:   "sheet JOB.yaml -o DIR",
-		Short: "Write the DXF cut sheet and CAM files of a layout that passes",
-		Long: "sheet checks the job and writes, into the folder DIR/MARK, the dimensioned cut sheet MARK.dxf,\n" +
-			"the geometry-only CAM files MARK-member.cam.dxf and MARK-plate.cam.dxf and the manifest MARK.files.\n" +
-			"The folder is replaced as a whole, never file by file. A failing connection is\n" +
-			"refused (exit 1, nothing written) unless --not-for-fabrication, which writes the cut sheet alone,\n" +
+	cmd := command("sheet JOB.yaml -o DIR",
+		"Write the DXF cut sheet and CAM files of a layout that passes",
+		"sheet checks the job and writes, into the folder DIR/MARK, the dimensioned cut sheet MARK.dxf,\n"+
+			"the geometry-only CAM files MARK-member.cam.dxf and MARK-plate.cam.dxf and the manifest MARK.files.\n"+
+			"The folder is replaced as a whole, never file by file. A failing connection is\n"+
+			"refused (exit 1, nothing written) unless --not-for-fabrication, which writes the cut sheet alone,\n"+
 			"stamped NOT FOR FABRICATION on every view (exit 1 still: the connection fails). Bad input exits 2.",
-		Args: argsExactly(1, "one job file"),
-		RunE: func(cmd *cobra.Command, args []string) error {
-			return runSheet(cmd.Context(), o, so, args[0], o.stdout)
-		},
-	}
+		argsExactly(1, "one job file"),
+		func(ctx context.Context, args []string) error {
+			return runSheet(ctx, o, so, args[0], o.stdout)
+		})
 	cmd.Flags().StringVarP(&so.dir, "output", "o", "", "directory to write the DXF files into (created if missing)")
 	cmd.Flags().BoolVar(&so.notForFabrication, "not-for-fabrication", false,
 		"write a stamped cut sheet (and no CAM file) even when the connection fails")

@@ -148,8 +148,6 @@ func newPage(r *detail.Report, s *sheet.Sheet) page {
 	d := r.Design
 	c := &d.Conn
 	f := fmtr{d.Job.Units}
-	g := r.GoverningResult()
-	lrfd := c.Method == rules.LRFD
 	p := page{
 		Mark:            d.Job.Mark,
 		Subtitle:        fmt.Sprintf("Bolted tension connection · AISC %s · %s · %s units", strings.TrimPrefix(c.Edition.Name, "aisc"), strings.ToUpper(c.Method.String()), strings.ToUpper(d.Job.Units.String())),
@@ -161,9 +159,23 @@ func newPage(r *detail.Report, s *sheet.Sheet) page {
 		DemandSymbol:    "Ru",
 		AvailableSymbol: "φRn",
 	}
-	if !lrfd {
+	if c.Method != rules.LRFD {
 		p.DemandSymbol, p.AvailableSymbol = "Ra", "Rn/Ω"
 	}
+	p.verdict(r, f)
+	p.assumptions(r)
+	p.Job, p.Load = jobRows(d, f)
+	p.Holes = holeTable(c, f)
+	p.cutSheet(r, s)
+	p.limits(r, f)
+	p.findings(r, f)
+	return p
+}
+
+// verdict sets the verdict, the governing limit state and every failing
+// limit state and detailing rule.
+func (p *page) verdict(r *detail.Report, f fmtr) {
+	g := r.GoverningResult()
 	p.Verdict = "PASSES"
 	if !r.Pass {
 		p.Verdict = "FAILS"
@@ -184,6 +196,11 @@ func newPage(r *detail.Report, s *sheet.Sheet) page {
 			p.Failures = append(p.Failures, line)
 		}
 	}
+}
+
+// assumptions lists the report's cautions after the first (the page
+// prints that one on its own), then how values are printed and judged.
+func (p *page) assumptions(r *detail.Report) {
 	for i, cv := range r.Cautions {
 		if i == 0 && cv == detail.Caution {
 			continue
@@ -193,10 +210,14 @@ func newPage(r *detail.Report, s *sheet.Sheet) page {
 	p.Assumptions = append(p.Assumptions,
 		"Values are printed rounded in the job's units; the check runs at full precision, so a product written out may differ from the printed result in its last digit.",
 		fmt.Sprintf("The available strength is %s with the φ and Ω of AISC %s; a limit state passes when the ratio %s / %s does not exceed 1.0.",
-			p.AvailableSymbol, strings.TrimPrefix(c.Edition.Name, "aisc"), p.DemandSymbol, p.AvailableSymbol))
+			p.AvailableSymbol, strings.TrimPrefix(r.Design.Conn.Edition.Name, "aisc"), p.DemandSymbol, p.AvailableSymbol))
+}
 
-	p.Job, p.Load = jobRows(d, f)
-	p.Holes = holeTable(c, f)
+// cutSheet sets the cut sheet's schedule, the drawing of its views and the
+// note that says what the drawing shows.
+func (p *page) cutSheet(r *detail.Report, s *sheet.Sheet) {
+	d := r.Design
+	c := &d.Conn
 	if len(s.Schedule) > 0 {
 		p.Schedule.Head = s.Schedule[0]
 		for _, rw := range s.Schedule[1:] {
@@ -224,7 +245,12 @@ func newPage(r *detail.Report, s *sheet.Sheet) page {
 	if wide {
 		p.DrawingNote += " The drawing is long: scroll it sideways on screen; it prints scaled to the page."
 	}
+}
 
+// limits sets a section and a summary row for every limit state, in the
+// check's order.
+func (p *page) limits(r *detail.Report, f fmtr) {
+	c := &r.Design.Conn
 	for i, x := range r.Results {
 		ls := limit(c, f, x)
 		ls.Num = fmt.Sprintf("5.%d", i+1)
@@ -239,7 +265,10 @@ func newPage(r *detail.Report, s *sheet.Sheet) page {
 			Pass: x.Pass, Governs: i == r.Governing,
 		})
 	}
+}
 
+// findings sets the table of every detailing finding.
+func (p *page) findings(r *detail.Report, f fmtr) {
 	p.Findings.Head = []string{"check", "clause", "measured", "limit", "result", "where"}
 	for _, fd := range r.Findings {
 		res, class := "ok", ""
@@ -254,7 +283,6 @@ func newPage(r *detail.Report, s *sheet.Sheet) page {
 		p.Findings.Rows = append(p.Findings.Rows, tableRow{Class: class, Cells: []string{
 			fd.ID, fd.Clause, f.people(fd.Measured, fd.Dim), f.people(fd.Limit, fd.Dim), res, fd.Where}})
 	}
-	return p
 }
 
 // anchor turns a limit state id into a fragment name.

@@ -1,8 +1,9 @@
 package units
 
 import (
-	"fmt"
 	"math"
+
+	"gaugeline/rules/words"
 )
 
 // System is the unit system a job is written in.
@@ -13,24 +14,13 @@ const (
 	SI               // SI: mm, kN, MPa, mm²
 )
 
+var systems = words.New[System]("unit system", "us", "si")
+
 // String returns the job-file spelling of the system.
-func (s System) String() string {
-	if s == SI {
-		return "si"
-	}
-	return "us"
-}
+func (s System) String() string { return systems.Name(s) }
 
 // ParseSystem reads the job-file spelling of a unit system.
-func ParseSystem(s string) (System, error) {
-	switch s {
-	case "us":
-		return US, nil
-	case "si":
-		return SI, nil
-	}
-	return US, fmt.Errorf("unknown unit system %q (want us or si)", s)
-}
+func ParseSystem(s string) (System, error) { return systems.Parse(s) }
 
 // Dim is the physical dimension of a quantity.
 type Dim int

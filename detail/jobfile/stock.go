@@ -1,0 +1,150 @@
+package jobfile
+
+import (
+	"fmt"
+
+	"go.yaml.in/yaml/v3"
+
+	"gaugeline/rules/units"
+)
+
+var stockKeys = []string{"diameters", "grades", "max_lines", "max_per_line", "step", "thicknesses", "objective"}
+
+// parseStock reads the stock block (propose), with the default step of
+// the job's unit system.
+func (p *parser) parseStock(n *yaml.Node) error {
+	st := &p.job.Stock
+	st.Step = units.Inch / 4 // common practice, no source
+	if p.sys() == units.SI {
+		st.Step = 5 * units.Millimetre // SPEC §3
+	}
+	if n == nil {
+		return nil
+	}
+	b, err := p.mapping(n, "stock", stockKeys)
+	if err != nil {
+		return err
+	}
+	if v := b.vals["diameters"]; v != nil {
+		if st.Diameters, err = p.stockDiameters(v); err != nil {
+			return err
+		}
+	}
+	if v := b.vals["grades"]; v != nil {
+		if st.Grades, err = p.stockGrades(v); err != nil {
+			return err
+		}
+	}
+	if v := b.vals["max_lines"]; v != nil {
+		if st.MaxLines, err = p.integer(v, "stock.max_lines", 1, maxLines); err != nil {
+			return err
+		}
+	}
+	if v := b.vals["max_per_line"]; v != nil {
+		if st.MaxPerLine, err = p.integer(v, "stock.max_per_line", 1, maxPerLine); err != nil {
+			return err
+		}
+	}
+	if v := b.vals["step"]; v != nil {
+		if st.Step, err = p.length(v, "stock.step", positive); err != nil {
+			return err
+		}
+	}
+	if v := b.vals["thicknesses"]; v != nil {
+		if st.Thicknesses, err = p.stockThicknesses(v); err != nil {
+			return err
+		}
+	}
+	if v := b.vals["objective"]; v != nil {
+		if st.Objective, err = enum(p, v, "stock.objective", parseObjective); err != nil {
+			return err
+		}
+	}
+	return nil
+}
+
+// stockDiameters reads stock.diameters, a list of bolt diameters.
+func (p *parser) stockDiameters(v *yaml.Node) ([]units.Length, error) {
+	items, err := p.list(v, "stock.diameters", "[3/4 in, 7/8 in]", 50)
+	if err != nil {
+		return nil, err
+	}
+	var ds []units.Length
+	for i, it := range items {
+		path := fmt.Sprintf("stock.diameters[%d]", i)
+		s, err := p.word(it, path)
+		if err != nil {
+			return nil, err
+		}
+		d, err := units.ParseBoltDiameter(s, p.sys())
+		if err != nil {
+			return nil, p.errAt(it, path, err.Error(), `write a diameter such as "3/4 in", "20 mm" or "M20"`)
+		}
+		if !(d > 0) || d >= 10*units.Inch {
+			return nil, p.errAt(it, path, "is not a bolt diameter", "")
+		}
+		ds = append(ds, d)
+	}
+	return ds, nil
+}
+
+// stockGrades reads stock.grades, a list of bolt grades.
+func (p *parser) stockGrades(v *yaml.Node) ([]string, error) {
+	items, err := p.list(v, "stock.grades", "[A325, A490]", 50)
+	if err != nil {
+		return nil, err
+	}
+	var gs []string
+	for i, it := range items {
+		g, err := p.word(it, fmt.Sprintf("stock.grades[%d]", i))
+		if err != nil {
+			return nil, err
+		}
+		gs = append(gs, g)
+	}
+	return gs, nil
+}
+
+// stockThicknesses reads stock.thicknesses, a list of plate thicknesses.
+func (p *parser) stockThicknesses(v *yaml.Node) ([]units.Length, error) {
+	items, err := p.list(v, "stock.thicknesses", "[3/8 in, 1/2 in]", 50)
+	if err != nil {
+		return nil, err
+	}
+	var ts []units.Length
+	for i, it := range items {
+		t, err := p.length(it, fmt.Sprintf("stock.thicknesses[%d]", i), positive)
+		if err != nil {
+			return nil, err
+		}
+		ts = append(ts, t)
+	}
+	return ts, nil
+}
+
+func (p *parser) parseTolerance(n *yaml.Node) error {
+	t := &p.job.Tolerance
+	// Common practice, no source (REFERENCE.md, fabrication).
+	t.Position, t.Diameter = units.Inch/16, units.Inch/32
+	if p.sys() == units.SI {
+		t.Position, t.Diameter = 2*units.Millimetre, 1*units.Millimetre
+	}
+	if n == nil {
+		return nil
+	}
+	b, err := p.mapping(n, "tolerance", []string{"position", "diameter"})
+	if err != nil {
+		return err
+	}
+	if v := b.vals["position"]; v != nil {
+		if t.Position, err = p.length(v, "tolerance.position", positive); err != nil {
+			return err
+		}
+	}
+	if v := b.vals["diameter"]; v != nil {
+		if t.Diameter, err = p.length(v, "tolerance.diameter", positive); err != nil {
+			return err
+		}
+	}
+	return nil
+}
