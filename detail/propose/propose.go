@@ -215,12 +215,6 @@ func Propose(j *jobfile.Job, opt ProposeOptions) (*Proposal, error) {
 		// (the exhaustive search's diagnosis checks fewer than the space)
 		p.limit = opt.MaxCandidates
 	}
-	stopped := func() error {
-		if !p.stopped {
-			return nil
-		}
-		return &SearchLimitError{File: j.File, Mode: Pruned, Space: out.Space, Checked: p.checks, Limit: p.limit}
-	}
 	if b := p.yieldBlocker(); b != nil {
 		out.Blockers = []Blocker{*b}
 		out.Summary = b.Text + ": " + b.Lift
@@ -231,39 +225,16 @@ func Propose(j *jobfile.Job, opt ProposeOptions) (*Proposal, error) {
 	nAlt := min(max(opt.Alternatives, 0), len(p.groups))
 	var tops []*cand
 	var other *cand
-	k := 1 + nAlt
 	if opt.Mode == Exhaustive {
-		var bests, others []*cand
-		bests, others = p.exhaustive(out.Space, opt.Progress)
-		out.Evaluated = p.evals
-		tops = firstN(bests, k)
-		if len(others) > 0 {
-			other = others[0]
-		}
+		tops, other = p.exhaustiveTops(out, 1+nAlt, opt.Progress)
 	} else {
-		p.cache = map[candKey]*detail.Report{}
-		p.progress = opt.Progress
-		tops = p.bestPerGroup(p.obj, 1)
-		out.Evaluated = p.evals
-		if len(tops) > 0 && nAlt > 0 {
-			tops = p.bestPerGroup(p.obj, k)
-			if o := p.bestPerGroup(p.obj.Other(), 1); len(o) > 0 {
-				other = o[0]
-			}
-			out.AltEvaluated = p.evals - out.Evaluated
-		}
-		if err := stopped(); err != nil {
-			return nil, err
-		}
+		tops, other = p.prunedTops(out, nAlt, opt.Progress)
+	}
+	if err := p.limitError(out); err != nil {
+		return nil, err
 	}
 	if len(tops) == 0 {
-		before := p.evals
-		p.diagnose(out)
-		if err := stopped(); err != nil {
-			return nil, err
-		}
-		out.DiagEvaluated = p.evals - before
-		return out, nil
+		return p.infeasible(out)
 	}
 	best := tops[0]
 	out.Layout = p.layout(best)
@@ -271,22 +242,86 @@ func Propose(j *jobfile.Job, opt ProposeOptions) (*Proposal, error) {
 	if nAlt > 0 {
 		out.Alternatives = p.alternatives(tops, other, nAlt)
 	}
-	data, err := WriteJob(j, out.Layout)
-	if err != nil {
+	if out.Report, out.LayoutJob, err = p.checkChoice(best, out.Layout); err != nil {
 		return nil, err
+	}
+	return out, nil
+}
+
+// exhaustiveTops runs the exhaustive search: the best layouts of the k
+// best arrangements under the job's objective, best first, and the best
+// under the other objective (nil: none).
+func (p *problem) exhaustiveTops(out *Proposal, k int, progress func(done, total int)) (tops []*cand, other *cand) {
+	bests, others := p.exhaustive(out.Space, progress)
+	out.Evaluated = p.evals
+	if len(others) > 0 {
+		other = others[0]
+	}
+	return firstN(bests, k), other
+}
+
+// prunedTops runs the pruned search: the best layout first, then, when
+// there is one and nAlt alternatives are asked for, the best of the
+// 1 + nAlt best arrangements and the best under the other objective
+// (nil: none), counting those checks apart.
+func (p *problem) prunedTops(out *Proposal, nAlt int, progress func(done, total int)) (tops []*cand, other *cand) {
+	p.cache = map[candKey]*detail.Report{}
+	p.progress = progress
+	tops = p.bestPerGroup(p.obj, 1)
+	out.Evaluated = p.evals
+	if len(tops) > 0 && nAlt > 0 {
+		tops = p.bestPerGroup(p.obj, 1+nAlt)
+		if o := p.bestPerGroup(p.obj.Other(), 1); len(o) > 0 {
+			other = o[0]
+		}
+		out.AltEvaluated = p.evals - out.Evaluated
+	}
+	return tops, other
+}
+
+// limitError is the *SearchLimitError of a pruned search stopped at its
+// limit, nil when it was not.
+func (p *problem) limitError(out *Proposal) error {
+	if !p.stopped {
+		return nil
+	}
+	return &SearchLimitError{File: p.job.File, Mode: Pruned, Space: out.Space, Checked: p.checks, Limit: p.limit}
+}
+
+// infeasible finishes the proposal of a job where nothing passes: what
+// blocks, and the checks spent finding out.
+func (p *problem) infeasible(out *Proposal) (*Proposal, error) {
+	before := p.evals
+	p.diagnose(out)
+	if err := p.limitError(out); err != nil {
+		return nil, err
+	}
+	out.DiagEvaluated = p.evals - before
+	return out, nil
+}
+
+// checkChoice writes the chosen layout l of candidate best into the job
+// file and checks that job exactly as `gaugeline check` would, returning
+// the report and the file. It panics when the check disagrees with the
+// search's own model of the layout.
+func (p *problem) checkChoice(best *cand, l Layout) (*detail.Report, []byte, error) {
+	j := p.job
+	data, err := WriteJob(j, l)
+	if err != nil {
+		return nil, nil, err
 	}
 	lj, err := jobfile.ParseJob(j.File, data)
 	if err != nil {
-		return nil, fmt.Errorf("detail: propose wrote a job it cannot read: %w", err)
+		return nil, nil, fmt.Errorf("detail: propose wrote a job it cannot read: %w", err)
 	}
 	lj.Stamp = j.Stamp // the layout's files belong to the run that proposed it
 	d, err := detail.Build(lj)
 	if err != nil {
-		return nil, fmt.Errorf("detail: propose wrote a job that does not build: %w", err)
+		return nil, nil, fmt.Errorf("detail: propose wrote a job that does not build: %w", err)
 	}
 	r, err := detail.Check(d)
 	if err != nil {
-		return nil, err
+		return nil, nil, err
 	}
 	if !r.Pass {
 		panic("detail: propose chose a layout that fails its check")
@@ -294,8 +329,7 @@ func Propose(j *jobfile.Job, opt ProposeOptions) (*Proposal, error) {
 	if got, want := r.GoverningResult().Ratio, best.rep.GoverningResult().Ratio; math.Abs(got-want) > 1e-9*max(1, want) {
 		panic(fmt.Sprintf("detail: propose's model of the layout (ratio %v) differs from Build's (ratio %v)", want, got))
 	}
-	out.Report, out.LayoutJob = r, data
-	return out, nil
+	return r, data, nil
 }
 
 func firstN(cs []*cand, n int) []*cand {
@@ -364,6 +398,9 @@ type option[T any] struct {
 	text string // as written in the job
 }
 
+// newProblem reads the job's stock into the search's groups, one per
+// diameter, grade, plate thickness, lines and bolts per line, each with
+// its ranges and whether the bounds leave it viable.
 func newProblem(j *jobfile.Job) (*problem, error) {
 	bld, err := detail.NewBuilder(j)
 	if err != nil {
@@ -376,7 +413,28 @@ func newProblem(j *jobfile.Job) (*problem, error) {
 	}
 	p := &problem{job: j, build: bld, ed: ed, step: j.Stock.Step, obj: j.Stock.Objective, snapped: map[int]units.Length{},
 		grids: map[[2]int][]units.Length{}}
+	diams, err := stockDiameters(j)
+	if err != nil {
+		return nil, err
+	}
+	grades, err := stockGrades(j, ed)
+	if err != nil {
+		return nil, err
+	}
+	thick, err := stockThicknesses(j)
+	if err != nil {
+		return nil, err
+	}
+	if err := p.addGroups(diams, grades, thick, lineCounts(j), perLineCounts(j)); err != nil {
+		return nil, err
+	}
+	p.diams, p.thick, p.grades = diams, thick, grades
+	return p, nil
+}
 
+// stockDiameters lists the bolt diameters to try: the job's fixed one, or
+// the stock's, with their spellings.
+func stockDiameters(j *jobfile.Job) ([]option[units.Length], error) {
 	var diams []option[units.Length]
 	switch {
 	case j.Bolts.Diameter > 0:
@@ -389,73 +447,102 @@ func newProblem(j *jobfile.Job) (*problem, error) {
 		return nil, j.FieldError("stock.diameters", "propose needs the bolt diameters to try",
 			"give stock.diameters: [3/4 in, 7/8 in] (us) or [M20, M22] (si), or fix bolts.diameter")
 	}
-	var grades []string
+	return diams, nil
+}
+
+// stockGrades lists the bolt grades to try: the job's fixed one, which
+// the edition must know, or the stock's.
+func stockGrades(j *jobfile.Job, ed *rules.Edition) ([]string, error) {
 	switch {
 	case j.Bolts.Grade != "":
 		if _, err := ed.Bolt(j.Bolts.Grade); err != nil {
 			return nil, j.FieldError("bolts.grade", fmt.Sprintf("unknown bolt grade %q in %s", j.Bolts.Grade, ed), "known grades: "+strings.Join(ed.BoltGrades(), ", "))
 		}
-		grades = []string{j.Bolts.Grade}
+		return []string{j.Bolts.Grade}, nil
 	case len(j.Stock.Grades) > 0:
-		grades = j.Stock.Grades
-	default:
-		return nil, j.FieldError("stock.grades", "propose needs the bolt grades to try",
-			"give stock.grades: [A325] (us) or [A325M] (si), or fix bolts.grade")
+		return j.Stock.Grades, nil
 	}
-	thick := []option[units.Length]{{0, ""}}
-	if pl := j.Plate; pl != nil {
-		switch {
-		case !pl.AutoThickness:
-			thick = []option[units.Length]{{pl.Thickness, j.Raw["plate.thickness"]}}
-		case len(j.Stock.Thicknesses) > 0:
-			thick = nil
-			for i, t := range j.Stock.Thicknesses {
-				thick = append(thick, option[units.Length]{t, j.Raw[fmt.Sprintf("stock.thicknesses[%d]", i)]})
-			}
-		default:
-			return nil, j.FieldError("stock.thicknesses", "plate.thickness is auto but the stock has no thicknesses",
-				"give stock.thicknesses: [3/8 in, 1/2 in, 5/8 in], or a plate thickness")
-		}
-	}
-	lines := []int{j.Bolts.Lines}
-	if !j.Given("bolts.lines") {
-		lines = nil
-		for l := 1; l <= max(j.Stock.MaxLines, 1); l++ {
-			lines = append(lines, l)
-		}
-	}
-	perLine := []int{j.Bolts.PerLine}
-	if !j.Given("bolts.per_line") {
-		perLine = nil
-		maxN := j.Stock.MaxPerLine
-		if maxN == 0 {
-			maxN = DefaultMaxPerLine
-		}
-		for n := 1; n <= maxN; n++ {
-			perLine = append(perLine, n)
-		}
-	}
+	return nil, j.FieldError("stock.grades", "propose needs the bolt grades to try",
+		"give stock.grades: [A325] (us) or [A325M] (si), or fix bolts.grade")
+}
 
+// stockThicknesses lists the plate thicknesses to try, with their
+// spellings: the plate's own, the stock's when it is auto, or 0 without
+// a plate.
+func stockThicknesses(j *jobfile.Job) ([]option[units.Length], error) {
+	pl := j.Plate
+	switch {
+	case pl == nil:
+		return []option[units.Length]{{0, ""}}, nil
+	case !pl.AutoThickness:
+		return []option[units.Length]{{pl.Thickness, j.Raw["plate.thickness"]}}, nil
+	case len(j.Stock.Thicknesses) > 0:
+		var thick []option[units.Length]
+		for i, t := range j.Stock.Thicknesses {
+			thick = append(thick, option[units.Length]{t, j.Raw[fmt.Sprintf("stock.thicknesses[%d]", i)]})
+		}
+		return thick, nil
+	}
+	return nil, j.FieldError("stock.thicknesses", "plate.thickness is auto but the stock has no thicknesses",
+		"give stock.thicknesses: [3/8 in, 1/2 in, 5/8 in], or a plate thickness")
+}
+
+// lineCounts lists the numbers of gage lines to try: the job's, or 1 to
+// stock.max_lines.
+func lineCounts(j *jobfile.Job) []int {
+	if j.Given("bolts.lines") {
+		return []int{j.Bolts.Lines}
+	}
+	var lines []int
+	for l := 1; l <= max(j.Stock.MaxLines, 1); l++ {
+		lines = append(lines, l)
+	}
+	return lines
+}
+
+// perLineCounts lists the numbers of bolts per line to try: the job's, or
+// 1 to stock.max_per_line (DefaultMaxPerLine when not given).
+func perLineCounts(j *jobfile.Job) []int {
+	if j.Given("bolts.per_line") {
+		return []int{j.Bolts.PerLine}
+	}
+	maxN := j.Stock.MaxPerLine
+	if maxN == 0 {
+		maxN = DefaultMaxPerLine
+	}
+	var perLine []int
+	for n := 1; n <= maxN; n++ {
+		perLine = append(perLine, n)
+	}
+	return perLine
+}
+
+// addGroups adds a group for every diameter × grade × thickness × lines ×
+// bolts per line, in that order, after refusing a step too fine for the
+// ranges and a diameter the edition has no hole for.
+func (p *problem) addGroups(diams []option[units.Length], grades []string, thick []option[units.Length], lines, perLine []int) error {
+	j, ed := p.job, p.ed
 	// The member depends on the plate thickness only (the gap of a double
 	// angle); the bolt on diameter and grade.
 	members := make([]*detail.Design, len(thick))
 	for ti, t := range thick {
-		if members[ti], err = bld.Template(t.v); err != nil {
-			return nil, err
+		var err error
+		if members[ti], err = p.build.Template(t.v); err != nil {
+			return err
 		}
 	}
 	if err := p.checkStep(diams, members); err != nil {
-		return nil, err
+		return err
 	}
 	for di, d := range diams {
 		if _, err := ed.Hole(d.v, j.Bolts.Hole); err != nil {
-			return nil, detail.DiameterError(j, ed, err)
+			return detail.DiameterError(j, ed, err)
 		}
 		for gi, gr := range grades {
 			for ti, t := range thick {
 				tmpl, err := members[ti].WithBolt(ed, d.v, gr)
 				if err != nil {
-					return nil, err
+					return err
 				}
 				b := p.perBolt(tmpl)
 				for _, l := range lines {
@@ -470,8 +557,7 @@ func newProblem(j *jobfile.Job) (*problem, error) {
 			}
 		}
 	}
-	p.diams, p.thick, p.grades = diams, thick, grades
-	return p, nil
+	return nil
 }
 
 // maxGridValues bounds the values of one searched range: a finer step is
@@ -1271,141 +1357,200 @@ type probe struct {
 // tried any layout (false: the bound cut them all) and whether a built
 // layout passes the gage rules.
 func (s *searcher) sub(g *group, g2i int, g1 units.Length, ia, ib int) (tried, gageOK bool) {
-	p := s.p
-	nE, nK := len(g.end), len(g.edge)
-	var known []probe
+	r := s.newRun(g, g2i, g1, ia, ib)
+	if !r.ok(ia, 0, 0) {
+		return false, false
+	}
+	s.lastDead = r.search()
+	r.offerShortest()
+	return r.tried, r.gageOK
+}
+
+// run is the search of one monotone run of pitches (ia…ib) at one gage
+// position: the layouts it has made (by pitch, end and edge index), the
+// feasibility it knows, and the shortest passing layouts found so far.
+type run struct {
+	s      *searcher
+	p      *problem
+	g      *group
+	g2i    int
+	g1     units.Length
+	ia, ib int
+	nE, nK int // ends and edges
+
+	known  []probe
+	cands  map[[3]int]*cand
+	mins   [][3]int // the passing layouts of length minLen
+	minLen int64
+
+	tried, gageOK bool
+}
+
+// newRun starts the run's search knowing what the group's searcher
+// already learnt at other gages: layouts of this run that fail at every
+// gage.
+func (s *searcher) newRun(g *group, g2i int, g1 units.Length, ia, ib int) *run {
+	r := &run{s: s, p: s.p, g: g, g2i: g2i, g1: g1, ia: ia, ib: ib, nE: len(g.end), nK: len(g.edge),
+		cands: map[[3]int]*cand{}, minLen: math.MaxInt64}
 	for _, q := range s.across[g2i] {
 		if q.i >= ia && q.i <= ib { // monotone within this run only
-			known = append(known, q)
+			r.known = append(r.known, q)
 		}
 	}
-	cands := map[[3]int]*cand{}
-	get := func(i, j, k int) *cand {
-		c, ok := cands[[3]int{i, j, k}]
-		if !ok {
-			c = p.newCand(g, g2i, g1, i, j, k)
-			cands[[3]int{i, j, k}] = c
-		}
-		return c
-	}
-	check := func(c *cand) bool {
-		if c.rep == nil {
-			tried = true
-			if p.eval(c) {
-				gageOK = gageOK || gageRulesPass(c.rep)
-				s.noteRatio(g2i, c.i, c.j, c.k, c.rep)
-			}
-		}
-		return c.feasible()
-	}
-	feasible := func(i, j, k int) bool {
-		for _, q := range known {
-			if q.feas && q.i <= i && q.j <= j && q.k <= k {
-				return true
-			}
-			if !q.feas && q.i >= i && q.j >= j && q.k >= k {
-				return false
-			}
-		}
-		c := get(i, j, k)
-		f := check(c)
-		known = append(known, probe{i, j, k, f})
-		if !f && c.rep != nil && failsAtEveryGage(c.rep) {
-			if s.across == nil {
-				s.across = map[int][]probe{}
-			}
-			s.across[g2i] = append(s.across[g2i], probe{i, j, k, false})
-		}
-		return f
-	}
-	var mins [][3]int
-	var minLen int64 = math.MaxInt64
-	found := func(i, j, k int) {
-		l := get(i, j, k).lenNm
-		switch {
-		case l < minLen:
-			minLen, mins = l, [][3]int{{i, j, k}}
-		case l == minLen:
-			mins = append(mins, [3]int{i, j, k})
-		}
-	}
-	ok := func(i, j, k int) bool {
-		c := get(i, j, k)
-		return c.lenNm <= minLen && s.allowed(c, s.lowRatioOf(g2i, i, j, k))
-	}
+	return r
+}
 
-	if !ok(ia, 0, 0) {
-		return
+// get returns the run's candidate at pitch i, end j and edge k, made once.
+func (r *run) get(i, j, k int) *cand {
+	c, ok := r.cands[[3]int{i, j, k}]
+	if !ok {
+		c = r.p.newCand(r.g, r.g2i, r.g1, i, j, k)
+		r.cands[[3]int{i, j, k}] = c
 	}
-	// Probe the shortest layout first (when it passes it is the answer)
-	// unless the last run was dead, then the strongest (when it fails, so
-	// does every other). Either order is exact; this one checks less.
-	dead := false
-	if s.lastDead {
-		dead = !feasible(ib, nE-1, nK-1)
-	}
-	switch {
-	case dead:
-	case feasible(ia, 0, 0):
-		found(ia, 0, 0) // the only layout of least length
-	case !feasible(ib, nE-1, nK-1):
-		dead = true // the strongest layout fails: so does every other
-	default:
-		// Staircase: for each pitch, the least end that passes with the
-		// largest edge (binary search, monotone in end), then for each
-		// end the least passing edge, which never grows with end.
-		jTop := nE - 1
-		for i := ia; i <= ib && ok(i, 0, 0); i++ {
-			jmax := jTop
-			for jmax > 0 && !ok(i, jmax, 0) {
-				jmax--
-			}
-			if !feasible(i, jmax, nK-1) {
-				continue
-			}
-			lo, hi := 0, jmax
-			for lo < hi {
-				mid := (lo + hi) / 2
-				if feasible(i, mid, nK-1) {
-					hi = mid
-				} else {
-					lo = mid + 1
-				}
-			}
-			jTop = hi // never more with more pitch
-			kUp := nK - 1
-			for j := hi; j < nE && ok(i, j, 0); j++ {
-				kmax := kUp
-				for kmax >= 0 && !ok(i, j, kmax) {
-					kmax--
-				}
-				if kmax < 0 || !feasible(i, j, kmax) {
-					continue
-				}
-				lo, hi := 0, kmax
-				for lo < hi {
-					mid := (lo + hi) / 2
-					if feasible(i, j, mid) {
-						hi = mid
-					} else {
-						lo = mid + 1
-					}
-				}
-				found(i, j, hi)
-				kUp = hi
-				if hi == 0 {
-					break
-				}
-			}
+	return c
+}
+
+// check evaluates c unless it has a report, noting what it teaches (the
+// gage rules, the gage-independent ratio), and reports whether it passes.
+func (r *run) check(c *cand) bool {
+	if c.rep == nil {
+		r.tried = true
+		if r.p.eval(c) {
+			r.gageOK = r.gageOK || gageRulesPass(c.rep)
+			r.s.noteRatio(r.g2i, c.i, c.j, c.k, c.rep)
 		}
 	}
-	s.lastDead = dead
-	for _, m := range mins {
-		c := get(m[0], m[1], m[2])
-		check(c)
-		s.offer(c)
+	return c.feasible()
+}
+
+// feasible reports whether layout (i, j, k) passes: from a known layout
+// that dominates it, else by checking it. A failure that does not depend
+// on the gage is kept for the searcher's other gages.
+func (r *run) feasible(i, j, k int) bool {
+	for _, q := range r.known {
+		if q.feas && q.i <= i && q.j <= j && q.k <= k {
+			return true
+		}
+		if !q.feas && q.i >= i && q.j >= j && q.k >= k {
+			return false
+		}
 	}
-	return
+	c := r.get(i, j, k)
+	f := r.check(c)
+	r.known = append(r.known, probe{i, j, k, f})
+	if !f && c.rep != nil && failsAtEveryGage(c.rep) {
+		s := r.s
+		if s.across == nil {
+			s.across = map[int][]probe{}
+		}
+		s.across[r.g2i] = append(s.across[r.g2i], probe{i, j, k, false})
+	}
+	return f
+}
+
+// found records the passing layout (i, j, k) among the shortest.
+func (r *run) found(i, j, k int) {
+	l := r.get(i, j, k).lenNm
+	switch {
+	case l < r.minLen:
+		r.minLen, r.mins = l, [][3]int{{i, j, k}}
+	case l == r.minLen:
+		r.mins = append(r.mins, [3]int{i, j, k})
+	}
+}
+
+// ok reports whether layout (i, j, k) is worth looking at: no longer than
+// the shortest found, and able to beat the bound and the group's best.
+func (r *run) ok(i, j, k int) bool {
+	c := r.get(i, j, k)
+	return c.lenNm <= r.minLen && r.s.allowed(c, r.s.lowRatioOf(r.g2i, i, j, k))
+}
+
+// search finds the run's shortest passing layouts and reports whether
+// the run is dead (its strongest layout fails). It probes the shortest
+// layout first (when it passes it is the answer) unless the last run was
+// dead, then the strongest (when it fails, so does every other). Either
+// order is exact; this one checks less.
+func (r *run) search() (dead bool) {
+	ia, ib, nE, nK := r.ia, r.ib, r.nE, r.nK
+	if r.s.lastDead && !r.feasible(ib, nE-1, nK-1) {
+		return true
+	}
+	if r.feasible(ia, 0, 0) {
+		r.found(ia, 0, 0) // the only layout of least length
+		return false
+	}
+	if !r.feasible(ib, nE-1, nK-1) {
+		return true // the strongest layout fails: so does every other
+	}
+	r.staircase()
+	return false
+}
+
+// staircase walks the boundary of the passing layouts: for each pitch,
+// the least end that passes with the largest edge (binary search,
+// monotone in end), then for each end the least passing edge, which
+// never grows with end.
+func (r *run) staircase() {
+	jTop := r.nE - 1
+	for i := r.ia; i <= r.ib && r.ok(i, 0, 0); i++ {
+		jmax := jTop
+		for jmax > 0 && !r.ok(i, jmax, 0) {
+			jmax--
+		}
+		if !r.feasible(i, jmax, r.nK-1) {
+			continue
+		}
+		j0 := leastPassing(jmax, func(j int) bool { return r.feasible(i, j, r.nK-1) })
+		jTop = j0 // never more with more pitch
+		r.edges(i, j0)
+	}
+}
+
+// edges walks the ends from j0 up at pitch i: for each, the least edge
+// that passes, which never grows with end, until it is the least edge.
+func (r *run) edges(i, j0 int) {
+	kUp := r.nK - 1
+	for j := j0; j < r.nE && r.ok(i, j, 0); j++ {
+		kmax := kUp
+		for kmax >= 0 && !r.ok(i, j, kmax) {
+			kmax--
+		}
+		if kmax < 0 || !r.feasible(i, j, kmax) {
+			continue
+		}
+		k := leastPassing(kmax, func(k int) bool { return r.feasible(i, j, k) })
+		r.found(i, j, k)
+		kUp = k
+		if k == 0 {
+			break
+		}
+	}
+}
+
+// leastPassing is the least index in 0…hi that passes, by binary search,
+// when passing is monotone in the index and hi passes.
+func leastPassing(hi int, pass func(int) bool) int {
+	lo := 0
+	for lo < hi {
+		mid := (lo + hi) / 2
+		if pass(mid) {
+			hi = mid
+		} else {
+			lo = mid + 1
+		}
+	}
+	return hi
+}
+
+// offerShortest checks the run's shortest passing layouts (each one, for
+// its report) and offers them to the searcher.
+func (r *run) offerShortest() {
+	for _, m := range r.mins {
+		c := r.get(m[0], m[1], m[2])
+		r.check(c)
+		r.s.offer(c)
+	}
 }
 
 // failsAtEveryGage reports whether a failing report fails only checks
@@ -1507,9 +1652,29 @@ func (p *problem) alternatives(tops []*cand, other *cand, n int) []Alternative {
 // state that fails in all of them fails in every candidate; the numbers
 // come from the layout that does best in it.
 func (p *problem) diagnose(out *Proposal) {
-	sys := p.job.Units
-	var corners []*cand
-	maxBolts := 0
+	corners, maxBolts, ok := p.corners()
+	if !ok {
+		return
+	}
+	if len(corners) == 0 {
+		b := Blocker{ID: "fit", Text: "no candidate fits: every layout puts a hole off the member or the plate",
+			Lift: "use a smaller bolt, a member with a wider connected leg, or a wider plate"}
+		out.Blockers, out.Summary = []Blocker{b}, b.Text+": "+b.Lift
+		return
+	}
+	out.Blockers = append(p.limitBlockers(corners, maxBolts), findingBlockers(corners)...)
+	if len(out.Blockers) == 0 {
+		out.Summary = p.closestSummary(corners)
+		return
+	}
+	b := out.Blockers[0]
+	out.Summary = b.Text + ": " + b.Lift
+}
+
+// corners checks the strongest layout of every monotone run of every
+// group whose holes fit, and returns those that could be built and the
+// most bolts of any group; false when the search stopped at its limit.
+func (p *problem) corners() (corners []*cand, maxBolts int, ok bool) {
 	for _, g := range p.groups {
 		maxBolts = max(maxBolts, g.nT)
 		if !g.fits {
@@ -1518,7 +1683,7 @@ func (p *problem) diagnose(out *Proposal) {
 		for g2i := range g.gage2 {
 			for _, g1 := range p.gagesFor(g, g2i) {
 				if p.stopped {
-					return
+					return nil, 0, false
 				}
 				for _, seg := range g.segments {
 					c := p.newCand(g, g2i, g1, seg[1], len(g.end)-1, len(g.edge)-1)
@@ -1529,12 +1694,13 @@ func (p *problem) diagnose(out *Proposal) {
 			}
 		}
 	}
-	if len(corners) == 0 {
-		b := Blocker{ID: "fit", Text: "no candidate fits: every layout puts a hole off the member or the plate",
-			Lift: "use a smaller bolt, a member with a wider connected leg, or a wider plate"}
-		out.Blockers, out.Summary = []Blocker{b}, b.Text+": "+b.Lift
-		return
-	}
+	return corners, maxBolts, true
+}
+
+// limitBlockers are the limit states that fail in every corner, each with
+// the numbers of the corner that does best in it, highest ratio first
+// (ties in the order the reports list them).
+func (p *problem) limitBlockers(corners []*cand, maxBolts int) []Blocker {
 	type best struct {
 		x engine.Result
 		c *cand
@@ -1542,8 +1708,7 @@ func (p *problem) diagnose(out *Proposal) {
 	var ids []string
 	bestOf := map[string]best{}
 	failsAll := map[string]bool{}
-	findingFailsAll := map[string]*detailing.Finding{}
-	for n, c := range corners {
+	for _, c := range corners {
 		for _, x := range c.rep.Results {
 			b, seen := bestOf[x.ID]
 			if !seen {
@@ -1555,6 +1720,25 @@ func (p *problem) diagnose(out *Proposal) {
 			}
 			failsAll[x.ID] = failsAll[x.ID] && !x.Pass
 		}
+	}
+	var out []Blocker
+	for _, id := range ids {
+		if !failsAll[id] {
+			continue
+		}
+		b := bestOf[id]
+		text, lift := p.lift(b.x, b.c, maxBolts)
+		out = append(out, Blocker{ID: id, Ratio: b.x.Ratio, Text: text, Lift: lift})
+	}
+	slices.SortStableFunc(out, func(a, b Blocker) int { return cmp.Compare(b.Ratio, a.Ratio) })
+	return out
+}
+
+// findingBlockers are the non-advisory detailing rules that fail in every
+// corner, by id, each with where it fails in the first corner.
+func findingBlockers(corners []*cand) []Blocker {
+	var failsAll map[string]*detailing.Finding
+	for n, c := range corners {
 		failing := map[string]*detailing.Finding{}
 		for i := range c.rep.Findings {
 			f := &c.rep.Findings[i]
@@ -1563,49 +1747,42 @@ func (p *problem) diagnose(out *Proposal) {
 			}
 		}
 		if n == 0 {
-			findingFailsAll = failing
+			failsAll = failing
 			continue
 		}
-		for id := range findingFailsAll {
+		for id := range failsAll {
 			if failing[id] == nil {
-				delete(findingFailsAll, id)
+				delete(failsAll, id)
 			}
 		}
 	}
+	var ids []string
+	for id := range failsAll {
+		ids = append(ids, id)
+	}
+	slices.Sort(ids)
+	var out []Blocker
 	for _, id := range ids {
-		if !failsAll[id] {
-			continue
-		}
-		b := bestOf[id]
-		text, lift := p.lift(b.x, b.c, maxBolts)
-		out.Blockers = append(out.Blockers, Blocker{ID: id, Ratio: b.x.Ratio, Text: text, Lift: lift})
-	}
-	slices.SortStableFunc(out.Blockers, func(a, b Blocker) int { return cmp.Compare(b.Ratio, a.Ratio) })
-	var fids []string
-	for id := range findingFailsAll {
-		fids = append(fids, id)
-	}
-	slices.Sort(fids)
-	for _, id := range fids {
-		f := findingFailsAll[id]
-		out.Blockers = append(out.Blockers, Blocker{ID: id,
+		f := failsAll[id]
+		out = append(out, Blocker{ID: id,
 			Text: fmt.Sprintf("%s (%s) fails in every candidate: %s", id, f.Clause, f.Where),
 			Lift: findingLift(id)})
 	}
-	if len(out.Blockers) == 0 {
-		closest := corners[0]
-		for _, c := range corners[1:] {
-			if c.rep.GoverningResult().Ratio < closest.rep.GoverningResult().Ratio {
-				closest = c
-			}
+	return out
+}
+
+// closestSummary is the summary when every corner fails, but no single
+// check fails in all of them: the corner of least governing ratio.
+func (p *problem) closestSummary(corners []*cand) string {
+	closest := corners[0]
+	for _, c := range corners[1:] {
+		if c.rep.GoverningResult().Ratio < closest.rep.GoverningResult().Ratio {
+			closest = c
 		}
-		g := closest.rep.GoverningResult()
-		out.Summary = fmt.Sprintf("no candidate passes every check, but no single check fails in all of them; the closest, %s, fails %s (ratio %.3f)",
-			p.layout(closest).Describe(sys), g.ID, g.Ratio)
-		return
 	}
-	b := out.Blockers[0]
-	out.Summary = b.Text + ": " + b.Lift
+	g := closest.rep.GoverningResult()
+	return fmt.Sprintf("no candidate passes every check, but no single check fails in all of them; the closest, %s, fails %s (ratio %.3f)",
+		p.layout(closest).Describe(p.job.Units), g.ID, g.Ratio)
 }
 
 // lift words what a failing limit state needs, with numbers from the
