@@ -343,73 +343,102 @@ func matchGate(c *engine.Connection, tol jobfile.Tolerance) units.Length {
 }
 
 // deviations fills ab.Deviations from the matching (match[i] is the
-// measured hole of design hole i, or -1).
+// measured hole of design hole i, or -1): each design hole in order, then
+// the measured holes no design hole took.
 func (ab *AsBuilt) deviations(aligned []abVec, match []int) error {
 	c := &ab.Design.Conn
-	set := ab.Measured
-	used := make([]bool, len(set.Holes))
+	used := make([]bool, len(ab.Measured.Holes))
+	for i := range c.Holes {
+		h := ab.designInPart(&c.Holes[i])
+		k := match[i]
+		if k < 0 {
+			ab.Deviations = append(ab.Deviations, Deviation{ID: h.ID, Design: h, Status: HoleMissing, Why: []string{"missing"}})
+			continue
+		}
+		used[k] = true
+		dv, err := ab.matchedDeviation(h, ab.Measured.Holes[k], aligned[k])
+		if err != nil {
+			return err
+		}
+		ab.Deviations = append(ab.Deviations, dv)
+	}
+	return ab.extraDeviations(aligned, used)
+}
+
+// matchedDeviation is the deviation of design hole h (in the part's
+// frame) from the measured hole m matched to it, at its aligned centre
+// at: the offsets, the size, the as-built hole and what is out of
+// tolerance.
+func (ab *AsBuilt) matchedDeviation(h engine.Hole, m measured.Hole, at abVec) (Deviation, error) {
+	dv := Deviation{ID: h.ID, Design: h, MeasuredID: m.ID, Line: m.Line}
+	dv.X, dv.Y = units.Length(at.x), units.Length(at.y)
+	dv.Dx, dv.Dy = dv.X-h.X, dv.Y-h.Y
+	dv.Radial = units.Length(math.Hypot(float64(dv.Dx), float64(dv.Dy)))
+	dv.Width, dv.Length = units.Length(m.Width), units.Length(m.Length)
+	dv.DDiameter = dv.Width - min(h.Dx, h.Dy)
+	hb, err := ab.classify(h, m, dv.X, dv.Y)
+	if err != nil {
+		return Deviation{}, err
+	}
+	hb.ID = h.ID
+	dv.AsBuilt = hb
+	dv.Reclassified = hb.Type != h.Type || (hb.Type.IsSlot() && hb.Slot != h.Slot)
+	dv.Why = ab.outOfTolerance(dv, h, m)
+	dv.Status = HoleOK
+	if len(dv.Why) > 0 {
+		dv.Status = HoleOutOfTolerance
+	}
+	return dv, nil
+}
+
+// outOfTolerance words what is wrong with the matched hole of deviation
+// dv (design hole h, measured hole m): its position, its size, a slot's
+// length, and its new hole type; nil when nothing is.
+func (ab *AsBuilt) outOfTolerance(dv Deviation, h engine.Hole, m measured.Hole) []string {
 	tol := ab.Tolerance
 	sys := ab.Design.Job.Units
 	ql := func(l units.Length) string { return units.FormatLength(l, sys, units.Gauge) }
 	qt := func(l units.Length) string { return units.FormatLength(l, sys, units.Exact) }
-	for i := range c.Holes {
-		h := ab.designInPart(&c.Holes[i])
-		dv := Deviation{ID: h.ID, Design: h}
-		k := match[i]
-		if k < 0 {
-			dv.Status = HoleMissing
-			dv.Why = []string{"missing"}
-			ab.Deviations = append(ab.Deviations, dv)
-			continue
-		}
-		used[k] = true
-		m := set.Holes[k]
-		dv.MeasuredID, dv.Line = m.ID, m.Line
-		dv.X, dv.Y = units.Length(aligned[k].x), units.Length(aligned[k].y)
-		dv.Dx, dv.Dy = dv.X-h.X, dv.Y-h.Y
-		dv.Radial = units.Length(math.Hypot(float64(dv.Dx), float64(dv.Dy)))
-		dv.Width, dv.Length = units.Length(m.Width), units.Length(m.Length)
-		dv.DDiameter = dv.Width - min(h.Dx, h.Dy)
-		hb, err := ab.classify(h, m, dv.X, dv.Y)
-		if err != nil {
-			return err
-		}
-		hb.ID = h.ID
-		dv.AsBuilt = hb
-		dv.Reclassified = hb.Type != h.Type || (hb.Type.IsSlot() && hb.Slot != h.Slot)
-		if dv.Radial > tol.Position+tolSlack {
-			dv.Why = append(dv.Why, fmt.Sprintf("position off by %s (tolerance %s)", ql(dv.Radial), qt(tol.Position)))
-		}
-		switch {
-		case dv.DDiameter > tol.Diameter+tolSlack:
-			dv.Why = append(dv.Why, fmt.Sprintf("%s over size (tolerance +%s)", ql(dv.DDiameter), qt(tol.Diameter)))
-		case dv.DDiameter < -tol.Diameter-tolSlack:
-			dv.Why = append(dv.Why, fmt.Sprintf("%s under size: ream to size (tolerance %s)", ql(-dv.DDiameter), qt(tol.Diameter)))
-		}
-		if h.Type.IsSlot() || m.Slot {
-			if dl := dv.Length - max(h.Dx, h.Dy); math.Abs(float64(dl)) > float64(tol.Diameter+tolSlack) {
-				dv.Why = append(dv.Why, fmt.Sprintf("length off by %s (tolerance %s)", ql(dl), qt(tol.Diameter)))
-			}
-		}
-		if dv.Reclassified {
-			what := hb.Type.String()
-			if hb.Type.IsSlot() {
-				what = hb.Slot.String() + " " + what
-			}
-			article := "a "
-			if strings.ContainsRune("aeiou", rune(what[0])) {
-				article = "an "
-			}
-			dv.Why = append(dv.Why, "now "+article+what+" hole")
-		}
-		dv.Status = HoleOK
-		if len(dv.Why) > 0 {
-			dv.Status = HoleOutOfTolerance
-		}
-		ab.Deviations = append(ab.Deviations, dv)
+	var why []string
+	if dv.Radial > tol.Position+tolSlack {
+		why = append(why, fmt.Sprintf("position off by %s (tolerance %s)", ql(dv.Radial), qt(tol.Position)))
 	}
+	switch {
+	case dv.DDiameter > tol.Diameter+tolSlack:
+		why = append(why, fmt.Sprintf("%s over size (tolerance +%s)", ql(dv.DDiameter), qt(tol.Diameter)))
+	case dv.DDiameter < -tol.Diameter-tolSlack:
+		why = append(why, fmt.Sprintf("%s under size: ream to size (tolerance %s)", ql(-dv.DDiameter), qt(tol.Diameter)))
+	}
+	if h.Type.IsSlot() || m.Slot {
+		if dl := dv.Length - max(h.Dx, h.Dy); math.Abs(float64(dl)) > float64(tol.Diameter+tolSlack) {
+			why = append(why, fmt.Sprintf("length off by %s (tolerance %s)", ql(dl), qt(tol.Diameter)))
+		}
+	}
+	if dv.Reclassified {
+		why = append(why, "now "+holeTypeWithArticle(dv.AsBuilt)+" hole")
+	}
+	return why
+}
+
+// holeTypeWithArticle names the hole type of h with its article: "an
+// oversized", "a transverse short-slot" …
+func holeTypeWithArticle(h engine.Hole) string {
+	what := h.Type.String()
+	if h.Type.IsSlot() {
+		what = h.Slot.String() + " " + what
+	}
+	if strings.ContainsRune("aeiou", rune(what[0])) {
+		return "an " + what
+	}
+	return "a " + what
+}
+
+// extraDeviations appends a deviation for every measured hole no design
+// hole took (used[k] false), numbered X1, X2 … in the file's order, each
+// classified as if it were a standard hole.
+func (ab *AsBuilt) extraDeviations(aligned []abVec, used []bool) error {
 	n := 0
-	for k, m := range set.Holes {
+	for k, m := range ab.Measured.Holes {
 		if used[k] {
 			continue
 		}
@@ -686,15 +715,29 @@ func fitRigid(ps, qs []abVec, keep float64) abRigid {
 }
 
 // bestFit aligns the measured holes to the design: from several starts
-// (the centroids matched at the patterns' principal axes and at every 15°
-// — every quarter turn for large patterns —, and the design's longest
-// pairs of holes set on each measured pair as far apart) it alternates
-// optimal matching and the least-squares fit until the matching settles. The best
-// start matches the most holes, then has the least squared deviation;
-// among fits as good as each other (a symmetric pattern), the part's
-// contour decides (the start whose contour lies from the datum into +x and
-// +y), then the smallest rotation.
+// (fitStarts) it alternates optimal matching and the least-squares fit
+// until the matching settles (settleFit). The best start matches the most
+// holes, then has the least squared deviation; among fits as good as each
+// other (a symmetric pattern), the part's contour decides (the start whose
+// contour lies from the datum into +x and +y), then the smallest rotation
+// (fit.betterThan). It returns the transform, the matching (as
+// assignHoles) and the iterations the best start took.
 func bestFit(des, mea []abVec, gate float64, contour []r2.Vec) (abRigid, []int, int) {
+	var best *fit
+	for _, tf := range fitStarts(des, mea, gate) {
+		f := scoreFit(des, mea, contour, settleFit(des, mea, gate, tf))
+		if best == nil || f.betterThan(best, len(contour) > 0) {
+			best = f
+		}
+	}
+	return best.tf, best.match, best.iters
+}
+
+// fitStarts are the transforms bestFit starts from: the centroids matched
+// at the patterns' principal axes and at every 15° (every quarter turn
+// for large patterns), then the design's longest pairs of holes set on
+// each measured pair as far apart.
+func fitStarts(des, mea []abVec, gate float64) []abRigid {
 	dc, mc := abCentroid(des), abCentroid(mea)
 	var starts []abRigid
 	centred := func(th float64) abRigid {
@@ -716,116 +759,133 @@ func bestFit(des, mea []abVec, gate float64, contour []r2.Vec) (abRigid, []int, 
 	for th := 0.0; th < 2*math.Pi-1e-9; th += step {
 		starts = append(starts, centred(math.Remainder(th, 2*math.Pi)))
 	}
-	// The design's longest pairs of holes set on every measured pair as
-	// far apart, both ways round: robust to missing and extra holes, which
-	// pull the centroids apart.
-	if n, m := len(des), len(mea); n >= 2 && n <= 40 && m >= 2 && m <= 200 {
-		type pair struct {
-			i, j int
-			d    float64
+	return append(starts, pairStarts(des, mea, gate)...)
+}
+
+// pairStarts sets the design's four longest pairs of holes on every
+// measured pair as far apart (within the gate), both ways round, at most
+// 400 starts: robust to missing and extra holes, which pull the centroids
+// apart. None for patterns of one hole, or too many to pair.
+func pairStarts(des, mea []abVec, gate float64) []abRigid {
+	n, m := len(des), len(mea)
+	if n < 2 || n > 40 || m < 2 || m > 200 {
+		return nil
+	}
+	type pair struct {
+		i, j int
+		d    float64
+	}
+	var dp []pair
+	for i := range des {
+		for j := i + 1; j < n; j++ {
+			dp = append(dp, pair{i, j, math.Hypot(des[j].x-des[i].x, des[j].y-des[i].y)})
 		}
-		var dp []pair
-		for i := range des {
-			for j := i + 1; j < n; j++ {
-				dp = append(dp, pair{i, j, math.Hypot(des[j].x-des[i].x, des[j].y-des[i].y)})
-			}
-		}
-		slices.SortStableFunc(dp, func(a, b pair) int { return cmp.Compare(b.d, a.d) })
-		added := 0
-		for _, pr := range dp[:min(4, len(dp))] {
-			p, q := des[pr.i], des[pr.j]
-			for a := range mea {
-				for b := range mea {
-					if a == b || added >= 400 {
-						continue
-					}
-					ma, mb := mea[a], mea[b]
-					if math.Abs(math.Hypot(mb.x-ma.x, mb.y-ma.y)-pr.d) > gate {
-						continue
-					}
-					th := math.Atan2(mb.y-ma.y, mb.x-ma.x) - math.Atan2(q.y-p.y, q.x-p.x)
-					tf := abRigid{theta: math.Remainder(th, 2*math.Pi)}
-					rp := tf.apply(p)
-					tf.t = abVec{ma.x - rp.x, ma.y - rp.y}
-					starts = append(starts, tf)
-					added++
+	}
+	slices.SortStableFunc(dp, func(a, b pair) int { return cmp.Compare(b.d, a.d) })
+	var starts []abRigid
+	for _, pr := range dp[:min(4, len(dp))] {
+		p, q := des[pr.i], des[pr.j]
+		for a := range mea {
+			for b := range mea {
+				if a == b || len(starts) >= 400 {
+					continue
 				}
+				ma, mb := mea[a], mea[b]
+				if math.Abs(math.Hypot(mb.x-ma.x, mb.y-ma.y)-pr.d) > gate {
+					continue
+				}
+				th := math.Atan2(mb.y-ma.y, mb.x-ma.x) - math.Atan2(q.y-p.y, q.x-p.x)
+				tf := abRigid{theta: math.Remainder(th, 2*math.Pi)}
+				rp := tf.apply(p)
+				tf.t = abVec{ma.x - rp.x, ma.y - rp.y}
+				starts = append(starts, tf)
 			}
 		}
 	}
-	type fit struct {
-		tf      abRigid
-		match   []int
-		matched int
-		sse     float64
-		datum   float64
-		iters   int
-	}
-	var best *fit
-	for _, tf := range starts {
-		var match []int
-		iters := 0
-		for iters < 50 {
-			iters++
-			m := assignHoles(des, tf.inverseAll(mea), gate)
-			var ps, qs []abVec
-			for i, k := range m {
-				if k >= 0 {
-					ps, qs = append(ps, des[i]), append(qs, mea[k])
-				}
-			}
-			if len(ps) == 0 {
-				match = m
-				break
-			}
-			next := fitRigid(ps, qs, tf.theta)
-			settled := slices.Equal(m, match) && math.Abs(next.theta-tf.theta) < 1e-14 &&
-				math.Abs(next.t.x-tf.t.x) < 1e-10 && math.Abs(next.t.y-tf.t.y) < 1e-10
-			tf, match = next, m
-			if settled {
-				break
-			}
-		}
-		f := &fit{tf: tf, match: match, iters: iters}
-		al := tf.inverseAll(mea)
-		for i, k := range match {
+	return starts
+}
+
+// fit is one start's outcome: its transform and matching, the holes
+// matched and their squared deviation, how far its contour's lower-left
+// corner lies from the datum, and the iterations it took.
+type fit struct {
+	tf      abRigid
+	match   []int
+	matched int
+	sse     float64
+	datum   float64
+	iters   int
+}
+
+// settleFit alternates optimal matching and the least-squares fit from
+// tf until the matching and the transform settle (or no hole matches), at
+// most 50 times. The fit's tf, match and iters are set; tf is not yet
+// reduced to within ±π.
+func settleFit(des, mea []abVec, gate float64, tf abRigid) *fit {
+	var match []int
+	iters := 0
+	for iters < 50 {
+		iters++
+		m := assignHoles(des, tf.inverseAll(mea), gate)
+		var ps, qs []abVec
+		for i, k := range m {
 			if k >= 0 {
-				f.matched++
-				f.sse += abSq(al[k].x-des[i].x) + abSq(al[k].y-des[i].y)
+				ps, qs = append(ps, des[i]), append(qs, mea[k])
 			}
 		}
-		f.tf.theta = math.Remainder(f.tf.theta, 2*math.Pi)
-		if len(contour) > 0 {
-			cs := make([]abVec, len(contour))
-			for i, p := range contour {
-				cs[i] = tf.inverse(abVec{p.X, p.Y})
-			}
-			lo := pointsMin(cs)
-			f.datum = math.Hypot(lo.x, lo.y)
+		if len(ps) == 0 {
+			match = m
+			break
 		}
-		if best == nil {
-			best = f
-			continue
-		}
-		scale := 1e-9 * (1 + best.sse)
-		switch {
-		case f.matched != best.matched:
-			if f.matched > best.matched {
-				best = f
-			}
-		case math.Abs(f.sse-best.sse) > max(scale, 1e-6):
-			if f.sse < best.sse {
-				best = f
-			}
-		case len(contour) > 0 && math.Abs(f.datum-best.datum) > 1e-3:
-			if f.datum < best.datum {
-				best = f
-			}
-		case math.Abs(f.tf.theta) < math.Abs(best.tf.theta)-1e-9:
-			best = f
+		next := fitRigid(ps, qs, tf.theta)
+		settled := slices.Equal(m, match) && math.Abs(next.theta-tf.theta) < 1e-14 &&
+			math.Abs(next.t.x-tf.t.x) < 1e-10 && math.Abs(next.t.y-tf.t.y) < 1e-10
+		tf, match = next, m
+		if settled {
+			break
 		}
 	}
-	return best.tf, best.match, best.iters
+	return &fit{tf: tf, match: match, iters: iters}
+}
+
+// scoreFit counts the settled fit f's matched holes and their squared
+// deviation, measures its contour's datum (when there is a contour), and
+// then reduces its rotation to within ±π.
+func scoreFit(des, mea []abVec, contour []r2.Vec, f *fit) *fit {
+	tf := f.tf
+	al := tf.inverseAll(mea)
+	for i, k := range f.match {
+		if k >= 0 {
+			f.matched++
+			f.sse += abSq(al[k].x-des[i].x) + abSq(al[k].y-des[i].y)
+		}
+	}
+	f.tf.theta = math.Remainder(f.tf.theta, 2*math.Pi)
+	if len(contour) > 0 {
+		cs := make([]abVec, len(contour))
+		for i, p := range contour {
+			cs[i] = tf.inverse(abVec{p.X, p.Y})
+		}
+		lo := pointsMin(cs)
+		f.datum = math.Hypot(lo.x, lo.y)
+	}
+	return f
+}
+
+// betterThan reports whether fit f beats fit b: more holes matched, then
+// a clearly smaller squared deviation, then (byContour) a contour clearly
+// nearer the datum, then a clearly smaller rotation.
+func (f *fit) betterThan(b *fit, byContour bool) bool {
+	scale := 1e-9 * (1 + b.sse)
+	switch {
+	case f.matched != b.matched:
+		return f.matched > b.matched
+	case math.Abs(f.sse-b.sse) > max(scale, 1e-6):
+		return f.sse < b.sse
+	case byContour && math.Abs(f.datum-b.datum) > 1e-3:
+		return f.datum < b.datum
+	}
+	return math.Abs(f.tf.theta) < math.Abs(b.tf.theta)-1e-9
 }
 
 func abSq(v float64) float64 { return v * v }

@@ -1,0 +1,189 @@
+package propose
+
+import (
+	"cmp"
+	"math"
+
+	"gaugeline/detail"
+	"gaugeline/detail/jobfile"
+	"gaugeline/engine"
+	"gaugeline/rules/units"
+)
+
+// Candidates: one layout of a group, how it is built and checked, and
+// the total order of SPEC §6 that ranks candidates.
+
+// cand is one layout of a group: indexes into its ranges.
+type cand struct {
+	g       *group
+	g2i     int
+	g1      units.Length
+	i, j, k int // pitch, end, edge
+	lenNm   int64
+	rep     *detail.Report
+	ratioB  int64
+}
+
+// candKey identifies a candidate in the pruned search's cache: its group,
+// gage2 index, first gage (in nm) and pitch, end and edge indexes.
+type candKey struct {
+	group, g2i int
+	g1         int64
+	i, j, k    int
+}
+
+// key is the candidate's cache key.
+func (c *cand) key() candKey {
+	return candKey{c.g.idx, c.g2i, int64(math.Round(float64(c.g1) * 1e6)), c.i, c.j, c.k}
+}
+
+// length is the connection length: end + pattern length + plate edge.
+func (c *cand) length() units.Length {
+	g := c.g
+	return g.end[c.j] + units.Length(g.perLine-1)*g.pitch[c.i] + g.stag + g.edge[c.k]
+}
+
+func (p *problem) newCand(g *group, g2i int, g1 units.Length, i, j, k int) *cand {
+	c := &cand{g: g, g2i: g2i, g1: g1, i: i, j: j, k: k}
+	c.lenNm = int64(math.Round(float64(c.length()) * 1e6)) // nm: exact ties
+	return c
+}
+
+// design builds the candidate's Design from the group's template in the
+// steps Build takes; false when a hole leaves the member or the plate.
+func (p *problem) design(c *cand) (*detail.Design, bool) {
+	g := c.g
+	t := g.tmpl
+	d := &detail.Design{Job: p.job, Conn: t.Conn, Info: t.Info, Combination: t.Combination}
+	pat := detail.Pattern{Lines: g.lines, PerLine: g.perLine, Pitch: g.pitch[c.i], End: g.end[c.j],
+		Gage: c.g1, Gage2: g.gage2[c.g2i], Stagger: g.stag}
+	if !d.PlaceHoles(pat.Centres(make([]engine.Hole, 0, g.nT)), g.shape, g.plate).OK() {
+		return nil, false
+	}
+	if t.Conn.Plate != nil && d.PlacePlate(g.edge[c.k]) >= 0 {
+		return nil, false
+	}
+	return d, true
+}
+
+// eval checks the candidate, through the cache when there is one, and
+// counts the check; false when its holes leave a part.
+func (p *problem) eval(c *cand) bool {
+	if c.rep != nil {
+		return true
+	}
+	if p.cache != nil {
+		if r, ok := p.cache[c.key()]; ok {
+			c.setReport(r)
+			return r != nil
+		}
+	}
+	if p.limit > 0 && p.checks >= p.limit {
+		p.stopped = true
+		return false
+	}
+	p.checks++
+	if p.progress != nil {
+		p.progress(p.checks, -1)
+	}
+	ok := p.check(c)
+	if ok {
+		p.evals++
+	}
+	if p.cache != nil {
+		p.cache[c.key()] = c.rep
+	}
+	return ok
+}
+
+// check builds and checks the candidate; false when its holes leave a
+// part. It changes nothing but c, so workers may call it at once.
+func (p *problem) check(c *cand) bool {
+	d, ok := p.design(c)
+	if !ok {
+		return false
+	}
+	r, err := detail.Check(d)
+	if err != nil {
+		return false // a lookup the edition cannot answer: not a candidate
+	}
+	c.setReport(r)
+	return true
+}
+
+// setReport keeps the candidate's check, nil when it could not be built,
+// and its governing ratio bucketed.
+func (c *cand) setReport(r *detail.Report) {
+	c.rep = r
+	if r != nil {
+		c.ratioB = ratioBucket(r.GoverningResult().Ratio)
+	}
+}
+
+// ratioBucket is a ratio to 6 decimals: ratios that close are a tie,
+// which the tie-breaks settle, so that rounding noise in sums of grid
+// values never decides.
+func ratioBucket(ratio float64) int64 {
+	if math.IsNaN(ratio) || ratio > 1e12 {
+		return math.MaxInt64
+	}
+	return int64(math.Round(ratio * 1e6))
+}
+
+// feasible reports whether the candidate was built and passes.
+func (c *cand) feasible() bool { return c.rep != nil && c.rep.Pass }
+
+// cmpPrefix orders by the objective's first three keys.
+func cmpPrefix(obj jobfile.Objective, nA int, lenA int64, dA units.Length, nB int, lenB int64, dB units.Length) int {
+	if obj == jobfile.ShortestLength {
+		return cmp.Or(cmp.Compare(lenA, lenB), cmp.Compare(nA, nB), cmp.Compare(dA, dB))
+	}
+	return cmp.Or(cmp.Compare(nA, nB), cmp.Compare(lenA, lenB), cmp.Compare(dA, dB))
+}
+
+// compare is the total order of SPEC §6 with its deterministic tie-breaks.
+func compare(obj jobfile.Objective, a, b *cand) int {
+	ga, gb := a.g, b.g
+	return cmp.Or(
+		cmpPrefix(obj, ga.nT, a.lenNm, ga.d, gb.nT, b.lenNm, gb.d),
+		cmp.Compare(a.ratioB, b.ratioB),
+		tieBreak(a, b),
+	)
+}
+
+// tieBreak orders layouts of equal bolts, length, diameter and ratio.
+func tieBreak(a, b *cand) int {
+	ga, gb := a.g, b.g
+	return cmp.Or(
+		cmp.Compare(ga.gi, gb.gi),
+		cmp.Compare(ga.tp, gb.tp),
+		cmp.Compare(ga.lines, gb.lines),
+		cmp.Compare(ga.perLine, gb.perLine),
+		cmp.Compare(a.g1, b.g1),
+		cmp.Compare(ga.gage2[a.g2i], gb.gage2[b.g2i]),
+		cmp.Compare(ga.end[a.j], gb.end[b.j]),
+		cmp.Compare(ga.pitch[a.i], gb.pitch[b.i]),
+		cmp.Compare(ga.edge[a.k], gb.edge[b.k]),
+		cmp.Compare(ga.idx, gb.idx),
+	)
+}
+
+// arrangement is what alternatives are told apart by: diameter, grade,
+// lines and bolts per line (not the plate thickness).
+type arrangement struct{ di, gi, lines, perLine int }
+
+func (g *group) arrangement() arrangement { return arrangement{g.di, g.gi, g.lines, g.perLine} }
+
+// onePerArrangement keeps the first (best) layout of each arrangement of
+// a sorted list.
+func onePerArrangement(cs []*cand) []*cand {
+	seen := map[arrangement]bool{}
+	out := cs[:0:0]
+	for _, c := range cs {
+		if a := c.g.arrangement(); !seen[a] {
+			seen[a] = true
+			out = append(out, c)
+		}
+	}
+	return out
+}
