@@ -190,7 +190,7 @@ func tabulatedMsg(err error) string {
 func diametersHint(ed *rules.Edition) string {
 	var ds []string
 	for _, d := range ed.Diameters() {
-		ds = append(ds, boltName(d, ed.System))
+		ds = append(ds, boltName(d, ed.System()))
 	}
 	return "tabulated diameters: " + strings.Join(ds, ", ")
 }

@@ -147,7 +147,7 @@ func (r *Report) WriteText(w io.Writer) error {
 	p := people{d.Job.Units}
 	lb := d.Job.Units.Labels()
 	var b strings.Builder
-	fmt.Fprintf(&b, "%s — %s, %s, %s units\n", d.Job.Mark, d.Conn.Edition.Name, strings.ToUpper(d.Conn.Method.String()), d.Job.Units)
+	fmt.Fprintf(&b, "%s — %s, %s, %s units\n", d.Job.Mark, d.Conn.Edition.Name(), strings.ToUpper(d.Conn.Method.String()), d.Job.Units)
 	tw := tabwriter.NewWriter(&b, 0, 0, 2, ' ', 0)
 	for _, row := range d.Summary() {
 		fmt.Fprintf(tw, "  %s\t%s\n", row[0], row[1])
@@ -191,7 +191,7 @@ func (r *Report) WriteMarkdown(w io.Writer) error {
 	lb := d.Job.Units.Labels()
 	var b strings.Builder
 	fmt.Fprintf(&b, "# %s — tension connection check\n\n", d.Job.Mark)
-	fmt.Fprintf(&b, "%s, %s, %s units.\n\n", d.Conn.Edition.Name, strings.ToUpper(d.Conn.Method.String()), d.Job.Units)
+	fmt.Fprintf(&b, "%s, %s, %s units.\n\n", d.Conn.Edition.Name(), strings.ToUpper(d.Conn.Method.String()), d.Job.Units)
 	for _, row := range d.Summary() {
 		fmt.Fprintf(&b, "- **%s**: %s\n", row[0], row[1])
 	}

@@ -207,7 +207,7 @@ func (r *Report) Document() Document {
 	length := func(l units.Length) JSONNum { return JSONNum(sys.ToJob(float64(l), units.DimLength)) }
 	g := r.GoverningResult()
 	doc := Document{
-		Mark: d.Job.Mark, Standard: d.Conn.Edition.Name, Method: d.Conn.Method.String(), Units: sys.String(),
+		Mark: d.Job.Mark, Standard: d.Conn.Edition.Name(), Method: d.Conn.Method.String(), Units: sys.String(),
 		UnitLabels: sys.Labels(), Demand: force(d.Conn.Demand), Combination: d.Combination,
 		Verdict: r.Verdict(), Governing: g.ID, GoverningRatio: JSONNum(g.Ratio), Failing: r.Failing(),
 		LimitStates: []jsonLimit{}, Detailing: []jsonFinding{}, Holes: []jsonHole{}, Cautions: r.Cautions,

@@ -43,7 +43,7 @@ func boltShearFnv(c *Connection) (units.Stress, float64) {
 // resistance takes hf instead.
 func fillerFactor(c *Connection) (float64, string) {
 	b := c.Bolt
-	t := units.FormatJob(b.FillerT, c.Edition.System)
+	t := units.FormatJob(b.FillerT, c.Edition.System())
 	switch {
 	case b.FillerT > 0 && b.FillerDeveloped:
 		return 1, fmt.Sprintf("fillers %s, developed (J5.2(b)): no reduction", t)
@@ -111,11 +111,11 @@ func BoltShear(c *Connection) Result {
 		w := Working{Title: "Shear rupture of the bolts", Steps: []Step{abStep, fnvStep}}
 		if ff < 1 {
 			rnExpr.Args = append(rnExpr.Args, working.Coef(ffv, 3))
-			formula, steps := fillerWorking(ed.System, bolt.FillerT, ff)
+			formula, steps := fillerWorking(ed.System(), bolt.FillerT, ff)
 			w.Formula = append(w.Formula, formula)
 			w.Steps = append(w.Steps, steps...)
 			limit := "1/4 in"
-			if ed.System == units.SI {
+			if ed.System() == units.SI {
 				limit = "6 mm"
 			}
 			where += "; ff is the filler factor for bolts through fillers over " + limit +

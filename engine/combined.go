@@ -256,7 +256,7 @@ type combinedParts struct {
 
 // combinedWorking is the working of member.combined: H1.2 with F11 and
 // D2; its result is an interaction, not a strength with one φ.
-func combinedWorking(ed *rules.Edition, method rules.Method, ratioV float64, v *combinedParts, eq string) Working {
+func combinedWorking(ed Code, method rules.Method, ratioV float64, v *combinedParts, eq string) Working {
 	lrfd := method == rules.LRFD
 	fb := ed.FlexureFactor()
 	sym := func(s string) Expr { return working.Of(Value{Sym: s}) }

@@ -116,7 +116,7 @@ func (h *Hole) PliesDiffer() bool { return h.Plate != nil && *h.Plate != h.HoleS
 
 // Connection is everything the limit states need.
 type Connection struct {
-	Edition *rules.Edition
+	Edition Code // the standard and edition checked to
 	Method  rules.Method
 	Member  Member
 	Plate   *Plate // nil: the member alone is checked

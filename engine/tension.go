@@ -177,7 +177,7 @@ func MemberRupture(c *Connection) Result {
 		aeStep := Step{Value: ae, Expr: working.Mul(working.Of(u), working.Of(an))}
 		rn := Step{Value: nominal(Rn), Expr: working.Mul(working.Of(Fu), working.Of(ae))}
 		where := "the path is the worst straight or zig-zag path across the section (B4.3); s and g are the spacing and gage between consecutive holes of the path; dh = nominal hole + " +
-			units.FormatJob(ed.HoleAllowance(), ed.System)
+			units.FormatJob(ed.HoleAllowance(), ed.System())
 		w := Working{
 			Title:   "Tensile rupture in the net section of the member",
 			Formula: []Step{rn, aeStep, anStep},

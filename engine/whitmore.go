@@ -160,7 +160,7 @@ func PlateRupture(c *Connection) Result {
 			Title:   "Tensile rupture of the plate on the Whitmore section",
 			Formula: []Step{rn, {Value: Value{Sym: "An"}, Expr: working.Mul(working.Add(working.Sub(working.Of(lw), working.Of(Value{Sym: "Σdh"})), working.Of(Value{Sym: "Σs²/4g"})), working.Of(t))}},
 			Where: "the holes are those of the worst straight or zig-zag path across the plate (B4.3b, the same search as the member's); dh = nominal hole + " +
-				units.FormatJob(ed.HoleAllowance(), ed.System),
+				units.FormatJob(ed.HoleAllowance(), ed.System()),
 			Steps: []Step{
 				{Value: ag, Expr: working.Mul(working.Of(lw), working.Of(t))},
 				{Then: working.Phrase(working.Words("worst path: "), working.Of(holes), working.Words(" hole(s), Σdh − Σs²/4g = "), working.Of(dd))},

@@ -87,7 +87,7 @@ func (e *Edition) bolt(name string) (BoltGrade, error) {
 	key := fmt.Sprintf("grade %s (known: %s)", name, strings.Join(e.boltGrades(), ", "))
 	for _, b := range boltNames {
 		if b.name == want {
-			key = fmt.Sprintf("grade %s (%s jobs use %s)", name, e.System, b.other)
+			key = fmt.Sprintf("grade %s (%s jobs use %s)", name, e.system, b.other)
 		}
 	}
 	return BoltGrade{}, &NotTabulatedError{Edition: e.String(), Table: e.table("Table J3.2"), Key: key}

@@ -23,17 +23,17 @@ const diameterTol = 1e-6 * units.Millimetre
 
 // unit is the length of one table unit: an inch (us) or a millimetre (si).
 func (e *Edition) unit() units.Length {
-	if e.System == units.SI {
+	if e.system == units.SI {
 		return units.Millimetre
 	}
 	return units.Inch
 }
 
 // si reports whether the edition's tables are read in SI units.
-func (e *Edition) si() bool { return e.System == units.SI }
+func (e *Edition) si() bool { return e.system == units.SI }
 
 // is22 reports whether the edition is 360-22.
-func (e *Edition) is22() bool { return e.Year >= 2022 }
+func (e *Edition) is22() bool { return e.year >= 2022 }
 
 // tableDiameters are the tabulated diameters in the table's unit. The
 // result aliases package data and must not be written.

@@ -10,10 +10,19 @@ import (
 // Edition is one edition of the standard in one unit system. Obtain it
 // with Lookup; its zero value is not usable.
 type Edition struct {
-	Name   string       // "aisc360-22" or "aisc360-16"
-	Year   int          // 2022 or 2016
-	System units.System // the unit system its tables are read in
+	name   string       // "aisc360-22" or "aisc360-16"
+	year   int          // 2022 or 2016
+	system units.System // the unit system its tables are read in
 }
+
+// Name is the edition's job-file spelling: "aisc360-22" or "aisc360-16".
+func (e *Edition) Name() string { return e.name }
+
+// Year is the year of the edition: 2022 or 2016.
+func (e *Edition) Year() int { return e.year }
+
+// System is the unit system the edition's tables are read in.
+func (e *Edition) System() units.System { return e.system }
 
 // Names lists the editions Lookup knows, newest first.
 func Names() []string { return []string{"aisc360-22", "aisc360-16"} }
@@ -25,15 +34,15 @@ func Lookup(name string, sys units.System) (*Edition, error) {
 	}
 	switch name {
 	case "aisc360-22":
-		return &Edition{Name: name, Year: 2022, System: sys}, nil
+		return &Edition{name: name, year: 2022, system: sys}, nil
 	case "aisc360-16":
-		return &Edition{Name: name, Year: 2016, System: sys}, nil
+		return &Edition{name: name, year: 2016, system: sys}, nil
 	}
 	return nil, fmt.Errorf("unknown edition %q (want one of %s)", name, strings.Join(Names(), ", "))
 }
 
 // String names the edition and its unit system, e.g. "aisc360-22 (us)".
-func (e *Edition) String() string { return e.Name + " (" + e.System.String() + ")" }
+func (e *Edition) String() string { return e.name + " (" + e.system.String() + ")" }
 
 // Clause returns the label, in this edition, of the clause a 360-16 label
 // names: under 360-22 "J3.10" becomes "J3.11"; labels outside J3 (and table

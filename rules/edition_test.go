@@ -23,7 +23,7 @@ func TestLookup(t *testing.T) {
 		if err != nil {
 			t.Fatalf("Lookup(%q, %v): %v", tt.name, tt.sys, err)
 		}
-		if ed.Name != tt.name || ed.Year != tt.year || ed.System != tt.sys {
+		if ed.Name() != tt.name || ed.Year() != tt.year || ed.System() != tt.sys {
 			t.Errorf("Lookup(%q, %v) = %+v", tt.name, tt.sys, *ed)
 		}
 	}
@@ -60,7 +60,7 @@ func TestLookupsShareNoState(t *testing.T) {
 	bg[0] = "X"
 	sg := a.SteelGrades()
 	sg[0] = "X"
-	a.Year = 2016
+	a.year = 2016
 	if got := b.Diameters()[0]; got != mm(12) {
 		t.Errorf("b.Diameters()[0] = %v after writing a's, want 12 mm", got)
 	}
@@ -73,8 +73,8 @@ func TestLookupsShareNoState(t *testing.T) {
 	if got := b.SteelGrades()[0]; got != "A36" {
 		t.Errorf("b.SteelGrades()[0] = %q after writing a's", got)
 	}
-	if b.Year != 2022 || b.Clause("J3.10") != "J3.11" {
-		t.Errorf("b changed with a: Year %d, Clause(J3.10) %q", b.Year, b.Clause("J3.10"))
+	if b.Year() != 2022 || b.Clause("J3.10") != "J3.11" {
+		t.Errorf("b changed with a: Year %d, Clause(J3.10) %q", b.Year(), b.Clause("J3.10"))
 	}
 	if _, err := b.Hole(mm(12), Standard); err != nil {
 		t.Errorf("b lost M12 after a was set to 2016: %v", err)

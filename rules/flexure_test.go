@@ -25,7 +25,7 @@ func TestFlexureValues(t *testing.T) {
 				t.Errorf("%s: φb, Ωb = %v, %v (%s)", ed, f.Phi, f.Omega, src22F1)
 			}
 			want, src := 1.5, src22F11
-			if ed.Year == 2016 {
+			if ed.Year() == 2016 {
 				want, src = 1.6, src16F11
 			}
 			if got := ed.BarPlasticCap(); got != want {

@@ -41,13 +41,13 @@ func TestSteel(t *testing.T) {
 			continue
 		}
 		u := units.Ksi
-		if tt.ed.System == units.SI {
+		if tt.ed.System() == units.SI {
 			u = units.Megapascal
 		}
 		w := tt.want
 		if s.Name != w.name || s.Weathering != w.weathering ||
 			!sameValue(float64(s.Fy), float64(units.Stress(w.Fy)*u)) || !sameValue(float64(s.Fu), float64(units.Stress(w.Fu)*u)) {
-			t.Errorf("%s: Steel = %+v, want %+v in %s (%s)", tt.name, s, w, tt.ed.System, tt.src)
+			t.Errorf("%s: Steel = %+v, want %+v in %s (%s)", tt.name, s, w, tt.ed.System(), tt.src)
 		}
 	}
 }

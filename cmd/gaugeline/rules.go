@@ -75,7 +75,7 @@ func (t ruleTables) holes() {
 	if sys == units.SI {
 		lenUnit = "mm"
 	}
-	fmt.Fprintf(tw, "%s — rule tables in %s units (lengths in %s)\n\n", e.Name, sys, lenUnit)
+	fmt.Fprintf(tw, "%s — rule tables in %s units (lengths in %s)\n\n", e.Name(), sys, lenUnit)
 	fmt.Fprintf(tw, "BOLT\tSTANDARD\tOVERSIZED\tSHORT SLOT\tLONG SLOT\tMIN EDGE\tC2 OVERSIZED\tC2 SHORT SLOT\tC2 LONG SLOT\t(%s, %s)\n",
 		e.Clause("Table J3.3"), e.Clause("Table J3.4"))
 	for _, d := range e.Diameters() {

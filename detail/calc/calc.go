@@ -150,7 +150,7 @@ func newPage(r *detail.Report, s *sheet.Sheet) page {
 	f := fmtr{d.Job.Units}
 	p := page{
 		Mark:            d.Job.Mark,
-		Subtitle:        fmt.Sprintf("Bolted tension connection · AISC %s · %s · %s units", strings.TrimPrefix(c.Edition.Name, "aisc"), strings.ToUpper(c.Method.String()), strings.ToUpper(d.Job.Units.String())),
+		Subtitle:        fmt.Sprintf("Bolted tension connection · AISC %s · %s · %s units", strings.TrimPrefix(c.Edition.Name(), "aisc"), strings.ToUpper(c.Method.String()), strings.ToUpper(d.Job.Units.String())),
 		File:            filepath.Base(d.Job.File),
 		Stamp:           d.Job.Stamp,
 		Pass:            r.Pass,
@@ -210,7 +210,7 @@ func (p *page) assumptions(r *detail.Report) {
 	p.Assumptions = append(p.Assumptions,
 		"Values are printed rounded in the job's units; the check runs at full precision, so a product written out may differ from the printed result in its last digit.",
 		fmt.Sprintf("The available strength is %s with the φ and Ω of AISC %s; a limit state passes when the ratio %s / %s does not exceed 1.0.",
-			p.AvailableSymbol, strings.TrimPrefix(r.Design.Conn.Edition.Name, "aisc"), p.DemandSymbol, p.AvailableSymbol))
+			p.AvailableSymbol, strings.TrimPrefix(r.Design.Conn.Edition.Name(), "aisc"), p.DemandSymbol, p.AvailableSymbol))
 }
 
 // cutSheet sets the cut sheet's schedule, the drawing of its views and the
@@ -310,7 +310,7 @@ func jobRows(d *detail.Design, f fmtr) (job, load []row) {
 	job = []row{
 		{"Mark", j.Mark},
 		{"Quantity", fmt.Sprintf("%d", j.Quantity)},
-		{"Standard", fmt.Sprintf("AISC %s (%s)", strings.TrimPrefix(c.Edition.Name, "aisc"), c.Edition.Name)},
+		{"Standard", fmt.Sprintf("AISC %s (%s)", strings.TrimPrefix(c.Edition.Name(), "aisc"), c.Edition.Name())},
 		{"Method", method},
 		{"Units", fmt.Sprintf("%s: %s, %s, %s, %s", sysName, lb.Length, lb.Force, lb.Stress, f.unitLabel(units.DimArea))},
 	}
@@ -460,7 +460,7 @@ func resultRows(c *engine.Connection, f fmtr, x engine.Result, in *engine.Intera
 		ru, rc, of = "Ra", "Rn/Ω", "(Rn/Ω)"
 	}
 	ratio := row{"Ratio " + ru + " / " + of, fmt.Sprintf("%s / %s = %s", f.num(float64(x.Demand), units.DimForce), f.num(float64(x.Available), units.DimForce), ratioText(x.Ratio))}
-	clause := "AISC " + strings.TrimPrefix(c.Edition.Name, "aisc") + " " + x.Clause
+	clause := "AISC " + strings.TrimPrefix(c.Edition.Name(), "aisc") + " " + x.Clause
 	var rows []row
 	if in != nil {
 		rows = []row{

@@ -820,9 +820,9 @@ func fillerFactor(t *testing.T, c *engine.Connection, v map[string]float64) floa
 	want := 1.0
 	switch tf := units.Length(v["filler_t"]); {
 	case c.Bolt.FillerDeveloped:
-	case c.Edition.System == units.SI && tf.Mm() > 6:
+	case c.Edition.System() == units.SI && tf.Mm() > 6:
 		want = max(0.85, 1-0.0154*(tf.Mm()-6))
-	case c.Edition.System == units.US && tf.In() > 0.25:
+	case c.Edition.System() == units.US && tf.In() > 0.25:
 		want = max(0.85, 1-0.4*(tf.In()-0.25))
 	}
 	if math.Abs(ff-want) > 1e-12 {

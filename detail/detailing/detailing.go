@@ -92,7 +92,7 @@ func holeName(c *engine.Connection, i int) string {
 // table names a table of the edition in force: US tables as printed, SI
 // tables with their M suffix (Table J3.3M).
 func table(c *engine.Connection, name string) string {
-	if c.Edition.System == units.SI {
+	if c.Edition.System() == units.SI {
 		return name + "M"
 	}
 	return name
@@ -663,7 +663,7 @@ func gageFindings(c *engine.Connection, info MemberInfo) []Finding {
 	h, name := &c.Holes[near], holeName(c, near)
 	fillet := h.Y - h.Dy/2
 	leg := h.Y - c.Member.T
-	wrench := WrenchClearance(c.Bolt.D, c.Edition.System)
+	wrench := WrenchClearance(c.Bolt.D, c.Edition.System())
 	return []Finding{
 		lengthFinding(id, commonPractice, fillet, info.K, atLeast(fillet, info.K), name+" to fillet (k)"),
 		lengthFinding(id, commonPractice, leg, wrench, atLeast(leg, wrench), name+" to outstanding leg (wrench clearance)"),

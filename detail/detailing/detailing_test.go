@@ -439,7 +439,7 @@ func TestDetailing(t *testing.T) {
 	for _, tc := range tests {
 		t.Run(tc.name, func(t *testing.T) {
 			fs := Check(tc.conn, tc.info)
-			sys := tc.conn.Edition.System
+			sys := tc.conn.Edition.System()
 			for _, w := range tc.want {
 				f, ok := find(fs, w.id, w.where)
 				if w.absent {

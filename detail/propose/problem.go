@@ -451,7 +451,7 @@ func (p *problem) gageSpan(g *group, i int) (gs []units.Length, lo, hi int, onGr
 		}
 		return nil, 0, 0, false
 	}
-	gLo := max(g.tmpl.Info.K+g.dy/2, m.T+detailing.WrenchClearance(g.d, p.ed.System), g.dy/2, m.Width-span-maxEdge)
+	gLo := max(g.tmpl.Info.K+g.dy/2, m.T+detailing.WrenchClearance(g.d, p.ed.System()), g.dy/2, m.Width-span-maxEdge)
 	gHi := m.Width - span - side
 	return nil, p.gridUp(gLo), p.gridDown(gHi), true
 }

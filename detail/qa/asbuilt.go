@@ -1276,7 +1276,7 @@ func (ab *AsBuilt) WriteText(w io.Writer) error {
 	d := ab.Design
 	sys := d.Job.Units
 	var b strings.Builder
-	fmt.Fprintf(&b, "%s — as-built re-verification, %s, %s, %s units\n", d.Job.Mark, d.Conn.Edition.Name, strings.ToUpper(d.Conn.Method.String()), d.Job.Units)
+	fmt.Fprintf(&b, "%s — as-built re-verification, %s, %s, %s units\n", d.Job.Mark, d.Conn.Edition.Name(), strings.ToUpper(d.Conn.Method.String()), d.Job.Units)
 	tw := tabwriter.NewWriter(&b, 0, 0, 2, ' ', 0)
 	for _, row := range append(d.Summary(), ab.preamble()...) {
 		fmt.Fprintf(tw, "  %s\t%s\n", row[0], row[1])
@@ -1319,7 +1319,7 @@ func (ab *AsBuilt) WriteMarkdown(w io.Writer) error {
 	sys := d.Job.Units
 	var b strings.Builder
 	fmt.Fprintf(&b, "# %s — as-built re-verification\n\n", d.Job.Mark)
-	fmt.Fprintf(&b, "%s, %s, %s units.\n\n", d.Conn.Edition.Name, strings.ToUpper(d.Conn.Method.String()), d.Job.Units)
+	fmt.Fprintf(&b, "%s, %s, %s units.\n\n", d.Conn.Edition.Name(), strings.ToUpper(d.Conn.Method.String()), d.Job.Units)
 	for _, row := range append(d.Summary(), ab.preamble()...) {
 		fmt.Fprintf(&b, "- **%s**: %s\n", row[0], detail.MarkdownEscape(row[1]))
 	}

@@ -751,7 +751,7 @@ func (l sheetLayout) titleBlock(s *Sheet, r *detail.Report, top float64) {
 	fields = append(fields,
 		[2]string{"BOLTS", fmt.Sprintf("(%d) %s %s, threads %s, %s joint, %s", len(c.Holes),
 			detail.BoltSize(c.Bolt.D, l.sys), c.Bolt.Grade.Name, c.Bolt.Threads, c.Bolt.Joint, detail.HoleKinds(c))},
-		[2]string{"STANDARD", fmt.Sprintf("AISC %s %s", strings.TrimPrefix(c.Edition.Name, "aisc"), strings.ToUpper(c.Method.String()))},
+		[2]string{"STANDARD", fmt.Sprintf("AISC %s %s", strings.TrimPrefix(c.Edition.Name(), "aisc"), strings.ToUpper(c.Method.String()))},
 		[2]string{"GOVERNING", fmt.Sprintf("%s (%s) ratio %s - %s", g.ID, g.Clause, detail.RatioText(g.Ratio), verdict)},
 		[2]string{"UNITS", unitName},
 	)
