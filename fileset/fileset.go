@@ -22,8 +22,13 @@ import (
 // sheet, CAM files, report) is one set, kept in its own folder DIR/MARK/
 // with a manifest MARK.files. A set is replaced as a whole: it is written
 // into a hidden staging folder beside it and swapped in by rename, so that
-// whenever a run stops (killed, power cut, full disk) each mark's folder
-// holds the old set, the new set, or nothing, never a mixture. Every file
+// whenever a run stops (killed, crashed, full disk) each mark's folder
+// holds the old set, the new set, or nothing, never a mixture. Nothing is
+// flushed to the disk (no fsync): after a power cut or a crash of the
+// system itself, the file system may have kept a rename but not all the
+// data before it, leaving files of the new set empty or short. The
+// manifest's SHA-256s make `gaugeline audit` report such a set, and the
+// next run replaces it. Every file
 // of a set carries the same stamp (tool version, what made it, the input's
 // SHA-256), in the form its format allows, and the manifest lists each
 // file's SHA-256; `gaugeline audit DIR` checks both.
