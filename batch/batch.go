@@ -183,40 +183,39 @@ func errText(err error) string {
 	return err.Error()
 }
 
-// markGate hands out set names (marks) in input order. Job i waits at the
-// gate until jobs 0…i-1 have passed it. That never deadlocks: jobs are
-// dispatched in input order and each reaches the gate after reading its
-// own file only, so the lowest job not yet through is always running.
+// markGate hands out set names (marks) in input order. Job i holds the
+// gate once job i-1 has let go of it: a relay of channels, one made per
+// job as it is dispatched, not a lock, and only the job holding the gate
+// touches owners. That never deadlocks: jobs are dispatched in input
+// order and each reaches the gate after reading its own file only, so the
+// lowest job not yet through is always running.
 type markGate struct {
-	mu     sync.Mutex
-	turn   *sync.Cond
-	next   int
 	owners map[string]markOwner // lower-cased mark → who writes its set
 }
 
 type markOwner struct{ file, mark string }
 
-func newMarkGate() *markGate {
-	g := &markGate{owners: map[string]markOwner{}}
-	g.turn = sync.NewCond(&g.mu)
-	return g
+// gateTurn is one job's place in the relay: it holds the gate when wait
+// is closed and hands it on by closing next.
+type gateTurn struct {
+	wait, next chan struct{}
+	passed     bool
 }
 
-// pass lets job i through the gate and claims the set of its mark ("" when
-// the job could not be read). It returns why the set cannot be had, ""
-// when it is the job's. Marks are compared without case: on Windows and
-// macOS file systems BR-1 and br-1 are one folder.
-func (g *markGate) pass(i int, file, mark string) string {
-	g.mu.Lock()
-	defer g.mu.Unlock()
-	for g.next < i {
-		g.turn.Wait()
-	}
-	if g.next > i { // through already: a job that panicked in here
+func newMarkGate() *markGate { return &markGate{owners: map[string]markOwner{}} }
+
+// pass lets the job through the gate and claims the set of its mark (""
+// when the job could not be read). It returns why the set cannot be had,
+// "" when it is the job's. Marks are compared without case: on Windows
+// and macOS file systems BR-1 and br-1 are one folder. A turn passes
+// once; a second pass (after a panic in the job) does nothing.
+func (g *markGate) pass(t *gateTurn, file, mark string) string {
+	if t.passed {
 		return ""
 	}
-	g.next++
-	g.turn.Broadcast()
+	t.passed = true
+	<-t.wait
+	defer close(t.next)
 	if mark == "" {
 		return ""
 	}
@@ -239,12 +238,20 @@ func (g *markGate) pass(i int, file, mark string) string {
 func Run(ctx context.Context, cfg Config, files []string, done func()) []Row {
 	rows := make([]Row, len(files))
 	gate := newMarkGate()
-	next := make(chan int)
+	type dispatched struct {
+		i    int
+		turn *gateTurn
+	}
+	next := make(chan dispatched)
 	go func() {
 		defer close(next)
+		wait := make(chan struct{})
+		close(wait) // the first job holds the gate at once
 		for i := range files {
+			t := &gateTurn{wait: wait, next: make(chan struct{})}
 			select {
-			case next <- i:
+			case next <- dispatched{i, t}:
+				wait = t.next
 			case <-ctx.Done():
 				return
 			}
@@ -254,9 +261,9 @@ func Run(ctx context.Context, cfg Config, files []string, done func()) []Row {
 	var wg sync.WaitGroup
 	for range cfg.Workers {
 		wg.Go(func() {
-			for i := range next {
-				rows[i] = runJob(cfg, gate, i, files[i])
-				finished <- i
+			for d := range next {
+				rows[d.i] = runJob(cfg, gate, d.turn, files[d.i])
+				finished <- d.i
 			}
 		})
 	}
@@ -279,9 +286,8 @@ func Run(ctx context.Context, cfg Config, files []string, done func()) []Row {
 }
 
 // runJob runs one job of the batch and writes its files.
-func runJob(cfg Config, gate *markGate, i int, path string) (row Row) {
+func runJob(cfg Config, gate *markGate, turn *gateTurn, path string) (row Row) {
 	row = Row{File: path, Ratio: math.NaN()}
-	through := false
 	defer func() {
 		// A programmer's mistake in one job must not stop the others.
 		if r := recover(); r != nil {
@@ -289,17 +295,14 @@ func runJob(cfg Config, gate *markGate, i int, path string) (row Row) {
 				Message: fmt.Sprintf("%s: internal error, please report it: %v", path, r),
 				Hint:    "gaugeline check (or propose) on this job alone shows where it happens"}
 		}
-		if !through {
-			gate.pass(i, path, "")
-		}
+		gate.pass(turn, path, "") // hands the gate on if the job stopped before it
 	}()
 	job, err := jobfile.LoadJob(path)
 	mark := ""
 	if err == nil {
 		mark = job.Mark
 	}
-	conflict := gate.pass(i, path, mark)
-	through = true
+	conflict := gate.pass(turn, path, mark)
 	if err != nil {
 		return errorRow(row, path, err)
 	}

@@ -72,7 +72,12 @@ func Comment(data []byte, stamp string) []byte {
 	return append(c, data...)
 }
 
-func oneLine(s string) string { return strings.NewReplacer("\r", " ", "\n", " ").Replace(s) }
+func oneLine(s string) string { return lineBreaks.Replace(s) }
+
+// lineBreaks turns line breaks into blanks. A Replacer never changes
+// once built and is safe for concurrent use; one built per file cost
+// about 0.5 kB of garbage a file (BenchmarkBatch's memory profile).
+var lineBreaks = strings.NewReplacer("\r", " ", "\n", " ")
 
 // layerColor is the ACI colour of a layer: parts in the foreground
 // colour, holes red, dimensions cyan, reference lines grey.

@@ -12,7 +12,6 @@ import (
 	"errors"
 	"fmt"
 	"html"
-	"io/fs"
 	"os"
 	"path/filepath"
 	"slices"
@@ -23,8 +22,13 @@ import (
 // sheet, CAM files, report) is one set, kept in its own folder DIR/MARK/
 // with a manifest MARK.files. A set is replaced as a whole: it is written
 // into a hidden staging folder beside it and swapped in by rename, so that
-// whenever a run stops (killed, power cut, full disk) each mark's folder
-// holds the old set, the new set, or nothing, never a mixture. Every file
+// whenever a run stops (killed, crashed, full disk) each mark's folder
+// holds the old set, the new set, or nothing, never a mixture. Nothing is
+// flushed to the disk (no fsync): after a power cut or a crash of the
+// system itself, the file system may have kept a rename but not all the
+// data before it, leaving files of the new set empty or short. The
+// manifest's SHA-256s make `gaugeline audit` report such a set, and the
+// next run replaces it. Every file
 // of a set carries the same stamp (tool version, what made it, the input's
 // SHA-256), in the form its format allows, and the manifest lists each
 // file's SHA-256; `gaugeline audit DIR` checks both.
@@ -224,22 +228,28 @@ func Write(out string, s Set) error {
 		}
 		seen[strings.ToLower(f.Name)] = true
 	}
-	if err := os.MkdirAll(out, 0o755); err != nil {
-		return fmt.Errorf("cannot create the output directory: %w", err)
-	}
 	target := filepath.Join(out, s.Name)
-	if fi, err := os.Lstat(target); err == nil && (!fi.IsDir() || !IsSet(target)) {
+	fi, err := os.Lstat(target)
+	exists := err == nil
+	if exists && (!fi.IsDir() || !IsSet(target)) {
 		return fmt.Errorf("%s exists and is not a gaugeline file set: move it away, or write to another folder", target)
 	}
+	// The output folder is made only when the staging folder cannot be:
+	// in a batch it exists, and a stat per set is not worth asking.
 	stage, err := os.MkdirTemp(out, "."+s.Name+".new-")
 	if err != nil {
-		return fmt.Errorf("cannot write into %s: %w", out, err)
+		if err := os.MkdirAll(out, 0o755); err != nil {
+			return fmt.Errorf("cannot create the output directory: %w", err)
+		}
+		if stage, err = os.MkdirTemp(out, "."+s.Name+".new-"); err != nil {
+			return fmt.Errorf("cannot write into %s: %w", out, err)
+		}
 	}
 	if err := writeStage(stage, s); err != nil {
 		os.RemoveAll(stage)
 		return err
 	}
-	return swapIn(stage, target)
+	return swapIn(stage, target, exists)
 }
 
 // writeStage writes the set's files and manifest into the staging folder.
@@ -249,7 +259,7 @@ func writeStage(stage string, s Set) error {
 	}
 	files := append(slices.Clone(s.Files), File{Name: s.Name + ManifestExt, Data: s.Manifest()})
 	for _, f := range files {
-		if err := os.WriteFile(filepath.Join(stage, f.Name), f.Data, 0o644); err != nil {
+		if err := createFile(filepath.Join(stage, f.Name), f.Data); err != nil {
 			return fmt.Errorf("cannot write %s: %w", f.Name, err)
 		}
 	}
@@ -259,9 +269,12 @@ func writeStage(stage string, s Set) error {
 // swapIn puts the staged folder in target's place. Where the system can
 // exchange two names in one step (Linux renameat2), there is no moment
 // without a set; elsewhere the old set is first moved aside, so a stop in
-// between leaves the mark without a set, never with a mixed one.
-func swapIn(stage, target string) error {
-	if _, err := os.Lstat(target); errors.Is(err, fs.ErrNotExist) {
+// between leaves the mark without a set, never with a mixed one. exists
+// is whether Write saw a set at target (under the folder's lock nothing
+// else changes that; a set that appeared since makes the rename fail, one
+// that went makes the exchange fail: an error either way, never a mix).
+func swapIn(stage, target string, exists bool) error {
+	if !exists {
 		if err := os.Rename(stage, target); err != nil {
 			os.RemoveAll(stage)
 			return fmt.Errorf("cannot write %s: %w", target, err)
