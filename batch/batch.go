@@ -12,7 +12,6 @@ import (
 	"errors"
 	"fmt"
 	"io"
-	"io/fs"
 	"math"
 	"os"
 	"path/filepath"
@@ -93,12 +92,12 @@ const maxListSize = 16 << 20
 func Inputs(arg string) ([]string, error) {
 	fi, err := os.Stat(arg)
 	if err != nil {
-		return nil, &jobfile.InputError{File: arg, Msg: "cannot read the jobs: " + errText(err)}
+		return nil, &jobfile.InputError{File: arg, Msg: "cannot read the jobs: " + fileset.ErrText(err)}
 	}
 	if fi.IsDir() {
 		entries, err := os.ReadDir(arg) // sorted by name
 		if err != nil {
-			return nil, &jobfile.InputError{File: arg, Msg: "cannot read the folder: " + errText(err)}
+			return nil, &jobfile.InputError{File: arg, Msg: "cannot read the folder: " + fileset.ErrText(err)}
 		}
 		var files []string
 		for _, e := range entries {
@@ -121,12 +120,12 @@ func Inputs(arg string) ([]string, error) {
 	}
 	f, err := fileset.OpenRegular(arg) // never blocks on a FIFO swapped in after the Stat
 	if err != nil {
-		return nil, &jobfile.InputError{File: arg, Msg: "cannot read the list: " + errText(err)}
+		return nil, &jobfile.InputError{File: arg, Msg: "cannot read the list: " + fileset.ErrText(err)}
 	}
 	defer f.Close()
 	data, err := io.ReadAll(io.LimitReader(f, maxListSize+1))
 	if err != nil {
-		return nil, &jobfile.InputError{File: arg, Msg: "cannot read the list: " + errText(err)}
+		return nil, &jobfile.InputError{File: arg, Msg: "cannot read the list: " + fileset.ErrText(err)}
 	}
 	if len(data) > maxListSize {
 		return nil, &jobfile.InputError{File: arg, Msg: fmt.Sprintf("the list is larger than %d MiB", maxListSize>>20),
@@ -172,15 +171,6 @@ func commentStart(s string) int {
 		}
 	}
 	return -1
-}
-
-// errText drops the path a *fs.PathError repeats.
-func errText(err error) string {
-	var pe *fs.PathError
-	if errors.As(err, &pe) {
-		return pe.Err.Error()
-	}
-	return err.Error()
 }
 
 // markGate hands out set names (marks) in input order. Job i holds the
@@ -352,7 +342,7 @@ func errorRow(row Row, path string, err error) Row {
 // jobFiles checks (or proposes) the job, fills in its summary row and
 // returns the files to write: the JSON, then the sheet and CAM files of a
 // passing layout when asked.
-func jobFiles(cfg Config, job *jobfile.Job, row *Row) ([]dxfout.File, error) {
+func jobFiles(cfg Config, job *jobfile.Job, row *Row) ([]fileset.File, error) {
 	var r *detail.Report
 	var data []byte
 	if cfg.Propose {
@@ -375,7 +365,7 @@ func jobFiles(cfg Config, job *jobfile.Job, row *Row) ([]dxfout.File, error) {
 					row.Ratio = p.Blockers[0].Ratio
 				}
 			}
-			return []dxfout.File{{Name: job.Mark + ".json", Data: data}}, nil
+			return []fileset.File{{Name: job.Mark + ".json", Data: data}}, nil
 		}
 		r = p.Report
 	} else {
@@ -392,7 +382,7 @@ func jobFiles(cfg Config, job *jobfile.Job, row *Row) ([]dxfout.File, error) {
 	}
 	g := r.GoverningResult()
 	row.Governing, row.Ratio, row.Bolts = g.ID, g.Ratio, len(r.Design.Conn.Holes)
-	files := []dxfout.File{{Name: job.Mark + ".json", Data: data}}
+	files := []fileset.File{{Name: job.Mark + ".json", Data: data}}
 	if !r.Pass {
 		row.Verdict, row.Message = VerdictFail, "fails: "+strings.Join(r.Failing(), ", ")
 		return files, nil

@@ -4,9 +4,7 @@ import (
 	"bytes"
 	"crypto/sha256"
 	"encoding/csv"
-	"errors"
 	"fmt"
-	"io/fs"
 	"os"
 	"path/filepath"
 	"slices"
@@ -65,7 +63,7 @@ func (a *Report) Problems() int {
 func Audit(dir string) (*Report, error) {
 	entries, err := os.ReadDir(dir)
 	if err != nil {
-		return nil, fmt.Errorf("cannot read the folder: %s", pathErr(err))
+		return nil, fmt.Errorf("cannot read the folder: %s", ErrText(err))
 	}
 	a := &Report{Sets: map[string]string{}}
 	for _, e := range entries {
@@ -110,7 +108,7 @@ func (a *Report) set(dir, name string) {
 		path := name + "/" + m.name
 		b, err := os.ReadFile(filepath.Join(setDir, m.name))
 		if err != nil {
-			a.add(path, Missing, "the set's manifest lists it, but it cannot be read: %s", pathErr(err))
+			a.add(path, Missing, "the set's manifest lists it, but it cannot be read: %s", ErrText(err))
 			continue
 		}
 		if fmt.Sprintf("%x", sha256.Sum256(b)) != m.sum {
@@ -125,7 +123,7 @@ func (a *Report) set(dir, name string) {
 	}
 	files, err := os.ReadDir(setDir)
 	if err != nil {
-		a.add(name+"/", Missing, "cannot be read: %s", pathErr(err))
+		a.add(name+"/", Missing, "cannot be read: %s", ErrText(err))
 		return
 	}
 	for _, f := range files {
@@ -177,12 +175,3 @@ func (a *Report) summary(dir string) {
 
 // short is the start of a hash, enough to tell two apart on screen.
 func short(h string) string { return h[:min(len(h), 12)] }
-
-// pathErr drops the path a *fs.PathError repeats.
-func pathErr(err error) string {
-	var pe *fs.PathError
-	if errors.As(err, &pe) {
-		return pe.Err.Error()
-	}
-	return err.Error()
-}

@@ -71,3 +71,24 @@ func TestOpenRegular(t *testing.T) {
 		t.Errorf("missing file: %v", err)
 	}
 }
+
+// ErrText names the failure without the path the message's line already
+// gives: os.Open's *fs.PathError loses its path, a special file says what
+// it is.
+func TestErrText(t *testing.T) {
+	dir := t.TempDir()
+	_, err := os.Open(filepath.Join(dir, "missing.yaml"))
+	if got := ErrText(err); got != "no such file or directory" {
+		t.Errorf("missing file: %q", got)
+	}
+	_, err = OpenRegular(dir)
+	if got := ErrText(err); got != "it is a directory, not a regular file" {
+		t.Errorf("directory: %q", got)
+	}
+	if NotRegularHint(err) == "" || NotRegularHint(os.ErrNotExist) != "" {
+		t.Errorf("the hint is for special files only")
+	}
+	if got := ErrText(errors.New("plain")); got != "plain" {
+		t.Errorf("other error: %q", got)
+	}
+}

@@ -30,10 +30,12 @@ var steels = [...]steelRow{
 // steelKey folds the spellings of a grade together: "a572 Gr.50",
 // "A572-GR50" and "A572-50" all read "A57250".
 func steelKey(name string) string {
-	s := strings.ToUpper(name)
-	s = strings.NewReplacer(" ", "", "-", "", ".", "", "_", "", "GR", "").Replace(s)
-	return s
+	return steelFold.Replace(strings.ToUpper(name))
 }
+
+// steelFold is steelKey's replacer, built once (a Replacer is safe for
+// concurrent use and never changes).
+var steelFold = strings.NewReplacer(" ", "", "-", "", ".", "", "_", "", "GR", "")
 
 // steelGrades lists the canonical names.
 func steelGrades() []string {

@@ -133,8 +133,8 @@ func demoWrite(p *propose.Proposal, dir string, out io.Writer) error {
 	if err != nil {
 		return err
 	}
-	files := append([]dxfout.File{
-		fileset.Stamped(dxfout.File{Name: mark + ".yaml", Data: p.LayoutJob}, p.Job.Stamp),
+	files := append([]fileset.File{
+		fileset.Stamped(fileset.File{Name: mark + ".yaml", Data: p.LayoutJob}, p.Job.Stamp),
 		{Name: mark + ".json", Data: js},
 		{Name: mark + ".html", Data: html},
 	}, dxfs...)
@@ -180,7 +180,7 @@ func demoReverify(p *propose.Proposal, dir string, out io.Writer) error {
 	// fabrication drawing, and is made at another time.
 	qaSet := mark + "-QA"
 	stamp := p.Job.Stamp
-	meas := fileset.Stamped(dxfout.File{Name: mark + "-measured.csv", Data: demoMeasured(d)}, stamp)
+	meas := fileset.Stamped(fileset.File{Name: mark + "-measured.csv", Data: demoMeasured(d)}, stamp)
 	csv := filepath.Join(dir, qaSet, meas.Name)
 	unit := measured.Inches
 	if d.Job.Units == units.SI {
@@ -198,8 +198,8 @@ func demoReverify(p *propose.Proposal, dir string, out io.Writer) error {
 	if err := ab.WriteMarkdown(&md); err != nil {
 		return err
 	}
-	report := fileset.Stamped(dxfout.File{Name: mark + "-qa.md", Data: []byte(md.String())}, stamp)
-	if err := fileset.Write(dir, fileset.Set{Name: qaSet, Stamp: stamp, Files: []dxfout.File{meas, report}}); err != nil {
+	report := fileset.Stamped(fileset.File{Name: mark + "-qa.md", Data: []byte(md.String())}, stamp)
+	if err := fileset.Write(dir, fileset.Set{Name: qaSet, Stamp: stamp, Files: []fileset.File{meas, report}}); err != nil {
 		return err
 	}
 	fmt.Fprintf(out, "QA  %s as fabricated, measured holes in %s\n", mark, csv)

@@ -379,9 +379,13 @@ func unitOf(rest string, want Dim, sys System) (Dim, float64, error) {
 // "in^2", "in²", "IN2" → "in2"; "sq  in" → "sq in".
 func normalizeUnit(u string) string {
 	u = strings.ToLower(strings.TrimSpace(u))
-	u = strings.NewReplacer("^", "", "²", "2").Replace(u)
+	u = powerFold.Replace(u)
 	return strings.Join(strings.Fields(u), " ")
 }
+
+// powerFold is normalizeUnit's replacer, built once (safe for concurrent
+// use, never changed).
+var powerFold = strings.NewReplacer("^", "", "²", "2")
 
 // leadingWord returns the ASCII letters at the start of s.
 func leadingWord(s string) string {
