@@ -812,7 +812,15 @@ func wrap(s string, n int) []string {
 // in any code page: a few typographic characters are spelled out, others
 // become '?'.
 func ascii(s string) string {
+	plain := true
+	for i := 0; i < len(s) && plain; i++ {
+		plain = s[i] >= 0x20 && s[i] < 0x7f
+	}
+	if plain { // most texts: nothing to spell out, no copy
+		return s
+	}
 	var b strings.Builder
+	b.Grow(len(s))
 	for _, r := range s {
 		switch {
 		case r == '×':
