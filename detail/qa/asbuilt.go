@@ -37,7 +37,8 @@ const (
 	// the heel or edge. A DXF contour's lower-left corner is the datum.
 	AlignDatum AlignMode = iota
 	// AlignBestFit finds the rigid shift and rotation that best matches the
-	// measured holes to the design (least squares over matched holes).
+	// measured holes to the design (least squares over the matched holes
+	// that agree within the position tolerance: robustFit).
 	AlignBestFit
 )
 
