@@ -2,6 +2,7 @@ package main
 
 import (
 	"encoding/json"
+	"math"
 	"os"
 	"path/filepath"
 	"strings"
@@ -200,5 +201,64 @@ func TestReverifyPlateWithoutPlate(t *testing.T) {
 	first := strings.SplitN(r.stderr, "\n", 2)[0]
 	if r.code != 2 || !strings.Contains(first, "aisc-d2.yaml: --part: the job has no plate to measure") || r.stdout != "" {
 		t.Errorf("exit %d, stderr %q, stdout %q", r.code, r.stderr, r.stdout)
+	}
+}
+
+// TestReverifyBestFitFindsTheMislocatedHole: the plate of hb-7-qa measured
+// with the whole plate shifted 1/2 in in x and y and hole H2 a further
+// 1/4 in across the line (a construction: the design's holes in the
+// plate's frame, at x' = 10.5, 7.5, 4.5, 1.5 in, y' = 6 in, moved by hand).
+// The best fit must recover the 1/2 in shift from H1, H3, H4 and report
+// H2 alone out of tolerance, 1/4 in off; the tolerance, 1/16 in, is the
+// job's default (common practice, no source).
+func TestReverifyBestFitFindsTheMislocatedHole(t *testing.T) {
+	dir := t.TempDir()
+	csv := filepath.Join(dir, "plate.csv")
+	body := "x,y,diameter,id\n11.0,6.5,0.8125,P1\n8.0,6.75,0.8125,P2\n5.0,6.5,0.8125,P3\n2.0,6.5,0.8125,P4\n"
+	if err := os.WriteFile(csv, []byte(body), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	job, _ := filepath.Abs(filepath.Join(measuredDir, "hb-7-qa.yaml"))
+	r := gaugeline(t, dir, "reverify", job, "--measured", csv, "--part", "plate", "--align", "best-fit", "--format", "json")
+	if r.code != 3 {
+		t.Fatalf("exit %d, want 3 (review: out of tolerance, passing); stderr %s", r.code, r.stderr)
+	}
+	var doc struct {
+		Alignment struct {
+			ShiftX      float64  `json:"shift_x"`
+			RotationDeg float64  `json:"rotation_deg"`
+			FitOn       []string `json:"fit_on"`
+			LeftOut     []string `json:"left_out_of_fit"`
+		} `json:"alignment"`
+		Deviations []struct {
+			ID     string  `json:"id"`
+			Status string  `json:"status"`
+			Radial float64 `json:"radial"`
+		} `json:"deviations"`
+		Reasons []string `json:"reasons"`
+	}
+	if err := json.Unmarshal([]byte(r.stdout), &doc); err != nil {
+		t.Fatal(err)
+	}
+	a := doc.Alignment
+	if math.Abs(a.ShiftX-0.5) > 1e-9 || math.Abs(a.RotationDeg) > 1e-9 ||
+		strings.Join(a.FitOn, ",") != "H1,H3,H4" || strings.Join(a.LeftOut, ",") != "H2" {
+		t.Errorf("alignment %+v; want shift x 1/2 in, no rotation, fit on H1, H3, H4, H2 left out", a)
+	}
+	for _, dv := range doc.Deviations {
+		want, radial := "ok", 0.0
+		if dv.ID == "H2" {
+			want, radial = "out-of-tolerance", 0.25
+		}
+		if dv.Status != want || math.Abs(dv.Radial-radial) > 1e-9 {
+			t.Errorf("%s: %s at %g in, want %s at %g in", dv.ID, dv.Status, dv.Radial, want, radial)
+		}
+	}
+	if len(doc.Reasons) == 0 || doc.Reasons[0] != "out of tolerance: H2" {
+		t.Errorf("reasons %q", doc.Reasons)
+	}
+	text := gaugeline(t, dir, "reverify", job, "--measured", csv, "--part", "plate", "--align", "best-fit")
+	if !strings.Contains(text.stdout, "fit        taken on H1, H3, H4; left out H2") {
+		t.Errorf("the text report does not say which holes the fit was taken on:\n%s", text.stdout)
 	}
 }

@@ -37,7 +37,8 @@ const (
 	// the heel or edge. A DXF contour's lower-left corner is the datum.
 	AlignDatum AlignMode = iota
 	// AlignBestFit finds the rigid shift and rotation that best matches the
-	// measured holes to the design (least squares over matched holes).
+	// measured holes to the design (least squares over the matched holes
+	// that agree within the position tolerance: robustFit).
 	AlignBestFit
 )
 
@@ -182,6 +183,12 @@ type Alignment struct {
 	RMS        units.Length // root mean square of the matched holes' radial deviations
 	Iterations int
 	Note       string
+	// FitOn are the design holes a best fit was taken on, in design
+	// order: every matched hole, or (robustFit) those that agree with one
+	// rigid motion within the position tolerance. LeftOut are the matched
+	// holes left out of it, each reported against the fit on the others;
+	// nil when none is (and for datum alignment, where FitOn is nil too).
+	FitOn, LeftOut []string
 }
 
 // AsBuilt is the outcome of reverify.
@@ -286,6 +293,7 @@ func Reverify(d *detail.Design, set *measured.Set, opt ReverifyOptions) (*AsBuil
 	case AlignBestFit:
 		tf, match, ab.Alignment.Iterations = bestFit(des, mea, float64(ab.Gate), set.Contour)
 		ab.Alignment.Note = "rigid shift and rotation fitted by least squares over the matched holes"
+		tf, match = ab.robustAlignment(des, mea, tf, match)
 	default:
 		if len(set.Contour) > 0 {
 			lo := contourMin(set.Contour)
@@ -309,6 +317,7 @@ func Reverify(d *detail.Design, set *measured.Set, opt ReverifyOptions) (*AsBuil
 	if err := ab.deviations(aligned, match); err != nil {
 		return nil, err
 	}
+	ab.markLeftOut()
 	var sum float64
 	n := 0
 	for _, dv := range ab.Deviations {
@@ -1077,6 +1086,10 @@ type jsonAlignment struct {
 	RMS         detail.JSONNum `json:"rms"`
 	Iterations  int            `json:"iterations,omitempty"`
 	Note        string         `json:"note"`
+	// Present only when a best fit left holes out (Alignment.LeftOut):
+	// absent, the fit was taken on every matched hole.
+	FitOn   []string `json:"fit_on,omitempty"`
+	LeftOut []string `json:"left_out_of_fit,omitempty"`
 }
 
 type jsonMeasured struct {
@@ -1129,6 +1142,9 @@ func (ab *AsBuilt) document() jsonReverify {
 	}
 	if doc.Reasons == nil {
 		doc.Reasons = []string{}
+	}
+	if len(ab.Alignment.LeftOut) > 0 {
+		doc.Alignment.FitOn, doc.Alignment.LeftOut = ab.Alignment.FitOn, ab.Alignment.LeftOut
 	}
 	for _, dv := range ab.Deviations {
 		j := jsonDeviation{ID: dv.ID, MeasuredID: dv.MeasuredID, Line: dv.Line, Status: dv.Status.String(),
@@ -1238,13 +1254,18 @@ func (ab *AsBuilt) preamble() [][2]string {
 	case ab.Design.Conn.Plate == nil:
 		part = "member: its holes reclassified from the measured sizes; coordinates in the job's frame"
 	}
-	return [][2]string{
+	rows := [][2]string{
 		{"measured", fmt.Sprintf("%s (%s, %s, %d holes)", m.File, m.Format, m.Units, len(m.Holes))},
 		{"part", part},
 		{"tolerance", fmt.Sprintf("position %s radial, size +%s over nominal; holes farther than %s from a design hole are extra",
 			units.FormatLength(ab.Tolerance.Position, sys, units.Exact), units.FormatLength(ab.Tolerance.Diameter, sys, units.Exact), units.FormatLength(ab.Gate, sys, units.Exact))},
 		{"alignment", align},
 	}
+	if len(a.LeftOut) > 0 {
+		rows = append(rows, [2]string{"fit", fmt.Sprintf("taken on %s; left out %s (off by more than the position tolerance from the fit on the others)",
+			strings.Join(a.FitOn, ", "), strings.Join(a.LeftOut, ", "))})
+	}
+	return rows
 }
 
 // ratioRows pairs each as-built limit state with the design's ratio.
