@@ -142,7 +142,7 @@ func (p *Plate) EdgeAlong(x, y units.Length, alongY bool, dir float64) units.Len
 		at, from = float64(x), float64(y)
 	}
 	best := math.Inf(int(dir))
-	for _, c := range p.crossings(at, !alongY) {
+	for _, c := range p.crossings(at, alongY) {
 		if d := dir * (c - from); d > -eps && dir*(c-best) < 0 {
 			best = c
 		}
