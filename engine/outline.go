@@ -212,24 +212,21 @@ func OutlineProblem(pts []r2.Vec, tol float64) (int, string) {
 			return i, fmt.Sprintf("repeats point %d", (i+n-1)%n)
 		}
 	}
+	adjacent := func(i, j int) bool { return j == i+1 || (i == 0 && j == n-1) }
+	for i := range n {
+		for j := i + 1; j < n; j++ {
+			if !adjacent(i, j) && segmentsMeet(pts[i], pts[(i+1)%n], pts[j], pts[(j+1)%n]) {
+				return j, fmt.Sprintf("edge %d–%d crosses edge %d–%d: the outline does not close around one piece", j, (j+1)%n, i, (i+1)%n)
+			}
+		}
+	}
 	if math.Abs(OutlineArea(pts)) <= tol*tol {
 		return n - 1, "the outline encloses no area (its points lie on one line): it does not close around a plate"
 	}
 	for i := range n {
-		for j := i + 1; j < n; j++ {
-			if j == i+1 || (i == 0 && j == n-1) {
-				p, q, r := pts[i], pts[j], pts[(j+1)%n] // edge p–q, then q–r
-				if j != i+1 {
-					p, q, r = pts[1], pts[0], pts[n-1]
-				}
-				if foldsBack(p, q, r) {
-					return j, fmt.Sprintf("turns back along edge %d–%d: the outline does not close around one piece", i, (i+1)%n)
-				}
-				continue
-			}
-			if segmentsMeet(pts[i], pts[(i+1)%n], pts[j], pts[(j+1)%n]) {
-				return j, fmt.Sprintf("edge %d–%d crosses edge %d–%d: the outline does not close around one piece", j, (j+1)%n, i, (i+1)%n)
-			}
+		j := (i + 1) % n // edge i–j, then j–k
+		if foldsBack(pts[i], pts[j], pts[(j+1)%n]) {
+			return j, fmt.Sprintf("turns straight back at point %d: the outline does not close around one piece", j)
 		}
 	}
 	return -1, ""
