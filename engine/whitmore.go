@@ -235,6 +235,8 @@ func whitmoreOutlineStep(lw, spread Value, lo, hi, xs units.Length, section [][2
 	default:
 		e = working.Add(terms...)
 	}
+	// The substitution is printed (the ends a QA engineer checks on the
+	// drawing), then what it is.
 	return Step{Value: lw, Expr: e,
-		Say: working.Phrase(working.Of(spread), working.Words(" spread, clipped by the plate's outline along x = "), length("xs", xs))}
+		Then: working.Phrase(working.Words(": the "), working.Of(spread), working.Words(" spread, clipped by the plate's outline along x = "), length("xs", xs))}
 }
