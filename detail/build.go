@@ -824,7 +824,7 @@ func (d *Design) placeOutline(pl *engine.Plate, outline []r2.Vec) int {
 		}
 		hs := h.InPlate()
 		for _, e := range edges {
-			if e.Distance(h.X, h.Y) < max(hs.Dx, hs.Dy)/2-eps {
+			if e.DistanceTo(h.X, h.Y) < max(hs.Dx, hs.Dy)/2-eps {
 				return i
 			}
 		}

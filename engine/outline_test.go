@@ -44,22 +44,3 @@ func TestOutlineSectionOfANonConvexPlate(t *testing.T) {
 		t.Error("inside: (5, 5) is in the notch, (5, 1) in the plate")
 	}
 }
-
-func TestOutlineProblems(t *testing.T) {
-	for _, c := range []struct {
-		name string
-		pts  []r2.Vec
-		at   int
-	}{
-		{"fine", uPlate().Outline, -1},
-		{"two points", []r2.Vec{{X: 0, Y: 0}, {X: 1, Y: 1}}, 1},
-		{"repeat", []r2.Vec{{X: 0, Y: 0}, {X: 1, Y: 0}, {X: 1, Y: 0}, {X: 0, Y: 1}}, 2},
-		{"on one line", []r2.Vec{{X: 0, Y: 0}, {X: 1, Y: 0}, {X: 2, Y: 0}}, 2},
-		{"bow tie", []r2.Vec{{X: 0, Y: 0}, {X: 1, Y: 0}, {X: 0, Y: 1}, {X: 1, Y: 1}}, 3},
-		{"turns back", []r2.Vec{{X: 0, Y: 0}, {X: 2, Y: 0}, {X: 1, Y: 0}, {X: 1, Y: 1}}, 2},
-	} {
-		if at, msg := OutlineProblem(c.pts, 1e-3); at != c.at || (c.at >= 0) != (msg != "") {
-			t.Errorf("%s: point %d %q, want point %d", c.name, at, msg, c.at)
-		}
-	}
-}

@@ -525,7 +525,7 @@ func outlineEdges(p *engine.Plate, m *engine.Member) []edge {
 			what += ", oblique"
 		}
 		es = append(es, edge{name: fmt.Sprintf("plate edge %d–%d (%s)", e.I, (e.I+1)%pts, what), alongX: e.Side(), t: p.T, ply: platePly, max: max,
-			dist: func(h *engine.Hole) units.Length { return e.Distance(h.X, h.Y) }})
+			dist: func(h *engine.Hole) units.Length { return e.DistanceTo(h.X, h.Y) }})
 	}
 	return es
 }

@@ -6,7 +6,7 @@ import (
 
 	"go.yaml.in/yaml/v3"
 
-	"gaugeline/engine"
+	"gaugeline/engine/polygon"
 	"gaugeline/rules/units"
 
 	"gonum.org/v1/gonum/spatial/r2"
@@ -24,7 +24,7 @@ const outlineTol = float64(minLength)
 // frame (SPEC §3), at least three, closed by itself (a last point equal
 // to the first within outlineTol is dropped). It must close around one
 // piece: no point repeating the one before it, some area, no edges that
-// cross or fold back (engine.OutlineProblem).
+// cross or fold back (polygon.Problem).
 func (p *parser) parseOutline(n *yaml.Node) ([]r2.Vec, error) {
 	const path = "plate.outline"
 	const example = "[[-10 in, -4 in], [12 in, -4 in], [12 in, 9 in], [-10 in, 9 in]]"
@@ -54,7 +54,7 @@ func (p *parser) parseOutline(n *yaml.Node) ([]r2.Vec, error) {
 	if k := len(pts) - 1; k > 0 && r2.Norm(r2.Sub(pts[k], pts[0])) <= outlineTol {
 		pts = pts[:k] // the closing point, given again
 	}
-	if i, msg := engine.OutlineProblem(pts, outlineTol); msg != "" {
+	if i, msg := polygon.Problem(pts, outlineTol); msg != "" {
 		i = max(i, 0)
 		return nil, p.errAt(items[i], fmt.Sprintf("%s[%d]", path, i), msg,
 			"list the plate's corners in order around it; the last joins the first")
@@ -79,7 +79,7 @@ func (p *parser) parseClips(n *yaml.Node, pts []r2.Vec) ([]r2.Vec, error) {
 	legs := make([][2]float64, nPts) // per corner: toward the previous point, toward the next
 	clipped := make([]bool, nPts)
 	itemOf := make([]int, nPts) // the clip item of each clipped corner
-	ccw := engine.OutlineArea(pts) > 0
+	ccw := polygon.Area(pts) > 0
 	for i, it := range items {
 		ip := fmt.Sprintf("%s[%d]", path, i)
 		p.job.lines[ip] = it.Line
