@@ -1,7 +1,11 @@
 package engine
 
 import (
+	"math"
+	"slices"
 	"testing"
+
+	"pgregory.net/rapid"
 
 	"gaugeline/rules/units"
 
@@ -43,4 +47,35 @@ func TestOutlineSectionOfANonConvexPlate(t *testing.T) {
 	if p.Inside(5, 5) || !p.Inside(5, 1) {
 		t.Error("inside: (5, 5) is in the notch, (5, 1) in the plate")
 	}
+}
+
+// The plate's rectangle given as an outline (closed 1 m behind the holes,
+// either way round) is the same plate: every limit state of a random
+// connection gives the strength the open rectangle gives (a property of
+// the model, no outside source), to 1e-9 relative.
+func TestPropertyRectangleAsOutline(t *testing.T) {
+	rapid.Check(t, func(rt *rapid.T) {
+		c := drawParams(rt).build(t)
+		want, err := Check(c)
+		if err != nil {
+			rt.Fatal(err)
+		}
+		pl := *c.Plate
+		back, lo, hi, fe := float64(pl.FreeEdge-units.Metre), float64(pl.YMin()), float64(pl.YMax()), float64(pl.FreeEdge)
+		pl.Outline = []r2.Vec{{X: back, Y: lo}, {X: fe, Y: lo}, {X: fe, Y: hi}, {X: back, Y: hi}}
+		if rapid.Bool().Draw(rt, "clockwise") {
+			slices.Reverse(pl.Outline)
+		}
+		c.Plate = &pl
+		got, err := Check(c)
+		if err != nil {
+			rt.Fatal(err)
+		}
+		for i := range want {
+			g, w := float64(got[i].Nominal), float64(want[i].Nominal)
+			if math.Abs(g-w) > 1e-9*math.Max(1, math.Abs(w)) {
+				rt.Errorf("%s: %v as an outline, %v as the rectangle", want[i].ID, got[i].Nominal, want[i].Nominal)
+			}
+		}
+	})
 }
