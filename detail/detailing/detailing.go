@@ -511,20 +511,19 @@ func outlineEdges(p *engine.Plate, m *engine.Member) []edge {
 	pts := len(p.Outline)
 	var es []edge
 	for _, e := range p.Edges() {
-		e := e
-		what, max := "back edge", false
+		what, limited := "back edge", false
 		switch {
 		case e.Free():
-			what, max = "free edge", true
+			what, limited = "free edge", true
 		case e.Side() && e.Normal.Y < 0:
-			what, max = "low side", onMember
+			what, limited = "low side", onMember
 		case e.Side():
-			what, max = "high side", onMember
+			what, limited = "high side", onMember
 		}
 		if math.Abs(e.Normal.X) > 1e-9 && math.Abs(e.Normal.Y) > 1e-9 {
 			what += ", oblique"
 		}
-		es = append(es, edge{name: fmt.Sprintf("plate edge %d–%d (%s)", e.I, (e.I+1)%pts, what), alongX: e.Side(), t: p.T, ply: platePly, max: max,
+		es = append(es, edge{name: fmt.Sprintf("plate edge %d–%d (%s)", e.I, (e.I+1)%pts, what), alongX: e.Side(), t: p.T, ply: platePly, max: limited,
 			dist: func(h *engine.Hole) units.Length { return e.DistanceTo(h.X, h.Y) }})
 	}
 	return es
