@@ -13,6 +13,8 @@ import (
 	"gaugeline/engine"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
+
+	"gonum.org/v1/gonum/spatial/r2"
 )
 
 // job is a job file seen by the model builder: the steps below are its
@@ -720,17 +722,28 @@ func (j job) buildPlate(ed *rules.Edition, d *Design) error {
 	if ps.AutoThickness {
 		return j.FieldError("plate.thickness", "auto is for propose", "give the plate thickness to check, or run gaugeline propose")
 	}
-	if ps.Edge == 0 {
+	if ps.Edge == 0 && ps.Outline == nil {
 		return j.FieldError("plate.edge", "is required", "edge: the last bolt to the plate's free edge, e.g. 1-1/2 in")
 	}
 	if err := j.plateParts(ed, d); err != nil {
 		return err
 	}
-	if i := d.PlacePlate(ps.Edge); i >= 0 {
-		return j.FieldError("plate.width", fmt.Sprintf("hole %s runs off the plate: the plate is %s wide", d.Conn.Holes[i].ID, units.FormatJob(ps.Width, j.Units)),
-			"the plate must be wider than the bolt group plus the hole")
+	i := d.PlacePlate(ps.Edge)
+	if i < 0 {
+		return nil
 	}
-	return nil
+	h := &d.Conn.Holes[i]
+	switch pl := d.Conn.Plate; {
+	case ps.Outline != nil:
+		return j.FieldError("plate.outline", fmt.Sprintf("hole %s at (%s, %s) runs off the plate: it is not inside the outline", h.ID,
+			units.FormatJob(h.X, j.Units), units.FormatJob(h.Y, j.Units)),
+			"the outline's points are in the member's frame (x from the member end, y from the heel or edge), as the holes are")
+	case h.Y-h.InPlate().Dy/2 >= pl.YMin()-eps && h.Y+h.InPlate().Dy/2 <= pl.YMax()+eps:
+		return j.FieldError("plate.length", fmt.Sprintf("hole %s runs off the plate's back edge: the plate is %s long from its free edge", h.ID, units.FormatJob(ps.Length, j.Units)),
+			"the plate must run back past the bolt group plus the hole")
+	}
+	return j.FieldError("plate.width", fmt.Sprintf("hole %s runs off the plate: the plate is %s wide", h.ID, units.FormatJob(ps.Width, j.Units)),
+		"the plate must be wider than the bolt group plus the hole")
 }
 
 // plateParts puts the job's plate into the model, all but where it lies
@@ -750,10 +763,15 @@ func (j job) plateParts(ed *rules.Edition, d *Design) error {
 // PlacePlate gives the model its own copy of the plate, with the free
 // edge the distance edge past the last hole and the centre line on the
 // bolt group's; it returns the first hole that runs off the plate's
-// width, or -1.
+// width, or -1. A job's plate.outline is the plate instead (placeOutline),
+// and its plate.length closes the rectangle behind the holes.
 func (d *Design) PlacePlate(edge units.Length) int {
 	c := &d.Conn
 	pl := *c.Plate
+	if d.Job != nil && d.Job.Plate != nil && d.Job.Plate.Outline != nil {
+		ps := d.Job.Plate
+		return d.placeOutline(&pl, ps.Outline)
+	}
 	var xmax, ysum units.Length
 	for i, h := range c.Holes {
 		if i == 0 || h.X > xmax {
@@ -764,9 +782,51 @@ func (d *Design) PlacePlate(edge units.Length) int {
 	pl.FreeEdge = xmax + edge
 	pl.YCentre = ysum / units.Length(len(c.Holes))
 	c.Plate = &pl
+	length := units.Length(0)
+	if d.Job != nil && d.Job.Plate != nil {
+		length = d.Job.Plate.Length
+	}
+	if length > 0 {
+		back, lo, hi := float64(pl.FreeEdge-length), float64(pl.YMin()), float64(pl.YMax())
+		fe := float64(pl.FreeEdge)
+		pl.Outline = []r2.Vec{{X: back, Y: lo}, {X: fe, Y: lo}, {X: fe, Y: hi}, {X: back, Y: hi}}
+	}
 	for i, h := range c.Holes {
 		if dy := h.InPlate().Dy; h.Y-dy/2 < pl.YMin()-eps || h.Y+dy/2 > pl.YMax()+eps {
 			return i
+		}
+		if length > 0 && h.X-h.InPlate().Dx/2 < pl.FreeEdge-length-eps {
+			return i
+		}
+	}
+	return -1
+}
+
+// placeOutline puts the job's outline into the plate: FreeEdge, YCentre
+// and Width become its bounding box (the plate's frame on the sheet is
+// the half turn about its corner at the greatest x and y). It returns the
+// first hole not inside it (its centre outside, or an edge nearer than
+// half the hole), or -1.
+func (d *Design) placeOutline(pl *engine.Plate, outline []r2.Vec) int {
+	c := &d.Conn
+	pl.Outline = outline
+	xmax, ylo, yhi := math.Inf(-1), math.Inf(1), math.Inf(-1)
+	for _, q := range outline {
+		xmax, ylo, yhi = max(xmax, q.X), min(ylo, q.Y), max(yhi, q.Y)
+	}
+	pl.FreeEdge = units.Length(xmax)
+	pl.YCentre, pl.Width = units.Length((ylo+yhi)/2), units.Length(yhi-ylo)
+	c.Plate = pl
+	edges := pl.Edges()
+	for i, h := range c.Holes {
+		if !pl.Inside(h.X, h.Y) {
+			return i
+		}
+		hs := h.InPlate()
+		for _, e := range edges {
+			if e.DistanceTo(h.X, h.Y) < max(hs.Dx, hs.Dy)/2-eps {
+				return i
+			}
 		}
 	}
 	return -1

@@ -494,6 +494,13 @@ func TestBuildBadJobs(t *testing.T) {
 		{"unsafe-mark.yaml", "mark", 1},
 		{"wrong-dimension.yaml", "member.thickness", 7},
 		{"zero-quantity.yaml", "quantity", 2},
+		{"outline-hole-outside.yaml", "plate.outline", 12},
+		{"outline-no-area.yaml", "plate.outline[2]", 12},
+		{"outline-crossing.yaml", "plate.outline[3]", 16},
+		{"outline-two-points.yaml", "plate.outline[1]", 12},
+		{"outline-with-width.yaml", "plate.width", 12},
+		{"outline-clip-too-big.yaml", "plate.clip[0].size", 14},
+		{"plate-length-short.yaml", "plate.length", 14},
 	}
 	dir := filepath.Join("..", "testdata", "bad")
 	listed := map[string]bool{}

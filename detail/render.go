@@ -66,8 +66,7 @@ func (d *Design) Summary() [][2]string {
 	}
 	rows := [][2]string{{"member", member}}
 	if pl := c.Plate; pl != nil {
-		rows = append(rows, [2]string{"plate", fmt.Sprintf("%s %s %s, %s wide, free edge %s past the last bolt",
-			p.length(pl.T), d.Info.PlateGrade, pl.Kind, p.length(pl.Width), p.length(pl.FreeEdge-lastX(c.Holes)))})
+		rows = append(rows, [2]string{"plate", p.plateRow(d)})
 	}
 	b := c.Bolt
 	bolts := fmt.Sprintf("%d × %s %s, threads %s, %s joint, %s",
@@ -238,3 +237,24 @@ func FindingsMarkdown(b *strings.Builder, sys units.System, title string, fs []d
 
 // MarkdownEscape escapes a table cell's pipes.
 func MarkdownEscape(s string) string { return strings.ReplaceAll(s, "|", `\|`) }
+
+// plateRow describes the plate: the rectangle by width and free edge (and
+// length when the job gives it), an outline by its points and extents.
+func (p people) plateRow(d *Design) string {
+	c := &d.Conn
+	pl := c.Plate
+	head := fmt.Sprintf("%s %s %s", p.length(pl.T), d.Info.PlateGrade, pl.Kind)
+	if ps := d.Job.Plate; ps != nil && ps.Outline != nil {
+		xlo := pl.FreeEdge
+		for _, q := range pl.Outline {
+			xlo = min(xlo, units.Length(q.X))
+		}
+		return fmt.Sprintf("%s, outline of %d points, %s along the load × %s across, its free edge %s past the last bolt",
+			head, len(pl.Outline), p.length(pl.FreeEdge-xlo), p.length(pl.Width), p.length(pl.FreeEdge-lastX(c.Holes)))
+	}
+	row := fmt.Sprintf("%s, %s wide, free edge %s past the last bolt", head, p.length(pl.Width), p.length(pl.FreeEdge-lastX(c.Holes)))
+	if ps := d.Job.Plate; ps != nil && ps.Length > 0 {
+		row += fmt.Sprintf(", %s long", p.length(ps.Length))
+	}
+	return row
+}

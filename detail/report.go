@@ -93,7 +93,15 @@ func (r *Report) Verdict() string {
 func cautions(d *Design) []string {
 	c := []string{Caution}
 	c = append(c, d.Conn.Edition.Unconfirmed()...)
-	if d.Conn.Plate != nil {
+	switch ps := d.Job.Plate; {
+	case d.Conn.Plate == nil:
+	case ps != nil && ps.Outline != nil:
+		c = append(c, "The plate is the job's outline: the Whitmore section is clipped by it, block shear's planes and "+
+			"the edge distances end at its edges, and tearout is measured along each hole's line to it.")
+	case ps != nil && ps.Length > 0:
+		c = append(c, "The plate is taken as a rectangle of the given width and length centred on the bolt group; "+
+			"its side edges are free edges for block shear.")
+	default:
 		c = append(c, "The plate is taken as a rectangle of the given width centred on the bolt group; "+
 			"its side edges are free edges for block shear.")
 	}

@@ -18,7 +18,8 @@ import (
 )
 
 // jobs are the job files drawn: a US angle, a US two-line staggered flat,
-// an SI double angle, an SI slotted angle, the demo, AISC Design Example
+// an SI double angle, an SI slotted angle, the demo, a gusset with a
+// clipped outline, AISC Design Example
 // D.2 (no plate) and the inline jobs below, so that every hole type and
 // slot direction is drawn.
 var jobs = []string{
@@ -27,6 +28,7 @@ var jobs = []string{
 	"../testdata/jobs/si-double-angle.yaml",
 	"../testdata/jobs/si-slotted.yaml",
 	"../testdata/jobs/us-pipe-rack-brace.yaml",
+	"../testdata/jobs/us-clipped-gusset.yaml",
 	"../testdata/examples/aisc-d2.yaml",
 	"inline:long-slot.yaml",
 	"inline:oversized.yaml",
@@ -209,6 +211,26 @@ func checkHeader(t *testing.T, f *dxfFile, sys units.System) {
 	}
 }
 
+// jobOutline is the job's plate.outline (clips cut) in the plate's frame
+// (x' = greatest x − x, y' = greatest y − y: the half turn about the
+// corner of its extents), in the job's units; nil for the member or a
+// rectangle.
+func jobOutline(r *detail.Report, plate bool) [][2]float64 {
+	j := r.Design.Job
+	if !plate || j.Plate == nil || j.Plate.Outline == nil {
+		return nil
+	}
+	fe, ymax := math.Inf(-1), math.Inf(-1)
+	for _, q := range j.Plate.Outline {
+		fe, ymax = max(fe, q.X), max(ymax, q.Y)
+	}
+	var out [][2]float64
+	for _, q := range j.Plate.Outline {
+		out = append(out, [2]float64{j.Units.ToJob(fe-q.X, units.DimLength), j.Units.ToJob(ymax-q.Y, units.DimLength)})
+	}
+	return out
+}
+
 // The CAM file of each part reads back to the job's holes (centres,
 // diameters, slot lengths within 1e-6), with a closed outline and nothing
 // but the contour and the holes.
@@ -232,8 +254,14 @@ func TestCAMReadsBackToTheJob(t *testing.T) {
 					switch e.layer {
 					case "contour":
 						pts, bulges := e.vertices()
-						if e.kind != "LWPOLYLINE" || e.float(70) != 1 || len(pts) != 4 {
+						want := jobOutline(r, vi == 1)
+						if e.kind != "LWPOLYLINE" || e.float(70) != 1 || len(pts) != max(len(want), 4) {
 							t.Errorf("contour: %s flag %v with %d vertices", e.kind, e.float(70), len(pts))
+						}
+						for k := range min(len(want), len(pts)) {
+							if math.Abs(pts[k][0]-want[k][0]) > tol || math.Abs(pts[k][1]-want[k][1]) > tol {
+								t.Errorf("contour vertex %d at %v, want the job's outline point %v", k, pts[k], want[k])
+							}
 						}
 						for _, b := range bulges {
 							if b != 0 {

@@ -108,9 +108,10 @@ func TestEzdxfReadsBack(t *testing.T) {
 	haveEzdxf(t)
 	dir := t.TempDir()
 	type expect struct {
-		cam   bool
-		sys   int
-		holes []wantHole
+		cam     bool
+		sys     int
+		holes   []wantHole
+		contour [][2]float64 // a plate outline's corners in the plate's frame (jobOutline), nil: not checked
 	}
 	want := map[string]expect{}
 	var paths []string
@@ -136,7 +137,7 @@ func TestEzdxfReadsBack(t *testing.T) {
 				t.Fatal(err)
 			}
 			hs := jobHoles(r, vi == 1)
-			write(s.Mark+"-"+v.Part.Name+".cam.dxf", cb, expect{cam: true, sys: int(ins), holes: hs})
+			write(s.Mark+"-"+v.Part.Name+".cam.dxf", cb, expect{cam: true, sys: int(ins), holes: hs, contour: jobOutline(r, vi == 1)})
 			for _, h := range hs {
 				h.x, h.y = h.x+v.Origin.X, h.y+v.Origin.Y
 				sheetHoles = append(sheetHoles, h)
@@ -179,6 +180,17 @@ func TestEzdxfReadsBack(t *testing.T) {
 			}
 			if w.cam && e.Layer == "contour" && (e.Type != "LWPOLYLINE" || !e.Closed) {
 				t.Errorf("%s: contour is a %s, closed %v", name, e.Type, e.Closed)
+			}
+			if w.cam && e.Layer == "contour" && w.contour != nil {
+				// The plate's CAM contour is the job's outline, corner by corner.
+				if len(e.Points) != len(w.contour) {
+					t.Errorf("%s: contour of %d corners, the outline has %d", name, len(e.Points), len(w.contour))
+				}
+				for k := range min(len(e.Points), len(w.contour)) {
+					if p, q := e.Points[k], w.contour[k]; math.Abs(p[0]-q[0]) > tol || math.Abs(p[1]-q[1]) > tol {
+						t.Errorf("%s: contour corner %d at (%v, %v), the outline's at %v", name, k, p[0], p[1], q)
+					}
+				}
 			}
 			if e.Layer != "holes" {
 				continue

@@ -15,13 +15,15 @@ var update = flag.Bool("update", false, "rewrite the golden DXF files under test
 
 // goldenJobs: a US angle (failing: stamped sheet only), a US two-line flat
 // with stagger (failing too), an SI double angle, an SI slotted angle and
-// the demo (a passing US angle, so US CAM files too).
+// the demo (a passing US angle, so US CAM files too), and a gusset whose
+// outline has a clipped corner.
 var goldenJobs = []string{
 	"../testdata/jobs/us-single-angle.yaml",
 	"../testdata/jobs/us-staggered-flat.yaml",
 	"../testdata/jobs/si-double-angle.yaml",
 	"../testdata/jobs/si-slotted.yaml",
 	"../testdata/jobs/us-pipe-rack-brace.yaml",
+	"../testdata/jobs/us-clipped-gusset.yaml",
 }
 
 const goldenDir = "../testdata/golden"

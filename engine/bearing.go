@@ -22,15 +22,16 @@ func BearingRn(cb, ct float64, d, lc, t units.Length, Fu units.Stress) (bearing,
 // clearDistances returns lc for every hole: the clear distance, in the
 // direction the part is pulled relative to the bolt (dir −1: toward −x; +1:
 // toward +x), from the hole's edge to the edge of the next hole in its line
-// of force or to the part's edge at x = edge. ply gives each hole's shape
+// of force or to the part's edge ahead of it, at x = edge(hole), along the
+// hole's centre line. ply gives each hole's shape
 // in the part (the member's or the plate's). A hole in the same row
 // (within rowSlack along the load, as a measured hole a little off its row
 // is) is beside the bolt, not ahead of it.
-func clearDistances(holes []Hole, ply func(*Hole) HoleShape, dir float64, edge, rowSlack units.Length) []units.Length {
+func clearDistances(holes []Hole, ply func(*Hole) HoleShape, dir float64, edge func(*Hole) units.Length, rowSlack units.Length) []units.Length {
 	lc := make([]units.Length, len(holes))
 	for i := range holes {
 		h, hs := &holes[i], ply(&holes[i])
-		best := units.Length(dir*float64(edge-h.X)) - hs.Dx/2
+		best := units.Length(dir*float64(edge(h)-h.X)) - hs.Dx/2
 		for j := range holes {
 			if j == i {
 				continue
@@ -55,7 +56,7 @@ func platePly(h *Hole) HoleShape  { return h.InPlate() }
 
 // bearingShares computes every hole's bearing and tearout in one part,
 // each hole of the shape ply gives it in that part.
-func bearingShares(c *Connection, ply func(*Hole) HoleShape, t units.Length, Fu units.Stress, dir float64, edge units.Length) []BoltShare {
+func bearingShares(c *Connection, ply func(*Hole) HoleShape, t units.Length, Fu units.Stress, dir float64, edge func(*Hole) units.Length) []BoltShare {
 	lcs := clearDistances(c.Holes, ply, dir, edge, LineSlack(c.Bolt.D))
 	shares := make([]BoltShare, len(c.Holes))
 	for i := range c.Holes {
@@ -164,7 +165,7 @@ func bearingResult(c *Connection, bp bearingPart, ply func(*Hole) HoleShape, t u
 // Clause: J3.10 [J3.11]
 func MemberBearing(c *Connection) Result {
 	t := units.Length(c.Member.Pieces) * c.Member.T
-	shares := bearingShares(c, memberPly, t, c.Member.Fu, -1, 0)
+	shares := bearingShares(c, memberPly, t, c.Member.Fu, -1, func(*Hole) units.Length { return 0 })
 	return bearingResult(c, bearingPart{id: "member.bearing", note: "member, toward the member end",
 		title: "Bearing and tearout at the member's bolt holes", toward: "toward the member end", member: true},
 		memberPly, t, c.Member.Fu, shares)
@@ -177,7 +178,9 @@ func MemberBearing(c *Connection) Result {
 // Clause: J3.10 [J3.11]
 func PlateBearing(c *Connection) Result {
 	p := c.Plate
-	shares := bearingShares(c, platePly, p.T, p.Fu, 1, p.FreeEdge)
+	// the edge ahead of each hole: the free edge, or where the outline is
+	// crossed along the hole's line toward +x (a corner clip comes nearer)
+	shares := bearingShares(c, platePly, p.T, p.Fu, 1, func(h *Hole) units.Length { return p.EdgeAlong(h.X, h.Y, false, 1) })
 	return bearingResult(c, bearingPart{id: "plate.bearing", note: "plate, toward its free edge",
 		title: "Bearing and tearout at the plate's bolt holes", toward: "toward the plate's free edge"},
 		platePly, p.T, p.Fu, shares)

@@ -44,6 +44,9 @@ type blockPart struct {
 	toward float64 // −1 member, +1 plate
 	name   string  // "member" or "plate"
 	ply    func(*Hole) HoleShape
+	// edges, when set, is the part's outline (a plate's): where its edges
+	// lie seen from a point (netsection.Part.EdgeAt, LowAt, HighAt).
+	edges *Plate
 }
 
 // blocks enumerates every block of the part (netsection.Blocks) and
@@ -57,6 +60,11 @@ func (p blockPart) blocks(c *Connection) []block {
 		holes[i] = netsection.Hole{X: h.X, Y: h.Y, Dx: s.Dx, Dy: s.Dy}
 	}
 	part := netsection.Part{T: p.t, Low: p.low, High: p.high, HasLow: p.hasLow, HasHigh: p.hasHigh, XEdge: p.xEdge, Toward: p.toward}
+	if pl := p.edges; pl != nil {
+		part.EdgeAt = func(x, y units.Length) units.Length { return pl.EdgeAlong(x, y, false, p.toward) }
+		part.LowAt = func(x, y units.Length) units.Length { return pl.EdgeAlong(x, y, true, -1) }
+		part.HighAt = func(x, y units.Length) units.Length { return pl.EdgeAlong(x, y, true, 1) }
+	}
 	rn := func(Agv, Anv, Ant units.Area) units.Force { return BlockShearRn(p.Fy, p.Fu, Agv, Anv, Ant, 1) }
 	lines := GageLines(c)
 	found := netsection.Blocks(part, holes, lines, c.Edition.HoleAllowance(), rn)
@@ -167,7 +175,10 @@ func MemberBlockShear(c *Connection) Result {
 
 // PlateBlockShear is block shear of the plate, the weakest of the L-shaped
 // blocks (one gage line to a side edge) and the U-shaped blocks (between
-// two gage lines) tearing out toward the plate's free edge.
+// two gage lines) tearing out toward the plate's free edge. A plate with an
+// outline has its planes end where the outline is: a shear plane runs
+// from the outline along its line to the hole, a tension plane from the
+// hole across to the outline.
 //
 // Clause: J4.3
 func PlateBlockShear(c *Connection) Result {
@@ -176,6 +187,9 @@ func PlateBlockShear(c *Connection) Result {
 		t: pl.T, Fy: pl.Fy, Fu: pl.Fu,
 		low: pl.YMin(), high: pl.YMax(), hasLow: true, hasHigh: true,
 		xEdge: pl.FreeEdge, toward: 1, name: "plate", ply: platePly,
+	}
+	if pl.Outline != nil {
+		p.edges = pl
 	}
 	return blockResult(c, "plate.block-shear", p.blocks(c), p)
 }

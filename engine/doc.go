@@ -9,7 +9,9 @@
 // across the width from one edge (flats). The member is pulled toward +x, so
 // its bolts bear toward the member end (−x). The plate's free edge lies at
 // x = last bolt + plate edge distance and the plate is pulled toward −x, so
-// its bolts bear toward that free edge (+x).
+// its bolts bear toward that free edge (+x). A plate with an outline
+// (Plate.Outline, a polygon in this frame in mm) has its edges where the
+// outline puts them; FreeEdge is then its greatest x (outline.go).
 //
 // Holes: each Hole is one bolt with one centre and its hole's shape (type,
 // slot direction, extents) in each ply: the member's (Hole.HoleShape) and
@@ -24,10 +26,11 @@
 // knowing the limit state (package engine/working). A failing limit state
 // is a result, not an error.
 //
-// Three packages below this one hold what is not a limit state: the
+// Four packages below this one hold what is not a limit state: the
 // working's expressions and printer (engine/working), the geometry of net
-// sections and block-shear blocks (engine/netsection) and the ASCE 7 load
-// combinations (engine/loads). They import none of each other nor this
+// sections and block-shear blocks (engine/netsection), the ASCE 7 load
+// combinations (engine/loads) and a plate outline's geometry
+// (engine/polygon). They import none of each other nor this
 // package; the aliases here (Working, Value, ServiceLoads …) keep callers
 // on package engine alone.
 package engine

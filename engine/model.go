@@ -4,6 +4,8 @@ import (
 	"gaugeline/rules"
 	"gaugeline/rules/units"
 	"gaugeline/rules/words"
+
+	"gonum.org/v1/gonum/spatial/r2"
 )
 
 // Member is the tension member at its connected end.
@@ -48,7 +50,9 @@ func ParsePlateKind(s string) (PlateKind, error) { return plateKinds.Parse(s) }
 
 // Plate is the gusset or splice plate the member bolts to: a rectangle
 // Width across the load, centred in y on the bolt group, ending at its
-// free edge x = FreeEdge.
+// free edge x = FreeEdge and open toward −x; or, when Outline is set, that
+// polygon (outline.go), whose bounding box FreeEdge (its greatest x),
+// YCentre and Width then are.
 type Plate struct {
 	Kind     PlateKind
 	T        units.Length
@@ -56,6 +60,9 @@ type Plate struct {
 	FreeEdge units.Length // x of the plate's free edge
 	YCentre  units.Length // y of the plate's centre line
 	Fy, Fu   units.Stress
+	// Outline is the plate's true outline in the member frame (mm), in the
+	// job's order, closed by itself; nil: the rectangle above.
+	Outline []r2.Vec
 }
 
 // YMin and YMax are the plate's side edges in the member frame.

@@ -64,8 +64,13 @@ func WhitmoreSection(c *Connection) Whitmore {
 		first = false
 	}
 	w.Spread = w.High.Y1 - w.Low.Y1
-	w.YLo, w.YHi = max(w.Low.Y1, c.Plate.YMin()), min(w.High.Y1, c.Plate.YMax())
-	w.Lw = max(w.YHi-w.YLo, 0)
+	// The section line x = xs between the spread lines, clipped by the
+	// plate: by its side edges, or by its outline (the sum of the parts
+	// inside it where it is not convex).
+	w.Lw, w.YLo, w.YHi = c.Plate.SectionLength(xs, w.Low.Y1, w.High.Y1)
+	if w.Lw == 0 && c.Plate.Outline != nil {
+		w.YLo, w.YHi = w.Low.Y1, w.Low.Y1
+	}
 	ded, path := netsection.NetWidthDeduction(pathHoles(c, platePly))
 	w.Holes, w.Deducted = len(path), ded
 	return w
@@ -86,9 +91,22 @@ func PlateYield(c *Connection) Result {
 		What: "30° spread before the clip by the plate"})
 	pT := vs.add(valT(c, p.T, false, "thickness"))
 	pAg := vs.add(Value{Name: "Ag", V: float64(Aw), Dim: units.DimArea, What: "gross area of the Whitmore section, Aw = Lw·t"})
+	clip := "the plate"
+	if p.Outline != nil {
+		clip = "the plate's outline"
+	}
 	r := finish(c, "plate.yield", "J4.1(a)", Rn, c.Edition.YieldFactor(), vs.list,
-		whitmoreNote(w, "Whitmore section: 30° from the first bolt of each gage line, clipped by the plate"))
+		whitmoreNote(w, "Whitmore section: 30° from the first bolt of each gage line, clipped by "+clip))
 	lo, hi, ymin, ymax, width := w.Low.Y1, w.High.Y1, p.YMin(), p.YMax(), p.Width
+	var section [][2]units.Length // the outline's parts of the section line that meet the spread
+	if p.Outline != nil {
+		for _, iv := range p.SectionAt(w.X) {
+			if min(iv[1], hi) > max(iv[0], lo) {
+				section = append(section, iv)
+			}
+		}
+	}
+	outline, xs := p.Outline != nil, w.X
 	r.explain = func() Working {
 		Fy, lw, spread, t, ag := *pFy, *pLw, *pSpread, *pT, *pAg
 		aw := ag
@@ -100,12 +118,17 @@ func PlateYield(c *Connection) Result {
 			// the spread's ends clipped by the plate's side edges
 			Expr: working.Max(working.Sub(working.Min(length("y1", hi), length("ymax", ymax)), working.Max(length("y0", lo), length("ymin", ymin))), working.K(0, "0")),
 			Say:  working.Phrase(working.Of(spread), working.Words(" spread, clipped by the "), length("width", width), working.Words(" plate"))}
+		clipLine := "the spread, clipped by the plate's side edges"
+		if outline {
+			lwStep = whitmoreOutlineStep(lw, spread, lo, hi, xs, section)
+			clipLine = "the spread, clipped by the plate's outline: the length of the section line inside it between the spread lines"
+		}
 		awStep := Step{Value: aw, Expr: working.Mul(working.Of(lw), working.Of(t))}
 		rn := Step{Value: nominal(Rn), Expr: working.Mul(working.Of(Fy), working.Of(aw))}
 		return Working{
 			Title: "Tensile yielding of the plate on the Whitmore section",
 			Formula: []Step{rn, awStep,
-				{Value: Value{Sym: "Lw"}, Expr: working.Words("the spread, clipped by the plate's side edges")}},
+				{Value: Value{Sym: "Lw"}, Expr: working.Words(clipLine)}},
 			Where: "the spread is the width between 30° lines drawn from the first bolt of each gage line (the one nearest the free edge) to the section through the bolt farthest from it (the Whitmore section); one row of bolts spreads over the row's width only, and a single bolt has no Whitmore section",
 			Steps: []Step{lwStep, awStep, rn},
 		}
@@ -185,4 +208,35 @@ func whitmoreNote(w Whitmore, note string) string {
 		return "a single bolt has no Whitmore section: use two or more bolts"
 	}
 	return note
+}
+
+// whitmoreOutlineStep is the step that clips the spread (y0 to y1 at the
+// section x = xs) by the outline: one term per part [ya, yb] of the
+// section line inside the outline that meets the spread, summed (one part
+// for a convex outline).
+func whitmoreOutlineStep(lw, spread Value, lo, hi, xs units.Length, section [][2]units.Length) Step {
+	length := func(sym string, l units.Length) Expr {
+		return working.Of(Value{Sym: sym, V: float64(l), Dim: units.DimLength})
+	}
+	terms := make([]Expr, 0, len(section))
+	for k, iv := range section {
+		a, b := "ya", "yb"
+		if len(section) > 1 {
+			a, b = "ya"+strconv.Itoa(k+1), "yb"+strconv.Itoa(k+1)
+		}
+		terms = append(terms, working.Sub(working.Min(length("y1", hi), length(b, iv[1])), working.Max(length("y0", lo), length(a, iv[0]))))
+	}
+	var e Expr
+	switch len(terms) {
+	case 0:
+		e = working.K(0, "0")
+	case 1:
+		e = terms[0]
+	default:
+		e = working.Add(terms...)
+	}
+	// The substitution is printed (the ends a QA engineer checks on the
+	// drawing), then what it is.
+	return Step{Value: lw, Expr: e,
+		Then: working.Phrase(working.Words(": the "), working.Of(spread), working.Words(" spread, clipped by the plate's outline along x = "), length("xs", xs))}
 }

@@ -482,7 +482,9 @@ func edges(c *engine.Connection) []edge {
 		es = append(es, edge{name: name, alongX: true, t: m.T, max: true, ply: memberPly,
 			dist: func(h *engine.Hole) units.Length { return m.Width - h.Y }})
 	}
-	if p := c.Plate; p != nil {
+	if p := c.Plate; p != nil && p.Outline != nil {
+		es = append(es, outlineEdges(p, m)...)
+	} else if p != nil {
 		es = append(es, edge{name: "plate free edge", t: p.T, max: true, ply: platePly,
 			dist: func(h *engine.Hole) units.Length { return p.FreeEdge - h.X }})
 		if p.Width > 0 {
@@ -493,6 +495,36 @@ func edges(c *engine.Connection) []edge {
 				edge{name: "plate side edge (high y)", alongX: true, t: p.T, ply: platePly, max: onMember,
 					dist: func(h *engine.Hole) units.Length { return p.YMax() - h.Y }})
 		}
+	}
+	return es
+}
+
+// outlineEdges are the edges of a plate's outline, each measured from a
+// hole perpendicular to it (to its nearer end where the foot falls off
+// it), in the outline's order. Which of today's edges each stands for
+// follows from the way it faces: toward +x it is a free edge (the member
+// laps it: the maximum applies), along the load a side (the maximum where
+// the plate is no wider than the member, as for the rectangle), toward −x
+// a back edge, which the member does not reach (the minimum only).
+func outlineEdges(p *engine.Plate, m *engine.Member) []edge {
+	onMember := p.Width <= m.Width+tol
+	pts := len(p.Outline)
+	var es []edge
+	for _, e := range p.Edges() {
+		what, limited := "back edge", false
+		switch {
+		case e.Free():
+			what, limited = "free edge", true
+		case e.Side() && e.Normal.Y < 0:
+			what, limited = "low side", onMember
+		case e.Side():
+			what, limited = "high side", onMember
+		}
+		if math.Abs(e.Normal.X) > 1e-9 && math.Abs(e.Normal.Y) > 1e-9 {
+			what += ", oblique"
+		}
+		es = append(es, edge{name: fmt.Sprintf("plate edge %d–%d (%s)", e.I, (e.I+1)%pts, what), alongX: e.Side(), t: p.T, ply: platePly, max: limited,
+			dist: func(h *engine.Hole) units.Length { return e.DistanceTo(h.X, h.Y) }})
 	}
 	return es
 }

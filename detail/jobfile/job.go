@@ -9,6 +9,8 @@ import (
 	"gaugeline/rules"
 	"gaugeline/rules/units"
 	"gaugeline/rules/words"
+
+	"gonum.org/v1/gonum/spatial/r2"
 )
 
 // Job is a parsed job file (SPEC §3). Quantities are in the internal units
@@ -99,6 +101,14 @@ type PlateSpec struct {
 	Steel         SteelSpec
 	Width         units.Length // across the load
 	Edge          units.Length // last bolt to the free edge; 0: not given (propose)
+	// Length is plate.length: the rectangle's length along the load, from
+	// its free edge back toward −x (past the member's end); 0: not given,
+	// the rectangle is open that way (outline.go).
+	Length units.Length
+	// Outline is plate.outline with plate.clip applied: the plate's true
+	// outline in the job frame (mm), in the job's order, closed by itself;
+	// nil: the rectangle of Width, Edge and Length.
+	Outline []r2.Vec
 	// Hole is the plate's own hole type (plate.hole, plate.slot).
 	Hole PlyHole
 }

@@ -8,7 +8,7 @@ import (
 	"gaugeline/engine"
 )
 
-var plateKeys = []string{"kind", "thickness", "grade", "fy", "fu", "width", "edge", "hole", "slot"}
+var plateKeys = []string{"kind", "thickness", "grade", "fy", "fu", "width", "edge", "length", "outline", "clip", "hole", "slot"}
 
 func (p *parser) parsePlate(n *yaml.Node) error {
 	b, err := p.mapping(n, "plate", plateKeys)
@@ -34,6 +34,27 @@ func (p *parser) parsePlate(n *yaml.Node) error {
 	if pl.Steel, err = p.parseSteel(b); err != nil {
 		return err
 	}
+	if b.has("outline") {
+		if err := p.parsePlateOutline(b, pl); err != nil {
+			return err
+		}
+	} else if err := p.parsePlateRectangle(b, pl); err != nil {
+		return err
+	}
+	if pl.Hole, err = p.parsePlyHole(b); err != nil {
+		return err
+	}
+	p.job.Plate = pl
+	return nil
+}
+
+// parsePlateRectangle reads the rectangle: plate.width (required), edge
+// and length.
+func (p *parser) parsePlateRectangle(b *block, pl *PlateSpec) (err error) {
+	if b.has("clip") {
+		return p.errAt(b.vals["clip"], "plate.clip", "clips the corners of plate.outline, which is not given",
+			"give the plate's outline as plate.outline, its corners clipped by plate.clip")
+	}
 	if !b.has("width") {
 		return p.missing(b, "plate.width", "is required", "the plate's width across the load, e.g. width: 12 in")
 	}
@@ -45,9 +66,28 @@ func (p *parser) parsePlate(n *yaml.Node) error {
 			return err
 		}
 	}
-	if pl.Hole, err = p.parsePlyHole(b); err != nil {
+	if b.has("length") {
+		if pl.Length, err = p.length(b.vals["length"], "plate.length", positive); err != nil {
+			return err
+		}
+	}
+	return nil
+}
+
+// parsePlateOutline reads plate.outline and plate.clip; the rectangle's
+// keys have no meaning beside them.
+func (p *parser) parsePlateOutline(b *block, pl *PlateSpec) (err error) {
+	for _, k := range []string{"width", "edge", "length"} {
+		if b.has(k) {
+			return p.errAt(b.vals[k], "plate."+k, "cannot be used with plate.outline: the outline gives the plate's shape",
+				"remove plate."+k+", or remove plate.outline to use the rectangle")
+		}
+	}
+	if pl.Outline, err = p.parseOutline(b.vals["outline"]); err != nil {
 		return err
 	}
-	p.job.Plate = pl
-	return nil
+	if b.has("clip") {
+		pl.Outline, err = p.parseClips(b.vals["clip"], pl.Outline)
+	}
+	return err
 }

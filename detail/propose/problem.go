@@ -89,6 +89,12 @@ func newProblem(j *jobfile.Job) (*problem, error) {
 		return nil, j.FieldError("holes", "propose lays out the bolts itself; explicit holes leave nothing to choose",
 			"remove the holes list, or run gaugeline check")
 	}
+	if j.Plate != nil && j.Plate.Outline != nil {
+		// The search moves the plate's free edge with the bolt group; a
+		// fixed outline has none to move (not searched yet).
+		return nil, j.FieldError("plate.outline", "propose lays out the bolts on the rectangle of plate.width and plate.edge; it does not search a fixed outline",
+			"give the rectangle to propose a layout, then check it on the outline with gaugeline check")
+	}
 	p := &problem{job: j, build: bld, ed: ed, step: j.Stock.Step, obj: j.Stock.Objective, snapped: map[int]units.Length{},
 		grids: map[[2]int][]units.Length{}}
 	diams, err := stockDiameters(j)

@@ -506,6 +506,9 @@ func (l sheetLayout) plateView(d *detail.Design) View {
 	// turn maps the member frame onto the plate frame (half a turn).
 	turn := func(x, y float64) r2.Vec { return r2.Vec{X: fe - x, Y: ymax - y} }
 	p := Part{Name: "plate", Contour: l.rect(length, width), Thickness: l.len(pl.T), Pieces: 1}
+	if pl.Outline != nil {
+		return l.outlineView(d, p, turn)
+	}
 	for i := range c.Holes {
 		h := &c.Holes[i]
 		// The plate's own holes; a half turn keeps each hole's extents
@@ -541,6 +544,70 @@ func (l sheetLayout) plateView(d *detail.Design) View {
 
 	title := fmt.Sprintf("PLATE %s x %s x %s %s %s - FREE EDGE AT LEFT", l.people(p.Thickness), l.people(width), l.people(length),
 		d.Info.PlateGrade, strings.ToUpper(pl.Kind.String()))
+	v.Texts = append(v.Texts,
+		Text{At: r2.Vec{X: length / 2, Y: width + 2*h}, Height: 1.4 * h, Align: AlignCenterBottom, Value: title, Layer: LayerNotes})
+	return v
+}
+
+// outlineView is the plate view of a plate with an outline (the job's, or
+// the rectangle plate.length closes): its contour is the outline, turned
+// into the plate's frame; the datum is the corner of the outline's
+// extents at the free edge (x' = 0, y' = 0), from which the dimensions
+// run; the Whitmore section is drawn clipped by the outline, and a job's
+// own outline lists its corners from the datum.
+func (l sheetLayout) outlineView(d *detail.Design, p Part, turn func(x, y float64) r2.Vec) View {
+	c := &d.Conn
+	pl := c.Plate
+	p.Contour = nil
+	for _, q := range pl.Outline {
+		p.Contour = append(p.Contour, turn(l.len(units.Length(q.X)), l.len(units.Length(q.Y))))
+	}
+	for i := range c.Holes {
+		h := &c.Holes[i]
+		hs := h.InPlate()
+		p.Holes = append(p.Holes, SheetHole{ID: h.ID, Centre: turn(l.len(h.X), l.len(h.Y)), Dx: l.len(hs.Dx), Dy: l.len(hs.Dy), Type: hs.Type})
+	}
+	v := View{Part: p}
+	l.annotate(&v, true)
+	h := l.h
+	_, hi := p.Bounds()
+	length, width := hi.X, hi.Y
+
+	// Whitmore section as the check takes it, clipped by the outline.
+	w := engine.WhitmoreSection(c)
+	mm := func(x, y units.Length) r2.Vec { return r2.Vec{X: float64(x), Y: float64(y)} }
+	for _, s := range [][2]r2.Vec{
+		{mm(w.Low.X0, w.Low.Y0), mm(w.Low.X1, w.Low.Y1)},
+		{mm(w.High.X0, w.High.Y0), mm(w.High.X1, w.High.Y1)},
+		{mm(w.X, w.Low.Y1), mm(w.X, w.High.Y1)},
+	} {
+		for _, in := range pl.ClipToOutline(s[0], s[1]) {
+			a, b := in[0], in[1]
+			v.Lines = append(v.Lines, Segment{turn(l.len(units.Length(a.X)), l.len(units.Length(a.Y))),
+				turn(l.len(units.Length(b.X)), l.len(units.Length(b.Y))), LayerReference})
+		}
+	}
+	// As on the rectangle: past the section, near the top edge.
+	sec := l.len(pl.FreeEdge) - l.len(w.X)
+	v.Texts = append(v.Texts, Text{At: r2.Vec{X: sec + h/2, Y: width - 1.5*h}, Height: h, Align: AlignLeftBase,
+		Value: "WHITMORE Lw = " + l.people(l.len(w.Lw)), Layer: LayerReference})
+
+	shape := "OUTLINE"
+	if ps := d.Job.Plate; ps == nil || ps.Outline == nil {
+		shape = "RECTANGLE"
+	} else {
+		// The corners from the datum, for the shop to lay out and QA to
+		// check: right of the view, top down.
+		at := r2.Vec{X: length + 3*h, Y: width}
+		v.Texts = append(v.Texts, Text{At: at, Height: h, Align: AlignLeftBase, Value: "CORNERS FROM DATUM (X', Y'):", Layer: LayerNotes})
+		for i, q := range p.Contour {
+			at.Y -= 1.6 * h
+			v.Texts = append(v.Texts, Text{At: at, Height: h, Align: AlignLeftBase,
+				Value: fmt.Sprintf("%d: %s, %s", i, l.people(q.X), l.people(q.Y)), Layer: LayerNotes})
+		}
+	}
+	title := fmt.Sprintf("PLATE %s x %s x %s %s %s %s - FREE EDGE AT LEFT, DATUM AT LOWER LEFT", l.people(p.Thickness), l.people(width), l.people(length),
+		d.Info.PlateGrade, strings.ToUpper(pl.Kind.String()), shape)
 	v.Texts = append(v.Texts,
 		Text{At: r2.Vec{X: length / 2, Y: width + 2*h}, Height: 1.4 * h, Align: AlignCenterBottom, Value: title, Layer: LayerNotes})
 	return v

@@ -23,6 +23,14 @@ type Part struct {
 	// Toward = +1).
 	XEdge  units.Length
 	Toward float64
+	// A part whose edges are not straight (a plate's outline) says where
+	// they are: EdgeAt is the x where the line along the load from (x, y)
+	// toward the tear-out edge leaves the part, LowAt and HighAt the y
+	// where the line across it from (x, y) reaches the low and high edges;
+	// XEdge is then the farthest the tear-out edge lies, Low and High the
+	// extremes. nil: the straight edges XEdge, Low and High.
+	EdgeAt        func(x, y units.Length) units.Length
+	LowAt, HighAt func(x, y units.Length) units.Length
 }
 
 // Block is one candidate block: its boundaries across the load are either
@@ -127,16 +135,38 @@ func (s *search) dist(h Hole) units.Length { return units.Length(s.p.Toward) * (
 // width along the load): half of one centred where it ends. As-built holes
 // a little off the line are cut over their chord, not over their whole
 // length.
+//
+// Where the edge is not straight the plane starts where the part's edge
+// crosses the line y (a corner clip shortens it): at the distance start
+// from XEdge.
 func (s *search) shearTo(y, D units.Length) (Agv, Anv units.Area) {
-	net := D
+	var start units.Length
+	if s.p.EdgeAt != nil {
+		start = max(units.Length(s.p.Toward)*(s.p.XEdge-s.p.EdgeAt(s.p.XEdge-units.Length(s.p.Toward)*D, y)), 0)
+	}
+	gross := D - start
+	net := gross
 	for _, h := range s.holes {
 		cut := HoleChord(h.Dx+s.allow, h.Dy+s.allow, h.Y-y)
 		d := s.dist(h)
-		if lo, hi := max(d-cut/2, 0), min(d+cut/2, D); hi > lo {
+		if lo, hi := max(d-cut/2, start), min(d+cut/2, D); hi > lo {
 			net -= hi - lo
 		}
 	}
-	return D.Mul(s.p.T), net.Mul(s.p.T)
+	return gross.Mul(s.p.T), net.Mul(s.p.T)
+}
+
+// sides are the block's ends across the load, y0 and y1, where a boundary
+// is a free edge that is not straight: reached from the tension plane's
+// ends, (lo) and (hi).
+func (s *search) sides(a, b int, y0, y1 units.Length, lo, hi Hole) (units.Length, units.Length) {
+	if a < 0 && s.p.LowAt != nil {
+		y0 = s.p.LowAt(lo.X, lo.Y)
+	}
+	if b >= s.nl && s.p.HighAt != nil {
+		y1 = s.p.HighAt(hi.X, hi.Y)
+	}
+	return y0, y1
 }
 
 // shear is the shear plane along line i to its innermost hole.
@@ -188,11 +218,11 @@ func (s *search) across(y0, y1, D units.Length) units.Area {
 // plane.
 func (s *search) plane(a, b int, y0, y1 units.Length, between []int, mask int) (units.Area, int) {
 	var stops []Hole
-	net := y1 - y0
+	var cuts []units.Length // what each stop takes out, in order
 	half := func(i int) {
 		h := s.holes[s.inner[i]]
 		stops = append(stops, h)
-		net -= (h.Dy + s.allow) / 2
+		cuts = append(cuts, (h.Dy+s.allow)/2)
 	}
 	if a >= 0 {
 		half(a)
@@ -201,11 +231,18 @@ func (s *search) plane(a, b int, y0, y1 units.Length, between []int, mask int) (
 		if mask&(1<<k) != 0 {
 			h := s.holes[s.inner[i]]
 			stops = append(stops, h)
-			net -= h.Dy + s.allow
+			cuts = append(cuts, h.Dy+s.allow)
 		}
 	}
 	if b < s.nl {
 		half(b)
+	}
+	if len(stops) > 0 {
+		y0, y1 = s.sides(a, b, y0, y1, stops[0], stops[len(stops)-1])
+	}
+	net := y1 - y0
+	for _, c := range cuts {
+		net -= c
 	}
 	for k := 1; k < len(stops); k++ {
 		g, sp := stops[k].Y-stops[k-1].Y, stops[k].X-stops[k-1].X
@@ -297,6 +334,7 @@ func (s *search) worst(a, b int) Block {
 // measured hole off its line makes a line of its own that ends early).
 // ok is false when h does not lie between the boundaries.
 func (s *search) square(a, b int, y0, y1 units.Length, h Hole) (bl Block, ok bool) {
+	y0, y1 = s.sides(a, b, y0, y1, h, h)
 	if h.Y+h.Dy/2 <= y0+eps || h.Y-h.Dy/2 >= y1-eps {
 		return Block{}, false
 	}
