@@ -14,14 +14,16 @@ import (
 var update = flag.Bool("update", false, "rewrite the golden DXF files under testdata/golden")
 
 // goldenJobs: a US angle (failing: stamped sheet only), a US two-line flat
-// with stagger (failing too), an SI double angle, an SI slotted angle and
-// the demo (a passing US angle, so US CAM files too).
+// with stagger (failing too), an SI double angle, an SI slotted angle, the
+// demo (a passing US angle, so US CAM files too) and a 16-ft brace with
+// its title block. Each member is drawn whole, with a break.
 var goldenJobs = []string{
 	"../testdata/jobs/us-single-angle.yaml",
 	"../testdata/jobs/us-staggered-flat.yaml",
 	"../testdata/jobs/si-double-angle.yaml",
 	"../testdata/jobs/si-slotted.yaml",
 	"../testdata/jobs/us-pipe-rack-brace.yaml",
+	"../testdata/jobs/us-brace-16ft.yaml",
 }
 
 const goldenDir = "../testdata/golden"

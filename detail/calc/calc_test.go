@@ -11,9 +11,11 @@ import (
 	"testing"
 
 	"golang.org/x/net/html"
+	"gonum.org/v1/gonum/spatial/r2"
 
 	"gaugeline/detail"
 	"gaugeline/detail/jobfile"
+	"gaugeline/detail/sheet"
 	"gaugeline/engine"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
@@ -355,6 +357,26 @@ func TestDrawingHolesMatchTheJob(t *testing.T) {
 			for _, h := range c.Holes {
 				want["member"][h.ID] = [2]float64{job(h.X), job(h.Y)}
 			}
+			// With member.length the member is whole: the far end's holes
+			// F1, F2, … mirror the job's about mid-length (x' = length − x).
+			if L := r.Design.Job.Member.Length; L > 0 {
+				for i, h := range c.Holes {
+					want["member"][fmt.Sprintf("F%d", i+1)] = [2]float64{job(L) - job(h.X), job(h.Y)}
+				}
+			}
+			// Where the member view has a break, a hole is drawn where the
+			// view folds its part-frame centre.
+			s, err := sheet.NewDrawing(r, !r.Pass)
+			if err != nil {
+				t.Fatal(err)
+			}
+			drawn := func(part string, w [2]float64) [2]float64 {
+				if part != "member" {
+					return w
+				}
+				q := s.Views[0].Fold(r2.Vec{X: w[0], Y: w[1]})
+				return [2]float64{q.X, q.Y}
+			}
 			if pl := c.Plate; pl != nil {
 				want["plate"] = map[string][2]float64{}
 				for _, h := range c.Holes {
@@ -390,8 +412,8 @@ func TestDrawingHolesMatchTheJob(t *testing.T) {
 				if part == "plate" {
 					shape = c.Holes[0].InPlate()
 				}
-				if len(holes) != len(c.Holes) {
-					t.Fatalf("view %s: %d holes drawn, want %d", part, len(holes), len(c.Holes))
+				if len(holes) != len(want[part]) {
+					t.Fatalf("view %s: %d holes drawn, want %d", part, len(holes), len(want[part]))
 				}
 				circles := 0
 				for _, h := range holes {
@@ -409,8 +431,8 @@ func TestDrawingHolesMatchTheJob(t *testing.T) {
 						// (cx, cy) = (x, −y). Its translate puts the
 						// point on the page, which must show it.
 						cx, cy := num(t, h, "cx"), num(t, h, "cy")
-						if x, y := cx, -cy; math.Abs(x-w[0]) > tol || math.Abs(y-w[1]) > tol {
-							t.Errorf("%s %s: circle at (%g, %g), want (%g, %g)", part, id, x, y, w[0], w[1])
+						if x, y, d := cx, -cy, drawn(part, w); math.Abs(x-d[0]) > tol || math.Abs(y-d[1]) > tol {
+							t.Errorf("%s %s: circle at (%g, %g), want (%g, %g)", part, id, x, y, d[0], d[1])
 						}
 						if px, py := cx+tx, cy+ty; px < 0 || px > vw || py < 0 || py > vh {
 							t.Errorf("%s %s: at (%g, %g) on the page, outside the viewBox %g × %g", part, id, px, py, vw, vh)
@@ -472,6 +494,10 @@ func TestDrawingSlotsMatchTheJob(t *testing.T) {
 		c := &r.Design.Conn
 		sys := r.Design.Job.Units
 		job := func(l units.Length) float64 { return sys.ToJob(float64(l), units.DimLength) }
+		s, err := sheet.NewDrawing(r, !r.Pass)
+		if err != nil {
+			t.Fatal(err)
+		}
 		for _, n := range find(doc, func(n *html.Node) bool { c, _ := attr(n, "class"); return n.Data == "path" && c == "hole slot" }) {
 			seen++
 			part, _ := attr(n, "data-part")
@@ -487,6 +513,10 @@ func TestDrawingSlotsMatchTheJob(t *testing.T) {
 			dx, dy := job(shape.Dx), job(shape.Dy)
 			rad := min(dx, dy) / 2
 			cx, cy := num(t, n, "data-x"), num(t, n, "data-y")
+			if part == "member" { // drawn where the view folds it (a break)
+				q := s.Views[0].Fold(r2.Vec{X: cx, Y: cy})
+				cx, cy = q.X, q.Y
+			}
 			d, _ := attr(n, "d")
 			steps := slotPath(t, d)
 			if len(steps) != 5 || steps[0].cmd != 'M' {
