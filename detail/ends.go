@@ -102,7 +102,8 @@ func (d *Design) MemberLength() units.Length { return d.Job.Member.Length }
 // near cut end): the near end's mirrored (x' = length − x) or the far
 // end's own at length − x, each with its own hole shapes; nil for a plain
 // far end or without member.length. Their ids are F1, F2, … in the far
-// end's order.
+// end's order. A far end of its own needs CheckJob's report (Far); without
+// it FarHoles panics.
 func (r *Report) FarHoles() []engine.Hole {
 	job := r.Design.Job
 	L := job.Member.Length
@@ -110,8 +111,11 @@ func (r *Report) FarHoles() []engine.Hole {
 		return nil
 	}
 	src := r.Design.Conn.Holes
-	if r.Far != nil {
+	switch {
+	case r.Far != nil:
 		src = r.Far.Design.Conn.Holes
+	case job.Member.FarEnd.Kind == jobfile.FarOwn:
+		panic("detail: the far end of its own is not checked: the report is not CheckJob's")
 	}
 	out := make([]engine.Hole, len(src))
 	for i, h := range src {

@@ -15,8 +15,9 @@ var update = flag.Bool("update", false, "rewrite the golden DXF files under test
 
 // goldenJobs: a US angle (failing: stamped sheet only), a US two-line flat
 // with stagger (failing too), an SI double angle, an SI slotted angle, the
-// demo (a passing US angle, so US CAM files too) and a 16-ft brace with
-// its title block. Each member is drawn whole, with a break.
+// demo (a passing US angle, so US CAM files too), a 16-ft brace with its
+// title block and a brace whose far end has a connection of its own (its
+// plate a CAM file of its own). Each member is drawn whole, with a break.
 var goldenJobs = []string{
 	"../testdata/jobs/us-single-angle.yaml",
 	"../testdata/jobs/us-staggered-flat.yaml",
@@ -24,6 +25,7 @@ var goldenJobs = []string{
 	"../testdata/jobs/si-slotted.yaml",
 	"../testdata/jobs/us-pipe-rack-brace.yaml",
 	"../testdata/jobs/us-brace-16ft.yaml",
+	"../testdata/jobs/us-brace-two-ends.yaml",
 }
 
 const goldenDir = "../testdata/golden"

@@ -193,11 +193,7 @@ func check(t *testing.T, path string) *detail.Report {
 	if err != nil {
 		t.Fatal(err)
 	}
-	d, err := detail.Build(j)
-	if err != nil {
-		t.Fatal(err)
-	}
-	r, err := detail.Check(d)
+	r, err := detail.CheckJob(j) // both ends
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -353,15 +349,34 @@ func TestDrawingHolesMatchTheJob(t *testing.T) {
 			c := &r.Design.Conn
 			sys := r.Design.Job.Units
 			job := func(l units.Length) float64 { return sys.ToJob(float64(l), units.DimLength) }
-			want := map[string]map[string][2]float64{"member": {}}
+			// Each view's holes: centre and width, in its part's frame.
+			want := map[string]map[string][3]float64{"member": {}}
+			width := func(s engine.HoleShape) float64 { return job(min(s.Dx, s.Dy)) }
 			for _, h := range c.Holes {
-				want["member"][h.ID] = [2]float64{job(h.X), job(h.Y)}
+				want["member"][h.ID] = [3]float64{job(h.X), job(h.Y), width(h.HoleShape)}
 			}
 			// With member.length the member is whole: the far end's holes
-			// F1, F2, … mirror the job's about mid-length (x' = length − x).
+			// F1, F2, … at x' = length − x, x of the far end's own holes
+			// (far_end with bolts) or the job's (mirror), from that end.
+			far := c
+			if r.Far != nil {
+				far = &r.Far.Design.Conn
+			}
 			if L := r.Design.Job.Member.Length; L > 0 {
-				for i, h := range c.Holes {
-					want["member"][fmt.Sprintf("F%d", i+1)] = [2]float64{job(L) - job(h.X), job(h.Y)}
+				for i, h := range far.Holes {
+					want["member"][fmt.Sprintf("F%d", i+1)] = [3]float64{job(L) - job(h.X), job(h.Y), width(h.HoleShape)}
+				}
+			}
+			plates := map[string]*engine.Connection{"plate": c}
+			if r.Far != nil {
+				plates["far-plate"] = far
+			}
+			for name, pc := range plates {
+				if pl := pc.Plate; pl != nil {
+					want[name] = map[string][3]float64{}
+					for _, h := range pc.Holes {
+						want[name][h.ID] = [3]float64{job(pl.FreeEdge) - job(h.X), job(pl.YMax()) - job(h.Y), width(h.InPlate())}
+					}
 				}
 			}
 			// Where the member view has a break, a hole is drawn where the
@@ -370,18 +385,12 @@ func TestDrawingHolesMatchTheJob(t *testing.T) {
 			if err != nil {
 				t.Fatal(err)
 			}
-			drawn := func(part string, w [2]float64) [2]float64 {
-				if part != "member" {
-					return w
-				}
+			drawn := func(part string, w [3]float64) [2]float64 {
 				q := s.Views[0].Fold(r2.Vec{X: w[0], Y: w[1]})
-				return [2]float64{q.X, q.Y}
-			}
-			if pl := c.Plate; pl != nil {
-				want["plate"] = map[string][2]float64{}
-				for _, h := range c.Holes {
-					want["plate"][h.ID] = [2]float64{job(pl.FreeEdge) - job(h.X), job(pl.YMax()) - job(h.Y)}
+				if part != "member" {
+					q = r2.Vec{X: w[0], Y: w[1]}
 				}
+				return [2]float64{q.X, q.Y}
 			}
 			svgs := find(doc, func(n *html.Node) bool { return n.Data == "svg" })
 			if len(svgs) != 1 {
@@ -409,8 +418,11 @@ func TestDrawingHolesMatchTheJob(t *testing.T) {
 				ty, _ := strconv.ParseFloat(m[2], 64)
 				holes := find(v, func(n *html.Node) bool { _, ok := attr(n, "data-hole"); return ok })
 				shape := c.Holes[0].HoleShape // each view draws its own part's holes
-				if part == "plate" {
+				switch part {
+				case "plate":
 					shape = c.Holes[0].InPlate()
+				case "far-plate":
+					shape = far.Holes[0].InPlate()
 				}
 				if len(holes) != len(want[part]) {
 					t.Fatalf("view %s: %d holes drawn, want %d", part, len(holes), len(want[part]))
@@ -437,7 +449,7 @@ func TestDrawingHolesMatchTheJob(t *testing.T) {
 						if px, py := cx+tx, cy+ty; px < 0 || px > vw || py < 0 || py > vh {
 							t.Errorf("%s %s: at (%g, %g) on the page, outside the viewBox %g × %g", part, id, px, py, vw, vh)
 						}
-						if d := 2 * num(t, h, "r"); math.Abs(d-job(min(shape.Dx, shape.Dy))) > tol {
+						if d := 2 * num(t, h, "r"); math.Abs(d-w[2]) > tol {
 							t.Errorf("%s %s: diameter %g", part, id, d)
 						}
 					}

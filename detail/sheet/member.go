@@ -338,7 +338,8 @@ func farEndFields(r *detail.Report) [][2]string {
 // memberScheduleRows are the member's rows of the hole schedule: the near
 // end's row (given) counting the whole member's holes where they are all
 // alike, else a row per end (the far end's own hole type).
-func (l sheetLayout) memberScheduleRows(s *Sheet, d *detail.Design, near []string) [][]string {
+func (l sheetLayout) memberScheduleRows(s *Sheet, r *detail.Report, near []string) [][]string {
+	d := r.Design
 	if len(s.Views) == 0 || len(s.Views[0].Part.Holes) == len(d.Conn.Holes) {
 		return [][]string{near}
 	}
@@ -353,9 +354,44 @@ func (l sheetLayout) memberScheduleRows(s *Sheet, d *detail.Design, near []strin
 	if !h.Round() {
 		text = l.people(min(h.Dx, h.Dy)) + " x " + l.people(max(h.Dx, h.Dy)) + " SLOT"
 	}
-	farRow := []string{near[0] + ", FAR END", fmt.Sprint(len(far)), text, strings.ToUpper(h.Type.String()), near[4]}
+	made := near[4]
+	if r.Far != nil { // the far end's own bolt: its punch limit
+		fc := &r.Far.Design.Conn
+		made = fmt.Sprintf("%s (t %s, punch limit %s)", HowMade(fc.Member.T, fc.Bolt.D, l.sys), l.limit(l.len(fc.Member.T)),
+			l.limit(l.len(PunchLimit(fc.Bolt.D, l.sys))))
+	}
+	farRow := []string{near[0] + ", FAR END", fmt.Sprint(len(far)), text, strings.ToUpper(h.Type.String()), made}
 	near[0] += ", NEAR END"
 	return [][]string{near, farRow}
 }
 
 func near2(a, b float64) bool { return a-b < 1e-9 && b-a < 1e-9 }
+
+// farPlateView is the view of the far end's own plate (far_end with a
+// plate: block), as the near end's plate is drawn, in its own frame; its
+// CAM file is MARK-far-plate.cam.dxf. Nil where the far end has none.
+func (l sheetLayout) farPlateView(r *detail.Report) *View {
+	if r.Far == nil || r.Far.Design.Conn.Plate == nil {
+		return nil
+	}
+	v := l.plateView(r.Far.Design)
+	v.Part.Name = "far-plate"
+	for i := range v.Texts {
+		if t := &v.Texts[i]; t.Layer == LayerNotes && strings.HasPrefix(t.Value, "PLATE ") {
+			t.Value = "FAR END " + t.Value
+		}
+	}
+	return &v
+}
+
+// farPlateRows is the hole schedule's row of the far end's own plate.
+func (l sheetLayout) farPlateRows(r *detail.Report) [][]string {
+	if r.Far == nil || r.Far.Design.Conn.Plate == nil {
+		return nil
+	}
+	c := &r.Far.Design.Conn
+	hs := c.Holes[0].InPlate()
+	made := fmt.Sprintf("%s (t %s, punch limit %s)", HowMade(c.Plate.T, c.Bolt.D, l.sys), l.limit(l.len(c.Plate.T)),
+		l.limit(l.len(PunchLimit(c.Bolt.D, l.sys))))
+	return [][]string{{"PLATE, FAR END", fmt.Sprint(len(c.Holes)), l.holeText(hs), strings.ToUpper(hs.Type.String()), made}}
+}

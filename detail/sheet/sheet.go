@@ -289,6 +289,9 @@ func newSheet(r *detail.Report, notForFabrication bool) (*Sheet, error) {
 	if d.Conn.Plate != nil {
 		views = append(views, l.plateView(d))
 	}
+	if far := l.farPlateView(r); far != nil {
+		views = append(views, *far)
+	}
 	// Side by side, bottoms of the parts level, a gap of 8 text heights
 	// between one view's annotation and the next's.
 	x := 0.0
@@ -310,7 +313,7 @@ func newSheet(r *detail.Report, notForFabrication bool) (*Sheet, error) {
 	}
 	s.Views = views
 	top := bottom - 4*s.TextHeight
-	top = l.schedule(s, d, top)
+	top = l.schedule(s, r, top)
 	l.titleBlock(s, r, top-3*s.TextHeight)
 	for i := range s.Texts {
 		s.Texts[i].Value = ascii(s.Texts[i].Value)
@@ -693,7 +696,8 @@ func (l sheetLayout) holeText(h engine.HoleShape) string {
 
 // schedule writes the hole schedule from the given top down and returns
 // the y below it.
-func (l sheetLayout) schedule(s *Sheet, d *detail.Design, top float64) float64 {
+func (l sheetLayout) schedule(s *Sheet, r *detail.Report, top float64) float64 {
+	d := r.Design
 	h := l.h
 	c := &d.Conn
 	hole, plate := c.Holes[0].HoleShape, c.Holes[0].InPlate() // each ply's holes are all alike in a design
@@ -709,10 +713,11 @@ func (l sheetLayout) schedule(s *Sheet, d *detail.Design, top float64) float64 {
 		{"PART", "COUNT", "HOLE", "TYPE", "MADE BY"},
 		{part, fmt.Sprint(len(c.Holes)), l.holeText(hole), strings.ToUpper(hole.Type.String()), made(c.Member.T)},
 	}
-	rows = append(rows[:1], l.memberScheduleRows(s, d, rows[1])...)
+	rows = append(rows[:1], l.memberScheduleRows(s, r, rows[1])...)
 	if c.Plate != nil {
 		rows = append(rows, []string{"PLATE", fmt.Sprint(len(c.Holes)), l.holeText(plate), strings.ToUpper(plate.Type.String()), made(c.Plate.T)})
 	}
+	rows = append(rows, l.farPlateRows(r)...)
 	s.Schedule = rows
 	// Each column as wide as its widest entry, plus two text heights.
 	cols := make([]float64, len(rows[0]))

@@ -35,11 +35,7 @@ func checkedJob(t *testing.T, path string) *detail.Report {
 	if err != nil {
 		t.Fatal(err)
 	}
-	d, err := detail.Build(j)
-	if err != nil {
-		t.Fatal(err)
-	}
-	r, err := detail.Check(d)
+	r, err := detail.CheckJob(j) // both ends
 	if err != nil {
 		t.Fatal(err)
 	}
