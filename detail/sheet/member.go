@@ -395,3 +395,20 @@ func (l sheetLayout) farPlateRows(r *detail.Report) [][]string {
 		l.limit(l.len(PunchLimit(c.Bolt.D, l.sys))))
 	return [][]string{{"PLATE, FAR END", fmt.Sprint(len(c.Holes)), l.holeText(hs), strings.ToUpper(hs.Type.String()), made}}
 }
+
+// boltsEnd says which end the title block's BOLTS row is of, on a sheet of
+// the whole member: ", EACH END" (a mirror far end), ", NEAR END" (a far
+// end of its own: FAR BOLTS follows) or ", NEAR END ONLY" (plain).
+func boltsEnd(r *detail.Report) string {
+	j := r.Design.Job
+	if j.Member.Length == 0 {
+		return ""
+	}
+	switch j.Member.FarEnd.Kind {
+	case jobfile.FarPlain:
+		return ", NEAR END ONLY"
+	case jobfile.FarOwn:
+		return ", NEAR END"
+	}
+	return ", EACH END"
+}
