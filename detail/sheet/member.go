@@ -396,9 +396,9 @@ func (l sheetLayout) farPlateRows(r *detail.Report) [][]string {
 	return [][]string{{"PLATE, FAR END", fmt.Sprint(len(c.Holes)), l.holeText(hs), strings.ToUpper(hs.Type.String()), made}}
 }
 
-// boltsEnd says which end the title block's BOLTS row is of, on a sheet of
-// the whole member: ", EACH END" (a mirror far end), ", NEAR END" (a far
-// end of its own: FAR BOLTS follows) or ", NEAR END ONLY" (plain).
+// boltsEnd says which end the title block's BOLTS count is of, on a sheet
+// of the whole member: "(4 EACH END)" (a mirror far end), "(4 NEAR END)"
+// (a far end of its own: FAR BOLTS follows) or "(4 NEAR END ONLY)" (plain).
 func boltsEnd(r *detail.Report) string {
 	j := r.Design.Job
 	if j.Member.Length == 0 {
@@ -406,9 +406,9 @@ func boltsEnd(r *detail.Report) string {
 	}
 	switch j.Member.FarEnd.Kind {
 	case jobfile.FarPlain:
-		return ", NEAR END ONLY"
+		return " NEAR END ONLY"
 	case jobfile.FarOwn:
-		return ", NEAR END"
+		return " NEAR END"
 	}
-	return ", EACH END"
+	return " EACH END"
 }

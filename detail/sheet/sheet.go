@@ -780,8 +780,8 @@ func (l sheetLayout) titleBlock(s *Sheet, r *detail.Report, top float64) {
 		fields[at+4][1] += ", plate " + l.limit(l.len(c.Plate.T))
 	}
 	fields = append(fields,
-		[2]string{"BOLTS", fmt.Sprintf("(%d) %s %s, threads %s, %s joint, %s%s", len(c.Holes),
-			detail.BoltSize(c.Bolt.D, l.sys), c.Bolt.Grade.Name, c.Bolt.Threads, c.Bolt.Joint, detail.HoleKinds(c), boltsEnd(r))},
+		[2]string{"BOLTS", fmt.Sprintf("(%d%s) %s %s, threads %s, %s joint, %s", len(c.Holes), boltsEnd(r),
+			detail.BoltSize(c.Bolt.D, l.sys), c.Bolt.Grade.Name, c.Bolt.Threads, c.Bolt.Joint, detail.HoleKinds(c))},
 	)
 	fields = append(fields, farEndFields(r)...)
 	fields = append(fields,

@@ -321,7 +321,7 @@ func TestSheetTitleBlock(t *testing.T) {
 		all = append(all, x.Value)
 	}
 	joined := strings.Join(all, "\n")
-	for _, want := range []string{"TD-21.b", "2L100x75x8", "A572-50", "A36", "(3) M20 A325M", "AISC 360-16 ASD",
+	for _, want := range []string{"TD-21.b", "2L100x75x8", "A572-50", "A36", "(3 EACH END) M20 A325M", "AISC 360-16 ASD",
 		"MILLIMETRES", "MEMBER (EACH OF 2)", "22 DIA", "PUNCH", Stamp, "engineer of record"} {
 		if !strings.Contains(joined, want) {
 			t.Errorf("sheet text lacks %q", want)
