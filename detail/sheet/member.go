@@ -260,8 +260,15 @@ func (l sheetLayout) annotateMember(v *View, near, far []SheetHole) {
 		}
 	}
 
-	// Gage lines: the length of the member where both ends share them,
-	// else each end's to the middle.
+	l.memberGageLines(v, ny, fy, sameY)
+}
+
+// memberGageLines draws the gage lines the length of the member where both
+// ends share them, else each end's to the middle (of the break).
+func (l sheetLayout) memberGageLines(v *View, ny, fy []float64, sameY bool) {
+	h := l.h
+	_, hi := v.Part.Bounds()
+	length := hi.X
 	split := length / 2
 	if b := v.Break; b != nil {
 		split = (b.X0 + b.X1) / 2
