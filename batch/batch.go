@@ -369,18 +369,15 @@ func jobFiles(cfg Config, job *jobfile.Job, row *Row) ([]fileset.File, error) {
 		}
 		r = p.Report
 	} else {
-		d, err := detail.Build(job)
-		if err != nil {
+		var err error
+		if r, err = detail.CheckJob(job); err != nil {
 			return nil, err
-		}
-		if r, err = detail.Check(d); err != nil {
-			return nil, &jobfile.InputError{File: job.File, Msg: err.Error()}
 		}
 		if data, err = r.JSON(); err != nil {
 			return nil, err
 		}
 	}
-	g := r.GoverningResult()
+	g := r.GoverningEnd().GoverningResult()
 	row.Governing, row.Ratio, row.Bolts = g.ID, g.Ratio, len(r.Design.Conn.Holes)
 	files := []fileset.File{{Name: job.Mark + ".json", Data: data}}
 	if !r.Pass {

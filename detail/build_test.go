@@ -440,7 +440,8 @@ func TestBuildGoodJobs(t *testing.T) {
 }
 
 // Every bad job under testdata/bad is an *InputError naming the field and,
-// where the YAML has one, the line — whether parsing or Build finds it.
+// where the YAML has one, the line — whether parsing, Build or CheckJob
+// finds it.
 func TestBuildBadJobs(t *testing.T) {
 	cases := []struct {
 		file  string
@@ -501,6 +502,10 @@ func TestBuildBadJobs(t *testing.T) {
 		{"outline-with-width.yaml", "plate.width", 12},
 		{"outline-clip-too-big.yaml", "plate.clip[0].size", 14},
 		{"plate-length-short.yaml", "plate.length", 14},
+		{"far-end-no-pitch.yaml", "member.far_end.bolts.pitch", 10},
+		{"far-end-overlap.yaml", "member.length", 11},
+		{"far-end-unknown.yaml", "member.far_end", 9},
+		{"project-unknown-key.yaml", "project.sheet", 4},
 	}
 	dir := filepath.Join("..", "testdata", "bad")
 	listed := map[string]bool{}
@@ -510,7 +515,7 @@ func TestBuildBadJobs(t *testing.T) {
 			path := filepath.Join(dir, c.file)
 			j, err := jobfile.LoadJob(path)
 			if err == nil {
-				_, err = Build(j)
+				_, err = CheckJob(j) // Build, and the ends' fit (ends.go)
 			}
 			var ie *jobfile.InputError
 			if !errors.As(err, &ie) {

@@ -78,6 +78,9 @@ func (d *Design) Summary() [][2]string {
 		}
 	}
 	rows = append(rows, [2]string{"bolts", bolts})
+	if fe := d.farEndRow(); fe != "" {
+		rows = append(rows, [2]string{"far end", fe})
+	}
 	demand := fmt.Sprintf("%s %s (%s)", p.force(c.Demand), d.Job.Units.Labels().Force, c.Method)
 	if d.Combination != "" {
 		demand += ", " + d.Combination
@@ -127,9 +130,15 @@ func BoltSize(d units.Length, sys units.System) string {
 // pass names the governing limit state and its ratio; a fail names every
 // failing limit state and rule (Failing), then the governing limit state
 // for information, saying so when it passes (a detailing rule failed).
+//
+// With a far end of its own (Far) the governing limit state is the
+// governing end's, and the reason says which end that is.
 func (r *Report) VerdictReason() string {
-	g := r.GoverningResult()
+	g := r.GoverningEnd().GoverningResult()
 	gov := fmt.Sprintf("governing %s (%s), ratio %s", g.ID, g.Clause, RatioText(g.Ratio))
+	if r.Far != nil {
+		gov += " at the " + r.GoverningEndName() + " end"
+	}
 	if r.Pass {
 		return gov
 	}
@@ -140,11 +149,10 @@ func (r *Report) VerdictReason() string {
 	return fails + "; " + gov
 }
 
-// WriteText writes the report as aligned tables for a terminal.
+// WriteText writes the report as aligned tables for a terminal. With a
+// far end of its own (Far) each end's tables follow under its heading.
 func (r *Report) WriteText(w io.Writer) error {
 	d := r.Design
-	p := people{d.Job.Units}
-	lb := d.Job.Units.Labels()
 	var b strings.Builder
 	fmt.Fprintf(&b, "%s — %s, %s, %s units\n", d.Job.Mark, d.Conn.Edition.Name(), strings.ToUpper(d.Conn.Method.String()), d.Job.Units)
 	tw := tabwriter.NewWriter(&b, 0, 0, 2, ' ', 0)
@@ -152,28 +160,17 @@ func (r *Report) WriteText(w io.Writer) error {
 		fmt.Fprintf(tw, "  %s\t%s\n", row[0], row[1])
 	}
 	tw.Flush()
-	fmt.Fprintf(&b, "\n")
-	tw = tabwriter.NewWriter(&b, 0, 0, 2, ' ', 0)
-	fmt.Fprintf(tw, "LIMIT STATE\tCLAUSE\tNOMINAL %s\tAVAILABLE %s\tRATIO\t\tWHAT\n", lb.Force, lb.Force)
-	for i, x := range r.Results {
-		mark := PassMark(x.Pass, false)
-		if i == r.Governing {
-			mark += " <"
-		}
-		fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\t%s\t%s\n", x.ID, x.Clause, p.force(x.Nominal), p.force(x.Available), RatioText(x.Ratio), mark, x.Note)
+	if r.Far != nil {
+		fmt.Fprintf(&b, "\nNEAR END\n")
 	}
-	tw.Flush()
-	fmt.Fprintf(&b, "\n")
-	FindingsText(&b, p.sys, "DETAILING", r.Findings)
+	r.textTables(&b)
+	if r.Far != nil {
+		r.Far.farText(&b)
+	}
 	fmt.Fprintf(&b, "\nverdict: %s — %s\n", strings.ToUpper(r.Verdict()), r.VerdictReason())
-	for _, f := range r.Findings {
-		switch {
-		case f.Pass || f.Advisory:
-		case f.Dim == units.Dimensionless && f.Measured == 0 && f.Limit == 0:
-			fmt.Fprintf(&b, "  fails %s (%s): %s\n", f.ID, f.Clause, f.Where)
-		default:
-			fmt.Fprintf(&b, "  fails %s (%s): %s, measured %s, limit %s\n", f.ID, f.Clause, f.Where, p.value(f.Measured, f.Dim), p.value(f.Limit, f.Dim))
-		}
+	r.textFails(&b, "")
+	if r.Far != nil {
+		r.Far.textFails(&b, "far end: ")
 	}
 	fmt.Fprintf(&b, "\n")
 	for _, c := range r.Cautions {
@@ -183,18 +180,78 @@ func (r *Report) WriteText(w io.Writer) error {
 	return err
 }
 
-// WriteMarkdown writes the report as Markdown tables for a calculation record.
+// textTables writes this end's limit states and detailing findings.
+func (r *Report) textTables(b *strings.Builder) {
+	p := people{r.Design.Job.Units}
+	lb := r.Design.Job.Units.Labels()
+	fmt.Fprintf(b, "\n")
+	tw := tabwriter.NewWriter(b, 0, 0, 2, ' ', 0)
+	fmt.Fprintf(tw, "LIMIT STATE\tCLAUSE\tNOMINAL %s\tAVAILABLE %s\tRATIO\t\tWHAT\n", lb.Force, lb.Force)
+	for i, x := range r.Results {
+		mark := PassMark(x.Pass, false)
+		if i == r.Governing {
+			mark += " <"
+		}
+		fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\t%s\t%s\n", x.ID, x.Clause, p.force(x.Nominal), p.force(x.Available), RatioText(x.Ratio), mark, x.Note)
+	}
+	tw.Flush()
+	fmt.Fprintf(b, "\n")
+	FindingsText(b, p.sys, "DETAILING", r.Findings)
+}
+
+// textFails writes a line per failing detailing rule of this end, each
+// line's text after prefix.
+func (r *Report) textFails(b *strings.Builder, prefix string) {
+	p := people{r.Design.Job.Units}
+	for _, f := range r.Findings {
+		switch {
+		case f.Pass || f.Advisory:
+		case f.Dim == units.Dimensionless && f.Measured == 0 && f.Limit == 0:
+			fmt.Fprintf(b, "  %sfails %s (%s): %s\n", prefix, f.ID, f.Clause, f.Where)
+		default:
+			fmt.Fprintf(b, "  %sfails %s (%s): %s, measured %s, limit %s\n", prefix, f.ID, f.Clause, f.Where, p.value(f.Measured, f.Dim), p.value(f.Limit, f.Dim))
+		}
+	}
+}
+
+// WriteMarkdown writes the report as Markdown tables for a calculation
+// record. With a far end of its own (Far) each end's tables follow under
+// its heading.
 func (r *Report) WriteMarkdown(w io.Writer) error {
 	d := r.Design
-	p := people{d.Job.Units}
-	lb := d.Job.Units.Labels()
 	var b strings.Builder
 	fmt.Fprintf(&b, "# %s — tension connection check\n\n", d.Job.Mark)
 	fmt.Fprintf(&b, "%s, %s, %s units.\n\n", d.Conn.Edition.Name(), strings.ToUpper(d.Conn.Method.String()), d.Job.Units)
 	for _, row := range d.Summary() {
 		fmt.Fprintf(&b, "- **%s**: %s\n", row[0], row[1])
 	}
-	fmt.Fprintf(&b, "\n## Limit states\n\n| id | clause | nominal (%s) | available (%s) | demand (%s) | ratio | result | what |\n|---|---|---:|---:|---:|---:|---|---|\n", lb.Force, lb.Force, lb.Force)
+	end := ""
+	if r.Far != nil {
+		end = "Near end"
+	}
+	r.markdownTables(&b, end)
+	if r.Far != nil {
+		r.Far.farMarkdown(&b)
+	}
+	fmt.Fprintf(&b, "\n**Verdict: %s** — %s.\n\n", strings.ToUpper(r.Verdict()), MarkdownEscape(r.VerdictReason()))
+	for _, c := range r.Cautions {
+		fmt.Fprintf(&b, "> %s\n>\n", c)
+	}
+	_, err := io.WriteString(w, strings.TrimSuffix(b.String(), ">\n"))
+	return err
+}
+
+// markdownTables writes this end's limit states and detailing findings as
+// sections, their headings after the end's name where it is given ("Near
+// end: limit states").
+func (r *Report) markdownTables(b *strings.Builder, end string) {
+	p := people{r.Design.Job.Units}
+	lb := r.Design.Job.Units.Labels()
+	limits, detailing := "Limit states", "Detailing"
+	if end != "" {
+		limits, detailing = end+": limit states", end+": detailing"
+	}
+	fmt.Fprintf(b, "\n## %s\n\n| id | clause | nominal (%s) | available (%s) | demand (%s) | ratio | result | what |\n|---|---|---:|---:|---:|---:|---|---|\n", limits, lb.Force, lb.Force, lb.Force)
 	for i, x := range r.Results {
 		res := PassMark(x.Pass, false)
 		id := x.ID
@@ -202,15 +259,9 @@ func (r *Report) WriteMarkdown(w io.Writer) error {
 			id = "**" + id + "**"
 			res += " (governs)"
 		}
-		fmt.Fprintf(&b, "| %s | %s | %s | %s | %s | %s | %s | %s |\n", id, x.Clause, p.force(x.Nominal), p.force(x.Available), p.force(x.Demand), RatioText(x.Ratio), res, MarkdownEscape(x.Note))
+		fmt.Fprintf(b, "| %s | %s | %s | %s | %s | %s | %s | %s |\n", id, x.Clause, p.force(x.Nominal), p.force(x.Available), p.force(x.Demand), RatioText(x.Ratio), res, MarkdownEscape(x.Note))
 	}
-	FindingsMarkdown(&b, p.sys, "Detailing", r.Findings)
-	fmt.Fprintf(&b, "\n**Verdict: %s** — %s.\n\n", strings.ToUpper(r.Verdict()), MarkdownEscape(r.VerdictReason()))
-	for _, c := range r.Cautions {
-		fmt.Fprintf(&b, "> %s\n>\n", c)
-	}
-	_, err := io.WriteString(w, strings.TrimSuffix(b.String(), ">\n"))
-	return err
+	FindingsMarkdown(b, p.sys, detailing, r.Findings)
 }
 
 // FindingsText writes detailing findings as an aligned table under a

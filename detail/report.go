@@ -24,8 +24,14 @@ type Report struct {
 	Results   []engine.Result
 	Findings  []detailing.Finding
 	Governing int // index of the governing limit state in Results
-	Pass      bool
-	Cautions  []string
+	// Pass: every limit state and rule passes, at both ends where the far
+	// end is checked (Far).
+	Pass     bool
+	Cautions []string
+	// Far is the far end's report where member.far_end is a connection of
+	// its own (see ends.go); nil for a mirror or plain far end.
+	Far     *Report
+	ownPass bool // with Far: this end's own Pass
 }
 
 // Check runs every limit state and every detailing check of the design.
@@ -43,30 +49,27 @@ func Check(d *Design) (*Report, error) {
 	return r, nil
 }
 
-// CheckFile loads a job file, builds it and checks it: what `check`,
-// `sheet` and `report` all start with. Every error is an *InputError.
+// CheckFile loads a job file, builds it and checks it (CheckJob, both
+// ends): what `check`, `sheet` and `report` all start with. Every error is
+// an *InputError.
 func CheckFile(path string) (*Report, error) {
 	job, err := jobfile.LoadJob(path)
 	if err != nil {
 		return nil, err
 	}
-	d, err := Build(job)
-	if err != nil {
-		return nil, err
-	}
-	r, err := Check(d)
-	if err != nil {
-		return nil, &jobfile.InputError{File: path, Msg: err.Error()}
-	}
-	return r, nil
+	return CheckJob(job)
 }
 
 // GoverningResult returns the limit state with the highest ratio.
 func (r *Report) GoverningResult() engine.Result { return r.Results[r.Governing] }
 
 // Failing names every limit state and non-advisory detailing rule that
-// fails, each once: limit states first, in the report's order.
-func (r *Report) Failing() []string {
+// fails, each once: limit states first, in the report's order; then the
+// far end's (Far) not named yet.
+func (r *Report) Failing() []string { return r.failingBoth(r.endFailing()) }
+
+// endFailing is Failing of this end alone.
+func (r *Report) endFailing() []string {
 	var ids []string
 	for _, x := range r.Results {
 		if !x.Pass && !slices.Contains(ids, x.ID) {
@@ -202,13 +205,32 @@ type Document struct {
 	LimitStates    []jsonLimit   `json:"limit_states"`
 	Detailing      []jsonFinding `json:"detailing"`
 	Holes          []jsonHole    `json:"holes"`
-	Cautions       []string      `json:"cautions"`
-	Stamp          string        `json:"stamp,omitempty"` // Job.Stamp: the run that wrote the file set
+	// Ends and GoverningEnd are there where the far end is a connection of
+	// its own (ends.go): each end's results; the fields above are the
+	// governing end's, verdict and failing the whole member's.
+	Ends         []jsonEnd `json:"ends,omitempty"`
+	GoverningEnd string    `json:"governing_end,omitempty"`
+	Cautions     []string  `json:"cautions"`
+	Stamp        string    `json:"stamp,omitempty"` // Job.Stamp: the run that wrote the file set
 }
 
 // Document converts the report to the JSON contract of SPEC §9, every
-// value in the job's units.
+// value in the job's units. With a far end of its own the results are the
+// governing end's, the verdict and failing list the whole member's, and
+// ends lists each end's.
 func (r *Report) Document() Document {
+	doc := r.GoverningEnd().endDocument()
+	doc.Mark, doc.Stamp, doc.Cautions = r.Design.Job.Mark, r.Design.Job.Stamp, r.Cautions
+	doc.Verdict, doc.Failing = r.Verdict(), r.Failing()
+	if doc.Failing == nil {
+		doc.Failing = []string{}
+	}
+	r.endsDocument(&doc)
+	return doc
+}
+
+// endDocument is the document of this end alone.
+func (r *Report) endDocument() Document {
 	d := r.Design
 	sys := d.Job.Units
 	force := func(f units.Force) JSONNum { return JSONNum(sys.ToJob(float64(f), units.DimForce)) }
@@ -217,7 +239,7 @@ func (r *Report) Document() Document {
 	doc := Document{
 		Mark: d.Job.Mark, Standard: d.Conn.Edition.Name(), Method: d.Conn.Method.String(), Units: sys.String(),
 		UnitLabels: sys.Labels(), Demand: force(d.Conn.Demand), Combination: d.Combination,
-		Verdict: r.Verdict(), Governing: g.ID, GoverningRatio: JSONNum(g.Ratio), Failing: r.Failing(),
+		Verdict: r.Verdict(), Governing: g.ID, GoverningRatio: JSONNum(g.Ratio), Failing: r.endFailing(),
 		LimitStates: []jsonLimit{}, Detailing: []jsonFinding{}, Holes: []jsonHole{}, Cautions: r.Cautions,
 		Stamp: d.Job.Stamp,
 	}

@@ -11,6 +11,8 @@ import (
 	"testing"
 	"time"
 
+	"gonum.org/v1/gonum/spatial/r2"
+
 	"gaugeline/detail"
 	"gaugeline/detail/jobfile"
 	"gaugeline/detail/sheet"
@@ -43,7 +45,7 @@ var inlineJobs = map[string]string{
 mark: LS-1
 units: us
 load: {required: 40 kip}
-member: {shape: angle, size: L4x4x1/2, grade: A36}
+member: {shape: angle, size: L4x4x1/2, grade: A36, length: 8 ft}
 plate: {thickness: 1/2 in, grade: A36, width: 8 in, edge: 2 in, hole: standard}
 bolts: {diameter: 3/4 in, grade: A325, joint: slip-critical, hole: long-slot, slot: longitudinal,
         per_line: 2, pitch: 4 in, end: 2 in, gage: 2-1/2 in}
@@ -52,7 +54,7 @@ bolts: {diameter: 3/4 in, grade: A325, joint: slip-critical, hole: long-slot, sl
 mark: OV-1
 units: si
 load: {required: 100 kN}
-member: {shape: flat, width: 150 mm, thickness: 12 mm, grade: A36}
+member: {shape: flat, width: 150 mm, thickness: 12 mm, grade: A36, length: 2.4 m}
 plate: {thickness: 12 mm, grade: A36, width: 150 mm, edge: 40 mm}
 bolts: {diameter: M20, grade: A325M, joint: slip-critical, hole: oversized,
         lines: 2, per_line: 1, end: 40 mm, gage: 40 mm, gage2: 70 mm}
@@ -76,11 +78,7 @@ func checked(t testing.TB, path string) *detail.Report {
 	if err != nil {
 		t.Fatal(err)
 	}
-	d, err := detail.Build(j)
-	if err != nil {
-		t.Fatal(err)
-	}
-	r, err := detail.Check(d)
+	r, err := detail.CheckJob(j) // both ends
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -127,6 +125,14 @@ func jobHoles(r *detail.Report, plate bool) []wantHole {
 			w.x, w.y = in(c.Plate.FreeEdge-h.X), in(c.Plate.YMax()-h.Y)
 		}
 		out = append(out, w)
+	}
+	// The member is whole: its far end's holes mirror these about
+	// mid-length (x' = member.length − x; the jobs' far_end is mirror).
+	if L := r.Design.Job.Member.Length; !plate && L > 0 {
+		for _, w := range out[:len(c.Holes)] {
+			w.x = in(L) - w.x
+			out = append(out, w)
+		}
 	}
 	return out
 }
@@ -320,6 +326,8 @@ func TestSheetReadsBack(t *testing.T) {
 			var want []wantHole
 			for vi, v := range s.Views {
 				for _, w := range jobHoles(r, vi == 1) {
+					q := v.Fold(r2.Vec{X: w.x, Y: w.y}) // where a break puts it
+					w.x, w.y = q.X, q.Y
 					w.x += v.Origin.X
 					w.y += v.Origin.Y
 					want = append(want, w)

@@ -14,9 +14,11 @@ import (
 var update = flag.Bool("update", false, "rewrite the golden DXF files under testdata/golden")
 
 // goldenJobs: a US angle (failing: stamped sheet only), a US two-line flat
-// with stagger (failing too), an SI double angle, an SI slotted angle and
-// the demo (a passing US angle, so US CAM files too), and a gusset whose
-// outline has a clipped corner.
+// with stagger (failing too), an SI double angle, an SI slotted angle, the
+// demo (a passing US angle, so US CAM files too), a gusset whose outline
+// has a clipped corner, a 16-ft brace with its title block and a brace
+// whose far end has a connection of its own (its plate a CAM file of its
+// own). Each member is drawn whole, with a break.
 var goldenJobs = []string{
 	"../testdata/jobs/us-single-angle.yaml",
 	"../testdata/jobs/us-staggered-flat.yaml",
@@ -24,6 +26,8 @@ var goldenJobs = []string{
 	"../testdata/jobs/si-slotted.yaml",
 	"../testdata/jobs/us-pipe-rack-brace.yaml",
 	"../testdata/jobs/us-clipped-gusset.yaml",
+	"../testdata/jobs/us-brace-16ft.yaml",
+	"../testdata/jobs/us-brace-two-ends.yaml",
 }
 
 const goldenDir = "../testdata/golden"

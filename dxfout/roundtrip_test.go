@@ -56,13 +56,14 @@ var plyKinds = []plyKind{
 // L5x5x1/2 at the 3-in gage on a 1/2-in gusset, or an SI double angle
 // 2L100x75x8 either side of a 12-mm gusset. End and edge distances and the
 // pitch leave room for the longest slots (Table J3.4 plus Table J3.5's
-// 0.75d; 360-22 J3.4's clear distance ≥ d). Invented test jobs.
+// 0.75d; 360-22 J3.4's clear distance ≥ d). Invented test jobs. The far end is
+// plain, so the member's CAM file holds the one end's holes reverify matches.
 func plyJobYAML(si bool, m, p plyKind, perLine int, pitch float64) string {
 	if si {
 		return fmt.Sprintf(`mark: RT-SI
 units: si
 load: {required: 100 kN}
-member: {shape: double-angle, size: L100x75x8, grade: A572-50,%s}
+member: {shape: double-angle, size: L100x75x8, grade: A572-50, length: 2.4 m, far_end: plain,%s}
 plate: {thickness: 12 mm, grade: A36, width: 260 mm, edge: 45 mm,%s}
 bolts: {diameter: M20, grade: A325M, joint: slip-critical, surface: B, per_line: %d, pitch: %g mm, end: 45 mm, gage: 55 mm}
 `, m.keys(), p.keys(), perLine, pitch)
@@ -70,7 +71,7 @@ bolts: {diameter: M20, grade: A325M, joint: slip-critical, surface: B, per_line:
 	return fmt.Sprintf(`mark: RT-US
 units: us
 load: {required: 20 kip}
-member: {shape: angle, size: L5x5x1/2, grade: A36,%s}
+member: {shape: angle, size: L5x5x1/2, grade: A36, length: 8 ft, far_end: plain,%s}
 plate: {thickness: 1/2 in, grade: A36, width: 12 in, edge: 2 in,%s}
 bolts: {diameter: 3/4 in, grade: A325, joint: slip-critical, surface: B, per_line: %d, pitch: %g in, end: 2 in, gage: 3 in}
 `, m.keys(), p.keys(), perLine, pitch)

@@ -46,6 +46,7 @@ member:
   shape: angle
   size: %s
   grade: A36
+  length: 10 ft
 plate:
   kind: gusset
   thickness: auto
@@ -77,6 +78,7 @@ member:
   shape: double-angle
   size: L100x100x10
   grade: A572-50
+  length: 3 m
 plate:
   kind: gusset
   thickness: auto
@@ -107,6 +109,7 @@ member:
   width: %d in
   thickness: 3/4 in
   grade: A572-50
+  length: 10 ft
 plate:
   kind: splice
   thickness: 1 in
@@ -135,6 +138,7 @@ member:
   width: 200 mm
   thickness: 20 mm
   grade: A572-50
+  length: 3 m
 plate:
   thickness: 20 mm
   grade: A572-50
@@ -163,6 +167,7 @@ member:
   shape: angle
   size: L4x4x1/2
   grade: A36
+  length: 10 ft
 plate:
   thickness: 1/2 in
   grade: A572-50
@@ -187,6 +192,7 @@ member:
   shape: double-angle
   size: L100x75x8
   grade: A572-50
+  length: 3 m
 plate:
   thickness: 12 mm
   grade: A36

@@ -236,9 +236,21 @@ func TestSetFilesCarryOneStamp(t *testing.T) {
 
 // A stamped CAM file still reads as a measured file: the 999 comment that
 // carries the stamp is skipped, and the part re-verifies as accepted
-// (measured = designed).
+// (measured = designed). The member's CAM file is the whole member, and
+// reverify matches one end's holes, so the job's far end is plain here.
 func TestStampedCAMReverifies(t *testing.T) {
-	job, _ := filepath.Abs(filepath.Join(testdata, "jobs", "si-double-angle.yaml"))
+	src, err := os.ReadFile(filepath.Join(testdata, "jobs", "si-double-angle.yaml"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	plain := strings.Replace(string(src), "  length: 3.2 m\n", "  length: 3.2 m\n  far_end: plain\n", 1)
+	if plain == string(src) {
+		t.Fatal("si-double-angle.yaml has no length: 3.2 m line")
+	}
+	job := filepath.Join(t.TempDir(), "si-double-angle.yaml")
+	if err := os.WriteFile(job, []byte(plain), 0o644); err != nil {
+		t.Fatal(err)
+	}
 	out := t.TempDir()
 	if r := gaugeline(t, ".", "sheet", job, "-o", out); r.code != 0 {
 		t.Fatalf("sheet: exit %d %s", r.code, r.stderr)

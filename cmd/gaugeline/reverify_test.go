@@ -5,6 +5,7 @@ import (
 	"math"
 	"os"
 	"path/filepath"
+	"slices"
 	"strings"
 	"testing"
 
@@ -100,7 +101,9 @@ func TestReverifyThroughTheBinary(t *testing.T) {
 // TestReverifyReadsOurCAMFiles feeds the CAM files that `gaugeline sheet`
 // wrote (testdata/golden) back as measured parts, the plate's in its own
 // frame (--part plate), by datum and by best fit: the holes are the
-// design's, so each is accepted.
+// design's, so each is accepted. The member's CAM file is the whole
+// member and reverify matches one end's holes, so the member's are drawn
+// here from the job with a plain far end.
 func TestReverifyReadsOurCAMFiles(t *testing.T) {
 	for _, c := range []struct{ job, cam, part string }{
 		{"si-double-angle.yaml", "TD-21.b-member.cam.dxf", "member"},
@@ -110,11 +113,15 @@ func TestReverifyReadsOurCAMFiles(t *testing.T) {
 		{"us-pipe-rack-brace.yaml", "PR-VB2-plate.cam.dxf", "plate"},
 	} {
 		cam := filepath.Join(testdata, "golden", c.cam)
+		job := filepath.Join(testdata, "jobs", c.job)
+		if c.part == "member" {
+			job, cam = plainFarEndCAM(t, job, c.cam)
+		}
 		if _, err := os.Stat(cam); err != nil {
 			t.Skipf("no %s: %v", cam, err)
 		}
 		for _, align := range []string{"datum", "best-fit"} {
-			r := gaugeline(t, ".", "reverify", filepath.Join(testdata, "jobs", c.job), "--measured", cam, "--part", c.part, "--align", align, "--format", "json")
+			r := gaugeline(t, ".", "reverify", job, "--measured", cam, "--part", c.part, "--align", align, "--format", "json")
 			var doc reverifyDoc
 			if err := json.Unmarshal([]byte(r.stdout), &doc); err != nil {
 				t.Fatalf("%s: exit %d: %v\n%s", c.cam, r.code, err, r.stderr)
@@ -124,6 +131,33 @@ func TestReverifyReadsOurCAMFiles(t *testing.T) {
 			}
 		}
 	}
+}
+
+// plainFarEndCAM writes the job with far_end: plain into a new folder,
+// runs sheet on it and returns that job and its CAM file named cam.
+func plainFarEndCAM(t *testing.T, job, cam string) (string, string) {
+	t.Helper()
+	src, err := os.ReadFile(job)
+	if err != nil {
+		t.Fatal(err)
+	}
+	lines := strings.Split(string(src), "\n")
+	for i, l := range lines {
+		if strings.HasPrefix(l, "  length:") {
+			lines = slices.Insert(lines, i+1, "  far_end: plain")
+			break
+		}
+	}
+	dir := t.TempDir()
+	plain := filepath.Join(dir, filepath.Base(job))
+	if err := os.WriteFile(plain, []byte(strings.Join(lines, "\n")), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	if r := gaugeline(t, ".", "sheet", plain, "-o", dir); r.code != 0 {
+		t.Fatalf("sheet %s: exit %d %s", plain, r.code, r.stderr)
+	}
+	mark := strings.TrimSuffix(cam, "-member.cam.dxf")
+	return plain, filepath.Join(dir, mark, cam)
 }
 
 func abs(v float64) float64 {

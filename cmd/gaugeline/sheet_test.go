@@ -2,6 +2,7 @@ package main
 
 import (
 	"bytes"
+	"fmt"
 	"os"
 	"path/filepath"
 	"slices"
@@ -199,5 +200,44 @@ func TestSheetRefusalNamesWhatFails(t *testing.T) {
 	if r.code != 1 || !strings.Contains(r.stderr, "TE-9 fails edge.min;") ||
 		!strings.Contains(r.stderr, "governing limit state bolts.group (J3.7, J3.11) passes") {
 		t.Errorf("exit %d, stderr %q: want exit 1 naming edge.min as the failure", r.code, r.stderr)
+	}
+}
+
+// The cut sheet and CAM files are of the whole member: without
+// member.length, sheet is bad input (exit 2) that names the field, the
+// file and the line of the member block, and writes nothing; check still
+// runs.
+func TestSheetNeedsMemberLength(t *testing.T) {
+	src, err := os.ReadFile(filepath.Join(testdata, "jobs", "us-pipe-rack-brace.yaml"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	var kept []string
+	memberLine := 0
+	for _, l := range strings.Split(string(src), "\n") {
+		if strings.HasPrefix(l, "  length:") {
+			continue
+		}
+		if l == "member:" {
+			memberLine = len(kept) + 1
+		}
+		kept = append(kept, l)
+	}
+	dir := t.TempDir()
+	job := filepath.Join(dir, "no-length.yaml")
+	if err := os.WriteFile(job, []byte(strings.Join(kept, "\n")), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	out := filepath.Join(dir, "out")
+	r := gaugeline(t, dir, "sheet", job, "-o", out)
+	first := strings.SplitN(r.stderr, "\n", 2)[0]
+	if want := fmt.Sprintf("gaugeline: error: %s:%d: member.length: ", job, memberLine); r.code != 2 || !strings.HasPrefix(first, want) {
+		t.Errorf("exit %d, %q; want 2 and %q…", r.code, first, want)
+	}
+	if _, err := os.Stat(out); !os.IsNotExist(err) {
+		t.Errorf("sheet wrote %s: %v", out, err)
+	}
+	if r := gaugeline(t, dir, "check", job); r.code != 0 {
+		t.Errorf("check without member.length: exit %d %s", r.code, r.stderr)
 	}
 }

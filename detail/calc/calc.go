@@ -38,7 +38,7 @@ func HTML(r *detail.Report) ([]byte, error) {
 	if r == nil || r.Design == nil || len(r.Results) == 0 {
 		panic("calc: a report needs a checked design")
 	}
-	s, err := sheet.NewSheet(r, !r.Pass)
+	s, err := sheet.NewDrawing(r, !r.Pass)
 	if err != nil {
 		return nil, fmt.Errorf("calc: %w", err)
 	}

@@ -11,9 +11,11 @@ import (
 	"testing"
 
 	"golang.org/x/net/html"
+	"gonum.org/v1/gonum/spatial/r2"
 
 	"gaugeline/detail"
 	"gaugeline/detail/jobfile"
+	"gaugeline/detail/sheet"
 	"gaugeline/engine"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
@@ -191,11 +193,7 @@ func check(t *testing.T, path string) *detail.Report {
 	if err != nil {
 		t.Fatal(err)
 	}
-	d, err := detail.Build(j)
-	if err != nil {
-		t.Fatal(err)
-	}
-	r, err := detail.Check(d)
+	r, err := detail.CheckJob(j) // both ends
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -351,15 +349,48 @@ func TestDrawingHolesMatchTheJob(t *testing.T) {
 			c := &r.Design.Conn
 			sys := r.Design.Job.Units
 			job := func(l units.Length) float64 { return sys.ToJob(float64(l), units.DimLength) }
-			want := map[string]map[string][2]float64{"member": {}}
+			// Each view's holes: centre and width, in its part's frame.
+			want := map[string]map[string][3]float64{"member": {}}
+			width := func(s engine.HoleShape) float64 { return job(min(s.Dx, s.Dy)) }
 			for _, h := range c.Holes {
-				want["member"][h.ID] = [2]float64{job(h.X), job(h.Y)}
+				want["member"][h.ID] = [3]float64{job(h.X), job(h.Y), width(h.HoleShape)}
 			}
-			if pl := c.Plate; pl != nil {
-				want["plate"] = map[string][2]float64{}
-				for _, h := range c.Holes {
-					want["plate"][h.ID] = [2]float64{job(pl.FreeEdge) - job(h.X), job(pl.YMax()) - job(h.Y)}
+			// With member.length the member is whole: the far end's holes
+			// F1, F2, … at x' = length − x, x of the far end's own holes
+			// (far_end with bolts) or the job's (mirror), from that end.
+			far := c
+			if r.Far != nil {
+				far = &r.Far.Design.Conn
+			}
+			if L := r.Design.Job.Member.Length; L > 0 {
+				for i, h := range far.Holes {
+					want["member"][fmt.Sprintf("F%d", i+1)] = [3]float64{job(L) - job(h.X), job(h.Y), width(h.HoleShape)}
 				}
+			}
+			plates := map[string]*engine.Connection{"plate": c}
+			if r.Far != nil {
+				plates["far-plate"] = far
+			}
+			for name, pc := range plates {
+				if pl := pc.Plate; pl != nil {
+					want[name] = map[string][3]float64{}
+					for _, h := range pc.Holes {
+						want[name][h.ID] = [3]float64{job(pl.FreeEdge) - job(h.X), job(pl.YMax()) - job(h.Y), width(h.InPlate())}
+					}
+				}
+			}
+			// Where the member view has a break, a hole is drawn where the
+			// view folds its part-frame centre.
+			s, err := sheet.NewDrawing(r, !r.Pass)
+			if err != nil {
+				t.Fatal(err)
+			}
+			drawn := func(part string, w [3]float64) [2]float64 {
+				q := s.Views[0].Fold(r2.Vec{X: w[0], Y: w[1]})
+				if part != "member" {
+					q = r2.Vec{X: w[0], Y: w[1]}
+				}
+				return [2]float64{q.X, q.Y}
 			}
 			svgs := find(doc, func(n *html.Node) bool { return n.Data == "svg" })
 			if len(svgs) != 1 {
@@ -387,11 +418,14 @@ func TestDrawingHolesMatchTheJob(t *testing.T) {
 				ty, _ := strconv.ParseFloat(m[2], 64)
 				holes := find(v, func(n *html.Node) bool { _, ok := attr(n, "data-hole"); return ok })
 				shape := c.Holes[0].HoleShape // each view draws its own part's holes
-				if part == "plate" {
+				switch part {
+				case "plate":
 					shape = c.Holes[0].InPlate()
+				case "far-plate":
+					shape = far.Holes[0].InPlate()
 				}
-				if len(holes) != len(c.Holes) {
-					t.Fatalf("view %s: %d holes drawn, want %d", part, len(holes), len(c.Holes))
+				if len(holes) != len(want[part]) {
+					t.Fatalf("view %s: %d holes drawn, want %d", part, len(holes), len(want[part]))
 				}
 				circles := 0
 				for _, h := range holes {
@@ -409,13 +443,13 @@ func TestDrawingHolesMatchTheJob(t *testing.T) {
 						// (cx, cy) = (x, −y). Its translate puts the
 						// point on the page, which must show it.
 						cx, cy := num(t, h, "cx"), num(t, h, "cy")
-						if x, y := cx, -cy; math.Abs(x-w[0]) > tol || math.Abs(y-w[1]) > tol {
-							t.Errorf("%s %s: circle at (%g, %g), want (%g, %g)", part, id, x, y, w[0], w[1])
+						if x, y, d := cx, -cy, drawn(part, w); math.Abs(x-d[0]) > tol || math.Abs(y-d[1]) > tol {
+							t.Errorf("%s %s: circle at (%g, %g), want (%g, %g)", part, id, x, y, d[0], d[1])
 						}
 						if px, py := cx+tx, cy+ty; px < 0 || px > vw || py < 0 || py > vh {
 							t.Errorf("%s %s: at (%g, %g) on the page, outside the viewBox %g × %g", part, id, px, py, vw, vh)
 						}
-						if d := 2 * num(t, h, "r"); math.Abs(d-job(min(shape.Dx, shape.Dy))) > tol {
+						if d := 2 * num(t, h, "r"); math.Abs(d-w[2]) > tol {
 							t.Errorf("%s %s: diameter %g", part, id, d)
 						}
 					}
@@ -472,6 +506,10 @@ func TestDrawingSlotsMatchTheJob(t *testing.T) {
 		c := &r.Design.Conn
 		sys := r.Design.Job.Units
 		job := func(l units.Length) float64 { return sys.ToJob(float64(l), units.DimLength) }
+		s, err := sheet.NewDrawing(r, !r.Pass)
+		if err != nil {
+			t.Fatal(err)
+		}
 		for _, n := range find(doc, func(n *html.Node) bool { c, _ := attr(n, "class"); return n.Data == "path" && c == "hole slot" }) {
 			seen++
 			part, _ := attr(n, "data-part")
@@ -487,6 +525,10 @@ func TestDrawingSlotsMatchTheJob(t *testing.T) {
 			dx, dy := job(shape.Dx), job(shape.Dy)
 			rad := min(dx, dy) / 2
 			cx, cy := num(t, n, "data-x"), num(t, n, "data-y")
+			if part == "member" { // drawn where the view folds it (a break)
+				q := s.Views[0].Fold(r2.Vec{X: cx, Y: cy})
+				cx, cy = q.X, q.Y
+			}
 			d, _ := attr(n, "d")
 			steps := slotPath(t, d)
 			if len(steps) != 5 || steps[0].cmd != 'M' {

@@ -34,6 +34,9 @@ type Job struct {
 	Holes     []HoleCentre
 	Stock     Stock
 	Tolerance Tolerance
+	// Project is the title block's project data (project:), "" where not
+	// given.
+	Project Project
 
 	// SHA256 is the hex SHA-256 of the job file's bytes.
 	SHA256 string
@@ -90,6 +93,9 @@ type MemberSpec struct {
 	Eccentricity engine.EndEccentricity
 	// Hole is the member's own hole type (member.hole, member.slot).
 	Hole PlyHole
+	// FarEnd is what the member's far end (x = Length) carries
+	// (member.far_end); the zero value is the default, a mirror.
+	FarEnd FarEndSpec
 }
 
 // PlateSpec is the gusset or splice plate the member bolts to.

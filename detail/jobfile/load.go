@@ -94,7 +94,7 @@ func yamlErr(file string, err error) *InputError {
 // starts with '.' (a hidden file) or '-' (read as an option by shell tools).
 var markPattern = regexp.MustCompile(`^[A-Za-z0-9_][A-Za-z0-9._-]{0,39}$`)
 
-var rootKeys = []string{"mark", "units", "standard", "method", "quantity", "load", "member", "plate", "bolts", "holes", "stock", "tolerance"}
+var rootKeys = []string{"mark", "units", "standard", "method", "quantity", "load", "member", "plate", "bolts", "holes", "stock", "tolerance", "project"}
 
 // parseRoot reads the job's root mapping: its scalars, then its blocks.
 func (p *parser) parseRoot(root *yaml.Node) error {
@@ -193,7 +193,13 @@ func (p *parser) parseBlocks(b *block) error {
 	if err := p.parseStock(b.vals["stock"]); err != nil {
 		return err
 	}
-	return p.parseTolerance(b.vals["tolerance"])
+	if err := p.parseTolerance(b.vals["tolerance"]); err != nil {
+		return err
+	}
+	if err := p.parseProject(b.vals["project"]); err != nil {
+		return err
+	}
+	return p.parseFarEnd()
 }
 
 var serviceKeys = []string{"dead", "live", "roof_live", "snow", "rain", "wind", "seismic"}

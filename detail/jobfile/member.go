@@ -10,7 +10,7 @@ import (
 	"gaugeline/rules/units"
 )
 
-var memberKeys = []string{"shape", "size", "legs", "thickness", "width", "grade", "fy", "fu", "length", "area", "xbar", "rmin", "gap", "eccentricity", "hole", "slot"}
+var memberKeys = []string{"shape", "size", "legs", "thickness", "width", "grade", "fy", "fu", "length", "area", "xbar", "rmin", "gap", "eccentricity", "hole", "slot", "far_end"}
 
 func parseShape(s string) (engine.Shape, error) {
 	for _, sh := range engine.Shapes() {
@@ -101,8 +101,10 @@ func (p *parser) parseMember(n *yaml.Node) error {
 			return err
 		}
 	}
-	m.Hole, err = p.parsePlyHole(b)
-	return err
+	if m.Hole, err = p.parsePlyHole(b); err != nil {
+		return err
+	}
+	return p.parseFarEndKind(b.vals["far_end"])
 }
 
 // parsePlyHole reads a ply's own hole and slot keys of block b.

@@ -89,6 +89,7 @@ type walk struct {
 	p      Painter
 	marker HoleMarker // p, when it wants to know its holes; else nil
 	at     r2.Vec     // origin of the current view on the drawing
+	broken *View      // the current view where it has a break (member.go); else nil
 	lo, hi r2.Vec
 	empty  bool
 	pts    []r2.Vec // reused for the vertices handed to ClosedPolyline
@@ -102,6 +103,10 @@ func newWalk(p Painter) *walk {
 // view draws v with its part's frame at `at`, dimensions for text height h.
 func (w *walk) view(v *View, at r2.Vec, h float64) {
 	w.at = at
+	if v.Break != nil {
+		w.broken = v
+		defer func() { w.broken = nil }()
+	}
 	w.part(&v.Part)
 	for _, l := range v.Lines {
 		w.line(l)
@@ -123,8 +128,23 @@ func (w *walk) grow(q r2.Vec) {
 	w.hi = r2.Vec{X: max(w.hi.X, q.X), Y: max(w.hi.Y, q.Y)}
 }
 
+// put is where a point of the current view's frame is drawn.
+func (w *walk) put(q r2.Vec) r2.Vec {
+	if w.broken != nil {
+		q = w.broken.Fold(q)
+	}
+	return r2.Add(q, w.at)
+}
+
 func (w *walk) line(s Segment) {
-	a, b := r2.Add(s.A, w.at), r2.Add(s.B, w.at)
+	if v := w.broken; v != nil {
+		if l, r, ok := splitAtBreak(s, v.Break); ok {
+			w.line(l)
+			w.line(r)
+			return
+		}
+	}
+	a, b := w.put(s.A), w.put(s.B)
 	w.p.Line(a, b, s.Layer)
 	w.grow(a)
 	w.grow(b)
@@ -135,19 +155,31 @@ func (w *walk) line(s Segment) {
 func (w *walk) polyline(pts []r2.Vec, bulges []float64, l Layer, lo, hi r2.Vec) {
 	w.pts = w.pts[:0]
 	for _, q := range pts {
-		w.pts = append(w.pts, r2.Add(q, w.at))
+		w.pts = append(w.pts, w.put(q))
 	}
 	w.p.ClosedPolyline(w.pts, bulges, l)
-	w.grow(r2.Add(lo, w.at))
-	w.grow(r2.Add(hi, w.at))
+	w.grow(w.put(lo))
+	w.grow(w.put(hi))
 }
 
 func (w *walk) part(p *Part) {
 	lo, hi := corners(p.Contour)
-	w.polyline(p.Contour, nil, LayerContour, lo, hi)
+	if v := w.broken; v != nil {
+		// A broken view draws the contour as its two pieces, already
+		// folded: the walk draws them as they are.
+		left, right := breakLines(lo, hi, v.Break, v.Fold)
+		w.broken = nil
+		for _, piece := range [][]r2.Vec{left, right} {
+			plo, phi := corners(piece)
+			w.polyline(piece, nil, LayerContour, plo, phi)
+		}
+		w.broken = v
+	} else {
+		w.polyline(p.Contour, nil, LayerContour, lo, hi)
+	}
 	for _, h := range p.Holes {
 		if w.marker != nil {
-			w.marker.BeginHole(p.Name, h, r2.Add(h.Centre, w.at))
+			w.marker.BeginHole(p.Name, h, w.put(h.Centre))
 		}
 		w.hole(h)
 	}
@@ -157,7 +189,7 @@ func (w *walk) part(p *Part) {
 // two straight sides and two half circles.
 func (w *walk) hole(h SheetHole) {
 	if h.Round() {
-		c := r2.Add(h.Centre, w.at)
+		c := w.put(h.Centre)
 		r := h.Diameter() / 2
 		w.p.Circle(c, r, LayerHoles)
 		w.grow(r2.Vec{X: c.X - r, Y: c.Y - r})
@@ -170,7 +202,7 @@ func (w *walk) hole(h SheetHole) {
 }
 
 func (w *walk) text(t Text) {
-	t.At = r2.Add(t.At, w.at)
+	t.At = w.put(t.At)
 	w.p.Text(t)
 	lo, hi := t.Box()
 	w.grow(lo)
@@ -180,6 +212,16 @@ func (w *walk) text(t Text) {
 // dimension draws a dimension as Dimension.Graphics lays it out for text
 // height h, in its order.
 func (w *walk) dimension(d Dimension, h float64) {
+	if v := w.broken; v != nil {
+		// Laid out where its points are drawn; its text, the part's
+		// distance, stays true across a break.
+		d.A, d.B = v.Fold(d.A), v.Fold(d.B)
+		if d.Axis == AlongY {
+			d.Offset = v.Fold(r2.Vec{X: d.Offset}).X
+		}
+		w.broken = nil
+		defer func() { w.broken = v }()
+	}
 	g := d.Graphics(h)
 	for _, l := range g.Lines {
 		w.line(l)
@@ -195,6 +237,20 @@ func (w *walk) dimension(d Dimension, h float64) {
 	for _, t := range g.Texts {
 		w.text(t)
 	}
+}
+
+// splitAtBreak splits a segment that runs across the break b into the
+// piece before the break and the piece after it.
+func splitAtBreak(s Segment, b *Break) (Segment, Segment, bool) {
+	a, c := s.A, s.B
+	if a.X > c.X {
+		a, c = c, a
+	}
+	if a.X >= b.X0 || c.X <= b.X1 {
+		return s, s, false
+	}
+	at := func(x float64) r2.Vec { return r2.Vec{X: x, Y: a.Y + (c.Y-a.Y)*(x-a.X)/(c.X-a.X)} }
+	return Segment{A: a, B: at(b.X0), Layer: s.Layer}, Segment{A: at(b.X1), B: c, Layer: s.Layer}, true
 }
 
 // corners returns the corners of the box around pts (at least one).

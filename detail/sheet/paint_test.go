@@ -110,10 +110,19 @@ func TestSheetPaint(t *testing.T) {
 		if len(r.layers) != 1 || !slices.Equal(r.layers[0], Layers()) {
 			t.Fatalf("%s: layers %v, want %v once", path, r.layers, Layers())
 		}
-		var wantLines, wantTexts, wantArrows int
+		var wantLines, wantTexts, wantArrows, wantContours int
 		var holes []SheetHole // in the sheet's frame
 		for _, v := range s.Views {
 			wantLines += len(v.Lines)
+			wantContours++
+			if v.Break != nil { // two pieces; a line across the break drawn as two
+				wantContours++
+				for _, l := range v.Lines {
+					if _, _, ok := splitAtBreak(l, v.Break); ok {
+						wantLines++
+					}
+				}
+			}
 			wantTexts += len(v.Texts)
 			for _, d := range v.Dims {
 				g := d.Graphics(s.TextHeight)
@@ -122,7 +131,7 @@ func TestSheetPaint(t *testing.T) {
 				wantTexts += len(g.Texts)
 			}
 			for _, h := range v.Part.Holes {
-				h.Centre = r2.Add(h.Centre, v.Origin)
+				h.Centre = r2.Add(v.Fold(h.Centre), v.Origin)
 				holes = append(holes, h)
 			}
 		}
@@ -136,9 +145,9 @@ func TestSheetPaint(t *testing.T) {
 				drawnHoles = append(drawnHoles, it)
 			}
 		}
-		if count["line"] != wantLines || count["text"] != wantTexts || count["polyline"] != len(s.Views)+wantArrows+len(holes)-count["circle"] {
+		if count["line"] != wantLines || count["text"] != wantTexts || count["polyline"] != wantContours+wantArrows+len(holes)-count["circle"] {
 			t.Errorf("%s: drew %v; want %d lines, %d texts, %d contours, %d arrows and %d holes", path, count,
-				wantLines, wantTexts, len(s.Views), wantArrows, len(holes))
+				wantLines, wantTexts, wantContours, wantArrows, len(holes))
 		}
 		if len(drawnHoles) != len(holes) {
 			t.Fatalf("%s: %d items on the holes layer, %d holes", path, len(drawnHoles), len(holes))
@@ -315,7 +324,7 @@ func TestHoleMarker(t *testing.T) {
 			moved.Origin = at
 			ds = append(ds, drawing{"view " + v.Part.Name, func(m *marker) { s.PaintView(m, i, at) }, []View{moved}})
 			alone := v
-			alone.Origin = r2.Vec{}
+			alone.Origin, alone.Break = r2.Vec{}, nil // a part alone is whole
 			ds = append(ds, drawing{"part " + v.Part.Name, func(m *marker) { v.Part.Paint(m) }, []View{alone}})
 		}
 		for _, d := range ds {
@@ -324,7 +333,7 @@ func TestHoleMarker(t *testing.T) {
 			var want []begun
 			for _, v := range d.views {
 				for _, h := range v.Part.Holes {
-					want = append(want, begun{part: v.Part.Name, h: h, at: r2.Add(h.Centre, v.Origin)})
+					want = append(want, begun{part: v.Part.Name, h: h, at: r2.Add(v.Fold(h.Centre), v.Origin)})
 				}
 			}
 			if len(m.begun) != len(want) {

@@ -224,6 +224,9 @@ type View struct {
 	Lines  []Segment
 	Dims   []Dimension
 	Texts  []Text
+	// Break, when not nil, leaves a stretch of the part out of the
+	// drawing (member.go); nil draws the part whole.
+	Break *Break
 }
 
 // Sheet is the cut sheet of one connection mark.
@@ -253,10 +256,25 @@ const Stamp = "NOT FOR FABRICATION"
 // asked for not for fabrication.
 var ErrRefused = errors.New("detail: the connection fails; a sheet for fabrication is refused")
 
-// NewSheet lays out the cut sheet of a checked design. A connection that
-// fails is refused (ErrRefused) unless notForFabrication, which stamps
-// every view.
+// NewSheet lays out the cut sheet of a checked design: the whole member
+// (member.length is required: an *InputError without it) and the plate. A
+// connection that fails is refused (ErrRefused) unless notForFabrication,
+// which stamps every view.
 func NewSheet(r *detail.Report, notForFabrication bool) (*Sheet, error) {
+	if err := RequireLength(r.Design.Job); err != nil {
+		return nil, err
+	}
+	return newSheet(r, notForFabrication)
+}
+
+// NewDrawing is NewSheet for a drawing that is not the shop's (the
+// calculation report's): without member.length its member view is the
+// connection end alone, as far as the holes and ViewBeyond, broken off.
+func NewDrawing(r *detail.Report, notForFabrication bool) (*Sheet, error) {
+	return newSheet(r, notForFabrication)
+}
+
+func newSheet(r *detail.Report, notForFabrication bool) (*Sheet, error) {
 	if !r.Pass && !notForFabrication {
 		return nil, ErrRefused
 	}
@@ -266,10 +284,13 @@ func NewSheet(r *detail.Report, notForFabrication bool) (*Sheet, error) {
 		Stamp: d.Job.Stamp}
 	l := sheetLayout{sys: sys, h: s.TextHeight}
 
-	member := l.memberView(d)
+	member := l.member(r)
 	views := []View{member}
 	if d.Conn.Plate != nil {
 		views = append(views, l.plateView(d))
+	}
+	if far := l.farPlateView(r); far != nil {
+		views = append(views, *far)
 	}
 	// Side by side, bottoms of the parts level, a gap of 8 text heights
 	// between one view's annotation and the next's.
@@ -281,6 +302,7 @@ func NewSheet(r *detail.Report, notForFabrication bool) (*Sheet, error) {
 			// Above the view's title, clear of every hole and dimension.
 			_, top := v.extents()
 			_, phi := v.Part.Bounds()
+			phi = v.Fold(phi)
 			v.Texts = append(v.Texts, Text{At: r2.Vec{X: phi.X / 2, Y: top.Y + s.TextHeight}, Height: 2 * s.TextHeight,
 				Align: AlignCenterBottom, Value: Stamp, Layer: LayerNotes})
 		}
@@ -291,7 +313,7 @@ func NewSheet(r *detail.Report, notForFabrication bool) (*Sheet, error) {
 	}
 	s.Views = views
 	top := bottom - 4*s.TextHeight
-	top = l.schedule(s, d, top)
+	top = l.schedule(s, r, top)
 	l.titleBlock(s, r, top-3*s.TextHeight)
 	for i := range s.Texts {
 		s.Texts[i].Value = ascii(s.Texts[i].Value)
@@ -320,7 +342,9 @@ func textHeight(sys units.System) float64 {
 // extents returns the corners of everything in the view, in its frame.
 func (v *View) extents() (lo, hi r2.Vec) {
 	lo, hi = v.Part.Bounds()
+	lo, hi = v.Fold(lo), v.Fold(hi)
 	grow := func(p r2.Vec) {
+		p = v.Fold(p)
 		lo = r2.Vec{X: min(lo.X, p.X), Y: min(lo.Y, p.Y)}
 		hi = r2.Vec{X: max(hi.X, p.X), Y: max(hi.Y, p.Y)}
 	}
@@ -739,7 +763,8 @@ func (l sheetLayout) holeText(h engine.HoleShape) string {
 
 // schedule writes the hole schedule from the given top down and returns
 // the y below it.
-func (l sheetLayout) schedule(s *Sheet, d *detail.Design, top float64) float64 {
+func (l sheetLayout) schedule(s *Sheet, r *detail.Report, top float64) float64 {
+	d := r.Design
 	h := l.h
 	c := &d.Conn
 	hole, plate := c.Holes[0].HoleShape, c.Holes[0].InPlate() // each ply's holes are all alike in a design
@@ -755,9 +780,11 @@ func (l sheetLayout) schedule(s *Sheet, d *detail.Design, top float64) float64 {
 		{"PART", "COUNT", "HOLE", "TYPE", "MADE BY"},
 		{part, fmt.Sprint(len(c.Holes)), l.holeText(hole), strings.ToUpper(hole.Type.String()), made(c.Member.T)},
 	}
+	rows = append(rows[:1], l.memberScheduleRows(s, r, rows[1])...)
 	if c.Plate != nil {
 		rows = append(rows, []string{"PLATE", fmt.Sprint(len(c.Holes)), l.holeText(plate), strings.ToUpper(plate.Type.String()), made(c.Plate.T)})
 	}
+	rows = append(rows, l.farPlateRows(r)...)
 	s.Schedule = rows
 	// Each column as wide as its widest entry, plus two text heights.
 	cols := make([]float64, len(rows[0]))
@@ -788,13 +815,16 @@ func (l sheetLayout) titleBlock(s *Sheet, r *detail.Report, top float64) {
 	d := r.Design
 	c := &d.Conn
 	j := d.Job
-	g := r.GoverningResult()
+	g := r.GoverningEnd().GoverningResult()
 	verdict := "PASS"
 	switch {
 	case !r.Pass && g.Pass: // a detailing rule fails, not the governing limit state
 		verdict = "FAIL: " + strings.Join(r.Failing(), ", ")
 	case !r.Pass:
 		verdict = "FAIL"
+	}
+	if r.Far != nil {
+		verdict += ", " + strings.ToUpper(r.GoverningEndName()) + " END GOVERNS"
 	}
 	unitName := "INCHES"
 	if l.sys == units.SI {
@@ -804,20 +834,24 @@ func (l sheetLayout) titleBlock(s *Sheet, r *detail.Report, top float64) {
 	if c.Member.Pieces > 1 {
 		pieces = fmt.Sprintf(" (%d pieces each)", c.Member.Pieces)
 	}
-	fields := [][2]string{
+	fields := append(projectFields(s, j), [][2]string{
 		{"MARK", j.Mark},
 		{"QUANTITY", fmt.Sprintf("%d%s", j.Quantity, pieces)},
 		{"MEMBER", d.Info.Designation},
 		{"GRADE", "member " + d.Info.Grade},
 		{"THICKNESS", "member " + l.limit(l.len(c.Member.T))},
-	}
+	}...)
+	at := len(fields) - 5 // the member's rows: MARK, QUANTITY, MEMBER, GRADE, THICKNESS
 	if c.Plate != nil {
-		fields[3][1] += ", plate " + d.Info.PlateGrade
-		fields[4][1] += ", plate " + l.limit(l.len(c.Plate.T))
+		fields[at+3][1] += ", plate " + d.Info.PlateGrade
+		fields[at+4][1] += ", plate " + l.limit(l.len(c.Plate.T))
 	}
 	fields = append(fields,
-		[2]string{"BOLTS", fmt.Sprintf("(%d) %s %s, threads %s, %s joint, %s", len(c.Holes),
+		[2]string{"BOLTS", fmt.Sprintf("(%d%s) %s %s, threads %s, %s joint, %s", len(c.Holes), boltsEnd(r),
 			detail.BoltSize(c.Bolt.D, l.sys), c.Bolt.Grade.Name, c.Bolt.Threads, c.Bolt.Joint, detail.HoleKinds(c))},
+	)
+	fields = append(fields, farEndFields(r)...)
+	fields = append(fields,
 		[2]string{"STANDARD", fmt.Sprintf("AISC %s %s", strings.TrimPrefix(c.Edition.Name(), "aisc"), strings.ToUpper(c.Method.String()))},
 		[2]string{"GOVERNING", fmt.Sprintf("%s (%s) ratio %s - %s", g.ID, g.Clause, detail.RatioText(g.Ratio), verdict)},
 		[2]string{"UNITS", unitName},

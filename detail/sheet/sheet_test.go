@@ -35,11 +35,7 @@ func checkedJob(t *testing.T, path string) *detail.Report {
 	if err != nil {
 		t.Fatal(err)
 	}
-	d, err := detail.Build(j)
-	if err != nil {
-		t.Fatal(err)
-	}
-	r, err := detail.Check(d)
+	r, err := detail.CheckJob(j) // both ends
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -76,13 +72,23 @@ func TestSheetHolesAreTheJobs(t *testing.T) {
 				t.Fatalf("%d views, want %d", len(s.Views), views)
 			}
 			for vi, v := range s.Views {
-				if len(v.Part.Holes) != len(c.Holes) {
-					t.Fatalf("%s: %d holes, want %d", v.Part.Name, len(v.Part.Holes), len(c.Holes))
+				// The member is whole: the job's holes, then the far end's,
+				// the same mirrored about mid-length (x' = length − x).
+				n := len(c.Holes)
+				if vi == 0 {
+					n *= 2
 				}
-				for i, h := range c.Holes {
+				if len(v.Part.Holes) != n {
+					t.Fatalf("%s: %d holes, want %d", v.Part.Name, len(v.Part.Holes), n)
+				}
+				for i := range n {
+					h := c.Holes[i%len(c.Holes)]
 					want := r2.Vec{X: in(h.X), Y: in(h.Y)}
-					if vi == 1 {
+					switch {
+					case vi == 1:
 						want = r2.Vec{X: in(c.Plate.FreeEdge) - in(h.X), Y: in(c.Plate.YMax()) - in(h.Y)}
+					case i >= len(c.Holes):
+						want.X = in(r.Design.Job.Member.Length) - in(h.X)
 					}
 					got := v.Part.Holes[i]
 					if !near(got.Centre.X, want.X) || !near(got.Centre.Y, want.Y) {
@@ -97,16 +103,21 @@ func TestSheetHolesAreTheJobs(t *testing.T) {
 	}
 }
 
-// HB-7 (L4x4x1/2, (4) 3/4-in bolts at 3 in, end 1-1/2 in, gage 2-1/2 in;
-// plate 12 in wide, edge 1-1/2 in): numbers from the job file. The member
-// view runs past the last bolt by the longer of the pattern (9 in) and
-// 6 in: 10-1/2 + 9 = 19-1/2; the plate from its free edge through the
-// pattern (1-1/2 + 9) and 9 in on: 19-1/2.
+// HB-7 (L4x4x1/2 9'-6" long, (4) 3/4-in bolts at 3 in, end 1-1/2 in, gage
+// 2-1/2 in; plate 12 in wide, edge 1-1/2 in): numbers from the job file.
+// The member is whole: 114 in by the 4-in leg; its view leaves out the
+// stretch from 19-1/2 in (the last bolt, 10-1/2, and the longer of the
+// pattern, 9 in, and 6 in) to 114 − 19-1/2 = 94-1/2 in, the far end's
+// mirror. The plate runs from its free edge through the pattern
+// (1-1/2 + 9) and 9 in on: 19-1/2.
 func TestSheetOutlines(t *testing.T) {
 	_, s := sheetOf(t, "../../testdata/jobs/us-single-angle.yaml")
 	member, plate := s.Views[0].Part, s.Views[1].Part
-	if want := []r2.Vec{{X: 0, Y: 0}, {X: 19.5, Y: 0}, {X: 19.5, Y: 4}, {X: 0, Y: 4}}; !slices.Equal(member.Contour, want) {
+	if want := []r2.Vec{{X: 0, Y: 0}, {X: 114, Y: 0}, {X: 114, Y: 4}, {X: 0, Y: 4}}; !slices.Equal(member.Contour, want) {
 		t.Errorf("member contour %v, want %v", member.Contour, want)
+	}
+	if b := s.Views[0].Break; b == nil || !near(b.X0, 19.5) || !near(b.X1, 94.5) {
+		t.Errorf("member break %+v, want 19.5 to 94.5", b)
 	}
 	if want := []r2.Vec{{X: 0, Y: 0}, {X: 19.5, Y: 0}, {X: 19.5, Y: 12}, {X: 0, Y: 12}}; !slices.Equal(plate.Contour, want) {
 		t.Errorf("plate contour %v, want %v", plate.Contour, want)
@@ -190,20 +201,21 @@ func TestSheetDimensions(t *testing.T) {
 		chainX     []string
 		baselinesX []string
 		chainY     []string
+		length     string // the member's overall dimension: member.length as the job gives it
 	}{
 		// HB-7: end 1-1/2, pitch 3 (× 3), gage 2-1/2 on a 4-in leg.
 		{"../../testdata/jobs/us-single-angle.yaml", 0, []string{`1 1/2"`, `3"`, `3"`, `3"`},
-			[]string{`4 1/2"`, `7 1/2"`, `10 1/2"`}, []string{`2 1/2"`, `1 1/2"`}},
+			[]string{`4 1/2"`, `7 1/2"`, `10 1/2"`}, []string{`2 1/2"`, `1 1/2"`}, `9'-6"`},
 		// HB-7 plate: edge 1-1/2 from the free edge; 12 in wide, bolts mid-width;
 		// overall 1'-7 1/2" (19.5 in).
 		{"../../testdata/jobs/us-single-angle.yaml", 1, []string{`1 1/2"`, `3"`, `3"`, `3"`},
-			[]string{`4 1/2"`, `7 1/2"`, `10 1/2"`, `1'-7 1/2"`}, []string{`6"`, `6"`}},
+			[]string{`4 1/2"`, `7 1/2"`, `10 1/2"`, `1'-7 1/2"`}, []string{`6"`, `6"`}, ""},
 		// KB-40: end 40, pitch 65, gage 65 on the 120 leg.
 		{"../../testdata/jobs/si-slotted.yaml", 0, []string{"40", "65", "65", "65"},
-			[]string{"105", "170", "235"}, []string{"65", "55"}},
+			[]string{"105", "170", "235"}, []string{"65", "55"}, "3600"},
 		// FT_03: end 2, pitch 3, stagger 1-1/2; gages 2 and 2 + 4 on an 8-in flat.
 		{"../../testdata/jobs/us-staggered-flat.yaml", 0, []string{`2"`, `1 1/2"`, `1 1/2"`, `1 1/2"`, `1 1/2"`, `1 1/2"`},
-			[]string{`3 1/2"`, `5"`, `6 1/2"`, `8"`, `9 1/2"`}, []string{`2"`, `4"`, `2"`}},
+			[]string{`3 1/2"`, `5"`, `6 1/2"`, `8"`, `9 1/2"`}, []string{`2"`, `4"`, `2"`}, `12'-0"`},
 	} {
 		_, s := sheetOf(t, tt.path)
 		v := s.Views[tt.view]
@@ -224,6 +236,19 @@ func TestSheetDimensions(t *testing.T) {
 		}
 		gotX := texts(xs)
 		wantX := append(slices.Clone(tt.chainX), tt.baselinesX...)
+		member := tt.view == 0
+		var length float64
+		if member {
+			// The whole member: the near end's chain, the far end's (its
+			// mirror, from the far cut end), each end's baselines in turn,
+			// then the overall length (the job's member.length).
+			length = s.Views[0].Part.Contour[1].X
+			wantX = append(slices.Clone(tt.chainX), tt.chainX...)
+			for _, b := range tt.baselinesX {
+				wantX = append(wantX, b, b)
+			}
+			wantX = append(wantX, tt.length)
+		}
 		if !slices.Equal(gotX, wantX) {
 			t.Errorf("%s view %d: along x %q, want %q", tt.path, tt.view, gotX, wantX)
 		}
@@ -239,7 +264,30 @@ func TestSheetDimensions(t *testing.T) {
 			}
 			at = d.B.X
 		}
-		for _, d := range xs[len(tt.chainX):] {
+		rest := xs[len(tt.chainX):]
+		if member {
+			at = length // the far end's chain, from the far cut end back
+			for _, d := range rest[:len(tt.chainX)] {
+				if !near(d.B.X, at) {
+					t.Errorf("%s: far chain breaks at %v (want %v)", tt.path, d.B.X, at)
+				}
+				at = d.A.X
+			}
+			rest = rest[len(tt.chainX):]
+			for i, d := range rest[:len(rest)-1] {
+				if i%2 == 1 && !near(d.B.X, length) {
+					t.Errorf("%s: far baseline to %v, want the far cut end", tt.path, d.B.X)
+				}
+				if i%2 == 0 && d.A.X != 0 {
+					t.Errorf("%s: baseline from %v, want the datum", tt.path, d.A.X)
+				}
+			}
+			if d := rest[len(rest)-1]; d.A.X != 0 || !near(d.B.X, length) {
+				t.Errorf("%s: overall %v to %v, want 0 to %v", tt.path, d.A.X, d.B.X, length)
+			}
+			continue
+		}
+		for _, d := range rest {
 			if d.A.X != 0 {
 				t.Errorf("%s: baseline from %v, want the datum", tt.path, d.A.X)
 			}
@@ -273,7 +321,7 @@ func TestSheetTitleBlock(t *testing.T) {
 		all = append(all, x.Value)
 	}
 	joined := strings.Join(all, "\n")
-	for _, want := range []string{"TD-21.b", "2L100x75x8", "A572-50", "A36", "(3) M20 A325M", "AISC 360-16 ASD",
+	for _, want := range []string{"TD-21.b", "2L100x75x8", "A572-50", "A36", "(3 EACH END) M20 A325M", "AISC 360-16 ASD",
 		"MILLIMETRES", "MEMBER (EACH OF 2)", "22 DIA", "PUNCH", Stamp, "engineer of record"} {
 		if !strings.Contains(joined, want) {
 			t.Errorf("sheet text lacks %q", want)
@@ -283,10 +331,10 @@ func TestSheetTitleBlock(t *testing.T) {
 	for _, f := range s.Title {
 		labels = append(labels, f[0])
 	}
-	if want := []string{"MARK", "QUANTITY", "MEMBER", "GRADE", "THICKNESS", "BOLTS", "STANDARD", "GOVERNING", "UNITS", "STATUS"}; !slices.Equal(labels, want) {
+	if want := []string{"SCALE", "MARK", "QUANTITY", "MEMBER", "GRADE", "THICKNESS", "BOLTS", "STANDARD", "GOVERNING", "UNITS", "STATUS"}; !slices.Equal(labels, want) {
 		t.Errorf("title block %q, want %q", labels, want)
 	}
-	if got := s.Title[1][1]; got != "1 (2 pieces each)" {
+	if got := s.Title[2][1]; got != "1 (2 pieces each)" {
 		t.Errorf("quantity %q", got)
 	}
 	if len(s.Schedule) != 3 || s.Schedule[1][0] != "MEMBER (EACH OF 2)" || s.Schedule[2][4] != `PUNCH (t 12, punch limit 23)` {
