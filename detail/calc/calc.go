@@ -114,6 +114,7 @@ type limitSection struct {
 	PerBoltTitle   string
 	Pass, Governs  bool
 	Ratio          string
+	End            string // "far" for the far end's sections; "" for the near end
 }
 
 type summaryRow struct {
@@ -142,6 +143,21 @@ type page struct {
 	Findings             table
 	DemandSymbol         string
 	AvailableSymbol      string
+	// Far is the far end's part of the report where it has a connection of
+	// its own (member.far_end with plate and bolts); nil else, and the
+	// page reads as before.
+	Far *endPart
+}
+
+// endPart is one end's own sections: its plate and bolts, its holes in
+// its own frame (x from its cut end), its limit states and rules.
+type endPart struct {
+	Governs  bool // this end governs the member
+	Job      []row
+	Holes    table
+	Summary  []summaryRow
+	Limits   []limitSection
+	Findings table
 }
 
 func newPage(r *detail.Report, s *sheet.Sheet) page {
@@ -167,35 +183,78 @@ func newPage(r *detail.Report, s *sheet.Sheet) page {
 	p.Job, p.Load = jobRows(d, f)
 	p.Holes = holeTable(c, f)
 	p.cutSheet(r, s)
-	p.limits(r, f)
-	p.findings(r, f)
+	p.Limits, p.Summary = limits(r, f, "5.", "")
+	p.Findings = findings(r, f)
+	if r.Far != nil {
+		p.Far = farPart(r, f)
+		for i := range p.Job { // the rows above are the near end's
+			if l := p.Job[i].Label; l == "Plate" || l == "Bolts" {
+				p.Job[i].Label = l + ", near end"
+			}
+		}
+	}
 	return p
 }
 
+// farPart is the far end's sections, numbered 6 and anchored "far-".
+func farPart(r *detail.Report, f fmtr) *endPart {
+	far := r.Far
+	e := &endPart{Governs: r.GoverningEnd() == far, Holes: holeTable(&far.Design.Conn, f), Findings: findings(far, f)}
+	summary := map[string]string{}
+	for _, rw := range far.Design.Summary() {
+		summary[rw[0]] = rw[1]
+	}
+	e.Job = []row{{"Plate", summary["plate"]}, {"Bolts", summary["bolts"]}}
+	if far.Design.Conn.Plate == nil {
+		e.Job[0].Value = "none: the member's far end alone is checked"
+	}
+	e.Limits, e.Summary = limits(far, f, "6.", "far-")
+	for i := range e.Limits {
+		e.Limits[i].End = "far"
+	}
+	return e
+}
+
 // verdict sets the verdict, the governing limit state and every failing
-// limit state and detailing rule.
+// limit state and detailing rule; with a far end of its own, the
+// governing end's limit state and both ends' failures, the far end's
+// marked so.
 func (p *page) verdict(r *detail.Report, f fmtr) {
-	g := r.GoverningResult()
+	g, where := r.GoverningEnd().GoverningResult(), ""
 	p.Verdict = "PASSES"
 	if !r.Pass {
 		p.Verdict = "FAILS"
 	}
-	p.Governing = fmt.Sprintf("Governing limit state: %s (%s), %s / %s = %s / %s = %s",
-		g.ID, g.Clause, p.DemandSymbol, p.AvailableSymbol, f.force(g.Demand), f.force(g.Available), ratioText(g.Ratio))
+	if r.Far != nil {
+		where = " at the " + r.GoverningEndName() + " end"
+	}
+	p.Governing = fmt.Sprintf("Governing limit state%s: %s (%s), %s / %s = %s / %s = %s",
+		where, g.ID, g.Clause, p.DemandSymbol, p.AvailableSymbol, f.force(g.Demand), f.force(g.Available), ratioText(g.Ratio))
+	p.Failures = failures(r, f, "")
+	if r.Far != nil {
+		p.Failures = append(p.Failures, failures(r.Far, f, "far end: ")...)
+	}
+}
+
+// failures lists one end's failing limit states and detailing rules, each
+// line after prefix.
+func failures(r *detail.Report, f fmtr, prefix string) []string {
+	var out []string
 	for _, x := range r.Results {
 		if !x.Pass {
-			p.Failures = append(p.Failures, fmt.Sprintf("%s (%s): ratio %s", x.ID, x.Clause, ratioText(x.Ratio)))
+			out = append(out, fmt.Sprintf("%s%s (%s): ratio %s", prefix, x.ID, x.Clause, ratioText(x.Ratio)))
 		}
 	}
 	for _, fd := range r.Findings {
 		if !fd.Pass && !fd.Advisory {
-			line := fmt.Sprintf("%s (%s): %s", fd.ID, fd.Clause, fd.Where)
+			line := fmt.Sprintf("%s%s (%s): %s", prefix, fd.ID, fd.Clause, fd.Where)
 			if fd.Dim != units.Dimensionless || fd.Measured != 0 || fd.Limit != 0 {
 				line += fmt.Sprintf(", measured %s, limit %s", f.people(fd.Measured, fd.Dim), f.people(fd.Limit, fd.Dim))
 			}
-			p.Failures = append(p.Failures, line)
+			out = append(out, line)
 		}
 	}
+	return out
 }
 
 // assumptions lists the report's cautions after the first (the page
@@ -247,29 +306,31 @@ func (p *page) cutSheet(r *detail.Report, s *sheet.Sheet) {
 	}
 }
 
-// limits sets a section and a summary row for every limit state, in the
-// check's order.
-func (p *page) limits(r *detail.Report, f fmtr) {
+// limits is a section and a summary row for every limit state of one
+// end, in the check's order, numbered after num and anchored after
+// anchorPrefix.
+func limits(r *detail.Report, f fmtr, num, anchorPrefix string) (ls []limitSection, summary []summaryRow) {
 	c := &r.Design.Conn
 	for i, x := range r.Results {
-		ls := limit(c, f, x)
-		ls.Num = fmt.Sprintf("5.%d", i+1)
-		ls.Anchor = anchor(x.ID)
-		ls.Governs = i == r.Governing
-		p.Limits = append(p.Limits, ls)
-		p.Summary = append(p.Summary, summaryRow{
-			Anchor: ls.Anchor, ID: x.ID, Clause: x.Clause, Title: ls.Title,
+		l := limit(c, f, x)
+		l.Num = fmt.Sprintf("%s%d", num, i+1)
+		l.Anchor = anchorPrefix + anchor(x.ID)
+		l.Governs = i == r.Governing
+		ls = append(ls, l)
+		summary = append(summary, summaryRow{
+			Anchor: l.Anchor, ID: x.ID, Clause: x.Clause, Title: l.Title,
 			Nominal: f.num(float64(x.Nominal), units.DimForce), Available: f.num(float64(x.Available), units.DimForce),
 			Demand: f.num(float64(x.Demand), units.DimForce), Ratio: ratioText(x.Ratio),
 			Bar:  fmt.Sprintf("%.1f", 100*math.Min(math.Max(x.Ratio, 0), 1)),
 			Pass: x.Pass, Governs: i == r.Governing,
 		})
 	}
+	return ls, summary
 }
 
-// findings sets the table of every detailing finding.
-func (p *page) findings(r *detail.Report, f fmtr) {
-	p.Findings.Head = []string{"check", "clause", "measured", "limit", "result", "where"}
+// findings is the table of every detailing finding of one end.
+func findings(r *detail.Report, f fmtr) (t table) {
+	t.Head = []string{"check", "clause", "measured", "limit", "result", "where"}
 	for _, fd := range r.Findings {
 		res, class := "ok", ""
 		switch {
@@ -280,9 +341,10 @@ func (p *page) findings(r *detail.Report, f fmtr) {
 		case fd.Advisory:
 			res = "ok (advisory)"
 		}
-		p.Findings.Rows = append(p.Findings.Rows, tableRow{Class: class, Cells: []string{
+		t.Rows = append(t.Rows, tableRow{Class: class, Cells: []string{
 			fd.ID, fd.Clause, f.people(fd.Measured, fd.Dim), f.people(fd.Limit, fd.Dim), res, fd.Where}})
 	}
+	return t
 }
 
 // anchor turns a limit state id into a fragment name.
@@ -504,7 +566,51 @@ func valuesTable(f fmtr, x engine.Result) table {
 	return t
 }
 
-var pageTemplate = template.Must(template.New("report").Parse(pageHTML))
+var pageTemplate = template.Must(template.Must(template.New("report").Parse(pageHTML)).Parse(partsHTML))
+
+// partsHTML are the page's parts one end's sections repeat: a summary's
+// rows, a table's rows, the limit-state sections.
+const partsHTML = `{{define "summary"}}{{range .}}<tr class="{{if .Governs}}governs {{end}}{{if not .Pass}}fail{{end}}">
+<td><a href="#{{.Anchor}}">{{.ID}}</a><br><span class="note">{{.Title}}</span></td><td>{{.Clause}}</td>
+<td class="num">{{.Nominal}}</td><td class="num">{{.Available}}</td><td class="num">{{.Demand}}</td>
+<td class="num"><span class="bar"><span style="width: {{.Bar}}%"></span></span>{{.Ratio}}</td>
+<td class="nowrap">{{if .Pass}}<span class="ok">ok</span>{{else}}<span class="bad">FAILS</span>{{end}}{{if .Governs}} <span class="badge gov">governs</span>{{end}}</td></tr>
+{{end}}{{end}}
+{{define "rows"}}{{range .}}<tr class="{{.Class}}">{{range .Cells}}<td>{{.}}</td>{{end}}</tr>
+{{end}}{{end}}
+{{define "limits"}}{{range .}}<section class="limit{{if .Governs}} governs{{end}}{{if not .Pass}} fails{{end}}" id="{{.Anchor}}" data-id="{{.ID}}" data-clause="{{.Clause}}"{{with .End}} data-end="{{.}}"{{end}}>
+<div class="lshead">
+  <h3>{{.Num}} {{.Title}}</h3>
+  <div>{{if .Governs}}<span class="badge gov">governs</span> {{end}}{{if .Pass}}<span class="badge pass">ratio {{.Ratio}} · ok</span>{{else}}<span class="badge fail">ratio {{.Ratio}} · FAILS</span>{{end}}</div>
+</div>
+<div class="id">{{.ID}} · clause {{.Clause}}</div>
+<div class="cols">
+<div>
+  <div class="label">Formula</div>
+  <div class="eqs">{{range .Formula}}<div class="eq formula">{{.}}</div>{{end}}{{if .Where}}<div class="where">where {{.Where}}.</div>{{end}}</div>
+  <div class="label">With the values of this connection</div>
+  <div class="eqs">{{range .Steps}}<div class="eq">{{.}}</div>{{end}}</div>
+  {{if .Note}}<div class="note">Checked: {{.Note}}.</div>{{end}}
+</div>
+<div>
+  <div class="label">Result</div>
+  <table class="res">{{range .Result}}<tr><th>{{.Label}}</th><td>{{.Value}}</td></tr>{{end}}</table>
+</div>
+</div>
+{{if .PerBolt}}<div class="label">{{.PerBoltTitle}}</div>
+<table class="perbolt">
+<tr>{{range .PerBolt.Head}}<th>{{.}}</th>{{end}}</tr>
+{{range .PerBolt.Rows}}<tr>{{range .Cells}}<td>{{.}}</td>{{end}}</tr>
+{{end}}</table>{{end}}
+<details open><summary>Values used</summary>
+<table class="values">
+<tr>{{range .Values.Head}}<th>{{.}}</th>{{end}}</tr>
+{{range .Values.Rows}}<tr>{{range .Cells}}<td>{{.}}</td>{{end}}</tr>
+{{end}}</table>
+</details>
+</section>
+{{end}}{{end}}
+`
 
 const pageHTML = `<!DOCTYPE html>
 <html lang="en">
@@ -640,59 +746,42 @@ footer { margin-top: 30px; font-size: 12px; color: var(--muted); border-top: 1px
 <h2>3. Summary of limit states</h2>
 <table id="summary">
 <tr><th>limit state</th><th>clause</th><th class="num">Rn {{.ForceUnit}}</th><th class="num">{{.AvailableSymbol}} {{.ForceUnit}}</th><th class="num">{{.DemandSymbol}} {{.ForceUnit}}</th><th class="num">ratio</th><th></th></tr>
-{{range .Summary}}<tr class="{{if .Governs}}governs {{end}}{{if not .Pass}}fail{{end}}">
-<td><a href="#{{.Anchor}}">{{.ID}}</a><br><span class="note">{{.Title}}</span></td><td>{{.Clause}}</td>
-<td class="num">{{.Nominal}}</td><td class="num">{{.Available}}</td><td class="num">{{.Demand}}</td>
-<td class="num"><span class="bar"><span style="width: {{.Bar}}%"></span></span>{{.Ratio}}</td>
-<td class="nowrap">{{if .Pass}}<span class="ok">ok</span>{{else}}<span class="bad">FAILS</span>{{end}}{{if .Governs}} <span class="badge gov">governs</span>{{end}}</td></tr>
-{{end}}</table>
+{{template "summary" .Summary}}</table>
 
 <h2>4. Detailing</h2>
 <table id="detailing">
 <tr>{{range .Findings.Head}}<th>{{.}}</th>{{end}}</tr>
-{{range .Findings.Rows}}<tr class="{{.Class}}">{{range .Cells}}<td>{{.}}</td>{{end}}</tr>
-{{end}}</table>
+{{template "rows" .Findings.Rows}}</table>
 
 <h2>5. Limit states</h2>
-{{range .Limits}}<section class="limit{{if .Governs}} governs{{end}}{{if not .Pass}} fails{{end}}" id="{{.Anchor}}" data-id="{{.ID}}" data-clause="{{.Clause}}">
-<div class="lshead">
-  <h3>{{.Num}} {{.Title}}</h3>
-  <div>{{if .Governs}}<span class="badge gov">governs</span> {{end}}{{if .Pass}}<span class="badge pass">ratio {{.Ratio}} · ok</span>{{else}}<span class="badge fail">ratio {{.Ratio}} · FAILS</span>{{end}}</div>
-</div>
-<div class="id">{{.ID}} · clause {{.Clause}}</div>
-<div class="cols">
-<div>
-  <div class="label">Formula</div>
-  <div class="eqs">{{range .Formula}}<div class="eq formula">{{.}}</div>{{end}}{{if .Where}}<div class="where">where {{.Where}}.</div>{{end}}</div>
-  <div class="label">With the values of this connection</div>
-  <div class="eqs">{{range .Steps}}<div class="eq">{{.}}</div>{{end}}</div>
-  {{if .Note}}<div class="note">Checked: {{.Note}}.</div>{{end}}
-</div>
-<div>
-  <div class="label">Result</div>
-  <table class="res">{{range .Result}}<tr><th>{{.Label}}</th><td>{{.Value}}</td></tr>{{end}}</table>
-</div>
-</div>
-{{if .PerBolt}}<div class="label">{{.PerBoltTitle}}</div>
-<table class="perbolt">
-<tr>{{range .PerBolt.Head}}<th>{{.}}</th>{{end}}</tr>
-{{range .PerBolt.Rows}}<tr>{{range .Cells}}<td>{{.}}</td>{{end}}</tr>
-{{end}}</table>{{end}}
-<details open><summary>Values used</summary>
-<table class="values">
-<tr>{{range .Values.Head}}<th>{{.}}</th>{{end}}</tr>
-{{range .Values.Rows}}<tr>{{range .Cells}}<td>{{.}}</td>{{end}}</tr>
-{{end}}</table>
-</details>
-</section>
-{{end}}
+{{template "limits" .Limits}}
 
-<h2>6. Assumptions</h2>
+{{with .Far}}
+<h2>6. The far end</h2>
+<p class="note">The member's far end has a connection of its own{{if .Governs}}, and it governs the member{{end}}. Its holes are given in its own frame: x from the far cut end, y as at the near end.</p>
+<table class="kv">
+{{range .Job}}<tr><th>{{.Label}}</th><td>{{.Value}}</td></tr>
+{{end}}</table>
+<h3>Holes, in the far end's frame</h3>
+<table id="far-holes">
+<tr>{{range .Holes.Head}}<th>{{.}}</th>{{end}}</tr>
+{{range .Holes.Rows}}<tr>{{range .Cells}}<td>{{.}}</td>{{end}}</tr>
+{{end}}</table>
+<h3>Summary of limit states at the far end</h3>
+<table id="far-summary">
+<tr><th>limit state</th><th>clause</th><th class="num">Rn {{$.ForceUnit}}</th><th class="num">{{$.AvailableSymbol}} {{$.ForceUnit}}</th><th class="num">{{$.DemandSymbol}} {{$.ForceUnit}}</th><th class="num">ratio</th><th></th></tr>
+{{template "summary" .Summary}}</table>
+<h3>Detailing at the far end</h3>
+<table id="far-detailing">
+<tr>{{range .Findings.Head}}<th>{{.}}</th>{{end}}</tr>
+{{template "rows" .Findings.Rows}}</table>
+{{template "limits" .Limits}}
+{{end}}<h2>{{if .Far}}7{{else}}6{{end}}. Assumptions</h2>
 <ul>
 {{range .Assumptions}}<li>{{.}}</li>
 {{end}}</ul>
 
-<h2>7. Review</h2>
+<h2>{{if .Far}}8{{else}}7{{end}}. Review</h2>
 <p class="note">For the engineer of record: this report is an aid to the design, not the design. Check it against the governing code and the project's own requirements before signing.</p>
 <div class="signoff"><div>Prepared by, date</div><div>Checked by, date</div><div>Engineer of record, seal and date</div></div>
 

@@ -270,7 +270,11 @@ func TestReportHasEveryLimitState(t *testing.T) {
 			r := check(t, path)
 			doc, _ := render(t, r)
 			all := text(doc)
-			sections := find(doc, func(n *html.Node) bool { _, ok := attr(n, "data-id"); return n.Data == "section" && ok })
+			sections := find(doc, func(n *html.Node) bool {
+				_, ok := attr(n, "data-id")
+				_, far := attr(n, "data-end")
+				return n.Data == "section" && ok && !far
+			})
 			if len(sections) != len(r.Results) {
 				t.Fatalf("%d limit-state sections, want %d", len(sections), len(r.Results))
 			}
@@ -311,9 +315,25 @@ func TestReportHasEveryLimitState(t *testing.T) {
 			if v == nil || (text(v) == "PASSES") != r.Pass {
 				t.Errorf("verdict box %q, pass %v", text(v), r.Pass)
 			}
-			g := r.GoverningResult()
-			if !strings.Contains(all, "Governing limit state: "+g.ID+" ("+g.Clause+")") {
+			g, where := r.GoverningEnd().GoverningResult(), ""
+			if r.Far != nil {
+				where = " at the " + r.GoverningEndName() + " end"
+			}
+			if !strings.Contains(all, "Governing limit state"+where+": "+g.ID+" ("+g.Clause+")") {
 				t.Error("the governing limit state is not stated")
+			}
+			far := find(doc, func(n *html.Node) bool { v, _ := attr(n, "data-end"); return n.Data == "section" && v == "far" })
+			want := 0
+			if r.Far != nil {
+				want = len(r.Far.Results)
+			}
+			if len(far) != want {
+				t.Fatalf("%d far-end sections, want %d", len(far), want)
+			}
+			for i, s := range far {
+				if id, _ := attr(s, "data-id"); id != r.Far.Results[i].ID {
+					t.Errorf("far-end section %d is %s, want %s", i, id, r.Far.Results[i].ID)
+				}
 			}
 		})
 	}
@@ -627,7 +647,11 @@ func TestPrintedFactorsGiveTheAvailableStrength(t *testing.T) {
 			if x.ID == "member.combined" {
 				continue // an interaction, no single φ: its own rows, checked in TestFormulasOnThePage…
 			}
-			s := find(doc, func(n *html.Node) bool { v, _ := attr(n, "data-id"); return n.Data == "section" && v == x.ID })
+			s := find(doc, func(n *html.Node) bool {
+				v, _ := attr(n, "data-id")
+				_, far := attr(n, "data-end")
+				return n.Data == "section" && v == x.ID && !far
+			})
 			if len(s) != 1 {
 				t.Fatalf("%s: %d sections for %s", filepath.Base(path), len(s), x.ID)
 			}
@@ -892,7 +916,11 @@ func TestFillerFactorOnThePage(t *testing.T) {
 		r := check(t, tt.job)
 		doc, _ := render(t, r)
 		for _, id := range []string{"bolts.shear", "bolts.group"} {
-			s := find(doc, func(n *html.Node) bool { v, _ := attr(n, "data-id"); return n.Data == "section" && v == id })
+			s := find(doc, func(n *html.Node) bool {
+				v, _ := attr(n, "data-id")
+				_, far := attr(n, "data-end")
+				return n.Data == "section" && v == id && !far
+			})
 			if len(s) != 1 {
 				t.Fatalf("%s: no %s section", tt.job, id)
 			}
@@ -912,7 +940,11 @@ func TestFillerFactorOnThePage(t *testing.T) {
 	}
 	r := check(t, "../../testdata/examples/aisc-d2.yaml")
 	doc, _ := render(t, r)
-	for _, n := range find(doc, func(n *html.Node) bool { v, _ := attr(n, "data-id"); return n.Data == "section" && v == "bolts.shear" }) {
+	for _, n := range find(doc, func(n *html.Node) bool {
+		v, _ := attr(n, "data-id")
+		_, far := attr(n, "data-end")
+		return n.Data == "section" && v == "bolts.shear" && !far
+	}) {
 		if st := text(n); strings.Contains(st, "J5.2") || strings.Contains(st, "0.4(t") {
 			t.Errorf("a job without fillers shows the filler factor:\n%s", st)
 		}
@@ -945,14 +977,22 @@ func TestSectionsDoNotDependOnTheID(t *testing.T) {
 	for _, path := range jobs(t) {
 		r := check(t, path)
 		doc, _ := render(t, r)
-		before := find(doc, func(n *html.Node) bool { _, ok := attr(n, "data-id"); return n.Data == "section" && ok })
+		before := find(doc, func(n *html.Node) bool {
+			_, ok := attr(n, "data-id")
+			_, far := attr(n, "data-end")
+			return n.Data == "section" && ok && !far
+		})
 		ids := make([]string, len(r.Results))
 		for i := range r.Results {
 			ids[i] = r.Results[i].ID
 			r.Results[i].ID = fmt.Sprintf("hypothetical.limit-%d", i)
 		}
 		doc, _ = render(t, r)
-		after := find(doc, func(n *html.Node) bool { _, ok := attr(n, "data-id"); return n.Data == "section" && ok })
+		after := find(doc, func(n *html.Node) bool {
+			_, ok := attr(n, "data-id")
+			_, far := attr(n, "data-end")
+			return n.Data == "section" && ok && !far
+		})
 		if len(after) != len(before) {
 			t.Fatalf("%s: %d sections, then %d", filepath.Base(path), len(before), len(after))
 		}
