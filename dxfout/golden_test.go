@@ -16,7 +16,8 @@ var update = flag.Bool("update", false, "rewrite the golden DXF files under test
 // goldenJobs: a US angle (failing: stamped sheet only), a US two-line flat
 // with stagger (failing too), an SI double angle, an SI slotted angle and
 // the demo (a passing US angle, so US CAM files too), and a gusset whose
-// outline has a clipped corner.
+// outline has a clipped corner, and a double-plate splice of two flats
+// (passing: its splice plate's CAM file carries both groups).
 var goldenJobs = []string{
 	"../testdata/jobs/us-single-angle.yaml",
 	"../testdata/jobs/us-staggered-flat.yaml",
@@ -24,6 +25,7 @@ var goldenJobs = []string{
 	"../testdata/jobs/si-slotted.yaml",
 	"../testdata/jobs/us-pipe-rack-brace.yaml",
 	"../testdata/jobs/us-clipped-gusset.yaml",
+	"../testdata/jobs/us-double-splice.yaml",
 }
 
 const goldenDir = "../testdata/golden"
