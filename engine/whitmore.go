@@ -71,7 +71,15 @@ func WhitmoreSection(c *Connection) Whitmore {
 	if w.Lw == 0 && c.Plate.Outline != nil {
 		w.YLo, w.YHi = w.Low.Y1, w.Low.Y1
 	}
-	ded, path := netsection.NetWidthDeduction(platePathHoles(c))
+	ded, path := netsection.NetWidthDeduction(pathHoles(c, platePly))
+	if c.Plate.Kind == Splice {
+		// Across both groups (platePathHoles); for mirrored groups it is
+		// the same path, so it replaces A's only when it is worse beyond the
+		// tolerance: B's mirrored coordinates round differently.
+		if d, p := netsection.NetWidthDeduction(platePathHoles(c)); d > ded+eps {
+			ded, path = d, p
+		}
+	}
 	w.Holes, w.Deducted = len(path), ded
 	return w
 }
