@@ -754,7 +754,7 @@ func (j job) plateParts(ed *rules.Edition, d *Design) error {
 	if err != nil {
 		return err
 	}
-	d.Conn.Plate = &engine.Plate{Kind: ps.Kind, T: ps.Thickness, Width: ps.Width, Fy: st.Fy, Fu: st.Fu}
+	d.Conn.Plate = &engine.Plate{Kind: ps.Kind, T: ps.Thickness, Width: ps.Width, Fy: st.Fy, Fu: st.Fu, Count: ps.Count, Gap: ps.Gap}
 	d.Info.PlateGrade = st.Name
 	d.Info.Weathering = d.Info.Weathering || st.Weathering
 	return nil

@@ -303,9 +303,27 @@ func (p people) plateRow(d *Design) string {
 		return fmt.Sprintf("%s, outline of %d points, %s along the load × %s across, its free edge %s past the last bolt",
 			head, len(pl.Outline), p.length(pl.FreeEdge-xlo), p.length(pl.Width), p.length(pl.FreeEdge-lastX(c.Holes)))
 	}
+	if pl.Kind == engine.Splice {
+		return p.spliceRow(d)
+	}
 	row := fmt.Sprintf("%s, %s wide, free edge %s past the last bolt", head, p.length(pl.Width), p.length(pl.FreeEdge-lastX(c.Holes)))
 	if ps := d.Job.Plate; ps != nil && ps.Length > 0 {
 		row += fmt.Sprintf(", %s long", p.length(ps.Length))
 	}
 	return row
+}
+
+// spliceRow describes a splice plate (or the two of a double splice): its
+// thickness (2 × t for two), width and length over both members' groups,
+// the end past each member's last bolt and the gap between the member ends.
+func (p people) spliceRow(d *Design) string {
+	c := &d.Conn
+	pl := c.Plate
+	edge := pl.FreeEdge - lastX(c.Holes)
+	what := fmt.Sprintf("%s %s splice plate", p.length(pl.T), d.Info.PlateGrade)
+	if pl.Plates() == 2 {
+		what = fmt.Sprintf("2 × %s %s splice plates, one each side", p.length(pl.T), d.Info.PlateGrade)
+	}
+	return fmt.Sprintf("%s, %s wide × %s long, carrying both members' groups, ends %s past each member's last bolt, gap %s between the member ends",
+		what, p.length(pl.Width), p.length(SpliceLength(pl)), p.length(edge), p.length(pl.Gap))
 }

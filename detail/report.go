@@ -108,6 +108,9 @@ func cautions(d *Design) []string {
 		c = append(c, "The plate is taken as a rectangle of the given width centred on the bolt group; "+
 			"its side edges are free edges for block shear.")
 	}
+	if pl := d.Conn.Plate; pl != nil && pl.Kind == engine.Splice {
+		c = append(c, spliceCaution(pl))
+	}
 	c = append(c, "Block shear uses Ubs = 1.0 (uniform tension stress); a block that tears out k of the n bolts "+
 		"is compared with k/n of the force, the bolts sharing it equally.")
 	if !d.Conn.Member.Shape.ShearLagCases().Has(engine.D31Case1) {
@@ -294,3 +297,21 @@ func (r *Report) JSON() ([]byte, error) {
 	}
 	return b.Bytes(), nil
 }
+
+// spliceCaution says what a splice's check assumes: member B is member A
+// again, mirrored, so one set of results holds for both.
+func spliceCaution(pl *engine.Plate) string {
+	s := "Splice: the job describes one member; the member beyond the joint is taken as the same section with the same bolt group, " +
+		"mirrored about the joint, so the member's results (at its end) and the plate's bearing and block shear hold for both members. " +
+		"The splice plate's net section is the worst path across both groups."
+	if pl.Plates() == 2 {
+		s += " Two splice plates, one each side: the bolts act in two shear planes and the plates' limit states take both plates together (2·t)."
+	}
+	return s
+}
+
+// SpliceLength is a splice plate's length along the load: from its end
+// past member A's group (FreeEdge) to its end past member B's, which is
+// the mirror of A's about the joint (engine.SpliceHoles): both groups'
+// extents, both end distances and the gap.
+func SpliceLength(pl *engine.Plate) units.Length { return 2*pl.FreeEdge + pl.Gap }

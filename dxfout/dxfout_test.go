@@ -16,12 +16,13 @@ import (
 	"gaugeline/detail"
 	"gaugeline/detail/jobfile"
 	"gaugeline/detail/sheet"
+	"gaugeline/engine"
 	"gaugeline/rules/units"
 )
 
 // jobs are the job files drawn: a US angle, a US two-line staggered flat,
 // an SI double angle, an SI slotted angle, the demo, a gusset with a
-// clipped outline, AISC Design Example
+// clipped outline, a double-plate splice of two flats, AISC Design Example
 // D.2 (no plate) and the inline jobs below, so that every hole type and
 // slot direction is drawn.
 var jobs = []string{
@@ -31,6 +32,7 @@ var jobs = []string{
 	"../testdata/jobs/si-slotted.yaml",
 	"../testdata/jobs/us-pipe-rack-brace.yaml",
 	"../testdata/jobs/us-clipped-gusset.yaml",
+	"../testdata/jobs/us-double-splice.yaml",
 	"../testdata/examples/aisc-d2.yaml",
 	"inline:long-slot.yaml",
 	"inline:oversized.yaml",
@@ -134,6 +136,15 @@ func jobHoles(r *detail.Report, plate bool) []wantHole {
 			out = append(out, w)
 		}
 	}
+	if plate && c.Plate.Kind == engine.Splice {
+		// A splice plate carries member B's group too: each hole mirrored
+		// about the joint (x = −gap − x), so x' = FreeEdge + gap + x.
+		for i := range c.Holes {
+			w := out[i]
+			w.x = in(c.Plate.FreeEdge + c.Plate.Gap + c.Holes[i].X)
+			out = append(out, w)
+		}
+	}
 	return out
 }
 
@@ -223,6 +234,12 @@ func checkHeader(t *testing.T, f *dxfFile, sys units.System) {
 // rectangle.
 func jobOutline(r *detail.Report, plate bool) [][2]float64 {
 	j := r.Design.Job
+	if pl := r.Design.Conn.Plate; plate && pl != nil && pl.Kind == engine.Splice {
+		// The splice plate: the rectangle from its end past member A's group
+		// to its end past B's, 2·(last bolt + edge) + gap long.
+		l, w := j.Units.ToJob(float64(2*pl.FreeEdge+pl.Gap), units.DimLength), j.Units.ToJob(float64(pl.Width), units.DimLength)
+		return [][2]float64{{0, 0}, {l, 0}, {l, w}, {0, w}}
+	}
 	if !plate || j.Plate == nil || j.Plate.Outline == nil {
 		return nil
 	}

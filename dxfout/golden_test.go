@@ -16,9 +16,10 @@ var update = flag.Bool("update", false, "rewrite the golden DXF files under test
 // goldenJobs: a US angle (failing: stamped sheet only), a US two-line flat
 // with stagger (failing too), an SI double angle, an SI slotted angle, the
 // demo (a passing US angle, so US CAM files too), a gusset whose outline
-// has a clipped corner, a 16-ft brace with its title block and a brace
-// whose far end has a connection of its own (its plate a CAM file of its
-// own). Each member is drawn whole, with a break.
+// has a clipped corner, a 16-ft brace with its title block, a brace whose
+// far end has a connection of its own (its plate a CAM file of its own)
+// and a double-plate splice of two flats (its splice plate's CAM file
+// carries both groups). Each member is drawn whole, with a break.
 var goldenJobs = []string{
 	"../testdata/jobs/us-single-angle.yaml",
 	"../testdata/jobs/us-staggered-flat.yaml",
@@ -28,6 +29,7 @@ var goldenJobs = []string{
 	"../testdata/jobs/us-clipped-gusset.yaml",
 	"../testdata/jobs/us-brace-16ft.yaml",
 	"../testdata/jobs/us-brace-two-ends.yaml",
+	"../testdata/jobs/us-double-splice.yaml",
 }
 
 const goldenDir = "../testdata/golden"

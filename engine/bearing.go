@@ -180,8 +180,8 @@ func PlateBearing(c *Connection) Result {
 	p := c.Plate
 	// the edge ahead of each hole: the free edge, or where the outline is
 	// crossed along the hole's line toward +x (a corner clip comes nearer)
-	shares := bearingShares(c, platePly, p.T, p.Fu, 1, func(h *Hole) units.Length { return p.EdgeAlong(h.X, h.Y, false, 1) })
+	shares := bearingShares(c, platePly, p.TotalT(), p.Fu, 1, func(h *Hole) units.Length { return p.EdgeAlong(h.X, h.Y, false, 1) })
 	return bearingResult(c, bearingPart{id: "plate.bearing", note: "plate, toward its free edge",
 		title: "Bearing and tearout at the plate's bolt holes", toward: "toward the plate's free edge"},
-		platePly, p.T, p.Fu, shares)
+		platePly, p.TotalT(), p.Fu, shares)
 }

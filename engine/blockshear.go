@@ -184,7 +184,7 @@ func MemberBlockShear(c *Connection) Result {
 func PlateBlockShear(c *Connection) Result {
 	pl := c.Plate
 	p := blockPart{
-		t: pl.T, Fy: pl.Fy, Fu: pl.Fu,
+		t: pl.TotalT(), Fy: pl.Fy, Fu: pl.Fu,
 		low: pl.YMin(), high: pl.YMax(), hasLow: true, hasHigh: true,
 		xEdge: pl.FreeEdge, toward: 1, name: "plate", ply: platePly,
 	}

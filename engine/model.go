@@ -63,7 +63,21 @@ type Plate struct {
 	// Outline is the plate's true outline in the member frame (mm), in the
 	// job's order, closed by itself; nil: the rectangle above.
 	Outline []r2.Vec
+	// Count is the number of splice plates: 2 is one each side of the
+	// members (two shear planes, the plates sharing the load); 0 or 1 is
+	// one plate. Only a splice has two (splice.go).
+	Count int
+	// Gap is a splice's gap between the two members' ends: member B's end
+	// is at x = −Gap (splice.go); zero for a gusset.
+	Gap units.Length
 }
+
+// Plates is the number of plates: Count, at least 1.
+func (p *Plate) Plates() int { return max(p.Count, 1) }
+
+// TotalT is the thickness of the plates together, Plates·T: what the
+// plate's limit states take, as a double angle's take both angles.
+func (p *Plate) TotalT() units.Length { return units.Length(p.Plates()) * p.T }
 
 // YMin and YMax are the plate's side edges in the member frame.
 func (p *Plate) YMin() units.Length { return p.YCentre - p.Width/2 }
@@ -135,7 +149,10 @@ type Connection struct {
 
 // ShearPlanes is the number of bolt shear planes (and slip planes): one
 // per piece of the member, the plate between them (two for a double
-// angle), otherwise one.
+// angle); two for a member between two splice plates; otherwise one.
 func (c *Connection) ShearPlanes() int {
+	if c.Plate != nil && c.Plate.Plates() == 2 {
+		return 2
+	}
 	return c.Member.Shape.Pieces()
 }

@@ -243,6 +243,9 @@ func valT(c *Connection, t units.Length, member bool, what string) Value {
 	if member && c.Member.Pieces == 2 {
 		what = "thickness of the 2 angles together"
 	}
+	if !member && c.Plate != nil && c.Plate.Plates() == 2 {
+		what = "thickness of the 2 splice plates together (2 × " + units.FormatJob(c.Plate.T, c.Edition.System()) + ")"
+	}
 	return Value{Name: "t", V: float64(t), Dim: units.DimLength, What: what}
 }
 

@@ -72,6 +72,14 @@ func WhitmoreSection(c *Connection) Whitmore {
 		w.YLo, w.YHi = w.Low.Y1, w.Low.Y1
 	}
 	ded, path := netsection.NetWidthDeduction(pathHoles(c, platePly))
+	if c.Plate.Kind == Splice {
+		// Across both groups (platePathHoles); for mirrored groups it is
+		// the same path, so it replaces A's only when it is worse beyond the
+		// tolerance: B's mirrored coordinates round differently.
+		if d, p := netsection.NetWidthDeduction(platePathHoles(c)); d > ded+eps {
+			ded, path = d, p
+		}
+	}
 	w.Holes, w.Deducted = len(path), ded
 	return w
 }
@@ -83,13 +91,13 @@ func WhitmoreSection(c *Connection) Whitmore {
 func PlateYield(c *Connection) Result {
 	p := c.Plate
 	w := WhitmoreSection(c)
-	Aw := w.Lw.Mul(p.T)
+	Aw := w.Lw.Mul(p.TotalT())
 	Rn := p.Fy.Times(Aw)
 	vs := newValues(5)
 	pFy, pLw := vs.add(valFy(p.Fy)), vs.add(valLw(w.Lw))
 	pSpread := vs.add(Value{Name: "Whitmore_spread", V: float64(w.Spread), Dim: units.DimLength, Sym: "spread",
 		What: "30° spread before the clip by the plate"})
-	pT := vs.add(valT(c, p.T, false, "thickness"))
+	pT := vs.add(valT(c, p.TotalT(), false, "thickness"))
 	pAg := vs.add(Value{Name: "Ag", V: float64(Aw), Dim: units.DimArea, What: "gross area of the Whitmore section, Aw = Lw·t"})
 	clip := "the plate"
 	if p.Outline != nil {
@@ -145,8 +153,10 @@ func PlateYield(c *Connection) Result {
 func PlateRupture(c *Connection) Result {
 	p := c.Plate
 	w := WhitmoreSection(c)
-	Ag := w.Lw.Mul(p.T)
-	An := max((w.Lw - w.Deducted).Mul(p.T), 0)
+	// Both splice plates together: An and Ag scale alike, so the cap of
+	// 0.85·Ag per splice plate is the cap on the two together.
+	Ag := w.Lw.Mul(p.TotalT())
+	An := max((w.Lw - w.Deducted).Mul(p.TotalT()), 0)
 	note := whitmoreNote(w, "net Whitmore section, worst straight or zig-zag path of holes")
 	capped := 0.0
 	cap, hasCap := c.Edition.SplicePlateCap()
@@ -157,7 +167,7 @@ func PlateRupture(c *Connection) Result {
 	}
 	Rn := p.Fu.Times(An)
 	vs := newValues(8)
-	pFu, pLw, pT := vs.add(valFu(p.Fu)), vs.add(valLw(w.Lw)), vs.add(valT(c, p.T, false, "thickness"))
+	pFu, pLw, pT := vs.add(valFu(p.Fu)), vs.add(valLw(w.Lw)), vs.add(valT(c, p.TotalT(), false, "thickness"))
 	pAg := vs.add(Value{Name: "Ag", V: float64(Ag), Dim: units.DimArea, What: "gross area of the Whitmore section, Lw·t"})
 	pAn := vs.add(Value{Name: "An", V: float64(An), Dim: units.DimArea, What: "net area of the Whitmore section"})
 	pHoles := vs.add(Value{Name: "holes", V: float64(w.Holes), What: "holes on the worst path across the section"})

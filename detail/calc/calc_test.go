@@ -397,6 +397,12 @@ func TestDrawingHolesMatchTheJob(t *testing.T) {
 					for _, h := range pc.Holes {
 						want[name][h.ID] = [3]float64{job(pl.FreeEdge) - job(h.X), job(pl.YMax()) - job(h.Y), width(h.InPlate())}
 					}
+					if pl.Kind == engine.Splice {
+						// member B's group, mirrored about the joint (x = −gap − x)
+						for _, h := range pc.Holes {
+							want[name]["B"+h.ID] = [3]float64{job(pl.FreeEdge) + job(pl.Gap) + job(h.X), job(pl.YMax()) - job(h.Y), width(h.InPlate())}
+						}
+					}
 				}
 			}
 			// Where the member view has a break, a hole is drawn where the

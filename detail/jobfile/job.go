@@ -117,6 +117,12 @@ type PlateSpec struct {
 	Outline []r2.Vec
 	// Hole is the plate's own hole type (plate.hole, plate.slot).
 	Hole PlyHole
+	// Count is plate.count: the number of splice plates, 2 (one each side
+	// of the members) or 1 (the default, and every gusset's).
+	Count int
+	// Gap is plate.gap, a splice's gap between the member ends
+	// (DefaultSpliceGap when not given); zero for a gusset.
+	Gap units.Length
 }
 
 // PlyHole is one ply's own hole type and slot direction, where the job

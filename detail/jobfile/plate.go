@@ -6,9 +6,10 @@ import (
 	"go.yaml.in/yaml/v3"
 
 	"gaugeline/engine"
+	"gaugeline/rules/units"
 )
 
-var plateKeys = []string{"kind", "thickness", "grade", "fy", "fu", "width", "edge", "length", "outline", "clip", "hole", "slot"}
+var plateKeys = []string{"kind", "thickness", "grade", "fy", "fu", "width", "edge", "length", "outline", "clip", "hole", "slot", "count", "gap"}
 
 func (p *parser) parsePlate(n *yaml.Node) error {
 	b, err := p.mapping(n, "plate", plateKeys)
@@ -44,8 +45,57 @@ func (p *parser) parsePlate(n *yaml.Node) error {
 	if pl.Hole, err = p.parsePlyHole(b); err != nil {
 		return err
 	}
+	if err := p.parseSplice(b, pl); err != nil {
+		return err
+	}
 	p.job.Plate = pl
 	return nil
+}
+
+// DefaultSpliceGap is a splice's gap between the member ends when
+// plate.gap is not given: 1/4 in (6 mm). Common practice, no source.
+func DefaultSpliceGap(sys units.System) units.Length {
+	if sys == units.SI {
+		return 6 * units.Millimetre
+	}
+	return units.Inch / 4
+}
+
+// parseSplice reads plate.count and plate.gap, which only a splice has:
+// two plates (one each side of the members) or one, and the gap between
+// the member ends. A splice plate is the rectangle the two groups, the
+// edges and the gap give, so plate.length and plate.outline are refused.
+func (p *parser) parseSplice(b *block, pl *PlateSpec) (err error) {
+	pl.Count = 1
+	if pl.Kind != engine.Splice {
+		for _, k := range []string{"count", "gap"} {
+			if b.has(k) {
+				return p.errAt(b.vals[k], "plate."+k, "is for a splice (plate.kind: splice); this plate is a "+pl.Kind.String(),
+					"remove plate."+k+", or set plate.kind: splice")
+			}
+		}
+		return nil
+	}
+	for _, k := range []string{"length", "outline"} {
+		if b.has(k) {
+			return p.errAt(b.vals[k], "plate."+k, "cannot be used with plate.kind: splice: the splice plate's length follows from both members' groups, plate.edge and plate.gap",
+				"remove plate."+k+"; the splice plate runs plate.edge past each member's last bolt")
+		}
+	}
+	if b.has("count") {
+		if pl.Count, err = p.integer(b.vals["count"], "plate.count", 1, 2); err != nil {
+			return err
+		}
+		if pl.Count == 2 && p.job.Member.Shape != nil && p.job.Member.Shape.Pieces() == 2 {
+			return p.errAt(b.vals["count"], "plate.count", "a double angle already bolts to one plate between its angles in two shear planes; two splice plates do not fit it",
+				"use plate.count: 1 with a double angle, or a flat between two splice plates")
+		}
+	}
+	pl.Gap = DefaultSpliceGap(p.job.Units)
+	if b.has("gap") {
+		pl.Gap, err = p.length(b.vals["gap"], "plate.gap", nonNegative)
+	}
+	return err
 }
 
 // parsePlateRectangle reads the rectangle: plate.width (required), edge

@@ -525,16 +525,21 @@ func (l sheetLayout) plateView(d *detail.Design) View {
 	pl := c.Plate
 	xlo, xhi := patternX(c.Holes)
 	length := l.len(pl.FreeEdge - xlo + ViewBeyond(xhi-xlo, l.sys))
+	splice := pl.Kind == engine.Splice
+	if splice {
+		length = l.len(detail.SpliceLength(pl))
+	}
 	width := l.len(pl.Width)
 	fe, ymax := l.len(pl.FreeEdge), l.len(pl.YMax())
 	// turn maps the member frame onto the plate frame (half a turn).
 	turn := func(x, y float64) r2.Vec { return r2.Vec{X: fe - x, Y: ymax - y} }
-	p := Part{Name: "plate", Contour: l.rect(length, width), Thickness: l.len(pl.T), Pieces: 1}
+	p := Part{Name: "plate", Contour: l.rect(length, width), Thickness: l.len(pl.T), Pieces: pl.Plates()}
 	if pl.Outline != nil {
 		return l.outlineView(d, p, turn)
 	}
-	for i := range c.Holes {
-		h := &c.Holes[i]
+	holes := append(c.Holes[:len(c.Holes):len(c.Holes)], engine.SpliceHoles(c)...) // a splice plate: both groups
+	for i := range holes {
+		h := &holes[i]
 		// The plate's own holes; a half turn keeps each hole's extents
 		// along the part's x and y.
 		hs := h.InPlate()
@@ -563,11 +568,17 @@ func (l sheetLayout) plateView(d *detail.Design) View {
 	// The label goes past the section, where there are no holes, near the
 	// top edge: holes keep at least an edge distance from it.
 	sec := fe - far
+	if splice { // past the joint: the section runs through A's last bolts
+		sec = fe + l.len(pl.Gap)
+	}
 	v.Texts = append(v.Texts, Text{At: r2.Vec{X: sec + h/2, Y: width - 1.5*h}, Height: h, Align: AlignLeftBase,
 		Value: "WHITMORE Lw = " + l.people(l.len(w.Lw)), Layer: LayerReference})
 
 	title := fmt.Sprintf("PLATE %s x %s x %s %s %s - FREE EDGE AT LEFT", l.people(p.Thickness), l.people(width), l.people(length),
 		d.Info.PlateGrade, strings.ToUpper(pl.Kind.String()))
+	if splice {
+		title = l.spliceJoint(&v, d, fe)
+	}
 	v.Texts = append(v.Texts,
 		Text{At: r2.Vec{X: length / 2, Y: width + 2*h}, Height: 1.4 * h, Align: AlignCenterBottom, Value: title, Layer: LayerNotes})
 	return v
@@ -782,7 +793,7 @@ func (l sheetLayout) schedule(s *Sheet, r *detail.Report, top float64) float64 {
 	}
 	rows = append(rows[:1], l.memberScheduleRows(s, r, rows[1])...)
 	if c.Plate != nil {
-		rows = append(rows, []string{"PLATE", fmt.Sprint(len(c.Holes)), l.holeText(plate), strings.ToUpper(plate.Type.String()), made(c.Plate.T)})
+		rows = append(rows, l.plateRow(c, l.holeText(plate), strings.ToUpper(plate.Type.String()), made(c.Plate.T)))
 	}
 	rows = append(rows, l.farPlateRows(r)...)
 	s.Schedule = rows

@@ -11,6 +11,7 @@ import (
 
 	"gaugeline/detail"
 	"gaugeline/detail/jobfile"
+	"gaugeline/engine"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
 
@@ -73,9 +74,14 @@ func TestSheetHolesAreTheJobs(t *testing.T) {
 			}
 			for vi, v := range s.Views {
 				// The member is whole: the job's holes, then the far end's,
-				// the same mirrored about mid-length (x' = length − x).
+				// the same mirrored about mid-length (x' = length − x); a
+				// splice plate carries both members' groups, member A's first
+				// (TestSplicePlateCarriesBothGroups).
 				n := len(c.Holes)
 				if vi == 0 {
+					n *= 2
+				}
+				if vi == 1 && c.Plate.Kind == engine.Splice {
 					n *= 2
 				}
 				if len(v.Part.Holes) != n {
@@ -85,6 +91,8 @@ func TestSheetHolesAreTheJobs(t *testing.T) {
 					h := c.Holes[i%len(c.Holes)]
 					want := r2.Vec{X: in(h.X), Y: in(h.Y)}
 					switch {
+					case vi == 1 && i >= len(c.Holes): // member B's group, mirrored about the joint
+						want = r2.Vec{X: in(c.Plate.FreeEdge+c.Plate.Gap) + in(h.X), Y: in(c.Plate.YMax()) - in(h.Y)}
 					case vi == 1:
 						want = r2.Vec{X: in(c.Plate.FreeEdge) - in(h.X), Y: in(c.Plate.YMax()) - in(h.Y)}
 					case i >= len(c.Holes):
