@@ -222,7 +222,7 @@ func TestGoodJobs(t *testing.T) {
 func TestDemoAndRules(t *testing.T) {
 	out := t.TempDir()
 	r := gaugeline(t, ".", "demo", "-o", out)
-	if r.code != 0 || strings.Count(r.stdout, "check    PASS") != 3 || !strings.Contains(r.stdout, "engineer of record") {
+	if r.code != 0 || strings.Count(r.stdout, "check    PASS") != 5 || !strings.Contains(r.stdout, "engineer of record") {
 		t.Errorf("demo: exit %d\n%s%s", r.code, r.stdout, r.stderr)
 	}
 	// The invented measurements put one hole 0.09 in off: past the 1/16 in
@@ -230,7 +230,7 @@ func TestDemoAndRules(t *testing.T) {
 	if !strings.Contains(r.stdout, "verdict REVIEW") {
 		t.Errorf("demo QA verdict is not review:\n%s", r.stdout)
 	}
-	for _, mark := range []string{"PR-VB2", "PR-HS5", "PR-KT1"} {
+	for _, mark := range []string{"PR-VB2", "PR-HS5", "PR-KT1", "PR-DB4", "PR-TS5"} {
 		for _, ext := range []string{".yaml", ".json", ".html", ".dxf", "-member.cam.dxf", "-plate.cam.dxf"} {
 			f := mark + ext
 			if _, err := os.Stat(filepath.Join(out, mark, f)); err != nil || !strings.Contains(r.stdout, f) {
@@ -241,6 +241,10 @@ func TestDemoAndRules(t *testing.T) {
 		if c := gaugeline(t, ".", "check", filepath.Join(out, mark, mark+".yaml")); c.code != 0 {
 			t.Errorf("check %s.yaml: exit %d %s", mark, c.code, c.stderr)
 		}
+	}
+	// PR-DB4's far end has a plate of its own: a CAM file of its own.
+	if _, err := os.Stat(filepath.Join(out, "PR-DB4", "PR-DB4-far-plate.cam.dxf")); err != nil {
+		t.Errorf("demo did not write PR-DB4's far-end plate: %v", err)
 	}
 	for _, f := range []string{"PR-VB2-measured.csv", "PR-VB2-qa.md"} {
 		if _, err := os.Stat(filepath.Join(out, "PR-VB2-QA", f)); err != nil {

@@ -25,9 +25,12 @@ import (
 	"gaugeline/rules/units"
 )
 
-// The demo is a scenario of our own invention: three tension connections
-// of a small pipe rack, proposed, checked and drawn, and one part
-// re-verified from a measured file the demo makes up.
+// The demo is a scenario of our own invention: five tension connections
+// of a small pipe rack: three proposed, two whose layout the job fixes (a
+// brace with a connection of its own at each end, one gusset with a
+// clipped corner; a flat tie spliced between two plates) checked as
+// given; each drawn, and one part re-verified from a measured file the
+// demo makes up.
 //
 //go:embed demo/*.yaml
 var demoJobs embed.FS
@@ -43,10 +46,12 @@ func newDemoCmd(o *rootOptions) *cobra.Command {
 	var do demoOptions
 	cmd := command("demo [-o DIR]",
 		"Run the built-in tour: propose, check, draw and re-verify an invented pipe rack's bracing",
-		"demo walks the whole loop on three invented connections of a small pipe rack: it proposes a\n"+
-			"bolt layout for each, checks it, writes the filled-in job, the check as JSON, the DXF cut sheet,\n"+
-			"the CAM files and the HTML calculation report, then re-verifies one fabricated part from an\n"+
-			"invented measured file and prints the QA verdict.",
+		"demo walks the whole loop on five invented connections of a small pipe rack: it proposes a\n"+
+			"bolt layout for three and checks the two whose layout is fixed (a brace with a different\n"+
+			"connection at each end and a gusset with a clipped corner; a tie spliced between two plates),\n"+
+			"writes each job, the check as JSON, the DXF cut sheet, the CAM files of every piece and the HTML\n"+
+			"calculation report, then re-verifies one fabricated part from an invented measured file and\n"+
+			"prints the QA verdict.",
 		argsExactly(0, "no arguments"),
 		func(_ context.Context, _ []string) error {
 			return runDemo(do, o.stdout)
@@ -61,7 +66,7 @@ func runDemo(do demoOptions, out io.Writer) error {
 	if err != nil {
 		return err
 	}
-	fmt.Fprintf(out, "gaugeline demo: pipe rack PR-3 (an invented scenario), three bolted tension connections.\n")
+	fmt.Fprintf(out, "gaugeline demo: pipe rack PR-3 (an invented scenario), %d bolted tension connections.\n", len(entries))
 	fmt.Fprintf(out, "Everything is written to %s, one folder per mark\n\n", do.dir)
 	unlock, err := lockOutput(do.dir, func(s string) { fmt.Fprintf(out, "note: %s\n", s) })
 	if err != nil {
@@ -71,14 +76,25 @@ func runDemo(do demoOptions, out io.Writer) error {
 	var qaJob *propose.Proposal
 	for _, e := range entries {
 		name := path.Join("demo", e.Name())
-		p, err := demoPropose(name)
+		job, data, err := demoJob(name)
+		if err != nil {
+			return err
+		}
+		if job.Bolts.Diameter != 0 && job.Bolts.PerLine != 0 { // a layout the job fixes: checked, not proposed
+			if err := demoCheck(job, data, do.dir, out); err != nil {
+				return err
+			}
+			continue
+		}
+		p, err := demoPropose(job)
 		if err != nil {
 			return err
 		}
 		if p.Job.Mark == demoQAMark {
 			qaJob = p
 		}
-		if err := demoWrite(p, do.dir, out); err != nil {
+		line := fmt.Sprintf("propose  %s (checked %d of %d candidates)", p.Layout.Describe(p.Job.Units), p.Evaluated, p.Space)
+		if err := demoWrite(p.Report, p.LayoutJob, line, do.dir, out); err != nil {
 			return err
 		}
 	}
@@ -92,15 +108,28 @@ func runDemo(do demoOptions, out io.Writer) error {
 	return nil
 }
 
-func demoPropose(name string) (*propose.Proposal, error) {
+// demoJob reads one of the demo's jobs.
+func demoJob(name string) (*jobfile.Job, []byte, error) {
 	data, err := demoJobs.ReadFile(name)
 	if err != nil {
-		return nil, err
+		return nil, nil, err
 	}
 	job, err := jobfile.ParseJob(name, data)
+	return job, data, err
+}
+
+// demoCheck checks a job whose layout is fixed (both ends) and writes its
+// set as demoWrite does, the job as given.
+func demoCheck(job *jobfile.Job, data []byte, dir string, out io.Writer) error {
+	job.Stamp = stampFor("check", job)
+	r, err := detail.CheckJob(job)
 	if err != nil {
-		return nil, err
+		return err
 	}
+	return demoWrite(r, data, "layout   fixed by the job (the shop's standard detail): checked as given", dir, out)
+}
+
+func demoPropose(job *jobfile.Job) (*propose.Proposal, error) {
 	job.Stamp = stampFor("propose", job)
 	p, err := propose.Propose(job, propose.ProposeOptions{})
 	if err != nil {
@@ -112,9 +141,10 @@ func demoPropose(name string) (*propose.Proposal, error) {
 	return p, nil
 }
 
-// demoWrite writes everything the loop makes of one proposal and says so.
-func demoWrite(p *propose.Proposal, dir string, out io.Writer) error {
-	r := p.Report
+// demoWrite writes everything the loop makes of one checked job (jobYAML:
+// the job file, with the proposed layout where it was proposed) and says
+// so, how the layout was come by on the line after the member's.
+func demoWrite(r *detail.Report, jobYAML []byte, how, dir string, out io.Writer) error {
 	d := r.Design
 	mark := d.Job.Mark
 	js, err := r.JSON()
@@ -134,16 +164,16 @@ func demoWrite(p *propose.Proposal, dir string, out io.Writer) error {
 		return err
 	}
 	files := append([]fileset.File{
-		fileset.Stamped(fileset.File{Name: mark + ".yaml", Data: p.LayoutJob}, p.Job.Stamp),
+		fileset.Stamped(fileset.File{Name: mark + ".yaml", Data: jobYAML}, d.Job.Stamp),
 		{Name: mark + ".json", Data: js},
 		{Name: mark + ".html", Data: html},
 	}, dxfs...)
-	if err := fileset.Write(dir, fileset.Set{Name: mark, Stamp: p.Job.Stamp, Files: files}); err != nil {
+	if err := fileset.Write(dir, fileset.Set{Name: mark, Stamp: d.Job.Stamp, Files: files}); err != nil {
 		return err
 	}
 	fmt.Fprintf(out, "%s  %s %s, demand %.1f %s\n", mark, d.Conn.Member.Shape, d.Info.Designation,
 		d.Job.Units.ToJob(float64(d.Conn.Demand), units.DimForce), d.Job.Units.Labels().Force)
-	fmt.Fprintf(out, "  propose  %s (checked %d of %d candidates)\n", p.Layout.Describe(d.Job.Units), p.Evaluated, p.Space)
+	fmt.Fprintf(out, "  %s\n", how)
 	fmt.Fprintf(out, "  check    %s, %s\n", strings.ToUpper(r.Verdict()), r.VerdictReason())
 	names := make([]string, len(files))
 	for i, f := range files {
