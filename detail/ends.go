@@ -86,6 +86,11 @@ func (r *Report) GoverningEndName() string {
 	return "near"
 }
 
+// EndPass is whether this end's own limit states and rules pass (the near
+// end's alone, where the far end has a connection of its own; Pass is the
+// whole member's).
+func (r *Report) EndPass() bool { return r.endPass() }
+
 // endPass is whether this end's own limit states and rules pass.
 func (r *Report) endPass() bool {
 	if r.Far != nil {

@@ -5,6 +5,7 @@ import (
 	"errors"
 	"fmt"
 	"io"
+	"strings"
 
 	"github.com/spf13/cobra"
 
@@ -97,6 +98,11 @@ func runPropose(_ context.Context, o *rootOptions, po proposeOptions, path strin
 	}
 	if !p.Found() {
 		fmt.Fprintf(o.stderr, "gaugeline: no layout passes: %s\n", p.Summary)
+		return exitError{exitFail}
+	}
+	if !p.Report.Pass { // the near end passes; the far end of its own, as the job gives it, does not
+		fmt.Fprintf(o.stderr, "gaugeline: the proposed near end passes, but the far end fails as the job gives it: %s\n",
+			strings.Join(p.Report.Far.Failing(), ", "))
 		return exitError{exitFail}
 	}
 	return nil

@@ -303,15 +303,14 @@ func (p *problem) checkChoice(best *cand, l Layout) (*detail.Report, []byte, err
 		return nil, nil, fmt.Errorf("detail: propose wrote a job it cannot read: %w", err)
 	}
 	lj.Stamp = j.Stamp // the layout's files belong to the run that proposed it
-	d, err := detail.Build(lj)
+	// Both ends, as check sees the written job: the far end of its own is
+	// the job's as given (propose lays out the near end), and the member
+	// must be long enough for both.
+	r, err := detail.CheckJob(lj)
 	if err != nil {
-		return nil, nil, fmt.Errorf("detail: propose wrote a job that does not build: %w", err)
+		return nil, nil, fmt.Errorf("detail: propose wrote a job that does not check: %w", err)
 	}
-	r, err := detail.Check(d)
-	if err != nil {
-		return nil, nil, err
-	}
-	if !r.Pass {
+	if !r.EndPass() {
 		panic("detail: propose chose a layout that fails its check")
 	}
 	if got, want := r.GoverningResult().Ratio, best.rep.GoverningResult().Ratio; math.Abs(got-want) > 1e-9*max(1, want) {
