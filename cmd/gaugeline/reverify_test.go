@@ -5,7 +5,6 @@ import (
 	"math"
 	"os"
 	"path/filepath"
-	"slices"
 	"strings"
 	"testing"
 
@@ -46,7 +45,9 @@ type reverifyDoc struct {
 
 func TestReverifyThroughTheBinary(t *testing.T) {
 	us := filepath.Join(measuredDir, "hb-7-qa.yaml")
-	si := filepath.Join(testdata, "jobs", "si-double-angle.yaml")
+	// The td-21 files are of one connection end: the job without
+	// member.length, whose member is the near end alone.
+	si := endOnly(t, filepath.Join(testdata, "jobs", "si-double-angle.yaml"))
 	siSC := filepath.Join(measuredDir, "td-21-sc.yaml")
 	tests := []struct {
 		job, file string
@@ -102,8 +103,7 @@ func TestReverifyThroughTheBinary(t *testing.T) {
 // wrote (testdata/golden) back as measured parts, the plate's in its own
 // frame (--part plate), by datum and by best fit: the holes are the
 // design's, so each is accepted. The member's CAM file is the whole
-// member and reverify matches one end's holes, so the member's are drawn
-// here from the job with a plain far end.
+// member, both ends' holes, and so is the member reverify matches.
 func TestReverifyReadsOurCAMFiles(t *testing.T) {
 	for _, c := range []struct{ job, cam, part string }{
 		{"si-double-angle.yaml", "TD-21.b-member.cam.dxf", "member"},
@@ -114,9 +114,6 @@ func TestReverifyReadsOurCAMFiles(t *testing.T) {
 	} {
 		cam := filepath.Join(testdata, "golden", c.cam)
 		job := filepath.Join(testdata, "jobs", c.job)
-		if c.part == "member" {
-			job, cam = plainFarEndCAM(t, job, c.cam)
-		}
 		if _, err := os.Stat(cam); err != nil {
 			t.Skipf("no %s: %v", cam, err)
 		}
@@ -133,31 +130,26 @@ func TestReverifyReadsOurCAMFiles(t *testing.T) {
 	}
 }
 
-// plainFarEndCAM writes the job with far_end: plain into a new folder,
-// runs sheet on it and returns that job and its CAM file named cam.
-func plainFarEndCAM(t *testing.T, job, cam string) (string, string) {
+// endOnly writes the job without member.length into a new folder and
+// returns it: its member is the near end alone, as a measured file of one
+// connection end has it.
+func endOnly(t *testing.T, job string) string {
 	t.Helper()
 	src, err := os.ReadFile(job)
 	if err != nil {
 		t.Fatal(err)
 	}
-	lines := strings.Split(string(src), "\n")
-	for i, l := range lines {
-		if strings.HasPrefix(l, "  length:") {
-			lines = slices.Insert(lines, i+1, "  far_end: plain")
-			break
+	var keep []string
+	for _, l := range strings.Split(string(src), "\n") {
+		if !strings.HasPrefix(l, "  length:") {
+			keep = append(keep, l)
 		}
 	}
-	dir := t.TempDir()
-	plain := filepath.Join(dir, filepath.Base(job))
-	if err := os.WriteFile(plain, []byte(strings.Join(lines, "\n")), 0o644); err != nil {
+	out := filepath.Join(t.TempDir(), filepath.Base(job))
+	if err := os.WriteFile(out, []byte(strings.Join(keep, "\n")), 0o644); err != nil {
 		t.Fatal(err)
 	}
-	if r := gaugeline(t, ".", "sheet", plain, "-o", dir); r.code != 0 {
-		t.Fatalf("sheet %s: exit %d %s", plain, r.code, r.stderr)
-	}
-	mark := strings.TrimSuffix(cam, "-member.cam.dxf")
-	return plain, filepath.Join(dir, mark, cam)
+	return out
 }
 
 func abs(v float64) float64 {
