@@ -1177,7 +1177,7 @@ func (ab *AsBuilt) document() jsonReverify {
 		Deviations:      []jsonDeviation{},
 		DesignGoverning: ab.DesignReport.GoverningResult().ID,
 		DesignFailing:   append([]string{}, ab.DesignReport.Failing()...),
-		Piece: ab.pieceDocument(),
+		Piece:           ab.pieceDocument(),
 	}
 	doc.DesignRatios, doc.RatioChange = ratioMaps(ab.DesignReport, ab.Report)
 	if doc.Reasons == nil {
