@@ -7,7 +7,6 @@ import (
 
 	"github.com/spf13/cobra"
 
-	"gaugeline/detail"
 	"gaugeline/detail/jobfile"
 	"gaugeline/detail/qa"
 	"gaugeline/rules/units"
@@ -30,8 +29,9 @@ func newReverifyCmd(o *rootOptions) *cobra.Command {
 		"reverify matches the holes measured on a fabricated part (a CSV of x,y,diameter[,id] or a DXF of\n"+
 			"the part) to the design in the job, reports each hole's deviation against the fabrication\n"+
 			"tolerance, reclassifies enlarged holes, and recomputes every detailing rule and limit state on\n"+
-			"the as-built geometry. A measured file is of one part (--part): that part's holes are taken as\n"+
-			"measured, the other part's as designed. Exit 0 accept (within tolerance and passing), 3 review\n"+
+			"the as-built geometry. A measured file is of one piece (--part): that piece's holes are taken as\n"+
+			"measured, the other part's as designed. With member.length the member is the whole member: both\n"+
+			"ends' holes, each end checked as built, and the contour's length against member.length. Exit 0 accept (within tolerance and passing), 3 review\n"+
 			"(out of tolerance but passing as built: engineer of record), 1 reject (fails as built, or holes\n"+
 			"missing), 2 bad input.",
 		argsExactly(1, "one job file"),
@@ -42,7 +42,7 @@ func newReverifyCmd(o *rootOptions) *cobra.Command {
 	f.StringVar(&ro.measured, "measured", "", "measured holes: a .csv (x,y,diameter[,id]) or a .dxf of the part")
 	f.StringVar(&ro.layer, "layer", "", "DXF: take the circles on this layer (default: every circle inside the part's contour)")
 	f.StringVar(&ro.align, "align", "datum", "datum (trust the file's frame) or best-fit (fit shift and rotation)")
-	f.StringVar(&ro.part, "part", "member", "the part measured: member (job frame, as its CAM file) or plate (the plate's frame, as its CAM file)")
+	f.StringVar(&ro.part, "part", "member", "the piece measured, as its CAM file names it: member (the job's frame; the whole member with member.length), plate or far-plate (the plate's frame)")
 	f.StringVar(&ro.position, "position", "", "position tolerance, radial (default: the job's tolerance, else 1/16 in or 2 mm)")
 	f.StringVar(&ro.diameter, "diameter", "", "diameter tolerance over nominal (default: the job's tolerance, else 1/32 in or 1 mm)")
 	formatFlag(cmd, &ro.format)
@@ -62,14 +62,13 @@ func runReverify(_ context.Context, _ *rootOptions, ro reverifyOptions, path str
 	if err != nil {
 		return err
 	}
-	if opt.Part == qa.MeasuredPlate && job.Plate == nil {
-		return &jobfile.InputError{File: path, Field: "--part", Msg: "the job has no plate to measure",
-			Hint: "--part plate needs the job's plate block; a measured member is --part member"}
+	if err := qa.CheckPart(job, opt.Part); err != nil {
+		return err
 	}
 	if err := toleranceFlags(ro, job.Units, &opt.Tolerance); err != nil {
 		return err
 	}
-	d, err := detail.Build(job)
+	target, err := qa.Prepare(job, opt.Part)
 	if err != nil {
 		return err
 	}
@@ -77,7 +76,7 @@ func runReverify(_ context.Context, _ *rootOptions, ro reverifyOptions, path str
 	if err != nil {
 		return err
 	}
-	ab, err := qa.Reverify(d, set, opt)
+	ab, err := target.Reverify(set, opt)
 	if err != nil {
 		return &jobfile.InputError{File: path, Msg: err.Error()}
 	}

@@ -46,7 +46,9 @@ type reverifyDoc struct {
 
 func TestReverifyThroughTheBinary(t *testing.T) {
 	us := filepath.Join(measuredDir, "hb-7-qa.yaml")
-	si := filepath.Join(testdata, "jobs", "si-double-angle.yaml")
+	// The td-21 files are of one connection end: the job without
+	// member.length, whose member is the near end alone.
+	si := endOnly(t, filepath.Join(testdata, "jobs", "si-double-angle.yaml"))
 	siSC := filepath.Join(measuredDir, "td-21-sc.yaml")
 	tests := []struct {
 		job, file string
@@ -102,8 +104,7 @@ func TestReverifyThroughTheBinary(t *testing.T) {
 // wrote (testdata/golden) back as measured parts, the plate's in its own
 // frame (--part plate), by datum and by best fit: the holes are the
 // design's, so each is accepted. The member's CAM file is the whole
-// member and reverify matches one end's holes, so the member's are drawn
-// here from the job with a plain far end.
+// member, both ends' holes, and so is the member reverify matches.
 func TestReverifyReadsOurCAMFiles(t *testing.T) {
 	for _, c := range []struct{ job, cam, part string }{
 		{"si-double-angle.yaml", "TD-21.b-member.cam.dxf", "member"},
@@ -114,9 +115,6 @@ func TestReverifyReadsOurCAMFiles(t *testing.T) {
 	} {
 		cam := filepath.Join(testdata, "golden", c.cam)
 		job := filepath.Join(testdata, "jobs", c.job)
-		if c.part == "member" {
-			job, cam = plainFarEndCAM(t, job, c.cam)
-		}
 		if _, err := os.Stat(cam); err != nil {
 			t.Skipf("no %s: %v", cam, err)
 		}
@@ -133,31 +131,26 @@ func TestReverifyReadsOurCAMFiles(t *testing.T) {
 	}
 }
 
-// plainFarEndCAM writes the job with far_end: plain into a new folder,
-// runs sheet on it and returns that job and its CAM file named cam.
-func plainFarEndCAM(t *testing.T, job, cam string) (string, string) {
+// endOnly writes the job without member.length into a new folder and
+// returns it: its member is the near end alone, as a measured file of one
+// connection end has it.
+func endOnly(t *testing.T, job string) string {
 	t.Helper()
 	src, err := os.ReadFile(job)
 	if err != nil {
 		t.Fatal(err)
 	}
-	lines := strings.Split(string(src), "\n")
-	for i, l := range lines {
-		if strings.HasPrefix(l, "  length:") {
-			lines = slices.Insert(lines, i+1, "  far_end: plain")
-			break
+	var keep []string
+	for _, l := range strings.Split(string(src), "\n") {
+		if !strings.HasPrefix(l, "  length:") {
+			keep = append(keep, l)
 		}
 	}
-	dir := t.TempDir()
-	plain := filepath.Join(dir, filepath.Base(job))
-	if err := os.WriteFile(plain, []byte(strings.Join(lines, "\n")), 0o644); err != nil {
+	out := filepath.Join(t.TempDir(), filepath.Base(job))
+	if err := os.WriteFile(out, []byte(strings.Join(keep, "\n")), 0o644); err != nil {
 		t.Fatal(err)
 	}
-	if r := gaugeline(t, ".", "sheet", plain, "-o", dir); r.code != 0 {
-		t.Fatalf("sheet %s: exit %d %s", plain, r.code, r.stderr)
-	}
-	mark := strings.TrimSuffix(cam, "-member.cam.dxf")
-	return plain, filepath.Join(dir, mark, cam)
+	return out
 }
 
 func abs(v float64) float64 {
@@ -294,5 +287,115 @@ func TestReverifyBestFitFindsTheMislocatedHole(t *testing.T) {
 	text := gaugeline(t, dir, "reverify", job, "--measured", csv, "--part", "plate", "--align", "best-fit")
 	if !strings.Contains(text.stdout, "fit        taken on H1, H3, H4; left out H2") {
 		t.Errorf("the text report does not say which holes the fit was taken on:\n%s", text.stdout)
+	}
+}
+
+// TestReverifyWholeMember re-verifies the 16-ft L4x4x1/2 of
+// testdata/jobs/us-brace-16ft.yaml (far_end: mirror) from whole-member
+// files written by ezdxf (testdata/measured/make_piece_fixtures.py): both
+// ends' holes are the member's design holes, so none is extra; a far-end
+// hole drilled 1/4 in off is that hole alone, in the far end; a member cut
+// 1/2 in short is a cut-length finding, and its far end distance, 1 in,
+// fails edge.min (1-1/8 in for a 7/8-in bolt, AISC 360-22 Table J3.4).
+// And the far end's own plate of testdata/jobs/us-brace-two-ends.yaml.
+func TestReverifyWholeMember(t *testing.T) {
+	brace := filepath.Join(testdata, "jobs", "us-brace-16ft.yaml")
+	twoEnds := filepath.Join(testdata, "jobs", "us-brace-two-ends.yaml")
+	type dev struct{ id, status, end string }
+	const in = 1.0 // the job is in inches
+	for _, c := range []struct {
+		job, file, part, align string
+		code                   int
+		verdict                string
+		out                    []dev // the holes not ok, with their end
+		cut, cutDev            float64
+		cutOK                  bool
+		src                    string
+	}{
+		{brace, "br-16-member-nominal-r2000.dxf", "member", "datum", 0, "accept", nil, 192 * in, 0, true, "8 holes where the job puts them, 16 ft = 192 in"},
+		{brace, "br-16-member-nominal-r2000.dxf", "member", "best-fit", 0, "accept", nil, 192 * in, 0, true, "as above, fitted"},
+		{brace, "br-16-member-nominal.csv", "member", "datum", 0, "accept", nil, 0, 0, false, "a CSV has no contour: no cut length"},
+		{brace, "br-16-member-far-off-r2000.dxf", "member", "datum", 3, "review", []dev{{"F3", "out-of-tolerance", "far"}}, 192 * in, 0, true, "1/4 in > 1/16 in (common practice, no source)"},
+		{brace, "br-16-member-far-off-r2000.dxf", "member", "best-fit", 3, "review", []dev{{"F3", "out-of-tolerance", "far"}}, 192 * in, 0, true, "the robust fit leaves F3 out"},
+		{brace, "br-16-member-short-r2000.dxf", "member", "datum", 1, "reject", nil, 191.5 * in, -0.5 * in, false, "cut 1/2 in short; far end 1 in < 1-1/8 in, Table J3.4"},
+		{twoEnds, "br-20-far-plate-r2000.dxf", "far-plate", "datum", 0, "accept", nil, 0, 0, false, "3 holes of the far end's plate in its own frame"},
+		{twoEnds, "br-20-far-plate-r2000.dxf", "far-plate", "best-fit", 0, "accept", nil, 0, 0, false, "as above, fitted"},
+	} {
+		name := c.file + "/" + c.part + "/" + c.align
+		r := gaugeline(t, ".", "reverify", c.job, "--measured", filepath.Join(measuredDir, c.file), "--part", c.part, "--align", c.align, "--format", "json")
+		var doc struct {
+			Verdict    string   `json:"verdict"`
+			Part       string   `json:"part"`
+			Reasons    []string `json:"reasons"`
+			Deviations []struct {
+				ID, Status, End string
+			} `json:"deviations"`
+			Piece *struct {
+				Length          float64  `json:"length"`
+				MeasuredLength  *float64 `json:"measured_length"`
+				LengthDeviation *float64 `json:"length_deviation"`
+				InTol           *bool    `json:"length_within_tolerance"`
+				Far             *struct {
+					AsBuilt string   `json:"as_built"`
+					Failing []string `json:"failing"`
+				} `json:"far"`
+			} `json:"piece"`
+		}
+		if err := json.Unmarshal([]byte(r.stdout), &doc); err != nil {
+			t.Fatalf("%s: exit %d, not JSON: %v\n%s", name, r.code, err, r.stderr)
+		}
+		if r.code != c.code || doc.Verdict != c.verdict || doc.Part != c.part {
+			t.Errorf("%s: exit %d verdict %s part %s, want %d %s %s (%s); reasons %q", name, r.code, doc.Verdict, doc.Part, c.code, c.verdict, c.part, c.src, doc.Reasons)
+		}
+		var bad []dev
+		for _, d := range doc.Deviations {
+			if d.Status != "ok" {
+				bad = append(bad, dev{d.ID, d.Status, d.End})
+			}
+		}
+		if !slices.Equal(bad, c.out) {
+			t.Errorf("%s: holes not ok %v, want %v (%s)", name, bad, c.out, c.src)
+		}
+		if c.part != "member" {
+			if doc.Piece != nil || len(doc.Deviations) != 3 {
+				t.Errorf("%s: piece %v, %d holes; want no piece and the plate's 3 holes", name, doc.Piece, len(doc.Deviations))
+			}
+			continue
+		}
+		if doc.Piece == nil || math.Abs(doc.Piece.Length-192*in) > 1e-6 || len(doc.Deviations) != 8 {
+			t.Fatalf("%s: piece %+v, %d holes; want 192 in and 8 holes (4 each end)", name, doc.Piece, len(doc.Deviations))
+		}
+		if c.cut == 0 {
+			if doc.Piece.MeasuredLength != nil {
+				t.Errorf("%s: measured length %v without a contour", name, *doc.Piece.MeasuredLength)
+			}
+			continue
+		}
+		p := doc.Piece
+		if p.MeasuredLength == nil || math.Abs(*p.MeasuredLength-c.cut) > 1e-6 || math.Abs(*p.LengthDeviation-c.cutDev) > 1e-6 || *p.InTol != c.cutOK {
+			t.Errorf("%s: cut %v dev %v within %v, want %g %g %v (%s)", name, p.MeasuredLength, p.LengthDeviation, p.InTol, c.cut, c.cutDev, c.cutOK, c.src)
+		}
+		if c.verdict == "reject" && (p.Far == nil || p.Far.AsBuilt != "fail" || !slices.Contains(p.Far.Failing, "edge.min")) {
+			t.Errorf("%s: far end as built %+v, want edge.min failing (%s)", name, p.Far, c.src)
+		}
+		if !c.cutOK && !slices.ContainsFunc(doc.Reasons, func(s string) bool { return strings.HasPrefix(s, "cut length out of tolerance: 0.5000 in short") }) {
+			t.Errorf("%s: reasons %q, want the cut-length finding", name, doc.Reasons)
+		}
+	}
+}
+
+// TestReverifyPartTheJobHasNot: a part the job does not have is bad
+// input naming --part (exit 2); an unknown part is a usage error.
+func TestReverifyPartTheJobHasNot(t *testing.T) {
+	brace := filepath.Join(testdata, "jobs", "us-brace-16ft.yaml")
+	csv := filepath.Join(measuredDir, "br-16-member-nominal.csv")
+	for _, c := range []struct{ part, want string }{
+		{"far-plate", "--part: the job's far end has no plate of its own"},
+		{"splice-1", `--part: unknown part "splice-1" (want member, plate or far-plate)`},
+	} {
+		r := gaugeline(t, ".", "reverify", brace, "--measured", csv, "--part", c.part)
+		if r.code != 2 || !strings.Contains(r.stderr, c.want) {
+			t.Errorf("--part %s: exit %d %q, want 2 and %q", c.part, r.code, r.stderr, c.want)
+		}
 	}
 }

@@ -61,34 +61,6 @@ func ParseAlign(s string) (AlignMode, error) {
 	return AlignDatum, fmt.Errorf("unknown alignment %q (want datum or best-fit)", s)
 }
 
-// MeasuredPart is the connected part a measured file is of: its holes are those
-// of one ply (SPEC §8 measures a part, not the joint).
-type MeasuredPart int
-
-const (
-	MeasuredMember MeasuredPart = iota // the member (both angles of a pair alike)
-	MeasuredPlate                      // the gusset or splice plate
-)
-
-// String returns the flag spelling.
-func (p MeasuredPart) String() string {
-	if p == MeasuredPlate {
-		return "plate"
-	}
-	return "member"
-}
-
-// ParsePart reads the --part flag.
-func ParsePart(s string) (MeasuredPart, error) {
-	switch s {
-	case "member":
-		return MeasuredMember, nil
-	case "plate":
-		return MeasuredPlate, nil
-	}
-	return MeasuredMember, fmt.Errorf("unknown part %q (want member or plate)", s)
-}
-
 // partFrame maps the job's frame to the measured part's own frame, the
 // frame of its cut-sheet view and CAM file (see detail/sheet.go): the
 // member's is the job's; the plate's is the job's turned half a turn about
@@ -100,7 +72,7 @@ type partFrame struct {
 }
 
 func newPartFrame(d *detail.Design, p MeasuredPart) partFrame {
-	if p != MeasuredPlate {
+	if !p.isPlate() {
 		return partFrame{}
 	}
 	pl := d.Conn.Plate
@@ -172,6 +144,10 @@ type Deviation struct {
 	AsBuilt      engine.Hole
 	Reclassified bool
 	Why          []string // what is out of tolerance, for people
+	// End is the end of a whole member the hole belongs to, "near" or
+	// "far" (an extra hole: the half of the member it lies in); "" when
+	// the part measured is not a whole member.
+	End string
 }
 
 // Alignment is the transform found between the measured file's frame and
@@ -205,6 +181,9 @@ type AsBuilt struct {
 	Deviations   []Deviation // design holes in order, then extra holes
 	Verdict      QAVerdict
 	Reasons      []string
+	// Piece is the whole member measured (member.length given, --part
+	// member; piece.go); nil for one connection end or a plate.
+	Piece *Piece
 }
 
 // ReverifyOptions are the choices of the command line; a zero tolerance
@@ -260,9 +239,22 @@ func Reverify(d *detail.Design, set *measured.Set, opt ReverifyOptions) (*AsBuil
 	if d == nil || set == nil || len(set.Holes) == 0 {
 		panic("detail: Reverify needs a design and measured holes")
 	}
-	if opt.Part == MeasuredPlate && d.Conn.Plate == nil {
+	if opt.Part.isPlate() && d.Conn.Plate == nil {
 		return nil, ErrNoPlate
 	}
+	ab, err := newAsBuilt(d, set, opt)
+	if err != nil {
+		return nil, err
+	}
+	if err := ab.run(opt.Align); err != nil {
+		return nil, err
+	}
+	return ab, nil
+}
+
+// newAsBuilt is the outcome of reverify before the matching: the design
+// checked, the tolerances in force.
+func newAsBuilt(d *detail.Design, set *measured.Set, opt ReverifyOptions) (*AsBuilt, error) {
 	dr, err := detail.Check(d)
 	if err != nil {
 		return nil, err
@@ -275,12 +267,29 @@ func Reverify(d *detail.Design, set *measured.Set, opt ReverifyOptions) (*AsBuil
 	if opt.Tolerance.Diameter > 0 {
 		ab.Tolerance.Diameter = opt.Tolerance.Diameter
 	}
-	ab.Gate = matchGate(&d.Conn, ab.Tolerance)
+	return ab, nil
+}
+
+// designHoles are the design holes the measured part carries: the
+// connection's, or the whole member's (both ends') for a piece.
+func (ab *AsBuilt) designHoles() []engine.Hole {
+	if ab.Piece != nil {
+		return ab.Piece.Holes
+	}
+	return ab.Design.Conn.Holes
+}
+
+// run aligns and matches the measured holes, finds the deviations,
+// checks the as-built geometry and decides.
+func (ab *AsBuilt) run(mode AlignMode) error {
+	set := ab.Measured
+	holes := ab.designHoles()
+	ab.Gate = matchGate(ab.boltD(), holes, ab.Tolerance)
 
 	// The design's holes in the measured part's frame: the file's frame
 	// for datum alignment, the start of a best fit.
-	des := make([]abVec, len(d.Conn.Holes))
-	for i, h := range d.Conn.Holes {
+	des := make([]abVec, len(holes))
+	for i, h := range holes {
 		des[i] = ab.frame.of(float64(h.X), float64(h.Y))
 	}
 	mea := make([]abVec, len(set.Holes))
@@ -289,7 +298,7 @@ func Reverify(d *detail.Design, set *measured.Set, opt ReverifyOptions) (*AsBuil
 	}
 	var tf abRigid
 	var match []int
-	switch opt.Align {
+	switch mode {
 	case AlignBestFit:
 		tf, match, ab.Alignment.Iterations = bestFit(des, mea, float64(ab.Gate), set.Contour)
 		ab.Alignment.Note = "rigid shift and rotation fitted by least squares over the matched holes"
@@ -307,15 +316,16 @@ func Reverify(d *detail.Design, set *measured.Set, opt ReverifyOptions) (*AsBuil
 		}
 		match = assignHoles(des, tf.inverseAll(mea), float64(ab.Gate))
 	}
-	ab.Alignment.Mode = opt.Align
+	ab.Alignment.Mode = mode
 	ab.Alignment.Shift = [2]units.Length{units.Length(tf.t.x), units.Length(tf.t.y)}
 	ab.Alignment.Rotation = tf.theta
 	if ab.Alignment.Note == "" {
 		ab.Alignment.Note = "datum: the file's frame as measured"
 	}
 	aligned := tf.inverseAll(mea)
+	ab.Piece.measureCut(set.Contour, tf, mode, ab.Tolerance)
 	if err := ab.deviations(aligned, match); err != nil {
-		return nil, err
+		return err
 	}
 	ab.markLeftOut()
 	var sum float64
@@ -330,21 +340,21 @@ func Reverify(d *detail.Design, set *measured.Set, opt ReverifyOptions) (*AsBuil
 		ab.Alignment.RMS = units.Length(math.Sqrt(sum / float64(n)))
 	}
 	if err := ab.check(); err != nil {
-		return nil, err
+		return err
 	}
 	ab.decide()
-	return ab, nil
+	return nil
 }
 
 // matchGate is the farthest a measured hole may lie from a design hole and
 // still be that hole: the bolt diameter, or half the least design spacing
 // when that is less, but never under twice the position tolerance. A hole
 // beyond it is an extra hole (and the design hole missing).
-func matchGate(c *engine.Connection, tol jobfile.Tolerance) units.Length {
-	g := c.Bolt.D
-	for i := range c.Holes {
-		for j := i + 1; j < len(c.Holes); j++ {
-			s := units.Length(math.Hypot(float64(c.Holes[i].X-c.Holes[j].X), float64(c.Holes[i].Y-c.Holes[j].Y)))
+func matchGate(D units.Length, holes []engine.Hole, tol jobfile.Tolerance) units.Length {
+	g := D
+	for i := range holes {
+		for j := i + 1; j < len(holes); j++ {
+			s := units.Length(math.Hypot(float64(holes[i].X-holes[j].X), float64(holes[i].Y-holes[j].Y)))
 			g = min(g, s/2)
 		}
 	}
@@ -355,13 +365,13 @@ func matchGate(c *engine.Connection, tol jobfile.Tolerance) units.Length {
 // measured hole of design hole i, or -1): each design hole in order, then
 // the measured holes no design hole took.
 func (ab *AsBuilt) deviations(aligned []abVec, match []int) error {
-	c := &ab.Design.Conn
+	holes := ab.designHoles()
 	used := make([]bool, len(ab.Measured.Holes))
-	for i := range c.Holes {
-		h := ab.designInPart(&c.Holes[i])
+	for i := range holes {
+		h := ab.designInPart(&holes[i])
 		k := match[i]
 		if k < 0 {
-			ab.Deviations = append(ab.Deviations, Deviation{ID: h.ID, Design: h, Status: HoleMissing, Why: []string{"missing"}})
+			ab.Deviations = append(ab.Deviations, Deviation{ID: h.ID, Design: h, Status: HoleMissing, Why: []string{"missing"}, End: ab.Piece.endOf(i, 0)})
 			continue
 		}
 		used[k] = true
@@ -369,6 +379,7 @@ func (ab *AsBuilt) deviations(aligned []abVec, match []int) error {
 		if err != nil {
 			return err
 		}
+		dv.End = ab.Piece.endOf(i, 0)
 		ab.Deviations = append(ab.Deviations, dv)
 	}
 	return ab.extraDeviations(aligned, used)
@@ -454,7 +465,8 @@ func (ab *AsBuilt) extraDeviations(aligned []abVec, used []bool) error {
 		n++
 		dv := Deviation{ID: fmt.Sprintf("X%d", n), MeasuredID: m.ID, Line: m.Line, Status: HoleExtra,
 			X: units.Length(aligned[k].x), Y: units.Length(aligned[k].y),
-			Width: units.Length(m.Width), Length: units.Length(m.Length), Why: []string{"not in the design"}}
+			Width: units.Length(m.Width), Length: units.Length(m.Length), Why: []string{"not in the design"},
+			End: ab.Piece.endOf(-1, units.Length(aligned[k].x))}
 		hb, err := ab.classify(engine.Hole{HoleShape: engine.HoleShape{Type: rules.Standard}}, m, dv.X, dv.Y)
 		if err != nil {
 			return err
@@ -471,7 +483,7 @@ func (ab *AsBuilt) extraDeviations(aligned []abVec, used []bool) error {
 func (ab *AsBuilt) designInPart(h *engine.Hole) engine.Hole {
 	p := ab.frame.of(float64(h.X), float64(h.Y))
 	out := engine.Hole{ID: h.ID, X: units.Length(p.x), Y: units.Length(p.y), HoleShape: h.HoleShape}
-	if ab.Part == MeasuredPlate {
+	if ab.Part.isPlate() {
 		out.HoleShape = h.InPlate() // a half turn keeps extents along x and y
 	}
 	return out
@@ -482,21 +494,21 @@ func (ab *AsBuilt) designInPart(h *engine.Hole) engine.Hole {
 // the measured centre, back in the job's frame, through both plies (one
 // bolt, one centre); the measured part's ply as measured, the other as
 // designed. An extra hole is taken as measured in both plies.
-func (ab *AsBuilt) asBuiltHole(dv Deviation, design *engine.Hole) engine.Hole {
+func (ab *AsBuilt) asBuiltHole(dv Deviation, design *engine.Hole, plate bool) engine.Hole {
 	p := ab.frame.of(float64(dv.X), float64(dv.Y))
 	h := engine.Hole{ID: dv.AsBuilt.ID, X: units.Length(p.x), Y: units.Length(p.y), HoleShape: dv.AsBuilt.HoleShape}
-	if design == nil || ab.Design.Conn.Plate == nil {
+	if design == nil || !plate {
 		return h
 	}
 	other := design.InPlate()
-	if ab.Part == MeasuredPlate {
+	if ab.Part.isPlate() {
 		other = design.HoleShape
 		h.HoleShape = design.HoleShape
 	}
 	if other == dv.AsBuilt.HoleShape {
 		return h
 	}
-	if ab.Part == MeasuredPlate {
+	if ab.Part.isPlate() {
 		plate := dv.AsBuilt.HoleShape
 		h.Plate = &plate
 	} else {
@@ -576,8 +588,12 @@ func (ab *AsBuilt) classify(h engine.Hole, m measured.Hole, x, y units.Length) (
 
 // check builds the as-built design and checks it: every limit state and
 // detailing rule on the measured hole centres and sizes, with hole.size
-// allowing the fabrication tolerance.
+// allowing the fabrication tolerance. A whole member is checked at each
+// end (checkPiece).
 func (ab *AsBuilt) check() error {
+	if ab.Piece != nil {
+		return ab.checkPiece()
+	}
 	d := ab.Design
 	var holes []engine.Hole
 	for i, dv := range ab.Deviations {
@@ -588,8 +604,19 @@ func (ab *AsBuilt) check() error {
 		if dv.Status != HoleExtra {
 			design = &d.Conn.Holes[i]
 		}
-		holes = append(holes, ab.asBuiltHole(dv, design))
+		holes = append(holes, ab.asBuiltHole(dv, design, d.Conn.Plate != nil))
 	}
+	r, err := ab.checkBuilt(d, holes)
+	if err != nil {
+		return err
+	}
+	ab.Report = r
+	return nil
+}
+
+// checkBuilt checks design d with the as-built holes (in d's frame) and
+// adds the cautions of an as-built check.
+func (ab *AsBuilt) checkBuilt(d *detail.Design, holes []engine.Hole) (*detail.Report, error) {
 	// The engine groups holes into gage lines and rows with a slack of a
 	// quarter diameter, so the measured centres go in as they are.
 	built := d.WithHoles(holes)
@@ -597,22 +624,24 @@ func (ab *AsBuilt) check() error {
 	built.Info.AsBuilt, built.Info.DiameterTol = true, ab.Tolerance.Diameter
 	r, err := detail.Check(built)
 	if err != nil {
-		return err
+		return nil, err
 	}
 	r.Cautions = append(r.Cautions, ab.partCaution(),
 		"As built: holes within a quarter of the bolt diameter of one another across (along) the load are taken as one gage line (row).")
 	if ab.Alignment.Mode == AlignBestFit {
 		r.Cautions = append(r.Cautions, "Best-fit alignment places the hole group on the design: edge distances are checked as designed plus the holes' deviations within the group, not measured from the part's own edges; use --align datum to check them.")
 	}
-	ab.Report = r
-	return nil
+	return r, nil
 }
 
 // partCaution says which part was measured and what the check takes of the
 // other.
 func (ab *AsBuilt) partCaution() string {
-	if ab.Part == MeasuredPlate {
-		return "As built: the plate was measured. Its holes take the measured sizes and the hole types they now are; " +
+	if ab.Piece != nil {
+		return ab.Piece.caution()
+	}
+	if ab.Part.isPlate() {
+		return "As built: the " + ab.Part.words() + " was measured. Its holes take the measured sizes and the hole types they now are; " +
 			"the member's holes keep their designed type and size. Each bolt has one centre, the measured one, in both parts; " +
 			"the plate's free edge and centre line are where the file's frame puts them, the member's end and edges as designed."
 	}
@@ -630,11 +659,11 @@ func (ab *AsBuilt) decide() {
 	for _, dv := range ab.Deviations {
 		switch dv.Status {
 		case HoleMissing:
-			missing = append(missing, dv.ID)
+			missing = append(missing, holeName(dv, dv.ID))
 		case HoleExtra:
-			extra = append(extra, dv.MeasuredID)
+			extra = append(extra, holeName(dv, dv.MeasuredID))
 		case HoleOutOfTolerance:
-			out = append(out, dv.ID)
+			out = append(out, holeName(dv, dv.ID))
 		}
 	}
 	r := ab.Report
@@ -654,10 +683,17 @@ func (ab *AsBuilt) decide() {
 	}
 	if !r.Pass {
 		ab.Verdict = Reject
-		ab.Reasons = append(ab.Reasons, "fails as built: "+strings.Join(r.Failing(), ", "))
+		end := ""
+		if ab.Piece != nil {
+			end = "near end "
+		}
+		ab.Reasons = append(ab.Reasons, end+"fails as built: "+strings.Join(r.Failing(), ", "))
 		if !ab.DesignReport.Pass {
 			ab.Reasons = append(ab.Reasons, "the design itself fails: "+strings.Join(ab.DesignReport.Failing(), ", "))
 		}
+	}
+	if ab.Piece != nil {
+		ab.decidePiece()
 	}
 	if ab.Verdict == Review {
 		ab.Reasons = append(ab.Reasons, "every detailing rule and limit state passes as built: send to the engineer of record")
@@ -1076,6 +1112,7 @@ type jsonDeviation struct {
 	Reclassified bool            `json:"reclassified"`
 	InTolerance  bool            `json:"within_tolerance"`
 	Why          []string        `json:"why,omitempty"`
+	End          string          `json:"end,omitempty"` // a whole member: "near" or "far"
 }
 
 type jsonAlignment struct {
@@ -1116,6 +1153,9 @@ type jsonReverify struct {
 	DesignFailing   []string                  `json:"design_failing"` // [] when the design passes
 	DesignRatios    map[string]detail.JSONNum `json:"design_ratios"`
 	RatioChange     map[string]detail.JSONNum `json:"ratio_change"`
+	// Piece is the whole member (member.length, --part member): its cut
+	// length and the far end as built; absent else.
+	Piece *jsonPiece `json:"piece,omitempty"`
 }
 
 func (ab *AsBuilt) document() jsonReverify {
@@ -1137,9 +1177,9 @@ func (ab *AsBuilt) document() jsonReverify {
 		Deviations:      []jsonDeviation{},
 		DesignGoverning: ab.DesignReport.GoverningResult().ID,
 		DesignFailing:   append([]string{}, ab.DesignReport.Failing()...),
-		DesignRatios:    map[string]detail.JSONNum{},
-		RatioChange:     map[string]detail.JSONNum{},
+		Piece:           ab.pieceDocument(),
 	}
+	doc.DesignRatios, doc.RatioChange = ratioMaps(ab.DesignReport, ab.Report)
 	if doc.Reasons == nil {
 		doc.Reasons = []string{}
 	}
@@ -1148,7 +1188,7 @@ func (ab *AsBuilt) document() jsonReverify {
 	}
 	for _, dv := range ab.Deviations {
 		j := jsonDeviation{ID: dv.ID, MeasuredID: dv.MeasuredID, Line: dv.Line, Status: dv.Status.String(),
-			Reclassified: dv.Reclassified, InTolerance: dv.Status == HoleOK, Why: dv.Why}
+			Reclassified: dv.Reclassified, InTolerance: dv.Status == HoleOK, Why: dv.Why, End: dv.End}
 		if dv.Status != HoleExtra {
 			j.DesignX, j.DesignY = length(dv.Design.X), length(dv.Design.Y)
 			j.DesignDia = length(min(dv.Design.Dx, dv.Design.Dy))
@@ -1170,17 +1210,24 @@ func (ab *AsBuilt) document() jsonReverify {
 		}
 		doc.Deviations = append(doc.Deviations, j)
 	}
+	return doc
+}
+
+// ratioMaps are the JSON's design_ratios and ratio_change of the design's
+// report and the as-built one.
+func ratioMaps(designed, built *detail.Report) (ratios, change map[string]detail.JSONNum) {
+	ratios, change = map[string]detail.JSONNum{}, map[string]detail.JSONNum{}
 	design := map[string]float64{}
-	for _, x := range ab.DesignReport.Results {
-		doc.DesignRatios[x.ID] = detail.JSONNum(x.Ratio)
+	for _, x := range designed.Results {
+		ratios[x.ID] = detail.JSONNum(x.Ratio)
 		design[x.ID] = x.Ratio
 	}
-	for _, x := range ab.Report.Results {
+	for _, x := range built.Results {
 		if dr, ok := design[x.ID]; ok {
-			doc.RatioChange[x.ID] = detail.JSONNum(x.Ratio - dr)
+			change[x.ID] = detail.JSONNum(x.Ratio - dr)
 		}
 	}
-	return doc
+	return ratios, change
 }
 
 // JSON returns the reverify document as indented JSON, ending in a newline.
@@ -1234,10 +1281,22 @@ func (ab *AsBuilt) holeRow(dv Deviation) []string {
 		row[2], row[3] = l(dv.Design.X), l(dv.Design.Y)
 		row[9] = dv.Design.Type.String()
 	}
+	if ab.Piece != nil {
+		row = slices.Insert(row, 1, dv.End)
+	}
 	return row
 }
 
 var holeHeader = []string{"HOLE", "MEASURED", "X", "Y", "DX", "DY", "RADIAL", "SIZE", "SIZE DEV", "TYPE", "STATUS"}
+
+// holeHeader is the hole table's header: with an END column after the
+// hole for a whole member.
+func (ab *AsBuilt) holeHeader() []string {
+	if ab.Piece == nil {
+		return holeHeader
+	}
+	return slices.Insert(slices.Clone(holeHeader), 1, "END")
+}
 
 // header lines shared by the text and Markdown reports.
 func (ab *AsBuilt) preamble() [][2]string {
@@ -1248,7 +1307,12 @@ func (ab *AsBuilt) preamble() [][2]string {
 	m := ab.Measured
 	part := "member: its holes reclassified from the measured sizes, the plate's as designed; coordinates in the job's frame"
 	switch {
-	case ab.Part == MeasuredPlate:
+	case ab.Piece != nil:
+		part = ab.Piece.partRow(ab.Design.Conn.Plate != nil)
+	case ab.Part == MeasuredFarPlate:
+		part = "far-plate: the far end's own plate; its holes reclassified from the measured sizes, the member's as designed; coordinates in the plate's frame " +
+			"(x from the free edge, y from the side its CAM file puts at y = 0); the far end's x run from the far cut end"
+	case ab.Part.isPlate():
 		part = "plate: its holes reclassified from the measured sizes, the member's as designed; coordinates in the plate's frame " +
 			"(x from the free edge, y from the side its CAM file puts at y = 0)"
 	case ab.Design.Conn.Plate == nil:
@@ -1261,6 +1325,9 @@ func (ab *AsBuilt) preamble() [][2]string {
 			units.FormatLength(ab.Tolerance.Position, sys, units.Exact), units.FormatLength(ab.Tolerance.Diameter, sys, units.Exact), units.FormatLength(ab.Gate, sys, units.Exact))},
 		{"alignment", align},
 	}
+	if row, ok := ab.Piece.cutRow(sys, ab.Tolerance); ok {
+		rows = append(rows, [2]string{"cut length", row})
+	}
 	if len(a.LeftOut) > 0 {
 		rows = append(rows, [2]string{"fit", fmt.Sprintf("taken on %s; left out %s (off by more than the position tolerance from the fit on the others)",
 			strings.Join(a.FitOn, ", "), strings.Join(a.LeftOut, ", "))})
@@ -1268,14 +1335,15 @@ func (ab *AsBuilt) preamble() [][2]string {
 	return rows
 }
 
-// ratioRows pairs each as-built limit state with the design's ratio.
-func (ab *AsBuilt) ratioRows() [][]string {
+// ratioRows pairs each as-built limit state of built with the ratio of
+// the design's report.
+func ratioRows(designed, built *detail.Report) [][]string {
 	design := map[string]float64{}
-	for _, x := range ab.DesignReport.Results {
+	for _, x := range designed.Results {
 		design[x.ID] = x.Ratio
 	}
 	var rows [][]string
-	for i, x := range ab.Report.Results {
+	for i, x := range built.Results {
 		dr, change := "-", "-"
 		if v, ok := design[x.ID]; ok {
 			dr, change = detail.RatioText(v), fmt.Sprintf("%+.3f", x.Ratio-v)
@@ -1284,12 +1352,23 @@ func (ab *AsBuilt) ratioRows() [][]string {
 			}
 		}
 		mark := detail.PassMark(x.Pass, false)
-		if i == ab.Report.Governing {
+		if i == built.Governing {
 			mark += " <"
 		}
 		rows = append(rows, []string{x.ID, x.Clause, dr, detail.RatioText(x.Ratio), change, mark})
 	}
 	return rows
+}
+
+// writeRatioTable writes the as-built limit states beside the design's
+// under title.
+func writeRatioTable(b *strings.Builder, title string, rows [][]string) {
+	tw := tabwriter.NewWriter(b, 0, 0, 2, ' ', 0)
+	fmt.Fprintln(tw, title+"\tCLAUSE\tDESIGN RATIO\tAS-BUILT RATIO\tCHANGE\t")
+	for _, row := range rows {
+		fmt.Fprintln(tw, strings.Join(row, "\t"))
+	}
+	tw.Flush()
 }
 
 // WriteText writes the reverify report as aligned tables for a terminal.
@@ -1308,20 +1387,20 @@ func (ab *AsBuilt) WriteText(w io.Writer) error {
 	}
 	b.WriteString("\n")
 	tw = tabwriter.NewWriter(&b, 0, 0, 2, ' ', 0)
-	fmt.Fprintln(tw, strings.Join(holeHeader, "\t")+"\tWHY")
+	fmt.Fprintln(tw, strings.Join(ab.holeHeader(), "\t")+"\tWHY")
 	for _, dv := range ab.Deviations {
 		fmt.Fprintln(tw, strings.Join(ab.holeRow(dv), "\t")+"\t"+strings.Join(dv.Why, "; "))
 	}
 	tw.Flush()
 	b.WriteString("\n")
-	tw = tabwriter.NewWriter(&b, 0, 0, 2, ' ', 0)
-	fmt.Fprintln(tw, "LIMIT STATE (AS BUILT)\tCLAUSE\tDESIGN RATIO\tAS-BUILT RATIO\tCHANGE\t")
-	for _, row := range ab.ratioRows() {
-		fmt.Fprintln(tw, strings.Join(row, "\t"))
+	title, dtitle := "LIMIT STATE (AS BUILT)", "DETAILING (AS BUILT)"
+	if ab.Piece != nil {
+		title, dtitle = "LIMIT STATE (NEAR END, AS BUILT)", "DETAILING (NEAR END, AS BUILT)"
 	}
-	tw.Flush()
+	writeRatioTable(&b, title, ratioRows(ab.DesignReport, ab.Report))
 	b.WriteString("\n")
-	detail.FindingsText(&b, sys, "DETAILING (AS BUILT)", ab.Report.Findings)
+	detail.FindingsText(&b, sys, dtitle, ab.Report.Findings)
+	ab.farText(&b)
 	fmt.Fprintf(&b, "\nverdict: %s\n", strings.ToUpper(ab.Verdict.String()))
 	for _, r := range ab.Reasons {
 		fmt.Fprintf(&b, "  %s\n", r)
@@ -1351,7 +1430,8 @@ func (ab *AsBuilt) WriteMarkdown(w io.Writer) error {
 	for _, r := range ab.Reasons {
 		fmt.Fprintf(&b, "- %s\n", detail.MarkdownEscape(r))
 	}
-	b.WriteString("\n## Holes\n\n| " + strings.ToLower(strings.Join(holeHeader, " | ")) + " | why |\n|" + strings.Repeat("---|", len(holeHeader)+1) + "\n")
+	hdr := ab.holeHeader()
+	b.WriteString("\n## Holes\n\n| " + strings.ToLower(strings.Join(hdr, " | ")) + " | why |\n|" + strings.Repeat("---|", len(hdr)+1) + "\n")
 	for _, dv := range ab.Deviations {
 		row := ab.holeRow(dv)
 		for i := range row {
@@ -1359,11 +1439,16 @@ func (ab *AsBuilt) WriteMarkdown(w io.Writer) error {
 		}
 		fmt.Fprintf(&b, "| %s | %s |\n", strings.Join(row, " | "), detail.MarkdownEscape(strings.Join(dv.Why, "; ")))
 	}
-	b.WriteString("\n## Limit states as built\n\n| id | clause | design ratio | as-built ratio | change | result |\n|---|---|---:|---:|---:|---|\n")
-	for _, row := range ab.ratioRows() {
+	lsTitle, dTitle := "Limit states as built", "Detailing as built"
+	if ab.Piece != nil {
+		lsTitle, dTitle = "Near end: limit states as built", "Near end: detailing as built"
+	}
+	b.WriteString("\n## " + lsTitle + "\n\n| id | clause | design ratio | as-built ratio | change | result |\n|---|---|---:|---:|---:|---|\n")
+	for _, row := range ratioRows(ab.DesignReport, ab.Report) {
 		fmt.Fprintf(&b, "| %s |\n", strings.Join(row, " | "))
 	}
-	detail.FindingsMarkdown(&b, sys, "Detailing as built", ab.Report.Findings)
+	detail.FindingsMarkdown(&b, sys, dTitle, ab.Report.Findings)
+	ab.farMarkdown(&b)
 	b.WriteString("\n")
 	for _, c := range ab.Report.Cautions {
 		fmt.Fprintf(&b, "> %s\n>\n", c)

@@ -162,7 +162,7 @@ func (ab *AsBuilt) robustAlignment(des, mea []abVec, tf abRigid, match []int) (a
 	if changed {
 		match = assignHoles(des, tf.inverseAll(mea), float64(ab.Gate))
 	}
-	for i, h := range ab.Design.Conn.Holes {
+	for i, h := range ab.designHoles() {
 		switch {
 		case in[i] && match[i] >= 0:
 			ab.Alignment.FitOn = append(ab.Alignment.FitOn, h.ID)

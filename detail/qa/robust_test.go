@@ -210,7 +210,7 @@ func TestRobustFitFindsAnyOneOutlier(t *testing.T) {
 		part := MeasuredPart(rapid.IntRange(0, 1).Draw(rt, "part"))
 		k := rapid.IntRange(0, len(d.Conn.Holes)-1).Draw(rt, "hole")
 		tol := float64(d.Job.Tolerance.Position)
-		gate := float64(matchGate(&d.Conn, d.Job.Tolerance))
+		gate := float64(matchGate(d.Conn.Bolt.D, d.Conn.Holes, d.Job.Tolerance))
 		e := rapid.Float64Range(3*tol, 0.9*gate).Draw(rt, "offset")
 		dir := rapid.Float64Range(-math.Pi, math.Pi).Draw(rt, "direction")
 		deg := rapid.Float64Range(-80, 80).Draw(rt, "turn")
