@@ -7,6 +7,7 @@ import (
 	"gonum.org/v1/gonum/spatial/r2"
 
 	"gaugeline/detail"
+	"gaugeline/detail/bom"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
 )
@@ -24,15 +25,15 @@ func (l sheetLayout) billOfMaterial(s *Sheet, r *detail.Report, top float64) flo
 		return top
 	}
 	sys := l.sys
-	wu := detail.WeightUnit(sys)
+	wu := bom.WeightUnit(sys)
 	shop := func(v units.Length) string { return units.FormatLength(v, sys, units.Shop) }
 	rows := [][]string{{"MARK", "QTY", "EACH", "SIZE", "GRADE", "CUT LENGTH", "WEIGHT EACH " + strings.ToUpper(wu),
 		"WEIGHT " + strings.ToUpper(wu), "CAM FILE", "NOTE"}}
 	for _, p := range ps {
 		rows = append(rows, []string{p.Mark, fmt.Sprint(p.Quantity), fmt.Sprint(p.Each), p.Size, p.Grade, shop(p.Length),
-			detail.WeightText(p.Weight), detail.WeightText(p.TotalWeight()), p.CAMFile(s.Mark), strings.ToUpper(p.Note)})
+			bom.WeightText(p.Weight), bom.WeightText(p.TotalWeight()), p.CAMFile(s.Mark), strings.ToUpper(p.Note)})
 	}
-	rows = append(rows, []string{"TOTAL", "", "", "", "", "", "", detail.WeightText(detail.TotalWeight(ps)), "", ""})
+	rows = append(rows, []string{"TOTAL", "", "", "", "", "", "", bom.WeightText(bom.TotalWeight(ps)), "", ""})
 	s.BillOfMaterial = rows
 	density := fmt.Sprintf("WEIGHTS FROM AREA x LENGTH x %g LB/FT3 (PLATES: OUTLINE AREA x THICKNESS); QTY FOR %d OFF, EACH PER MEMBER",
 		density(sys), max(r.Design.Job.Quantity, 1))
@@ -54,7 +55,7 @@ func (l sheetLayout) billOfMaterial(s *Sheet, r *detail.Report, top float64) flo
 		notes = appendNew(notes, "FAYING SURFACES, "+strings.ToUpper(b.End)+": "+strings.ToUpper(b.Faying))
 	}
 	s.BoltList = brows
-	notes = append(notes, strings.ToUpper(detail.BoltLengthSource), strings.ToUpper(detail.WasherSource))
+	notes = append(notes, strings.ToUpper(bom.BoltLengthSource), strings.ToUpper(bom.WasherSource))
 	var wrapped []string
 	for _, n := range notes {
 		wrapped = append(wrapped, wrap(n, 140)...)

@@ -8,6 +8,7 @@ import (
 	"strings"
 
 	"gaugeline/detail"
+	"gaugeline/detail/bom"
 	"gaugeline/engine"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
@@ -39,10 +40,10 @@ import (
 //     mirror), the free edge is x' = 0 and every hole has x' > 0, y' > 0.
 
 // ViewBeyond is how far a view runs past the row of holes farthest from
-// its datum edge: detail.ViewBeyond, which the bill of material's plate
+// its datum edge: bom.ViewBeyond, which the bill of material's plate
 // length takes too.
 func ViewBeyond(pattern units.Length, sys units.System) units.Length {
-	return detail.ViewBeyond(pattern, sys)
+	return bom.ViewBeyond(pattern, sys)
 }
 
 // Layer is the drawing layer an item goes on: one per operation, so that
