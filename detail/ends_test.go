@@ -138,19 +138,30 @@ func TestGoverningEnd(t *testing.T) {
 
 // far_end: mirror (written or not) and far_end: plain leave the check and
 // its JSON as they were: the ends are the same, or the far end carries
-// nothing to check.
+// nothing to check. (The bill of material after it differs for plain: one
+// plate and one end's bolts; bom_test.go.)
 func TestMirrorAndPlainLeaveTheReport(t *testing.T) {
 	base, err := CheckJob(mustParse(t, endsJob("")))
 	if err != nil {
 		t.Fatal(err)
 	}
-	want, _ := base.JSON()
+	check := func(r *Report) []byte {
+		b, err := json.Marshal(r.Document())
+		if err != nil {
+			t.Fatal(err)
+		}
+		return b
+	}
+	want, wantAll := check(base), mustJSON(t, base)
 	for _, fe := range []string{"  far_end: mirror\n", "  far_end: plain\n"} {
 		r, err := CheckJob(mustParse(t, endsJob(fe)))
 		if err != nil {
 			t.Fatal(err)
 		}
-		got, _ := r.JSON()
+		got := check(r)
+		if fe == "  far_end: mirror\n" && !bytes.Equal(mustJSON(t, r), wantAll) {
+			t.Errorf("mirror written: JSON (with its bill of material) differs from the job without far_end")
+		}
 		if r.Far != nil || !bytes.Equal(got, want) {
 			t.Errorf("%q: far %v; JSON differs from the job without far_end", fe, r.Far)
 		}
@@ -190,4 +201,13 @@ func TestFarEndErrorNamesItsField(t *testing.T) {
 	if !errors.As(err, &ie) || ie.Field != "member.far_end.bolts.grade" || ie.Line != 10 {
 		t.Errorf("err %v (%+v), want member.far_end.bolts.grade at line 10", err, ie)
 	}
+}
+
+func mustJSON(t *testing.T, r *Report) []byte {
+	t.Helper()
+	b, err := r.JSON()
+	if err != nil {
+		t.Fatal(err)
+	}
+	return b
 }

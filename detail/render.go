@@ -167,6 +167,7 @@ func (r *Report) WriteText(w io.Writer) error {
 	if r.Far != nil {
 		r.Far.farText(&b)
 	}
+	r.bomText(&b)
 	fmt.Fprintf(&b, "\nverdict: %s — %s\n", strings.ToUpper(r.Verdict()), r.VerdictReason())
 	r.textFails(&b, "")
 	if r.Far != nil {
@@ -233,6 +234,7 @@ func (r *Report) WriteMarkdown(w io.Writer) error {
 	if r.Far != nil {
 		r.Far.farMarkdown(&b)
 	}
+	r.bomMarkdown(&b)
 	fmt.Fprintf(&b, "\n**Verdict: %s** — %s.\n\n", strings.ToUpper(r.Verdict()), MarkdownEscape(r.VerdictReason()))
 	for _, c := range r.Cautions {
 		fmt.Fprintf(&b, "> %s\n>\n", c)

@@ -292,7 +292,7 @@ func (r *Report) JSON() ([]byte, error) {
 	var b bytes.Buffer
 	enc := json.NewEncoder(&b)
 	enc.SetIndent("", "  ")
-	if err := enc.Encode(r.Document()); err != nil {
+	if err := enc.Encode(r.withBOM(r.Document())); err != nil {
 		return nil, fmt.Errorf("detail: encoding report: %w", err)
 	}
 	return b.Bytes(), nil

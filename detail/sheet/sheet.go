@@ -8,6 +8,7 @@ import (
 	"strings"
 
 	"gaugeline/detail"
+	"gaugeline/detail/bom"
 	"gaugeline/engine"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
@@ -39,15 +40,10 @@ import (
 //     mirror), the free edge is x' = 0 and every hole has x' > 0, y' > 0.
 
 // ViewBeyond is how far a view runs past the row of holes farthest from
-// its datum edge: the longer of the pattern's length along x and 6 in
-// (150 mm) (our choice, common sense: room for the Whitmore spread and
-// for a person to see where the part goes on).
+// its datum edge: bom.ViewBeyond, which the bill of material's plate
+// length takes too.
 func ViewBeyond(pattern units.Length, sys units.System) units.Length {
-	least := 6 * units.Inch
-	if sys == units.SI {
-		least = 150 * units.Millimetre
-	}
-	return max(pattern, least)
+	return bom.ViewBeyond(pattern, sys)
 }
 
 // Layer is the drawing layer an item goes on: one per operation, so that
@@ -240,6 +236,10 @@ type Sheet struct {
 	// Schedule is the hole schedule as data: a header row, then one row
 	// per part (part, count, hole, type, made by).
 	Schedule [][]string
+	// BillOfMaterial and BoltList are the two tables of bom.go as data (a
+	// header row, then a row per piece or bolt set); nil without
+	// member.length.
+	BillOfMaterial, BoltList [][]string
 	// Title is the title block as data: label and value, in order.
 	Title [][2]string
 	Lines []Segment // in the sheet's frame: the title block's rules
@@ -314,6 +314,7 @@ func newSheet(r *detail.Report, notForFabrication bool) (*Sheet, error) {
 	s.Views = views
 	top := bottom - 4*s.TextHeight
 	top = l.schedule(s, r, top)
+	top = l.billOfMaterial(s, r, top)
 	l.titleBlock(s, r, top-3*s.TextHeight)
 	for i := range s.Texts {
 		s.Texts[i].Value = ascii(s.Texts[i].Value)
