@@ -250,3 +250,26 @@ func TestBOMOnlyWithLength(t *testing.T) {
 		t.Errorf("text report lacks the bill of material or the far bolts:\n%s", text2.String())
 	}
 }
+
+// A double splice (DS-12: PL 8x3/4 between two PL 1/2 x 8, 7/8-in bolts, two
+// lines of 3 each side, plate ends 1-1/2 in past the last bolts, gap 1/4 in):
+// the two splice plates of the joint, each both groups long, 2·(1-1/2 + 6
+// + 1-1/2) + 1/4 = 18-1/4 in, weighing 0.5 × 8 × 18.25 in³ × 490/1728 lb/in³
+// = 20.70 lb (by hand, 490 lb/ft³); 12 bolts through the joint (both
+// groups) with a grip of 3/4 + 2 × 1/2 = 1-3/4 in, length 1-3/4 + 1-1/8 =
+// 2-7/8 → 3 in (RCSC Table C-2.1 as reproduced: 7/8 in adds 1-1/8).
+func TestBOMOfASplice(t *testing.T) {
+	r := checkedJobs(t, "../testdata/jobs/us-double-splice.yaml")
+	ps := r.Pieces()
+	if len(ps) != 2 {
+		t.Fatalf("%d pieces, want the member and the splice plates", len(ps))
+	}
+	s := ps[1]
+	if s.Mark != "DS-12-S" || s.Each != 2 || math.Abs(s.Length.In()-18.25) > 1e-9 || math.Abs(s.Weight-0.5*8*18.25*490/1728) > 1e-9 {
+		t.Errorf("splice plates: %+v, want 2 × PL 1/2 x 8 x 18-1/4 of 20.70 lb", s)
+	}
+	bs := r.BoltList()
+	if len(bs) != 1 || bs[0].Each != 12 || math.Abs(bs[0].Grip.In()-1.75) > 1e-9 || math.Abs(bs[0].Length.In()-3) > 1e-9 {
+		t.Errorf("bolt list %+v, want 12 bolts, grip 1-3/4 in, length 3 in", bs)
+	}
+}

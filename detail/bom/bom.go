@@ -73,6 +73,10 @@ func PlateOutline(c *engine.Connection, sys units.System) []r2.Vec {
 	if pl.Outline != nil {
 		return pl.Outline
 	}
+	if pl.Kind == engine.Splice { // both groups: from A's plate end across the joint to B's
+		x0, x1, y0, y1 := float64(-pl.Gap-pl.FreeEdge), float64(pl.FreeEdge), float64(pl.YMin()), float64(pl.YMax())
+		return []r2.Vec{{X: x0, Y: y0}, {X: x1, Y: y0}, {X: x1, Y: y1}, {X: x0, Y: y1}}
+	}
 	xlo, xhi := c.Holes[0].X, c.Holes[0].X
 	for _, h := range c.Holes {
 		xlo, xhi = min(xlo, h.X), max(xhi, h.X)
@@ -130,9 +134,20 @@ func Pieces(mb Member) []Piece {
 	}
 	out := []Piece{mem}
 	if p, ok := platePiece(mb.Near, sys, mb.Mark+"-P", "plate"); ok {
-		if mb.Mirror {
+		switch pl := mb.Near.Conn.Plate; {
+		case pl.Kind == engine.Splice:
+			// A splice joint joins two members: its plates are listed once,
+			// with the member whose near end it is.
+			p.Mark, p.Each, p.Note = mb.Mark+"-S", pl.Plates(), "splice plates of the near end's joint"
+			if pl.Plates() == 2 {
+				p.Note = "splice plates of the near end's joint, one each side"
+			}
+			if mb.Mirror {
+				p.Note += "; the far end's joint is the next member's near end"
+			}
+		case mb.Mirror:
 			p.Each, p.Note = 2, "1 each end"
-		} else {
+		default:
 			p.Note = "near end"
 		}
 		out = append(out, p)
@@ -216,6 +231,11 @@ func BoltList(mb Member) []BoltSet {
 	near := boltSet(mb.Near.Conn, mb.Units)
 	var out []BoltSet
 	switch {
+	case splice(mb.Near.Conn):
+		// the near end's joint, both members' groups; a mirrored far end's
+		// joint is the next member's near end (as the splice plates)
+		near.End = "near end's joint (both members)"
+		out = []BoltSet{near}
 	case mb.Mirror:
 		near.End, near.Each = "each end", 2*near.Each
 		out = []BoltSet{near}
@@ -240,6 +260,10 @@ func BoltList(mb Member) []BoltSet {
 	return out
 }
 
+// splice reports whether the connection is a splice (its plates carry both
+// members' groups).
+func splice(c *engine.Connection) bool { return c.Plate != nil && c.Plate.Kind == engine.Splice }
+
 // boltSet is one end's bolts: the grip through the member's plies, the
 // plate and the fillers, the washers its outer plies ask for (WasherSource)
 // and the length (rules.BoltLength).
@@ -262,7 +286,10 @@ func boltSet(c *engine.Connection, sys units.System) BoltSet {
 		return set
 	}
 	set.PlateHole = kind(h.InPlate())
-	grip += c.Plate.T + b.FillerT*units.Length(c.ShearPlanes())
+	grip += c.Plate.TotalT() + b.FillerT*units.Length(c.ShearPlanes())
+	if splice(c) {
+		set.Each *= 2 // a splice plate carries both members' groups
+	}
 	set.Grip = grip
 
 	// The outer plies: both angles of a pair, else the member and the plate.
