@@ -47,6 +47,25 @@ const batchGCPercent = 400
 // summary has them all.
 const maxErrorLines = 20
 
+// showErrors repeats the first maxErrorLines job errors on stderr, then
+// says how many more the summary holds.
+func showErrors(stderr io.Writer, rows []batch.Row, c batch.Counts, dir string) {
+	shown := 0
+	for _, r := range rows {
+		if r.Verdict == batch.VerdictError {
+			if shown == maxErrorLines {
+				fmt.Fprintf(stderr, "gaugeline: error: … and %d more; see %s\n", c.Errors-shown, filepath.Join(dir, "summary.csv"))
+				break
+			}
+			fmt.Fprintf(stderr, "gaugeline: error: %s\n", r.Message)
+			if r.Hint != "" {
+				fmt.Fprintf(stderr, "gaugeline: hint: %s\n", r.Hint)
+			}
+			shown++
+		}
+	}
+}
+
 func runBatch(ctx context.Context, o *rootOptions, bo batchOptions, arg string, out io.Writer) error {
 	if bo.dir == "" {
 		return usageError{errors.New("-o DIR is required")}
@@ -106,20 +125,7 @@ func runBatch(ctx context.Context, o *rootOptions, bo batchOptions, arg string, 
 		return &jobfile.InputError{File: bo.dir, Msg: err.Error()}
 	}
 
-	shown := 0
-	for _, r := range rows {
-		if r.Verdict == batch.VerdictError {
-			if shown == maxErrorLines {
-				fmt.Fprintf(o.stderr, "gaugeline: error: … and %d more; see %s\n", c.Errors-shown, filepath.Join(bo.dir, "summary.csv"))
-				break
-			}
-			fmt.Fprintf(o.stderr, "gaugeline: error: %s\n", r.Message)
-			if r.Hint != "" {
-				fmt.Fprintf(o.stderr, "gaugeline: hint: %s\n", r.Hint)
-			}
-			shown++
-		}
-	}
+	showErrors(o.stderr, rows, c, bo.dir)
 	fmt.Fprintf(out, "batch: %s\n", c)
 	fmt.Fprintf(out, "wrote %d JSON and %d DXF files to %s, one folder per mark\n", c.JSON, c.DXF, bo.dir)
 	fmt.Fprintf(out, "summary: %s, %s\n", filepath.Join(bo.dir, "summary.csv"), filepath.Join(bo.dir, "summary.md"))
