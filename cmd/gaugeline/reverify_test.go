@@ -509,6 +509,53 @@ func TestReverifySplicePlate(t *testing.T) {
 	}
 }
 
+// TestReverifySpliceMemberBFails: member B's group is checked as built on
+// its own. DS-12's BH3 drilled 1/2 in toward the splice plate's far end
+// (x' = 17.25 in on an 18.25-in plate, testdata/measured/
+// make_splice_fixtures.py) is 1 in from that end, under the 1-1/8 in of
+// AISC 360-22 Table J3.4 for a 7/8-in bolt: member B's group fails
+// edge.min while member A's passes, and the verdict (reject) covers the
+// plate. A hole between B's gage lines, not in the design, is extra and
+// counted in member B's group.
+func TestReverifySpliceMemberBFails(t *testing.T) {
+	ds := filepath.Join(testdata, "jobs", "us-double-splice.yaml")
+	file := filepath.Join(measuredDir, "ds-12-splice-b-end-r2000.dxf")
+	r := gaugeline(t, ".", "reverify", ds, "--measured", file, "--part", "splice-1", "--format", "json")
+	var doc struct {
+		Verdict    string
+		AsBuilt    string `json:"as_built"`
+		Reasons    []string
+		Deviations []struct{ ID, Status, Group string }
+		Splice     struct {
+			MemberB struct {
+				AsBuilt string `json:"as_built"`
+				Failing []string
+			} `json:"member_b"`
+		}
+	}
+	if err := json.Unmarshal([]byte(r.stdout), &doc); err != nil {
+		t.Fatalf("exit %d, not JSON: %v\n%s", r.code, err, r.stderr)
+	}
+	if r.code != 1 || doc.Verdict != "reject" || doc.AsBuilt != "pass" || doc.Splice.MemberB.AsBuilt != "fail" ||
+		!slices.Equal(doc.Splice.MemberB.Failing, []string{"edge.min"}) {
+		t.Errorf("exit %d verdict %s, member A as built %s, member B %+v; want 1 reject, A pass, B failing edge.min", r.code, doc.Verdict, doc.AsBuilt, doc.Splice.MemberB)
+	}
+	if !slices.Contains(doc.Reasons, "member B's group fails as built: edge.min") || !slices.Contains(doc.Reasons, "out of tolerance: BH3 (member B)") {
+		t.Errorf("reasons %q, want BH3 in member B and member B's group failing edge.min", doc.Reasons)
+	}
+	if n := len(doc.Deviations); n != 13 || doc.Deviations[n-1].Status != "extra" || doc.Deviations[n-1].Group != "B" {
+		t.Errorf("deviations %+v, want 12 design holes and one extra in member B's group", doc.Deviations)
+	}
+	text := gaugeline(t, ".", "reverify", ds, "--measured", file, "--part", "splice-1")
+	if !strings.Contains(text.stdout, "DETAILING (MEMBER B'S GROUP, AS BUILT)") || !strings.Contains(text.stdout, "BH3 to plate free edge") {
+		t.Errorf("the text report has no member B section naming BH3:\n%s", text.stdout)
+	}
+	md := gaugeline(t, ".", "reverify", ds, "--measured", file, "--part", "splice-1", "--format", "markdown")
+	if !strings.Contains(md.stdout, "## Member B's group: limit states as built") || !strings.Contains(md.stdout, "| hole | member |") {
+		t.Errorf("the Markdown report has no member column or member B section:\n%s", md.stdout)
+	}
+}
+
 // TestReverifyEndStub: one end of BR-16 (testdata/jobs/us-brace-16ft.yaml,
 // 16 ft, far_end mirror) measured alone, 4 holes at x = 1.5 4.5 7.5
 // 10.5 in, y = 2.5 in from that end's cut end and the heel (the job's

@@ -47,6 +47,9 @@ def main():
     off = list(B)
     off[1] = (off[1][0], off[1][1] + 0.25)  # B's second hole (BH2, x' = 13.75) drilled 1/4 in off across
     plate("ds-12-splice-b-off-shifted-r2000.dxf", A + off, shift=(0.5, 0.0))  # the whole plate 1/2 in along x
+    short = list(B)
+    short[2] = (short[2][0] + 0.5, short[2][1])  # B's third hole (BH3) 1/2 in toward the plate's far end: 1 in from it
+    plate("ds-12-splice-b-end-r2000.dxf", A + short + [(12.25, 4.0)])  # and a hole not in the design, between B's lines
     with open(os.path.join(HERE, "br-16-end-stub.csv"), "w", newline="") as f:
         f.write("# BR-16 one end measured alone (an end stub), inches from that end's cut end and the heel\n")
         w = csv.writer(f, lineterminator="\n")
