@@ -249,6 +249,9 @@ func Reverify(d *detail.Design, set *measured.Set, opt ReverifyOptions) (*AsBuil
 	if opt.Part.isPlate() && d.Conn.Plate == nil {
 		return nil, ErrNoPlate
 	}
+	if opt.Part.isSplicePlate() {
+		return ReverifySplice(d, set, opt)
+	}
 	ab, err := newAsBuilt(d, set, opt)
 	if err != nil {
 		return nil, err

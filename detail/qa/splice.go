@@ -1,6 +1,7 @@
 package qa
 
 import (
+	"errors"
 	"fmt"
 	"slices"
 	"strings"
@@ -26,6 +27,10 @@ import (
 // member. The verdict covers the plate. With plate.count 2 the two plates
 // are designed alike, so splice-1 and splice-2 differ only in their name.
 
+// ErrNoSplice is returned when a splice plate is measured for a design
+// without one.
+var ErrNoSplice = errors.New("the job has no splice plate: a measured splice plate needs plate.kind: splice")
+
 // SplicePlate is a splice plate measured.
 type SplicePlate struct {
 	// Holes are the plate's design holes in the job's frame: member A's
@@ -43,9 +48,12 @@ type SplicePlate struct {
 // splice) from its measured holes: both members' groups matched at once
 // in the plate's frame, each member's end checked as built.
 func ReverifySplice(d *detail.Design, set *measured.Set, opt ReverifyOptions) (*AsBuilt, error) {
+	if !opt.Part.isSplicePlate() {
+		panic("qa: ReverifySplice needs a splice plate part (--part splice-1 or splice-2)")
+	}
 	pl := d.Conn.Plate
-	if pl == nil || pl.Kind != engine.Splice || !opt.Part.isSplicePlate() {
-		panic("qa: ReverifySplice needs a splice plate part of a splice design")
+	if pl == nil || pl.Kind != engine.Splice {
+		return nil, ErrNoSplice
 	}
 	if set == nil || len(set.Holes) == 0 {
 		panic("qa: ReverifySplice needs measured holes")
