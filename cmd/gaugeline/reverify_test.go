@@ -556,6 +556,28 @@ func TestReverifySpliceMemberBFails(t *testing.T) {
 	}
 }
 
+// TestReverifyNoHoleOfAnEnd: a measured file with none of one end's (one
+// group's) holes is rejected for the missing holes, not an internal
+// error: BR-16's far holes alone (x = 192 - 1.5, - 4.5, - 7.5, - 10.5 in,
+// y = 2.5 in, testdata/jobs/us-brace-16ft.yaml) as the whole member, and
+// the slotted holes of KB-40 on DS-12's splice plate (none of them near
+// member A's group).
+func TestReverifyNoHoleOfAnEnd(t *testing.T) {
+	far := filepath.Join(t.TempDir(), "far-only.csv")
+	if err := os.WriteFile(far, []byte("x,y,diameter\n181.5,2.5,0.9375\n184.5,2.5,0.9375\n187.5,2.5,0.9375\n190.5,2.5,0.9375\n"), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	for _, c := range []struct{ job, file, part, missing string }{
+		{filepath.Join(testdata, "jobs", "us-brace-16ft.yaml"), far, "member", "missing holes: H1 (near end), H2 (near end), H3 (near end), H4 (near end)"},
+		{filepath.Join(testdata, "jobs", "us-double-splice.yaml"), filepath.Join(measuredDir, "kb-40-slots-r12.dxf"), "splice-1", "missing holes: H1 (member A)"},
+	} {
+		r := gaugeline(t, ".", "reverify", c.job, "--measured", c.file, "--part", c.part)
+		if r.code != 1 || !strings.Contains(r.stdout, c.missing) || !strings.Contains(r.stdout, "nothing there is checked as built") {
+			t.Errorf("%s on %s: exit %d, want 1 with %q and the caution\n%s%s", filepath.Base(c.file), filepath.Base(c.job), r.code, c.missing, r.stdout, r.stderr)
+		}
+	}
+}
+
 // TestReverifyEndStub: one end of BR-16 (testdata/jobs/us-brace-16ft.yaml,
 // 16 ft, far_end mirror) measured alone, 4 holes at x = 1.5 4.5 7.5
 // 10.5 in, y = 2.5 in from that end's cut end and the heel (the job's

@@ -262,16 +262,34 @@ func (ab *AsBuilt) checkPiece() error {
 		h.X = pc.farEnd - h.X
 		far = append(far, h)
 	}
-	r, err := ab.checkBuilt(ab.Design, near)
-	if err != nil {
-		return err
+	if len(near) == 0 {
+		ab.Report = ab.unchecked("the near end's holes")
+	} else {
+		r, err := ab.checkBuilt(ab.Design, near)
+		if err != nil {
+			return err
+		}
+		ab.Report = r
 	}
-	ab.Report = r
 	if pc.FarDesign == nil || len(far) == 0 {
 		return nil
 	}
+	var err error
 	pc.FarReport, err = ab.checkBuilt(pc.FarDesign, far)
 	return err
+}
+
+// unchecked stands for the as-built check of the near end (of a whole
+// member) or member A's group (of a splice plate) when none of its holes
+// was found, and no measured hole lies there: nothing can be checked
+// there as built (a connection of no holes is not one), so the report is
+// the design's, with a caution saying so. The missing holes reject the
+// part. what names the holes: "the near end's holes".
+func (ab *AsBuilt) unchecked(what string) *detail.Report {
+	r := *ab.DesignReport
+	r.Cautions = append(slices.Clone(r.Cautions), ab.partCaution(),
+		"As built: none of "+what+" was found, so nothing there is checked as built: the ratios shown there are the design's.")
+	return &r
 }
 
 // holeName is a hole's id in the verdict's reasons: with its end for a

@@ -107,14 +107,19 @@ func (ab *AsBuilt) checkSplice() error {
 		}
 		a = append(a, h)
 	}
-	r, err := ab.checkBuilt(ab.Design, a)
-	if err != nil {
-		return err
+	if len(a) == 0 {
+		ab.Report = ab.unchecked("member A's holes")
+	} else {
+		r, err := ab.checkBuilt(ab.Design, a)
+		if err != nil {
+			return err
+		}
+		ab.Report = r
 	}
-	ab.Report = r
 	if len(b) == 0 {
 		return nil
 	}
+	var err error
 	sp.BReport, err = ab.checkBuilt(ab.Design, b)
 	return err
 }
