@@ -42,7 +42,7 @@ func newReverifyCmd(o *rootOptions) *cobra.Command {
 	f.StringVar(&ro.measured, "measured", "", "measured holes: a .csv (x,y,diameter[,id]) or a .dxf of the part")
 	f.StringVar(&ro.layer, "layer", "", "DXF: take the circles on this layer (default: every circle inside the part's contour)")
 	f.StringVar(&ro.align, "align", "datum", "datum (trust the file's frame) or best-fit (fit shift and rotation)")
-	f.StringVar(&ro.part, "part", "member", "the piece measured, as its CAM file names it: member (the job's frame; the whole member with member.length), plate or far-plate (the plate's frame)")
+	f.StringVar(&ro.part, "part", "member", "the piece measured, as its CAM file names it: member (the job's frame; the whole member with member.length), plate or far-plate (the plate's frame), splice-1 or splice-2 (a splice plate, both members' groups; plate on a splice job is splice-1), near-end or far-end (one end of the member alone, x from its cut end)")
 	f.StringVar(&ro.position, "position", "", "position tolerance, radial (default: the job's tolerance, else 1/16 in or 2 mm)")
 	f.StringVar(&ro.diameter, "diameter", "", "diameter tolerance over nominal (default: the job's tolerance, else 1/32 in or 1 mm)")
 	formatFlag(cmd, &ro.format)

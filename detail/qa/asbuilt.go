@@ -148,6 +148,10 @@ type Deviation struct {
 	// "far" (an extra hole: the half of the member it lies in); "" when
 	// the part measured is not a whole member.
 	End string
+	// Group is the member whose group a splice plate's hole belongs to,
+	// "A" or "B" (an extra hole: the side of the joint it lies on); ""
+	// when the part measured is not a splice plate.
+	Group string
 }
 
 // Alignment is the transform found between the measured file's frame and
@@ -184,6 +188,9 @@ type AsBuilt struct {
 	// Piece is the whole member measured (member.length given, --part
 	// member; piece.go); nil for one connection end or a plate.
 	Piece *Piece
+	// Splice is the splice plate measured (--part splice-1, splice-2;
+	// splice.go); nil else.
+	Splice *SplicePlate
 }
 
 // ReverifyOptions are the choices of the command line; a zero tolerance
@@ -242,6 +249,9 @@ func Reverify(d *detail.Design, set *measured.Set, opt ReverifyOptions) (*AsBuil
 	if opt.Part.isPlate() && d.Conn.Plate == nil {
 		return nil, ErrNoPlate
 	}
+	if opt.Part.isSplicePlate() {
+		return ReverifySplice(d, set, opt)
+	}
 	ab, err := newAsBuilt(d, set, opt)
 	if err != nil {
 		return nil, err
@@ -275,6 +285,9 @@ func newAsBuilt(d *detail.Design, set *measured.Set, opt ReverifyOptions) (*AsBu
 func (ab *AsBuilt) designHoles() []engine.Hole {
 	if ab.Piece != nil {
 		return ab.Piece.Holes
+	}
+	if ab.Splice != nil {
+		return ab.Splice.Holes
 	}
 	return ab.Design.Conn.Holes
 }
@@ -371,7 +384,8 @@ func (ab *AsBuilt) deviations(aligned []abVec, match []int) error {
 		h := ab.designInPart(&holes[i])
 		k := match[i]
 		if k < 0 {
-			ab.Deviations = append(ab.Deviations, Deviation{ID: h.ID, Design: h, Status: HoleMissing, Why: []string{"missing"}, End: ab.Piece.endOf(i, 0)})
+			ab.Deviations = append(ab.Deviations, Deviation{ID: h.ID, Design: h, Status: HoleMissing, Why: []string{"missing"}, End: ab.Piece.endOf(i, 0),
+				Group: ab.Splice.groupOf(i, 0, 0)})
 			continue
 		}
 		used[k] = true
@@ -380,6 +394,7 @@ func (ab *AsBuilt) deviations(aligned []abVec, match []int) error {
 			return err
 		}
 		dv.End = ab.Piece.endOf(i, 0)
+		dv.Group = ab.Splice.groupOf(i, 0, 0)
 		ab.Deviations = append(ab.Deviations, dv)
 	}
 	return ab.extraDeviations(aligned, used)
@@ -466,7 +481,7 @@ func (ab *AsBuilt) extraDeviations(aligned []abVec, used []bool) error {
 		dv := Deviation{ID: fmt.Sprintf("X%d", n), MeasuredID: m.ID, Line: m.Line, Status: HoleExtra,
 			X: units.Length(aligned[k].x), Y: units.Length(aligned[k].y),
 			Width: units.Length(m.Width), Length: units.Length(m.Length), Why: []string{"not in the design"},
-			End: ab.Piece.endOf(-1, units.Length(aligned[k].x))}
+			End: ab.Piece.endOf(-1, units.Length(aligned[k].x)), Group: ab.Splice.groupOf(-1, units.Length(aligned[k].x), units.Length(ab.frame.fe))}
 		hb, err := ab.classify(engine.Hole{HoleShape: engine.HoleShape{Type: rules.Standard}}, m, dv.X, dv.Y)
 		if err != nil {
 			return err
@@ -594,6 +609,9 @@ func (ab *AsBuilt) check() error {
 	if ab.Piece != nil {
 		return ab.checkPiece()
 	}
+	if ab.Splice != nil {
+		return ab.checkSplice()
+	}
 	d := ab.Design
 	var holes []engine.Hole
 	for i, dv := range ab.Deviations {
@@ -639,6 +657,12 @@ func (ab *AsBuilt) checkBuilt(d *detail.Design, holes []engine.Hole) (*detail.Re
 func (ab *AsBuilt) partCaution() string {
 	if ab.Piece != nil {
 		return ab.Piece.caution()
+	}
+	if ab.Splice != nil {
+		return ab.Splice.caution()
+	}
+	if ab.Part == MeasuredNearEnd || ab.Part == MeasuredFarEnd {
+		return endCaution(ab.Part, ab.Design.Conn.Plate != nil)
 	}
 	if ab.Part.isPlate() {
 		return "As built: the " + ab.Part.words() + " was measured. Its holes take the measured sizes and the hole types they now are; " +
@@ -687,6 +711,9 @@ func (ab *AsBuilt) decide() {
 		if ab.Piece != nil {
 			end = "near end "
 		}
+		if ab.Splice != nil {
+			end = "member A's group "
+		}
 		ab.Reasons = append(ab.Reasons, end+"fails as built: "+strings.Join(r.Failing(), ", "))
 		if !ab.DesignReport.Pass {
 			ab.Reasons = append(ab.Reasons, "the design itself fails: "+strings.Join(ab.DesignReport.Failing(), ", "))
@@ -694,6 +721,9 @@ func (ab *AsBuilt) decide() {
 	}
 	if ab.Piece != nil {
 		ab.decidePiece()
+	}
+	if ab.Splice != nil {
+		ab.decideSplice()
 	}
 	if ab.Verdict == Review {
 		ab.Reasons = append(ab.Reasons, "every detailing rule and limit state passes as built: send to the engineer of record")
@@ -764,14 +794,17 @@ func fitRigid(ps, qs []abVec, keep float64) abRigid {
 // until the matching settles (settleFit). The best start matches the most
 // holes, then has the least squared deviation; among fits as good as each
 // other (a symmetric pattern), the part's contour decides (the start whose
-// contour lies from the datum into +x and +y), then the smallest rotation
-// (fit.betterThan). It returns the transform, the matching (as
+// contour lies from the datum into +x and +y) where its corners differ by
+// more than the gate, then the smallest rotation (fit.betterThan): a part
+// whose contour is as symmetric as its holes (a splice plate, member B's
+// group A's mirror image) keeps the file's way round, and a mislocated
+// hole, which pulls the least-squares contour a little, cannot turn it. It returns the transform, the matching (as
 // assignHoles) and the iterations the best start took.
 func bestFit(des, mea []abVec, gate float64, contour []r2.Vec) (abRigid, []int, int) {
 	var best *fit
 	for _, tf := range fitStarts(des, mea, gate) {
 		f := scoreFit(des, mea, contour, settleFit(des, mea, gate, tf))
-		if best == nil || f.betterThan(best, len(contour) > 0) {
+		if best == nil || f.betterThan(best, len(contour) > 0, gate) {
 			best = f
 		}
 	}
@@ -918,16 +951,16 @@ func scoreFit(des, mea []abVec, contour []r2.Vec, f *fit) *fit {
 }
 
 // betterThan reports whether fit f beats fit b: more holes matched, then
-// a clearly smaller squared deviation, then (byContour) a contour clearly
-// nearer the datum, then a clearly smaller rotation.
-func (f *fit) betterThan(b *fit, byContour bool) bool {
+// a clearly smaller squared deviation, then (byContour) a contour nearer
+// the datum by more than datumTie (mm), then a clearly smaller rotation.
+func (f *fit) betterThan(b *fit, byContour bool, datumTie float64) bool {
 	scale := 1e-9 * (1 + b.sse)
 	switch {
 	case f.matched != b.matched:
 		return f.matched > b.matched
 	case math.Abs(f.sse-b.sse) > max(scale, 1e-6):
 		return f.sse < b.sse
-	case byContour && math.Abs(f.datum-b.datum) > 1e-3:
+	case byContour && math.Abs(f.datum-b.datum) > max(datumTie, 1e-3):
 		return f.datum < b.datum
 	}
 	return math.Abs(f.tf.theta) < math.Abs(b.tf.theta)-1e-9
@@ -1112,7 +1145,8 @@ type jsonDeviation struct {
 	Reclassified bool            `json:"reclassified"`
 	InTolerance  bool            `json:"within_tolerance"`
 	Why          []string        `json:"why,omitempty"`
-	End          string          `json:"end,omitempty"` // a whole member: "near" or "far"
+	End          string          `json:"end,omitempty"`   // a whole member: "near" or "far"
+	Group        string          `json:"group,omitempty"` // a splice plate: member "A" or "B"
 }
 
 type jsonAlignment struct {
@@ -1156,6 +1190,9 @@ type jsonReverify struct {
 	// Piece is the whole member (member.length, --part member): its cut
 	// length and the far end as built; absent else.
 	Piece *jsonPiece `json:"piece,omitempty"`
+	// Splice is the splice plate (--part splice-1, splice-2): the joint
+	// and member B's group as built; absent else.
+	Splice *jsonSplice `json:"splice,omitempty"`
 }
 
 func (ab *AsBuilt) document() jsonReverify {
@@ -1178,6 +1215,7 @@ func (ab *AsBuilt) document() jsonReverify {
 		DesignGoverning: ab.DesignReport.GoverningResult().ID,
 		DesignFailing:   append([]string{}, ab.DesignReport.Failing()...),
 		Piece:           ab.pieceDocument(),
+		Splice:          ab.spliceDocument(),
 	}
 	doc.DesignRatios, doc.RatioChange = ratioMaps(ab.DesignReport, ab.Report)
 	if doc.Reasons == nil {
@@ -1188,7 +1226,7 @@ func (ab *AsBuilt) document() jsonReverify {
 	}
 	for _, dv := range ab.Deviations {
 		j := jsonDeviation{ID: dv.ID, MeasuredID: dv.MeasuredID, Line: dv.Line, Status: dv.Status.String(),
-			Reclassified: dv.Reclassified, InTolerance: dv.Status == HoleOK, Why: dv.Why, End: dv.End}
+			Reclassified: dv.Reclassified, InTolerance: dv.Status == HoleOK, Why: dv.Why, End: dv.End, Group: dv.Group}
 		if dv.Status != HoleExtra {
 			j.DesignX, j.DesignY = length(dv.Design.X), length(dv.Design.Y)
 			j.DesignDia = length(min(dv.Design.Dx, dv.Design.Dy))
@@ -1284,6 +1322,9 @@ func (ab *AsBuilt) holeRow(dv Deviation) []string {
 	if ab.Piece != nil {
 		row = slices.Insert(row, 1, dv.End)
 	}
+	if ab.Splice != nil {
+		row = slices.Insert(row, 1, dv.Group)
+	}
 	return row
 }
 
@@ -1292,10 +1333,13 @@ var holeHeader = []string{"HOLE", "MEASURED", "X", "Y", "DX", "DY", "RADIAL", "S
 // holeHeader is the hole table's header: with an END column after the
 // hole for a whole member.
 func (ab *AsBuilt) holeHeader() []string {
-	if ab.Piece == nil {
-		return holeHeader
+	switch {
+	case ab.Piece != nil:
+		return slices.Insert(slices.Clone(holeHeader), 1, "END")
+	case ab.Splice != nil:
+		return slices.Insert(slices.Clone(holeHeader), 1, "MEMBER")
 	}
-	return slices.Insert(slices.Clone(holeHeader), 1, "END")
+	return holeHeader
 }
 
 // header lines shared by the text and Markdown reports.
@@ -1309,6 +1353,10 @@ func (ab *AsBuilt) preamble() [][2]string {
 	switch {
 	case ab.Piece != nil:
 		part = ab.Piece.partRow(ab.Design.Conn.Plate != nil)
+	case ab.Splice != nil:
+		part = ab.Splice.partRow(ab.Part)
+	case ab.Part == MeasuredNearEnd || ab.Part == MeasuredFarEnd:
+		part = endRow(ab.Part, ab.Design.Conn.Plate != nil)
 	case ab.Part == MeasuredFarPlate:
 		part = "far-plate: the far end's own plate; its holes reclassified from the measured sizes, the member's as designed; coordinates in the plate's frame " +
 			"(x from the free edge, y from the side its CAM file puts at y = 0); the far end's x run from the far cut end"
@@ -1397,10 +1445,14 @@ func (ab *AsBuilt) WriteText(w io.Writer) error {
 	if ab.Piece != nil {
 		title, dtitle = "LIMIT STATE (NEAR END, AS BUILT)", "DETAILING (NEAR END, AS BUILT)"
 	}
+	if ab.Splice != nil {
+		title, dtitle = "LIMIT STATE (MEMBER A'S GROUP, AS BUILT)", "DETAILING (MEMBER A'S GROUP, AS BUILT)"
+	}
 	writeRatioTable(&b, title, ratioRows(ab.DesignReport, ab.Report))
 	b.WriteString("\n")
 	detail.FindingsText(&b, sys, dtitle, ab.Report.Findings)
 	ab.farText(&b)
+	ab.spliceText(&b)
 	fmt.Fprintf(&b, "\nverdict: %s\n", strings.ToUpper(ab.Verdict.String()))
 	for _, r := range ab.Reasons {
 		fmt.Fprintf(&b, "  %s\n", r)
@@ -1443,12 +1495,16 @@ func (ab *AsBuilt) WriteMarkdown(w io.Writer) error {
 	if ab.Piece != nil {
 		lsTitle, dTitle = "Near end: limit states as built", "Near end: detailing as built"
 	}
+	if ab.Splice != nil {
+		lsTitle, dTitle = "Member A's group: limit states as built", "Member A's group: detailing as built"
+	}
 	b.WriteString("\n## " + lsTitle + "\n\n| id | clause | design ratio | as-built ratio | change | result |\n|---|---|---:|---:|---:|---|\n")
 	for _, row := range ratioRows(ab.DesignReport, ab.Report) {
 		fmt.Fprintf(&b, "| %s |\n", strings.Join(row, " | "))
 	}
 	detail.FindingsMarkdown(&b, sys, dTitle, ab.Report.Findings)
 	ab.farMarkdown(&b)
+	ab.spliceMarkdown(&b)
 	b.WriteString("\n")
 	for _, c := range ab.Report.Cautions {
 		fmt.Fprintf(&b, "> %s\n>\n", c)

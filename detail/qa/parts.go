@@ -5,6 +5,7 @@ import (
 	"strings"
 
 	"gaugeline/detail/jobfile"
+	"gaugeline/engine"
 )
 
 // MeasuredPart is the piece a measured file is of: its holes are those of
@@ -15,6 +16,10 @@ const (
 	MeasuredMember   MeasuredPart = iota // the member (both angles of a pair alike); the whole member with member.length
 	MeasuredPlate                        // the near end's gusset or splice plate
 	MeasuredFarPlate                     // the far end's own plate (member.far_end with a plate: block)
+	MeasuredSplice1                      // the (first) splice plate: both members' groups (splice.go)
+	MeasuredSplice2                      // the second splice plate of plate.count 2, designed as the first
+	MeasuredNearEnd                      // the near end alone (an end stub): its holes, x from the near cut end
+	MeasuredFarEnd                       // the far end alone: its holes, x from the far cut end
 )
 
 // partSpec is one row of the part table: the --part spelling, the words
@@ -30,9 +35,11 @@ type partSpec struct {
 	hint  string
 }
 
-// parts is the part table. A splice's plates slot in here as rows of
-// their own ("splice-1", "splice-2": plate.kind splice with count 2), each
-// with the frame and the design holes of its plate.
+// parts is the part table. A splice's plates are splice-1 and splice-2
+// (plate.count 2: one each side, designed alike); --part plate on a
+// splice job is splice-1 (resolvePart): the one CAM file of the splice
+// plates is MARK-plate.cam.dxf. near-end and far-end are one end of a
+// member measured alone, each in its own end's frame.
 var parts = []partSpec{
 	{part: MeasuredMember, name: "member", words: "member", has: func(*jobfile.Job) bool { return true }},
 	{part: MeasuredPlate, name: "plate", words: "plate", plate: true,
@@ -45,7 +52,34 @@ var parts = []partSpec{
 		},
 		none: "the job's far end has no plate of its own to measure",
 		hint: "--part far-plate needs member.far_end with a plate: block; the near end's plate is --part plate"},
+	{part: MeasuredSplice1, name: "splice-1", words: "splice plate", plate: true,
+		has:  isSplice,
+		none: "the job has no splice plate to measure", hint: "--part splice-1 needs plate.kind: splice; a gusset is --part plate"},
+	{part: MeasuredSplice2, name: "splice-2", words: "second splice plate", plate: true,
+		has:  func(j *jobfile.Job) bool { return isSplice(j) && j.Plate.Count == 2 },
+		none: "the job has no second splice plate to measure",
+		hint: "--part splice-2 needs plate.kind: splice with plate.count: 2; a splice of one plate is --part splice-1"},
+	{part: MeasuredNearEnd, name: "near-end", words: "near end", has: func(*jobfile.Job) bool { return true }},
+	{part: MeasuredFarEnd, name: "far-end", words: "far end",
+		has:  func(j *jobfile.Job) bool { return j.Member.Length > 0 && j.Member.FarEnd.Kind != jobfile.FarPlain },
+		none: "the job has no far end with holes to measure",
+		hint: "--part far-end needs member.length and a far end that is not plain; a job without member.length is one connection end: --part member"},
 }
+
+// isSplice is whether the job's plate is a splice plate.
+func isSplice(j *jobfile.Job) bool { return j.Plate != nil && j.Plate.Kind == engine.Splice }
+
+// resolvePart is the part p means on job: --part plate on a splice job
+// is splice-1.
+func resolvePart(job *jobfile.Job, p MeasuredPart) MeasuredPart {
+	if p == MeasuredPlate && isSplice(job) {
+		return MeasuredSplice1
+	}
+	return p
+}
+
+// isSplicePlate is whether the part is a splice plate.
+func (p MeasuredPart) isSplicePlate() bool { return p == MeasuredSplice1 || p == MeasuredSplice2 }
 
 func (p MeasuredPart) spec() partSpec {
 	for _, s := range parts {

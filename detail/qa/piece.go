@@ -63,18 +63,21 @@ type Target struct {
 }
 
 // Prepare builds the design of part p of job: the near end's (--part
-// plate, or the member of a job without member.length, as it always was),
-// the far end's own (far-plate), or the whole member (member with
+// plate, splice-1, splice-2, near-end, or the member of a job without
+// member.length, as it always was), the far end's own (far-plate, and
+// far-end where the far end is a connection of its own; a mirror far end
+// is the near end's design), or the whole member (member with
 // member.length). A part the job does not have is an *InputError naming
 // --part; so is every error of the job.
 func Prepare(job *jobfile.Job, p MeasuredPart) (*Target, error) {
 	if err := CheckPart(job, p); err != nil {
 		return nil, err
 	}
+	p = resolvePart(job, p)
 	t := &Target{part: p}
 	var err error
 	switch {
-	case p == MeasuredFarPlate:
+	case p == MeasuredFarPlate, p == MeasuredFarEnd && job.Member.FarEnd.Kind == jobfile.FarOwn:
 		if t.design, err = detail.Build(job.Member.FarEnd.Job); err != nil {
 			return nil, jobfile.FarEndError(err)
 		}
@@ -97,6 +100,9 @@ func (t *Target) Reverify(set *measured.Set, opt ReverifyOptions) (*AsBuilt, err
 	opt.Part = t.part
 	if t.member != nil {
 		return ReverifyMember(t.member, set, opt)
+	}
+	if t.part.isSplicePlate() {
+		return ReverifySplice(t.design, set, opt)
 	}
 	return Reverify(t.design, set, opt)
 }
@@ -256,22 +262,44 @@ func (ab *AsBuilt) checkPiece() error {
 		h.X = pc.farEnd - h.X
 		far = append(far, h)
 	}
-	r, err := ab.checkBuilt(ab.Design, near)
-	if err != nil {
-		return err
+	if len(near) == 0 {
+		ab.Report = ab.unchecked("the near end's holes")
+	} else {
+		r, err := ab.checkBuilt(ab.Design, near)
+		if err != nil {
+			return err
+		}
+		ab.Report = r
 	}
-	ab.Report = r
 	if pc.FarDesign == nil || len(far) == 0 {
 		return nil
 	}
+	var err error
 	pc.FarReport, err = ab.checkBuilt(pc.FarDesign, far)
 	return err
 }
 
+// unchecked stands for the as-built check of the near end (of a whole
+// member) or member A's group (of a splice plate) when none of its holes
+// was found, and no measured hole lies there: nothing can be checked
+// there as built (a connection of no holes is not one), so the report is
+// the design's, with a caution saying so. The missing holes reject the
+// part. what names the holes: "the near end's holes".
+func (ab *AsBuilt) unchecked(what string) *detail.Report {
+	r := *ab.DesignReport
+	r.Cautions = append(slices.Clone(r.Cautions), ab.partCaution(),
+		"As built: none of "+what+" was found, so nothing there is checked as built: the ratios shown there are the design's.")
+	return &r
+}
+
 // holeName is a hole's id in the verdict's reasons: with its end for a
-// whole member, "F3 (far end)".
+// whole member, "F3 (far end)"; with its member for a splice plate,
+// "BH2 (member B)".
 func holeName(dv Deviation, id string) string {
-	if dv.End == "" {
+	switch {
+	case dv.Group != "":
+		return id + " (member " + dv.Group + ")"
+	case dv.End == "":
 		return id
 	}
 	return id + " (" + dv.End + " end)"
