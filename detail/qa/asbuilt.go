@@ -80,11 +80,11 @@ func newPartFrame(d *detail.Design, p MeasuredPart) partFrame {
 }
 
 // of maps a point from the job's frame to the part's, or back.
-func (f partFrame) of(x, y float64) abVec {
+func (f partFrame) of(x, y float64) r2.Vec {
 	if !f.plate {
-		return abVec{x, y}
+		return r2.Vec{X: x, Y: y}
 	}
-	return abVec{f.fe - x, f.ymax - y}
+	return r2.Vec{X: f.fe - x, Y: f.ymax - y}
 }
 
 // QAVerdict is the QA outcome of reverify.
@@ -301,13 +301,13 @@ func (ab *AsBuilt) run(mode AlignMode) error {
 
 	// The design's holes in the measured part's frame: the file's frame
 	// for datum alignment, the start of a best fit.
-	des := make([]abVec, len(holes))
+	des := make([]r2.Vec, len(holes))
 	for i, h := range holes {
 		des[i] = ab.frame.of(float64(h.X), float64(h.Y))
 	}
-	mea := make([]abVec, len(set.Holes))
+	mea := make([]r2.Vec, len(set.Holes))
 	for i, h := range set.Holes {
-		mea[i] = abVec{h.X, h.Y}
+		mea[i] = r2.Vec{X: h.X, Y: h.Y}
 	}
 	var tf abRigid
 	var match []int
@@ -320,7 +320,7 @@ func (ab *AsBuilt) run(mode AlignMode) error {
 		if len(set.Contour) > 0 {
 			lo := contourMin(set.Contour)
 			tf.t = lo
-			if lo != (abVec{}) {
+			if lo != (r2.Vec{}) {
 				ab.Alignment.Note = "datum: the lower-left corner of the part's contour (member end, heel)"
 				if ab.frame.plate {
 					ab.Alignment.Note = "datum: the lower-left corner of the plate's contour (free edge, the side its CAM file puts at y = 0)"
@@ -330,7 +330,7 @@ func (ab *AsBuilt) run(mode AlignMode) error {
 		match = assignHoles(des, tf.inverseAll(mea), float64(ab.Gate))
 	}
 	ab.Alignment.Mode = mode
-	ab.Alignment.Shift = [2]units.Length{units.Length(tf.t.x), units.Length(tf.t.y)}
+	ab.Alignment.Shift = [2]units.Length{units.Length(tf.t.X), units.Length(tf.t.Y)}
 	ab.Alignment.Rotation = tf.theta
 	if ab.Alignment.Note == "" {
 		ab.Alignment.Note = "datum: the file's frame as measured"
@@ -377,7 +377,7 @@ func matchGate(D units.Length, holes []engine.Hole, tol jobfile.Tolerance) units
 // deviations fills ab.Deviations from the matching (match[i] is the
 // measured hole of design hole i, or -1): each design hole in order, then
 // the measured holes no design hole took.
-func (ab *AsBuilt) deviations(aligned []abVec, match []int) error {
+func (ab *AsBuilt) deviations(aligned []r2.Vec, match []int) error {
 	holes := ab.designHoles()
 	used := make([]bool, len(ab.Measured.Holes))
 	for i := range holes {
@@ -404,9 +404,9 @@ func (ab *AsBuilt) deviations(aligned []abVec, match []int) error {
 // frame) from the measured hole m matched to it, at its aligned centre
 // at: the offsets, the size, the as-built hole and what is out of
 // tolerance.
-func (ab *AsBuilt) matchedDeviation(h engine.Hole, m measured.Hole, at abVec) (Deviation, error) {
+func (ab *AsBuilt) matchedDeviation(h engine.Hole, m measured.Hole, at r2.Vec) (Deviation, error) {
 	dv := Deviation{ID: h.ID, Design: h, MeasuredID: m.ID, Line: m.Line}
-	dv.X, dv.Y = units.Length(at.x), units.Length(at.y)
+	dv.X, dv.Y = units.Length(at.X), units.Length(at.Y)
 	dv.Dx, dv.Dy = dv.X-h.X, dv.Y-h.Y
 	dv.Radial = units.Length(math.Hypot(float64(dv.Dx), float64(dv.Dy)))
 	dv.Width, dv.Length = units.Length(m.Width), units.Length(m.Length)
@@ -471,7 +471,7 @@ func holeTypeWithArticle(h engine.Hole) string {
 // extraDeviations appends a deviation for every measured hole no design
 // hole took (used[k] false), numbered X1, X2 … in the file's order, each
 // classified as if it were a standard hole.
-func (ab *AsBuilt) extraDeviations(aligned []abVec, used []bool) error {
+func (ab *AsBuilt) extraDeviations(aligned []r2.Vec, used []bool) error {
 	n := 0
 	for k, m := range ab.Measured.Holes {
 		if used[k] {
@@ -479,9 +479,9 @@ func (ab *AsBuilt) extraDeviations(aligned []abVec, used []bool) error {
 		}
 		n++
 		dv := Deviation{ID: fmt.Sprintf("X%d", n), MeasuredID: m.ID, Line: m.Line, Status: HoleExtra,
-			X: units.Length(aligned[k].x), Y: units.Length(aligned[k].y),
+			X: units.Length(aligned[k].X), Y: units.Length(aligned[k].Y),
 			Width: units.Length(m.Width), Length: units.Length(m.Length), Why: []string{"not in the design"},
-			End: ab.Piece.endOf(-1, units.Length(aligned[k].x)), Group: ab.Splice.groupOf(-1, units.Length(aligned[k].x), units.Length(ab.frame.fe))}
+			End: ab.Piece.endOf(-1, units.Length(aligned[k].X)), Group: ab.Splice.groupOf(-1, units.Length(aligned[k].X), units.Length(ab.frame.fe))}
 		hb, err := ab.classify(engine.Hole{HoleShape: engine.HoleShape{Type: rules.Standard}}, m, dv.X, dv.Y)
 		if err != nil {
 			return err
@@ -497,7 +497,7 @@ func (ab *AsBuilt) extraDeviations(aligned []abVec, used []bool) error {
 // the part's frame and its shape in the part's ply.
 func (ab *AsBuilt) designInPart(h *engine.Hole) engine.Hole {
 	p := ab.frame.of(float64(h.X), float64(h.Y))
-	out := engine.Hole{ID: h.ID, X: units.Length(p.x), Y: units.Length(p.y), HoleShape: h.HoleShape}
+	out := engine.Hole{ID: h.ID, X: units.Length(p.X), Y: units.Length(p.Y), HoleShape: h.HoleShape}
 	if ab.Part.isPlate() {
 		out.HoleShape = h.InPlate() // a half turn keeps extents along x and y
 	}
@@ -511,7 +511,7 @@ func (ab *AsBuilt) designInPart(h *engine.Hole) engine.Hole {
 // designed. An extra hole is taken as measured in both plies.
 func (ab *AsBuilt) asBuiltHole(dv Deviation, design *engine.Hole, plate bool) engine.Hole {
 	p := ab.frame.of(float64(dv.X), float64(dv.Y))
-	h := engine.Hole{ID: dv.AsBuilt.ID, X: units.Length(p.x), Y: units.Length(p.y), HoleShape: dv.AsBuilt.HoleShape}
+	h := engine.Hole{ID: dv.AsBuilt.ID, X: units.Length(p.X), Y: units.Length(p.Y), HoleShape: dv.AsBuilt.HoleShape}
 	if design == nil || !plate {
 		return h
 	}
@@ -733,29 +733,28 @@ func (ab *AsBuilt) decide() {
 // Exit returns the exit code of the verdict (SPEC §2).
 func (ab *AsBuilt) Exit() int { return [...]int{0, 3, 1}[ab.Verdict] }
 
-// abVec is a point or vector of the plane, mm.
-type abVec struct{ x, y float64 }
+// r2.Vec is a point or vector of the plane, mm.
 
 // abRigid maps a design point p to the measured frame: R(theta)·p + t.
 type abRigid struct {
 	theta float64
-	t     abVec
+	t     r2.Vec
 }
 
-func (r abRigid) apply(p abVec) abVec {
+func (r abRigid) apply(p r2.Vec) r2.Vec {
 	c, s := math.Cos(r.theta), math.Sin(r.theta)
-	return abVec{c*p.x - s*p.y + r.t.x, s*p.x + c*p.y + r.t.y}
+	return r2.Vec{X: c*p.X - s*p.Y + r.t.X, Y: s*p.X + c*p.Y + r.t.Y}
 }
 
 // inverse maps a measured point q to the design frame: Rᵀ·(q − t).
-func (r abRigid) inverse(q abVec) abVec {
+func (r abRigid) inverse(q r2.Vec) r2.Vec {
 	c, s := math.Cos(r.theta), math.Sin(r.theta)
-	x, y := q.x-r.t.x, q.y-r.t.y
-	return abVec{c*x + s*y, -s*x + c*y}
+	x, y := q.X-r.t.X, q.Y-r.t.Y
+	return r2.Vec{X: c*x + s*y, Y: -s*x + c*y}
 }
 
-func (r abRigid) inverseAll(qs []abVec) []abVec {
-	out := make([]abVec, len(qs))
+func (r abRigid) inverseAll(qs []r2.Vec) []r2.Vec {
+	out := make([]r2.Vec, len(qs))
 	for i, q := range qs {
 		out[i] = r.inverse(q)
 	}
@@ -765,17 +764,17 @@ func (r abRigid) inverseAll(qs []abVec) []abVec {
 // fitRigid is the least-squares rigid transform taking ps onto qs (the
 // 2-D Kabsch/Procrustes solution): θ = atan2(Σ p′×q′, Σ p′·q′) over the
 // centred points, t = q̄ − R·p̄. One pair fixes only the shift.
-func fitRigid(ps, qs []abVec, keep float64) abRigid {
+func fitRigid(ps, qs []r2.Vec, keep float64) abRigid {
 	n := float64(len(ps))
-	var pc, qc abVec
+	var pc, qc r2.Vec
 	for i := range ps {
-		pc.x, pc.y = pc.x+ps[i].x/n, pc.y+ps[i].y/n
-		qc.x, qc.y = qc.x+qs[i].x/n, qc.y+qs[i].y/n
+		pc.X, pc.Y = pc.X+ps[i].X/n, pc.Y+ps[i].Y/n
+		qc.X, qc.Y = qc.X+qs[i].X/n, qc.Y+qs[i].Y/n
 	}
 	var sc, ss float64
 	for i := range ps {
-		px, py := ps[i].x-pc.x, ps[i].y-pc.y
-		qx, qy := qs[i].x-qc.x, qs[i].y-qc.y
+		px, py := ps[i].X-pc.X, ps[i].Y-pc.Y
+		qx, qy := qs[i].X-qc.X, qs[i].Y-qc.Y
 		sc += px*qx + py*qy
 		ss += px*qy - py*qx
 	}
@@ -785,7 +784,7 @@ func fitRigid(ps, qs []abVec, keep float64) abRigid {
 	}
 	r := abRigid{theta: th}
 	rp := r.apply(pc)
-	r.t = abVec{qc.x - rp.x, qc.y - rp.y}
+	r.t = r2.Vec{X: qc.X - rp.X, Y: qc.Y - rp.Y}
 	return r
 }
 
@@ -800,7 +799,7 @@ func fitRigid(ps, qs []abVec, keep float64) abRigid {
 // group A's mirror image) keeps the file's way round, and a mislocated
 // hole, which pulls the least-squares contour a little, cannot turn it. It returns the transform, the matching (as
 // assignHoles) and the iterations the best start took.
-func bestFit(des, mea []abVec, gate float64, contour []r2.Vec) (abRigid, []int, int) {
+func bestFit(des, mea []r2.Vec, gate float64, contour []r2.Vec) (abRigid, []int, int) {
 	var best *fit
 	for _, tf := range fitStarts(des, mea, gate) {
 		f := scoreFit(des, mea, contour, settleFit(des, mea, gate, tf))
@@ -815,13 +814,13 @@ func bestFit(des, mea []abVec, gate float64, contour []r2.Vec) (abRigid, []int, 
 // at the patterns' principal axes and at every 15° (every quarter turn
 // for large patterns), then the design's longest pairs of holes set on
 // each measured pair as far apart.
-func fitStarts(des, mea []abVec, gate float64) []abRigid {
+func fitStarts(des, mea []r2.Vec, gate float64) []abRigid {
 	dc, mc := abCentroid(des), abCentroid(mea)
 	var starts []abRigid
 	centred := func(th float64) abRigid {
 		tf := abRigid{theta: th}
 		p := tf.apply(dc)
-		tf.t = abVec{mc.x - p.x, mc.y - p.y}
+		tf.t = r2.Vec{X: mc.X - p.X, Y: mc.Y - p.Y}
 		return tf
 	}
 	// Centroids matched, at the principal axes and at every 15°.
@@ -844,7 +843,7 @@ func fitStarts(des, mea []abVec, gate float64) []abRigid {
 // measured pair as far apart (within the gate), both ways round, at most
 // 400 starts: robust to missing and extra holes, which pull the centroids
 // apart. None for patterns of one hole, or too many to pair.
-func pairStarts(des, mea []abVec, gate float64) []abRigid {
+func pairStarts(des, mea []r2.Vec, gate float64) []abRigid {
 	n, m := len(des), len(mea)
 	if n < 2 || n > 40 || m < 2 || m > 200 {
 		return nil
@@ -856,7 +855,7 @@ func pairStarts(des, mea []abVec, gate float64) []abRigid {
 	var dp []pair
 	for i := range des {
 		for j := i + 1; j < n; j++ {
-			dp = append(dp, pair{i, j, math.Hypot(des[j].x-des[i].x, des[j].y-des[i].y)})
+			dp = append(dp, pair{i, j, math.Hypot(des[j].X-des[i].X, des[j].Y-des[i].Y)})
 		}
 	}
 	slices.SortStableFunc(dp, func(a, b pair) int { return cmp.Compare(b.d, a.d) })
@@ -869,13 +868,13 @@ func pairStarts(des, mea []abVec, gate float64) []abRigid {
 					continue
 				}
 				ma, mb := mea[a], mea[b]
-				if math.Abs(math.Hypot(mb.x-ma.x, mb.y-ma.y)-pr.d) > gate {
+				if math.Abs(math.Hypot(mb.X-ma.X, mb.Y-ma.Y)-pr.d) > gate {
 					continue
 				}
-				th := math.Atan2(mb.y-ma.y, mb.x-ma.x) - math.Atan2(q.y-p.y, q.x-p.x)
+				th := math.Atan2(mb.Y-ma.Y, mb.X-ma.X) - math.Atan2(q.Y-p.Y, q.X-p.X)
 				tf := abRigid{theta: math.Remainder(th, 2*math.Pi)}
 				rp := tf.apply(p)
-				tf.t = abVec{ma.x - rp.x, ma.y - rp.y}
+				tf.t = r2.Vec{X: ma.X - rp.X, Y: ma.Y - rp.Y}
 				starts = append(starts, tf)
 			}
 		}
@@ -899,13 +898,13 @@ type fit struct {
 // tf until the matching and the transform settle (or no hole matches), at
 // most 50 times. The fit's tf, match and iters are set; tf is not yet
 // reduced to within ±π.
-func settleFit(des, mea []abVec, gate float64, tf abRigid) *fit {
+func settleFit(des, mea []r2.Vec, gate float64, tf abRigid) *fit {
 	var match []int
 	iters := 0
 	for iters < 50 {
 		iters++
 		m := assignHoles(des, tf.inverseAll(mea), gate)
-		var ps, qs []abVec
+		var ps, qs []r2.Vec
 		for i, k := range m {
 			if k >= 0 {
 				ps, qs = append(ps, des[i]), append(qs, mea[k])
@@ -917,7 +916,7 @@ func settleFit(des, mea []abVec, gate float64, tf abRigid) *fit {
 		}
 		next := fitRigid(ps, qs, tf.theta)
 		settled := slices.Equal(m, match) && math.Abs(next.theta-tf.theta) < 1e-14 &&
-			math.Abs(next.t.x-tf.t.x) < 1e-10 && math.Abs(next.t.y-tf.t.y) < 1e-10
+			math.Abs(next.t.X-tf.t.X) < 1e-10 && math.Abs(next.t.Y-tf.t.Y) < 1e-10
 		tf, match = next, m
 		if settled {
 			break
@@ -929,23 +928,23 @@ func settleFit(des, mea []abVec, gate float64, tf abRigid) *fit {
 // scoreFit counts the settled fit f's matched holes and their squared
 // deviation, measures its contour's datum (when there is a contour), and
 // then reduces its rotation to within ±π.
-func scoreFit(des, mea []abVec, contour []r2.Vec, f *fit) *fit {
+func scoreFit(des, mea []r2.Vec, contour []r2.Vec, f *fit) *fit {
 	tf := f.tf
 	al := tf.inverseAll(mea)
 	for i, k := range f.match {
 		if k >= 0 {
 			f.matched++
-			f.sse += abSq(al[k].x-des[i].x) + abSq(al[k].y-des[i].y)
+			f.sse += abSq(al[k].X-des[i].X) + abSq(al[k].Y-des[i].Y)
 		}
 	}
 	f.tf.theta = math.Remainder(f.tf.theta, 2*math.Pi)
 	if len(contour) > 0 {
-		cs := make([]abVec, len(contour))
+		cs := make([]r2.Vec, len(contour))
 		for i, p := range contour {
-			cs[i] = tf.inverse(abVec{p.X, p.Y})
+			cs[i] = tf.inverse(r2.Vec{X: p.X, Y: p.Y})
 		}
 		lo := pointsMin(cs)
-		f.datum = math.Hypot(lo.x, lo.y)
+		f.datum = math.Hypot(lo.X, lo.Y)
 	}
 	return f
 }
@@ -968,22 +967,22 @@ func (f *fit) betterThan(b *fit, byContour bool, datumTie float64) bool {
 
 func abSq(v float64) float64 { return v * v }
 
-func abCentroid(ps []abVec) abVec {
-	var c abVec
+func abCentroid(ps []r2.Vec) r2.Vec {
+	var c r2.Vec
 	for _, p := range ps {
-		c.x += p.x / float64(len(ps))
-		c.y += p.y / float64(len(ps))
+		c.X += p.X / float64(len(ps))
+		c.Y += p.Y / float64(len(ps))
 	}
 	return c
 }
 
 // principalAxis is the direction of the points' major axis of inertia; ok
 // is false when the points have none (one point, or a round cloud).
-func principalAxis(ps []abVec) (float64, bool) {
+func principalAxis(ps []r2.Vec) (float64, bool) {
 	c := abCentroid(ps)
 	var sxx, syy, sxy float64
 	for _, p := range ps {
-		x, y := p.x-c.x, p.y-c.y
+		x, y := p.X-c.X, p.Y-c.Y
 		sxx, syy, sxy = sxx+x*x, syy+y*y, sxy+x*y
 	}
 	if math.Hypot(sxx-syy, 2*sxy) < 1e-9*(sxx+syy+1e-300) {
@@ -992,18 +991,18 @@ func principalAxis(ps []abVec) (float64, bool) {
 	return 0.5 * math.Atan2(2*sxy, sxx-syy), true
 }
 
-func contourMin(ps []r2.Vec) abVec {
-	lo := abVec{math.Inf(1), math.Inf(1)}
+func contourMin(ps []r2.Vec) r2.Vec {
+	lo := r2.Vec{X: math.Inf(1), Y: math.Inf(1)}
 	for _, p := range ps {
-		lo.x, lo.y = min(lo.x, p.X), min(lo.y, p.Y)
+		lo.X, lo.Y = min(lo.X, p.X), min(lo.Y, p.Y)
 	}
 	return lo
 }
 
-func pointsMin(ps []abVec) abVec {
-	lo := abVec{math.Inf(1), math.Inf(1)}
+func pointsMin(ps []r2.Vec) r2.Vec {
+	lo := r2.Vec{X: math.Inf(1), Y: math.Inf(1)}
 	for _, p := range ps {
-		lo.x, lo.y = min(lo.x, p.x), min(lo.y, p.y)
+		lo.X, lo.Y = min(lo.X, p.X), min(lo.Y, p.Y)
 	}
 	return lo
 }
@@ -1013,7 +1012,7 @@ func pointsMin(ps []abVec) abVec {
 // a pair farther apart than gate is never matched, so a far-off hole is an
 // extra hole and its design hole missing. It returns, per design point,
 // the index of its measured point or -1.
-func assignHoles(des, mea []abVec, gate float64) []int {
+func assignHoles(des, mea []r2.Vec, gate float64) []int {
 	out := make([]int, len(des))
 	for i := range out {
 		out[i] = -1
@@ -1022,7 +1021,7 @@ func assignHoles(des, mea []abVec, gate float64) []int {
 	var cand []int
 	for k, q := range mea {
 		for _, p := range des {
-			if math.Hypot(q.x-p.x, q.y-p.y) <= gate {
+			if math.Hypot(q.X-p.X, q.Y-p.Y) <= gate {
 				cand = append(cand, k)
 				break
 			}
@@ -1040,7 +1039,7 @@ func assignHoles(des, mea []abVec, gate float64) []int {
 		row := make([]float64, m+n)
 		for j, k := range cand {
 			q := mea[k]
-			d2 := abSq(q.x-p.x) + abSq(q.y-p.y)
+			d2 := abSq(q.X-p.X) + abSq(q.Y-p.Y)
 			row[j] = never
 			if d2 <= g2 {
 				row[j] = d2

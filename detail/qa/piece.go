@@ -172,8 +172,8 @@ func (pc *Piece) measureCut(contour []r2.Vec, tf abRigid, mode AlignMode, tol jo
 	}
 	lo, hi := math.Inf(1), math.Inf(-1)
 	for _, p := range contour {
-		q := tf.inverse(abVec{p.X, p.Y})
-		lo, hi = min(lo, q.x), max(hi, q.x)
+		q := tf.inverse(r2.Vec{X: p.X, Y: p.Y})
+		lo, hi = min(lo, q.X), max(hi, q.X)
 	}
 	pc.CutMeasured = true
 	pc.Cut = units.Length(hi - lo)

@@ -3,6 +3,8 @@ package qa
 import (
 	"math"
 	"slices"
+
+	"gonum.org/v1/gonum/spatial/r2"
 )
 
 // The robust best fit. Least squares over every matched hole spreads one
@@ -24,7 +26,7 @@ import (
 // unchanged; when it holds no more than half of them, or fewer than three,
 // no hole can be told from the others and tf stands as well. changed
 // reports whether holes were left out.
-func robustFit(des, mea []abVec, match []int, tol float64, tf abRigid) (out abRigid, in []bool, changed bool) {
+func robustFit(des, mea []r2.Vec, match []int, tol float64, tf abRigid) (out abRigid, in []bool, changed bool) {
 	var idx []int // matched design points
 	for i, k := range match {
 		if k >= 0 {
@@ -42,14 +44,14 @@ func robustFit(des, mea []abVec, match []int, tol float64, tf abRigid) (out abRi
 	if n < 4 {
 		return all()
 	}
-	ps, qs := make([]abVec, n), make([]abVec, n)
+	ps, qs := make([]r2.Vec, n), make([]r2.Vec, n)
 	for j, i := range idx {
 		ps[j], qs[j] = des[i], mea[match[i]]
 	}
 	var best *consensus
 	for _, pr := range seedPairs(n) {
 		a, b := pr[0], pr[1]
-		seed := fitRigid([]abVec{ps[a], ps[b]}, []abVec{qs[a], qs[b]}, tf.theta)
+		seed := fitRigid([]r2.Vec{ps[a], ps[b]}, []r2.Vec{qs[a], qs[b]}, tf.theta)
 		c := refine(ps, qs, tol, seed)
 		if c != nil && (best == nil || c.betterThan(best)) {
 			best = c
@@ -101,7 +103,7 @@ type consensus struct {
 // of the current fit, then least squares on them, until the set no longer
 // changes (at most 20 rounds). Nil when fewer than two holes agree or the
 // set does not settle.
-func refine(ps, qs []abVec, tol float64, tf abRigid) *consensus {
+func refine(ps, qs []r2.Vec, tol float64, tf abRigid) *consensus {
 	var prev []bool
 	for range 20 {
 		in, count := inliers(ps, qs, tol, tf)
@@ -113,12 +115,12 @@ func refine(ps, qs []abVec, tol float64, tf abRigid) *consensus {
 			for j := range ps {
 				if in[j] {
 					q := tf.inverse(qs[j])
-					c.sse += abSq(q.x-ps[j].x) + abSq(q.y-ps[j].y)
+					c.sse += abSq(q.X-ps[j].X) + abSq(q.Y-ps[j].Y)
 				}
 			}
 			return c
 		}
-		var sp, sq []abVec
+		var sp, sq []r2.Vec
 		for j := range ps {
 			if in[j] {
 				sp, sq = append(sp, ps[j]), append(sq, qs[j])
@@ -133,12 +135,12 @@ func refine(ps, qs []abVec, tol float64, tf abRigid) *consensus {
 // tf, lies within tol of the design centre (the slack of the report's own
 // comparison, so that a hole in the fit is never reported out of
 // position).
-func inliers(ps, qs []abVec, tol float64, tf abRigid) ([]bool, int) {
+func inliers(ps, qs []r2.Vec, tol float64, tf abRigid) ([]bool, int) {
 	in := make([]bool, len(ps))
 	count := 0
 	for j := range ps {
 		q := tf.inverse(qs[j])
-		if math.Hypot(q.x-ps[j].x, q.y-ps[j].y) <= tol+tolSlack {
+		if math.Hypot(q.X-ps[j].X, q.Y-ps[j].Y) <= tol+tolSlack {
 			in[j], count = true, count+1
 		}
 	}
@@ -157,7 +159,7 @@ func (c *consensus) betterThan(b *consensus) bool {
 // robustAlignment runs robustFit on the settled best fit tf and its
 // matching, matches the holes again under the fit it returns, and records
 // the holes the fit was taken on (and those left out) in ab.Alignment.
-func (ab *AsBuilt) robustAlignment(des, mea []abVec, tf abRigid, match []int) (abRigid, []int) {
+func (ab *AsBuilt) robustAlignment(des, mea []r2.Vec, tf abRigid, match []int) (abRigid, []int) {
 	tf, in, changed := robustFit(des, mea, match, float64(ab.Tolerance.Position), tf)
 	if changed {
 		match = assignHoles(des, tf.inverseAll(mea), float64(ab.Gate))

@@ -10,6 +10,7 @@ import (
 	"gaugeline/detail/measured"
 	"gaugeline/rules/units"
 
+	"gonum.org/v1/gonum/spatial/r2"
 	"pgregory.net/rapid"
 )
 
@@ -34,10 +35,10 @@ func mislocated(d *detail.Design, p MeasuredPart, k int, ex, ey, deg, tx, ty flo
 	for i, h := range d.Conn.Holes {
 		q := fr.of(float64(h.X), float64(h.Y))
 		if i == k {
-			q.x, q.y = q.x+ex, q.y+ey
+			q.X, q.Y = q.X+ex, q.Y+ey
 		}
 		w := float64(min(h.Dx, h.Dy))
-		s.Holes = append(s.Holes, measured.Hole{ID: h.ID, X: q.x, Y: q.y, Width: w, Length: w, Line: i + 1})
+		s.Holes = append(s.Holes, measured.Hole{ID: h.ID, X: q.X, Y: q.Y, Width: w, Length: w, Line: i + 1})
 	}
 	rotateSet(s, deg*math.Pi/180, tx, ty)
 	return s
@@ -134,13 +135,13 @@ func TestLeastSquaresWouldHideIt(t *testing.T) {
 	d := buildJob(t, "../../testdata/measured/hb-7-qa.yaml")
 	set := mislocated(d, MeasuredPlate, 0, 0, inch/4, 0, 0, 0)
 	fr := newPartFrame(d, MeasuredPlate)
-	var ps, qs []abVec
+	var ps, qs []r2.Vec
 	for i, h := range d.Conn.Holes {
 		ps = append(ps, fr.of(float64(h.X), float64(h.Y)))
-		qs = append(qs, abVec{set.Holes[i].X, set.Holes[i].Y})
+		qs = append(qs, r2.Vec{X: set.Holes[i].X, Y: set.Holes[i].Y})
 	}
 	ls := fitRigid(ps, qs, 0)
-	res := func(i int) float64 { q := ls.inverse(qs[i]); return math.Hypot(q.x-ps[i].x, q.y-ps[i].y) }
+	res := func(i int) float64 { q := ls.inverse(qs[i]); return math.Hypot(q.X-ps[i].X, q.Y-ps[i].Y) }
 	// 1 % : the linearisation drops terms in (1/4 in / 9 in)², about 0.1 %.
 	if got := res(0) / inch; math.Abs(got-0.075) > 0.075*0.01 {
 		t.Errorf("least squares: the bad hole reads %.5f in, want 0.075 in", got)
@@ -172,15 +173,15 @@ func TestBestFitUnchangedWhenEveryHoleFits(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	des := make([]abVec, len(d.Conn.Holes))
-	mea := make([]abVec, len(set.Holes))
+	des := make([]r2.Vec, len(d.Conn.Holes))
+	mea := make([]r2.Vec, len(set.Holes))
 	for i, h := range d.Conn.Holes {
-		des[i], mea[i] = abVec{float64(h.X), float64(h.Y)}, abVec{set.Holes[i].X, set.Holes[i].Y}
+		des[i], mea[i] = r2.Vec{X: float64(h.X), Y: float64(h.Y)}, r2.Vec{X: set.Holes[i].X, Y: set.Holes[i].Y}
 	}
 	ls := fitRigid(des, mea, 0) // least squares over all six, the pairs in order
 	a := ab.Alignment
-	if a.Rotation != ls.theta || float64(a.Shift[0]) != ls.t.x || float64(a.Shift[1]) != ls.t.y {
-		t.Errorf("fit %.12f rad (%.9f, %.9f), want least squares %.12f (%.9f, %.9f)", a.Rotation, float64(a.Shift[0]), float64(a.Shift[1]), ls.theta, ls.t.x, ls.t.y)
+	if a.Rotation != ls.theta || float64(a.Shift[0]) != ls.t.X || float64(a.Shift[1]) != ls.t.Y {
+		t.Errorf("fit %.12f rad (%.9f, %.9f), want least squares %.12f (%.9f, %.9f)", a.Rotation, float64(a.Shift[0]), float64(a.Shift[1]), ls.theta, ls.t.X, ls.t.Y)
 	}
 	if len(a.LeftOut) != 0 || len(a.FitOn) != 6 || a.Note != "rigid shift and rotation fitted by least squares over the matched holes" {
 		t.Errorf("fit on %q, left out %q, note %q", a.FitOn, a.LeftOut, a.Note)
