@@ -2,7 +2,6 @@ package qa
 
 import (
 	"bytes"
-	"cmp"
 	"encoding/json"
 	"errors"
 	"fmt"
@@ -16,6 +15,7 @@ import (
 	"gaugeline/detail"
 	"gaugeline/detail/jobfile"
 	"gaugeline/detail/measured"
+	"gaugeline/detail/qa/fit"
 	"gaugeline/engine"
 	"gaugeline/fileset"
 	"gaugeline/rules"
@@ -38,7 +38,7 @@ const (
 	AlignDatum AlignMode = iota
 	// AlignBestFit finds the rigid shift and rotation that best matches the
 	// measured holes to the design (least squares over the matched holes
-	// that agree within the position tolerance: robustFit).
+	// that agree within the position tolerance: fit.Robust).
 	AlignBestFit
 )
 
@@ -164,7 +164,7 @@ type Alignment struct {
 	Iterations int
 	Note       string
 	// FitOn are the design holes a best fit was taken on, in design
-	// order: every matched hole, or (robustFit) those that agree with one
+	// order: every matched hole, or (fit.Robust) those that agree with one
 	// rigid motion within the position tolerance. LeftOut are the matched
 	// holes left out of it, each reported against the fit on the others;
 	// nil when none is (and for datum alignment, where FitOn is nil too).
@@ -309,17 +309,17 @@ func (ab *AsBuilt) run(mode AlignMode) error {
 	for i, h := range set.Holes {
 		mea[i] = r2.Vec{X: h.X, Y: h.Y}
 	}
-	var tf abRigid
+	var tf fit.Rigid
 	var match []int
 	switch mode {
 	case AlignBestFit:
-		tf, match, ab.Alignment.Iterations = bestFit(des, mea, float64(ab.Gate), set.Contour)
+		tf, match, ab.Alignment.Iterations = fit.BestFit(des, mea, float64(ab.Gate), set.Contour)
 		ab.Alignment.Note = "rigid shift and rotation fitted by least squares over the matched holes"
 		tf, match = ab.robustAlignment(des, mea, tf, match)
 	default:
 		if len(set.Contour) > 0 {
-			lo := contourMin(set.Contour)
-			tf.t = lo
+			lo := fit.ContourMin(set.Contour)
+			tf.T = lo
 			if lo != (r2.Vec{}) {
 				ab.Alignment.Note = "datum: the lower-left corner of the part's contour (member end, heel)"
 				if ab.frame.plate {
@@ -327,15 +327,15 @@ func (ab *AsBuilt) run(mode AlignMode) error {
 				}
 			}
 		}
-		match = assignHoles(des, tf.inverseAll(mea), float64(ab.Gate))
+		match = fit.Assign(des, tf.InverseAll(mea), float64(ab.Gate))
 	}
 	ab.Alignment.Mode = mode
-	ab.Alignment.Shift = [2]units.Length{units.Length(tf.t.X), units.Length(tf.t.Y)}
-	ab.Alignment.Rotation = tf.theta
+	ab.Alignment.Shift = [2]units.Length{units.Length(tf.T.X), units.Length(tf.T.Y)}
+	ab.Alignment.Rotation = tf.Theta
 	if ab.Alignment.Note == "" {
 		ab.Alignment.Note = "datum: the file's frame as measured"
 	}
-	aligned := tf.inverseAll(mea)
+	aligned := tf.InverseAll(mea)
 	ab.Piece.measureCut(set.Contour, tf, mode, ab.Tolerance)
 	if err := ab.deviations(aligned, match); err != nil {
 		return err
@@ -732,391 +732,6 @@ func (ab *AsBuilt) decide() {
 
 // Exit returns the exit code of the verdict (SPEC §2).
 func (ab *AsBuilt) Exit() int { return [...]int{0, 3, 1}[ab.Verdict] }
-
-// r2.Vec is a point or vector of the plane, mm.
-
-// abRigid maps a design point p to the measured frame: R(theta)·p + t.
-type abRigid struct {
-	theta float64
-	t     r2.Vec
-}
-
-func (r abRigid) apply(p r2.Vec) r2.Vec {
-	c, s := math.Cos(r.theta), math.Sin(r.theta)
-	return r2.Vec{X: c*p.X - s*p.Y + r.t.X, Y: s*p.X + c*p.Y + r.t.Y}
-}
-
-// inverse maps a measured point q to the design frame: Rᵀ·(q − t).
-func (r abRigid) inverse(q r2.Vec) r2.Vec {
-	c, s := math.Cos(r.theta), math.Sin(r.theta)
-	x, y := q.X-r.t.X, q.Y-r.t.Y
-	return r2.Vec{X: c*x + s*y, Y: -s*x + c*y}
-}
-
-func (r abRigid) inverseAll(qs []r2.Vec) []r2.Vec {
-	out := make([]r2.Vec, len(qs))
-	for i, q := range qs {
-		out[i] = r.inverse(q)
-	}
-	return out
-}
-
-// fitRigid is the least-squares rigid transform taking ps onto qs (the
-// 2-D Kabsch/Procrustes solution): θ = atan2(Σ p′×q′, Σ p′·q′) over the
-// centred points, t = q̄ − R·p̄. One pair fixes only the shift.
-func fitRigid(ps, qs []r2.Vec, keep float64) abRigid {
-	n := float64(len(ps))
-	var pc, qc r2.Vec
-	for i := range ps {
-		pc.X, pc.Y = pc.X+ps[i].X/n, pc.Y+ps[i].Y/n
-		qc.X, qc.Y = qc.X+qs[i].X/n, qc.Y+qs[i].Y/n
-	}
-	var sc, ss float64
-	for i := range ps {
-		px, py := ps[i].X-pc.X, ps[i].Y-pc.Y
-		qx, qy := qs[i].X-qc.X, qs[i].Y-qc.Y
-		sc += px*qx + py*qy
-		ss += px*qy - py*qx
-	}
-	th := keep
-	if len(ps) > 1 && math.Hypot(sc, ss) > 1e-12 {
-		th = math.Atan2(ss, sc)
-	}
-	r := abRigid{theta: th}
-	rp := r.apply(pc)
-	r.t = r2.Vec{X: qc.X - rp.X, Y: qc.Y - rp.Y}
-	return r
-}
-
-// bestFit aligns the measured holes to the design: from several starts
-// (fitStarts) it alternates optimal matching and the least-squares fit
-// until the matching settles (settleFit). The best start matches the most
-// holes, then has the least squared deviation; among fits as good as each
-// other (a symmetric pattern), the part's contour decides (the start whose
-// contour lies from the datum into +x and +y) where its corners differ by
-// more than the gate, then the smallest rotation (fit.betterThan): a part
-// whose contour is as symmetric as its holes (a splice plate, member B's
-// group A's mirror image) keeps the file's way round, and a mislocated
-// hole, which pulls the least-squares contour a little, cannot turn it. It returns the transform, the matching (as
-// assignHoles) and the iterations the best start took.
-func bestFit(des, mea []r2.Vec, gate float64, contour []r2.Vec) (abRigid, []int, int) {
-	var best *fit
-	for _, tf := range fitStarts(des, mea, gate) {
-		f := scoreFit(des, mea, contour, settleFit(des, mea, gate, tf))
-		if best == nil || f.betterThan(best, len(contour) > 0, gate) {
-			best = f
-		}
-	}
-	return best.tf, best.match, best.iters
-}
-
-// fitStarts are the transforms bestFit starts from: the centroids matched
-// at the patterns' principal axes and at every 15° (every quarter turn
-// for large patterns), then the design's longest pairs of holes set on
-// each measured pair as far apart.
-func fitStarts(des, mea []r2.Vec, gate float64) []abRigid {
-	dc, mc := abCentroid(des), abCentroid(mea)
-	var starts []abRigid
-	centred := func(th float64) abRigid {
-		tf := abRigid{theta: th}
-		p := tf.apply(dc)
-		tf.t = r2.Vec{X: mc.X - p.X, Y: mc.Y - p.Y}
-		return tf
-	}
-	// Centroids matched, at the principal axes and at every 15°.
-	if a, ok := principalAxis(des); ok {
-		if b, ok := principalAxis(mea); ok {
-			starts = append(starts, centred(b-a), centred(b-a+math.Pi))
-		}
-	}
-	step := math.Pi / 2
-	if len(des) <= 60 {
-		step = math.Pi / 12
-	}
-	for th := 0.0; th < 2*math.Pi-1e-9; th += step {
-		starts = append(starts, centred(math.Remainder(th, 2*math.Pi)))
-	}
-	return append(starts, pairStarts(des, mea, gate)...)
-}
-
-// pairStarts sets the design's four longest pairs of holes on every
-// measured pair as far apart (within the gate), both ways round, at most
-// 400 starts: robust to missing and extra holes, which pull the centroids
-// apart. None for patterns of one hole, or too many to pair.
-func pairStarts(des, mea []r2.Vec, gate float64) []abRigid {
-	n, m := len(des), len(mea)
-	if n < 2 || n > 40 || m < 2 || m > 200 {
-		return nil
-	}
-	type pair struct {
-		i, j int
-		d    float64
-	}
-	var dp []pair
-	for i := range des {
-		for j := i + 1; j < n; j++ {
-			dp = append(dp, pair{i, j, math.Hypot(des[j].X-des[i].X, des[j].Y-des[i].Y)})
-		}
-	}
-	slices.SortStableFunc(dp, func(a, b pair) int { return cmp.Compare(b.d, a.d) })
-	var starts []abRigid
-	for _, pr := range dp[:min(4, len(dp))] {
-		p, q := des[pr.i], des[pr.j]
-		for a := range mea {
-			for b := range mea {
-				if a == b || len(starts) >= 400 {
-					continue
-				}
-				ma, mb := mea[a], mea[b]
-				if math.Abs(math.Hypot(mb.X-ma.X, mb.Y-ma.Y)-pr.d) > gate {
-					continue
-				}
-				th := math.Atan2(mb.Y-ma.Y, mb.X-ma.X) - math.Atan2(q.Y-p.Y, q.X-p.X)
-				tf := abRigid{theta: math.Remainder(th, 2*math.Pi)}
-				rp := tf.apply(p)
-				tf.t = r2.Vec{X: ma.X - rp.X, Y: ma.Y - rp.Y}
-				starts = append(starts, tf)
-			}
-		}
-	}
-	return starts
-}
-
-// fit is one start's outcome: its transform and matching, the holes
-// matched and their squared deviation, how far its contour's lower-left
-// corner lies from the datum, and the iterations it took.
-type fit struct {
-	tf      abRigid
-	match   []int
-	matched int
-	sse     float64
-	datum   float64
-	iters   int
-}
-
-// settleFit alternates optimal matching and the least-squares fit from
-// tf until the matching and the transform settle (or no hole matches), at
-// most 50 times. The fit's tf, match and iters are set; tf is not yet
-// reduced to within ±π.
-func settleFit(des, mea []r2.Vec, gate float64, tf abRigid) *fit {
-	var match []int
-	iters := 0
-	for iters < 50 {
-		iters++
-		m := assignHoles(des, tf.inverseAll(mea), gate)
-		var ps, qs []r2.Vec
-		for i, k := range m {
-			if k >= 0 {
-				ps, qs = append(ps, des[i]), append(qs, mea[k])
-			}
-		}
-		if len(ps) == 0 {
-			match = m
-			break
-		}
-		next := fitRigid(ps, qs, tf.theta)
-		settled := slices.Equal(m, match) && math.Abs(next.theta-tf.theta) < 1e-14 &&
-			math.Abs(next.t.X-tf.t.X) < 1e-10 && math.Abs(next.t.Y-tf.t.Y) < 1e-10
-		tf, match = next, m
-		if settled {
-			break
-		}
-	}
-	return &fit{tf: tf, match: match, iters: iters}
-}
-
-// scoreFit counts the settled fit f's matched holes and their squared
-// deviation, measures its contour's datum (when there is a contour), and
-// then reduces its rotation to within ±π.
-func scoreFit(des, mea []r2.Vec, contour []r2.Vec, f *fit) *fit {
-	tf := f.tf
-	al := tf.inverseAll(mea)
-	for i, k := range f.match {
-		if k >= 0 {
-			f.matched++
-			f.sse += abSq(al[k].X-des[i].X) + abSq(al[k].Y-des[i].Y)
-		}
-	}
-	f.tf.theta = math.Remainder(f.tf.theta, 2*math.Pi)
-	if len(contour) > 0 {
-		cs := make([]r2.Vec, len(contour))
-		for i, p := range contour {
-			cs[i] = tf.inverse(r2.Vec{X: p.X, Y: p.Y})
-		}
-		lo := pointsMin(cs)
-		f.datum = math.Hypot(lo.X, lo.Y)
-	}
-	return f
-}
-
-// betterThan reports whether fit f beats fit b: more holes matched, then
-// a clearly smaller squared deviation, then (byContour) a contour nearer
-// the datum by more than datumTie (mm), then a clearly smaller rotation.
-func (f *fit) betterThan(b *fit, byContour bool, datumTie float64) bool {
-	scale := 1e-9 * (1 + b.sse)
-	switch {
-	case f.matched != b.matched:
-		return f.matched > b.matched
-	case math.Abs(f.sse-b.sse) > max(scale, 1e-6):
-		return f.sse < b.sse
-	case byContour && math.Abs(f.datum-b.datum) > max(datumTie, 1e-3):
-		return f.datum < b.datum
-	}
-	return math.Abs(f.tf.theta) < math.Abs(b.tf.theta)-1e-9
-}
-
-func abSq(v float64) float64 { return v * v }
-
-func abCentroid(ps []r2.Vec) r2.Vec {
-	var c r2.Vec
-	for _, p := range ps {
-		c.X += p.X / float64(len(ps))
-		c.Y += p.Y / float64(len(ps))
-	}
-	return c
-}
-
-// principalAxis is the direction of the points' major axis of inertia; ok
-// is false when the points have none (one point, or a round cloud).
-func principalAxis(ps []r2.Vec) (float64, bool) {
-	c := abCentroid(ps)
-	var sxx, syy, sxy float64
-	for _, p := range ps {
-		x, y := p.X-c.X, p.Y-c.Y
-		sxx, syy, sxy = sxx+x*x, syy+y*y, sxy+x*y
-	}
-	if math.Hypot(sxx-syy, 2*sxy) < 1e-9*(sxx+syy+1e-300) {
-		return 0, false
-	}
-	return 0.5 * math.Atan2(2*sxy, sxx-syy), true
-}
-
-func contourMin(ps []r2.Vec) r2.Vec {
-	lo := r2.Vec{X: math.Inf(1), Y: math.Inf(1)}
-	for _, p := range ps {
-		lo.X, lo.Y = min(lo.X, p.X), min(lo.Y, p.Y)
-	}
-	return lo
-}
-
-func pointsMin(ps []r2.Vec) r2.Vec {
-	lo := r2.Vec{X: math.Inf(1), Y: math.Inf(1)}
-	for _, p := range ps {
-		lo.X, lo.Y = min(lo.X, p.X), min(lo.Y, p.Y)
-	}
-	return lo
-}
-
-// assignHoles matches design points to measured points by the optimal
-// assignment (least total squared distance, Hungarian method) with a gate:
-// a pair farther apart than gate is never matched, so a far-off hole is an
-// extra hole and its design hole missing. It returns, per design point,
-// the index of its measured point or -1.
-func assignHoles(des, mea []r2.Vec, gate float64) []int {
-	out := make([]int, len(des))
-	for i := range out {
-		out[i] = -1
-	}
-	// Only measured points within the gate of some design point take part.
-	var cand []int
-	for k, q := range mea {
-		for _, p := range des {
-			if math.Hypot(q.X-p.X, q.Y-p.Y) <= gate {
-				cand = append(cand, k)
-				break
-			}
-		}
-	}
-	if len(cand) == 0 || len(des) == 0 {
-		return out
-	}
-	n, m := len(des), len(cand)
-	g2 := gate * gate
-	const never = 1e18
-	// Columns: the candidates, then one "missing" column per design point.
-	cost := make([][]float64, n)
-	for i, p := range des {
-		row := make([]float64, m+n)
-		for j, k := range cand {
-			q := mea[k]
-			d2 := abSq(q.X-p.X) + abSq(q.Y-p.Y)
-			row[j] = never
-			if d2 <= g2 {
-				row[j] = d2
-			}
-		}
-		for j := range n {
-			row[m+j] = never
-		}
-		row[m+i] = g2
-		cost[i] = row
-	}
-	col := hungarian(cost)
-	for i, j := range col {
-		if j < m && cost[i][j] < never {
-			out[i] = cand[j]
-		}
-	}
-	return out
-}
-
-// hungarian solves the rectangular assignment problem (rows ≤ columns):
-// the column of each row that minimises the total cost. O(n²·m), the
-// potentials form of the Hungarian method.
-func hungarian(cost [][]float64) []int {
-	n := len(cost)
-	m := len(cost[0])
-	u, v := make([]float64, n+1), make([]float64, m+1)
-	p, way := make([]int, m+1), make([]int, m+1)
-	minv := make([]float64, m+1)
-	used := make([]bool, m+1)
-	for i := 1; i <= n; i++ {
-		p[0] = i
-		j0 := 0
-		for j := range minv {
-			minv[j], used[j] = math.Inf(1), false
-		}
-		for {
-			used[j0] = true
-			i0, delta, j1 := p[j0], math.Inf(1), 0
-			for j := 1; j <= m; j++ {
-				if used[j] {
-					continue
-				}
-				if cur := cost[i0-1][j-1] - u[i0] - v[j]; cur < minv[j] {
-					minv[j], way[j] = cur, j0
-				}
-				if minv[j] < delta {
-					delta, j1 = minv[j], j
-				}
-			}
-			for j := 0; j <= m; j++ {
-				if used[j] {
-					u[p[j]] += delta
-					v[j] -= delta
-				} else {
-					minv[j] -= delta
-				}
-			}
-			j0 = j1
-			if p[j0] == 0 {
-				break
-			}
-		}
-		for j0 != 0 {
-			j1 := way[j0]
-			p[j0] = p[j1]
-			j0 = j1
-		}
-	}
-	col := make([]int, n)
-	for j := 1; j <= m; j++ {
-		if p[j] != 0 {
-			col[p[j]-1] = j - 1
-		}
-	}
-	return col
-}
 
 // JSON document of reverify (SPEC §9): the check document of the as-built
 // geometry, its verdict replaced by accept, review or reject.

@@ -11,6 +11,7 @@ import (
 	"gaugeline/detail"
 	"gaugeline/detail/jobfile"
 	"gaugeline/detail/measured"
+	"gaugeline/detail/qa/fit"
 	"gaugeline/engine"
 	"gaugeline/rules/units"
 )
@@ -166,13 +167,13 @@ func (pc *Piece) endOf(i int, x units.Length) string {
 
 // measureCut takes the cut length from the measured contour, in the
 // design's frame under tf: its extent along the member.
-func (pc *Piece) measureCut(contour []r2.Vec, tf abRigid, mode AlignMode, tol jobfile.Tolerance) {
+func (pc *Piece) measureCut(contour []r2.Vec, tf fit.Rigid, mode AlignMode, tol jobfile.Tolerance) {
 	if pc == nil || len(contour) == 0 {
 		return
 	}
 	lo, hi := math.Inf(1), math.Inf(-1)
 	for _, p := range contour {
-		q := tf.inverse(r2.Vec{X: p.X, Y: p.Y})
+		q := tf.Inverse(r2.Vec{X: p.X, Y: p.Y})
 		lo, hi = min(lo, q.X), max(hi, q.X)
 	}
 	pc.CutMeasured = true

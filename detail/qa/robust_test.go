@@ -8,6 +8,7 @@ import (
 
 	"gaugeline/detail"
 	"gaugeline/detail/measured"
+	"gaugeline/detail/qa/fit"
 	"gaugeline/rules/units"
 
 	"gonum.org/v1/gonum/spatial/r2"
@@ -126,7 +127,7 @@ func TestBestFitFindsTheMislocatedHole(t *testing.T) {
 
 // TestLeastSquaresWouldHideIt shows what the robust fit is for: on the
 // one-line plate with its end hole 1/4 in off across the line, the
-// least-squares fit over all four holes (fitRigid) turns the line to
+// least-squares fit over all four holes (fit.FitRigid) turns the line to
 // meet the bad hole. Linearised, the end hole's across-line leverage is
 // 1/4 + 1.5²/5 = 0.7 (x = −1.5, −0.5, 0.5, 1.5 pitches), so it reads only
 // 0.3 × 1/4 in = 0.075 in, and the far end hole reads 0.2 × 1/4 in
@@ -140,8 +141,8 @@ func TestLeastSquaresWouldHideIt(t *testing.T) {
 		ps = append(ps, fr.of(float64(h.X), float64(h.Y)))
 		qs = append(qs, r2.Vec{X: set.Holes[i].X, Y: set.Holes[i].Y})
 	}
-	ls := fitRigid(ps, qs, 0)
-	res := func(i int) float64 { q := ls.inverse(qs[i]); return math.Hypot(q.X-ps[i].X, q.Y-ps[i].Y) }
+	ls := fit.FitRigid(ps, qs, 0)
+	res := func(i int) float64 { q := ls.Inverse(qs[i]); return math.Hypot(q.X-ps[i].X, q.Y-ps[i].Y) }
 	// 1 % : the linearisation drops terms in (1/4 in / 9 in)², about 0.1 %.
 	if got := res(0) / inch; math.Abs(got-0.075) > 0.075*0.01 {
 		t.Errorf("least squares: the bad hole reads %.5f in, want 0.075 in", got)
@@ -178,10 +179,10 @@ func TestBestFitUnchangedWhenEveryHoleFits(t *testing.T) {
 	for i, h := range d.Conn.Holes {
 		des[i], mea[i] = r2.Vec{X: float64(h.X), Y: float64(h.Y)}, r2.Vec{X: set.Holes[i].X, Y: set.Holes[i].Y}
 	}
-	ls := fitRigid(des, mea, 0) // least squares over all six, the pairs in order
+	ls := fit.FitRigid(des, mea, 0) // least squares over all six, the pairs in order
 	a := ab.Alignment
-	if a.Rotation != ls.theta || float64(a.Shift[0]) != ls.t.X || float64(a.Shift[1]) != ls.t.Y {
-		t.Errorf("fit %.12f rad (%.9f, %.9f), want least squares %.12f (%.9f, %.9f)", a.Rotation, float64(a.Shift[0]), float64(a.Shift[1]), ls.theta, ls.t.X, ls.t.Y)
+	if a.Rotation != ls.Theta || float64(a.Shift[0]) != ls.T.X || float64(a.Shift[1]) != ls.T.Y {
+		t.Errorf("fit %.12f rad (%.9f, %.9f), want least squares %.12f (%.9f, %.9f)", a.Rotation, float64(a.Shift[0]), float64(a.Shift[1]), ls.Theta, ls.T.X, ls.T.Y)
 	}
 	if len(a.LeftOut) != 0 || len(a.FitOn) != 6 || a.Note != "rigid shift and rotation fitted by least squares over the matched holes" {
 		t.Errorf("fit on %q, left out %q, note %q", a.FitOn, a.LeftOut, a.Note)
