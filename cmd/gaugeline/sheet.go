@@ -25,8 +25,10 @@ func newSheetCmd(o *rootOptions) *cobra.Command {
 	var so sheetOptions
 	cmd := command("sheet JOB.yaml -o DIR",
 		"Write the DXF cut sheet and CAM files of a layout that passes",
-		"sheet checks the job and writes, into the folder DIR/MARK, the dimensioned cut sheet MARK.dxf,\n"+
-			"the geometry-only CAM files MARK-member.cam.dxf and MARK-plate.cam.dxf and the manifest MARK.files.\n"+
+		"sheet checks the job and writes, into the folder DIR/MARK, the dimensioned cut sheet MARK.dxf (every\n"+
+			"piece whole, the bill of material and the bolt list), one geometry-only CAM file per piece\n"+
+			"(MARK-member.cam.dxf, the whole member with both ends' holes; MARK-plate.cam.dxf; MARK-far-plate.cam.dxf\n"+
+			"where the far end has a plate of its own) and the manifest MARK.files. It needs member.length.\n"+
 			"The folder is replaced as a whole, never file by file. A failing connection is\n"+
 			"refused (exit 1, nothing written) unless --not-for-fabrication, which writes the cut sheet alone,\n"+
 			"stamped NOT FOR FABRICATION on every view (exit 1 still: the connection fails). Bad input exits 2.",
