@@ -1,5 +1,5 @@
-// Package section is the catalog of angle sizes and the section properties
-// computed from their geometry.
+// Package section is the catalog of angle sizes and of W, WT, C and MC
+// shapes, and the section properties computed from their geometry.
 //
 // Units: lengths in millimetres (units.Length), areas in mm² (units.Area),
 // second moments in mm⁴ (plain float64, there being no typed quantity for
@@ -43,4 +43,26 @@
 //
 // Catalog order is the order of the source table: AISC lists large sizes
 // and thick plates first, EN 10056-1 small first.
+//
+// Rolled shapes (shapes.go; LookupW, LookupWT, LookupC): a small US catalog
+// of W, WT, C and MC sizes by their nominal dimensions d, bf, tw, tf and
+// kdes, read from the AISC Shapes Database v15.0. No SI sizes yet.
+//
+//   - Axes: x across the flanges, y along the web (stem). Ix and Iy are
+//     about the centroidal axes parallel to x and y; Rx, Ry their radii.
+//     Xbar is measured from a flange toe for W and WT (bf/2) and from the
+//     back of the web for channels (x̄, the shear-lag eccentricity of a
+//     web-bolted channel); Ybar from a flange's outer face: ȳ of a WT, the
+//     eccentricity of a flange-bolted tee, and d/2 for W and channels.
+//   - W and WT: rectangles (flanges, web or stem) plus a root fillet in
+//     each web-flange corner of radius kdes − tf, computed exactly (square
+//     less quarter disc). Within 1 % of the table in A, ȳ, rx and ry.
+//   - C: tf is the average flange thickness, taken halfway along the
+//     flange's inner face, which slopes 2 in 12 (CSlope); the flange is a
+//     trapezoid of area (bf − tw)·tf. The fillet and the rounded toes are
+//     left out (A runs up to 1 % low). Within 1.5 % of the table.
+//   - MC: modelled with parallel flanges (their slope varies and was not
+//     read in a source); that puts x̄ and ry 4 to 6 % high, so the catalog
+//     carries the tabulated x̄ and ry (ShapeProps.Carried; Iy = A·ry²).
+//     Geometry gives the uncorrected values.
 package section

@@ -90,3 +90,67 @@ func angleShape(a, b, t, r1, r2 float64) part {
 		neg(spandrel(b, t, r2, -1, -1)), // toe of leg B, inner corner
 	)
 }
+
+// polygon is the simple polygon through vs in counter-clockwise order
+// (Green's theorem: the exact area, centroid and second moments).
+func polygon(vs [][2]float64) part {
+	var a, mx, my, sxx, syy, sxy float64
+	for i := range vs {
+		x0, y0 := vs[i][0], vs[i][1]
+		x1, y1 := vs[(i+1)%len(vs)][0], vs[(i+1)%len(vs)][1]
+		c := x0*y1 - x1*y0
+		a += c
+		mx += (x0 + x1) * c
+		my += (y0 + y1) * c
+		syy += (x0*x0 + x0*x1 + x1*x1) * c
+		sxx += (y0*y0 + y0*y1 + y1*y1) * c
+		sxy += (x0*y1 + 2*x0*y0 + 2*x1*y1 + x1*y0) * c
+	}
+	a /= 2
+	cx, cy := mx/(6*a), my/(6*a)
+	return part{
+		a: a, cx: cx, cy: cy,
+		ixx: sxx/12 - a*cy*cy,
+		iyy: syy/12 - a*cx*cx,
+		ixy: sxy/24 - a*cx*cy,
+	}
+}
+
+// iShape is a W shape standing on its lower flange's outer face (y = 0),
+// symmetric about x = 0: depth d, flange width bf and thickness tf, web
+// thickness tw, and a root fillet of radius r in each of the four corners
+// between web and flange.
+func iShape(d, bf, tw, tf, r float64) part {
+	return sum(
+		rect(-bf/2, bf/2, 0, tf),
+		rect(-bf/2, bf/2, d-tf, d),
+		rect(-tw/2, tw/2, tf, d-tf),
+		spandrel(tw/2, tf, r, 1, 1), spandrel(-tw/2, tf, r, -1, 1),
+		spandrel(tw/2, d-tf, r, 1, -1), spandrel(-tw/2, d-tf, r, -1, -1),
+	)
+}
+
+// teeShape is a WT with its flange's outer face on y = 0 and the stem
+// along +y to y = d, symmetric about x = 0, with a root fillet of radius r
+// each side of the stem.
+func teeShape(d, bf, tw, tf, r float64) part {
+	return sum(
+		rect(-bf/2, bf/2, 0, tf),
+		rect(-tw/2, tw/2, tf, d),
+		spandrel(tw/2, tf, r, 1, 1), spandrel(-tw/2, tf, r, -1, 1),
+	)
+}
+
+// channelShape is a channel with the back of its web on x = 0 and its
+// flanges along +x, lower flange's outer face on y = 0. The flanges'
+// inner faces slope by s (rise over run, thicker at the web); tf is the
+// thickness halfway along the flange's inner face (x = (tw + bf)/2), so
+// that the flange's area is (bf − tw)·tf whatever the slope. No fillet
+// and no toe rounding.
+func channelShape(d, bf, tw, tf, s float64) part {
+	t := func(x float64) float64 { return tf + s*((tw+bf)/2-x) }
+	return polygon([][2]float64{
+		{0, 0}, {bf, 0}, {bf, t(bf)}, {tw, t(tw)},
+		{tw, d - t(tw)}, {bf, d - t(bf)}, {bf, d}, {0, d},
+	})
+}
