@@ -681,7 +681,7 @@ func TestDetailingWrenchClearance(t *testing.T) {
 		if got := nutAcrossFlats(tc.d, tc.sys); math.Abs(float64(got-tc.want)) > 1e-9 {
 			t.Errorf("%s: F = %v mm, want %v mm (%s)", tc.name, got, tc.want, tc.src)
 		}
-	}	// What the layout search keeps the gage above: C1 of the table for an
+	} // What the layout search keeps the gage above: C1 of the table for an
 	// inch bolt it lists; the F/√3 + w rule for a metric bolt (no metric
 	// table was read) and a 1/2 in bolt (the table starts at 5/8).
 	for _, tc := range []struct {
