@@ -185,13 +185,18 @@ func demoWrite(r *detail.Report, jobYAML []byte, how, dir string, out io.Writer)
 
 // demoMeasured invents what a QA inspector measured on the first part:
 // every hole a little off, one of them past the 1/16 in position
-// tolerance, one drilled a little large but within tolerance.
+// tolerance, one drilled a little large but within tolerance. The holes
+// are off along the gage line (+x, away from the member end) and on it in
+// y: the proposed layout can sit exactly at gage.workable's clearance
+// (toward the heel) and at a block shear ratio near 1 (toward the toe), and
+// a hole off across the line would then fail as built instead of showing
+// a REVIEW.
 func demoMeasured(d *detail.Design) []byte {
 	var b strings.Builder
 	b.WriteString("# Invented measurements of a fabricated part (demo), inches from the member end and heel.\n")
 	b.WriteString("id,x,y,diameter\n")
 	for i, h := range d.Conn.Holes {
-		dx, dy, dd := 0.01*float64(i%2), -0.01, 0.0
+		dx, dy, dd := 0.01, 0.0, 0.0
 		switch i {
 		case 1:
 			dx = 0.09 // past the 1/16 in position tolerance

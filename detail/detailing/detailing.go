@@ -671,16 +671,50 @@ func socketWall(sys units.System) units.Length {
 	return 5
 }
 
-// WrenchClearance is the least distance from the bolt centre to the face
-// of an obstruction that lets a socket reach the nut: the nut's corner
-// radius F/√3 plus the socket wall w. Common practice, not AISC 360.
-func WrenchClearance(d units.Length, sys units.System) units.Length {
+// wrenchRule is the common-practice wrench clearance, F/√3 + w: the nut's
+// corner radius plus the socket wall. It serves where the clearance table
+// has no row: 1/2 in bolts and every metric bolt (no metric table was read,
+// and a metric nut is not the inch nut of nearest size, so SI stays on this
+// rule).
+func wrenchRule(d units.Length, sys units.System) units.Length {
 	return nutAcrossFlats(d, sys)/units.Length(math.Sqrt(3)) + socketWall(sys)
 }
 
-// gageFindings is gage.workable (angles only; common practice): the hole
-// nearest the heel must clear the fillet, y − Dy/2 ≥ k, and leave room for
-// the socket beside the outstanding leg, y − t ≥ F/√3 + w.
+// legClearance is the least distance from the bolt centre to the face of
+// the outstanding leg that lets the bolt be entered and its nut turned,
+// with the clause it comes from and what it is. For an inch bolt of 5/8 to
+// 1-1/2 in, the larger of the tightening clearance C1 and the entering
+// clearance C2 of rules.BoltClearances (AISC Manual Table 8-4,
+// rules.ClearanceSource): the job does not say on which side the nut is
+// turned, so the socket is allowed for beside the leg. C1 exceeds C2 in
+// every row, so the tightening clearance is the limit there; the entering
+// clearance is named only where it is the larger. Otherwise the common
+// practice wrench clearance, wrenchRule.
+func legClearance(d units.Length, sys units.System) (limit units.Length, clause, what string) {
+	if sys == units.US {
+		if r, err := rules.BoltClearances(d); err == nil {
+			if r.Entering > r.Tightening {
+				return r.Entering, rules.ClearanceTable, "entering clearance C2"
+			}
+			return r.Tightening, rules.ClearanceTable, "tightening clearance C1"
+		}
+	}
+	return wrenchRule(d, sys), commonPractice, "wrench clearance"
+}
+
+// WrenchClearance is the least distance from the bolt centre to the face
+// of the outstanding leg, as gage.workable checks it (legClearance): what
+// the layout search keeps the gage above.
+func WrenchClearance(d units.Length, sys units.System) units.Length {
+	limit, _, _ := legClearance(d, sys)
+	return limit
+}
+
+// gageFindings is gage.workable (angles only): the hole nearest the heel
+// must clear the fillet, y − Dy/2 ≥ k (common practice), and leave room to
+// enter the bolt and turn its nut beside the outstanding leg, y − t ≥ the
+// clearance of legClearance (AISC Manual Table 8-4 where it has the bolt,
+// else F/√3 + w, common practice).
 func gageFindings(c *engine.Connection, info MemberInfo) []Finding {
 	const id = "gage.workable"
 	if len(c.Holes) == 0 || !c.Member.Heel() {
@@ -695,10 +729,10 @@ func gageFindings(c *engine.Connection, info MemberInfo) []Finding {
 	h, name := &c.Holes[near], holeName(c, near)
 	fillet := h.Y - h.Dy/2
 	leg := h.Y - c.Member.T
-	wrench := WrenchClearance(c.Bolt.D, c.Edition.System())
+	wrench, clause, what := legClearance(c.Bolt.D, c.Edition.System())
 	return []Finding{
 		lengthFinding(id, commonPractice, fillet, info.K, atLeast(fillet, info.K), name+" to fillet (k)"),
-		lengthFinding(id, commonPractice, leg, wrench, atLeast(leg, wrench), name+" to outstanding leg (wrench clearance)"),
+		lengthFinding(id, clause, leg, wrench, atLeast(leg, wrench), name+" to outstanding leg ("+what+")"),
 	}
 }
 

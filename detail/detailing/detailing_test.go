@@ -405,14 +405,14 @@ func TestDetailing(t *testing.T) {
 			want: []want{
 				// 2.5 − 13/32 = 2.09375 ≥ k = 7/8 (AISC Manual Table 1-7, from memory).
 				{id: "gage.workable", where: "H1 to fillet (k)", measured: 2.5 - 13.0/32, limit: 7.0 / 8, pass: true},
-				// 2.5 − 1/2 = 2 ≥ (1-1/4)/√3 + 3/16: heavy hex nut 1-1/4 across flats.
-				{id: "gage.workable", where: "H1 to outstanding leg (wrench clearance)", measured: 2, limit: 1.25/math.Sqrt(3) + 3.0/16, pass: true},
+				// 2.5 − 1/2 = 2 ≥ C1 = 1-1/4 for a 3/4 in bolt (AISC Manual Table 8-4, LRFD-era).
+				{id: "gage.workable", where: "H1 to outstanding leg (tightening clearance C1)", measured: 2, limit: 1.25, pass: true},
 				{id: "edge.min", where: "H1 to member toe", measured: 1.5, limit: 1, pass: true},
 				{id: "edge.max", where: "H1 to member toe", measured: 1.5, limit: 6, pass: true},
 				// L/r = 144/0.776 = 185.6 (rz of L4x4x1/2, AISC Manual Table 1-7, from memory).
 				{id: "slenderness", where: "L4x4x1/2 L/r", measured: 185.6, limit: 300, pass: true, advisory: true, tol: 0.05},
 			},
-			src: "common practice, no source (gage, nut F = 1.5d + 1/8 in per ASME B18.2.6 from memory, socket wall 3/16 in); AISC 360-22 D1 User Note: L/r ≤ 300",
+			src: "common practice, no source (fillet); AISC Manual Table 8-4 (LRFD-era), C1; AISC 360-22 D1 User Note: L/r ≤ 300",
 		},
 		{
 			name: "L4x4x1/2 at a 1-1/4 in gage is not workable",
@@ -420,10 +420,55 @@ func TestDetailing(t *testing.T) {
 			info: MemberInfo{K: in(7.0 / 8)},
 			want: []want{
 				{id: "gage.workable", where: "H1 to fillet (k)", measured: 1.25 - 13.0/32, limit: 7.0 / 8, pass: false},
-				{id: "gage.workable", where: "H1 to outstanding leg (wrench clearance)", measured: 0.75, limit: 1.25/math.Sqrt(3) + 3.0/16, pass: false},
+				{id: "gage.workable", where: "H1 to outstanding leg (tightening clearance C1)", measured: 0.75, limit: 1.25, pass: false},
 				{id: "slenderness", where: "member L/r", absent: true},
 			},
-			src: "common practice, no source; k = 7/8 in for L4x4x1/2 (AISC Manual Table 1-7, from memory)",
+			src: "common practice, no source (fillet); C1 = 1-1/4 in for 3/4 in (AISC Manual Table 8-4, LRFD-era); k = 7/8 in for L4x4x1/2 (AISC Manual Table 1-7, from memory)",
+		},
+		{
+			// By hand from the table: t = 1/2, C1(3/4 in) = 1-1/4, so the
+			// least workable gage is 1/2 + 1-1/4 = 1-3/4 in. At 1-11/16 in,
+			// 1-3/16 < 1-1/4 fails, where the older rule, F/√3 + 3/16 =
+			// 0.909 in, passed it.
+			name: "L4x4x1/2, 3/4 in bolt: 1-3/4 in gage is the least the tightening clearance allows",
+			conn: l4x4(t, us22, angle(in(1.75))),
+			info: MemberInfo{K: in(7.0 / 8)},
+			want: []want{
+				{id: "gage.workable", where: "H1 to outstanding leg (tightening clearance C1)", measured: 1.25, limit: 1.25, pass: true},
+			},
+			src: "AISC Manual Table 8-4 (LRFD-era, not confirmed against current Tables 7-15/7-16): C1 = 1-1/4 in for a 3/4 in bolt",
+		},
+		{
+			name: "L4x4x1/2, 3/4 in bolt: 1-11/16 in gage is short of the tightening clearance",
+			conn: l4x4(t, us22, angle(in(1+11.0/16))),
+			info: MemberInfo{K: in(7.0 / 8)},
+			want: []want{
+				{id: "gage.workable", where: "H1 to outstanding leg (tightening clearance C1)", measured: 1.1875, limit: 1.25, pass: false},
+			},
+			src: "AISC Manual Table 8-4 (LRFD-era): C1 = 1-1/4 in for a 3/4 in bolt; 1-11/16 − 1/2 = 1-3/16 in",
+		},
+		{
+			// 1 in bolt at a 2 in gage: 2 − 1/2 = 1-1/2 ≥ C1 = 1-7/16.
+			name: "L4x4x1/2, 1 in bolt: 2 in gage clears C1 = 1-7/16 in",
+			conn: l4x4(t, us22, layout{d: in(1), joint: rules.Bearing, hole: rules.Standard,
+				end: in(1.75), pitch: in(3), perLine: 3, gages: []units.Length{in(2)}}),
+			info: MemberInfo{K: in(7.0 / 8)},
+			want: []want{
+				{id: "gage.workable", where: "H1 to outstanding leg (tightening clearance C1)", measured: 1.5, limit: 1 + 7.0/16, pass: true},
+			},
+			src: "AISC Manual Table 8-4 (LRFD-era): C1 = 1-7/16 in for a 1 in bolt",
+		},
+		{
+			// The table starts at 5/8 in: a 1/2 in bolt keeps the common
+			// practice rule, F/√3 + 3/16 with F = 1.5(1/2) + 1/8 = 7/8 in.
+			name: "L4x4x1/2, 1/2 in bolt: no table row, the wrench clearance rule",
+			conn: l4x4(t, us22, layout{d: in(0.5), joint: rules.Bearing, hole: rules.Standard,
+				end: in(1), pitch: in(2), perLine: 3, gages: []units.Length{in(1.5)}}),
+			info: MemberInfo{K: in(7.0 / 8)},
+			want: []want{
+				{id: "gage.workable", where: "H1 to outstanding leg (wrench clearance)", measured: 1, limit: 0.875/math.Sqrt(3) + 3.0/16, pass: true},
+			},
+			src: "common practice, no source (nut F = 1.5d + 1/8 in per ASME B18.2.6 from memory, socket wall 3/16 in)",
 		},
 		{
 			name: "slenderness over 300 is advisory",
@@ -505,6 +550,9 @@ func TestDetailingClauses(t *testing.T) {
 			seen := map[string]bool{}
 			for _, f := range fs {
 				want, ok := tc.want[f.ID]
+				if f.ID == "gage.workable" && strings.Contains(f.Where, "outstanding leg") {
+					want = "AISC Manual Table 8-4" // the 3/4 in bolt has a row
+				}
 				if !ok {
 					t.Errorf("unknown id %q", f.ID)
 					continue
@@ -632,6 +680,24 @@ func TestDetailingWrenchClearance(t *testing.T) {
 	} {
 		if got := nutAcrossFlats(tc.d, tc.sys); math.Abs(float64(got-tc.want)) > 1e-9 {
 			t.Errorf("%s: F = %v mm, want %v mm (%s)", tc.name, got, tc.want, tc.src)
+		}
+	} // What the layout search keeps the gage above: C1 of the table for an
+	// inch bolt it lists; the F/√3 + w rule for a metric bolt (no metric
+	// table was read) and a 1/2 in bolt (the table starts at 5/8).
+	for _, tc := range []struct {
+		name string
+		d    units.Length
+		sys  units.System
+		want units.Length
+		src  string
+	}{
+		{"3/4 in", in(0.75), units.US, in(1.25), "AISC Manual Table 8-4 (LRFD-era), C1"},
+		{"1-1/2 in", in(1.5), units.US, in(1 + 15.0/16), "AISC Manual Table 8-4 (LRFD-era), C1"},
+		{"1/2 in", in(0.5), units.US, in(0.875)/units.Length(math.Sqrt(3)) + in(3.0/16), "common practice, F = 7/8 in from memory"},
+		{"M20", mm(20), units.SI, mm(34)/units.Length(math.Sqrt(3)) + mm(5), "common practice, F = 34 mm from memory"},
+	} {
+		if got := WrenchClearance(tc.d, tc.sys); math.Abs(float64(got-tc.want)) > 1e-9 {
+			t.Errorf("%s: clearance %v mm, want %v mm (%s)", tc.name, got, tc.want, tc.src)
 		}
 	}
 }
