@@ -25,6 +25,7 @@ import (
 	"strings"
 
 	"gaugeline/detail"
+	"gaugeline/detail/bom"
 	"gaugeline/detail/sheet"
 	"gaugeline/engine"
 	"gaugeline/rules"
@@ -135,6 +136,8 @@ type page struct {
 	Job, Load            []row
 	Holes                table
 	Schedule             table
+	BOM, Bolts           table    // bill of material and bolt list (with member.length)
+	BoltNotes            []string // the bolt list's washer and faying notes, and where its lengths come from
 	Drawing              template.HTML
 	DrawingNote          string
 	Summary              []summaryRow
@@ -183,6 +186,7 @@ func newPage(r *detail.Report, s *sheet.Sheet) page {
 	p.Job, p.Load = jobRows(d, f)
 	p.Holes = holeTable(c, f)
 	p.cutSheet(r, s)
+	p.billOfMaterial(r)
 	p.Limits, p.Summary = limits(r, f, "5.", "")
 	p.Findings = findings(r, f)
 	if r.Far != nil {
@@ -304,6 +308,30 @@ func (p *page) cutSheet(r *detail.Report, s *sheet.Sheet) {
 	if wide {
 		p.DrawingNote += " The drawing is long: scroll it sideways on screen; it prints scaled to the page."
 	}
+}
+
+// billOfMaterial sets the bill of material and the bolt list (the sheet's
+// tables; none without member.length).
+func (p *page) billOfMaterial(r *detail.Report) {
+	ps := r.Pieces()
+	if ps == nil {
+		return
+	}
+	sys := r.Design.Job.Units
+	shop := func(l units.Length) string { return units.FormatLength(l, sys, units.Shop) }
+	wu := bom.WeightUnit(sys)
+	p.BOM.Head = []string{"mark", "qty", "size", "grade", "cut length", "each " + wu, "total " + wu, "CAM file", "note"}
+	for _, pc := range ps {
+		p.BOM.Rows = append(p.BOM.Rows, tableRow{Cells: []string{pc.Mark, fmt.Sprint(pc.Quantity), pc.Size, pc.Grade, shop(pc.Length),
+			bom.WeightText(pc.Weight), bom.WeightText(pc.TotalWeight()), pc.CAMFile(r.Design.Job.Mark), pc.Note}})
+	}
+	p.BOM.Rows = append(p.BOM.Rows, tableRow{Cells: []string{"total", "", "", "", "", "", bom.WeightText(bom.TotalWeight(ps)), "", ""}})
+	p.Bolts.Head = []string{"bolt", "qty", "grip", "where", "holes", "washers"}
+	for _, b := range r.BoltList() {
+		p.Bolts.Rows = append(p.Bolts.Rows, tableRow{Cells: []string{b.BoltText(sys), fmt.Sprint(b.Quantity), shop(b.Grip), b.End, b.HolesText(), b.WashersText(sys)}})
+		p.BoltNotes = append(p.BoltNotes, fmt.Sprintf("%s: washers: %s; faying surfaces: %s", b.End, b.WasherNote, b.Faying))
+	}
+	p.BoltNotes = append(p.BoltNotes, bom.BoltLengthSource, bom.WasherSource)
 }
 
 // limits is a section and a summary row for every limit state of one
@@ -741,7 +769,16 @@ footer { margin-top: 30px; font-size: 12px; color: var(--muted); border-top: 1px
 <table>
 <tr>{{range .Schedule.Head}}<th>{{.}}</th>{{end}}</tr>
 {{range .Schedule.Rows}}<tr>{{range .Cells}}<td>{{.}}</td>{{end}}</tr>
-{{end}}</table>{{end}}
+{{end}}</table>{{end}}{{if .BOM.Head}}<h3>Bill of material</h3>
+<table id="bom">
+<tr>{{range .BOM.Head}}<th>{{.}}</th>{{end}}</tr>
+{{template "rows" .BOM.Rows}}</table>
+<h3>Bolt list</h3>
+<table id="bolts">
+<tr>{{range .Bolts.Head}}<th>{{.}}</th>{{end}}</tr>
+{{template "rows" .Bolts.Rows}}</table>
+<ul class="note">{{range .BoltNotes}}<li>{{.}}</li>{{end}}</ul>
+{{end}}
 
 <h2>3. Summary of limit states</h2>
 <table id="summary">

@@ -1010,3 +1010,39 @@ func TestSectionsDoNotDependOnTheID(t *testing.T) {
 		}
 	}
 }
+
+// The page carries the sheet's bill of material and bolt list where the
+// job gives member.length (their values are tested in package detail,
+// TestBOMOfASplice and the weight tests: 490 lb/ft³, RCSC Table C-2.1),
+// one row a piece plus the total, one a bolt set; none without it.
+func TestReportHasTheBillOfMaterial(t *testing.T) {
+	for _, path := range jobs(t) {
+		t.Run(filepath.Base(path), func(t *testing.T) {
+			r := check(t, path)
+			doc, _ := render(t, r)
+			ps, bs := r.Pieces(), r.BoltList()
+			bomT, boltsT := byID(doc, "bom"), byID(doc, "bolts")
+			if ps == nil {
+				if bomT != nil || boltsT != nil {
+					t.Error("a bill of material without member.length")
+				}
+				return
+			}
+			if bomT == nil || boltsT == nil {
+				t.Fatal("no bill of material or bolt list")
+			}
+			rows := find(bomT, func(n *html.Node) bool { return n.Data == "tr" })
+			if len(rows) != len(ps)+2 { // the head and the total
+				t.Errorf("%d bill-of-material rows, want %d pieces + head + total", len(rows), len(ps))
+			}
+			for i, p := range ps {
+				if got := text(rows[i+1]); !strings.Contains(got, p.Mark) || !strings.Contains(got, p.CAMFile(r.Design.Job.Mark)) {
+					t.Errorf("row %d %q does not name %s and its CAM file", i, got, p.Mark)
+				}
+			}
+			if n := len(find(boltsT, func(n *html.Node) bool { return n.Data == "tr" })); n != len(bs)+1 {
+				t.Errorf("%d bolt-list rows, want %d + head", n, len(bs))
+			}
+		})
+	}
+}
