@@ -261,6 +261,11 @@ func TestDemoAndRules(t *testing.T) {
 		if args[len(args)-1] == "aisc360-16" {
 			want = regexp.MustCompile(`\nM20\s+22\s+24\s`)
 		}
+		// AISC Manual Table 8-4 (LRFD-era edition, docs/sources/shapes.md): a
+		// 3/4-in bolt needs 1-1/4 in to tighten and 3/4 in to enter; US only.
+		if clr := regexp.MustCompile(`\n3/4"\s+1 1/4"\s+3/4"`); clr.MatchString(r.stdout) != (len(args) == 1) {
+			t.Errorf("%v: the clearance table is %v, want it with US units only", args, clr.MatchString(r.stdout))
+		}
 		if !want.MatchString(r.stdout) {
 			t.Errorf("%v: no %q row (AISC 360 Table J3.3/J3.3M)\n%s", args, want, r.stdout)
 		}

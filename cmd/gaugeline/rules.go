@@ -46,7 +46,26 @@ func runRules(ro rulesOptions, out io.Writer) error {
 	t.boltGrades()
 	t.pretension()
 	t.steels()
+	t.clearances()
 	return t.factors()
+}
+
+// clearances prints the entering and tightening clearances gage.workable
+// reads (US inch bolts only: SI keeps the common-practice wrench rule).
+func (t ruleTables) clearances() {
+	if t.sys != units.US {
+		return
+	}
+	tw := t.tw
+	fmt.Fprintf(tw, "\nBOLT\tTIGHTENING C1\tENTERING C2\t(%s)\n", rules.ClearanceSource)
+	for _, d := range t.e.Diameters() {
+		c, err := rules.BoltClearances(d)
+		if err != nil {
+			continue
+		}
+		fmt.Fprintf(tw, "%s	%s	%s	\n", t.size(d), t.size(c.Tightening), t.size(c.Entering))
+	}
+	tw.Flush()
 }
 
 // ruleTables prints the tables of an edition in one unit system, one
