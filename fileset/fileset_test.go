@@ -99,7 +99,7 @@ func TestIsLeftover(t *testing.T) {
 	for name, want := range map[string]bool{
 		".BR-7.new-123456": true, ".BR-7.old-99": true, ".summary.csv.4711.tmp": true,
 		".A.new-1.new-2": true,
-		LockName: false, ".new-ideas": false, ".notes": false, ".x.tmp": false, "BR-7.new-1": false,
+		LockName:         false, ".new-ideas": false, ".notes": false, ".x.tmp": false, "BR-7.new-1": false,
 		".BR-7.new-": false, "..x.new-1": false,
 	} {
 		if got := IsLeftover(name); got != want {
