@@ -327,28 +327,47 @@ func (ab *AsBuilt) decidePiece() {
 
 // farText writes the far end's as-built tables of the text report.
 func (ab *AsBuilt) farText(b *strings.Builder) {
-	pc := ab.Piece
-	if pc == nil || pc.FarReport == nil {
-		return
+	if pc := ab.Piece; pc != nil && pc.FarReport != nil {
+		ab.secondCheck(pc.FarDesignReport, pc.FarReport, "FAR END", "x from the far cut end").text(b)
 	}
-	b.WriteString("\n")
-	writeRatioTable(b, "LIMIT STATE (FAR END, AS BUILT; x from the far cut end)", ratioRows(pc.FarDesignReport, pc.FarReport))
-	b.WriteString("\n")
-	detail.FindingsText(b, ab.Design.Job.Units, "DETAILING (FAR END, AS BUILT)", pc.FarReport.Findings)
 }
 
 // farMarkdown writes the far end's as-built sections of the Markdown
 // report.
 func (ab *AsBuilt) farMarkdown(b *strings.Builder) {
-	pc := ab.Piece
-	if pc == nil || pc.FarReport == nil {
-		return
+	if pc := ab.Piece; pc != nil && pc.FarReport != nil {
+		ab.secondCheck(pc.FarDesignReport, pc.FarReport, "Far end", "x from the far cut end.").markdown(b)
 	}
-	b.WriteString("\n## Far end: limit states as built\n\nx from the far cut end.\n\n| id | clause | design ratio | as-built ratio | change | result |\n|---|---|---:|---:|---:|---|\n")
-	for _, row := range ratioRows(pc.FarDesignReport, pc.FarReport) {
+}
+
+// secondCheck is an as-built check a reverify report shows after the
+// first one's tables: a whole member's far end, a splice plate's member B.
+type secondCheck struct {
+	sys              units.System
+	design, asBuilt  *detail.Report
+	label, frameNote string // "FAR END" (text) or "Far end" (Markdown); how its x run
+}
+
+func (ab *AsBuilt) secondCheck(design, asBuilt *detail.Report, label, frameNote string) secondCheck {
+	return secondCheck{sys: ab.Design.Job.Units, design: design, asBuilt: asBuilt, label: label, frameNote: frameNote}
+}
+
+// text writes its limit states (design and as-built ratios) and its
+// detailing as the text report's tables.
+func (c secondCheck) text(b *strings.Builder) {
+	b.WriteString("\n")
+	writeRatioTable(b, "LIMIT STATE ("+c.label+", AS BUILT; "+c.frameNote+")", ratioRows(c.design, c.asBuilt))
+	b.WriteString("\n")
+	detail.FindingsText(b, c.sys, "DETAILING ("+c.label+", AS BUILT)", c.asBuilt.Findings)
+}
+
+// markdown writes the same as Markdown sections.
+func (c secondCheck) markdown(b *strings.Builder) {
+	fmt.Fprintf(b, "\n## %s: limit states as built\n\n%s\n\n| id | clause | design ratio | as-built ratio | change | result |\n|---|---|---:|---:|---:|---|\n", c.label, c.frameNote)
+	for _, row := range ratioRows(c.design, c.asBuilt) {
 		fmt.Fprintf(b, "| %s |\n", strings.Join(row, " | "))
 	}
-	detail.FindingsMarkdown(b, ab.Design.Job.Units, "Far end: detailing as built", pc.FarReport.Findings)
+	detail.FindingsMarkdown(b, c.sys, c.label+": detailing as built", c.asBuilt.Findings)
 }
 
 // jsonPiece is the whole member in the reverify JSON (piece): its cut

@@ -154,28 +154,17 @@ func (sp *SplicePlate) caution() string {
 
 // spliceText writes member B's as-built tables of the text report.
 func (ab *AsBuilt) spliceText(b *strings.Builder) {
-	sp := ab.Splice
-	if sp == nil || sp.BReport == nil {
-		return
+	if sp := ab.Splice; sp != nil && sp.BReport != nil {
+		ab.secondCheck(ab.DesignReport, sp.BReport, "MEMBER B'S GROUP", "mirrored about the joint").text(b)
 	}
-	b.WriteString("\n")
-	writeRatioTable(b, "LIMIT STATE (MEMBER B'S GROUP, AS BUILT; mirrored about the joint)", ratioRows(ab.DesignReport, sp.BReport))
-	b.WriteString("\n")
-	detail.FindingsText(b, ab.Design.Job.Units, "DETAILING (MEMBER B'S GROUP, AS BUILT)", sp.BReport.Findings)
 }
 
 // spliceMarkdown writes member B's as-built sections of the Markdown
 // report.
 func (ab *AsBuilt) spliceMarkdown(b *strings.Builder) {
-	sp := ab.Splice
-	if sp == nil || sp.BReport == nil {
-		return
+	if sp := ab.Splice; sp != nil && sp.BReport != nil {
+		ab.secondCheck(ab.DesignReport, sp.BReport, "Member B's group", "Mirrored about the joint into member A's frame.").markdown(b)
 	}
-	b.WriteString("\n## Member B's group: limit states as built\n\nMirrored about the joint into member A's frame.\n\n| id | clause | design ratio | as-built ratio | change | result |\n|---|---|---:|---:|---:|---|\n")
-	for _, row := range ratioRows(ab.DesignReport, sp.BReport) {
-		fmt.Fprintf(b, "| %s |\n", strings.Join(row, " | "))
-	}
-	detail.FindingsMarkdown(b, ab.Design.Job.Units, "Member B's group: detailing as built", sp.BReport.Findings)
 }
 
 // jsonSplice is the splice plate in the reverify JSON (splice): the
