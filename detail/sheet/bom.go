@@ -82,9 +82,10 @@ func appendNew(list []string, s string) []string {
 	return append(list, s)
 }
 
-// table writes a titled table from top down, each column as wide as its
-// widest entry plus two text heights, then its notes in smaller text, and
-// returns the y below it.
+// table writes a titled table from top down (the hole schedule, the bill
+// of material, the bolt list), each column as wide as its widest entry
+// plus two text heights, then its notes in smaller text, and returns the
+// y below it. Empty cells are left out.
 func (l sheetLayout) table(s *Sheet, title string, rows [][]string, top float64, notes []string) float64 {
 	h := l.h
 	cols := make([]float64, len(rows[0]))

@@ -777,7 +777,6 @@ func (l sheetLayout) holeText(h engine.HoleShape) string {
 // the y below it.
 func (l sheetLayout) schedule(s *Sheet, r *detail.Report, top float64) float64 {
 	d := r.Design
-	h := l.h
 	c := &d.Conn
 	hole, plate := c.Holes[0].HoleShape, c.Holes[0].InPlate() // each ply's holes are all alike in a design
 	limit := l.limit(l.len(PunchLimit(c.Bolt.D, l.sys)))
@@ -798,26 +797,7 @@ func (l sheetLayout) schedule(s *Sheet, r *detail.Report, top float64) float64 {
 	}
 	rows = append(rows, l.farPlateRows(r)...)
 	s.Schedule = rows
-	// Each column as wide as its widest entry, plus two text heights.
-	cols := make([]float64, len(rows[0]))
-	for i := 1; i < len(cols); i++ {
-		w := 0.0
-		for _, r := range rows {
-			lo, hi := Text{Height: h, Value: r[i-1]}.Box()
-			w = max(w, hi.X-lo.X)
-		}
-		cols[i] = cols[i-1] + w + 2*h
-	}
-	y := top - 1.4*h
-	s.Texts = append(s.Texts, Text{At: r2.Vec{X: 0, Y: y}, Height: 1.4 * h, Align: AlignLeftBase, Value: "HOLE SCHEDULE", Layer: LayerNotes})
-	y -= 0.4 * h
-	for _, r := range rows {
-		y -= 1.6 * h
-		for i, val := range r {
-			s.Texts = append(s.Texts, Text{At: r2.Vec{X: cols[i], Y: y}, Height: h, Align: AlignLeftBase, Value: val, Layer: LayerNotes})
-		}
-	}
-	return y - h
+	return l.table(s, "HOLE SCHEDULE", rows, top, nil)
 }
 
 // titleBlock writes the title block from the given top down: a framed box
