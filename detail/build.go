@@ -269,6 +269,10 @@ func (j job) buildMember(ed *rules.Edition, d *Design) error {
 	info.PositionTol = j.positionTolerance()
 
 	switch low, _ := m.Shape.FreeEdges(); {
+	case jobfile.RolledFamily(m.Shape) != "":
+		if err := j.buildRolled(mem, info); err != nil {
+			return err
+		}
 	case low: // a bar, given by width and thickness
 		j.buildFlat(mem, info)
 	default:
@@ -294,6 +298,62 @@ func (j job) buildFlat(mem *engine.Member, info *detailing.MemberInfo) {
 	mem.Ag = m.Width.Mul(m.Thickness)
 	info.Designation = "PL " + compact(m.Width, j.Units) + "x" + compact(m.Thickness, j.Units)
 	info.Rmin = units.Length(float64(min(m.Width, m.Thickness)) / math.Sqrt(12))
+}
+
+// buildRolled sets the section of a WT, channel or W shape from the
+// catalog (section.LookupWT, LookupC, LookupW): the connected element,
+// the junctions of the rest of the section with it, x̄ for Table D3.1
+// case 2 (a tee's ȳ; a channel's x̄; a W's, the ȳ of the tee that is half
+// of it), d for case 7 and the tear-off block.
+func (j job) buildRolled(mem *engine.Member, info *detailing.MemberInfo) error {
+	m := j.Member
+	var sh section.Shape
+	var err error
+	switch m.Shape {
+	case engine.Tee:
+		sh, err = section.LookupWT(m.Size)
+	case engine.Channel:
+		sh, err = section.LookupC(m.Size)
+	default:
+		sh, err = section.LookupW(m.Size)
+	}
+	if err != nil {
+		hint := ""
+		var us *section.UnknownShapeError
+		if errors.As(err, &us) {
+			hint = us.Hint()
+		}
+		return j.FieldError("member.size", fmt.Sprintf("no %s shape %q in the catalog", jobfile.RolledFamily(m.Shape), m.Size), hint)
+	}
+	props := sh.Properties()
+	info.Designation = sh.Name
+	info.Rmin = min(props.Rx, props.Ry)
+	mem.Ag = props.Area
+	// k1, the web centre line to the toe of the fillet across the flange,
+	// is taken from the catalog's geometry: tw/2 + (kdes − tf).
+	k1 := sh.Tw/2 + sh.K - sh.Tf
+	switch m.Shape {
+	case engine.Tee:
+		mem.Width, mem.T, mem.Xbar = sh.Bf, sh.Tf, props.Ybar
+		mem.Depth = 2 * sh.D // the W the tee is cut from (case 7)
+		mem.Junctions = []engine.Junction{{Name: "stem", Fillet: "k1", At: sh.Bf / 2, Face: sh.Tw / 2, Toe: k1}}
+		mem.TearOff = &engine.TearOff{Planes: 1, T: sh.Tw, At: mem.Ag - sh.Tw.Mul(sh.D-sh.K), What: "stem at the toe of its fillet"}
+	case engine.Channel:
+		mem.Width, mem.T, mem.Xbar = sh.D, sh.Tw, props.Xbar
+		mem.Junctions = []engine.Junction{
+			{Name: "flange", Fillet: "k", At: 0, Face: sh.Tf, Toe: sh.K, Side: 1},
+			{Name: "flange", Fillet: "k", At: sh.D, Face: sh.Tf, Toe: sh.K, Side: -1},
+		}
+		mem.TearOff = &engine.TearOff{Planes: 2, T: sh.Tw, At: sh.Tw.Mul(sh.D - 2*sh.K), What: "web at the toes of its fillets"}
+	default:
+		half := sh
+		half.Family, half.D = section.FamilyWT, sh.D/2
+		mem.Width, mem.T, mem.Xbar = sh.Bf, sh.Tf, half.Properties().Ybar
+		mem.Depth = sh.D
+		mem.Junctions = []engine.Junction{{Name: "web", Fillet: "k1", At: sh.Bf / 2, Face: sh.Tw / 2, Toe: k1}}
+		mem.TearOff = &engine.TearOff{Planes: 2, T: sh.Tw, At: mem.Ag - sh.Tw.Mul(sh.D-2*sh.K), What: "web at the toes of its fillets"}
+	}
+	return nil
 }
 
 // buildAngle sets the section of a single or double angle, from the

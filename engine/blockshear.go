@@ -2,6 +2,7 @@ package engine
 
 import (
 	"fmt"
+	"sort"
 
 	"gaugeline/engine/netsection"
 	"gaugeline/engine/working"
@@ -162,6 +163,31 @@ func blockResult(c *Connection, id string, blocks []block, p blockPart) Result {
 //
 // Clause: J4.3
 func MemberBlockShear(c *Connection) Result {
+	blocks, p := memberBlocks(c)
+	return blockResult(c, "member.block-shear", blocks, p)
+}
+
+// BlockCase is one block a block-shear check examined: how a report names
+// it, its areas, its nominal strength and the bolts it tears out.
+type BlockCase struct {
+	Desc          string
+	Agv, Anv, Ant units.Area
+	Rn            units.Force
+	Bolts         int
+}
+
+// MemberBlocks lists every block MemberBlockShear examines, in its order.
+func MemberBlocks(c *Connection) []BlockCase {
+	blocks, _ := memberBlocks(c)
+	out := make([]BlockCase, len(blocks))
+	for i, b := range blocks {
+		out[i] = BlockCase{Desc: b.desc, Agv: b.Agv, Anv: b.Anv, Ant: b.Ant, Rn: b.Rn, Bolts: b.Bolts}
+	}
+	return out
+}
+
+// memberBlocks is every block of the member and the part they belong to.
+func memberBlocks(c *Connection) ([]block, blockPart) {
 	m := c.Member
 	low, high := m.Shape.FreeEdges()
 	p := blockPart{
@@ -170,7 +196,99 @@ func MemberBlockShear(c *Connection) Result {
 		hasLow: low,
 		xEdge:  0, toward: -1, name: "member", ply: memberPly,
 	}
-	return blockResult(c, "member.block-shear", p.blocks(c), p)
+	blocks := p.blocks(c)
+	if len(m.Junctions) > 0 {
+		blocks = spanJunctions(c, blocks, p)
+	}
+	if m.TearOff != nil {
+		blocks = append(blocks, tearOffBlocks(c, p)...)
+	}
+	return blocks, p
+}
+
+// spanJunctions strengthens the blocks whose tension plane runs across a
+// junction in the middle of the connected element (a tee's stem, a W's
+// web): the element standing there tears in tension too, so its area, the
+// section less its connected elements (Ag − ConnectedArea), joins Ant (the
+// AISC teaching model's "block shear 3" of a WT,
+// aisc-org/aisc-model-viewer src/wt-plate/calculations.md).
+func spanJunctions(c *Connection, blocks []block, p blockPart) []block {
+	m := &c.Member
+	lines := GageLines(c)
+	extra := m.Ag - m.Shape.ConnectedArea(m)
+	for i := range blocks {
+		b := &blocks[i]
+		y0, y1 := units.Length(0), m.Width
+		if b.Low >= 0 {
+			y0 = c.Holes[lines[b.Low][0]].Y
+		}
+		if b.High < len(lines) {
+			y1 = c.Holes[lines[b.High][0]].Y
+		}
+		for _, j := range m.Junctions {
+			if j.Side == 0 && j.At > y0 && j.At < y1 {
+				b.Ant += extra
+				b.Rn = BlockShearRn(p.Fy, p.Fu, b.Agv, b.Anv, b.Ant, 1)
+				b.desc += ", the " + j.Name + " torn across"
+				break
+			}
+		}
+	}
+	return blocks
+}
+
+// tearOffBlocks are the blocks of Member.TearOff, one per row of bolts:
+// the tension plane across the connected element(s) through that row,
+// the shear planes along the rest of the section from the member end to
+// it, tearing out the bolts of that row and every row nearer the end.
+//
+// Clause: J4.3
+func tearOffBlocks(c *Connection, p blockPart) []block {
+	m := &c.Member
+	to := m.TearOff
+	allow := c.Edition.HoleAllowance()
+	xs := make([]units.Length, 0, len(c.Holes))
+	for i := range c.Holes {
+		xs = append(xs, c.Holes[i].X)
+	}
+	sort.Slice(xs, func(a, b int) bool { return xs[a] < xs[b] })
+	slack := LineSlack(c.Bolt.D)
+	var out []block
+	for k, x := range xs {
+		if k+1 < len(xs) && xs[k+1]-x <= slack {
+			continue // the row's last hole along x stands for it
+		}
+		var holes units.Length
+		bolts := 0
+		for i := range c.Holes {
+			h := &c.Holes[i]
+			if h.X <= x+eps {
+				bolts++
+			}
+			if h.X >= x-slack && h.X <= x+eps {
+				holes += h.Dy + allow
+			}
+		}
+		Agv := units.Area(float64(to.Planes) * float64(to.T) * float64(x))
+		Ant := max(to.At-units.Area(float64(m.Pieces)*float64(holes)*float64(m.T)), 0)
+		rn := BlockShearRn(p.Fy, p.Fu, Agv, Agv, Ant, 1)
+		out = append(out, block{netsection.Block{Low: -1, High: -1, Agv: Agv, Anv: Agv, Ant: Ant, Rn: rn, Bolts: bolts},
+			fmt.Sprintf("member: across the %s at the row %s from the end, the %s sheared", connectedName(m), units.FormatJob(x, c.Edition.System()), to.What)})
+	}
+	return out
+}
+
+// connectedName is what a report calls the member's connected element.
+func connectedName(m *Member) string {
+	if m.Pieces > 1 {
+		return PieceName(m.Shape) + "s"
+	}
+	for _, j := range m.Junctions {
+		if j.Name == "flange" {
+			return "web"
+		}
+	}
+	return "flange"
 }
 
 // PlateBlockShear is block shear of the plate, the weakest of the L-shaped

@@ -73,6 +73,13 @@ func BoltShear(c *Connection) Result {
 	n, ns := len(c.Holes), c.ShearPlanes()
 	Rn := Fnv.Times(Ab) * units.Force(float64(n*ns)*ff)
 	note := fmt.Sprintf("%d bolts × %d shear plane(s), threads %s", n, ns, c.Bolt.Threads)
+	planes := "shear planes per bolt"
+	if Apart(c.Member.Shape) {
+		// the holes are one piece's: a bolt in each piece at every hole,
+		// each in single shear
+		note = fmt.Sprintf("%d bolts in each of the %d %ss, 1 shear plane each, threads %s", n, c.Member.Pieces, PieceName(c.Member.Shape), c.Bolt.Threads)
+		planes = "bolts at each hole position, one in each " + PieceName(c.Member.Shape) + ", single shear"
+	}
 	if why != "" {
 		note += "; " + why
 	}
@@ -80,7 +87,7 @@ func BoltShear(c *Connection) Result {
 	pFnv := vs.add(Value{Name: "Fnv", V: float64(Fnv), Dim: units.DimStress, What: "nominal shear stress of the bolt"})
 	pAb := vs.add(Value{Name: "Ab", V: float64(Ab), Dim: units.DimArea, What: "nominal unthreaded bolt area, π·d²/4"})
 	pN := vs.add(valBolts(n))
-	pPlanes := vs.add(Value{Name: "planes", V: float64(ns), What: "shear planes per bolt"})
+	pPlanes := vs.add(Value{Name: "planes", V: float64(ns), What: planes})
 	pLj := vs.add(Value{Name: "long_joint_factor", V: f, Sym: "long-joint factor", What: "long-joint reduction of Fnv (1 when none)"})
 	pPl := vs.add(Value{Name: "pattern_length", V: float64(patternLength(c.Holes)), Dim: units.DimLength, Sym: "pattern length",
 		What: "length of the pattern along the load"})

@@ -30,6 +30,17 @@ type Member struct {
 	// group lying off the bar's centre line (J1.7); when it does, Check
 	// adds member.combined.
 	Eccentricity EndEccentricity
+	// Junctions are where the rest of the section stands on the connected
+	// element (junction.go); nil for a flat bar. An angle's heel is one
+	// (At 0, Face T, Toe k): set by the builder, read by gage.workable, the
+	// hole's room (ClearWidth) and the sheet.
+	Junctions []Junction
+	// Depth is d of Table D3.1 case 7: the depth of the W shape, or of the
+	// W a tee is cut from (zero where case 7 does not apply).
+	Depth units.Length
+	// TearOff is the rolled section's block out of the connected element's
+	// plane (nil: none).
+	TearOff *TearOff
 }
 
 // PlateKind is the role of the connecting plate.

@@ -1,6 +1,8 @@
 package engine
 
 import (
+	"sort"
+
 	"gaugeline/rules/units"
 	"gaugeline/rules/words"
 )
@@ -46,6 +48,7 @@ const (
 	D31Case2                 // U = 1 − x̄/l
 	D31Case8                 // angles: 0.80 with four or more bolts per line, 0.60 with three
 	D31Bound                 // D3: the connected elements' gross area over Ag
+	D31Case7                 // W shapes and tees cut from them, by the flanges: 0.90 with bf ≥ 2/3·d, else 0.85, 3 or more bolts per line
 )
 
 // Has reports whether every case of c is in d.
@@ -53,7 +56,7 @@ func (d D31) Has(c D31) bool { return d&c == c }
 
 // Shapes lists every shape a job may name, in the order its hint names
 // them.
-func Shapes() []Shape { return []Shape{Angle, DoubleAngle, Flat} }
+func Shapes() []Shape { return []Shape{Angle, DoubleAngle, Flat, Tee, Channel, Wide} }
 
 // ShapeNames is the job-file spellings of Shapes for a hint: "a, b or c".
 func ShapeNames() string {
@@ -72,10 +75,51 @@ func (m *Member) Heel() bool {
 }
 
 // ClearWidth is the room across the connected element a hole may take:
-// Width, less T past a heel.
+// Width, less T past a heel; with junctions, the widest strip between
+// their faces and the element's edges.
 func (m *Member) ClearWidth() units.Length {
-	if m.Heel() {
-		return m.Width - m.T
+	if len(m.Junctions) == 0 {
+		if m.Heel() {
+			return m.Width - m.T
+		}
+		return m.Width
 	}
-	return m.Width
+	type span struct{ lo, hi units.Length }
+	var taken []span
+	for _, j := range m.Junctions {
+		lo, hi := j.At-j.Face, j.At+j.Face
+		switch j.Side {
+		case 1:
+			lo = j.At
+		case -1:
+			hi = j.At
+		}
+		taken = append(taken, span{lo, hi})
+	}
+	sort.Slice(taken, func(a, b int) bool { return taken[a].lo < taken[b].lo })
+	widest, from := units.Length(0), units.Length(0)
+	for _, t := range taken {
+		widest = max(widest, t.lo-from)
+		from = max(from, t.hi)
+	}
+	return max(widest, m.Width-from)
+}
+
+// Apart reports whether the shape's pieces are not back to back but each
+// bolted to a plate of its own by bolts of its own (a W's two flanges): a
+// shape says so by a method Apart() bool. The pieces of such a shape are
+// its connected elements; the holes are one element's, the same in each.
+func Apart(s Shape) bool {
+	a, ok := s.(interface{ Apart() bool })
+	return ok && a.Apart()
+}
+
+// PieceName is what a report calls one piece of the member ("angle",
+// "flange"): a shape says so by a method PieceName() string; "angle"
+// otherwise (the pieces of a double angle).
+func PieceName(s Shape) string {
+	if n, ok := s.(interface{ PieceName() string }); ok {
+		return n.PieceName()
+	}
+	return "angle"
 }

@@ -134,7 +134,7 @@ func TestAddedShapeRenamedFlat(t *testing.T) {
 	relNear(t, "member.rupture An", valueOf(t, r, "An")/float64(units.SquareInch), 2.25, 0.005, src)
 	relNear(t, "member.rupture U", valueOf(t, r, "U"), 1, 0, "AISC 360-22 Table D3.1 case 1")
 	relNear(t, "member.rupture φRn", r.Available.Kip(), 97.9, 0.005, src)
-	if e := engine.ShapeNames(); e != "angle, double-angle or flat" {
+	if e := engine.ShapeNames(); e != "angle, double-angle, flat, wt, channel or w" {
 		t.Errorf("ShapeNames = %q: the test shapes must not be listed", e)
 	}
 }
@@ -169,7 +169,11 @@ func TestAddedShapeTeeStem(t *testing.T) {
 	// Table D3.1 case 2: U = 1 − x̄/l = 1 − 28.2/90 = 0.6867 (hand
 	// calculation); the bound 100·10/1920 = 0.521 is smaller.
 	relNear(t, "tee stem U", valueOf(t, r, "U"), 1-28.2/90, 1e-12, "AISC 360-22 Table D3.1 case 2, hand calculation")
-	relNear(t, "tee stem U (case 8)", valueOf(t, r, "U_case8"), 0, 0, "AISC 360-22 Table D3.1: case 8 is for angles")
+	for _, v := range r.Values {
+		if v.Name == "U_case8" || v.Name == "U_case7" {
+			t.Errorf("tee stem: rupture carries %s = %g; AISC 360-22 Table D3.1: case 8 is for angles, case 7 for flanges", v.Name, v.V)
+		}
+	}
 	if !strings.Contains(r.Note, "case 2") {
 		t.Errorf("rupture note %q, want Table D3.1 case 2", r.Note)
 	}

@@ -1,6 +1,7 @@
 package engine
 
 import (
+	"fmt"
 	"math"
 	"sort"
 
@@ -72,6 +73,7 @@ type ShearLag struct {
 	L     units.Length // length of connection l
 	U2    float64      // case 2: 1 − x̄/l (0 when l = 0)
 	U8    float64      // case 8 for angles (0 when it does not apply)
+	U7    float64      // case 7 for W shapes and tees cut from them (0 when it does not apply)
 	Ucon  float64      // lower bound for open sections: connected elements' area / Ag
 	PerLn int          // bolts in the line with the most bolts
 }
@@ -102,6 +104,9 @@ func ShearLagFactor(c *Connection) ShearLag {
 	case sl.PerLn == 3:
 		sl.U8 = 0.60
 	}
+	if cases.Has(D31Case7) {
+		sl.U7 = ShearLagCase7(m.Width, m.Depth, sl.PerLn)
+	}
 	if cases.Has(D31Bound) {
 		sl.Ucon = float64(m.Shape.ConnectedArea(&m)) / float64(m.Ag)
 	}
@@ -109,11 +114,31 @@ func ShearLagFactor(c *Connection) ShearLag {
 	if sl.U8 > sl.U {
 		sl.U, sl.Case = sl.U8, "case 8"
 	}
+	if sl.U7 > sl.U {
+		sl.U, sl.Case = sl.U7, "case 7"
+	}
 	if sl.Ucon > sl.U {
 		sl.U, sl.Case = sl.Ucon, "connected-element bound"
 	}
 	sl.U = math.Min(sl.U, 1)
 	return sl
+}
+
+// ShearLagCase7 is U of Table D3.1 case 7 for a W shape (or a tee cut
+// from one) connected by its flanges with perLine bolts in each line:
+// 0.90 when bf ≥ 2/3·d, else 0.85, with 3 or more bolts per line; 0 (does
+// not apply) with fewer. d is the W's depth (for a tee, the W it is cut
+// from: the case compares the parent shape's proportions; from memory).
+//
+// Clause: D3
+func ShearLagCase7(bf, d units.Length, perLine int) float64 {
+	switch {
+	case perLine < 3 || d <= 0:
+		return 0
+	case float64(bf) >= 2.0/3.0*float64(d)-1e-9:
+		return 0.90
+	}
+	return 0.85
 }
 
 // MemberYield is tensile yielding in the gross section: Pn = Fy·Ag.
@@ -153,12 +178,17 @@ func MemberRupture(c *Connection) Result {
 	pU := vs.add(Value{Name: "U", V: sl.U, What: "shear lag factor (Table D3.1)"})
 	pAe := vs.add(Value{Name: "Ae", V: float64(Ae), Dim: units.DimArea, What: "effective net area, U·An"})
 	pDd := vs.add(valDeduction(ded))
-	var pXbar, pL, pU2, pU8, pUcon *Value // angles: Table D3.1 cases 2 and 8, the D3 bound
+	var pXbar, pL, pU2, pU8, pU7, pUcon *Value // Table D3.1 cases 2, 8 (angles) and 7 (W, WT), the D3 bound
 	if !m.Shape.ShearLagCases().Has(D31Case1) {
 		pXbar = vs.add(Value{Name: "xbar", V: float64(m.Xbar), Dim: units.DimLength, Sym: "x̄", What: "connection eccentricity x̄"})
 		pL = vs.add(Value{Name: "l", V: float64(sl.L), Dim: units.DimLength, What: "length of connection, first to last row"})
 		pU2 = vs.add(Value{Name: "U_case2", V: sl.U2, Sym: "U (case 2)", What: "Table D3.1 case 2: 1 − x̄/l"})
-		pU8 = vs.add(Value{Name: "U_case8", V: sl.U8, Sym: "U (case 8)", What: "Table D3.1 case 8, angles (0 when it does not apply)"})
+		if m.Shape.ShearLagCases().Has(D31Case8) {
+			pU8 = vs.add(Value{Name: "U_case8", V: sl.U8, Sym: "U (case 8)", What: "Table D3.1 case 8, angles (0 when it does not apply)"})
+		}
+		if m.Shape.ShearLagCases().Has(D31Case7) {
+			pU7 = vs.add(Value{Name: "U_case7", V: sl.U7, Sym: "U (case 7)", What: "Table D3.1 case 7, W and WT by the flanges (0 when it does not apply)"})
+		}
 		pUcon = vs.add(Value{Name: "U_min", V: sl.Ucon, Sym: "U (bound)", What: "connected elements' gross area over Ag (D3)"})
 	}
 	r := finish(c, "member.rupture", "D2(b)", Rn, c.Edition.RuptureFactor(), vs.list,
@@ -188,31 +218,68 @@ func MemberRupture(c *Connection) Result {
 			where += "; U = 1.0 by Table D3.1 case 1: every part of the section is connected"
 			w.Steps = append(w.Steps, Step{Value: u})
 		} else {
-			xbar, l, u2, u8, ucon := *pXbar, *pL, *pU2, *pU8, *pUcon
-			w.Formula = append(w.Formula, Step{Value: Value{Sym: "U"}, Expr: working.Max(working.Sub(working.K(1, "1"), working.Div(working.Of(xbar), working.Of(l))),
-				working.Of(Value{Sym: "U case 8", V: sl.U8}), working.Of(Value{Sym: "U bound", V: sl.Ucon}))})
-			where += "; 1 − x̄/l is Table D3.1 case 2; case 8 for angles is 0.80 with 4 or more bolts in a line, 0.60 with 3; the bound is the connected elements' area over Ag (D3)"
-			if sl.L > eps {
-				w.Steps = append(w.Steps, Step{Value: u2, Expr: working.Sub(working.K(1, "1"), working.Div(working.Of(xbar), working.Of(l))), Show: working.ShowForm})
-			} else {
-				w.Steps = append(w.Steps, Step{Then: working.Words("U (case 2): one row of bolts, no length of connection")})
-			}
-			if sl.U8 > 0 {
-				w.Steps = append(w.Steps, Step{Value: u8})
-			} else {
-				w.Steps = append(w.Steps, Step{Then: working.Words("U (case 8) does not apply: fewer than 3 bolts in a line")})
-			}
-			connected := working.Mul(working.Of(Value{Sym: "n", V: float64(m.Pieces)}), working.Of(Value{Sym: "b", V: float64(m.Width), Dim: units.DimLength}),
-				working.Of(Value{Sym: "t", V: float64(m.T), Dim: units.DimLength}))
-			w.Steps = append(w.Steps,
-				Step{Value: ucon, Expr: working.Div(connected, working.Of(Ag)), Say: working.Words("connected elements' area / Ag")},
-				Step{Value: u, Expr: working.Max(working.Of(u2), working.Of(u8), working.Of(ucon))})
+			steps, formula, words := shearLagWorking(m, ed.System(), Ag, u, sl, *pXbar, *pL, *pU2, pU8, pU7, *pUcon)
+			w.Formula = append(w.Formula, formula)
+			where += words
+			w.Steps = append(w.Steps, steps...)
 		}
 		w.Where = where
 		w.Steps = append(w.Steps, aeStep, rn)
 		return w
 	}
 	return r
+}
+
+// shearLagWorking is the part of the rupture working that gives U: the
+// formula line, what its terms are and the steps, case by case over the
+// cases the shape names (u8, u7 nil where they do not apply).
+func shearLagWorking(m Member, sys units.System, Ag, u Value, sl ShearLag, xbar, l, u2 Value, u8, u7 *Value, ucon Value) (steps []Step, formula Step, where string) {
+	terms := []working.Expr{working.Sub(working.K(1, "1"), working.Div(working.Of(xbar), working.Of(l)))}
+	values := []working.Expr{working.Of(u2)}
+	where = "; 1 − x̄/l is Table D3.1 case 2"
+	if sl.L > eps {
+		steps = append(steps, Step{Value: u2, Expr: working.Sub(working.K(1, "1"), working.Div(working.Of(xbar), working.Of(l))), Show: working.ShowForm})
+	} else {
+		steps = append(steps, Step{Then: working.Words("U (case 2): one row of bolts, no length of connection")})
+	}
+	if u8 != nil {
+		terms = append(terms, working.Of(Value{Sym: "U case 8", V: sl.U8}))
+		values = append(values, working.Of(*u8))
+		where += "; case 8 for angles is 0.80 with 4 or more bolts in a line, 0.60 with 3"
+		if sl.U8 > 0 {
+			steps = append(steps, Step{Value: *u8})
+		} else {
+			steps = append(steps, Step{Then: working.Words("U (case 8) does not apply: fewer than 3 bolts in a line")})
+		}
+	}
+	if u7 != nil {
+		terms = append(terms, working.Of(Value{Sym: "U case 7", V: sl.U7}))
+		values = append(values, working.Of(*u7))
+		where += "; case 7 for W shapes and the tees cut from them, by the flanges with 3 or more bolts in a line, is 0.90 with bf ≥ 2/3·d (d of the W), else 0.85"
+		if sl.U7 > 0 {
+			steps = append(steps, Step{Value: *u7, Then: working.Words(case7Words(m, sys))})
+		} else {
+			steps = append(steps, Step{Then: working.Words("U (case 7) does not apply: fewer than 3 bolts in a line")})
+		}
+	}
+	terms = append(terms, working.Of(Value{Sym: "U bound", V: sl.Ucon}))
+	values = append(values, working.Of(ucon))
+	where += "; the bound is the connected elements' area over Ag (D3)"
+	connected := working.Mul(working.Of(Value{Sym: "n", V: float64(m.Pieces)}), working.Of(Value{Sym: "b", V: float64(m.Width), Dim: units.DimLength}),
+		working.Of(Value{Sym: "t", V: float64(m.T), Dim: units.DimLength}))
+	steps = append(steps,
+		Step{Value: ucon, Expr: working.Div(connected, working.Of(Ag)), Say: working.Words("connected elements' area / Ag")},
+		Step{Value: u, Expr: working.Max(values...)})
+	return steps, Step{Value: Value{Sym: "U"}, Expr: working.Max(terms...)}, where
+}
+
+// case7Words says which branch of case 7 applies.
+func case7Words(m Member, sys units.System) string {
+	cmp := "≥"
+	if ShearLagCase7(m.Width, m.Depth, 3) < 0.9 {
+		cmp = "<"
+	}
+	return fmt.Sprintf(": bf = %s %s 2/3·d = %s (d of the W)", units.FormatJob(m.Width, sys), cmp, units.FormatJob(m.Depth*2/3, sys))
 }
 
 // nominal is the nominal strength Rn as the value of a step.
@@ -241,9 +308,12 @@ func valDeduction(d units.Length) Value {
 // (what says so for one angle); a report says which.
 func valT(c *Connection, t units.Length, member bool, what string) Value {
 	if member && c.Member.Pieces == 2 {
-		what = "thickness of the 2 angles together"
+		what = "thickness of the 2 " + PieceName(c.Member.Shape) + "s together"
 	}
-	if !member && c.Plate != nil && c.Plate.Plates() == 2 {
+	switch {
+	case !member && c.Plate != nil && c.Plate.Plates() == 2 && Apart(c.Member.Shape):
+		what = "thickness of the 2 plates together, one at each " + PieceName(c.Member.Shape) + " (2 × " + units.FormatJob(c.Plate.T, c.Edition.System()) + ")"
+	case !member && c.Plate != nil && c.Plate.Plates() == 2:
 		what = "thickness of the 2 splice plates together (2 × " + units.FormatJob(c.Plate.T, c.Edition.System()) + ")"
 	}
 	return Value{Name: "t", V: float64(t), Dim: units.DimLength, What: what}

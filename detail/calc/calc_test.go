@@ -766,7 +766,7 @@ func TestFormulasOnThePageGiveTheNominalStrength(t *testing.T) {
 					t.Errorf("%s: An = Ag − Σt·deduction gives %g, the check %g", x.ID, An, v["An"])
 				}
 				if c.Member.Shape != engine.Flat {
-					if U := min(1, max(v["U_case2"], v["U_case8"], v["U_min"])); U != v["U"] {
+					if U := min(1, max(v["U_case2"], v["U_case8"], v["U_case7"], v["U_min"])); U != v["U"] {
 						t.Errorf("%s: U = max(...) gives %g, the check %g", x.ID, U, v["U"])
 					}
 				}

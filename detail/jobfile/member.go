@@ -42,7 +42,11 @@ func (p *parser) parseMember(n *yaml.Node) error {
 	if m.Shape, err = enum(p, b.vals["shape"], "member.shape", parseShape); err != nil {
 		return err
 	}
-	if low, _ := m.Shape.FreeEdges(); low { // a bar, given by width and thickness
+	if fam := RolledFamily(m.Shape); fam != "" {
+		if err := p.parseRolledSection(b, fam); err != nil {
+			return err
+		}
+	} else if low, _ := m.Shape.FreeEdges(); low { // a bar, given by width and thickness
 		for _, k := range []string{"size", "legs", "area", "xbar", "rmin", "gap"} {
 			if b.has(k) {
 				hint := "a flat bar is given by width and thickness, e.g. width: 6 in, thickness: 1/2 in"
@@ -150,6 +154,42 @@ func (p *parser) checkPlyHoles() error {
 		return check("plate", j.Plate.Hole, pt)
 	}
 	return nil
+}
+
+// RolledFamily is the catalog family whose designation member.size gives
+// for a rolled shape other than an angle ("WT", "C or MC", "W"); "" for
+// angles and flat bars.
+func RolledFamily(s engine.Shape) string {
+	switch s {
+	case engine.Tee:
+		return "WT"
+	case engine.Channel:
+		return "C or MC"
+	case engine.Wide:
+		return "W"
+	}
+	return ""
+}
+
+// rolledExample is a designation of each family for a hint.
+var rolledExample = map[string]string{"WT": "WT8x25", "C or MC": "C8x11.5", "W": "W8x21"}
+
+// parseRolledSection reads the size of a WT, channel or W shape: a
+// catalog designation, nothing else describes the section.
+func (p *parser) parseRolledSection(b *block, fam string) error {
+	m := &p.job.Member
+	for _, k := range []string{"legs", "thickness", "width", "area", "xbar", "rmin", "gap"} {
+		if b.has(k) {
+			return p.errAt(b.vals[k], b.sub(k), k+" does not apply to a "+m.Shape.String()+" member",
+				"a "+fam+" shape is given by its catalog designation, e.g. size: "+rolledExample[fam])
+		}
+	}
+	if !b.has("size") {
+		return p.missing(b, "member.size", "is required for a "+m.Shape.String()+" member", "size: "+rolledExample[fam])
+	}
+	var err error
+	m.Size, err = p.word(b.vals["size"], "member.size")
+	return err
 }
 
 // parseAngleSection reads size, or legs and thickness, of a single or

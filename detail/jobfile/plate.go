@@ -1,6 +1,7 @@
 package jobfile
 
 import (
+	"fmt"
 	"strings"
 
 	"go.yaml.in/yaml/v3"
@@ -86,10 +87,17 @@ func (p *parser) parseSplice(b *block, pl *PlateSpec) (err error) {
 		if pl.Count, err = p.integer(b.vals["count"], "plate.count", 1, 2); err != nil {
 			return err
 		}
-		if pl.Count == 2 && p.job.Member.Shape != nil && p.job.Member.Shape.Pieces() == 2 {
+		if sh := p.job.Member.Shape; sh != nil && engine.Apart(sh) && pl.Count != sh.Pieces() {
+			return p.errAt(b.vals["count"], "plate.count", fmt.Sprintf("a %s member bolts through each of its %d %ss to a plate of its own: the plate block describes each of the %d plates", sh, sh.Pieces(), engine.PieceName(sh), sh.Pieces()),
+				fmt.Sprintf("remove plate.count, or give plate.count: %d", sh.Pieces()))
+		}
+		if pl.Count == 2 && p.job.Member.Shape != nil && p.job.Member.Shape.Pieces() == 2 && !engine.Apart(p.job.Member.Shape) {
 			return p.errAt(b.vals["count"], "plate.count", "a double angle already bolts to one plate between its angles in two shear planes; two splice plates do not fit it",
 				"use plate.count: 1 with a double angle, or a flat between two splice plates")
 		}
+	}
+	if sh := p.job.Member.Shape; sh != nil && engine.Apart(sh) {
+		pl.Count = sh.Pieces() // a plate at each piece (a W's flanges)
 	}
 	pl.Gap = DefaultSpliceGap(p.job.Units)
 	if b.has("gap") {
