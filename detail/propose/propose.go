@@ -255,11 +255,11 @@ func (p *problem) exhaustiveTops(out *Proposal, k int, progress func(done, total
 func (p *problem) prunedTops(out *Proposal, nAlt int, progress func(done, total int)) (tops []*cand, other *cand) {
 	p.cache = map[candKey]*detail.Report{}
 	p.progress = progress
-	tops = p.bestPerGroup(p.obj, 1)
+	tops = p.bestOfParts(p.obj, 1)
 	out.Evaluated = p.evals
 	if len(tops) > 0 && nAlt > 0 {
-		tops = p.bestPerGroup(p.obj, 1+nAlt)
-		if o := p.bestPerGroup(p.obj.Other(), 1); len(o) > 0 {
+		tops = p.bestOfParts(p.obj, 1+nAlt)
+		if o := p.bestOfParts(p.obj.other(), 1); len(o) > 0 {
 			other = o[0]
 		}
 		out.AltEvaluated = p.evals - out.Evaluated
