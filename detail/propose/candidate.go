@@ -4,6 +4,7 @@ import (
 	"cmp"
 	"math"
 	"slices"
+	"strings"
 
 	"gaugeline/detail"
 	"gaugeline/detail/jobfile"
@@ -188,7 +189,22 @@ func (o order) other() order {
 	return order{keys}
 }
 
-// usualFirst reports whether the usual gage is a key of the order.
+// describe is the order for people: "usual gage, fewest bolts, then
+// shortest".
+// describe leaves the usual gage out when it ranks nothing (usual false).
+func (o order) describe(usual bool) string {
+	name := map[jobfile.Preference]string{jobfile.PreferUsualGage: "usual gage", jobfile.PreferFewestBolts: "fewest bolts",
+		jobfile.PreferShort: "shortest", jobfile.PreferThinnestPlate: "thinnest plate"}
+	var s []string
+	for _, k := range o.keys {
+		if k != jobfile.PreferUsualGage || usual {
+			s = append(s, name[k])
+		}
+	}
+	return strings.Join(s[:len(s)-1], ", ") + ", then " + s[len(s)-1]
+}
+
+// usualGage reports whether the usual gage is a key of the order.
 func (o order) usualGage() bool { return slices.Contains(o.keys, jobfile.PreferUsualGage) }
 
 // rank is what the order's keys and the diameter read of a layout (or,

@@ -167,9 +167,12 @@ type Proposal struct {
 	Report *detail.Report
 	// LayoutJob is the job file with the layout filled in (nil when
 	// nothing passes).
-	LayoutJob    []byte
-	Length       units.Length
-	Alternatives []Alternative
+	LayoutJob []byte
+	Length    units.Length
+	// GageSource says where the gage comes from (GageUsual, GageNotUsual,
+	// …), GageNote the same for people (why, when it is not the usual).
+	GageSource, GageNote string
+	Alternatives         []Alternative
 
 	Space     int // candidates in the space
 	Evaluated int // candidates fully checked to find the choice
@@ -225,6 +228,7 @@ func Propose(j *jobfile.Job, opt ProposeOptions) (*Proposal, error) {
 		return p.infeasible(out)
 	}
 	best := tops[0]
+	out.GageSource, out.GageNote = p.gageSource(best)
 	out.Layout = p.layout(best)
 	out.Length = best.length()
 	if nAlt > 0 {

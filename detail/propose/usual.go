@@ -1,6 +1,7 @@
 package propose
 
 import (
+	"fmt"
 	"math"
 	"slices"
 
@@ -121,4 +122,67 @@ func withValue(vs []units.Length, v units.Length) []units.Length {
 		return vs
 	}
 	return slices.Insert(slices.Clone(vs), i, v)
+}
+
+// Where the chosen gage comes from (Proposal.GageSource).
+const (
+	GageUsual     = "usual"         // the connected leg's usual gage lines
+	GageNotUsual  = "not-usual"     // the usual ones were ranked, but lost (GageNote says why)
+	GageJob       = "job"           // bolts.gage fixes it
+	GageCentred   = "centred"       // a flat: the group centred on the bar (J1.7)
+	GageSearched  = "searched"      // stock.prefer does not rank the usual gage
+	GageNoneKnown = "not-tabulated" // the leg (or the number of lines) has no usual gage
+)
+
+// usualSource names the table the usual gages come from.
+func usualSource(sys units.System) string {
+	if sys == units.SI {
+		return "usual back marks of metric angle legs"
+	}
+	return "workable gages in angle legs, AISC Manual Table 1-7A"
+}
+
+// gageSource says where the chosen layout's gage comes from, and why
+// when it is not the usual one. It may search the usual part of the
+// space (outside the counts of the proposal).
+func (p *problem) gageSource(best *cand) (src, note string) {
+	j, g := p.job, best.g
+	sys := j.Units
+	f := func(v units.Length) string { return units.FormatJob(v, sys) }
+	m := &g.tmpl.Conn.Member
+	leg := f(m.Width) + " leg"
+	switch {
+	case j.Given("bolts.gage"):
+		return GageJob, "gage " + f(best.g1) + " as bolts.gage fixes it"
+	case m.Shape.CentredGroup():
+		return GageCentred, "gage " + f(best.g1) + " centres the bolt group on the bar (J1.7)"
+	case p.usual.G == 0:
+		return GageNoneKnown, "no usual gage is tabulated for the " + leg + " (" + usualSource(sys) + "); the least workable gage is used"
+	case g.usualG1 == 0:
+		return GageNoneKnown, fmt.Sprintf("no usual gages for %d gage lines in the %s (%s)", g.lines, leg, usualSource(sys))
+	case !p.obj.usualGage():
+		return GageSearched, "stock.prefer does not list usual-gage: the gage is searched (usual gage of the " + leg + ": " + f(g.usualG1) + ")"
+	}
+	usual := "the usual gage " + f(g.usualG1)
+	if g.lines == 2 {
+		usual = "the usual gage lines " + f(g.usualG1) + " + " + f(g.usualG2)
+	}
+	usual += " of the " + leg + " (" + usualSource(sys) + ")"
+	if best.notUsual == 0 {
+		return GageUsual, "gage: " + usual
+	}
+	saveLimit := p.limit
+	p.limit, p.part = 0, partUsual
+	alt := p.bestPerGroup(p.obj, 1)
+	p.limit, p.part = saveLimit, partAll
+	switch {
+	case len(alt) > 0:
+		a := alt[0]
+		return GageNotUsual, fmt.Sprintf("%s passes only in a layout stock.prefer ranks lower (%d bolts, length %s)",
+			usual, a.g.nT, f(a.length()))
+	case !slices.ContainsFunc(p.gagesFor(g, best.g2i), func(v units.Length) bool { return math.Abs(float64(v-g.usualG1)) <= eps }):
+		return GageNotUsual, fmt.Sprintf("%s is not workable with %s bolts (fillet, wrench clearance and a margin of tolerance.position %s): a tighter gage is used",
+			usual, f(g.d), f(j.Tolerance.Position))
+	}
+	return GageNotUsual, usual + ": no layout in stock passes at it; a tighter gage is the only one that passes"
 }
