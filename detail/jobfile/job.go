@@ -190,6 +190,24 @@ func (o Objective) String() string { return objectives.Name(o) }
 // parseObjective reads the job-file spelling.
 func parseObjective(s string) (Objective, error) { return objectives.Parse(s) }
 
+// Preference is one key of propose's order (stock.prefer).
+type Preference int
+
+const (
+	PreferUsualGage     Preference = iota // "usual-gage": the leg's usual gage lines
+	PreferShort                           // "short-connection": least end + pattern + plate edge
+	PreferFewestBolts                     // "fewest-bolts"
+	PreferThinnestPlate                   // "thinnest-plate": thinner plate before the governing ratio
+)
+
+var preferences = words.New[Preference]("preference", "usual-gage", "short-connection", "fewest-bolts", "thinnest-plate")
+
+// String returns the job-file spelling.
+func (pr Preference) String() string { return preferences.Name(pr) }
+
+// parsePreference reads the job-file spelling.
+func parsePreference(s string) (Preference, error) { return preferences.Parse(s) }
+
 // Stock is what the shop stocks and prefers (propose only).
 type Stock struct {
 	Diameters   []units.Length
@@ -199,6 +217,9 @@ type Stock struct {
 	Step        units.Length // default 1/4 in (us), 5 mm (si)
 	Thicknesses []units.Length
 	Objective   Objective
+	// Prefer is stock.prefer as written, each preference once; nil when
+	// not given (propose's default order: usual gage, then the objective).
+	Prefer []Preference
 }
 
 // Tolerance is the fabrication tolerance reverify applies. Defaults are

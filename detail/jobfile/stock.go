@@ -2,13 +2,14 @@ package jobfile
 
 import (
 	"fmt"
+	"slices"
 
 	"go.yaml.in/yaml/v3"
 
 	"gaugeline/rules/units"
 )
 
-var stockKeys = []string{"diameters", "grades", "max_lines", "max_per_line", "step", "thicknesses", "objective"}
+var stockKeys = []string{"diameters", "grades", "max_lines", "max_per_line", "step", "thicknesses", "objective", "prefer"}
 
 // parseStock reads the stock block (propose), with the default step of
 // the job's unit system.
@@ -60,7 +61,37 @@ func (p *parser) parseStock(n *yaml.Node) error {
 			return err
 		}
 	}
+	if v := b.vals["prefer"]; v != nil {
+		if b.vals["objective"] != nil {
+			return p.errAt(v, "stock.prefer", "orders the search that stock.objective also orders",
+				"give one of them: stock.prefer lists fewest-bolts and short-connection in the order wanted")
+		}
+		if st.Prefer, err = p.stockPrefer(v); err != nil {
+			return err
+		}
+	}
 	return nil
+}
+
+// stockPrefer reads stock.prefer, a list of distinct preferences.
+func (p *parser) stockPrefer(v *yaml.Node) ([]Preference, error) {
+	items, err := p.list(v, "stock.prefer", "[usual-gage, fewest-bolts, short-connection]", 4)
+	if err != nil {
+		return nil, err
+	}
+	var prs []Preference
+	for i, it := range items {
+		path := fmt.Sprintf("stock.prefer[%d]", i)
+		pr, err := enum(p, it, path, parsePreference)
+		if err != nil {
+			return nil, err
+		}
+		if slices.Contains(prs, pr) {
+			return nil, p.errAt(it, path, fmt.Sprintf("lists %s twice", pr), "name each preference once")
+		}
+		prs = append(prs, pr)
+	}
+	return prs, nil
 }
 
 // stockDiameters reads stock.diameters, a list of bolt diameters.

@@ -3,6 +3,8 @@ package propose
 import (
 	"cmp"
 	"math"
+	"slices"
+	"strings"
 
 	"gaugeline/detail"
 	"gaugeline/detail/jobfile"
@@ -22,6 +24,12 @@ type cand struct {
 	lenNm   int64
 	rep     *detail.Report
 	ratioB  int64
+	// notUsual is 0 at the member's usual gage lines, 1 elsewhere (and
+	// everywhere when the order has no usual gage or the leg none).
+	notUsual int
+	// pitchOff is how far the pitch is from the usual pitch, in nm (0
+	// with one bolt per line or a pitch the job fixes).
+	pitchOff int64
 }
 
 // candKey identifies a candidate in the pruned search's cache: its group,
@@ -46,6 +54,12 @@ func (c *cand) length() units.Length {
 func (p *problem) newCand(g *group, g2i int, g1 units.Length, i, j, k int) *cand {
 	c := &cand{g: g, g2i: g2i, g1: g1, i: i, j: j, k: k}
 	c.lenNm = int64(math.Round(float64(c.length()) * 1e6)) // nm: exact ties
+	if !p.isUsual(g, g2i, g1) {
+		c.notUsual = 1
+	}
+	if g.perLine > 1 && len(g.pitch) > 1 {
+		c.pitchOff = int64(math.Round(math.Abs(float64(g.pitch[i]-p.usualPitch)) * 1e6))
+	}
 	return c
 }
 
@@ -133,19 +147,116 @@ func ratioBucket(ratio float64) int64 {
 // feasible reports whether the candidate was built and passes.
 func (c *cand) feasible() bool { return c.rep != nil && c.rep.Pass }
 
-// cmpPrefix orders by the objective's first three keys.
-func cmpPrefix(obj jobfile.Objective, nA int, lenA int64, dA units.Length, nB int, lenB int64, dB units.Length) int {
-	if obj == jobfile.ShortestLength {
-		return cmp.Or(cmp.Compare(lenA, lenB), cmp.Compare(nA, nB), cmp.Compare(dA, dB))
+// order is the lexicographic objective of the search: the keys the job
+// ranks (stock.prefer, or usual gage and stock.objective), then smallest
+// diameter, lowest governing ratio and the tie-breaks.
+type order struct{ keys []jobfile.Preference }
+
+// orderOf is the job's order. Without stock.prefer: usual gage, then
+// fewest bolts and shortest connection in the order stock.objective
+// gives. With it: the keys as listed, then fewest bolts and shortest
+// connection where the list leaves them out; a usual gage or a thinner
+// plate not listed is no key (the plate stays a tie-break after the
+// ratio).
+func orderOf(st jobfile.Stock) order {
+	if st.Prefer == nil {
+		if st.Objective == jobfile.ShortestLength {
+			return order{[]jobfile.Preference{jobfile.PreferUsualGage, jobfile.PreferShort, jobfile.PreferFewestBolts}}
+		}
+		return order{[]jobfile.Preference{jobfile.PreferUsualGage, jobfile.PreferFewestBolts, jobfile.PreferShort}}
 	}
-	return cmp.Or(cmp.Compare(nA, nB), cmp.Compare(lenA, lenB), cmp.Compare(dA, dB))
+	keys := slices.Clone(st.Prefer)
+	for _, k := range []jobfile.Preference{jobfile.PreferFewestBolts, jobfile.PreferShort} {
+		if !slices.Contains(keys, k) {
+			keys = append(keys, k)
+		}
+	}
+	return order{keys}
 }
 
+// other is the order with fewest bolts and shortest connection swapped:
+// the alternatives always show the best under it.
+func (o order) other() order {
+	keys := slices.Clone(o.keys)
+	for i, k := range keys {
+		switch k {
+		case jobfile.PreferFewestBolts:
+			keys[i] = jobfile.PreferShort
+		case jobfile.PreferShort:
+			keys[i] = jobfile.PreferFewestBolts
+		}
+	}
+	return order{keys}
+}
+
+// describe is the order for people: "usual gage, fewest bolts, then
+// shortest".
+// describe leaves the usual gage out when it ranks nothing (usual false).
+func (o order) describe(usual bool) string {
+	name := map[jobfile.Preference]string{jobfile.PreferUsualGage: "usual gage", jobfile.PreferFewestBolts: "fewest bolts",
+		jobfile.PreferShort: "shortest", jobfile.PreferThinnestPlate: "thinnest plate"}
+	var s []string
+	for _, k := range o.keys {
+		if k != jobfile.PreferUsualGage || usual {
+			s = append(s, name[k])
+		}
+	}
+	return strings.Join(s[:len(s)-1], ", ") + ", then " + s[len(s)-1]
+}
+
+// usualGage reports whether the usual gage is a key of the order.
+func (o order) usualGage() bool { return slices.Contains(o.keys, jobfile.PreferUsualGage) }
+
+// rank is what the order's keys and the diameter read of a layout (or,
+// for a group, the least of its layouts: lenNm its shortest).
+type rank struct {
+	nT       int
+	lenNm    int64
+	d, tp    units.Length
+	notUsual int // 0: at the usual gage lines
+}
+
+// rank is the candidate's rank.
+func (c *cand) rank() rank { return rank{c.g.nT, c.lenNm, c.g.d, c.g.tp, c.notUsual} }
+
+// lowRank is the least rank of the group's layouts (usual or not).
+func (g *group) lowRank() rank { return rank{g.nT, g.lowerLen(), g.d, g.tp, 0} }
+
+// cmpRank orders by the order's keys, then the diameter; the usual gage
+// only when usual is true. Each key is monotone in its field, so a rank
+// no smaller in every field never orders first: the bounds of the pruned
+// search rest on that.
+func (o order) cmpRank(a, b rank, usual bool) int {
+	for _, k := range o.keys {
+		c := 0
+		switch k {
+		case jobfile.PreferFewestBolts:
+			c = cmp.Compare(a.nT, b.nT)
+		case jobfile.PreferShort:
+			c = cmp.Compare(a.lenNm, b.lenNm)
+		case jobfile.PreferThinnestPlate:
+			c = cmp.Compare(a.tp, b.tp)
+		case jobfile.PreferUsualGage:
+			if usual {
+				c = cmp.Compare(a.notUsual, b.notUsual)
+			}
+		}
+		if c != 0 {
+			return c
+		}
+	}
+	return cmp.Compare(a.d, b.d)
+}
+
+// cmpPrefix orders by the order's keys but the usual gage, and the
+// diameter: the order within one part of the search (usual gage lines,
+// or not), where the usual gage is the same for every layout.
+func cmpPrefix(o order, a, b rank) int { return o.cmpRank(a, b, false) }
+
 // compare is the total order of SPEC §6 with its deterministic tie-breaks.
-func compare(obj jobfile.Objective, a, b *cand) int {
-	ga, gb := a.g, b.g
+func compare(o order, a, b *cand) int {
 	return cmp.Or(
-		cmpPrefix(obj, ga.nT, a.lenNm, ga.d, gb.nT, b.lenNm, gb.d),
+		o.cmpRank(a.rank(), b.rank(), true),
 		cmp.Compare(a.ratioB, b.ratioB),
 		tieBreak(a, b),
 	)
@@ -161,6 +272,7 @@ func tieBreak(a, b *cand) int {
 		cmp.Compare(ga.perLine, gb.perLine),
 		cmp.Compare(a.g1, b.g1),
 		cmp.Compare(ga.gage2[a.g2i], gb.gage2[b.g2i]),
+		cmp.Compare(a.pitchOff, b.pitchOff),
 		cmp.Compare(ga.end[a.j], gb.end[b.j]),
 		cmp.Compare(ga.pitch[a.i], gb.pitch[b.i]),
 		cmp.Compare(ga.edge[a.k], gb.edge[b.k]),

@@ -77,7 +77,7 @@ func (p *problem) exhaustive(space int, progress func(done, total int)) (bests, 
 	}
 	others = slices.Clone(bests)
 	slices.SortFunc(bests, func(a, b *cand) int { return compare(p.obj, a, b) })
-	slices.SortFunc(others, func(a, b *cand) int { return compare(p.obj.Other(), a, b) })
+	slices.SortFunc(others, func(a, b *cand) int { return compare(p.obj.other(), a, b) })
 	return onePerArrangement(bests), others
 }
 

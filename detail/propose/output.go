@@ -140,12 +140,13 @@ type jsonAlternative struct {
 }
 
 type jsonSearch struct {
-	Mode          string `json:"mode"`
-	Objective     string `json:"objective"`
-	Space         int    `json:"space"`
-	Evaluated     int    `json:"evaluated"`
-	AltEvaluated  int    `json:"evaluated_alternatives"`
-	DiagEvaluated int    `json:"evaluated_diagnosis,omitempty"`
+	Mode          string   `json:"mode"`
+	Objective     string   `json:"objective"`
+	Prefer        []string `json:"prefer"`
+	Space         int      `json:"space"`
+	Evaluated     int      `json:"evaluated"`
+	AltEvaluated  int      `json:"evaluated_alternatives"`
+	DiagEvaluated int      `json:"evaluated_diagnosis,omitempty"`
 }
 
 type jsonProposal struct {
@@ -154,6 +155,8 @@ type jsonProposal struct {
 	Plate        *jsonPlateLayout  `json:"plate,omitempty"`
 	Bolts        int               `json:"bolts"`
 	Length       detail.JSONNum    `json:"length"`
+	GageSource   string            `json:"gage_source"`
+	GageNote     string            `json:"gage_note"`
 	Alternatives []jsonAlternative `json:"alternatives"`
 	Search       jsonSearch        `json:"search"`
 }
@@ -185,7 +188,11 @@ func (p *Proposal) search(mode SearchMode) jsonSearch {
 	if mode == Exhaustive {
 		m = "exhaustive"
 	}
-	return jsonSearch{Mode: m, Objective: p.Job.Stock.Objective.String(), Space: p.Space, Evaluated: p.Evaluated,
+	var prefer []string
+	for _, k := range orderOf(p.Job.Stock).keys {
+		prefer = append(prefer, k.String())
+	}
+	return jsonSearch{Mode: m, Objective: p.Job.Stock.Objective.String(), Prefer: prefer, Space: p.Space, Evaluated: p.Evaluated,
 		AltEvaluated: p.AltEvaluated, DiagEvaluated: p.DiagEvaluated}
 }
 
@@ -198,7 +205,7 @@ func (p *Proposal) JSON(mode SearchMode) ([]byte, error) {
 	if p.Found() {
 		jl, jp := p.Layout.json(sys)
 		d := jsonProposal{Document: p.Report.Document(), Layout: jl, Plate: jp, Bolts: p.Layout.Bolts(),
-			Length: lengthJSON(p.Length, sys), Alternatives: []jsonAlternative{},
+			Length: lengthJSON(p.Length, sys), GageSource: p.GageSource, GageNote: p.GageNote, Alternatives: []jsonAlternative{},
 			Search: p.search(mode)}
 		for _, a := range p.Alternatives {
 			al, ap := a.Layout.json(sys)
@@ -229,10 +236,7 @@ func (p *Proposal) JSON(mode SearchMode) ([]byte, error) {
 func (p *Proposal) writeHead(b *strings.Builder, mode SearchMode, md bool) {
 	sys := p.Job.Units
 	s := p.search(mode)
-	obj := "fewest bolts, then shortest"
-	if p.Job.Stock.Objective == jobfile.ShortestLength {
-		obj = "shortest, then fewest bolts"
-	}
+	obj := orderOf(p.Job.Stock).describe(p.GageSource == GageUsual || p.GageSource == GageNotUsual || !p.Found())
 	if md {
 		fmt.Fprintf(b, "# %s — proposed layout\n\n", p.Job.Mark)
 	} else {
@@ -272,6 +276,16 @@ func (p *Proposal) writeHead(b *strings.Builder, mode SearchMode, md bool) {
 		b.WriteString("```\n")
 	}
 	fmt.Fprintf(b, "\n%d bolts, connection length %s\n", p.Layout.Bolts(), units.FormatJob(p.Length, sys))
+	if p.GageNote != "" {
+		lead := "note: "
+		if md {
+			lead = "> "
+		}
+		if p.GageSource == GageNotUsual {
+			lead += "caution: "
+		}
+		fmt.Fprintf(b, "%s%s\n", lead, p.GageNote)
+	}
 	if len(p.Alternatives) > 0 {
 		if md {
 			b.WriteString("\n## Alternatives\n\n| bolts | length | layout | governing | ratio |\n|---:|---:|---|---|---:|\n")

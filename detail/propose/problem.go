@@ -8,6 +8,7 @@ import (
 	"gaugeline/detail"
 	"gaugeline/detail/detailing"
 	"gaugeline/detail/jobfile"
+	"gaugeline/detail/section"
 	"gaugeline/engine"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
@@ -27,8 +28,16 @@ type problem struct {
 	build  *detail.Builder
 	ed     *rules.Edition
 	step   units.Length
-	obj    jobfile.Objective
+	obj    order
 	groups []*group
+
+	// usual is the connected leg's usual gage lines (zero: none, or the
+	// job fixes the gage); usualPitch the usual pitch; part the part of
+	// the space the pruned search walks (partAll unless the order has the
+	// usual gage and the leg one).
+	usual      section.UsualGages
+	usualPitch units.Length
+	part       part
 
 	diams  []option[units.Length]
 	grades []string
@@ -68,6 +77,10 @@ type group struct {
 	segments                [][2]int     // pitch index runs with monotone feasibility
 
 	gages map[int][]units.Length // by gage2 index
+
+	// usualG1, usualG2: the group's usual first gage and gage2 (0: the
+	// group has no usual gage lines: more than two lines, or the leg none)
+	usualG1, usualG2 units.Length
 }
 
 // option is a stock value to try, with its spelling in the job file.
@@ -95,7 +108,7 @@ func newProblem(j *jobfile.Job) (*problem, error) {
 		return nil, j.FieldError("plate.outline", "propose lays out the bolts on the rectangle of plate.width and plate.edge; it does not search a fixed outline",
 			"give the rectangle to propose a layout, then check it on the outline with gaugeline check")
 	}
-	p := &problem{job: j, build: bld, ed: ed, step: j.Stock.Step, obj: j.Stock.Objective, snapped: map[int]units.Length{},
+	p := &problem{job: j, build: bld, ed: ed, step: j.Stock.Step, obj: orderOf(j.Stock), snapped: map[int]units.Length{},
 		grids: map[[2]int][]units.Length{}}
 	diams, err := stockDiameters(j)
 	if err != nil {
@@ -109,6 +122,7 @@ func newProblem(j *jobfile.Job) (*problem, error) {
 	if err != nil {
 		return nil, err
 	}
+	p.usualPitch = usualPitchOf(j.Units)
 	if err := p.addGroups(diams, grades, thick, lineCounts(j), perLineCounts(j)); err != nil {
 		return nil, err
 	}
@@ -218,6 +232,7 @@ func (p *problem) addGroups(diams []option[units.Length], grades []string, thick
 	if err := p.checkStep(diams, members); err != nil {
 		return err
 	}
+	p.usual = usualOf(j, members[0].Conn.Member.Width)
 	for di, d := range diams {
 		if _, err := ed.Hole(d.v, j.Bolts.Hole); err != nil {
 			return detail.DiameterError(j, ed, err)
@@ -233,6 +248,7 @@ func (p *problem) addGroups(diams []option[units.Length], grades []string, thick
 					for _, n := range perLine {
 						g := &group{idx: len(p.groups), di: di, gi: gi, ti: ti, d: d.v, tp: t.v,
 							lines: l, perLine: n, nT: l * n, tmpl: tmpl}
+						p.setUsual(g)
 						p.ranges(g)
 						g.viable = g.fits && b.pass(n*l)
 						p.groups = append(p.groups, g)
@@ -399,6 +415,9 @@ func (p *problem) ranges(g *group) {
 		}
 	default:
 		g.gage2 = p.grid(p.gridUp(lo2), four)
+		if g.usualG2 >= lo2-eps { // the usual gage2 is always tried (may be past 4·d)
+			g.gage2 = withValue(g.gage2, g.usualG2)
+		}
 	}
 	if g.lines > 1 {
 		g.stag = j.Bolts.Stagger
@@ -457,9 +476,28 @@ func (p *problem) gageSpan(g *group, i int) (gs []units.Length, lo, hi int, onGr
 		}
 		return nil, 0, 0, false
 	}
-	gLo := max(g.tmpl.Info.K+g.dy/2, m.T+detailing.WrenchClearance(g.d, p.ed.System()), g.dy/2, m.Width-span-maxEdge)
-	gHi := m.Width - span - side
-	return nil, p.gridUp(gLo), p.gridDown(gHi), true
+	gLo, gHi := p.gageLimits(g, span, side, maxEdge)
+	lo, hi = p.gridUp(gLo), p.gridDown(gHi)
+	if u := g.usualG1; u > 0 && u >= gLo-eps && u <= gHi+eps {
+		// the usual gage is always tried, on the step grid or off it
+		if gs := withValue(p.grid(lo, hi), u); len(gs) != gridLen(lo, hi) || lo > hi {
+			return gs, 0, 0, false
+		}
+	}
+	return nil, lo, hi, true
+}
+
+// gageLimits are the least and largest first gage of an angle leg: clear
+// of the fillet (k) and with the wrench's clearance from the outstanding
+// leg, each with a margin of the job's position tolerance so that a hole
+// drilled that much toward the heel still passes gage.workable when
+// reverified (propose only; check holds the rule itself), and no farther
+// than the edge rules allow from the toe.
+func (p *problem) gageLimits(g *group, span, side, maxEdge units.Length) (lo, hi units.Length) {
+	m := &g.tmpl.Conn.Member
+	tol := p.job.Tolerance.Position
+	clear := max(g.tmpl.Info.K+g.dy/2, m.T+detailing.WrenchClearance(g.d, p.ed.System())) + tol
+	return max(clear, g.dy/2, m.Width-span-maxEdge), m.Width - span - side
 }
 
 // fillGages lists every group's gages ahead of the exhaustive search,

@@ -167,9 +167,12 @@ type Proposal struct {
 	Report *detail.Report
 	// LayoutJob is the job file with the layout filled in (nil when
 	// nothing passes).
-	LayoutJob    []byte
-	Length       units.Length
-	Alternatives []Alternative
+	LayoutJob []byte
+	Length    units.Length
+	// GageSource says where the gage comes from (GageUsual, GageNotUsual,
+	// …), GageNote the same for people (why, when it is not the usual).
+	GageSource, GageNote string
+	Alternatives         []Alternative
 
 	Space     int // candidates in the space
 	Evaluated int // candidates fully checked to find the choice
@@ -225,6 +228,7 @@ func Propose(j *jobfile.Job, opt ProposeOptions) (*Proposal, error) {
 		return p.infeasible(out)
 	}
 	best := tops[0]
+	out.GageSource, out.GageNote = p.gageSource(best)
 	out.Layout = p.layout(best)
 	out.Length = best.length()
 	if nAlt > 0 {
@@ -255,11 +259,11 @@ func (p *problem) exhaustiveTops(out *Proposal, k int, progress func(done, total
 func (p *problem) prunedTops(out *Proposal, nAlt int, progress func(done, total int)) (tops []*cand, other *cand) {
 	p.cache = map[candKey]*detail.Report{}
 	p.progress = progress
-	tops = p.bestPerGroup(p.obj, 1)
+	tops = p.bestOfParts(p.obj, 1)
 	out.Evaluated = p.evals
 	if len(tops) > 0 && nAlt > 0 {
-		tops = p.bestPerGroup(p.obj, 1+nAlt)
-		if o := p.bestPerGroup(p.obj.Other(), 1); len(o) > 0 {
+		tops = p.bestOfParts(p.obj, 1+nAlt)
+		if o := p.bestOfParts(p.obj.other(), 1); len(o) > 0 {
 			other = o[0]
 		}
 		out.AltEvaluated = p.evals - out.Evaluated

@@ -217,7 +217,14 @@ func drawProposeJobOf(t *rapid.T, shapes []string, fixGage bool) string {
 	tail += fmt.Sprintf("  max_lines: %d\n", rapid.IntRange(1, 2).Draw(t, "maxLines"))
 	tail += fmt.Sprintf("  max_per_line: %d\n", rapid.IntRange(1, 4).Draw(t, "maxPerLine"))
 	tail += "  step: " + step + "\n" + thickLine
-	tail += "  objective: " + rapid.SampledFrom([]string{"bolts", "length"}).Draw(t, "objective") + "\n"
+	if rapid.IntRange(0, 2).Draw(t, "prefer") == 0 {
+		tail += "  objective: " + rapid.SampledFrom([]string{"bolts", "length"}).Draw(t, "objective") + "\n"
+	} else {
+		// stock.prefer: any order of any of the four, the search's order
+		all := []string{"usual-gage", "short-connection", "fewest-bolts", "thinnest-plate"}
+		pr := rapid.Permutation(all).Draw(t, "preferOrder")
+		tail += "  prefer: [" + strings.Join(pr[:rapid.IntRange(1, 4).Draw(t, "preferN")], ", ") + "]\n"
+	}
 	b.WriteString(tail)
 	return b.String()
 }

@@ -8,7 +8,6 @@ import (
 
 	"gaugeline/detail"
 	"gaugeline/detail/detailing"
-	"gaugeline/detail/jobfile"
 	"gaugeline/rules/units"
 )
 
@@ -25,10 +24,10 @@ func (g *group) lowerLen() int64 {
 // under obj, best first, pruning groups and layouts that cannot enter the
 // k best. (A group whose bound is the k-th best cannot improve on an
 // arrangement already among them either: that one is better still.)
-func (p *problem) bestPerGroup(obj jobfile.Objective, k int) []*cand {
+func (p *problem) bestPerGroup(obj order, k int) []*cand {
 	order := slices.Clone(p.groups)
 	slices.SortStableFunc(order, func(a, b *group) int {
-		return cmp.Or(cmpPrefix(obj, a.nT, a.lowerLen(), a.d, b.nT, b.lowerLen(), b.d), cmp.Compare(a.idx, b.idx))
+		return cmp.Or(cmpPrefix(obj, a.lowRank(), b.lowRank()), cmp.Compare(a.idx, b.idx))
 	})
 	var list []*cand
 	for _, g := range order {
@@ -41,7 +40,7 @@ func (p *problem) bestPerGroup(obj jobfile.Objective, k int) []*cand {
 		var bound *cand
 		if len(list) >= k {
 			bound = list[k-1]
-			if cmpPrefix(obj, g.nT, g.lowerLen(), g.d, bound.g.nT, bound.lenNm, bound.g.d) > 0 {
+			if cmpPrefix(obj, g.lowRank(), bound.rank()) > 0 {
 				continue
 			}
 		}
@@ -60,7 +59,7 @@ func (p *problem) bestPerGroup(obj jobfile.Objective, k int) []*cand {
 // searcher finds the best layout of one group that could beat bound.
 type searcher struct {
 	p     *problem
-	obj   jobfile.Objective
+	obj   order
 	bound *cand // nil: none
 	best  *cand // best in the group so far
 	// lastDead: the last run searched had no passing layout.
@@ -88,8 +87,7 @@ func (s *searcher) allowed(c *cand, low int64) bool {
 		return false
 	}
 	if b := s.bound; b != nil {
-		g := c.g
-		p := cmpPrefix(s.obj, g.nT, c.lenNm, g.d, b.g.nT, b.lenNm, b.g.d)
+		p := cmpPrefix(s.obj, c.rank(), b.rank())
 		if p > 0 || p == 0 && loses(b) {
 			return false
 		}
@@ -147,6 +145,9 @@ func (s *searcher) group(g *group) {
 		for _, g1 := range s.p.gagesFor(g, g2i) {
 			if s.p.stopped {
 				return
+			}
+			if !s.p.inPart(g, g2i, g1) {
+				continue
 			}
 			tried, gageOK := false, false
 			for _, seg := range g.segments {

@@ -16,8 +16,13 @@ type UsualGages struct {
 // usGage is one row of the workable-gage table, in sixteenths of an inch.
 type usGage struct{ leg, g, g1, g2 int }
 
-// usGages are the workable gages in angle legs of US common practice (the
-// AISC Manual's workable-gage table; values from memory, not checked).
+// usGages are the workable gages in angle legs of US common practice: AISC
+// Steel Construction Manual, Table 1-7A "Workable Gages in Angle Legs".
+// Values from memory: no stored text of the table was found to read them
+// against (a search of the stored pages and docs found only pages that
+// name the table and its g, g1, g2 columns, e.g. "Steel Angles with Equal
+// Legs", https://www.amesweb.info/SectionalPropertiesTabs/Steel-Angles-Equal-Legs-L-Shapes.aspx,
+// without the values).
 var usGages = []usGage{
 	{128, 72, 48, 48}, // 8: 4-1/2; 3 + 3
 	{112, 64, 40, 48}, // 7: 4; 2-1/2 + 3
