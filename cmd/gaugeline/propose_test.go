@@ -220,3 +220,36 @@ func TestProposeMaxCandidates(t *testing.T) {
 		}
 	}
 }
+
+// TestProposeRemedies: a job in which nothing in stock passes still exits
+// 1, and says what would pass: four 3/4-in A325-N carry 4 · 17.9 = 71.6 <
+// 80 kips, four A490-N 4 · 22.5 = 90.1 (AISC Manual Table 7-1, from
+// memory), so a stronger grade comes first, in the text and the JSON.
+func TestProposeRemedies(t *testing.T) {
+	dir := t.TempDir()
+	job, _ := filepath.Abs(filepath.Join(testdata, "propose", "infeasible-grade.yaml"))
+	r := gaugeline(t, dir, "propose", job)
+	if r.code != 1 || !strings.Contains(r.stdout, "what would pass, beyond the stock:\n  bolt grade A490") {
+		t.Errorf("text: exit %d\n%s", r.code, r.stdout)
+	}
+	j := gaugeline(t, dir, "propose", job, "--format", "json")
+	var doc struct {
+		Verdict  string `json:"verdict"`
+		Remedies []struct {
+			Kind, Change, Value, Governing string
+			Layout                         struct{ Grade string }
+			Bolts                          int
+			Ratio                          float64
+		} `json:"remedies"`
+	}
+	if err := json.Unmarshal([]byte(j.stdout), &doc); err != nil {
+		t.Fatal(err)
+	}
+	if j.code != 1 || doc.Verdict != "infeasible" || len(doc.Remedies) == 0 {
+		t.Fatalf("JSON: exit %d, %+v", j.code, doc)
+	}
+	if m := doc.Remedies[0]; m.Kind != "grade" || m.Value != "A490" || m.Layout.Grade != "A490" || m.Bolts != 4 ||
+		m.Ratio <= 0 || m.Ratio > 1 || m.Governing == "" {
+		t.Errorf("first remedy %+v, want four A490 bolts passing", m)
+	}
+}

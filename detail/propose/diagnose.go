@@ -42,11 +42,20 @@ func forceText(f units.Force, sys units.System) string {
 	return units.Format(float64(f), units.DimForce, sys, units.Report)
 }
 
-// diagnose explains why nothing passes. It checks the strongest layout of
+// diagnose explains why nothing passes and, unless the search stopped at
+// its limit, looks for what would make a layout pass (remedy).
+func (p *problem) diagnose(out *Proposal) {
+	p.explain(out)
+	if !p.stopped {
+		p.remedy(out)
+	}
+}
+
+// explain says what blocks every candidate. It checks the strongest layout of
 // every monotone run (largest pitch, end and edge, every gage), so a limit
 // state that fails in all of them fails in every candidate; the numbers
 // come from the layout that does best in it.
-func (p *problem) diagnose(out *Proposal) {
+func (p *problem) explain(out *Proposal) {
 	corners, maxBolts, ok := p.corners()
 	if !ok {
 		return

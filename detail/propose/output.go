@@ -147,6 +147,7 @@ type jsonSearch struct {
 	Evaluated     int      `json:"evaluated"`
 	AltEvaluated  int      `json:"evaluated_alternatives"`
 	DiagEvaluated int      `json:"evaluated_diagnosis,omitempty"`
+	RemEvaluated  int      `json:"evaluated_remedies,omitempty"`
 }
 
 type jsonProposal struct {
@@ -168,6 +169,19 @@ type jsonBlocker struct {
 	Lift  string         `json:"lift"`
 }
 
+type jsonRemedy struct {
+	Kind      string           `json:"kind"`
+	Change    string           `json:"change"`
+	Value     string           `json:"value"`
+	Member    string           `json:"member,omitempty"`
+	Layout    jsonLayout       `json:"layout"`
+	Plate     *jsonPlateLayout `json:"plate,omitempty"`
+	Bolts     int              `json:"bolts"`
+	Length    detail.JSONNum   `json:"length"`
+	Governing string           `json:"governing"`
+	Ratio     detail.JSONNum   `json:"ratio"`
+}
+
 type jsonInfeasible struct {
 	Mark       string        `json:"mark"`
 	Standard   string        `json:"standard"`
@@ -177,6 +191,7 @@ type jsonInfeasible struct {
 	Verdict    string        `json:"verdict"`
 	Message    string        `json:"message"`
 	Blocking   []jsonBlocker `json:"blocking"`
+	Remedies   []jsonRemedy  `json:"remedies"`
 	Search     jsonSearch    `json:"search"`
 	Cautions   []string      `json:"cautions"`
 	Stamp      string        `json:"stamp,omitempty"`
@@ -193,7 +208,7 @@ func (p *Proposal) search(mode SearchMode) jsonSearch {
 		prefer = append(prefer, k.String())
 	}
 	return jsonSearch{Mode: m, Objective: p.Job.Stock.Objective.String(), Prefer: prefer, Space: p.Space, Evaluated: p.Evaluated,
-		AltEvaluated: p.AltEvaluated, DiagEvaluated: p.DiagEvaluated}
+		AltEvaluated: p.AltEvaluated, DiagEvaluated: p.DiagEvaluated, RemEvaluated: p.RemedyEvaluated}
 }
 
 // JSON returns the proposal as indented JSON: the check JSON of the chosen
@@ -216,9 +231,15 @@ func (p *Proposal) JSON(mode SearchMode) ([]byte, error) {
 	} else {
 		d := jsonInfeasible{Mark: p.Job.Mark, Standard: p.Job.Standard, Method: p.Job.Method.String(), Units: sys.String(),
 			UnitLabels: sys.Labels(), Verdict: "infeasible", Message: p.Summary, Blocking: []jsonBlocker{},
-			Search: p.search(mode), Cautions: []string{detail.Caution}, Stamp: p.Job.Stamp}
+			Remedies: []jsonRemedy{}, Search: p.search(mode), Cautions: []string{detail.Caution}, Stamp: p.Job.Stamp}
 		for _, b := range p.Blockers {
 			d.Blocking = append(d.Blocking, jsonBlocker{ID: b.ID, Ratio: detail.JSONNum(b.Ratio), What: b.Text, Lift: b.Lift})
+		}
+		for _, r := range p.Remedies {
+			rl, rp := r.Layout.json(sys)
+			d.Remedies = append(d.Remedies, jsonRemedy{Kind: r.Kind.String(), Change: r.Change, Value: r.Value, Member: r.Member,
+				Layout: rl, Plate: rp, Bolts: r.Layout.Bolts(), Length: lengthJSON(r.Length, sys), Governing: r.Governing,
+				Ratio: detail.JSONNum(r.Ratio)})
 		}
 		doc = d
 	}
@@ -248,6 +269,7 @@ func (p *Proposal) writeHead(b *strings.Builder, mode SearchMode, md bool) {
 		for _, bl := range p.Blockers[min(1, len(p.Blockers)):] {
 			fmt.Fprintf(b, "  also: %s: %s\n", bl.Text, bl.Lift)
 		}
+		p.writeRemedies(b, md)
 		return
 	}
 	jl, jp := p.Layout.json(sys)
@@ -303,6 +325,39 @@ func (p *Proposal) writeHead(b *strings.Builder, mode SearchMode, md bool) {
 		}
 	}
 	b.WriteString("\n")
+}
+
+// shownRemedies is how many remedies text and Markdown show (JSON has
+// them all).
+const shownRemedies = 2
+
+// writeRemedies writes the first shownRemedies remedies of an infeasible
+// proposal, or that none was found.
+func (p *Proposal) writeRemedies(b *strings.Builder, md bool) {
+	sys := p.Job.Units
+	if md {
+		b.WriteString("\n## What would pass\n\n")
+	} else {
+		b.WriteString("\nwhat would pass, beyond the stock:\n")
+	}
+	if len(p.Remedies) == 0 {
+		b.WriteString(bullet(md) + "no single change tried passes (remedy order: bolt grade, diameter, plate, bolts per line, lines, member)\n")
+		return
+	}
+	for _, r := range p.Remedies[:min(len(p.Remedies), shownRemedies)] {
+		fmt.Fprintf(b, "%s%s: %s; %s governs, ratio %.3f\n", bullet(md), r.Change, r.Layout.Describe(sys), r.Governing, r.Ratio)
+	}
+	if n := len(p.Remedies) - shownRemedies; n > 0 {
+		fmt.Fprintf(b, "%s(%d more in --format json)\n", bullet(md), n)
+	}
+}
+
+// bullet starts a list item.
+func bullet(md bool) string {
+	if md {
+		return "- "
+	}
+	return "  "
 }
 
 // WriteText writes the proposal for a terminal: the layout, the

@@ -183,6 +183,11 @@ type Proposal struct {
 	// Blockers explain why nothing passes (empty when a layout was found).
 	Blockers []Blocker
 	Summary  string // one line for an infeasible job
+	// Remedies are the smallest changes beyond the stock with which a
+	// layout passes, in remedy order (remedy.go); RemedyEvaluated the
+	// checks their searches took. Empty when a layout was found.
+	Remedies        []Remedy
+	RemedyEvaluated int
 }
 
 // Found reports whether a passing layout was found.
@@ -209,6 +214,7 @@ func Propose(j *jobfile.Job, opt ProposeOptions) (*Proposal, error) {
 	if b := p.yieldBlocker(); b != nil {
 		out.Blockers = []Blocker{*b}
 		out.Summary = b.Text + ": " + b.Lift
+		p.remedy(out)
 		return out, nil
 	}
 	// There are never more alternatives than arrangements: the bound
