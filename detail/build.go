@@ -300,6 +300,17 @@ func (j job) buildFlat(mem *engine.Member, info *detailing.MemberInfo) {
 	info.Rmin = units.Length(float64(min(m.Width, m.Thickness)) / math.Sqrt(12))
 }
 
+// sheetElement names a rolled section's connected element: "web" (a
+// channel's, between its flanges) or "flange".
+func sheetElement(m *engine.Member) string {
+	for _, j := range m.Junctions {
+		if j.Name == "flange" {
+			return "web"
+		}
+	}
+	return "flange"
+}
+
 // buildRolled sets the section of a WT, channel or W shape from the
 // catalog (section.LookupWT, LookupC, LookupW): the connected element,
 // the junctions of the rest of the section with it, x̄ for Table D3.1
@@ -582,7 +593,10 @@ func (j job) buildHoles(ed *rules.Edition, d *Design) error {
 	m := &d.Conn.Member
 	w := m.Width
 	room, part := m.ClearWidth(), "flat"
-	if m.Heel() {
+	switch {
+	case len(m.Junctions) > 0:
+		part = "section's " + strings.ToLower(sheetElement(m)) + " between its junctions"
+	case m.Heel():
 		part = "leg"
 	}
 	if dy > room+eps {

@@ -6,6 +6,7 @@ import (
 	"fmt"
 	"math"
 	"slices"
+	"strings"
 
 	"gaugeline/detail/detailing"
 	"gaugeline/detail/jobfile"
@@ -113,8 +114,8 @@ func cautions(d *Design) []string {
 	}
 	c = append(c, "Block shear uses Ubs = 1.0 (uniform tension stress); a block that tears out k of the n bolts "+
 		"is compared with k/n of the force, the bolts sharing it equally.")
-	if !d.Conn.Member.Shape.ShearLagCases().Has(engine.D31Case1) {
-		c = append(c, "Shear lag: U is the largest of Table D3.1 case 2, case 8 and the D3 bound for open sections.")
+	if cases := d.Conn.Member.Shape.ShearLagCases(); !cases.Has(engine.D31Case1) {
+		c = append(c, shearLagCaution(cases))
 	}
 	if d.Conn.Member.Shape.CentredGroup() && d.Conn.Member.Eccentricity == engine.EccentricityProvided {
 		ed := d.Conn.Edition
@@ -126,6 +127,18 @@ func cautions(d *Design) []string {
 			"Bending of the member beyond the connection is the member's design.")
 	}
 	return c
+}
+
+// shearLagCaution names the cases of Table D3.1 U is the largest of.
+func shearLagCaution(cases engine.D31) string {
+	names := []string{"case 2"}
+	if cases.Has(engine.D31Case8) {
+		names = append(names, "case 8")
+	}
+	if cases.Has(engine.D31Case7) {
+		names = append(names, "case 7 (d of the W; for a tee, of the W it is cut from)")
+	}
+	return "Shear lag: U is the largest of Table D3.1 " + strings.Join(names, ", ") + " and the D3 bound for open sections."
 }
 
 // JSONNum is a float that encodes non-finite values as null.

@@ -126,6 +126,10 @@ func Pieces(mb Member) []Piece {
 	qty := max(mb.Quantity, 1)
 	m := mb.Near.Conn.Member
 	pieces := max(m.Pieces, 1)
+	apart := engine.Apart(m.Shape) // a W's flanges: one member, a plate at each
+	if apart {
+		pieces = 1
+	}
 	area := m.Ag / units.Area(pieces)
 	mem := Piece{Mark: mb.Mark + "-M", Part: "member", Kind: "member", Each: pieces, Size: strings.TrimPrefix(mb.Designation, "2"),
 		Grade: mb.Grade, Length: L, T: m.T, Area: area, Weight: rules.Weight(area, L, sys)}
@@ -134,7 +138,8 @@ func Pieces(mb Member) []Piece {
 	}
 	out := []Piece{mem}
 	if p, ok := platePiece(mb.Near, sys, mb.Mark+"-P", "plate"); ok {
-		switch pl := mb.Near.Conn.Plate; {
+		pl := mb.Near.Conn.Plate
+		switch {
 		case pl.Kind == engine.Splice:
 			// A splice joint joins two members: its plates are listed once,
 			// with the member whose near end it is.
@@ -150,11 +155,25 @@ func Pieces(mb Member) []Piece {
 		default:
 			p.Note = "near end"
 		}
+		if apart && pl.Kind != engine.Splice {
+			p.Each *= pl.Plates()
+			p.Note = fmt.Sprintf("%d at each end, one at each %s", pl.Plates(), engine.PieceName(m.Shape))
+			if !mb.Mirror {
+				p.Note = fmt.Sprintf("near end, one at each %s", engine.PieceName(m.Shape))
+			}
+		}
+		if apart && pl.Kind == engine.Splice {
+			p.Note = strings.Replace(p.Note, "one each side", "one at each "+engine.PieceName(m.Shape), 1)
+		}
 		out = append(out, p)
 	}
 	if mb.Far != nil {
 		if p, ok := platePiece(*mb.Far, sys, mb.Mark+"-FP", "far-plate"); ok {
 			p.Note = "far end"
+			if apart {
+				p.Each = mb.Far.Conn.Plate.Plates()
+				p.Note = "far end, one at each " + engine.PieceName(m.Shape)
+			}
 			out = append(out, p)
 		}
 	}
@@ -279,6 +298,11 @@ func boltSet(c *engine.Connection, sys units.System) BoltSet {
 	set := BoltSet{D: b.D, Grade: b.Grade.Name, Each: len(c.Holes), MemberHole: kind(h.HoleShape), Joint: b.Joint.String(),
 		Faying: fayingNote(b)}
 	pieces := max(c.Member.Pieces, 1)
+	if engine.Apart(c.Member.Shape) {
+		// a bolt through each flange and its own plate: single plies
+		set.Each *= pieces
+		pieces = 1
+	}
 	grip := c.Member.T * units.Length(pieces)
 	if c.Plate == nil {
 		set.Grip = grip
@@ -286,7 +310,11 @@ func boltSet(c *engine.Connection, sys units.System) BoltSet {
 		return set
 	}
 	set.PlateHole = kind(h.InPlate())
-	grip += c.Plate.TotalT() + b.FillerT*units.Length(c.ShearPlanes())
+	plies, fillers := c.Plate.TotalT(), c.ShearPlanes()
+	if engine.Apart(c.Member.Shape) {
+		plies, fillers = c.Plate.T, 1 // each bolt passes one flange, its filler and its plate
+	}
+	grip += plies + b.FillerT*units.Length(fillers)
 	if splice(c) {
 		set.Each *= 2 // a splice plate carries both members' groups
 	}

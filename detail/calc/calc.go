@@ -298,7 +298,10 @@ func (p *page) cutSheet(r *detail.Report, s *sheet.Sheet) {
 	if c.Plate == nil {
 		views, lines = "the member's connected leg from its end", "gage lines dash-dotted"
 	}
-	if !c.Member.Heel() {
+	switch {
+	case len(c.Member.Junctions) > 0:
+		views = strings.Replace(views, "member's connected leg", "member's "+strings.ToLower(sheet.ConnectedElement(&c.Member)), 1)
+	case !c.Member.Heel():
 		views = strings.Replace(views, "member's connected leg", "member", 1)
 	}
 	p.DrawingNote = fmt.Sprintf("Drawn from the cut-sheet model of %s.dxf: %s; dimensions in %s; %s. Not to scale on screen.", d.Job.Mark, views, unit, lines)
@@ -411,8 +414,14 @@ func jobRows(d *detail.Design, f fmtr) (job, load []row) {
 	job = append(job, row{"Member", summary["member"]})
 	m := c.Member
 	props := fmt.Sprintf("Ag = %s, t = %s", f.q(float64(m.Ag), units.DimArea), f.length(m.T))
-	if m.Pieces > 1 {
+	switch {
+	case engine.Apart(m.Shape):
+		props = fmt.Sprintf("Ag = %s (the whole section), t = %s of each %s", f.q(float64(m.Ag), units.DimArea), f.length(m.T), engine.PieceName(m.Shape))
+	case m.Pieces > 1:
 		props = fmt.Sprintf("Ag = %s (both angles), t = %s each", f.q(float64(m.Ag), units.DimArea), f.length(m.T))
+	}
+	if m.Depth > 0 {
+		props += ", bf = " + f.length(m.Width) + ", d = " + f.length(m.Depth) + " (case 7: of the W)"
 	}
 	if m.Shape.ShearLagCases().Has(engine.D31Case2) {
 		props += ", x̄ = " + f.length(m.Xbar)
@@ -451,7 +460,12 @@ func jobRows(d *detail.Design, f fmtr) (job, load []row) {
 
 func holeTable(c *engine.Connection, f fmtr) table {
 	from := "y from heel"
-	if !c.Member.Heel() {
+	switch {
+	case len(c.Member.Junctions) > 0 && c.Member.Heel():
+		from = "y from flange back"
+	case len(c.Member.Junctions) > 0:
+		from = "y from flange tip"
+	case !c.Member.Heel():
 		from = "y from edge"
 	}
 	// A column for the plate's holes only when a ply differs, so that a

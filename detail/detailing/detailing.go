@@ -717,6 +717,9 @@ func WrenchClearance(d units.Length, sys units.System) units.Length {
 // else F/√3 + w, common practice).
 func gageFindings(c *engine.Connection, info MemberInfo) []Finding {
 	const id = "gage.workable"
+	if len(c.Member.Junctions) > 0 {
+		return junctionFindings(c)
+	}
 	if len(c.Holes) == 0 || !c.Member.Heel() {
 		return nil
 	}
@@ -734,6 +737,49 @@ func gageFindings(c *engine.Connection, info MemberInfo) []Finding {
 		lengthFinding(id, commonPractice, fillet, info.K, atLeast(fillet, info.K), name+" to fillet (k)"),
 		lengthFinding(id, clause, leg, wrench, atLeast(leg, wrench), name+" to outstanding leg ("+what+")"),
 	}
+}
+
+// junctionFindings is gage.workable for a rolled section's junctions
+// (engine.Junction: a tee's stem, a channel's flanges, a W's web): on each
+// side of each junction that holes lie on, the hole nearest it must clear
+// the fillet, |y − At| − Dy/2 ≥ the toe distance (k or k1; common
+// practice), and leave the room legClearance gives between its centre and
+// the element's face, |y − At| − Face (AISC Manual Table 8-4 where it has
+// the bolt).
+func junctionFindings(c *engine.Connection) []Finding {
+	const id = "gage.workable"
+	var fs []Finding
+	wrench, clause, what := legClearance(c.Bolt.D, c.Edition.System())
+	for _, j := range c.Member.Junctions {
+		for _, side := range j.Sides() {
+			near := -1
+			for i := range c.Holes {
+				off := j.Offset(c.Holes[i].Y, side)
+				if off > 0 && (near < 0 || off < j.Offset(c.Holes[near].Y, side)-tol) {
+					near = i
+				}
+			}
+			if near < 0 {
+				continue
+			}
+			h, name := &c.Holes[near], holeName(c, near)
+			off := j.Offset(h.Y, side)
+			fillet, face := off-h.Dy/2, off-j.Face
+			fs = append(fs,
+				lengthFinding(id, commonPractice, fillet, j.Toe, atLeast(fillet, j.Toe), fmt.Sprintf("%s to the %s's fillet (%s)", name, j.Name, j.Fillet)),
+				lengthFinding(id, clause, face, wrench, atLeast(face, wrench), fmt.Sprintf("%s to the %s (%s)", name, j.Name, what)))
+		}
+	}
+	// a hole on a stem's or web's line, which neither side sees
+	for i := range c.Holes {
+		for _, j := range c.Member.Junctions {
+			if off := j.Offset(c.Holes[i].Y, 1); j.Side == 0 && math.Abs(float64(off)) <= tol {
+				fs = append(fs, lengthFinding(id, commonPractice, -c.Holes[i].Dy/2, j.Toe, false,
+					fmt.Sprintf("%s on the %s's line: the hole is in the %s", holeName(c, i), j.Name, j.Name)))
+			}
+		}
+	}
+	return fs
 }
 
 // eccentricityFindings is eccentricity, J1.7 (flat bars only): the bolt
@@ -760,6 +806,9 @@ func eccentricityFindings(c *engine.Connection, info MemberInfo) []Finding {
 	e, _ := engine.GroupEccentricity(c)
 	limit := info.PositionTol
 	where := "bolt group's centre of gravity to the bar's centre line (y = width/2)"
+	if len(c.Member.Junctions) > 0 {
+		where = "bolt group's centre of gravity to the section's centre line across the connected element (y = width/2)"
+	}
 	provided := c.Member.Eccentricity == engine.EccentricityProvided
 	pass := atMost(e, limit)
 	switch {

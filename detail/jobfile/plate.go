@@ -68,6 +68,9 @@ func DefaultSpliceGap(sys units.System) units.Length {
 // edges and the gap give, so plate.length and plate.outline are refused.
 func (p *parser) parseSplice(b *block, pl *PlateSpec) (err error) {
 	pl.Count = 1
+	if sh := p.job.Member.Shape; sh != nil && engine.Apart(sh) {
+		pl.Count = sh.Pieces() // a plate at each piece (a W's flanges)
+	}
 	if pl.Kind != engine.Splice {
 		for _, k := range []string{"count", "gap"} {
 			if b.has(k) {
@@ -95,9 +98,6 @@ func (p *parser) parseSplice(b *block, pl *PlateSpec) (err error) {
 			return p.errAt(b.vals["count"], "plate.count", "a double angle already bolts to one plate between its angles in two shear planes; two splice plates do not fit it",
 				"use plate.count: 1 with a double angle, or a flat between two splice plates")
 		}
-	}
-	if sh := p.job.Member.Shape; sh != nil && engine.Apart(sh) {
-		pl.Count = sh.Pieces() // a plate at each piece (a W's flanges)
 	}
 	pl.Gap = DefaultSpliceGap(p.job.Units)
 	if b.has("gap") {

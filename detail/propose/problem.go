@@ -469,9 +469,14 @@ func (p *problem) gageSpan(g *group, i int) (gs []units.Length, lo, hi int, onGr
 	if m.Shape.CentredGroup() {
 		// J1.7: the group centred on the bar, where the edge rules let
 		// it be.
-		lo := max(side, g.dy/2, m.Width-span-maxEdge)
-		hi := min(maxEdge, m.Width-span-side)
-		if g1 := p.snap((m.Width - span) / 2); g1 >= lo-eps && g1 <= hi+eps {
+		lo, hi := g.dy/2, m.Width-span-g.dy/2
+		// the edge rules hold only toward free edges: a channel's web
+		// ends in its flanges
+		if low, high := m.Shape.FreeEdges(); low || high {
+			lo = max(side, g.dy/2, m.Width-span-maxEdge)
+			hi = min(maxEdge, m.Width-span-side)
+		}
+		if g1 := p.snap((m.Width - span) / 2); g1 >= lo-eps && g1 <= hi+eps && p.junctionsClear(g, g1, g.gage2[i]) {
 			return []units.Length{g1}, 0, 0, false
 		}
 		return nil, 0, 0, false
@@ -498,6 +503,36 @@ func (p *problem) gageLimits(g *group, span, side, maxEdge units.Length) (lo, hi
 	tol := p.job.Tolerance.Position
 	clear := max(g.tmpl.Info.K+g.dy/2, m.T+detailing.WrenchClearance(g.d, p.ed.System())) + tol
 	return max(clear, g.dy/2, m.Width-span-maxEdge), m.Width - span - side
+}
+
+// junctionsClear reports whether the group's lines, the first at g1 and
+// the others gage2 apart, keep clear of the member's junctions (a stem, a
+// web, a channel's flanges) by the fillet and the wrench clearance of
+// gage.workable, and by tolerance.position more (propose only, as
+// gageLimits keeps it for angles): a hole drilled that far off still
+// passes.
+func (p *problem) junctionsClear(g *group, g1, gage2 units.Length) bool {
+	m := &g.tmpl.Conn.Member
+	tol := p.job.Tolerance.Position
+	wrench := detailing.WrenchClearance(g.d, p.ed.System())
+	for k := 0; k < g.lines; k++ {
+		y := g1 + units.Length(k)*gage2
+		for _, j := range m.Junctions {
+			for _, side := range j.Sides() {
+				off := j.Offset(y, side)
+				if off < -eps {
+					continue // on the other side
+				}
+				if off-g.dy/2 < j.Toe+tol-eps || off-j.Face < wrench+tol-eps {
+					return false
+				}
+			}
+			if j.Side == 0 && math.Abs(float64(y-j.At)) <= eps {
+				return false
+			}
+		}
+	}
+	return true
 }
 
 // fillGages lists every group's gages ahead of the exhaustive search,

@@ -43,21 +43,42 @@ func usualPitchOf(sys units.System) units.Length {
 // (section.WorkableGage); zero for a flat, a leg the table does not list,
 // or a job whose bolts block fixes the gage.
 func usualOf(j *jobfile.Job, leg units.Length) section.UsualGages {
-	switch j.Member.Shape.(type) {
-	case engine.SingleAngle, engine.AnglePair:
-	default:
+	if j.Given("bolts.gage") {
 		return section.UsualGages{}
 	}
-	if j.Given("bolts.gage") {
+	switch j.Member.Shape.(type) {
+	case engine.SingleAngle, engine.AnglePair:
+	case engine.TeeFlange, engine.WideFlanges:
+		return flangeGage(j, leg)
+	default:
 		return section.UsualGages{}
 	}
 	u, _ := section.WorkableGage(leg, j.Units)
 	return u
 }
 
+// flangeGage is the usual pair of gage lines astride the web of a WT's or
+// W's flange of width bf: the workable gage g between them (section.Shape.G),
+// the first (bf − g)/2 from the flange tip. There is no usual single line
+// (it would stand on the web).
+func flangeGage(j *jobfile.Job, bf units.Length) section.UsualGages {
+	look := section.LookupW
+	if j.Member.Shape == engine.Tee {
+		look = section.LookupWT
+	}
+	sh, err := look(j.Member.Size)
+	if err != nil || sh.G <= 0 || sh.G >= bf {
+		return section.UsualGages{}
+	}
+	g1 := (bf - sh.G) / 2
+	return section.UsualGages{G: g1, G1: g1, G2: sh.G}
+}
+
 // setUsual puts the usual gage lines of a group of one or two lines.
 func (p *problem) setUsual(g *group) {
 	switch {
+	case g.lines == 1 && g.tmpl.Conn.Member.Shape.CentredGroup():
+		// a centred single line: no usual gage (a flange's would be on the web)
 	case g.lines == 1:
 		g.usualG1 = p.usual.G
 	case g.lines == 2 && p.usual.G1 > 0:
@@ -135,7 +156,10 @@ const (
 )
 
 // usualSource names the table the usual gages come from.
-func usualSource(sys units.System) string {
+func usualSource(sys units.System, s engine.Shape) string {
+	if s == engine.Tee || s == engine.Wide {
+		return "workable flange gage g: AISC Shapes Database v15.0, the Manual's Tables 1-1 and 1-8"
+	}
 	if sys == units.SI {
 		return "usual back marks of metric angle legs"
 	}
@@ -151,15 +175,21 @@ func (p *problem) gageSource(best *cand) (src, note string) {
 	f := func(v units.Length) string { return units.FormatJob(v, sys) }
 	m := &g.tmpl.Conn.Member
 	leg := f(m.Width) + " leg"
+	if jobfile.RolledFamily(m.Shape) != "" {
+		leg = j.Member.Size + " flange"
+	}
 	switch {
 	case j.Given("bolts.gage"):
 		return GageJob, "gage " + f(best.g1) + " as bolts.gage fixes it"
-	case m.Shape.CentredGroup():
+	case m.Shape.CentredGroup() && (p.usual.G == 0 || g.usualG1 == 0):
+		if len(m.Junctions) > 0 {
+			return GageCentred, "gage " + f(best.g1) + " centres the bolt group on the section's centre line"
+		}
 		return GageCentred, "gage " + f(best.g1) + " centres the bolt group on the bar (J1.7)"
 	case p.usual.G == 0:
-		return GageNoneKnown, "no usual gage is tabulated for the " + leg + " (" + usualSource(sys) + "); the least workable gage is used"
+		return GageNoneKnown, "no usual gage is tabulated for the " + leg + " (" + usualSource(sys, m.Shape) + "); the least workable gage is used"
 	case g.usualG1 == 0:
-		return GageNoneKnown, fmt.Sprintf("no usual gages for %d gage lines in the %s (%s)", g.lines, leg, usualSource(sys))
+		return GageNoneKnown, fmt.Sprintf("no usual gages for %d gage lines in the %s (%s)", g.lines, leg, usualSource(sys, m.Shape))
 	case !p.obj.usualGage():
 		return GageSearched, "stock.prefer does not list usual-gage: the gage is searched (usual gage of the " + leg + ": " + f(g.usualG1) + ")"
 	}
@@ -167,7 +197,10 @@ func (p *problem) gageSource(best *cand) (src, note string) {
 	if g.lines == 2 {
 		usual = "the usual gage lines " + f(g.usualG1) + " + " + f(g.usualG2)
 	}
-	usual += " of the " + leg + " (" + usualSource(sys) + ")"
+	if len(m.Junctions) > 0 {
+		usual = "the usual gage " + f(g.usualG2) + " across the web, the lines " + f(g.usualG1) + " from the flange tips"
+	}
+	usual += " of the " + leg + " (" + usualSource(sys, m.Shape) + ")"
 	if best.notUsual == 0 {
 		return GageUsual, "gage: " + usual
 	}

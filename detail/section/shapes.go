@@ -57,6 +57,12 @@ type Shape struct {
 	// geometry of the package comment misses the table (zero: computed).
 	XbarTab units.Length
 	RyTab   units.Length
+
+	// G is the workable gage g across a W's or WT's flange, the usual
+	// distance between the two gage lines astride the web (the AISC Shapes
+	// Database v15.0 column WGi, the Manual's Tables 1-1 and 1-8); zero for
+	// channels, whose tabulated gage is the flange's, not the web's.
+	G units.Length
 }
 
 // ShapeProps are the section properties of a Shape; see the package
@@ -80,32 +86,35 @@ type usShape struct {
 	fam              Family
 	d, bf, tw, tf, k float64 // in; k is kdes
 	xbarTab, ryTab   float64 // in, carried tabulated values (0: none)
+	g                float64 // in, workable flange gage of W and WT (WGi; 0: none)
 }
 
-// usShapes is the catalog. W12x72 is the shape of the AISC wf-truss
+// usShapes is the catalog; the last column is the workable flange gage
+// (WGi) of the database, W12x72's the 5-1/2 in its teaching model lays out.
+// W12x72 is the shape of the AISC wf-truss
 // teaching model (aisc-org/aisc-model-viewer, src/wf-truss/calculations.md:
 // d 12.3, bf 12.0, tw 0.430, tf 0.670); its kdes is that of WT6x36, the tee
 // cut from it. The MC rows carry the tabulated x̄ and ry: modelled with
 // parallel flanges (their slope is not published in a source read) the
 // geometry puts both 4 to 6 % high.
 var usShapes = []usShape{
-	{"W8x21", FamilyW, 8.28, 5.27, 0.250, 0.400, 0.700, 0, 0},
-	{"W8x24", FamilyW, 7.93, 6.50, 0.245, 0.400, 0.794, 0, 0},
-	{"W10x33", FamilyW, 9.73, 7.96, 0.290, 0.435, 0.935, 0, 0},
-	{"W12x40", FamilyW, 11.9, 8.01, 0.295, 0.515, 1.02, 0, 0},
-	{"W12x72", FamilyW, 12.3, 12.0, 0.430, 0.670, 1.27, 0, 0},
-	{"WT4x10.5", FamilyWT, 4.14, 5.27, 0.250, 0.400, 0.700, 0, 0},
-	{"WT6x20", FamilyWT, 5.97, 8.01, 0.295, 0.515, 1.02, 0, 0},
-	{"WT6x25", FamilyWT, 6.10, 8.08, 0.370, 0.640, 1.14, 0, 0},
-	{"WT6x36", FamilyWT, 6.13, 12.0, 0.430, 0.670, 1.27, 0, 0},
-	{"WT8x25", FamilyWT, 8.13, 7.07, 0.380, 0.630, 1.03, 0, 0},
-	{"C8x11.5", FamilyC, 8.00, 2.26, 0.220, 0.390, 0.938, 0, 0},
-	{"C9x20", FamilyC, 9.00, 2.65, 0.448, 0.413, 1.00, 0, 0},
-	{"C10x15.3", FamilyC, 10.0, 2.60, 0.240, 0.436, 1.00, 0, 0},
-	{"C12x25", FamilyC, 12.0, 3.05, 0.387, 0.501, 1.13, 0, 0},
-	{"MC6x12", FamilyMC, 6.00, 2.50, 0.310, 0.375, 0.875, 0.704, 0.724},
-	{"MC8x18.7", FamilyMC, 8.00, 2.98, 0.353, 0.500, 1.13, 0.849, 0.868},
-	{"MC10x22", FamilyMC, 10.0, 3.32, 0.290, 0.575, 1.31, 0.990, 0.997},
+	{"W8x21", FamilyW, 8.28, 5.27, 0.250, 0.400, 0.700, 0, 0, 2.75},
+	{"W8x24", FamilyW, 7.93, 6.50, 0.245, 0.400, 0.794, 0, 0, 4},
+	{"W10x33", FamilyW, 9.73, 7.96, 0.290, 0.435, 0.935, 0, 0, 5.5},
+	{"W12x40", FamilyW, 11.9, 8.01, 0.295, 0.515, 1.02, 0, 0, 5.5},
+	{"W12x72", FamilyW, 12.3, 12.0, 0.430, 0.670, 1.27, 0, 0, 5.5},
+	{"WT4x10.5", FamilyWT, 4.14, 5.27, 0.250, 0.400, 0.700, 0, 0, 2.75},
+	{"WT6x20", FamilyWT, 5.97, 8.01, 0.295, 0.515, 1.02, 0, 0, 5.5},
+	{"WT6x25", FamilyWT, 6.10, 8.08, 0.370, 0.640, 1.14, 0, 0, 5.5},
+	{"WT6x36", FamilyWT, 6.13, 12.0, 0.430, 0.670, 1.27, 0, 0, 5.5},
+	{"WT8x25", FamilyWT, 8.13, 7.07, 0.380, 0.630, 1.03, 0, 0, 3.5},
+	{"C8x11.5", FamilyC, 8.00, 2.26, 0.220, 0.390, 0.938, 0, 0, 0},
+	{"C9x20", FamilyC, 9.00, 2.65, 0.448, 0.413, 1.00, 0, 0, 0},
+	{"C10x15.3", FamilyC, 10.0, 2.60, 0.240, 0.436, 1.00, 0, 0, 0},
+	{"C12x25", FamilyC, 12.0, 3.05, 0.387, 0.501, 1.13, 0, 0, 0},
+	{"MC6x12", FamilyMC, 6.00, 2.50, 0.310, 0.375, 0.875, 0.704, 0.724, 0},
+	{"MC8x18.7", FamilyMC, 8.00, 2.98, 0.353, 0.500, 1.13, 0.849, 0.868, 0},
+	{"MC10x22", FamilyMC, 10.0, 3.32, 0.290, 0.575, 1.31, 0.990, 0.997, 0},
 }
 
 // shape builds the Shape of a catalog row.
@@ -114,7 +123,7 @@ func (s usShape) shape() Shape {
 	sh := Shape{
 		Name: s.name, Family: s.fam,
 		D: in(s.d), Bf: in(s.bf), Tw: in(s.tw), Tf: in(s.tf), K: in(s.k),
-		XbarTab: in(s.xbarTab), RyTab: in(s.ryTab),
+		XbarTab: in(s.xbarTab), RyTab: in(s.ryTab), G: in(s.g),
 	}
 	if s.fam == FamilyC {
 		sh.Slope = CSlope

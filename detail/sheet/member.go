@@ -123,13 +123,16 @@ func (l sheetLayout) wholeMember(r *detail.Report) View {
 	h := l.h
 	mid := v.Fold(r2.Vec{X: length}).X / 2
 	title := fmt.Sprintf("MEMBER %s %s x %s", d.Info.Designation, d.Info.Grade, l.people(length))
-	if m.Heel() {
+	switch {
+	case len(m.Junctions) > 0:
+		title += " - " + ConnectedElement(&m)
+	case m.Heel():
 		title += " - CONNECTED LEG"
 	}
 	v.Texts = append(v.Texts, Text{At: r2.Vec{X: mid, Y: width + 2*h}, Height: 1.4 * h, Align: AlignCenterBottom, Value: title, Layer: LayerNotes})
 	if m.Pieces == 2 {
 		v.Texts = append(v.Texts, Text{At: r2.Vec{X: mid, Y: width + 0.8*h}, Height: h, Align: AlignCenterBottom,
-			Value: "2 ANGLES BACK TO BACK: MAKE 1 AS SHOWN AND 1 OPPOSITE HAND", Layer: LayerNotes})
+			Value: PiecesNote(&m), Layer: LayerNotes})
 	}
 	// The titles are placed in the drawing's frame; unfold puts them back
 	// into the part's, which the view keeps.
@@ -145,7 +148,9 @@ func (l sheetLayout) wholeMember(r *detail.Report) View {
 		}
 	}
 	right = v.unfold(right)
-	if m.Heel() {
+	if len(m.Junctions) > 0 {
+		l.junctions(&v, &m, length, right)
+	} else if m.Heel() {
 		t := l.len(m.T)
 		v.Lines = append(v.Lines, Segment{r2.Vec{X: 0, Y: t}, r2.Vec{X: length, Y: t}, LayerReference})
 		v.Texts = append(v.Texts,

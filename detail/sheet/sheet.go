@@ -497,17 +497,22 @@ func (l sheetLayout) memberView(d *detail.Design) View {
 	l.annotate(&v, false)
 	h := l.h
 	title := "MEMBER " + d.Info.Designation + " " + d.Info.Grade
-	if !m.Heel() {
+	switch {
+	case len(m.Junctions) > 0:
+		title += " - " + ConnectedElement(&m) + ", CONNECTION END"
+	case !m.Heel():
 		title += " - CONNECTION END"
-	} else {
+	default:
 		title += " - CONNECTED LEG, CONNECTION END"
 	}
 	v.Texts = append(v.Texts, Text{At: r2.Vec{X: length / 2, Y: width + 2*h}, Height: 1.4 * h, Align: AlignCenterBottom, Value: title, Layer: LayerNotes})
 	if m.Pieces == 2 {
 		v.Texts = append(v.Texts, Text{At: r2.Vec{X: length / 2, Y: width + 0.8*h}, Height: h, Align: AlignCenterBottom,
-			Value: "2 ANGLES BACK TO BACK: MAKE 1 AS SHOWN AND 1 OPPOSITE HAND", Layer: LayerNotes})
+			Value: PiecesNote(&m), Layer: LayerNotes})
 	}
-	if m.Heel() {
+	if len(m.Junctions) > 0 {
+		l.junctions(&v, &m, length, length+2.5*h)
+	} else if m.Heel() {
 		t := l.len(m.T)
 		v.Lines = append(v.Lines, Segment{r2.Vec{X: 0, Y: t}, r2.Vec{X: length, Y: t}, LayerReference})
 		v.Texts = append(v.Texts,
@@ -773,6 +778,55 @@ func (l sheetLayout) holeText(h engine.HoleShape) string {
 	return w + " x " + l.people(l.len(max(h.Dx, h.Dy))) + " SLOT " + strings.ToUpper(h.Slot.String())
 }
 
+// ConnectedElement is what the member view shows of a rolled section:
+// "FLANGE", "FLANGES" or "WEB".
+func ConnectedElement(m *engine.Member) string {
+	for _, j := range m.Junctions {
+		if j.Name == "flange" {
+			return "WEB"
+		}
+	}
+	if engine.Apart(m.Shape) {
+		return "FLANGES"
+	}
+	return "FLANGE"
+}
+
+// PiecesNote is the note over the view of a member of two pieces.
+func PiecesNote(m *engine.Member) string {
+	if engine.Apart(m.Shape) {
+		return "BOTH " + strings.ToUpper(engine.PieceName(m.Shape)) + "S DRILLED ALIKE, SEEN FROM OUTSIDE"
+	}
+	return "2 ANGLES BACK TO BACK: MAKE 1 AS SHOWN AND 1 OPPOSITE HAND"
+}
+
+// junctions draws, for reference, the faces of the elements standing on
+// the connected element (a stem, a web, a channel's flanges) and names
+// each at x = label.
+func (l sheetLayout) junctions(v *View, m *engine.Member, length, label float64) {
+	h := l.h
+	for _, j := range m.Junctions {
+		faces := []units.Length{j.At - j.Face, j.At + j.Face}
+		switch j.Side {
+		case 1:
+			faces = []units.Length{j.At + j.Face}
+		case -1:
+			faces = []units.Length{j.At - j.Face}
+		}
+		for _, y := range faces {
+			v.Lines = append(v.Lines, Segment{r2.Vec{X: 0, Y: l.len(y)}, r2.Vec{X: length, Y: l.len(y)}, LayerReference})
+		}
+		y := l.len(j.At) - h/2
+		switch j.Side {
+		case 1:
+			y = l.len(j.At)
+		case -1:
+			y = l.len(j.At) - h
+		}
+		v.Texts = append(v.Texts, Text{At: r2.Vec{X: label, Y: y}, Height: h, Align: AlignLeftBase, Value: strings.ToUpper(j.Name), Layer: LayerNotes})
+	}
+}
+
 // schedule writes the hole schedule from the given top down and returns
 // the y below it.
 func (l sheetLayout) schedule(s *Sheet, r *detail.Report, top float64) float64 {
@@ -784,7 +838,10 @@ func (l sheetLayout) schedule(s *Sheet, r *detail.Report, top float64) float64 {
 		return fmt.Sprintf("%s (t %s, punch limit %s)", HowMade(t, c.Bolt.D, l.sys), l.limit(l.len(t)), limit)
 	}
 	part := "MEMBER"
-	if c.Member.Pieces > 1 {
+	switch {
+	case engine.Apart(c.Member.Shape):
+		part = fmt.Sprintf("MEMBER (EACH %s)", strings.ToUpper(engine.PieceName(c.Member.Shape)))
+	case c.Member.Pieces > 1:
 		part = fmt.Sprintf("MEMBER (EACH OF %d)", c.Member.Pieces)
 	}
 	rows := [][]string{
@@ -823,7 +880,7 @@ func (l sheetLayout) titleBlock(s *Sheet, r *detail.Report, top float64) {
 		unitName = "MILLIMETRES"
 	}
 	pieces := ""
-	if c.Member.Pieces > 1 {
+	if c.Member.Pieces > 1 && !engine.Apart(c.Member.Shape) {
 		pieces = fmt.Sprintf(" (%d pieces each)", c.Member.Pieces)
 	}
 	fields := append(projectFields(s, j), [][2]string{
@@ -838,8 +895,12 @@ func (l sheetLayout) titleBlock(s *Sheet, r *detail.Report, top float64) {
 		fields[at+3][1] += ", plate " + d.Info.PlateGrade
 		fields[at+4][1] += ", plate " + l.limit(l.len(c.Plate.T))
 	}
+	bolts := len(c.Holes)
+	if engine.Apart(c.Member.Shape) {
+		bolts *= c.Member.Pieces // the holes are one flange's; each flange has them
+	}
 	fields = append(fields,
-		[2]string{"BOLTS", fmt.Sprintf("(%d%s) %s %s, threads %s, %s joint, %s", len(c.Holes), boltsEnd(r),
+		[2]string{"BOLTS", fmt.Sprintf("(%d%s) %s %s, threads %s, %s joint, %s", bolts, boltsEnd(r),
 			detail.BoltSize(c.Bolt.D, l.sys), c.Bolt.Grade.Name, c.Bolt.Threads, c.Bolt.Joint, detail.HoleKinds(c))},
 	)
 	fields = append(fields, farEndFields(r)...)
