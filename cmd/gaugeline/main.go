@@ -123,8 +123,8 @@ func newRootCmd(o *rootOptions) *cobra.Command {
 	root := &cobra.Command{
 		Use:   "gaugeline",
 		Short: "Bolted tension connections to AISC 360, from layout to shop drawing",
-		Long: "gaugeline turns a bolted tension connection (angle, double angle or flat bar to a gusset or\n" +
-			"splice plate) into a bolt layout the shop can cut: it checks a layout against every detailing rule\n" +
+		Long: "gaugeline turns a bolted tension connection (angle, double angle, flat bar, WT, channel or W\n" +
+			"to a gusset or splice plate) into a bolt layout the shop can cut: it checks a layout against every detailing rule\n" +
 			"and tension limit state of AISC 360-22 or 360-16 (check), proposes the best compliant one (propose),\n" +
 			"draws the DXF cut sheet and CAM files (sheet), writes the calculation (report), re-verifies a\n" +
 			"fabricated part from its measured holes (reverify), runs whole job lists (batch) and checks that an\n" +

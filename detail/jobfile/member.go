@@ -37,7 +37,7 @@ func (p *parser) parseMember(n *yaml.Node) error {
 	}
 	m := &p.job.Member
 	if !b.has("shape") {
-		return p.missing(b, "member.shape", "is required", "shape: angle, double-angle or flat")
+		return p.missing(b, "member.shape", "is required", "shape: "+engine.ShapeNames())
 	}
 	if m.Shape, err = enum(p, b.vals["shape"], "member.shape", parseShape); err != nil {
 		return err

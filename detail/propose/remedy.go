@@ -330,6 +330,9 @@ const (
 // (the overrides belong to the job's section).
 func largerMembers(p *problem) []change {
 	m := p.job.Member
+	if jobfile.RolledFamily(m.Shape) != "" {
+		return largerRolled(p)
+	}
 	if shape := m.Shape.String(); shape != "angle" && shape != "double-angle" {
 		return nil
 	}
@@ -371,6 +374,54 @@ func largerMembers(p *problem) []change {
 			value: c.name, member: c.name, text: fmt.Sprintf("member %s (job: %s)", c.name, m.Size)})
 	}
 	return out
+}
+
+// largerRolled is largerMembers for a WT, channel or W: the catalog's
+// shapes of the job's family (C and MC together) of more area than the
+// job's, and at least the area gross yielding needs, smallest first.
+func largerRolled(p *problem) []change {
+	m := p.job.Member
+	if len(p.groups) == 0 {
+		return nil
+	}
+	cur := p.groups[0].tmpl.Conn.Member
+	need := cur.Ag * units.Area(max(1, engine.MemberYield(&p.groups[0].tmpl.Conn).Ratio))
+	fams := map[engine.Shape][]section.Family{engine.Tee: {section.FamilyWT}, engine.Channel: {section.FamilyC, section.FamilyMC}, engine.Wide: {section.FamilyW}}[m.Shape]
+	type cand struct {
+		name string
+		area units.Area
+	}
+	var cs []cand
+	for _, f := range fams {
+		for _, name := range section.ShapeNames(f) {
+			sh, err := lookupRolled(m.Shape, name)
+			if err != nil {
+				continue
+			}
+			if ar := sh.Properties().Area; ar > cur.Ag*(1+1e-9) && ar >= need*(1-1e-9) {
+				cs = append(cs, cand{name, ar})
+			}
+		}
+	}
+	slices.SortStableFunc(cs, func(a, b cand) int { return cmp.Or(cmp.Compare(a.area, b.area), cmp.Compare(a.name, b.name)) })
+	var out []change
+	for _, c := range cs[:min(len(cs), maxMemberTries)] {
+		out = append(out, change{set: []jobfile.Setting{{Block: "member", Key: "size", Value: c.name, Tag: "!!str"}},
+			value: c.name, member: c.name, text: fmt.Sprintf("member %s (job: %s)", c.name, m.Size)})
+	}
+	return out
+}
+
+// lookupRolled finds a catalog shape of the family a rolled member shape
+// takes.
+func lookupRolled(s engine.Shape, name string) (section.Shape, error) {
+	switch s {
+	case engine.Tee:
+		return section.LookupWT(name)
+	case engine.Channel:
+		return section.LookupC(name)
+	}
+	return section.LookupW(name)
 }
 
 // connectedAngles lists every catalog angle of sys both ways round:

@@ -2,6 +2,7 @@ package propose
 
 import (
 	"fmt"
+	"strings"
 	"testing"
 
 	"pgregory.net/rapid"
@@ -105,5 +106,35 @@ func TestProposeUsualFlangeGage(t *testing.T) {
 	g2 := p.Layout.Gage2
 	if d := float64(g2 - 3.5*units.Inch); d > 1e-6 || d < -1e-6 {
 		t.Errorf("gage2 %s, want 3-1/2 in (AISC Shapes Database v15.0, WT8x25 WGi)", units.FormatJob(g2, units.US))
+	}
+}
+
+// When a channel is too small for gross yielding, the remedy is the
+// lightest catalog channel that carries it: 200 kip LRFD in A36 needs
+// Ag ≥ 200/(0.9·36) = 6.17 in² (D2(a), hand calculation), so C10x15.3
+// (4.48 in², AISC Shapes Database v15.0) gives way to MC10x22 (6.45 in²,
+// the same database), the smallest channel of the catalog above 6.17.
+func TestRemedyLargerChannel(t *testing.T) {
+	src := strings.Replace(rolledJob("channel", "C10x15.3", "3/4 in"), "60 kip", "200 kip", 1)
+	src = strings.Replace(src, "grade: A992", "grade: A36", 1)
+	p := proposeSrc(t, src)
+	if p.Found() {
+		t.Fatal("C10x15.3 carries 200 kip: it should fail gross yielding")
+	}
+	var member *Remedy
+	for i := range p.Remedies {
+		if p.Remedies[i].Kind == RemedyMember {
+			member = &p.Remedies[i]
+		}
+	}
+	if member == nil || member.Member != "MC10x22" {
+		t.Fatalf("remedies %+v, want member MC10x22", p.Remedies)
+	}
+	j, err := jobfile.ParseJob("remedy.yaml", member.Job)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if r, err := detail.CheckJob(j); err != nil || !r.EndPass() {
+		t.Fatalf("the remedy's job does not pass check (%v)", err)
 	}
 }
