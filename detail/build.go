@@ -338,6 +338,9 @@ func (j job) buildRolled(mem *engine.Member, info *detailing.MemberInfo) error {
 	}
 	props := sh.Properties()
 	info.Designation = sh.Name
+	if j.Units == units.SI {
+		info.Designation = sh.Metric
+	}
 	info.Rmin = min(props.Rx, props.Ry)
 	mem.Ag = props.Area
 	// k1, the web centre line to the toe of the fillet across the flange,

@@ -48,5 +48,5 @@ func ExampleLookupC() {
 	// Output:
 	// C10x15.3: A = 4.46 in2, x̄ = 0.638 in, rx = 3.87 in, ry = 0.718 in
 	// WT6x20: ȳ = 1.086 in
-	// section: no shape "W8x22" in the catalog; sizes in the catalog: W8x21, W8x24, W10x33, W12x40, W12x72
+	// section: no shape "W8x22" in the catalog; sizes in the catalog: W8x21 (W200x31.3), W8x24 (W200x35.9), W10x33 (W250x49.1), W12x40 (W310x60), W12x72 (W310x107)
 }
