@@ -323,8 +323,8 @@ func (j job) buildRolled(mem *engine.Member, info *detailing.MemberInfo) error {
 	switch m.Shape {
 	case engine.Tee:
 		sh, err = section.LookupWT(m.Size)
-	case engine.Channel:
-		sh, err = section.LookupC(m.Size)
+	case engine.Channel, engine.DoubleChannel:
+		sh, err = section.LookupC(strings.TrimPrefix(strings.TrimSpace(m.Size), "2"))
 	default:
 		sh, err = section.LookupW(m.Size)
 	}
@@ -352,13 +352,22 @@ func (j job) buildRolled(mem *engine.Member, info *detailing.MemberInfo) error {
 		mem.Depth = 2 * sh.D // the W the tee is cut from (case 7)
 		mem.Junctions = []engine.Junction{{Name: "stem", Fillet: "k1", At: sh.Bf / 2, Face: sh.Tw / 2, Toe: k1}}
 		mem.TearOff = &engine.TearOff{Planes: 1, T: sh.Tw, At: mem.Ag - sh.Tw.Mul(sh.D-sh.K), What: "stem at the toe of its fillet"}
-	case engine.Channel:
+	case engine.Channel, engine.DoubleChannel:
+		n := m.Shape.Pieces()
 		mem.Width, mem.T, mem.Xbar = sh.D, sh.Tw, props.Xbar
+		mem.Ag = props.Area * units.Area(n)
 		mem.Junctions = []engine.Junction{
 			{Name: "flange", Fillet: "k", At: 0, Face: sh.Tf, Toe: sh.K, Side: 1},
 			{Name: "flange", Fillet: "k", At: sh.D, Face: sh.Tf, Toe: sh.K, Side: -1},
 		}
-		mem.TearOff = &engine.TearOff{Planes: 2, T: sh.Tw, At: sh.Tw.Mul(sh.D - 2*sh.K), What: "web at the toes of its fillets"}
+		mem.TearOff = &engine.TearOff{Planes: 2 * n, T: sh.Tw, At: sh.Tw.Mul(sh.D-2*sh.K) * units.Area(n), What: "web at the toes of its fillets"}
+		if n == 2 {
+			info.Designation = "2" + info.Designation
+			// the pair about the axis along the webs, the plate (member.gap)
+			// between their backs: r² = ry² + (x̄ + gap/2)²
+			off := float64(props.Xbar + j.gap()/2)
+			info.Rmin = min(props.Rx, units.Length(math.Sqrt(float64(props.Ry*props.Ry)+off*off)))
+		}
 	default:
 		half := sh
 		half.Family, half.D = section.FamilyWT, sh.D/2

@@ -225,3 +225,31 @@ func TestChannelByItsWebHandCalculation(t *testing.T) {
 		}
 	}
 }
+
+// Two C8x11.5 back to back, bolted through the webs, the trial of a
+// structural engineering handbook's Example 4.1 (https://www.
+// civilengineeringhandbook.tk/structural-engineering/1314.html). The
+// handbook prints, for one channel, Agv = 3.96 in² (two lines, end + 2
+// pitches = 9 in, tw 0.220 in) and Agt = 0.66 in² (3 in between the
+// lines); its net areas (Anv 2.72, Ant 0.41) take the 1-1/16 in hole of a
+// 1 in bolt of its day, where AISC 360-16 Table J3.3 gives 1-1/8 in. So
+// the gross areas are checked against the handbook and the net areas by
+// hand with the 1-1/8 + 1/16 in width of B4.3b.
+func TestHandbookDoubleChannelBlockShear(t *testing.T) {
+	const src = "handbook Example 4.1, civilengineeringhandbook.tk/structural-engineering/1314.html"
+	_, rs := checkExample(t, "../testdata/examples/handbook-4-1-2c8.yaml", rules.LRFD)
+	bs := rs["member.block-shear"]
+	if !strings.Contains(bs.Note, "between lines 1 and 2") {
+		t.Fatalf("block shear governs at %q, want the block between the lines", bs.Note)
+	}
+	const dh = 1.125 + 1.0/16 // AISC 360-16 Table J3.3 and B4.3b
+	within(t, 0.005, []published{
+		{"Agv of one channel", value(t, bs, "Agv") / 2 / in2, 3.96, src},
+		{"Anv of one channel", value(t, bs, "Anv") / 2 / in2, 3.96 - 5*dh*0.220, "hand calculation, AISC 360-16 Table J3.3"},
+		{"Ant of one channel", value(t, bs, "Ant") / 2 / in2, 0.66 - dh*0.220, "hand calculation from the handbook's Agt"},
+	})
+	// The member's bolts act in double shear (the gusset between the webs).
+	if planes := value(t, rs["bolts.shear"], "planes"); planes != 2 {
+		t.Errorf("%g shear planes, want 2 (common practice, no source: a pair with the plate between)", planes)
+	}
+}

@@ -56,7 +56,7 @@ func (d D31) Has(c D31) bool { return d&c == c }
 
 // Shapes lists every shape a job may name, in the order its hint names
 // them.
-func Shapes() []Shape { return []Shape{Angle, DoubleAngle, Flat, Tee, Channel, Wide} }
+func Shapes() []Shape { return []Shape{Angle, DoubleAngle, Flat, Tee, Channel, DoubleChannel, Wide} }
 
 // ShapeNames is the job-file spellings of Shapes for a hint: "a, b or c".
 func ShapeNames() string {

@@ -134,7 +134,7 @@ func Pieces(mb Member) []Piece {
 	mem := Piece{Mark: mb.Mark + "-M", Part: "member", Kind: "member", Each: pieces, Size: strings.TrimPrefix(mb.Designation, "2"),
 		Grade: mb.Grade, Length: L, T: m.T, Area: area, Weight: rules.Weight(area, L, sys)}
 	if pieces == 2 {
-		mem.Note = "2 angles: 1 as shown, 1 opposite hand"
+		mem.Note = "2 " + engine.PieceName(m.Shape) + "s: 1 as shown, 1 opposite hand"
 	}
 	out := []Piece{mem}
 	if p, ok := platePiece(mb.Near, sys, mb.Mark+"-P", "plate"); ok {

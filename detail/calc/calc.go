@@ -418,7 +418,7 @@ func jobRows(d *detail.Design, f fmtr) (job, load []row) {
 	case engine.Apart(m.Shape):
 		props = fmt.Sprintf("Ag = %s (the whole section), t = %s of each %s", f.q(float64(m.Ag), units.DimArea), f.length(m.T), engine.PieceName(m.Shape))
 	case m.Pieces > 1:
-		props = fmt.Sprintf("Ag = %s (both angles), t = %s each", f.q(float64(m.Ag), units.DimArea), f.length(m.T))
+		props = fmt.Sprintf("Ag = %s (both %ss), t = %s each", f.q(float64(m.Ag), units.DimArea), engine.PieceName(m.Shape), f.length(m.T))
 	}
 	if m.Depth > 0 {
 		props += ", bf = " + f.length(m.Width) + ", d = " + f.length(m.Depth) + " (case 7: of the W)"

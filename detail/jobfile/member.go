@@ -163,7 +163,7 @@ func RolledFamily(s engine.Shape) string {
 	switch s {
 	case engine.Tee:
 		return "WT"
-	case engine.Channel:
+	case engine.Channel, engine.DoubleChannel:
 		return "C or MC"
 	case engine.Wide:
 		return "W"
@@ -179,6 +179,9 @@ var rolledExample = map[string]string{"WT": "WT8x25", "C or MC": "C8x11.5", "W":
 func (p *parser) parseRolledSection(b *block, fam string) error {
 	m := &p.job.Member
 	for _, k := range []string{"legs", "thickness", "width", "area", "xbar", "rmin", "gap"} {
+		if k == "gap" && m.Shape.Pieces() == 2 && !engine.Apart(m.Shape) {
+			continue // the plate between the pieces, as for double angles
+		}
 		if b.has(k) {
 			return p.errAt(b.vals[k], b.sub(k), k+" does not apply to a "+m.Shape.String()+" member",
 				"a "+fam+" shape is given by its catalog designation, e.g. size: "+rolledExample[fam])

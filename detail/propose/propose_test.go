@@ -44,7 +44,7 @@ func atLeastChecks(t *testing.T, n int) {
 // step, one or two diameters and grades, at most two lines of four.
 // Sizes and loads are invented test data.
 func drawProposeJob(t *rapid.T) string {
-	return drawProposeJobOf(t, []string{"angle", "double-angle", "flat", "wt", "channel", "w"}, true)
+	return drawProposeJobOf(t, []string{"angle", "double-angle", "flat", "wt", "channel", "double-channel", "w"}, true)
 }
 
 // drawProposeJobOf draws a propose job of one of the shapes; fixGage lets
@@ -99,7 +99,7 @@ func drawProposeJobOf(t *rapid.T, shapes []string, fixGage bool) string {
 		if rapid.IntRange(0, 3).Draw(t, "eccProvided") == 0 {
 			w("  eccentricity: provided")
 		}
-	} else if fams := map[string][]section.Family{"wt": {section.FamilyWT}, "channel": {section.FamilyC, section.FamilyMC}, "w": {section.FamilyW}}[shape]; fams != nil {
+	} else if fams := map[string][]section.Family{"wt": {section.FamilyWT}, "channel": {section.FamilyC, section.FamilyMC}, "double-channel": {section.FamilyC, section.FamilyMC}, "w": {section.FamilyW}}[shape]; fams != nil {
 		var sizes []string
 		for _, f := range fams {
 			sizes = append(sizes, section.ShapeNames(f)...)

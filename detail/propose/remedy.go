@@ -386,7 +386,7 @@ func largerRolled(p *problem) []change {
 	}
 	cur := p.groups[0].tmpl.Conn.Member
 	need := cur.Ag * units.Area(max(1, engine.MemberYield(&p.groups[0].tmpl.Conn).Ratio))
-	fams := map[engine.Shape][]section.Family{engine.Tee: {section.FamilyWT}, engine.Channel: {section.FamilyC, section.FamilyMC}, engine.Wide: {section.FamilyW}}[m.Shape]
+	fams := map[engine.Shape][]section.Family{engine.Tee: {section.FamilyWT}, engine.Channel: {section.FamilyC, section.FamilyMC}, engine.DoubleChannel: {section.FamilyC, section.FamilyMC}, engine.Wide: {section.FamilyW}}[m.Shape]
 	type cand struct {
 		name string
 		area units.Area
@@ -398,7 +398,11 @@ func largerRolled(p *problem) []change {
 			if err != nil {
 				continue
 			}
-			if ar := sh.Properties().Area; ar > cur.Ag*(1+1e-9) && ar >= need*(1-1e-9) {
+			n := 1 // a W's area is of the whole shape; a pair's twice a channel's
+			if !engine.Apart(m.Shape) {
+				n = m.Shape.Pieces()
+			}
+			if ar := sh.Properties().Area * units.Area(n); ar > cur.Ag*(1+1e-9) && ar >= need*(1-1e-9) {
 				cs = append(cs, cand{name, ar})
 			}
 		}
@@ -418,7 +422,7 @@ func lookupRolled(s engine.Shape, name string) (section.Shape, error) {
 	switch s {
 	case engine.Tee:
 		return section.LookupWT(name)
-	case engine.Channel:
+	case engine.Channel, engine.DoubleChannel:
 		return section.LookupC(name)
 	}
 	return section.LookupW(name)

@@ -44,10 +44,10 @@ stock:
 // the channel's flanges): propose keeps that margin (common practice, no
 // source: a hole is drilled within the tolerance of where it is drawn).
 func TestPropertyRolledShapeLayoutChecksWithMargin(t *testing.T) {
-	fams := map[string][]section.Family{"wt": {section.FamilyWT}, "channel": {section.FamilyC, section.FamilyMC}, "w": {section.FamilyW}}
+	fams := map[string][]section.Family{"wt": {section.FamilyWT}, "channel": {section.FamilyC, section.FamilyMC}, "double-channel": {section.FamilyC, section.FamilyMC}, "w": {section.FamilyW}}
 	found := 0
 	rapid.Check(t, func(rt *rapid.T) {
-		shape := rapid.SampledFrom([]string{"wt", "channel", "w"}).Draw(rt, "shape")
+		shape := rapid.SampledFrom([]string{"wt", "channel", "double-channel", "w"}).Draw(rt, "shape")
 		var sizes []string
 		for _, f := range fams[shape] {
 			sizes = append(sizes, section.ShapeNames(f)...)

@@ -797,7 +797,7 @@ func PiecesNote(m *engine.Member) string {
 	if engine.Apart(m.Shape) {
 		return "BOTH " + strings.ToUpper(engine.PieceName(m.Shape)) + "S DRILLED ALIKE, SEEN FROM OUTSIDE"
 	}
-	return "2 ANGLES BACK TO BACK: MAKE 1 AS SHOWN AND 1 OPPOSITE HAND"
+	return "2 " + strings.ToUpper(engine.PieceName(m.Shape)) + "S BACK TO BACK: MAKE 1 AS SHOWN AND 1 OPPOSITE HAND"
 }
 
 // junctions draws, for reference, the faces of the elements standing on
