@@ -311,30 +311,20 @@ func sheetElement(m *engine.Member) string {
 	return "flange"
 }
 
-// buildRolled sets the section of a WT, channel or W shape from the
-// catalog (section.LookupWT, LookupC, LookupW): the connected element,
-// the junctions of the rest of the section with it, x̄ for Table D3.1
-// case 2 (a tee's ȳ; a channel's x̄; a W's, the ȳ of the tee that is half
-// of it), d for case 7 and the tear-off block.
+// buildRolled sets the section of a rolled shape from the catalog
+// (section.LookupIn its engine.CatalogFamily) by its entry in
+// rolledSections.
 func (j job) buildRolled(mem *engine.Member, info *detailing.MemberInfo) error {
 	m := j.Member
-	var sh section.Shape
-	var err error
-	switch m.Shape {
-	case engine.Tee:
-		sh, err = section.LookupWT(m.Size)
-	case engine.Channel, engine.DoubleChannel:
-		sh, err = section.LookupC(strings.TrimPrefix(strings.TrimSpace(m.Size), "2"))
-	default:
-		sh, err = section.LookupW(m.Size)
-	}
+	fam, _ := engine.CatalogFamily(m.Shape)
+	sh, err := section.LookupIn(fam, m.Size)
 	if err != nil {
 		hint := ""
 		var us *section.UnknownShapeError
 		if errors.As(err, &us) {
 			hint = us.Hint()
 		}
-		return j.FieldError("member.size", fmt.Sprintf("no %s shape %q in the catalog", jobfile.RolledFamily(m.Shape), m.Size), hint)
+		return j.FieldError("member.size", fmt.Sprintf("no %s shape %q in the catalog", fam, m.Size), hint)
 	}
 	props := sh.Properties()
 	info.Designation = sh.Name
@@ -343,39 +333,11 @@ func (j job) buildRolled(mem *engine.Member, info *detailing.MemberInfo) error {
 	}
 	info.Rmin = min(props.Rx, props.Ry)
 	mem.Ag = props.Area
-	// k1, the web centre line to the toe of the fillet across the flange,
-	// is taken from the catalog's geometry: tw/2 + (kdes − tf).
-	k1 := sh.Tw/2 + sh.K - sh.Tf
-	switch m.Shape {
-	case engine.Tee:
-		mem.Width, mem.T, mem.Xbar = sh.Bf, sh.Tf, props.Ybar
-		mem.Depth = 2 * sh.D // the W the tee is cut from (case 7)
-		mem.Junctions = []engine.Junction{{Name: "stem", Fillet: "k1", At: sh.Bf / 2, Face: sh.Tw / 2, Toe: k1}}
-		mem.TearOff = &engine.TearOff{Planes: 1, T: sh.Tw, At: mem.Ag - sh.Tw.Mul(sh.D-sh.K), What: "stem at the toe of its fillet"}
-	case engine.Channel, engine.DoubleChannel:
-		n := m.Shape.Pieces()
-		mem.Width, mem.T, mem.Xbar = sh.D, sh.Tw, props.Xbar
-		mem.Ag = props.Area * units.Area(n)
-		mem.Junctions = []engine.Junction{
-			{Name: "flange", Fillet: "k", At: 0, Face: sh.Tf, Toe: sh.K, Side: 1},
-			{Name: "flange", Fillet: "k", At: sh.D, Face: sh.Tf, Toe: sh.K, Side: -1},
-		}
-		mem.TearOff = &engine.TearOff{Planes: 2 * n, T: sh.Tw, At: sh.Tw.Mul(sh.D-2*sh.K) * units.Area(n), What: "web at the toes of its fillets"}
-		if n == 2 {
-			info.Designation = "2" + info.Designation
-			// the pair about the axis along the webs, the plate (member.gap)
-			// between their backs: r² = ry² + (x̄ + gap/2)²
-			off := float64(props.Xbar + j.gap()/2)
-			info.Rmin = min(props.Rx, units.Length(math.Sqrt(float64(props.Ry*props.Ry)+off*off)))
-		}
-	default:
-		half := sh
-		half.Family, half.D = section.FamilyWT, sh.D/2
-		mem.Width, mem.T, mem.Xbar = sh.Bf, sh.Tf, half.Properties().Ybar
-		mem.Depth = sh.D
-		mem.Junctions = []engine.Junction{{Name: "web", Fillet: "k1", At: sh.Bf / 2, Face: sh.Tw / 2, Toe: k1}}
-		mem.TearOff = &engine.TearOff{Planes: 2, T: sh.Tw, At: mem.Ag - sh.Tw.Mul(sh.D-2*sh.K), What: "web at the toes of its fillets"}
+	place, ok := rolledSections[m.Shape]
+	if !ok {
+		panic("detail: no rolledSections entry for shape " + m.Shape.String())
 	}
+	place(j, sh, props, mem, info)
 	return nil
 }
 

@@ -10,6 +10,8 @@ import (
 	"strings"
 	"testing"
 
+	"gaugeline/detail/jobfile"
+
 	"gaugeline/engine"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
@@ -251,5 +253,51 @@ func TestHandbookDoubleChannelBlockShear(t *testing.T) {
 	// The member's bolts act in double shear (the gusset between the webs).
 	if planes := value(t, rs["bolts.shear"], "planes"); planes != 2 {
 		t.Errorf("%g shear planes, want 2 (common practice, no source: a pair with the plate between)", planes)
+	}
+}
+
+// teeCopy is a renamed copy of the WT that exists only in this test: the
+// engine's answers, its catalog family, nothing else.
+type teeCopy struct{ engine.TeeFlange }
+
+func (teeCopy) String() string { return "test-tee" }
+
+// "Adding a shape" (DEVELOPERS.md) for a rolled section: the shape's own
+// type (here a renamed copy of the WT, in this file) and one entry in
+// rolledSections are all it takes; the catalog rows are the WT's. The
+// copy checks exactly as the WT does (common practice, no source: a
+// renamed copy checks alike).
+func TestAddedRolledShape(t *testing.T) {
+	j, err := jobfile.LoadJob("../testdata/examples/aisc-model-wt8x25.yaml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	want, err := Build(j)
+	if err != nil {
+		t.Fatal(err)
+	}
+	rolledSections[teeCopy{}] = placeTee
+	t.Cleanup(func() { delete(rolledSections, teeCopy{}) })
+	j.Member.Shape = teeCopy{}
+	got, err := Build(j)
+	if err != nil {
+		t.Fatal(err)
+	}
+	rw, err := Check(want)
+	if err != nil {
+		t.Fatal(err)
+	}
+	rg, err := Check(got)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(rg.Results) != len(rw.Results) {
+		t.Fatalf("%d results, the WT has %d", len(rg.Results), len(rw.Results))
+	}
+	for i := range rw.Results {
+		g, w := rg.Results[i], rw.Results[i]
+		if g.ID != w.ID || g.Available != w.Available || g.Note != w.Note {
+			t.Errorf("result %d: %s %v %q, the WT gives %s %v %q", i, g.ID, g.Available, g.Note, w.ID, w.Available, w.Note)
+		}
 	}
 }

@@ -114,6 +114,18 @@ func Apart(s Shape) bool {
 	return ok && a.Apart()
 }
 
+// CatalogFamily is the catalog family whose designation a rolled shape's
+// job gives as member.size ("WT", "C or MC", "W"; section.LookupIn reads
+// it) and an example designation for a hint: a shape says so by a method
+// Catalog() (family, example string). "" for angles and flat bars, which
+// are given otherwise.
+func CatalogFamily(s Shape) (family, example string) {
+	if c, ok := s.(interface{ Catalog() (string, string) }); ok {
+		return c.Catalog()
+	}
+	return "", ""
+}
+
 // PieceName is what a report calls one piece of the member ("angle",
 // "flange"): a shape says so by a method PieceName() string; "angle"
 // otherwise (the pieces of a double angle).

@@ -14,6 +14,7 @@ type ChannelWeb struct{}
 var Channel ChannelWeb
 
 func (ChannelWeb) String() string                     { return "channel" }
+func (ChannelWeb) Catalog() (family, example string)  { return "C or MC", "C8x11.5" }
 func (ChannelWeb) Pieces() int                        { return 1 }
 func (ChannelWeb) FreeEdges() (low, high bool)        { return false, false }
 func (ChannelWeb) ConnectedArea(m *Member) units.Area { return m.Width.Mul(m.T) }

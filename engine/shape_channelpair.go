@@ -12,10 +12,11 @@ type ChannelPairWebs struct{}
 // DoubleChannel is the pair of channels (the type has one value).
 var DoubleChannel ChannelPairWebs
 
-func (ChannelPairWebs) String() string              { return "double-channel" }
-func (ChannelPairWebs) Pieces() int                 { return 2 }
-func (ChannelPairWebs) PieceName() string           { return "channel" }
-func (ChannelPairWebs) FreeEdges() (low, high bool) { return false, false }
+func (ChannelPairWebs) String() string                    { return "double-channel" }
+func (ChannelPairWebs) Catalog() (family, example string) { return "C or MC", "2C8x11.5" }
+func (ChannelPairWebs) Pieces() int                       { return 2 }
+func (ChannelPairWebs) PieceName() string                 { return "channel" }
+func (ChannelPairWebs) FreeEdges() (low, high bool)       { return false, false }
 func (ChannelPairWebs) ConnectedArea(m *Member) units.Area {
 	return units.Area(float64(m.Pieces) * float64(m.Width) * float64(m.T))
 }

@@ -14,6 +14,7 @@ type TeeFlange struct{}
 var Tee TeeFlange
 
 func (TeeFlange) String() string                     { return "wt" }
+func (TeeFlange) Catalog() (family, example string)  { return "WT", "WT8x25" }
 func (TeeFlange) Pieces() int                        { return 1 }
 func (TeeFlange) FreeEdges() (low, high bool)        { return true, true }
 func (TeeFlange) ConnectedArea(m *Member) units.Area { return m.Width.Mul(m.T) }

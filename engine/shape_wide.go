@@ -14,11 +14,12 @@ type WideFlanges struct{}
 // Wide is the W shape bolted through both flanges (the type has one value).
 var Wide WideFlanges
 
-func (WideFlanges) String() string              { return "w" }
-func (WideFlanges) Pieces() int                 { return 2 }
-func (WideFlanges) Apart() bool                 { return true }
-func (WideFlanges) PieceName() string           { return "flange" }
-func (WideFlanges) FreeEdges() (low, high bool) { return true, true }
+func (WideFlanges) String() string                    { return "w" }
+func (WideFlanges) Catalog() (family, example string) { return "W", "W8x21" }
+func (WideFlanges) Pieces() int                       { return 2 }
+func (WideFlanges) Apart() bool                       { return true }
+func (WideFlanges) PieceName() string                 { return "flange" }
+func (WideFlanges) FreeEdges() (low, high bool)       { return true, true }
 func (WideFlanges) ConnectedArea(m *Member) units.Area {
 	return units.Area(float64(m.Pieces) * float64(m.Width) * float64(m.T))
 }

@@ -157,22 +157,18 @@ func (p *parser) checkPlyHoles() error {
 }
 
 // RolledFamily is the catalog family whose designation member.size gives
-// for a rolled shape other than an angle ("WT", "C or MC", "W"); "" for
+// for a rolled shape other than an angle (engine.CatalogFamily); "" for
 // angles and flat bars.
 func RolledFamily(s engine.Shape) string {
-	switch s {
-	case engine.Tee:
-		return "WT"
-	case engine.Channel, engine.DoubleChannel:
-		return "C or MC"
-	case engine.Wide:
-		return "W"
-	}
-	return ""
+	f, _ := engine.CatalogFamily(s)
+	return f
 }
 
-// rolledExample is a designation of each family for a hint.
-var rolledExample = map[string]string{"WT": "WT8x25", "C or MC": "C8x11.5", "W": "W8x21"}
+// example is a designation of the shape's catalog family, for a hint.
+func example(s engine.Shape) string {
+	_, e := engine.CatalogFamily(s)
+	return e
+}
 
 // parseRolledSection reads the size of a WT, channel or W shape: a
 // catalog designation, nothing else describes the section.
@@ -184,11 +180,11 @@ func (p *parser) parseRolledSection(b *block, fam string) error {
 		}
 		if b.has(k) {
 			return p.errAt(b.vals[k], b.sub(k), k+" does not apply to a "+m.Shape.String()+" member",
-				"a "+fam+" shape is given by its catalog designation, e.g. size: "+rolledExample[fam])
+				"a "+fam+" shape is given by its catalog designation, e.g. size: "+example(m.Shape))
 		}
 	}
 	if !b.has("size") {
-		return p.missing(b, "member.size", "is required for a "+m.Shape.String()+" member", "size: "+rolledExample[fam])
+		return p.missing(b, "member.size", "is required for a "+m.Shape.String()+" member", "size: "+example(m.Shape))
 	}
 	var err error
 	m.Size, err = p.word(b.vals["size"], "member.size")

@@ -386,25 +386,23 @@ func largerRolled(p *problem) []change {
 	}
 	cur := p.groups[0].tmpl.Conn.Member
 	need := cur.Ag * units.Area(max(1, engine.MemberYield(&p.groups[0].tmpl.Conn).Ratio))
-	fams := map[engine.Shape][]section.Family{engine.Tee: {section.FamilyWT}, engine.Channel: {section.FamilyC, section.FamilyMC}, engine.DoubleChannel: {section.FamilyC, section.FamilyMC}, engine.Wide: {section.FamilyW}}[m.Shape]
+	fam, _ := engine.CatalogFamily(m.Shape)
 	type cand struct {
 		name string
 		area units.Area
 	}
 	var cs []cand
-	for _, f := range fams {
-		for _, name := range section.ShapeNames(f) {
-			sh, err := lookupRolled(m.Shape, name)
-			if err != nil {
-				continue
-			}
-			n := 1 // a W's area is of the whole shape; a pair's twice a channel's
-			if !engine.Apart(m.Shape) {
-				n = m.Shape.Pieces()
-			}
-			if ar := sh.Properties().Area * units.Area(n); ar > cur.Ag*(1+1e-9) && ar >= need*(1-1e-9) {
-				cs = append(cs, cand{name, ar})
-			}
+	for _, name := range section.ShapeNamesIn(fam) {
+		sh, err := section.LookupIn(fam, name)
+		if err != nil {
+			continue
+		}
+		n := 1 // a W's area is of the whole shape; a pair's twice a channel's
+		if !engine.Apart(m.Shape) {
+			n = m.Shape.Pieces()
+		}
+		if ar := sh.Properties().Area * units.Area(n); ar > cur.Ag*(1+1e-9) && ar >= need*(1-1e-9) {
+			cs = append(cs, cand{name, ar})
 		}
 	}
 	slices.SortStableFunc(cs, func(a, b cand) int { return cmp.Or(cmp.Compare(a.area, b.area), cmp.Compare(a.name, b.name)) })
@@ -414,18 +412,6 @@ func largerRolled(p *problem) []change {
 			value: c.name, member: c.name, text: fmt.Sprintf("member %s (job: %s)", c.name, m.Size)})
 	}
 	return out
-}
-
-// lookupRolled finds a catalog shape of the family a rolled member shape
-// takes.
-func lookupRolled(s engine.Shape, name string) (section.Shape, error) {
-	switch s {
-	case engine.Tee:
-		return section.LookupWT(name)
-	case engine.Channel, engine.DoubleChannel:
-		return section.LookupC(name)
-	}
-	return section.LookupW(name)
 }
 
 // connectedAngles lists every catalog angle of sys both ways round:

@@ -48,9 +48,10 @@ func usualOf(j *jobfile.Job, leg units.Length) section.UsualGages {
 	}
 	switch j.Member.Shape.(type) {
 	case engine.SingleAngle, engine.AnglePair:
-	case engine.TeeFlange, engine.WideFlanges:
-		return flangeGage(j, leg)
 	default:
+		if fam, _ := engine.CatalogFamily(j.Member.Shape); fam != "" {
+			return flangeGage(j, leg) // none where the catalog has no g (channels)
+		}
 		return section.UsualGages{}
 	}
 	u, _ := section.WorkableGage(leg, j.Units)
@@ -62,11 +63,8 @@ func usualOf(j *jobfile.Job, leg units.Length) section.UsualGages {
 // the first (bf − g)/2 from the flange tip. There is no usual single line
 // (it would stand on the web).
 func flangeGage(j *jobfile.Job, bf units.Length) section.UsualGages {
-	look := section.LookupW
-	if j.Member.Shape == engine.Tee {
-		look = section.LookupWT
-	}
-	sh, err := look(j.Member.Size)
+	fam, _ := engine.CatalogFamily(j.Member.Shape)
+	sh, err := section.LookupIn(fam, j.Member.Size)
 	if err != nil || sh.G <= 0 || sh.G >= bf {
 		return section.UsualGages{}
 	}
@@ -157,7 +155,7 @@ const (
 
 // usualSource names the table the usual gages come from.
 func usualSource(sys units.System, s engine.Shape) string {
-	if s == engine.Tee || s == engine.Wide {
+	if fam, _ := engine.CatalogFamily(s); fam != "" {
 		return "workable flange gage g: AISC Shapes Database v15.0, the Manual's Tables 1-1 and 1-8"
 	}
 	if sys == units.SI {

@@ -176,6 +176,30 @@ func LookupC(designation string) (Shape, error) {
 	return lookupShape(designation, FamilyC, FamilyMC)
 }
 
+// families is what a catalog family's name (engine.CatalogFamily) covers.
+var families = map[string][]Family{"W": {FamilyW}, "WT": {FamilyWT}, "C or MC": {FamilyC, FamilyMC}}
+
+// LookupIn finds a designation in the families a catalog family's name
+// covers ("W", "WT", "C or MC"); a leading "2" (a pair: "2C8x11.5") is
+// not part of it.
+func LookupIn(family, designation string) (Shape, error) {
+	fs, ok := families[family]
+	if !ok {
+		return Shape{}, fmt.Errorf("section: no catalog family %q", family)
+	}
+	return lookupShape(strings.TrimPrefix(strings.TrimSpace(designation), "2"), fs...)
+}
+
+// ShapeNamesIn lists the designations of a catalog family's name in
+// catalog order.
+func ShapeNamesIn(family string) []string {
+	var names []string
+	for _, f := range families[family] {
+		names = append(names, ShapeNames(f)...)
+	}
+	return names
+}
+
 // lookupShape finds designation among the families fs. Case, spaces and
 // the spelling of the separator ("x", "X", "×") do not matter.
 func lookupShape(designation string, fs ...Family) (Shape, error) {
