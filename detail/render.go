@@ -69,8 +69,12 @@ func (d *Design) Summary() [][2]string {
 		rows = append(rows, [2]string{"plate", p.plateRow(d)})
 	}
 	b := c.Bolt
-	bolts := fmt.Sprintf("%d × %s %s, threads %s, %s joint, %s",
-		len(c.Holes), BoltSize(b.D, d.Job.Units), b.Grade.Name, b.Threads, b.Joint, HoleKinds(&c))
+	count := fmt.Sprint(len(c.Holes))
+	if engine.Apart(c.Member.Shape) {
+		count = fmt.Sprintf("%d (%d in each %s)", len(c.Holes)*c.Member.Pieces, len(c.Holes), engine.PieceName(c.Member.Shape))
+	}
+	bolts := fmt.Sprintf("%s × %s %s, threads %s, %s joint, %s",
+		count, BoltSize(b.D, d.Job.Units), b.Grade.Name, b.Threads, b.Joint, HoleKinds(&c))
 	if b.FillerT > 0 {
 		bolts += ", fillers " + p.length(b.FillerT)
 		if b.FillerDeveloped {
@@ -297,6 +301,9 @@ func (p people) plateRow(d *Design) string {
 	c := &d.Conn
 	pl := c.Plate
 	head := fmt.Sprintf("%s %s %s", p.length(pl.T), d.Info.PlateGrade, pl.Kind)
+	if engine.Apart(c.Member.Shape) {
+		head = fmt.Sprintf("%d × %s %s %s plates, one at each %s", pl.Plates(), p.length(pl.T), d.Info.PlateGrade, pl.Kind, engine.PieceName(c.Member.Shape))
+	}
 	if ps := d.Job.Plate; ps != nil && ps.Outline != nil {
 		xlo := pl.FreeEdge
 		for _, q := range pl.Outline {
