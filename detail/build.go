@@ -157,9 +157,11 @@ func (j job) newDesign(ed *rules.Edition) *Design {
 // governing combination of the service loads.
 func (j job) setDemand(d *Design) {
 	if j.Load.Combined() {
-		d.Conn.Demand, d.Combination = engine.Combine(j.Method, j.Load.Service)
+		t, c := engine.Demands(j.Method, j.Load.Service, j.Load.Reverses)
+		d.Conn.Demand, d.Combination = t.Force, t.Name
+		d.Conn.Compression, d.CompressionCombination = c.Force, c.Name
 	} else {
-		d.Conn.Demand = j.Load.Required
+		d.Conn.Demand, d.Conn.Compression = j.Load.Required, j.Load.Compression
 	}
 }
 
@@ -296,6 +298,7 @@ func (j job) buildFlat(mem *engine.Member, info *detailing.MemberInfo) {
 	m := j.Member
 	mem.Width, mem.T = m.Width, m.Thickness
 	mem.Ag = m.Width.Mul(m.Thickness)
+	mem.Strut = j.flatStrut(m.Width, m.Thickness)
 	info.Designation = "PL " + compact(m.Width, j.Units) + "x" + compact(m.Thickness, j.Units)
 	info.Rmin = units.Length(float64(min(m.Width, m.Thickness)) / math.Sqrt(12))
 }
@@ -338,6 +341,7 @@ func (j job) buildRolled(mem *engine.Member, info *detailing.MemberInfo) error {
 		panic("detail: no rolledSections entry for shape " + m.Shape.String())
 	}
 	place(j, sh, props, mem, info)
+	mem.Strut = j.rolledStrut(sh, props)
 	return nil
 }
 
@@ -374,6 +378,7 @@ func (j job) buildAngle(mem *engine.Member, info *detailing.MemberInfo) error {
 		info.Rmin = m.Rmin
 	}
 	mem.Ag = area * units.Area(mem.Pieces)
+	mem.Strut = j.angleStrut(a, props, mem.Pieces)
 	return nil
 }
 
@@ -802,7 +807,14 @@ func (j job) plateParts(ed *rules.Edition, d *Design) error {
 	if err != nil {
 		return err
 	}
-	d.Conn.Plate = &engine.Plate{Kind: ps.Kind, T: ps.Thickness, Width: ps.Width, Fy: st.Fy, Fu: st.Fu, Count: ps.Count, Gap: ps.Gap}
+	d.Conn.Plate = &engine.Plate{Kind: ps.Kind, T: ps.Thickness, Width: ps.Width, Fy: st.Fy, Fu: st.Fu, Count: ps.Count, Gap: ps.Gap,
+		Buckling: engine.PlateBuckling{K: ps.Buckling.K, Centre: ps.Buckling.Centre}}
+	if ps.Buckling.K == 0 {
+		d.Conn.Plate.Buckling.K = engine.DefaultGussetK
+		if ps.Kind == engine.Splice {
+			d.Conn.Plate.Buckling.K = engine.DefaultSpliceK
+		}
+	}
 	d.Info.PlateGrade = st.Name
 	d.Info.Weathering = d.Info.Weathering || st.Weathering
 	return nil

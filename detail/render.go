@@ -90,6 +90,13 @@ func (d *Design) Summary() [][2]string {
 		demand += ", " + d.Combination
 	}
 	rows = append(rows, [2]string{"demand", demand})
+	if c.Compression > 0 {
+		comp := fmt.Sprintf("%s %s (%s)", p.force(c.Compression), d.Job.Units.Labels().Force, c.Method)
+		if d.CompressionCombination != "" {
+			comp += ", " + d.CompressionCombination
+		}
+		rows = append(rows, [2]string{"compression", comp})
+	}
 	return rows
 }
 

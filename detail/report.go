@@ -162,6 +162,8 @@ type jsonLimit struct {
 	Values    map[string]JSONNum `json:"values"`
 	Note      string             `json:"note,omitempty"`
 	PerBolt   []jsonBolt         `json:"per_bolt,omitempty"`
+	// Case is "compression" for the compression case's limit states.
+	Case string `json:"case,omitempty"`
 }
 
 type jsonBolt struct {
@@ -207,20 +209,24 @@ type jsonPlyHole struct {
 // Document is the check report as JSON (SPEC §9): the reverify and
 // propose documents embed it.
 type Document struct {
-	Mark           string        `json:"mark"`
-	Standard       string        `json:"standard"`
-	Method         string        `json:"method"`
-	Units          string        `json:"units"`
-	UnitLabels     units.Labels  `json:"unit_labels"`
-	Demand         JSONNum       `json:"demand"`
-	Combination    string        `json:"combination,omitempty"`
-	Verdict        string        `json:"verdict"`
-	Governing      string        `json:"governing"`
-	GoverningRatio JSONNum       `json:"governing_ratio"`
-	Failing        []string      `json:"failing"` // Report.Failing; [] when it passes
-	LimitStates    []jsonLimit   `json:"limit_states"`
-	Detailing      []jsonFinding `json:"detailing"`
-	Holes          []jsonHole    `json:"holes"`
+	Mark        string       `json:"mark"`
+	Standard    string       `json:"standard"`
+	Method      string       `json:"method"`
+	Units       string       `json:"units"`
+	UnitLabels  units.Labels `json:"unit_labels"`
+	Demand      JSONNum      `json:"demand"`
+	Combination string       `json:"combination,omitempty"`
+	// Compression is the required compressive strength where the member
+	// pushes too, and the combination that gives it.
+	Compression            *JSONNum      `json:"compression,omitempty"`
+	CompressionCombination string        `json:"compression_combination,omitempty"`
+	Verdict                string        `json:"verdict"`
+	Governing              string        `json:"governing"`
+	GoverningRatio         JSONNum       `json:"governing_ratio"`
+	Failing                []string      `json:"failing"` // Report.Failing; [] when it passes
+	LimitStates            []jsonLimit   `json:"limit_states"`
+	Detailing              []jsonFinding `json:"detailing"`
+	Holes                  []jsonHole    `json:"holes"`
 	// Ends and GoverningEnd are there where the far end is a connection of
 	// its own (ends.go): each end's results; the fields above are the
 	// governing end's, verdict and failing the whole member's.
@@ -262,9 +268,13 @@ func (r *Report) endDocument() Document {
 	if doc.Failing == nil {
 		doc.Failing = []string{}
 	}
+	if d.Conn.Compression > 0 {
+		c := force(d.Conn.Compression)
+		doc.Compression, doc.CompressionCombination = &c, d.CompressionCombination
+	}
 	for _, x := range r.Results {
 		l := jsonLimit{ID: x.ID, Clause: x.Clause, Nominal: force(x.Nominal), Available: force(x.Available),
-			Demand: force(x.Demand), Ratio: JSONNum(x.Ratio), Pass: x.Pass, Values: map[string]JSONNum{}, Note: x.Note}
+			Demand: force(x.Demand), Ratio: JSONNum(x.Ratio), Pass: x.Pass, Values: map[string]JSONNum{}, Note: x.Note, Case: x.Case}
 		for _, v := range x.Values {
 			l.Values[v.Name] = JSONNum(sys.ToJob(v.V, v.Dim))
 		}

@@ -12,6 +12,8 @@ type Design struct {
 	Conn engine.Connection
 	Info detailing.MemberInfo
 	// Combination names the governing load combination when the demand was
-	// combined from service loads ("" when given as required).
-	Combination string
+	// combined from service loads ("" when given as required);
+	// CompressionCombination the one of the compression (Conn.Compression).
+	Combination            string
+	CompressionCombination string
 }

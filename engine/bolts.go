@@ -95,7 +95,8 @@ func BoltShear(c *Connection) Result {
 	pFf := vs.add(valFillerFactor(ff))
 	pFf.Omit = none
 	vs.add(valFillerT(c.Bolt.FillerT)).Omit = none
-	r := finish(c, "bolts.shear", "J3.6", Rn, c.Edition.BoltShearFactor(), vs.list, note)
+	// the bolts shear alike whether the member pulls or pushes
+	r := finishFor(c, max(c.Demand, c.Compression), "bolts.shear", "J3.6", Rn, c.Edition.BoltShearFactor(), vs.list, note)
 	if ff < 1 {
 		r.Clause += ", " + c.Edition.Clause("J5.2")
 	}
@@ -220,7 +221,7 @@ func BoltSlip(c *Connection) (Result, error) {
 	pN := vs.add(valBolts(n))
 	vs.add(Value{Name: "phi", V: f.Phi, Sym: "φ", What: "resistance factor φ for slip, by hole type"})
 	vs.add(Value{Name: "omega", V: f.Omega, Sym: "Ω", What: "safety factor Ω for slip, by hole type"})
-	r := finish(c, "bolts.slip", "J3.8", Rn, f, vs.list, fmt.Sprintf("class %s surface, %d slip plane(s)", c.Bolt.Surface, ns))
+	r := finishFor(c, max(c.Demand, c.Compression), "bolts.slip", "J3.8", Rn, f, vs.list, fmt.Sprintf("class %s surface, %d slip plane(s)", c.Bolt.Surface, ns))
 	r.explain = func() Working {
 		muv, duv, hfv, tb, nsv, nv := *pMu, *pDu, *pHf, *pTb, *pNs, *pN
 		rn := Step{Value: nominal(Rn), Expr: working.Mul(working.Coef(muv, 2), working.Coef(duv, 2), working.Coef(hfv, 2), working.Of(tb), working.Of(nsv), working.Of(nv))}

@@ -31,6 +31,9 @@ func Check(c *Connection) ([]Result, error) {
 		out = append(out, s)
 	}
 	out = append(out, BoltGroup(c, mb.PerBolt, plateShares))
+	if c.Compression > 0 && c.Member.Strut != nil {
+		out = append(out, compressionChecks(c)...)
+	}
 	return out, nil
 }
 

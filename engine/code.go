@@ -49,6 +49,9 @@ type Code interface {
 	SplicePlateCap() (float64, bool)
 	BarPlasticCap() float64
 	SteelModulus() units.Stress
+	// Compression (Chapter E and J4.4).
+	CompressionFactor() rules.Factor
+	ShearModulus() units.Stress
 
 	// Detailing tables.
 	Hole(d units.Length, t rules.HoleType) (rules.HoleSize, error)

@@ -41,6 +41,9 @@ type Member struct {
 	// TearOff is the rolled section's block out of the connected element's
 	// plane (nil: none).
 	TearOff *TearOff
+	// Strut is what Chapter E asks of the member in compression (nil:
+	// not described, and no compression case may be checked).
+	Strut *Strut
 }
 
 // PlateKind is the role of the connecting plate.
@@ -81,6 +84,9 @@ type Plate struct {
 	// Gap is a splice's gap between the two members' ends: member B's end
 	// is at x = −Gap (splice.go); zero for a gusset.
 	Gap units.Length
+	// Buckling is how the plate's buckling length is taken when the member
+	// pushes (J4.4, compression_plate.go).
+	Buckling PlateBuckling
 }
 
 // Plates is the number of plates: Count, at least 1.
@@ -156,6 +162,10 @@ type Connection struct {
 	Holes   []Hole
 	// Demand is the required strength: factored (LRFD) or service (ASD).
 	Demand units.Force
+	// Compression is the required compressive strength, a magnitude (zero:
+	// the member only pulls): the compression limit states (compression.go)
+	// are checked when it is set, and the bolts' shear takes the larger.
+	Compression units.Force
 }
 
 // ShearPlanes is the number of bolt shear planes (and slip planes): one

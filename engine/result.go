@@ -29,6 +29,9 @@ type Result struct {
 	Factor  rules.Factor
 	Values  []Value
 	Note    string      // what was checked, e.g. "toe strip of line 1"
+	// Case is "compression" for a limit state of the member pushing
+	// (Connection.Compression); "" for the tension case.
+	Case    string
 	PerBolt []BoltShare // bearing and tearout only
 	// explain builds the working; set by the limit state where it
 	// computes the result, from copies of what it used (never the

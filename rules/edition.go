@@ -129,6 +129,19 @@ func (e *Edition) SteelGrades() []string { return steelGrades() }
 func (e *Edition) YieldFactor() Factor   { return Factor{0.90, 1.67} }
 func (e *Edition) RuptureFactor() Factor { return Factor{0.75, 2.00} }
 
+// CompressionFactor is φc 0.90 / Ωc 1.67 (E1; J4.4 for connecting
+// elements in compression).
+func (e *Edition) CompressionFactor() Factor { return Factor{0.90, 1.67} }
+
+// ShearModulus is G as the Specification prints it: 11,200 ksi in US
+// units, 77 200 MPa in SI (both editions; from memory).
+func (e *Edition) ShearModulus() units.Stress {
+	if e.si() {
+		return 77200 * units.Megapascal
+	}
+	return 11200 * units.Ksi
+}
+
 // BlockShearFactor, BoltShearFactor and BearingFactor are φ 0.75 / Ω 2.00.
 func (e *Edition) BlockShearFactor() Factor { return Factor{0.75, 2.00} }
 func (e *Edition) BoltShearFactor() Factor  { return Factor{0.75, 2.00} }

@@ -24,6 +24,10 @@ type Job struct {
 	Standard string // "aisc360-22" or "aisc360-16"
 	Method   rules.Method
 	Quantity int
+	// SeismicSystem is seismic_system: the seismic force-resisting system
+	// the member belongs to ("" none); its provisions (AISC 341) are not
+	// checked, and every output says so.
+	SeismicSystem string
 
 	Load   Load
 	Member MemberSpec
@@ -56,14 +60,22 @@ type Job struct {
 // Load is the tension demand: the required strength, or service loads the
 // tool combines (ASCE 7 basic combinations).
 type Load struct {
-	// Required is the required strength (factored for LRFD, service for
-	// ASD); zero when service loads are given.
+	// Required is the required tensile strength (factored for LRFD,
+	// service for ASD); zero when service loads are given, or when the
+	// member only pushes (Compression alone).
 	Required units.Force
-	Service  engine.ServiceLoads
+	// Compression is the required compressive strength, a magnitude
+	// (load.compression); zero: none, or combined from the service loads.
+	Compression units.Force
+	// Service loads are signed: tension positive, compression negative.
+	Service engine.ServiceLoads
+	// Reverses says which service loads act in either direction
+	// (load.reverses: [wind, seismic]).
+	Reverses engine.Reverses
 }
 
 // Combined reports whether the demand is combined from service loads.
-func (l Load) Combined() bool { return l.Required == 0 }
+func (l Load) Combined() bool { return l.Required == 0 && l.Compression == 0 }
 
 // SteelSpec names a catalog grade or gives Fy and Fu explicitly.
 type SteelSpec struct {
@@ -96,6 +108,8 @@ type MemberSpec struct {
 	// FarEnd is what the member's far end (x = Length) carries
 	// (member.far_end); the zero value is the default, a mirror.
 	FarEnd FarEndSpec
+	// Buckling is how the member buckles when it pushes (compression.go).
+	Buckling MemberBuckling
 }
 
 // PlateSpec is the gusset or splice plate the member bolts to.
@@ -123,6 +137,8 @@ type PlateSpec struct {
 	// Gap is plate.gap, a splice's gap between the member ends
 	// (DefaultSpliceGap when not given); zero for a gusset.
 	Gap units.Length
+	// Buckling is plate.k and plate.buckling_length (compression.go).
+	Buckling PlateBucklingSpec
 }
 
 // PlyHole is one ply's own hole type and slot direction, where the job

@@ -94,7 +94,7 @@ func yamlErr(file string, err error) *InputError {
 // starts with '.' (a hidden file) or '-' (read as an option by shell tools).
 var markPattern = regexp.MustCompile(`^[A-Za-z0-9_][A-Za-z0-9._-]{0,39}$`)
 
-var rootKeys = []string{"mark", "units", "standard", "method", "quantity", "load", "member", "plate", "bolts", "holes", "stock", "tolerance", "project"}
+var rootKeys = []string{"mark", "units", "standard", "method", "quantity", "seismic_system", "load", "member", "plate", "bolts", "holes", "stock", "tolerance", "project"}
 
 // parseRoot reads the job's root mapping: its scalars, then its blocks.
 func (p *parser) parseRoot(root *yaml.Node) error {
@@ -153,6 +153,9 @@ func (p *parser) parseHeader(b *block) error {
 			return err
 		}
 	}
+	if n := b.vals["seismic_system"]; n != nil {
+		return p.parseSeismic(n)
+	}
 	return nil
 }
 
@@ -199,31 +202,22 @@ func (p *parser) parseBlocks(b *block) error {
 	if err := p.parseProject(b.vals["project"]); err != nil {
 		return err
 	}
-	return p.parseFarEnd()
+	if err := p.parseFarEnd(); err != nil {
+		return err
+	}
+	return p.checkCompression()
 }
 
 var serviceKeys = []string{"dead", "live", "roof_live", "snow", "rain", "wind", "seismic"}
 
 func (p *parser) parseLoad(n *yaml.Node) error {
-	b, err := p.mapping(n, "load", append([]string{"required"}, serviceKeys...))
+	b, err := p.mapping(n, "load", append([]string{"required", "compression", "reverses"}, serviceKeys...))
 	if err != nil {
 		return err
 	}
 	l := &p.job.Load
-	if b.has("required") {
-		for _, k := range serviceKeys {
-			if b.has(k) {
-				return p.errAt(b.vals["required"], "load.required", "give either the required strength or service loads ("+k+": …), not both",
-					"required is the combined demand; service loads are combined by the tool")
-			}
-		}
-		if l.Required, err = p.force(b.vals["required"], "load.required"); err != nil {
-			return err
-		}
-		if l.Required == 0 {
-			return p.errAt(b.vals["required"], "load.required", "must be greater than zero", "")
-		}
-		return nil
+	if b.has("required") || b.has("compression") {
+		return p.parseRequired(b)
 	}
 	dst := []*units.Force{&l.Service.D, &l.Service.L, &l.Service.Lr, &l.Service.S, &l.Service.R, &l.Service.W, &l.Service.E}
 	var any bool
@@ -231,13 +225,68 @@ func (p *parser) parseLoad(n *yaml.Node) error {
 		if !b.has(k) {
 			continue
 		}
-		if *dst[i], err = p.force(b.vals[k], b.sub(k)); err != nil {
+		if *dst[i], err = p.signedForce(b.vals[k], b.sub(k)); err != nil {
 			return err
 		}
-		any = any || *dst[i] > 0
+		any = any || *dst[i] != 0
 	}
 	if !any {
-		return p.missing(b, "load", "has no load greater than zero", "give required: …, or at least one of "+strings.Join(serviceKeys, ", "))
+		return p.missing(b, "load", "has no load other than zero", "give required: …, or at least one of "+strings.Join(serviceKeys, ", "))
+	}
+	if v := b.vals["reverses"]; v != nil {
+		return p.parseReverses(v)
+	}
+	return nil
+}
+
+// parseRequired reads the required strengths: tension (load.required)
+// and compression (load.compression), instead of service loads.
+func (p *parser) parseRequired(b *block) (err error) {
+	l := &p.job.Load
+	at, path := b.vals["required"], "load.required"
+	if at == nil {
+		at, path = b.vals["compression"], "load.compression"
+	}
+	for _, k := range append(slices.Clone(serviceKeys), "reverses") {
+		if b.has(k) {
+			return p.errAt(at, path, "give either the required strength or service loads ("+k+": …), not both",
+				"required (and compression) are the combined demands; service loads are combined by the tool")
+		}
+	}
+	if b.has("required") {
+		if l.Required, err = p.force(b.vals["required"], "load.required"); err != nil {
+			return err
+		}
+	}
+	if b.has("compression") {
+		if l.Compression, err = p.force(b.vals["compression"], "load.compression"); err != nil {
+			return err
+		}
+	}
+	if l.Required == 0 && l.Compression == 0 {
+		return p.errAt(at, path, "must be greater than zero", "")
+	}
+	return nil
+}
+
+// parseReverses reads load.reverses: the service loads that act in
+// either direction, wind and seismic.
+func (p *parser) parseReverses(n *yaml.Node) error {
+	if n.Kind != yaml.SequenceNode {
+		return p.errAt(n, "load.reverses", "want a list, e.g. [wind] or [wind, seismic]", "")
+	}
+	r := &p.job.Load.Reverses
+	for i, c := range n.Content {
+		path := fmt.Sprintf("load.reverses[%d]", i)
+		switch c.Value {
+		case "wind":
+			r.W = true
+		case "seismic":
+			r.E = true
+		default:
+			return p.errAt(c, path, fmt.Sprintf("unknown load %q (want wind or seismic)", c.Value),
+				"only wind and seismic forces change sign with their direction; give a load that compresses the member as a negative value")
+		}
 	}
 	return nil
 }

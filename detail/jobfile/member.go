@@ -10,7 +10,7 @@ import (
 	"gaugeline/rules/units"
 )
 
-var memberKeys = []string{"shape", "size", "legs", "thickness", "width", "grade", "fy", "fu", "length", "area", "xbar", "rmin", "gap", "eccentricity", "hole", "slot", "far_end"}
+var memberKeys = append([]string{"shape", "size", "legs", "thickness", "width", "grade", "fy", "fu", "length", "area", "xbar", "rmin", "gap", "eccentricity", "hole", "slot", "far_end"}, memberBucklingKeys...)
 
 func parseShape(s string) (engine.Shape, error) {
 	for _, sh := range engine.Shapes() {
@@ -106,6 +106,9 @@ func (p *parser) parseMember(n *yaml.Node) error {
 		}
 	}
 	if m.Hole, err = p.parsePlyHole(b); err != nil {
+		return err
+	}
+	if err := p.parseMemberBuckling(b); err != nil {
 		return err
 	}
 	return p.parseFarEndKind(b.vals["far_end"])

@@ -283,6 +283,14 @@ func (p *parser) force(n *yaml.Node, path string) (units.Force, error) {
 	return units.Force(v), err
 }
 
+// signedForce reads a service load at path: tension positive, compression
+// negative.
+func (p *parser) signedForce(n *yaml.Node, path string) (units.Force, error) {
+	v, err := p.bounded(n, path, units.DimForce,
+		bound{func(v float64) bool { return math.Abs(v) > float64(maxForce) }, "is absurdly large (over 1,000,000 kip)", "check the unit"})
+	return units.Force(v), err
+}
+
 // stress reads a yield or tensile stress at path.
 func (p *parser) stress(n *yaml.Node, path string) (units.Stress, error) {
 	v, err := p.bounded(n, path, units.DimStress,

@@ -10,7 +10,7 @@ import (
 	"gaugeline/rules/units"
 )
 
-var plateKeys = []string{"kind", "thickness", "grade", "fy", "fu", "width", "edge", "length", "outline", "clip", "hole", "slot", "count", "gap"}
+var plateKeys = []string{"kind", "thickness", "grade", "fy", "fu", "width", "edge", "length", "outline", "clip", "hole", "slot", "count", "gap", "k", "buckling_length"}
 
 func (p *parser) parsePlate(n *yaml.Node) error {
 	b, err := p.mapping(n, "plate", plateKeys)
@@ -47,6 +47,9 @@ func (p *parser) parsePlate(n *yaml.Node) error {
 		return err
 	}
 	if err := p.parseSplice(b, pl); err != nil {
+		return err
+	}
+	if err := p.parsePlateBuckling(b, pl); err != nil {
 		return err
 	}
 	p.job.Plate = pl
