@@ -432,7 +432,7 @@ func TestBuildGoodJobs(t *testing.T) {
 			if err != nil {
 				t.Fatal(err)
 			}
-			if len(d.Conn.Holes) == 0 || d.Conn.Demand <= 0 || d.Conn.Member.Ag <= 0 {
+			if len(d.Conn.Holes) == 0 || d.Conn.Demand <= 0 && d.Conn.Compression <= 0 || d.Conn.Member.Ag <= 0 {
 				t.Errorf("incomplete design: %+v", d.Conn)
 			}
 		})

@@ -89,6 +89,9 @@ func (d *Design) Summary() [][2]string {
 	if d.Combination != "" {
 		demand += ", " + d.Combination
 	}
+	if c.Demand == 0 && c.Compression > 0 {
+		demand = "no tension: the member only pushes"
+	}
 	rows = append(rows, [2]string{"demand", demand})
 	if c.Compression > 0 {
 		comp := fmt.Sprintf("%s %s (%s)", p.force(c.Compression), d.Job.Units.Labels().Force, c.Method)

@@ -117,6 +117,7 @@ func cautions(d *Design) []string {
 	if cases := d.Conn.Member.Shape.ShearLagCases(); !cases.Has(engine.D31Case1) {
 		c = append(c, shearLagCaution(cases))
 	}
+	c = append(c, compressionCautions(d)...)
 	if d.Conn.Member.Shape.CentredGroup() && d.Conn.Member.Eccentricity == engine.EccentricityProvided {
 		ed := d.Conn.Edition
 		c = append(c, "Eccentric bolt group ("+ed.Clause("J1.7")+", provided for): member.combined checks the bar by "+ed.Clause("H1.2")+
@@ -338,3 +339,56 @@ func spliceCaution(pl *engine.Plate) string {
 // the mirror of A's about the joint (engine.SpliceHoles): both groups'
 // extents, both end distances and the gap.
 func SpliceLength(pl *engine.Plate) units.Length { return 2*pl.FreeEdge + pl.Gap }
+
+// compressionCautions say what the compression case assumed, and that a
+// seismic system's own provisions are not checked.
+func compressionCautions(d *Design) []string {
+	var c []string
+	if sys := d.Job.SeismicSystem; sys != "" {
+		c = append(c, "Seismic: the job declares the member part of a seismic force-resisting system ("+sys+"). "+
+			"The seismic provisions (AISC 341: required strengths from the expected strength Ry·Fy of the brace, "+
+			"compactness, connection rotation and the gusset's clearance for a hinge) govern it and are outside this tool's checks.")
+	}
+	conn := &d.Conn
+	st := conn.Member.Strut
+	if conn.Compression <= 0 || st == nil {
+		return c
+	}
+	ed := conn.Edition
+	m := fmt.Sprintf("Compression: the member is checked for the required %s by Chapter E over its length L = member.length with K = %.2f",
+		units.Format(float64(conn.Compression), units.DimForce, ed.System(), units.Job), st.K)
+	if d.Job.Member.Buckling.K == 0 {
+		m += " (member.k not given: 1.0, both ends pinned)"
+	}
+	switch {
+	case st.Kind == engine.StrutAngle:
+		m += "; a single angle by " + ed.Clause("E5") + "'s effective slenderness (ends loaded through the same leg, two or more bolts, no load between the ends), which replaces K·L/r"
+	case st.BuiltUp:
+		m += fmt.Sprintf("; the two pieces by %s's modified slenderness with %d intermediate connectors (%s)", ed.Clause("E6"), st.Connectors, connectorKind(st))
+	}
+	if st.Kind == engine.StrutFlexural && conn.Member.Shape != engine.Flat {
+		m += "; torsional buckling of the doubly symmetric section is not examined"
+	}
+	c = append(c, m+".")
+	if pl := conn.Plate; pl != nil {
+		p := fmt.Sprintf("Compression: the plate is checked by %s over its Whitmore section with K = %.2f and the ", ed.Clause("J4.4"), pl.Buckling.K)
+		if pl.Buckling.Centre {
+			p += "centre length from the Whitmore section to its support"
+		} else {
+			p += "average of the three lengths from the Whitmore section's ends and centre to its support (Thornton's method)"
+		}
+		if d.Job.Plate != nil && d.Job.Plate.Buckling.K == 0 {
+			p += "; plate.k not given: " + fmt.Sprintf("%.2f", pl.Buckling.K) + " (a gusset braced by the members framing into it, from memory; a splice plate between two groups 0.65)"
+		}
+		c = append(c, p+". The bolts bear toward the other bolts and the plate's support, not toward the member end.")
+	}
+	return c
+}
+
+// connectorKind says how the pieces' connectors are made, for a caution.
+func connectorKind(st *engine.Strut) string {
+	if st.SnugTight {
+		return "snug-tight (member.connector)"
+	}
+	return "welded or pretensioned"
+}

@@ -3,6 +3,7 @@ package engine
 import (
 	"fmt"
 	"math"
+	"strings"
 
 	"gaugeline/engine/working"
 	"gaugeline/rules/units"
@@ -260,17 +261,23 @@ func MemberCompression(c *Connection) Result {
 	r := finishFor(c, c.Compression, "member.compression", clause, Rn, c.Edition.CompressionFactor(), vs.list, "compression: "+note)
 	r.Case = "compression"
 	mode, fails := b.mode, b.fails
+	torsional := strings.Contains(mode, "torsional")
 	r.explain = func() Working {
 		lcr, e, fe, fy, fcr, ae := *pLcr, *pE, *pFe, *pFy, *pFcr, *pAe
 		rn := Step{Value: nominal(Rn), Expr: working.Mul(working.Of(fcr), working.Of(ae))}
 		feStep := Step{Value: fe, Expr: working.Div(working.Mul(working.K(math.Pi*math.Pi, "π²"), working.Of(e)), working.Sq(working.Of(lcr)))}
+		formula := []Step{rn, {Value: Value{Sym: "Fe"}, Expr: feStep.Expr}}
+		if torsional {
+			feStep = Step{Value: fe, Then: working.Words(": Fe of E4, (Fey + Fez)/(2H)·[1 − √(1 − 4·Fey·Fez·H/(Fey + Fez)²)]")}
+			formula = formula[:1]
+		}
 		fcrWords := fmt.Sprintf(": 0.658^(Fy/Fe)·Fy, Fy/Fe = %.3f (E3-2)", float64(fy.V/fe.V))
 		if fy.V/fe.V > 2.25 {
 			fcrWords = ": 0.877·Fe, Fy/Fe over 2.25 (E3-3)"
 		}
 		w := Working{
 			Title:   "Compressive strength of the member: " + mode,
-			Formula: []Step{rn, {Value: Value{Sym: "Fe"}, Expr: feStep.Expr}},
+			Formula: formula,
 			Where:   "Lc/r is the governing slenderness (" + mode + "); Fcr is E3-2 or E3-3 with Fe; Ae is E7's effective area",
 			Steps:   []Step{{Value: lcr}, feStep, {Value: fcr, Then: working.Words(fcrWords)}, {Value: ae}, rn},
 		}
@@ -281,4 +288,20 @@ func MemberCompression(c *Connection) Result {
 		return w
 	}
 	return r
+}
+
+// StrutSlenderness is the member's governing slenderness in compression
+// (E5's effective one for a single angle, E6's modified one for two pieces)
+// and, for two pieces back to back, the connectors' spacing a and the
+// least radius of one piece ri; ok is false without a Strut.
+func StrutSlenderness(c *Connection) (lcr float64, a, ri units.Length, ok bool) {
+	col := c.Member.Strut
+	if col == nil || col.L <= 0 {
+		return 0, 0, 0, false
+	}
+	b := memberBuckling(c)
+	if col.BuiltUp {
+		a, ri = col.ConnectorSpacing(), col.Ri
+	}
+	return b.lcr, a, ri, true
 }

@@ -26,9 +26,9 @@ type Result struct {
 	Pass      bool
 	// Factor is the φ and Ω applied: Available = Factor.Available(method,
 	// Nominal). Zero for an interaction (Working.Interaction).
-	Factor  rules.Factor
-	Values  []Value
-	Note    string      // what was checked, e.g. "toe strip of line 1"
+	Factor rules.Factor
+	Values []Value
+	Note   string // what was checked, e.g. "toe strip of line 1"
 	// Case is "compression" for a limit state of the member pushing
 	// (Connection.Compression); "" for the tension case.
 	Case    string

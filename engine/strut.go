@@ -23,7 +23,7 @@ type Strut struct {
 
 	// Single angles (E5): ra about the geometric axis parallel to the
 	// connected leg, rz the least; the legs, connected first.
-	Ra, Rz                units.Length
+	Ra, Rz                 units.Length
 	Connected, Outstanding units.Length
 	// Space is E5(b): a web member of a box or space truss, not E5(a) (an
 	// individual member, or a web member of a planar truss with the

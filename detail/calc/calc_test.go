@@ -789,7 +789,7 @@ func TestFormulasOnThePageGiveTheNominalStrength(t *testing.T) {
 				want = v["Fnv"] * v["Ab"] * v["n"] * v["planes"] * ff
 			case "bolts.slip":
 				want = v["mu"] * v["Du"] * v["hf"] * v["Tb"] * v["ns"] * v["n"]
-			case "member.bearing", "plate.bearing":
+			case "member.bearing", "plate.bearing", "member.bearing.compression", "plate.bearing.compression":
 				for _, b := range x.PerBolt {
 					bearing := v["bearing_coefficient"] * v["d"] * v["t"] * v["Fu"]
 					tearout := v["tearout_coefficient"] * max(float64(b.Lc), 0) * v["t"] * v["Fu"]
@@ -798,6 +798,41 @@ func TestFormulasOnThePageGiveTheNominalStrength(t *testing.T) {
 							filepath.Base(path), x.ID, b.Hole, bearing, tearout, float64(b.Bearing), float64(b.Tearout))
 					}
 					want += float64(b.Rn)
+				}
+			case "member.compression":
+				// Fcr of E3-2 / E3-3 from Fy and Fe, Rn = Fcr·Ae (AISC
+				// 360-16 E3, E7); a flexural mode's Fe = π²E/(Lc/r)²
+				fcr := 0.877 * v["Fe"]
+				if v["Fy"]/v["Fe"] <= 2.25 {
+					fcr = math.Pow(0.658, v["Fy"]/v["Fe"]) * v["Fy"]
+				}
+				if math.Abs(fcr-v["Fcr"]) > 1e-9*fcr {
+					t.Errorf("%s %s: Fcr from Fy and Fe %g, the check %g", filepath.Base(path), x.ID, fcr, v["Fcr"])
+				}
+				if !strings.Contains(x.Note, "torsional") {
+					if fe := math.Pi * math.Pi * v["E"] / (v["Lc_r"] * v["Lc_r"]); math.Abs(fe-v["Fe"]) > 1e-9*fe {
+						t.Errorf("%s %s: π²E/(Lc/r)² %g, the check's Fe %g", filepath.Base(path), x.ID, fe, v["Fe"])
+					}
+				}
+				want = v["Fcr"] * v["Ae"]
+			case "plate.compression":
+				// J4.4: Fy·Ag up to KL/r = 25, else Fcr of E3
+				if klr := v["K"] * v["L"] / v["r"]; math.Abs(klr-v["KL_r"]) > 1e-9*klr {
+					t.Errorf("%s %s: K·L/r %g, the check %g", filepath.Base(path), x.ID, klr, v["KL_r"])
+				}
+				want = v["Fcr"] * v["Ag"]
+				if v["KL_r"] <= 25 {
+					want = v["Fy"] * v["Ag"]
+				}
+			case "bolts.group.compression":
+				mb, pb := byID["member.bearing.compression"], byID["plate.bearing.compression"]
+				rnShear := v["rn_shear"]
+				for i := range c.Holes {
+					rn := min(rnShear, float64(mb.PerBolt[i].Rn))
+					if pb.PerBolt != nil {
+						rn = min(rn, float64(pb.PerBolt[i].Rn))
+					}
+					want += rn
 				}
 			case "bolts.group":
 				// rn,shear is the shear check's Fnv·Ab·ns·ff for one bolt.

@@ -48,6 +48,7 @@ func Check(c *engine.Connection, info MemberInfo) []Finding {
 	fs = append(fs, gageFindings(c, info)...)
 	fs = append(fs, eccentricityFindings(c, info)...)
 	fs = append(fs, slendernessFindings(c, info)...)
+	fs = append(fs, strutFindings(c, info)...)
 	if info.AsBuilt {
 		allowFabrication(fs, info.DiameterTol)
 	}

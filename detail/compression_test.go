@@ -1,0 +1,55 @@
+package detail
+
+// The compression case (issue 15) through the whole path: job file →
+// Build → engine.Check, against published worked examples where one was
+// found (docs/sources/compression.md names what was not).
+
+import (
+	"testing"
+
+	"gaugeline/rules"
+	"gaugeline/rules/units"
+)
+
+// AISC Design Guide 29, Example 5.1: the 2L8x6x1 brace to a 1 in gusset,
+// Pu = 840 kips either way. The gusset buckles over its Whitmore section
+// with K = 0.50 and the graphical length 9.76 in: KL/r = 16.9 ≤ 25, so
+// Pn = Fy·Ag over the example's 20.9 in² (J4-6), φPn = 941, Pn/Ω = 626
+// kips. The bolt group (two end bolts' tearout on the gusset) and both
+// block shears are printed too.
+func TestDesignGuide29Example51(t *testing.T) {
+	const src = "AISC Design Guide 29, Example 5.1"
+	for _, m := range []struct {
+		method                        rules.Method
+		gusset, group, brace, bsPlate float64
+	}{
+		{rules.LRFD, 941, 856, 938, 855},
+		{rules.ASD, 626, 571, 625, 570},
+	} {
+		_, rs := checkExample(t, "../testdata/examples/dg29-5-1.yaml", m.method)
+		pc := rs["plate.compression"]
+		within(t, 0.005, []published{
+			{m.method.String() + " gusset in compression", pc.Available.Kip(), m.gusset, src},
+			{"KL/r", value(t, pc, "KL_r"), 16.9, src},
+			{"r = t/√12", value(t, pc, "r") / float64(units.Inch), 0.289, src},
+			{m.method.String() + " bolt group", rs["bolts.group"].Available.Kip(), m.group, src},
+			{m.method.String() + " brace block shear", rs["member.block-shear"].Available.Kip(), m.brace, src},
+			{m.method.String() + " gusset block shear", rs["plate.block-shear"].Available.Kip(), m.bsPlate, src},
+		})
+		if pc.Case != "compression" || value(t, pc, "Fcr") != value(t, pc, "Fy") {
+			t.Errorf("gusset: case %q, Fcr %g, want the compression case at Fy (KL/r ≤ 25, J4.4(a))", pc.Case, value(t, pc, "Fcr"))
+		}
+	}
+	// The brace in tension: the catalog's L8x6x1 takes its area from the
+	// nominal dimensions, 13.0 in² a piece, 0.8 % under the Design Guide's
+	// 26.2 in² for the pair; yielding, An and rupture follow it (1.2 %).
+	_, rs := checkExample(t, "../testdata/examples/dg29-5-1.yaml", rules.LRFD)
+	rup := rs["member.rupture"]
+	within(t, 0.012, []published{
+		{"brace yielding", rs["member.yield"].Available.Kip(), 849, src},
+		{"An", value(t, rup, "An") / in2, 22.2, src},
+		{"Ae", value(t, rup, "Ae") / in2, 20.2, src},
+		{"brace rupture", rup.Available.Kip(), 879, src},
+	})
+	within(t, 0.005, []published{{"U = 1 − 1.65/18.0", value(t, rup, "U"), 0.908, src}})
+}
