@@ -43,9 +43,17 @@ func BucklingLengths(c *Connection) (l [3]units.Length, ok bool) {
 	if p.Outline == nil {
 		return l, false
 	}
-	ys := [3]units.Length{w.YLo, (w.YLo + w.YHi) / 2, w.YHi}
+	// the ends taken a hair inside: where the section is clipped its end
+	// lies on the outline, and a ray along it would miss the back edge
+	in := min(units.Length(0.01), (w.YHi-w.YLo)/4)
+	ys := [3]units.Length{w.YLo + in, (w.YLo + w.YHi) / 2, w.YHi - in}
 	for i, y := range ys {
 		l[i] = w.X - p.EdgeAlong(w.X, y, false, -1)
+	}
+	for i := range l {
+		if math.IsInf(float64(l[i]), 0) || math.IsNaN(float64(l[i])) {
+			return l, false
+		}
 	}
 	return l, true
 }
@@ -59,7 +67,7 @@ func BucklingLengths(c *Connection) (l [3]units.Length, ok bool) {
 func PlateCompression(c *Connection) Result {
 	p := c.Plate
 	w := WhitmoreSection(c)
-	ls, _ := BucklingLengths(c)
+	ls, known := BucklingLengths(c)
 	L := (ls[0] + ls[1] + ls[2]) / 3
 	if p.Buckling.Centre {
 		L = ls[1]
@@ -78,6 +86,9 @@ func PlateCompression(c *Connection) Result {
 		how = "K·L/r over 25: Fcr·Ag by Chapter E (J4.4(b))"
 	}
 	Rn := Fcr.Times(Ag)
+	if !known { // the plate's back edge is not known (the job file asks for it)
+		Rn, how = 0, "not checked: the plate's back edge is not known (plate.length or plate.outline)"
+	}
 	vs := newValues(12)
 	for i, name := range []string{"l1", "l2", "l3"} {
 		vs.add(Value{Name: name, V: float64(ls[i]), Dim: units.DimLength, What: []string{"from the Whitmore section's low end", "from its centre", "from its high end"}[i]})

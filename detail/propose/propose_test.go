@@ -79,15 +79,28 @@ func drawProposeJobOf(t *rapid.T, shapes []string, fixGage bool) string {
 		}
 		return fmt.Sprintf("%g kN", 5*kip) // about 4.45 kN per kip
 	}
+	// a member that pushes too (load reversal): then its length and the
+	// gusset's back edge (plate.length) are given
+	pushes := shape != "flat" && rapid.IntRange(0, 3).Draw(t, "pushes") == 0 // a flat bar in compression is too slender to say much
 	w("load:")
 	if rapid.IntRange(0, 3).Draw(t, "service") == 0 {
 		w("  dead: %s", force(float64(rapid.IntRange(5, 30).Draw(t, "dead"))))
 		w("  live: %s", force(float64(rapid.IntRange(10, 80).Draw(t, "live"))))
+		if pushes {
+			w("  wind: %s", force(float64(rapid.IntRange(20, 120).Draw(t, "wind"))))
+			w("  reverses: [wind]")
+		}
 	} else {
 		w("  required: %s", force(float64(rapid.IntRange(10, 160).Draw(t, "required"))))
+		if pushes {
+			w("  compression: %s", force(float64(rapid.IntRange(5, 80).Draw(t, "compression"))))
+		}
 	}
 	w("member:")
 	w("  shape: %s", shape)
+	if pushes {
+		w("  length: %s", in(map[bool]float64{true: 72, false: 1800}[us]))
+	}
 	if shape == "flat" {
 		if us {
 			w("  width: %s", in(float64(rapid.IntRange(8, 16).Draw(t, "width2"))/2))
@@ -123,7 +136,8 @@ func drawProposeJobOf(t *rapid.T, shapes []string, fixGage bool) string {
 	thickLine := ""
 	if rapid.IntRange(0, 4).Draw(t, "noPlate") > 0 {
 		w("plate:")
-		w("  kind: %s", rapid.SampledFrom([]string{"gusset", "splice"}).Draw(t, "kind"))
+		kind := rapid.SampledFrom([]string{"gusset", "splice"}).Draw(t, "kind")
+		w("  kind: %s", kind)
 		tps := []float64{3.0 / 8, 1.0 / 2, 5.0 / 8, 3.0 / 4}
 		if !us {
 			tps = []float64{10, 12, 16, 20}
@@ -139,6 +153,9 @@ func drawProposeJobOf(t *rapid.T, shapes []string, fixGage bool) string {
 			pw = []float64{200, 250, 300, 400}
 		}
 		w("  width: %s", in(rapid.SampledFrom(pw).Draw(t, "plateWidth")))
+		if pushes && kind == "gusset" {
+			w("  length: %s", in(map[bool]float64{true: 30, false: 750}[us]))
+		}
 		if rapid.IntRange(0, 3).Draw(t, "edgeGiven") == 0 {
 			w("  edge: %s", in(map[bool]float64{true: 1.5, false: 40}[us]))
 		}
