@@ -171,8 +171,11 @@ func demoWrite(r *detail.Report, jobYAML []byte, how, dir string, out io.Writer)
 	if err := fileset.Write(dir, fileset.Set{Name: mark, Stamp: d.Job.Stamp, Files: files}); err != nil {
 		return err
 	}
-	fmt.Fprintf(out, "%s  %s %s, demand %.1f %s\n", mark, d.Conn.Member.Shape, d.Info.Designation,
-		d.Job.Units.ToJob(float64(d.Conn.Demand), units.DimForce), d.Job.Units.Labels().Force)
+	demand := fmt.Sprintf("demand %.1f %s", d.Job.Units.ToJob(float64(d.Conn.Demand), units.DimForce), d.Job.Units.Labels().Force)
+	if c := d.Conn.Compression; c > 0 {
+		demand += fmt.Sprintf(" tension, %.1f %s compression", d.Job.Units.ToJob(float64(c), units.DimForce), d.Job.Units.Labels().Force)
+	}
+	fmt.Fprintf(out, "%s  %s %s, %s\n", mark, d.Conn.Member.Shape, d.Info.Designation, demand)
 	fmt.Fprintf(out, "  %s\n", how)
 	fmt.Fprintf(out, "  check    %s, %s\n", strings.ToUpper(r.Verdict()), r.VerdictReason())
 	names := make([]string, len(files))

@@ -904,6 +904,12 @@ func (l sheetLayout) titleBlock(s *Sheet, r *detail.Report, top float64) {
 			detail.BoltSize(c.Bolt.D, l.sys), c.Bolt.Grade.Name, c.Bolt.Threads, c.Bolt.Joint, detail.HoleKinds(c))},
 	)
 	fields = append(fields, farEndFields(r)...)
+	if c.Compression > 0 {
+		// both cases: a number on the sheet is of one or the other
+		force := func(f units.Force) string { return units.Format(float64(f), units.DimForce, l.sys, units.People) }
+		fields = append(fields, [2]string{"LOAD CASES", fmt.Sprintf("TENSION %s, COMPRESSION %s (%s)",
+			force(c.Demand), force(c.Compression), strings.ToUpper(c.Method.String()))})
+	}
 	fields = append(fields,
 		[2]string{"STANDARD", fmt.Sprintf("AISC %s %s", strings.TrimPrefix(c.Edition.Name(), "aisc"), strings.ToUpper(c.Method.String()))},
 		[2]string{"GOVERNING", fmt.Sprintf("%s (%s) ratio %s - %s", g.ID, g.Clause, detail.RatioText(g.Ratio), verdict)},
