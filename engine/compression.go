@@ -265,7 +265,8 @@ func MemberCompression(c *Connection) Result {
 	r.explain = func() Working {
 		lcr, e, fe, fy, fcr, ae := *pLcr, *pE, *pFe, *pFy, *pFcr, *pAe
 		rn := Step{Value: nominal(Rn), Expr: working.Mul(working.Of(fcr), working.Of(ae))}
-		feStep := Step{Value: fe, Expr: working.Div(working.Mul(working.K(math.Pi*math.Pi, "π²"), working.Of(e)), working.Sq(working.Of(lcr)))}
+		paren := Value{Sym: "(" + lcr.Symbol() + ")", V: lcr.V} // π²E/(Lc/r)², not π²E/Lc/r²
+		feStep := Step{Value: fe, Expr: working.Div(working.Mul(working.K(math.Pi*math.Pi, "π²"), working.Of(e)), working.Sq(working.Of(paren)))}
 		formula := []Step{rn, {Value: Value{Sym: "Fe"}, Expr: feStep.Expr}}
 		if torsional {
 			feStep = Step{Value: fe, Then: working.Words(": Fe of E4, (Fey + Fez)/(2H)·[1 − √(1 − 4·Fey·Fez·H/(Fey + Fez)²)]")}
