@@ -378,7 +378,7 @@ func compressionCautions(d *Design) []string {
 			p += "average of the three lengths from the Whitmore section's ends and centre to its support (Thornton's method)"
 		}
 		if d.Job.Plate != nil && d.Job.Plate.Buckling.K == 0 {
-			p += "; plate.k not given: " + fmt.Sprintf("%.2f", pl.Buckling.K) + " (a gusset braced by the members framing into it, from memory; a splice plate between two groups 0.65)"
+			p += "; plate.k not given: " + fmt.Sprintf("%.2f", pl.Buckling.K) + " (a gusset: AISC Design Guide 29 after Gross's 1990 tests, for a gusset supported on both edges; a splice plate between two groups: 0.65, from memory)"
 		}
 		c = append(c, p+". The bolts bear toward the other bolts and the plate's support, not toward the member end.")
 	}

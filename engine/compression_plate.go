@@ -18,10 +18,11 @@ type PlateBuckling struct {
 }
 
 // DefaultGussetK and DefaultSpliceK are the effective length factors taken
-// when the job gives none: 0.5 for a gusset braced by the members framing
-// into it (Thornton's method with K = 0.5, as the AISC Manual's bracing
-// connection examples use it; from memory), 0.65 for a splice plate
-// between two members' bolt groups (a fixed-fixed strip; from memory).
+// when the job gives none: 0.50 for a gusset, as AISC Design Guide 29
+// (Example 5.1) takes it after Gross's (1990) full-scale tests of bracing
+// connections, which asks for the gusset supported on both edges; 0.65
+// for a splice plate between two members' bolt groups (a fixed-fixed
+// strip; from memory).
 const (
 	DefaultGussetK = 0.5
 	DefaultSpliceK = 0.65
