@@ -201,7 +201,7 @@ func diametersHint(ed *rules.Edition) string {
 
 // boltName writes a bolt diameter as a shop says it: "3/4 in", "M20".
 func boltName(d units.Length, sys units.System) string {
-	if sys == units.SI {
+	if sys == units.SI || Metric(d) {
 		return fmt.Sprintf("M%g", d.Mm())
 	}
 	return units.FormatJob(d, units.US)

@@ -69,10 +69,15 @@ func (p *parser) parseBolt(b *block, bs *BoltSpec) error {
 			return p.errAt(v, "bolts.diameter", "is not a bolt diameter", "bolt diameters run from 1/2 in (M12) to 1-1/2 in (M36)")
 		}
 	}
+	var sp rules.BoltSpelling
 	if b.has("grade") {
 		if bs.Grade, err = p.word(b.vals["grade"], "bolts.grade"); err != nil {
 			return err
 		}
+		if sp, err = rules.ParseBoltSpelling(bs.Grade); err != nil {
+			return p.errAt(b.vals["grade"], "bolts.grade", err.Error(), "e.g. A325, A325-N, A325-X, A325-SC, F3125 A490, A325M")
+		}
+		bs.Grade = sp.Grade
 	}
 	if b.has("threads") {
 		if bs.Threads, err = enum(p, b.vals["threads"], "bolts.threads", rules.ParseThreads); err != nil {
@@ -83,6 +88,9 @@ func (p *parser) parseBolt(b *block, bs *BoltSpec) error {
 		if bs.Joint, err = enum(p, b.vals["joint"], "bolts.joint", rules.ParseJoint); err != nil {
 			return err
 		}
+	}
+	if err := p.impliedByGrade(b, bs, sp); err != nil {
+		return err
 	}
 	if b.has("surface") {
 		if bs.Surface, err = enum(p, b.vals["surface"], "bolts.surface", rules.ParseSlipClass); err != nil {
@@ -99,6 +107,28 @@ func (p *parser) parseBolt(b *block, bs *BoltSpec) error {
 			err.(*InputError).Hint = "fillers counts the fillers (0, 1 or 2+); give their thickness as filler_thickness"
 			return err
 		}
+	}
+	return nil
+}
+
+// impliedByGrade fills in the threads and the joint a grade's suffix
+// implies (A325-X: threads excluded; A325-SC: slip-critical) and refuses
+// a bolts.threads or bolts.joint that says otherwise.
+func (p *parser) impliedByGrade(b *block, bs *BoltSpec, sp rules.BoltSpelling) error {
+	g := b.vals["grade"]
+	if sp.Threads != nil {
+		if b.has("threads") && bs.Threads != *sp.Threads {
+			return p.errAt(g, "bolts.grade", fmt.Sprintf("%q says the threads are %s, and bolts.threads says %s", g.Value, *sp.Threads, bs.Threads),
+				"give the grade without its suffix, or make bolts.threads agree")
+		}
+		bs.Threads = *sp.Threads
+	}
+	if sp.Joint != nil {
+		if b.has("joint") && bs.Joint != *sp.Joint {
+			return p.errAt(g, "bolts.grade", fmt.Sprintf("%q says the joint is %s, and bolts.joint says %s", g.Value, *sp.Joint, bs.Joint),
+				"give the grade without its suffix, or make bolts.joint agree")
+		}
+		bs.Joint = *sp.Joint
 	}
 	return nil
 }

@@ -6,6 +6,7 @@ import (
 
 	"go.yaml.in/yaml/v3"
 
+	"gaugeline/rules"
 	"gaugeline/rules/units"
 )
 
@@ -127,11 +128,22 @@ func (p *parser) stockGrades(v *yaml.Node) ([]string, error) {
 	}
 	var gs []string
 	for i, it := range items {
-		g, err := p.word(it, fmt.Sprintf("stock.grades[%d]", i))
+		path := fmt.Sprintf("stock.grades[%d]", i)
+		g, err := p.word(it, path)
 		if err != nil {
 			return nil, err
 		}
-		gs = append(gs, g)
+		// the grade as the trade writes it; a suffix (N, X, SC) says
+		// what bolts.threads and bolts.joint say for every grade tried
+		sp, err := rules.ParseBoltSpelling(g)
+		if err != nil {
+			return nil, p.errAt(it, path, err.Error(), "e.g. A325, F3125 A490, A325M")
+		}
+		if sp.Threads != nil || sp.Joint != nil {
+			return nil, p.errAt(it, path, fmt.Sprintf("%q carries a suffix: the stock lists grades", g),
+				"list the grade alone (A325) and give bolts.threads or bolts.joint")
+		}
+		gs = append(gs, sp.Grade)
 	}
 	return gs, nil
 }
