@@ -3,11 +3,14 @@ package measured
 import (
 	"bufio"
 	"bytes"
+	"encoding/csv"
+	"errors"
 	"fmt"
 	"io"
 	"regexp"
 	"strconv"
 	"strings"
+	"unicode/utf8"
 
 	"gaugeline/rules/units"
 )
@@ -36,6 +39,7 @@ var csvColumn = map[string]string{
 	"x": "x", "y": "y",
 	"diameter": "diameter", "dia": "diameter", "diam": "diameter", "d": "diameter", "size": "diameter",
 	"id": "id", "hole": "id", "name": "id", "label": "id", "mark": "id", "holeid": "id", "hole_id": "id", "hole id": "id",
+	"feature": "id", "point": "id", // a measuring machine names its features
 	"radius": "radius", "rad": "radius", "r": "radius",
 }
 
@@ -92,6 +96,8 @@ type csvReader struct {
 	cols  []csvCol // nil until the first row decides
 	delim string   // "" until the first row decides
 	ids   map[string]int
+	// preamble counts the header-block lines before the table.
+	preamble int
 }
 
 // line reads line lineNo of the file: a blank or comment line is skipped,
@@ -105,15 +111,23 @@ func (rd *csvReader) line(lineNo int, line string) error {
 	if line == "" || strings.HasPrefix(line, "#") {
 		return nil
 	}
-	if rd.delim == "" {
-		rd.delim = pickDelimiter(line)
+	delim := rd.delim
+	if delim == "" {
+		delim = pickDelimiter(line)
 	}
-	cells, serr := splitCells(line, rd.delim)
+	cells, serr := splitCells(line, delim)
 	if serr != nil {
 		serr.File, serr.Line = rd.file, lineNo
 		return serr
 	}
 	if rd.cols == nil {
+		if isHeader(cells) && !namesColumns(cells) {
+			// a line of a measuring machine's header block before the
+			// table (part, program, date, operator …): not data
+			rd.preamble++
+			return nil
+		}
+		rd.delim = delim
 		if isHeader(cells) {
 			return rd.header(lineNo, cells)
 		}
@@ -168,6 +182,18 @@ func (rd *csvReader) header(lineNo int, cells []string) error {
 		rd.set.Units = units
 	}
 	return nil
+}
+
+// namesColumns reports whether any cell of a row names a column of
+// csvColumn: a header row does, a measuring machine's header-block line
+// ("Part: BR-1", "Date;2026-12-03") does not.
+func namesColumns(cells []string) bool {
+	for _, c := range cells {
+		if _, _, ok := headerName(c); ok {
+			return true
+		}
+	}
+	return false
 }
 
 // headerName reads a header cell ("x_mm", "Dia", "y (in)"): the column of
@@ -307,13 +333,44 @@ func readCapped(r io.Reader, file string) ([]byte, error) {
 	return data, nil
 }
 
-// splitCells splits a line at delim. A cell that starts with a double or
+// splitCells splits a line at delim with encoding/csv (RFC 4180): a
+// quoted cell may hold the delimiter ("B,3" is one id) and a doubled
+// quote inside it is one quote. A quote not closed on its line, or text
+// after a closing quote, is an error (a cut-off cell or a row broken
+// across lines is not data). A quote inside an unquoted cell is kept: it
+// is an inch or foot mark (1-1/2").
+func splitCells(line, delim string) ([]string, *Error) {
+	read := func(lazy bool) ([]string, error) {
+		r := csv.NewReader(strings.NewReader(line))
+		r.Comma, _ = utf8.DecodeRuneInString(delim)
+		r.FieldsPerRecord, r.LazyQuotes, r.TrimLeadingSpace = -1, lazy, true
+		return r.Read()
+	}
+	if singleQuoted(line, delim) {
+		return splitQuoted(line, delim) // not RFC 4180: our own reader takes it
+	}
+	cells, err := read(false)
+	if errors.Is(err, csv.ErrBareQuote) {
+		cells, err = read(true)
+	}
+	if err != nil {
+		// not strict RFC 4180 (a space after a closing quote, a quote
+		// left open): our own reader takes it, or says which cell is wrong
+		return splitQuoted(line, delim)
+	}
+	for i := range cells {
+		cells[i] = strings.TrimSpace(cells[i])
+	}
+	return cells, nil
+}
+
+// splitQuoted splits a line at delim by hand. A cell that starts with a double or
 // single quote is quoted (RFC 4180): it runs to the matching quote, may
 // hold the delimiter, and a doubled quote inside it is one quote. A quote
 // not closed on its line is an error, as is text after a closing quote
 // (a cut-off cell or a row broken across lines is not data). A quote
 // inside an unquoted cell is kept: it is an inch or foot mark.
-func splitCells(line, delim string) ([]string, *Error) {
+func splitQuoted(line, delim string) ([]string, *Error) {
 	var cells []string
 	for col := 1; ; col++ {
 		rest := strings.TrimLeft(line, " \t")
@@ -355,6 +412,17 @@ func splitCells(line, delim string) ([]string, *Error) {
 		}
 		line = after[len(delim):]
 	}
+}
+
+// singleQuoted reports whether a cell of the line starts with a single
+// quote, which some exports quote with.
+func singleQuoted(line, delim string) bool {
+	for _, c := range strings.Split(line, delim) {
+		if strings.HasPrefix(strings.TrimLeft(c, " \t"), "'") {
+			return true
+		}
+	}
+	return false
 }
 
 // pickDelimiter: a semicolon or a tab where there is one (the comma is

@@ -128,3 +128,30 @@ func TestReadCSVCaps(t *testing.T) {
 		t.Errorf("huge file: %v", err)
 	}
 }
+
+// A measuring machine's export: a header block of key/value lines before
+// the table, a semicolon table with decimal commas and quoted ids that
+// hold the delimiter (the layout of common CMM exports; common practice,
+// no source: the values are the test's own input, read back as written).
+func TestReadCSVMachineExport(t *testing.T) {
+	src := "Part: BR-12 member\nProgram;gl-check-3\nOperator: QA\nDate;2026-12-03\n\n" +
+		"Feature;X_mm;Y_mm;Diameter_mm\n\"H1;near\";38,10;63,50;20,64\n\"H2, far\";114,30;63,50;20,60\n"
+	set, err := ReadCSV(strings.NewReader(src), "cmm.csv", Inches)
+	if err != nil {
+		t.Fatal(err)
+	}
+	want := []Hole{{ID: "H1;near", X: 38.1, Y: 63.5, Width: 20.64}, {ID: "H2, far", X: 114.3, Y: 63.5, Width: 20.6}}
+	if len(set.Holes) != len(want) {
+		t.Fatalf("%d holes, want %d", len(set.Holes), len(want))
+	}
+	for i, h := range set.Holes {
+		w := want[i]
+		if h.ID != w.ID || math.Abs(h.X-w.X) > 1e-9 || math.Abs(h.Y-w.Y) > 1e-9 || math.Abs(h.Width-w.Width) > 1e-9 {
+			t.Errorf("hole %d: %+v, want %+v", i, h, w)
+		}
+	}
+	// a header block with no table after it is still an empty file
+	if _, err := ReadCSV(strings.NewReader("Part: BR-12\nDate: today\n"), "cmm.csv", Inches); err == nil {
+		t.Error("a header block alone read as holes")
+	}
+}
