@@ -2,8 +2,8 @@ package detail
 
 import (
 	"fmt"
-	"math"
 	"io"
+	"math"
 	"strings"
 	"text/tabwriter"
 

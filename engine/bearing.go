@@ -97,7 +97,7 @@ func bearingResult(c *Connection, bp bearingPart, ply func(*Hole) HoleShape, t u
 	}
 	what := "thickness"
 	if bp.member {
-		what = "thickness bearing (both angles of a pair)"
+		what = "thickness of the member bearing"
 	}
 	vs := newValues(7)
 	pD := vs.add(Value{Name: "d", V: float64(c.Bolt.D), Dim: units.DimLength, What: "bolt diameter"})

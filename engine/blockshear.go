@@ -119,7 +119,7 @@ func blockResult(c *Connection, id string, blocks []block, p blockPart) Result {
 	const Ubs = 1.0
 	what, title := "thickness", "Block shear of the plate, tearing out toward its free edge"
 	if p.name == "member" {
-		what, title = "thickness (both angles of a pair)", "Block shear of the member, tearing out toward the member end"
+		what, title = "thickness of the member", "Block shear of the member, tearing out toward the member end"
 	}
 	vs := newValues(11)
 	pAgv := vs.add(Value{Name: "Agv", V: float64(b.Agv), Dim: units.DimArea, What: "gross area in shear"})

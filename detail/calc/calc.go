@@ -26,6 +26,7 @@ import (
 
 	"gaugeline/detail"
 	"gaugeline/detail/bom"
+	"gaugeline/detail/jobfile"
 	"gaugeline/detail/sheet"
 	"gaugeline/engine"
 	"gaugeline/rules"
@@ -127,25 +128,28 @@ type summaryRow struct {
 
 type page struct {
 	Mark, Subtitle, File string
-	Stamp                string // Job.Stamp, in a <meta> element; "" for none
-	Pass                 bool
-	Verdict, Governing   string
-	Failures             []string
-	Caution              string
-	Assumptions          []string
-	Job, Load            []row
-	Holes                table
-	Schedule             table
-	BOM, Bolts           table    // bill of material and bolt list (with member.length)
-	BoltNotes            []string // the bolt list's washer and faying notes, and where its lengths come from
-	Drawing              template.HTML
-	DrawingNote          string
-	Summary              []summaryRow
-	ForceUnit            string
-	Limits               []limitSection
-	Findings             table
-	DemandSymbol         string
-	AvailableSymbol      string
+	// Running is the printed page's running header: the mark, the
+	// drawing and revision where the job's project block gives them.
+	Running            string
+	Stamp              string // Job.Stamp, in a <meta> element; "" for none
+	Pass               bool
+	Verdict, Governing string
+	Failures           []string
+	Caution            string
+	Assumptions        []string
+	Job, Load          []row
+	Holes              table
+	Schedule           table
+	BOM, Bolts         table    // bill of material and bolt list (with member.length)
+	BoltNotes          []string // the bolt list's washer and faying notes, and where its lengths come from
+	Drawing            template.HTML
+	DrawingNote        string
+	Summary            []summaryRow
+	ForceUnit          string
+	Limits             []limitSection
+	Findings           table
+	DemandSymbol       string
+	AvailableSymbol    string
 	// Far is the far end's part of the report where it has a connection of
 	// its own (member.far_end with plate and bolts); nil else, and the
 	// page reads as before.
@@ -163,12 +167,26 @@ type endPart struct {
 	Findings table
 }
 
+// running is the printed report's running header: "BR-12 · drawing S-501
+// · revision B · calculation report".
+func running(j *jobfile.Job) string {
+	parts := []string{j.Mark}
+	if pr := j.Project; pr.Drawing != "" {
+		parts = append(parts, "drawing "+pr.Drawing)
+	}
+	if pr := j.Project; pr.Revision != "" {
+		parts = append(parts, "revision "+pr.Revision)
+	}
+	return strings.Join(append(parts, "calculation report"), " · ")
+}
+
 func newPage(r *detail.Report, s *sheet.Sheet) page {
 	d := r.Design
 	c := &d.Conn
 	f := fmtr{d.Job.Units}
 	p := page{
 		Mark:            d.Job.Mark,
+		Running:         running(d.Job),
 		Subtitle:        fmt.Sprintf("Bolted tension connection · AISC %s · %s · %s units", strings.TrimPrefix(c.Edition.Name(), "aisc"), strings.ToUpper(c.Method.String()), strings.ToUpper(d.Job.Units.String())),
 		File:            filepath.Base(d.Job.File),
 		Stamp:           d.Job.Stamp,
@@ -455,6 +473,12 @@ func jobRows(d *detail.Design, f fmtr) (job, load []row) {
 		sym = "Ra (service)"
 	}
 	load = append(load, row{"Demand " + sym, f.force(c.Demand)})
+	if c.Compression > 0 {
+		load = append(load, row{"Demand in compression " + sym, f.force(c.Compression)})
+		if d.CompressionCombination != "" {
+			load = append(load, row{"Governing combination in compression", d.CompressionCombination})
+		}
+	}
 	return job, load
 }
 
@@ -739,7 +763,21 @@ footer { margin-top: 30px; font-size: 12px; color: var(--muted); border-top: 1px
   figure svg { min-width: 0 !important; max-width: none !important; } figure { overflow: visible; }
   h2 { break-after: avoid; }
 }
-@page { margin: 14mm; }
+@page {
+  margin: 16mm 14mm 18mm 14mm;
+  @top-left { content: "{{.Running}}"; font: 8.5pt "DejaVu Sans", sans-serif; color: #59636e; }
+  @top-right { content: "gaugeline"; font: 8.5pt "DejaVu Sans", sans-serif; color: #59636e; }
+  @bottom-left { content: "Results must be checked against the governing code and approved by the engineer of record."; font: 7.5pt "DejaVu Sans", sans-serif; color: #59636e; }
+  @bottom-right { content: "page " counter(page) " of " counter(pages); font: 8.5pt "DejaVu Sans", sans-serif; color: #1b1f24; }
+}
+@media print {
+  /* a limit-state card may run onto the next page (holding each whole
+     leaves pages half empty); its parts stay whole, its head with them */
+  section.limit { break-inside: auto; }
+  .eqs, table.res, figure, .verdict, .signoff, tr, .eq { break-inside: avoid; }
+  h2, h3, .lshead, .limit .id, .label { break-after: avoid; }
+  section.limit > .cols { break-before: avoid; }
+}
 </style>
 </head>
 <body>

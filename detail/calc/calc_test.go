@@ -1081,3 +1081,26 @@ func TestReportHasTheBillOfMaterial(t *testing.T) {
 		})
 	}
 }
+
+// The printed report numbers its pages and runs a header with the mark
+// (and the project block's drawing and revision where the job gives
+// them), in CSS page margin boxes (CSS Paged Media, @page margin boxes;
+// common practice, no source); a limit-state card may break between its
+// parts, its head kept with them.
+func TestPrintedPagesAreNumbered(t *testing.T) {
+	r := check(t, "../../testdata/jobs/us-brace-reversal.yaml")
+	r.Design.Job.Project.Drawing, r.Design.Job.Project.Revision = "S-501", "B"
+	_, page := render(t, r)
+	css := string(page)
+	for _, want := range []string{
+		`counter(page) " of " counter(pages)`,
+		"@top-left",
+		"BR-C1 · drawing S-501 · revision B · calculation report",
+		"engineer of record",
+		"section.limit > .cols { break-before: avoid; }",
+	} {
+		if !strings.Contains(css, want) {
+			t.Errorf("the page's print rules lack %q", want)
+		}
+	}
+}
