@@ -37,6 +37,8 @@ func runCheck(_ context.Context, _ *rootOptions, co checkOptions, path string, o
 	if err != nil {
 		return err
 	}
+	// the JSON names the build and the input it was made from
+	r.Design.Job.Stamp = stampFor("check", r.Design.Job)
 	if err := writeFormat(out, co.format, r.JSON, r.WriteMarkdown, r.WriteText); err != nil {
 		return err
 	}

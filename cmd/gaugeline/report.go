@@ -42,6 +42,7 @@ func runReport(_ context.Context, o *rootOptions, ro reportOptions, path string,
 	if err != nil {
 		return err
 	}
+	r.Design.Job.Stamp = stampFor("check", r.Design.Job) // the page names the build and the input
 	page, err := calc.HTML(r)
 	if err != nil {
 		return err

@@ -874,7 +874,7 @@ footer { margin-top: 30px; font-size: 12px; color: var(--muted); border-top: 1px
 <p class="note">For the engineer of record: this report is an aid to the design, not the design. Check it against the governing code and the project's own requirements before signing.</p>
 <div class="signoff"><div>Prepared by, date</div><div>Checked by, date</div><div>Engineer of record, seal and date</div></div>
 
-<footer>Produced by gaugeline from {{.File}}. {{.Caution}}</footer>
+<footer>Produced by gaugeline from {{.File}}{{if .Stamp}} ({{.Stamp}}){{end}}. {{.Caution}}</footer>
 </body>
 </html>
 `
