@@ -73,6 +73,7 @@ type Config struct {
 	Out     string // output directory, existing and locked
 	Propose bool
 	Sheets  bool
+	CAM     dxfout.CAMFormat // with Sheets: the CAM files' DXF versions
 	Workers int
 	// Tool names the build in each set's stamp (fileset.Stamp).
 	Tool string
@@ -392,7 +393,7 @@ func jobFiles(cfg Config, job *jobfile.Job, row *Row) ([]fileset.File, error) {
 	if err != nil {
 		return nil, err
 	}
-	dxf, err := dxfout.Files(s)
+	dxf, err := dxfout.FilesAs(s, cfg.CAM)
 	if err != nil {
 		return nil, err
 	}

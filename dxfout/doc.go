@@ -16,6 +16,11 @@
 // and holes only: the closed outer contour as an LWPOLYLINE, round holes
 // as CIRCLEs, slots as closed LWPOLYLINEs with bulge arcs.
 //
+// With CAMWithR12 (--dxf r12) each CAM file also gets an R12 (AC1009)
+// variant, MARK-PART.cam.r12.dxf, written by r12.go (the library writes
+// nothing older than AutoCAD 2000): POLYLINE, VERTEX and SEQEND for closed
+// outlines, the units in a 999 comment, the part's label on layer mark.
+//
 // Nothing is shared between drawings: the library's drawing.New hands
 // every drawing its package-level layer "0", line types and text style
 // and writes into them, so each pen builds that skeleton from the

@@ -1,6 +1,7 @@
 package dxfout
 
 import (
+	"fmt"
 	"strings"
 
 	"github.com/yofu/dxf/block"
@@ -23,16 +24,48 @@ type File = fileset.File
 
 // Files draws the cut sheet MARK.dxf and, unless the sheet is not for
 // fabrication, the CAM file MARK-PART.cam.dxf of each part, in that order,
-// each starting with the sheet's stamp (see Comment). Drawing cannot fail
-// today; the error is there for a writer that can.
-func Files(s *sheet.Sheet) ([]File, error) {
+// each starting with the sheet's stamp (see Comment): FilesAs with CAM2000.
+func Files(s *sheet.Sheet) ([]File, error) { return FilesAs(s, CAM2000) }
+
+// CAMFormat is which DXF versions of each CAM file are written.
+type CAMFormat int
+
+const (
+	// CAM2000 is the AutoCAD 2000 (AC1015) file MARK-PART.cam.dxf alone.
+	CAM2000 CAMFormat = iota
+	// CAMWithR12 adds, after each, its R12 (AC1009) variant
+	// MARK-PART.cam.r12.dxf, which also carries the part's label on layer
+	// mark (see CAMR12).
+	CAMWithR12
+)
+
+// ParseCAMFormat reads a --dxf value: "2000" (the default) or "r12".
+func ParseCAMFormat(v string) (CAMFormat, error) {
+	switch strings.ToLower(v) {
+	case "", "2000":
+		return CAM2000, nil
+	case "r12":
+		return CAMWithR12, nil
+	}
+	return 0, fmt.Errorf("--dxf %q: the CAM files are written as 2000 (AutoCAD 2000, the default) or r12 (AutoCAD 2000 and R12 beside it)", v)
+}
+
+// FilesAs draws the cut sheet MARK.dxf and, unless the sheet is not for
+// fabrication, each part's CAM files in format f, in that order, each
+// starting with the sheet's stamp. Drawing cannot fail today; the error is
+// there for a writer that can.
+func FilesAs(s *sheet.Sheet, f CAMFormat) ([]File, error) {
 	out := []File{{Name: s.Mark + ".dxf", Data: drawSheet(s, s.Stamp)}}
 	if s.NotForFabrication {
 		return out, nil
 	}
 	for i := range s.Views {
 		p := &s.Views[i].Part
-		out = append(out, File{Name: s.Mark + "-" + p.Name + ".cam.dxf", Data: drawCAM(p, s.Units, s.Stamp)})
+		name := s.Mark + "-" + p.Name
+		out = append(out, File{Name: name + ".cam.dxf", Data: drawCAM(p, s.Units, s.Stamp)})
+		if f == CAMWithR12 {
+			out = append(out, File{Name: name + R12Ext, Data: drawR12(p, s.Units, s.TextHeight, s.Stamp)})
+		}
 	}
 	return out, nil
 }
@@ -89,6 +122,8 @@ func layerColor(l sheet.Layer) color.ColorNumber {
 		return color.Cyan
 	case sheet.LayerReference:
 		return color.Grey128
+	case sheet.LayerMark:
+		return color.Green
 	}
 	return color.White
 }

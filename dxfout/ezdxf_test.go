@@ -36,6 +36,9 @@ for path in sys.argv[1:]:
         elif e.dxftype() == "LWPOLYLINE":
             d["closed"] = bool(e.closed)
             d["points"] = [[p[0], p[1], p[4]] for p in e.get_points("xyseb")]
+        elif e.dxftype() == "POLYLINE":
+            d["closed"] = bool(e.is_closed)
+            d["points"] = [[v.dxf.location.x, v.dxf.location.y, v.dxf.bulge] for v in e.vertices]
         elif e.dxftype() == "TEXT":
             d["text"] = e.dxf.text
         ents.append(d)
@@ -45,6 +48,7 @@ for path in sys.argv[1:]:
     geom = bbox.extents(e for e in msp if e.dxftype() not in ("TEXT", "MTEXT"))
     out.append({
         "path": path,
+        "version": doc.dxfversion,
         "errors": [str(x.message) for x in auditor.errors],
         "fixes": [str(x.message) for x in auditor.fixes],
         "insunits": doc.header.get("$INSUNITS"),
@@ -60,6 +64,7 @@ json.dump(out, sys.stdout)
 
 type ezFile struct {
 	Path        string     `json:"path"`
+	Version     string     `json:"version"`
 	Errors      []string   `json:"errors"`
 	Fixes       []string   `json:"fixes"`
 	Insunits    int        `json:"insunits"`
@@ -198,21 +203,11 @@ func TestEzdxfReadsBack(t *testing.T) {
 			if e.Layer != "holes" {
 				continue
 			}
-			switch e.Type {
-			case "CIRCLE":
-				holes = append(holes, wantHole{x: e.X, y: e.Y, width: 2 * e.R})
-			case "LWPOLYLINE":
-				p := e.Points
-				if len(p) != 4 || !e.Closed {
-					t.Fatalf("%s: slot of %d points, closed %v", name, len(p), e.Closed)
-				}
-				side := math.Hypot(p[1][0]-p[0][0], p[1][1]-p[0][1])
-				width := math.Hypot(p[2][0]-p[1][0], p[2][1]-p[1][1])
-				holes = append(holes, wantHole{x: (p[0][0] + p[2][0]) / 2, y: (p[0][1] + p[2][1]) / 2,
-					width: width, length: side + width, alongY: p[1][0] == p[0][0]})
-			default:
-				t.Errorf("%s: a %s on the holes layer", name, e.Type)
+			h, err := ezHole(e.Type, e.X, e.Y, e.R, e.Points, e.Closed)
+			if err != nil {
+				t.Fatalf("%s: %v", name, err)
 			}
+			holes = append(holes, h)
 		}
 		sameHoles(t, name, holes, w.holes)
 	}
@@ -234,6 +229,25 @@ func TestEzdxfReadsBack(t *testing.T) {
 			}
 		}
 	})
+}
+
+// ezHole is the hole an entity of ezdxf's on layer holes draws: a CIRCLE
+// (centre x, y, radius r), or a slot as a closed polyline (LWPOLYLINE,
+// or R12's POLYLINE) of four points, two straight sides and two ends.
+func ezHole(kind string, x, y, r float64, p [][3]float64, closed bool) (wantHole, error) {
+	switch kind {
+	case "CIRCLE":
+		return wantHole{x: x, y: y, width: 2 * r}, nil
+	case "LWPOLYLINE", "POLYLINE":
+		if len(p) != 4 || !closed {
+			return wantHole{}, fmt.Errorf("slot of %d points, closed %v", len(p), closed)
+		}
+		side := math.Hypot(p[1][0]-p[0][0], p[1][1]-p[0][1])
+		width := math.Hypot(p[2][0]-p[1][0], p[2][1]-p[1][1])
+		return wantHole{x: (p[0][0] + p[2][0]) / 2, y: (p[0][1] + p[2][1]) / 2,
+			width: width, length: side + width, alongY: p[1][0] == p[0][0]}, nil
+	}
+	return wantHole{}, fmt.Errorf("a %s on the holes layer", kind)
 }
 
 // outside reports whether box (xmin, ymin, xmax, ymax) reaches more than

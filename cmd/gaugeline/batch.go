@@ -10,7 +10,8 @@ type batchOptions struct {
 	dir     string
 	propose bool
 	sheets  bool
-	workers int // 0: one per CPU
+	dxf     string // --dxf: CAM file versions (dxfout.ParseCAMFormat)
+	workers int    // 0: one per CPU
 }
 
 func newBatchCmd(o *rootOptions) *cobra.Command {
@@ -37,6 +38,7 @@ func newBatchCmd(o *rootOptions) *cobra.Command {
 	cmd.Flags().StringVarP(&bo.dir, "output", "o", "", "directory to write the results into (created if missing)")
 	cmd.Flags().BoolVar(&bo.propose, "propose", false, "propose a layout for each job instead of checking the one it gives")
 	cmd.Flags().BoolVar(&bo.sheets, "sheets", false, "also write the DXF cut sheet and CAM files of each passing job")
+	cmd.Flags().StringVar(&bo.dxf, "dxf", "2000", dxfFlagUsage+"; with --sheets")
 	cmd.Flags().IntVarP(&bo.workers, "jobs", "j", 0, "jobs to run at once (default: one per CPU)")
 	return cmd
 }

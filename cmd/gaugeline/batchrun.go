@@ -14,6 +14,7 @@ import (
 
 	"gaugeline/batch"
 	"gaugeline/detail/jobfile"
+	"gaugeline/dxfout"
 	"gaugeline/fileset"
 )
 
@@ -73,6 +74,13 @@ func runBatch(ctx context.Context, o *rootOptions, bo batchOptions, arg string, 
 	if bo.workers < 0 {
 		return usageError{fmt.Errorf("--jobs: want 1 or more (0: one per CPU), not %d", bo.workers)}
 	}
+	cam, err := dxfout.ParseCAMFormat(bo.dxf)
+	if err != nil {
+		return usageError{err}
+	}
+	if cam != dxfout.CAM2000 && !bo.sheets {
+		return usageError{fmt.Errorf("--dxf %s: CAM files are written with --sheets only", bo.dxf)}
+	}
 	files, err := batch.Inputs(arg)
 	var nl *batch.NotAListError
 	if errors.As(err, &nl) {
@@ -89,7 +97,7 @@ func runBatch(ctx context.Context, o *rootOptions, bo batchOptions, arg string, 
 	if _, set := os.LookupEnv("GOGC"); !set {
 		defer debug.SetGCPercent(debug.SetGCPercent(batchGCPercent))
 	}
-	cfg := batch.Config{Out: bo.dir, Propose: bo.propose, Sheets: bo.sheets, Workers: bo.workers,
+	cfg := batch.Config{Out: bo.dir, Propose: bo.propose, Sheets: bo.sheets, CAM: cam, Workers: bo.workers,
 		Tool: toolVersion(), MaxCandidates: defaultMaxCandidates, LimitError: limitError}
 	if cfg.Workers == 0 {
 		cfg.Workers = runtime.NumCPU()

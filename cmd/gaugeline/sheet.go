@@ -19,6 +19,7 @@ import (
 type sheetOptions struct {
 	dir               string
 	notForFabrication bool
+	dxf               string // --dxf: CAM file versions (dxfout.ParseCAMFormat)
 }
 
 func newSheetCmd(o *rootOptions) *cobra.Command {
@@ -29,6 +30,7 @@ func newSheetCmd(o *rootOptions) *cobra.Command {
 			"piece whole, the bill of material and the bolt list), one geometry-only CAM file per piece\n"+
 			"(MARK-member.cam.dxf, the whole member with both ends' holes; MARK-plate.cam.dxf; MARK-far-plate.cam.dxf\n"+
 			"where the far end has a plate of its own) and the manifest MARK.files. It needs member.length.\n"+
+			"--dxf r12 writes beside each CAM file its R12 (AC1009) variant MARK-PART.cam.r12.dxf, labelled on layer mark.\n"+
 			"The folder is replaced as a whole, never file by file. A failing connection is\n"+
 			"refused (exit 1, nothing written) unless --not-for-fabrication, which writes the cut sheet alone,\n"+
 			"stamped NOT FOR FABRICATION on every view (exit 1 still: the connection fails). Bad input exits 2.",
@@ -39,12 +41,17 @@ func newSheetCmd(o *rootOptions) *cobra.Command {
 	cmd.Flags().StringVarP(&so.dir, "output", "o", "", "directory to write the DXF files into (created if missing)")
 	cmd.Flags().BoolVar(&so.notForFabrication, "not-for-fabrication", false,
 		"write a stamped cut sheet (and no CAM file) even when the connection fails")
+	cmd.Flags().StringVar(&so.dxf, "dxf", "2000", dxfFlagUsage)
 	return cmd
 }
 
 func runSheet(_ context.Context, o *rootOptions, so sheetOptions, path string, out io.Writer) error {
 	if so.dir == "" {
 		return usageError{errors.New("-o DIR is required")}
+	}
+	cam, err := dxfout.ParseCAMFormat(so.dxf)
+	if err != nil {
+		return usageError{err}
 	}
 	r, err := detail.CheckFile(path)
 	if err != nil {
@@ -61,7 +68,7 @@ func runSheet(_ context.Context, o *rootOptions, so sheetOptions, path string, o
 	if err != nil {
 		return err
 	}
-	files, err := dxfout.Files(s)
+	files, err := dxfout.FilesAs(s, cam)
 	if err != nil {
 		return err
 	}
@@ -84,3 +91,6 @@ func runSheet(_ context.Context, o *rootOptions, so sheetOptions, path string, o
 	}
 	return nil
 }
+
+// dxfFlagUsage is the --dxf flag's help, the same for sheet and batch.
+const dxfFlagUsage = "CAM file versions: 2000 (AutoCAD 2000) or r12 (also an R12 file beside each, for older importers)"

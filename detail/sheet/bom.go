@@ -30,6 +30,7 @@ func (l sheetLayout) billOfMaterial(s *Sheet, r *detail.Report, top float64) flo
 	rows := [][]string{{"MARK", "QTY", "EACH", "SIZE", "GRADE", "CUT LENGTH", "WEIGHT EACH " + strings.ToUpper(wu),
 		"WEIGHT " + strings.ToUpper(wu), "CAM FILE", "NOTE"}}
 	for _, p := range ps {
+		s.label(p, shop(p.T)+map[units.System]string{units.SI: " mm"}[sys])
 		rows = append(rows, []string{p.Mark, fmt.Sprint(p.Quantity), fmt.Sprint(p.Each), p.Size, p.Grade, shop(p.Length),
 			bom.WeightText(p.Weight), bom.WeightText(p.TotalWeight()), p.CAMFile(s.Mark), strings.ToUpper(p.Note)})
 	}
@@ -61,6 +62,16 @@ func (l sheetLayout) billOfMaterial(s *Sheet, r *detail.Report, top float64) flo
 		wrapped = append(wrapped, wrap(n, 140)...)
 	}
 	return l.table(s, "BOLT LIST", brows, y-2*l.h, wrapped)
+}
+
+// label names piece p on the part its CAM file draws: mark, quantity
+// (for the job's quantity), grade and thickness, in plain ASCII.
+func (s *Sheet) label(p bom.Piece, thickness string) {
+	for i := range s.Views {
+		if part := &s.Views[i].Part; part.Name == p.Part {
+			part.Label = ascii(fmt.Sprintf("%s QTY %d %s T %s", p.Mark, p.Quantity, p.Grade, thickness))
+		}
+	}
 }
 
 // density is the steel density of the weights, in the job's units

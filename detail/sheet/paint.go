@@ -83,6 +83,21 @@ func (p *Part) Paint(to Painter) (lo, hi r2.Vec) {
 	return w.lo, w.hi
 }
 
+// PaintMarked draws the part as Paint does, then its Label on LayerMark,
+// left-aligned at height h, h above the contour's top left corner: a CAM
+// file that names its piece away from every cut. Without a label it is
+// Paint, with LayerMark declared.
+func (p *Part) PaintMarked(to Painter, h float64) (lo, hi r2.Vec) {
+	w := newWalk(to)
+	to.Layers(append(PartLayers(), LayerMark))
+	w.part(p)
+	if p.Label != "" {
+		plo, phi := corners(p.Contour)
+		w.text(Text{At: r2.Vec{X: plo.X, Y: phi.Y + h}, Height: h, Align: AlignLeftBase, Value: p.Label, Layer: LayerMark})
+	}
+	return w.lo, w.hi
+}
+
 // walk hands the model to a painter, shifted by the origin of the current
 // view, and keeps the extents of what it handed over.
 type walk struct {

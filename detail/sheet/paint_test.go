@@ -3,6 +3,7 @@ package sheet
 import (
 	"math"
 	"slices"
+	"strings"
 	"testing"
 
 	"gaugeline/rules"
@@ -362,6 +363,62 @@ func TestHoleMarker(t *testing.T) {
 				if it.layer == LayerHoles && !announced[k] {
 					t.Errorf("%s %s: item %d on the holes layer without BeginHole", path, d.name, k)
 				}
+			}
+		}
+	}
+}
+
+// PaintMarked draws what Paint draws, then the part's label on LayerMark
+// alone, left-aligned one text height above the contour's top left
+// corner, inside the extents it returns; without a label, what Paint
+// draws. The 100 × 50 part of TestPaintExtentsReachHoles.
+func TestPaintMarkedAddsTheLabel(t *testing.T) {
+	p := Part{Contour: []r2.Vec{{X: 0, Y: 0}, {X: 100, Y: 0}, {X: 100, Y: 50}, {X: 0, Y: 50}}, Holes: []SheetHole{
+		{ID: "H1", Centre: r2.Vec{X: 40, Y: 25}, Dx: 20, Dy: 20, Type: rules.Standard}}}
+	var plain, bare, marked recorder
+	p.Paint(&plain)
+	p.PaintMarked(&bare, 5)
+	if !slices.Equal(bare.layers[0], []Layer{LayerContour, LayerHoles, LayerMark}) || len(bare.items) != len(plain.items) {
+		t.Errorf("without a label: layers %v, %d items; Paint drew %d", bare.layers, len(bare.items), len(plain.items))
+	}
+	p.Label = "X-1-P QTY 2 A36 T 1/2\""
+	_, hi := p.PaintMarked(&marked, 5)
+	if len(marked.items) != len(plain.items)+1 {
+		t.Fatalf("%d items, want Paint's %d and the label", len(marked.items), len(plain.items))
+	}
+	got := marked.items[len(marked.items)-1]
+	want := Text{At: r2.Vec{X: 0, Y: 55}, Height: 5, Align: AlignLeftBase, Value: p.Label, Layer: LayerMark}
+	if got.kind != "text" || got.text != want {
+		t.Errorf("last item %+v, want the text %+v", got, want)
+	}
+	if _, thi := want.Box(); hi != (r2.Vec{X: max(100, thi.X), Y: thi.Y}) {
+		t.Errorf("extents reach %v, the label's box %v", hi, thi)
+	}
+}
+
+// Each CAM part's label is its bill-of-material row: mark, quantity,
+// grade and thickness (the size's, which ends in it: L4x4x1/2, PL 1/2 x
+// …), with mm in si.
+func TestPartLabelFromBillOfMaterial(t *testing.T) {
+	for _, path := range sheetJobs {
+		_, s := sheetOf(t, path)
+		for _, v := range s.Views {
+			var row []string
+			for _, r := range s.BillOfMaterial {
+				if r[8] == s.Mark+"-"+v.Part.Name+".cam.dxf" {
+					row = r
+				}
+			}
+			if row == nil {
+				t.Fatalf("%s: no bill-of-material row for %s", path, v.Part.Name)
+			}
+			want := row[0] + " QTY " + row[1] + " " + row[4] + " T "
+			thickness, ok := strings.CutPrefix(v.Part.Label, want)
+			if !ok {
+				t.Fatalf("%s %s: label %q, want it to start %q", path, v.Part.Name, v.Part.Label, want)
+			}
+			if bare := strings.TrimSuffix(strings.TrimSuffix(thickness, `"`), " mm"); !strings.Contains(row[3], bare) {
+				t.Errorf("%s %s: thickness %q is not in the size %q", path, v.Part.Name, thickness, row[3])
 			}
 		}
 	}

@@ -57,14 +57,16 @@ const (
 	LayerReference               // gage lines, heel line, Whitmore section
 	LayerNotes                   // view titles, hole schedule, stamps
 	LayerTitle                   // title block
+	LayerMark                    // a CAM file's piece mark (Part.PaintMarked); never cut
 )
 
-var layerNames = [...]string{"contour", "holes", "dimensions", "reference", "notes", "title"}
+var layerNames = [...]string{"contour", "holes", "dimensions", "reference", "notes", "title", "mark"}
 
 // String returns the layer's name in a drawing.
 func (l Layer) String() string { return layerNames[l] }
 
-// Layers lists every layer in drawing order.
+// Layers lists every layer of a cut sheet in drawing order (LayerMark is
+// a CAM file's alone).
 func Layers() []Layer {
 	return []Layer{LayerContour, LayerHoles, LayerDimensions, LayerReference, LayerNotes, LayerTitle}
 }
@@ -181,6 +183,10 @@ type Part struct {
 	Holes     []SheetHole
 	Thickness float64
 	Pieces    int // pieces of this part per assembly (2 for a double angle)
+	// Label names the piece for a CAM file's mark layer (PaintMarked):
+	// piece mark, quantity, grade and thickness, from the bill of
+	// material; "" without one.
+	Label string
 }
 
 // Bounds returns the corners of the part's contour.
