@@ -14,11 +14,13 @@ import (
 	"gaugeline/detail/sheet"
 	"gaugeline/dxfout"
 	"gaugeline/fileset"
+	"gaugeline/ncout"
 )
 
 type sheetOptions struct {
 	dir               string
 	notForFabrication bool
+	nc1               bool
 }
 
 func newSheetCmd(o *rootOptions) *cobra.Command {
@@ -39,6 +41,7 @@ func newSheetCmd(o *rootOptions) *cobra.Command {
 	cmd.Flags().StringVarP(&so.dir, "output", "o", "", "directory to write the DXF files into (created if missing)")
 	cmd.Flags().BoolVar(&so.notForFabrication, "not-for-fabrication", false,
 		"write a stamped cut sheet (and no CAM file) even when the connection fails")
+	cmd.Flags().BoolVar(&so.nc1, "nc1", false, "also write a DSTV NC1 file of each piece (MARK-member.nc1, MARK-plate.nc1)")
 	return cmd
 }
 
@@ -64,6 +67,13 @@ func runSheet(_ context.Context, o *rootOptions, so sheetOptions, path string, o
 	files, err := dxfout.Files(s)
 	if err != nil {
 		return err
+	}
+	if so.nc1 {
+		nc, err := ncout.Files(r, s)
+		if err != nil {
+			return err
+		}
+		files = append(files, nc...)
 	}
 	unlock, err := lockOutput(so.dir, func(s string) { fmt.Fprintf(o.stderr, "gaugeline: note: %s\n", s) })
 	if err != nil {
