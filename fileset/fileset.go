@@ -152,6 +152,12 @@ func FileStamp(name string, data []byte) (stamp string, ok bool) {
 		return html.UnescapeString(string(v)), true
 	case ".yaml", ".csv":
 		return strings.CutPrefix(first(), "# "+StampPrefix)
+	case ".nc1": // DSTV NC1: a "**" comment after the ST line (package ncout)
+		lines := strings.SplitN(string(data), "\n", 3)
+		if len(lines) < 2 || strings.TrimRight(lines[0], "\r") != "ST" {
+			return "", false
+		}
+		return strings.CutPrefix(strings.TrimRight(lines[1], "\r"), "** "+StampPrefix)
 	case ".md":
 		s, ok := strings.CutPrefix(first(), "<!-- "+StampPrefix)
 		if !ok {

@@ -37,6 +37,7 @@ func TestStampRoundTrip(t *testing.T) {
 		{Name: "a.json", Data: []byte(`{"mark": "A", "stamp": "` + st + `"}`)},
 		{Name: "a.dxf", Data: []byte("999\n" + StampPrefix + st + "\n0\nSECTION\n")},
 		{Name: "a.html", Data: []byte(`<meta name="gaugeline-stamp" content="` + st + `">`)},
+		{Name: "a.nc1", Data: []byte("ST\n** " + StampPrefix + st + "\n  -\n")},
 	} {
 		if got, ok := FileStamp(f.Name, f.Data); !ok || got != st {
 			t.Errorf("%s: stamp %q (%v), want %q", f.Name, got, ok, st)

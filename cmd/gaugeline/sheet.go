@@ -14,12 +14,14 @@ import (
 	"gaugeline/detail/sheet"
 	"gaugeline/dxfout"
 	"gaugeline/fileset"
+	"gaugeline/ncout"
 )
 
 type sheetOptions struct {
 	dir               string
 	notForFabrication bool
 	dxf               string // --dxf: CAM file versions (dxfout.ParseCAMFormat)
+	nc1               bool
 }
 
 func newSheetCmd(o *rootOptions) *cobra.Command {
@@ -42,6 +44,7 @@ func newSheetCmd(o *rootOptions) *cobra.Command {
 	cmd.Flags().BoolVar(&so.notForFabrication, "not-for-fabrication", false,
 		"write a stamped cut sheet (and no CAM file) even when the connection fails")
 	cmd.Flags().StringVar(&so.dxf, "dxf", "2000", dxfFlagUsage)
+	cmd.Flags().BoolVar(&so.nc1, "nc1", false, "also write a DSTV NC1 file of each piece (MARK-member.nc1, MARK-plate.nc1)")
 	return cmd
 }
 
@@ -71,6 +74,13 @@ func runSheet(_ context.Context, o *rootOptions, so sheetOptions, path string, o
 	files, err := dxfout.FilesAs(s, cam)
 	if err != nil {
 		return err
+	}
+	if so.nc1 {
+		nc, err := ncout.Files(r, s)
+		if err != nil {
+			return err
+		}
+		files = append(files, nc...)
 	}
 	unlock, err := lockOutput(so.dir, func(s string) { fmt.Fprintf(o.stderr, "gaugeline: note: %s\n", s) })
 	if err != nil {
