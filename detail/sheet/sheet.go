@@ -255,6 +255,21 @@ type Sheet struct {
 	Stamp string
 }
 
+// runText is the title block's MADE BY: the build and the input file's
+// SHA-256 (its first 16 digits; the whole in the DXF's comment) of the
+// job's run stamp, "" without one.
+func runText(stamp string) string {
+	tool, rest, ok := strings.Cut(stamp, "; ")
+	if !ok {
+		return ""
+	}
+	_, sha, _ := strings.Cut(rest, "input sha256 ")
+	if len(sha) > 16 {
+		sha = sha[:16]
+	}
+	return tool + ", input sha256 " + sha
+}
+
 // Stamp is written on every view of a sheet not for fabrication.
 const Stamp = "NOT FOR FABRICATION"
 
@@ -923,6 +938,9 @@ func (l sheetLayout) titleBlock(s *Sheet, r *detail.Report, top float64) {
 	)
 	if s.NotForFabrication {
 		fields = append(fields, [2]string{"STATUS", Stamp})
+	}
+	if run := runText(j.Stamp); run != "" {
+		fields = append(fields, [2]string{"MADE BY", run})
 	}
 	for i := range fields {
 		fields[i][1] = ascii(fields[i][1])
