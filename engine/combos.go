@@ -18,9 +18,16 @@ func Combine(m rules.Method, l ServiceLoads) (units.Force, string) { return load
 // Reverses and Demand are package loads' (which service loads act either
 // way; a governing required strength of one sign and its combination).
 type (
-	Reverses = loads.Reverses
-	Demand   = loads.Demand
+	Reverses       = loads.Reverses
+	Demand         = loads.Demand
+	CombinationRow = loads.Row
 )
+
+// Combinations is loads.Table: every basic combination's tension and
+// compression, for the report.
+func Combinations(m rules.Method, l ServiceLoads, r Reverses) []CombinationRow {
+	return loads.Table(m, l, r)
+}
 
 // Demands is loads.Demands: the governing required tension and
 // compression of the basic load combinations of ASCE/SEI 7.

@@ -138,6 +138,9 @@ type page struct {
 	Caution            string
 	Assumptions        []string
 	Job, Load          []row
+	// Combos is every load combination worked for the service loads (none
+	// when the job gives the required strengths).
+	Combos table
 	Holes              table
 	Schedule           table
 	BOM, Bolts         table    // bill of material and bolt list (with member.length)
@@ -202,6 +205,7 @@ func newPage(r *detail.Report, s *sheet.Sheet) page {
 	p.verdict(r, f)
 	p.assumptions(r)
 	p.Job, p.Load = jobRows(d, f)
+	p.Combos = comboTable(d, f)
 	p.Holes = holeTable(c, f)
 	p.cutSheet(r, s)
 	p.billOfMaterial(r)
@@ -480,6 +484,33 @@ func jobRows(d *detail.Design, f fmtr) (job, load []row) {
 		}
 	}
 	return job, load
+}
+
+// comboTable is every basic combination of ASCE 7 worked for the job's
+// service loads, the tension and the compression each gives, the governing
+// ones marked.
+func comboTable(d *detail.Design, f fmtr) table {
+	j := d.Job
+	if !j.Load.Combined() {
+		return table{}
+	}
+	t := table{Head: []string{"combination", "tension", "compression", "governs"}}
+	for _, r := range engine.Combinations(j.Method, j.Load.Service, j.Load.Reverses) {
+		name := "ASCE 7 " + j.Method.String() + ": " + r.Name
+		gov := []string{}
+		if d.Combination == name && r.Tension > 0 {
+			gov = append(gov, "tension")
+		}
+		comp := f.force(r.Compression)
+		if len(r.Reversed) > 0 && r.Compression > 0 {
+			comp += " (" + strings.Join(r.Reversed, ", ") + " reversed)"
+		}
+		if d.CompressionCombination != "" && strings.HasPrefix(d.CompressionCombination, name) && r.Compression > 0 {
+			gov = append(gov, "compression")
+		}
+		t.Rows = append(t.Rows, tableRow{Cells: []string{r.Name, f.force(r.Tension), comp, strings.Join(gov, ", ")}})
+	}
+	return t
 }
 
 func holeTable(c *engine.Connection, f fmtr) table {
@@ -806,6 +837,10 @@ footer { margin-top: 30px; font-size: 12px; color: var(--muted); border-top: 1px
 <table class="kv">
 {{range .Load}}<tr><th>{{.Label}}</th><td>{{.Value}}</td></tr>
 {{end}}</table>
+{{if .Combos.Head}}<h3>Load combinations considered</h3>
+<table id="combinations">
+<tr>{{range .Combos.Head}}<th>{{.}}</th>{{end}}</tr>
+{{template "rows" .Combos.Rows}}</table>{{end}}
 
 <h2>2. Layout</h2>
 <figure>

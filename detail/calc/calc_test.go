@@ -1104,3 +1104,28 @@ func TestPrintedPagesAreNumbered(t *testing.T) {
 		}
 	}
 }
+
+// The report lists every load combination considered, not only the
+// governing ones: the seven of ASCE/SEI 7-16 2.3.1 and 2.3.6 for an LRFD
+// job of service loads, each with its tension and compression, the
+// governing one of each sign marked (ASCE/SEI 7-16 2.3.1; the brace's
+// wind reverses).
+func TestReportListsEveryCombination(t *testing.T) {
+	r := check(t, "../../testdata/jobs/us-brace-reversal.yaml")
+	_, page := render(t, r)
+	s := string(page)
+	i := strings.Index(s, `id="combinations"`)
+	if i < 0 {
+		t.Fatal("no table of load combinations")
+	}
+	tab := s[i : i+strings.Index(s[i:], "</table>")]
+	for _, name := range []string{"1.4D", "1.2D + 1.6L + 0.5(Lr or S or R)", "1.2D + 1.6(Lr or S or R) + (L or 0.5W)",
+		"1.2D + 1.0W + L + 0.5(Lr or S or R)", "1.2D + 1.0E + L + 0.2S", "0.9D + 1.0W", "0.9D + 1.0E"} {
+		if !strings.Contains(tab, ">"+strings.ReplaceAll(html.EscapeString(name), "+", "&#43;")+"<") {
+			t.Errorf("combination %q not listed", name)
+		}
+	}
+	if strings.Count(tab, ">tension</td>") != 1 || strings.Count(tab, ">compression</td>") != 1 {
+		t.Errorf("want one governing combination of each sign marked:\n%s", tab)
+	}
+}

@@ -166,3 +166,32 @@ func Demands(m rules.Method, l ServiceLoads, r Reverses) (tension, compression D
 	}
 	return tension, compression
 }
+
+// Row is one basic combination's effect on the member: its name, the
+// largest tension and the largest compression it gives (zero: none) and
+// the reversible loads it takes reversed for the compression.
+type Row struct {
+	Name                 string
+	Tension, Compression units.Force
+	Reversed             []string
+}
+
+// Table is every basic combination of ASCE/SEI 7 the method takes (2.3.1
+// for LRFD, 2.4.1 for ASD) worked for the service loads, in the
+// standard's order: what Demands picks the governing ones from.
+func Table(m rules.Method, l ServiceLoads, r Reverses) []Row {
+	combos := lrfdCombinations
+	if m == rules.ASD {
+		combos = asdCombinations
+	}
+	var rev [nLoads]bool
+	rev[loadW], rev[loadE] = r.W, r.E
+	v := l.values()
+	rows := make([]Row, len(combos))
+	for i, c := range combos {
+		t, _ := c.effect(v, 1, rev)
+		cp, reversed := c.effect(v, -1, rev)
+		rows[i] = Row{Name: c.name, Tension: max(t, 0), Compression: max(cp, 0), Reversed: reversed}
+	}
+	return rows
+}
