@@ -140,19 +140,19 @@ type page struct {
 	Job, Load          []row
 	// Combos is every load combination worked for the service loads (none
 	// when the job gives the required strengths).
-	Combos table
-	Holes              table
-	Schedule           table
-	BOM, Bolts         table    // bill of material and bolt list (with member.length)
-	BoltNotes          []string // the bolt list's washer and faying notes, and where its lengths come from
-	Drawing            template.HTML
-	DrawingNote        string
-	Summary            []summaryRow
-	ForceUnit          string
-	Limits             []limitSection
-	Findings           table
-	DemandSymbol       string
-	AvailableSymbol    string
+	Combos          table
+	Holes           table
+	Schedule        table
+	BOM, Bolts      table    // bill of material and bolt list (with member.length)
+	BoltNotes       []string // the bolt list's washer and faying notes, and where its lengths come from
+	Drawing         template.HTML
+	DrawingNote     string
+	Summary         []summaryRow
+	ForceUnit       string
+	Limits          []limitSection
+	Findings        table
+	DemandSymbol    string
+	AvailableSymbol string
 	// Far is the far end's part of the report where it has a connection of
 	// its own (member.far_end with plate and bolts); nil else, and the
 	// page reads as before.
