@@ -5,9 +5,9 @@ import (
 	"io"
 	"math"
 	"strings"
-	"text/tabwriter"
 
 	"gaugeline/detail/detailing"
+	"gaugeline/detail/texttab"
 	"gaugeline/engine"
 	"gaugeline/rules/units"
 )
@@ -177,11 +177,11 @@ func (r *Report) WriteText(w io.Writer) error {
 	d := r.Design
 	var b strings.Builder
 	fmt.Fprintf(&b, "%s — %s, %s, %s units\n", d.Job.Mark, d.Conn.Edition.Name(), strings.ToUpper(d.Conn.Method.String()), d.Job.Units)
-	tw := tabwriter.NewWriter(&b, 0, 0, 2, ' ', 0)
+	var rows [][]string
 	for _, row := range d.Summary() {
-		fmt.Fprintf(tw, "  %s\t%s\n", row[0], row[1])
+		rows = append(rows, []string{"  " + row[0], row[1]})
 	}
-	tw.Flush()
+	texttab.Table(&b, rows, texttab.Width)
 	if r.Far != nil {
 		fmt.Fprintf(&b, "\nNEAR END\n")
 	}
@@ -190,14 +190,26 @@ func (r *Report) WriteText(w io.Writer) error {
 		r.Far.farText(&b)
 	}
 	r.bomText(&b)
-	fmt.Fprintf(&b, "\nverdict: %s — %s\n", strings.ToUpper(r.Verdict()), r.VerdictReason())
+	fmt.Fprintf(&b, "\n")
+	for k, line := range texttab.Wrap(fmt.Sprintf("verdict: %s — %s", strings.ToUpper(r.Verdict()), r.VerdictReason()), texttab.Width) {
+		if k > 0 {
+			b.WriteString("         ")
+		}
+		b.WriteString(line + "\n")
+	}
 	r.textFails(&b, "")
 	if r.Far != nil {
 		r.Far.textFails(&b, "far end: ")
 	}
 	fmt.Fprintf(&b, "\n")
 	for _, c := range r.Cautions {
-		fmt.Fprintf(&b, "note: %s\n", c)
+		for k, line := range texttab.Wrap(c, texttab.Width-6) {
+			if k == 0 {
+				fmt.Fprintf(&b, "note: %s\n", line)
+			} else {
+				fmt.Fprintf(&b, "      %s\n", line)
+			}
+		}
 	}
 	_, err := io.WriteString(w, b.String())
 	return err
@@ -208,16 +220,15 @@ func (r *Report) textTables(b *strings.Builder) {
 	p := people{r.Design.Job.Units}
 	lb := r.Design.Job.Units.Labels()
 	fmt.Fprintf(b, "\n")
-	tw := tabwriter.NewWriter(b, 0, 0, 2, ' ', 0)
-	fmt.Fprintf(tw, "LIMIT STATE\tCLAUSE\tNOMINAL %s\tAVAILABLE %s\tRATIO\t\tWHAT\n", lb.Force, lb.Force)
+	rows := [][]string{{"LIMIT STATE", "CLAUSE", "NOMINAL " + lb.Force, "AVAILABLE " + lb.Force, "RATIO", "", "WHAT"}}
 	for i, x := range r.Results {
 		mark := PassMark(x.Pass, false)
 		if i == r.Governing {
 			mark += " <"
 		}
-		fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\t%s\t%s\n", x.ID, x.Clause, p.force(x.Nominal), p.force(x.Available), RatioText(x.Ratio), mark, x.Note)
+		rows = append(rows, []string{x.ID, x.Clause, p.force(x.Nominal), p.force(x.Available), RatioText(x.Ratio), mark, x.Note})
 	}
-	tw.Flush()
+	texttab.Table(b, rows, texttab.Width)
 	fmt.Fprintf(b, "\n")
 	FindingsText(b, p.sys, "DETAILING", r.Findings)
 }
@@ -292,12 +303,11 @@ func (r *Report) markdownTables(b *strings.Builder, end string) {
 // title column heading, values in the units of sys.
 func FindingsText(b *strings.Builder, sys units.System, title string, fs []detailing.Finding) {
 	p := people{sys}
-	tw := tabwriter.NewWriter(b, 0, 0, 2, ' ', 0)
-	fmt.Fprintf(tw, "%s\tCLAUSE\tMEASURED\tLIMIT\t\tWHERE\n", title)
+	rows := [][]string{{title, "CLAUSE", "MEASURED", "LIMIT", "", "WHERE"}}
 	for _, f := range fs {
-		fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\t%s\n", f.ID, f.Clause, p.value(f.Measured, f.Dim), p.value(f.Limit, f.Dim), PassMark(f.Pass, f.Advisory), f.Where)
+		rows = append(rows, []string{f.ID, f.Clause, p.value(f.Measured, f.Dim), p.value(f.Limit, f.Dim), PassMark(f.Pass, f.Advisory), f.Where})
 	}
-	tw.Flush()
+	texttab.Table(b, rows, texttab.Width)
 }
 
 // FindingsMarkdown writes detailing findings as a Markdown section, values

@@ -3,8 +3,8 @@ package bom
 import (
 	"fmt"
 	"strings"
-	"text/tabwriter"
 
+	"gaugeline/detail/texttab"
 	"gaugeline/rules"
 	"gaugeline/rules/units"
 )
@@ -96,26 +96,29 @@ func WriteText(b *strings.Builder, mb Member) {
 	shop := func(l units.Length) string { return units.FormatLength(l, sys, units.Shop) }
 	wu := WeightUnit(sys)
 	fmt.Fprintf(b, "\n")
-	tw := tabwriter.NewWriter(b, 0, 0, 2, ' ', 0)
-	fmt.Fprintf(tw, "BILL OF MATERIAL\tQTY\tSIZE\tGRADE\tCUT LENGTH\tEACH %s\tTOTAL %s\tNOTE\n", wu, wu)
+	rows := [][]string{{"BILL OF MATERIAL", "QTY", "SIZE", "GRADE", "CUT LENGTH", "EACH " + wu, "TOTAL " + wu, "NOTE"}}
 	for _, p := range ps {
-		fmt.Fprintf(tw, "%s\t%d\t%s\t%s\t%s\t%s\t%s\t%s\n", p.Mark, p.Quantity, p.Size, p.Grade, shop(p.Length),
-			WeightText(p.Weight), WeightText(p.TotalWeight()), p.Note)
+		rows = append(rows, []string{p.Mark, fmt.Sprint(p.Quantity), p.Size, p.Grade, shop(p.Length),
+			WeightText(p.Weight), WeightText(p.TotalWeight()), p.Note})
 	}
-	fmt.Fprintf(tw, "total\t\t\t\t\t\t%s\t\n", WeightText(TotalWeight(ps)))
-	tw.Flush()
+	rows = append(rows, []string{"total", "", "", "", "", "", WeightText(TotalWeight(ps)), ""})
+	texttab.Table(b, rows, texttab.Width)
 	fmt.Fprintf(b, "\n")
-	tw = tabwriter.NewWriter(b, 0, 0, 2, ' ', 0)
-	fmt.Fprintf(tw, "BOLT LIST\tQTY\tGRIP\tWHERE\tHOLES\tWASHERS\n")
+	rows = [][]string{{"BOLT LIST", "QTY", "GRIP", "WHERE", "HOLES", "WASHERS"}}
 	bs := BoltList(mb)
 	for _, s := range bs {
-		fmt.Fprintf(tw, "%s\t%d\t%s\t%s\t%s\t%s\n", s.BoltText(sys), s.Quantity, shop(s.Grip), s.End, s.HolesText(), s.WashersText(sys))
+		rows = append(rows, []string{s.BoltText(sys), fmt.Sprint(s.Quantity), shop(s.Grip), s.End, s.HolesText(), s.WashersText(sys)})
 	}
-	tw.Flush()
+	texttab.Table(b, rows, texttab.Width)
+	note := func(s string) {
+		for _, line := range texttab.Wrap(s, texttab.Width-4) {
+			fmt.Fprintf(b, "  %s\n", line)
+		}
+	}
 	for _, s := range bs {
-		fmt.Fprintf(b, "  %s: washers: %s; faying surfaces: %s\n", s.End, s.WasherNote, s.Faying)
+		note(fmt.Sprintf("%s: washers: %s; faying surfaces: %s", s.End, s.WasherNote, s.Faying))
 	}
-	fmt.Fprintf(b, "  %s\n", BoltLengthSource)
+	note(BoltLengthSource)
 }
 
 // WriteMarkdown is WriteText as Markdown sections.
