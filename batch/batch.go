@@ -228,6 +228,9 @@ func runJob(cfg Config, gate *markGate, turn *gateTurn, in Input) (row Row) {
 		err = fileset.Write(cfg.Out, fileset.Set{Name: mark, Stamp: job.Stamp, Files: files})
 	}
 	if err != nil {
+		if in.Explain != nil {
+			err = in.Explain(err)
+		}
 		row = errorRow(row, path, err)
 		fileset.Remove(cfg.Out, mark) // an old set must not outlive a job that no longer reads
 		return row

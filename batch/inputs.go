@@ -25,6 +25,9 @@ type Input struct {
 	// YAML is the job file a schedule's row became, written into its set
 	// as MARK.job.yaml; nil for a job file.
 	YAML []byte
+	// Explain words an error found in checking the job as the schedule
+	// row's (schedule.Row.Explain); nil for a job file.
+	Explain func(error) error
 }
 
 // Name is how messages name the input: the job file, or the schedule and
@@ -63,7 +66,7 @@ func ScheduleRows(path string, o schedule.Options) ([]Input, error) {
 	}
 	out := make([]Input, len(rows))
 	for i, r := range rows {
-		out[i] = Input{File: path, Source: r.Where(), YAML: r.YAML,
+		out[i] = Input{File: path, Source: r.Where(), YAML: r.YAML, Explain: r.Explain,
 			Load: func() (*jobfile.Job, error) { return r.Job, r.Err }}
 	}
 	return out, nil

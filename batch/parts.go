@@ -3,6 +3,7 @@ package batch
 import (
 	"bytes"
 	"encoding/csv"
+	"math"
 	"strconv"
 	"strings"
 
@@ -67,7 +68,8 @@ func (p Part) fields() []string {
 		if l == 0 {
 			return ""
 		}
-		return strconv.FormatFloat(p.Units.ToJob(float64(l), units.DimLength), 'f', -1, 64)
+		// to 1e-4 in (1e-4 mm): the unit conversion's last bits are noise
+		return strconv.FormatFloat(math.Round(p.Units.ToJob(float64(l), units.DimLength)*1e4)/1e4, 'f', -1, 64)
 	}
 	lu := "in"
 	if p.Units == units.SI {

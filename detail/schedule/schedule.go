@@ -32,6 +32,21 @@ type Row struct {
 	Job   *jobfile.Job
 	YAML  []byte // the job file the row became; nil when it could not be built
 	Err   error
+
+	at          string // the schedule and the row, as errors start
+	cols, given []column
+	tpl         *template
+}
+
+// Explain words an error found later in the row's job (a size the catalog
+// lacks, a bolt that does not fit) as the row's: the column of the field
+// it names, no line of the job text. Other errors pass as they are.
+func (r Row) Explain(err error) error {
+	var ie *jobfile.InputError
+	if r.at == "" || !errors.As(err, &ie) || ie.File != r.at {
+		return err
+	}
+	return rowError(r.at, err, r.cols, r.given, r.tpl)
 }
 
 // Where names the row: `sheet "Braces", row 14` or, in a CSV file, `row 14`.
@@ -154,8 +169,9 @@ func (b *builder) load(path string) *template {
 
 // row builds one row's job.
 func (b *builder) row(sheet string, rec record, cols []column) Row {
-	r := Row{File: b.file, Sheet: sheet, Line: rec.line}
+	r := Row{File: b.file, Sheet: sheet, Line: rec.line, cols: cols}
 	at := b.file + ": " + r.Where()
+	r.at = at
 	cell := func(i int) string {
 		if i < len(rec.cells) {
 			return strings.TrimSpace(rec.cells[i])
@@ -171,7 +187,7 @@ func (b *builder) row(sheet string, rec record, cols []column) Row {
 	}
 	tpl, err := b.rowTemplate(cols, cell)
 	if err != nil {
-		r.Err = &jobfile.InputError{File: at, Msg: err.Error()}
+		r.Err = &jobfile.InputError{File: at + templateColumn(cols, cell), Msg: err.Error()}
 		return r
 	}
 	root := &yaml.Node{Kind: yaml.MappingNode, Tag: "!!map"}
@@ -192,6 +208,12 @@ func (b *builder) row(sheet string, rec record, cols []column) Row {
 			continue
 		}
 		given = append(given, c)
+	}
+	r.given, r.tpl = given, tpl
+	if err := needMark(cols, cell); err != nil {
+		r.Err = &jobfile.InputError{File: fmt.Sprintf("%s, column %q", at, err.Error()), Field: "mark",
+			Msg: "the row has no mark", Hint: "every connection of a schedule names its own mark (a template's mark is never used)"}
+		return r
 	}
 	dropLoad(root, given)
 	for i, c := range cols {
@@ -238,6 +260,27 @@ func (b *builder) rowTemplate(cols []column, cell func(int) string) (*template, 
 	}
 	t := b.load(path)
 	return t, t.err
+}
+
+// needMark is the mark column's header when the row leaves it empty.
+func needMark(cols []column, cell func(int) string) error {
+	for i, c := range cols {
+		if c.path == "mark" && cell(i) == "" {
+			return errors.New(c.header)
+		}
+	}
+	return nil
+}
+
+// templateColumn names the row's template column when it names the
+// template: ", column \"Template\"".
+func templateColumn(cols []column, cell func(int) string) string {
+	for i, c := range cols {
+		if c.template && cell(i) != "" {
+			return fmt.Sprintf(", column %q", c.header)
+		}
+	}
+	return ""
 }
 
 // dropLoad removes the template's load when the row gives any load of
