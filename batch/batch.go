@@ -4,17 +4,13 @@
 package batch
 
 import (
-	"bufio"
 	"bytes"
 	"context"
 	"crypto/sha256"
 	"encoding/csv"
 	"errors"
 	"fmt"
-	"io"
 	"math"
-	"os"
-	"path/filepath"
 	"strconv"
 	"strings"
 	"sync"
@@ -55,7 +51,9 @@ func (v Verdict) String() string { return [...]string{"pass", "fail", "error", "
 // Row is one job's line of the summary.
 type Row struct {
 	File      string
+	Source    string // the row of a schedule: `sheet "Braces", row 14`; "" for a job file
 	Mark      string // "" when the job could not be read
+	Member    string // the member's designation: L4x4x1/2, 2L4x4x1/2; "" when none
 	Verdict   Verdict
 	Governing string  // limit state or rule id; "" when none
 	Ratio     float64 // governing ratio; NaN when none
@@ -64,8 +62,11 @@ type Row struct {
 	Hint      string  // advice on an error
 	JSON      int     // files written: JSON and DXF
 	DXF       int
-	Set       string // the folder of the mark's file set; "" when none was written
-	Input     string // SHA-256 of the job file, as in the set's stamp
+	Set       string   // the folder of the mark's file set; "" when none was written
+	Files     []string // the set's files, manifest aside, in the order written
+	Input     string   // SHA-256 of the job file, as in the set's stamp
+	Parts     []Part   // the parts list of a set written with its sheets
+	order     int      // input order, the tie-break of Sorted
 }
 
 // Config is what every job of a batch shares.
@@ -82,96 +83,6 @@ type Config struct {
 	// LimitError words a search stopped at MaxCandidates as the job's
 	// error; nil: the *propose.SearchLimitError itself.
 	LimitError func(*jobfile.Job, *propose.SearchLimitError) error
-}
-
-// maxListSize bounds a list file: 10,000 jobs take well under 1 MiB.
-const maxListSize = 16 << 20
-
-// Inputs returns the job files of a folder (every *.yaml, sorted by
-// name, not recursive) or of a list file (one path per line, relative to
-// the list file; '#' starts a comment), in input order.
-func Inputs(arg string) ([]string, error) {
-	fi, err := os.Stat(arg)
-	if err != nil {
-		return nil, &jobfile.InputError{File: arg, Msg: "cannot read the jobs: " + fileset.ErrText(err)}
-	}
-	if fi.IsDir() {
-		entries, err := os.ReadDir(arg) // sorted by name
-		if err != nil {
-			return nil, &jobfile.InputError{File: arg, Msg: "cannot read the folder: " + fileset.ErrText(err)}
-		}
-		var files []string
-		for _, e := range entries {
-			if !e.IsDir() && strings.HasSuffix(e.Name(), ".yaml") {
-				files = append(files, filepath.Join(arg, e.Name()))
-			}
-		}
-		if len(files) == 0 {
-			return nil, &jobfile.InputError{File: arg, Msg: "no *.yaml job in the folder",
-				Hint: "batch reads the *.yaml files of the folder itself, not of its subfolders"}
-		}
-		return files, nil
-	}
-	if !fi.Mode().IsRegular() {
-		return nil, &jobfile.InputError{File: arg, Msg: "not a folder or a regular list file (" + fi.Mode().Type().String() + ")",
-			Hint: "batch reads a folder of jobs or a text file listing them"}
-	}
-	if ext := filepath.Ext(arg); ext == ".yaml" || ext == ".yml" {
-		return nil, &NotAListError{Path: arg}
-	}
-	f, err := fileset.OpenRegular(arg) // never blocks on a FIFO swapped in after the Stat
-	if err != nil {
-		return nil, &jobfile.InputError{File: arg, Msg: "cannot read the list: " + fileset.ErrText(err)}
-	}
-	defer f.Close()
-	data, err := io.ReadAll(io.LimitReader(f, maxListSize+1))
-	if err != nil {
-		return nil, &jobfile.InputError{File: arg, Msg: "cannot read the list: " + fileset.ErrText(err)}
-	}
-	if len(data) > maxListSize {
-		return nil, &jobfile.InputError{File: arg, Msg: fmt.Sprintf("the list is larger than %d MiB", maxListSize>>20),
-			Hint: "a list holds one job path per line"}
-	}
-	base := filepath.Dir(arg)
-	var files []string
-	sc := bufio.NewScanner(bytes.NewReader(data))
-	sc.Buffer(nil, maxListSize)
-	for line := 1; sc.Scan(); line++ {
-		s := sc.Text()
-		if i := commentStart(s); i >= 0 {
-			s = s[:i]
-		}
-		s = strings.TrimSpace(s)
-		if s == "" {
-			continue
-		}
-		if strings.ContainsRune(s, 0) {
-			return nil, &jobfile.InputError{File: arg, Line: line, Msg: "not a list of job paths (binary data)"}
-		}
-		if !filepath.IsAbs(s) {
-			s = filepath.Join(base, s)
-		}
-		files = append(files, s)
-	}
-	if err := sc.Err(); err != nil {
-		return nil, &jobfile.InputError{File: arg, Msg: "cannot read the list: " + err.Error()}
-	}
-	if len(files) == 0 {
-		return nil, &jobfile.InputError{File: arg, Msg: "the list names no job",
-			Hint: "a list holds one job path per line, relative to the list; '#' starts a comment"}
-	}
-	return files, nil
-}
-
-// commentStart is the index of a '#' at the start of s or after a blank,
-// -1 when there is none: a path may contain '#' inside a name.
-func commentStart(s string) int {
-	for i := 0; i < len(s); i++ {
-		if s[i] == '#' && (i == 0 || s[i-1] == ' ' || s[i-1] == '\t') {
-			return i
-		}
-	}
-	return -1
 }
 
 // markGate hands out set names (marks) in input order. Job i holds the
@@ -226,7 +137,7 @@ func (g *markGate) pass(t *gateTurn, file, mark string) string {
 // Run runs every job on cfg.Workers workers and returns the summary
 // rows in input order. done is called (from this goroutine) as each job
 // finishes. Jobs not started when ctx ends are recorded as errors.
-func Run(ctx context.Context, cfg Config, files []string, done func()) []Row {
+func Run(ctx context.Context, cfg Config, files []Input, done func()) []Row {
 	rows := make([]Row, len(files))
 	gate := newMarkGate()
 	type dispatched struct {
@@ -254,6 +165,7 @@ func Run(ctx context.Context, cfg Config, files []string, done func()) []Row {
 		wg.Go(func() {
 			for d := range next {
 				rows[d.i] = runJob(cfg, gate, d.turn, files[d.i])
+				rows[d.i].order = d.i
 				finished <- d.i
 			}
 		})
@@ -269,26 +181,27 @@ func Run(ctx context.Context, cfg Config, files []string, done func()) []Row {
 	}
 	for i, ok := range ran {
 		if !ok {
-			rows[i] = Row{File: files[i], Verdict: VerdictNotRun, Ratio: math.NaN(),
-				Message: files[i] + ": not run: the batch was interrupted"}
+			rows[i] = Row{File: files[i].File, Source: files[i].Source, Verdict: VerdictNotRun, Ratio: math.NaN(),
+				Message: files[i].Name() + ": not run: the batch was interrupted", order: i}
 		}
 	}
 	return rows
 }
 
 // runJob runs one job of the batch and writes its files.
-func runJob(cfg Config, gate *markGate, turn *gateTurn, path string) (row Row) {
-	row = Row{File: path, Ratio: math.NaN()}
+func runJob(cfg Config, gate *markGate, turn *gateTurn, in Input) (row Row) {
+	path := in.Name()
+	row = Row{File: in.File, Source: in.Source, Ratio: math.NaN()}
 	defer func() {
 		// A programmer's mistake in one job must not stop the others.
 		if r := recover(); r != nil {
-			row = Row{File: path, Mark: row.Mark, Verdict: VerdictError, Ratio: math.NaN(),
+			row = Row{File: in.File, Source: in.Source, Mark: row.Mark, Verdict: VerdictError, Ratio: math.NaN(),
 				Message: fmt.Sprintf("%s: internal error, please report it: %v", path, r),
 				Hint:    "gaugeline check (or propose) on this job alone shows where it happens"}
 		}
 		gate.pass(turn, path, "") // hands the gate on if the job stopped before it
 	}()
-	job, err := jobfile.LoadJob(path)
+	job, err := in.Load()
 	mark := ""
 	if err == nil {
 		mark = job.Mark
@@ -309,19 +222,26 @@ func runJob(cfg Config, gate *markGate, turn *gateTurn, path string) (row Row) {
 	}
 	job.Stamp = fileset.Stamp(cfg.Tool, mode, job.SHA256)
 	files, err := jobFiles(cfg, job, &row)
+	if err == nil && in.YAML != nil {
+		files = append(files, fileset.Stamped(fileset.File{Name: mark + ".job.yaml", Data: in.YAML}, job.Stamp))
+	}
 	if err == nil {
 		err = fileset.Write(cfg.Out, fileset.Set{Name: mark, Stamp: job.Stamp, Files: files})
 	}
 	if err != nil {
+		if in.Explain != nil {
+			err = in.Explain(err)
+		}
 		row = errorRow(row, path, err)
 		fileset.Remove(cfg.Out, mark) // an old set must not outlive a job that no longer reads
 		return row
 	}
 	row.Set = mark
 	for _, f := range files {
+		row.Files = append(row.Files, f.Name)
 		if strings.HasSuffix(f.Name, ".json") {
 			row.JSON++
-		} else {
+		} else if strings.HasSuffix(f.Name, ".dxf") {
 			row.DXF++
 		}
 	}
@@ -380,6 +300,7 @@ func jobFiles(cfg Config, job *jobfile.Job, row *Row) ([]fileset.File, error) {
 	}
 	g := r.GoverningEnd().GoverningResult()
 	row.Governing, row.Ratio, row.Bolts = g.ID, g.Ratio, len(r.Design.Conn.Holes)
+	row.Member = r.Design.Info.Designation
 	files := []fileset.File{{Name: job.Mark + ".json", Data: data}}
 	if !r.Pass {
 		row.Verdict, row.Message = VerdictFail, "fails: "+strings.Join(r.Failing(), ", ")
@@ -397,7 +318,15 @@ func jobFiles(cfg Config, job *jobfile.Job, row *Row) ([]fileset.File, error) {
 	if err != nil {
 		return nil, err
 	}
-	return append(files, dxf...), nil
+	files = append(files, dxf...)
+	if row.Parts = PartsOf(r, s, files); row.Parts != nil {
+		data, err := PartsCSV(row.Parts)
+		if err != nil {
+			return nil, err
+		}
+		files = append(files, fileset.Stamped(fileset.File{Name: job.Mark + PartsExt, Data: data}, job.Stamp))
+	}
+	return files, nil
 }
 
 // Counts tallies the rows.
@@ -430,7 +359,10 @@ func (c Counts) String() string {
 	return s
 }
 
-var Header = []string{"file", "mark", "verdict", "governing", "ratio", "bolts", "set", "input_sha256", "message"}
+// Header is summary.csv's header. The columns after message came later
+// (schedules, the parts list): a reader that takes columns by place
+// still finds the first nine where they were.
+var Header = []string{"file", "mark", "verdict", "governing", "ratio", "bolts", "set", "input_sha256", "message", "row", "member", "files"}
 
 func (r Row) fields() []string {
 	ratio, bolts := "", ""
@@ -444,7 +376,8 @@ func (r Row) fields() []string {
 	if r.Hint != "" {
 		msg += " (hint: " + r.Hint + ")"
 	}
-	return []string{r.File, r.Mark, r.Verdict.String(), r.Governing, ratio, bolts, r.Set, r.Input, msg}
+	return []string{r.File, r.Mark, r.Verdict.String(), r.Governing, ratio, bolts, r.Set, r.Input, msg,
+		r.Source, r.Member, strings.Join(r.Files, " ")}
 }
 
 // SummaryCSV is summary.csv: a header, then one row per job.
@@ -462,7 +395,7 @@ func SummaryCSV(rows []Row) ([]byte, error) {
 // RunLine names the run a summary describes: the tool, what it did and
 // the SHA-256 of its list of job files, so that two summaries of different
 // runs never read alike.
-func RunLine(cfg Config, files []string) string {
+func RunLine(cfg Config, inputs []Input) string {
 	mode := "check"
 	if cfg.Propose {
 		mode = "propose"
@@ -470,8 +403,12 @@ func RunLine(cfg Config, files []string) string {
 	if cfg.Sheets {
 		mode += " with cut sheets"
 	}
-	return fmt.Sprintf("%s; %s; %d jobs, list sha256 %x", cfg.Tool, mode, len(files),
-		sha256.Sum256([]byte(strings.Join(files, "\n"))))
+	keys := make([]string, len(inputs))
+	for i, in := range inputs {
+		keys[i] = in.key()
+	}
+	return fmt.Sprintf("%s; %s; %d jobs, list sha256 %x", cfg.Tool, mode, len(inputs),
+		sha256Sum([]byte(strings.Join(keys, "\n"))))
 }
 
 // SummaryRunning is summary.md while a run is under way: it replaces the
@@ -506,6 +443,8 @@ func SummaryMarkdown(rows []Row, run string) []byte {
 	b.WriteString("\n> " + detail.Caution + "\n")
 	return b.Bytes()
 }
+
+func sha256Sum(b []byte) [32]byte { return sha256.Sum256(b) }
 
 // mdCell keeps a value inside its table cell.
 func mdCell(s string) string {

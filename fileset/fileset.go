@@ -43,15 +43,17 @@ const ManifestExt = ".files"
 // LockName is the lock a run holds on an output folder while it writes.
 const LockName = ".gaugeline.lock"
 
-// The batch summary's files in an output folder; no mark may have their
-// names. UnfinishedTitle starts summary.md while a run is under way.
+// The batch summary's files in an output folder, and its parts list of
+// every set (written with cut sheets); no mark may have their names.
+// UnfinishedTitle starts summary.md while a run is under way.
 const (
 	SummaryCSV      = "summary.csv"
 	SummaryMD       = "summary.md"
+	PartsCSV        = "parts.csv"
 	UnfinishedTitle = "# Batch summary: RUN NOT FINISHED"
 )
 
-var indexFiles = []string{SummaryCSV, SummaryMD}
+var indexFiles = []string{SummaryCSV, SummaryMD, PartsCSV}
 
 // StampPrefix starts the stamp in the comment of every format that takes
 // one (the DXF 999 comment included).

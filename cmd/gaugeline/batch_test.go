@@ -121,28 +121,30 @@ func setOf(mark string, names ...string) []string {
 	return out
 }
 
-// sheetSet is a passing mark's set with sheets: JSON, cut sheet, CAM files.
+// sheetSet is a passing mark's set with sheets: JSON, cut sheet, CAM
+// files, parts list.
 func sheetSet(mark string) []string {
-	return setOf(mark, mark+".json", mark+".dxf", mark+"-member.cam.dxf", mark+"-plate.cam.dxf")
+	return setOf(mark, mark+".json", mark+".dxf", mark+"-member.cam.dxf", mark+"-plate.cam.dxf", mark+".parts.csv")
 }
 
-// folderRows is what a check of testdata/batch says, job by job. Ratios
-// and governing limit states are those `gaugeline check` prints for the
-// same files (see TestBatchAgreesWithCheck).
+// folderRows is what a check of testdata/batch says, job by job, in the
+// summary's order: by mark, then the jobs without one. Ratios and
+// governing limit states are those `gaugeline check` prints for the same
+// files (see TestBatchAgreesWithCheck).
 var folderRows = []wantRow{
-	{"a-truss-diagonal.yaml", "TD-21.b", "pass", "plate.yield", "3", nil},
+	{"d-overloaded-brace.yaml", "HB-7", "fail", "bolts.shear", "4", []string{"fails: bolts.shear"}},
 	{"b-slotted-tie.yaml", "KB-40", "pass", "bolts.slip", "4", nil},
 	{"c-rack-brace.yaml", "RB-4", "pass", "bolts.shear", "5", nil},
-	{"d-overloaded-brace.yaml", "HB-7", "fail", "bolts.shear", "4", []string{"fails: bolts.shear"}},
+	{"a-truss-diagonal.yaml", "TD-21.b", "pass", "plate.yield", "3", nil},
+	{"i-same-mark.yaml", "TD-21.b", "error", "", "", []string{"duplicate mark TD-21.b, already used by", "a-truss-diagonal.yaml"}},
 	{"e-tight-edge.yaml", "TE-9", "fail", "bolts.group", "4", []string{"fails: edge.min"}},
 	{"f-typo-key.yaml", "", "error", "", "", []string{"f-typo-key.yaml:12: bolts.pich: unknown key", `did you mean "pitch"`}},
 	{"g-wrong-dimension.yaml", "", "error", "", "", []string{"g-wrong-dimension.yaml:7: member.thickness:", "not a length"}},
 	{"h-broken-yaml.yaml", "", "error", "", "", []string{"h-broken-yaml.yaml:6: not valid YAML"}},
-	{"i-same-mark.yaml", "TD-21.b", "error", "", "", []string{"duplicate mark TD-21.b, already used by", "a-truss-diagonal.yaml"}},
 }
 
-// A folder of good, failing and malformed jobs: every job has its row, in
-// input order; the passing ones their JSON, sheet and CAM files; the
+// A folder of good, failing and malformed jobs: every job has its row, by
+// mark; the passing ones their JSON, sheet and CAM files; the
 // failing ones their JSON alone; the malformed and the duplicate nothing.
 // Bad input wins the exit code.
 func TestBatchFolder(t *testing.T) {
@@ -154,7 +156,7 @@ func TestBatchFolder(t *testing.T) {
 	}
 	checkRows(t, readSummary(t, out), folderRows)
 
-	want := slices.Concat([]string{"summary.csv", "summary.md"}, setOf("HB-7", "HB-7.json"), setOf("TE-9", "TE-9.json"))
+	want := slices.Concat([]string{"parts.csv", "summary.csv", "summary.md"}, setOf("HB-7", "HB-7.json"), setOf("TE-9", "TE-9.json"))
 	for _, m := range []string{"KB-40", "RB-4", "TD-21.b"} {
 		want = append(want, sheetSet(m)...)
 	}
@@ -293,7 +295,7 @@ func TestBatchDuplicateMarks(t *testing.T) {
 	if err != nil || !bytes.Contains(data, []byte(`"verdict": "fail"`)) {
 		t.Errorf("RB-4.json is not the first job's: %v", err)
 	}
-	want := slices.Concat(setOf("RB-4", "RB-4.json"), sheetSet("RB-5"), []string{"summary.csv", "summary.md"})
+	want := slices.Concat(setOf("RB-4", "RB-4.json"), sheetSet("RB-5"), []string{"parts.csv", "summary.csv", "summary.md"})
 	slices.Sort(want)
 	if got := outFiles(t, out); !slices.Equal(got, want) {
 		t.Errorf("files:\n got %v\nwant %v", got, want)
@@ -310,14 +312,14 @@ func TestBatchList(t *testing.T) {
 	if r.code != 2 {
 		t.Fatalf("exit %d, want 2; stderr %s", r.code, r.stderr)
 	}
-	checkRows(t, readSummary(t, out), []wantRow{
-		{"c-rack-brace.yaml", "RB-4", "pass", "bolts.shear", "5", nil},
-		{"d-overloaded-brace.yaml", "HB-7", "fail", "bolts.shear", "4", []string{"fails: bolts.shear"}},
-		{"no-such-job.yaml", "", "error", "", "", []string{"no-such-job.yaml: cannot read the job"}},
+	checkRows(t, readSummary(t, out), []wantRow{ // by mark, then the job without one
 		{"si-double-angle-asd.yaml", "DA-3", "error", "", "", []string{"si-double-angle-asd.yaml", "bolts.diameter: is required"}},
+		{"d-overloaded-brace.yaml", "HB-7", "fail", "bolts.shear", "4", []string{"fails: bolts.shear"}},
+		{"c-rack-brace.yaml", "RB-4", "pass", "bolts.shear", "5", nil},
 		{"c-rack-brace.yaml", "RB-4", "error", "", "", []string{"duplicate mark RB-4"}},
+		{"no-such-job.yaml", "", "error", "", "", []string{"no-such-job.yaml: cannot read the job"}},
 	})
-	if got := readSummary(t, out)[2].file; got != filepath.Join(testdata, "batch", "no-such-job.yaml") {
+	if got := readSummary(t, out)[4].file; got != filepath.Join(testdata, "batch", "no-such-job.yaml") {
 		t.Errorf("list paths are not relative to the list: %s", got)
 	}
 }
@@ -331,15 +333,15 @@ func TestBatchPropose(t *testing.T) {
 	if r.code != 2 {
 		t.Fatalf("exit %d, want 2; stderr %s", r.code, r.stderr)
 	}
-	checkRows(t, readSummary(t, out), []wantRow{
-		// Bolt shear: 50 kip against 2 × 17.9 kip (testdata/propose).
-		{"infeasible-bolts.yaml", "IB-2", "fail", "bolts.shear", "", []string{"no layout passes: bolts.shear needs at least 3 bolts"}},
-		// 4 bolts: the hand calculation in detail/propose_test.go.
-		{"si-double-angle-asd.yaml", "DA-3", "pass", "bolts.group", "4", nil},
+	checkRows(t, readSummary(t, out), []wantRow{ // by mark
+		{"zz-unknown-size.yaml", "BAD-1", "error", "", "", []string{"zz-unknown-size.yaml:6: member.size:"}},
 		// 3 bolts at the usual gage of the 4 in leg, 2-1/2 in (propose's
 		// default order ranks the usual gage first); bolt shear governs.
 		{"us-angle-brace.yaml", "BR-12", "pass", "bolts.shear", "3", nil},
-		{"zz-unknown-size.yaml", "BAD-1", "error", "", "", []string{"zz-unknown-size.yaml:6: member.size:"}},
+		// 4 bolts: the hand calculation in detail/propose_test.go.
+		{"si-double-angle-asd.yaml", "DA-3", "pass", "bolts.group", "4", nil},
+		// Bolt shear: 50 kip against 2 × 17.9 kip (testdata/propose).
+		{"infeasible-bolts.yaml", "IB-2", "fail", "bolts.shear", "", []string{"no layout passes: bolts.shear needs at least 3 bolts"}},
 	})
 	var p struct {
 		Verdict string `json:"verdict"`
@@ -414,11 +416,11 @@ func TestBatchUsage(t *testing.T) {
 	}{
 		{[]string{"batch", filepath.Join(testdata, "batch")}, "-o DIR is required"},
 		{[]string{"batch", filepath.Join(testdata, "batch", "c-rack-brace.yaml"), "-o", out}, "is a job, not a folder"},
-		{[]string{"batch", empty, "-o", out}, "no *.yaml job in the folder"},
+		{[]string{"batch", empty, "-o", out}, "no *.yaml or *.yml job in the folder"},
 		{[]string{"batch", filepath.Join(empty, "nothing"), "-o", out}, "cannot read the jobs"},
 		{[]string{"batch", filepath.Join(testdata, "batch", "notes.txt"), "-o", out}, "cannot read the job"},
 		{[]string{"batch", filepath.Join(testdata, "batch"), "-o", out, "-j", "-1"}, "--jobs"},
-		{[]string{"batch"}, "want one folder or list file"},
+		{[]string{"batch"}, "want one folder, list file or schedule"},
 	} {
 		r := gaugeline(t, ".", tt.args...)
 		if r.code != 2 || !strings.Contains(r.stderr, "gaugeline: error: ") || !strings.Contains(r.stderr, tt.msg) {
@@ -454,7 +456,9 @@ func TestBatchInProcessRace(t *testing.T) {
 		t.Fatalf("exit %d, want 2; %s", code, stderr.String())
 	}
 	owner := map[string]int{}
-	for i, row := range readSummary(t, out) {
+	rows := readSummary(t, out)
+	slices.SortStableFunc(rows, func(a, b summaryRow) int { return strings.Compare(a.file, b.file) }) // input order
+	for i, row := range rows {
 		mark := fmt.Sprintf("M%d", i%7)
 		switch {
 		case i%5 == 4:
@@ -580,7 +584,7 @@ func TestBatchRefusesSpecialFiles(t *testing.T) {
 		}
 	}
 	rows := readSummary(t, out)
-	if len(rows) != 3 || rows[0].verdict != "pass" || rows[1].verdict != "error" || rows[2].verdict != "pass" {
-		t.Errorf("rows %+v, want pass, error (the FIFO), pass", rows)
+	if len(rows) != 3 || rows[0].verdict != "pass" || rows[1].verdict != "pass" || rows[2].verdict != "error" {
+		t.Errorf("rows %+v, want pass, pass, error (the FIFO: no mark, last)", rows)
 	}
 }

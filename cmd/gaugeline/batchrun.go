@@ -14,6 +14,7 @@ import (
 
 	"gaugeline/batch"
 	"gaugeline/detail/jobfile"
+	"gaugeline/detail/schedule"
 	"gaugeline/dxfout"
 	"gaugeline/fileset"
 )
@@ -67,12 +68,35 @@ func showErrors(stderr io.Writer, rows []batch.Row, c batch.Counts, dir string) 
 	}
 }
 
+// batchInputs reads the jobs a batch runs: a schedule's rows, or the job
+// files of a folder or list.
+func batchInputs(bo batchOptions, arg string) ([]batch.Input, error) {
+	if schedule.IsSchedule(arg) {
+		return batch.ScheduleRows(arg, schedule.Options{Template: bo.template, Sheets: bo.sheetNames})
+	}
+	if bo.template != "" || len(bo.sheetNames) > 0 {
+		return nil, usageError{errors.New("--template and --sheet are for a schedule (a .csv or .xlsx file), not a folder or list of jobs")}
+	}
+	files, err := batch.Inputs(arg)
+	var nl *batch.NotAListError
+	if errors.As(err, &nl) {
+		return nil, usageError{err}
+	}
+	if err != nil {
+		return nil, err
+	}
+	return batch.JobFiles(files), nil
+}
+
 func runBatch(ctx context.Context, o *rootOptions, bo batchOptions, arg string, out io.Writer) error {
 	if bo.dir == "" {
 		return usageError{errors.New("-o DIR is required")}
 	}
 	if bo.workers < 0 {
 		return usageError{fmt.Errorf("--jobs: want 1 or more (0: one per CPU), not %d", bo.workers)}
+	}
+	if bo.format != "text" && bo.format != "json" {
+		return usageError{fmt.Errorf("--format: unknown format %q (want text or json)", bo.format)}
 	}
 	cam, err := dxfout.ParseCAMFormat(bo.dxf)
 	if err != nil {
@@ -81,11 +105,7 @@ func runBatch(ctx context.Context, o *rootOptions, bo batchOptions, arg string, 
 	if cam != dxfout.CAM2000 && !bo.sheets {
 		return usageError{fmt.Errorf("--dxf %s: CAM files are written with --sheets only", bo.dxf)}
 	}
-	files, err := batch.Inputs(arg)
-	var nl *batch.NotAListError
-	if errors.As(err, &nl) {
-		return usageError{err}
-	}
+	inputs, err := batchInputs(bo, arg)
 	if err != nil {
 		return err
 	}
@@ -102,9 +122,10 @@ func runBatch(ctx context.Context, o *rootOptions, bo batchOptions, arg string, 
 	if cfg.Workers == 0 {
 		cfg.Workers = runtime.NumCPU()
 	}
-	cfg.Workers = min(cfg.Workers, len(files))
-	run := batch.RunLine(cfg, files)
-	os.Remove(filepath.Join(bo.dir, "summary.csv"))
+	cfg.Workers = min(cfg.Workers, len(inputs))
+	run := batch.RunLine(cfg, inputs)
+	os.Remove(filepath.Join(bo.dir, fileset.SummaryCSV))
+	os.Remove(filepath.Join(bo.dir, fileset.PartsCSV))
 	if err := fileset.WriteFile(filepath.Join(bo.dir, fileset.SummaryMD), batch.SummaryRunning(run)); err != nil {
 		return &jobfile.InputError{File: bo.dir, Msg: err.Error()}
 	}
@@ -117,28 +138,66 @@ func runBatch(ctx context.Context, o *rootOptions, bo batchOptions, arg string, 
 
 	report, finish := progressBar(o.stderr, "batch", "jobs")
 	finished := 0
-	rows := batch.Run(ctx, cfg, files, func() { finished++; report(finished, len(files)) })
+	rows := batch.Run(ctx, cfg, inputs, func() { finished++; report(finished, len(inputs)) })
 	finish()
 
+	rows = batch.Sorted(rows)
 	c := batch.Count(rows)
+	if err := writeSummaries(bo.dir, rows, run); err != nil {
+		return err
+	}
+	showErrors(o.stderr, rows, c, bo.dir)
+	if err := batchOutput(out, bo, rows, c, run); err != nil {
+		return err
+	}
+	if code := batchExit(c); code != exitOK {
+		return exitError{code}
+	}
+	return nil
+}
+
+// writeSummaries writes summary.csv, parts.csv (when any set has parts)
+// and, last, summary.md: until it is replaced it says the run is not
+// finished.
+func writeSummaries(dir string, rows []batch.Row, run string) error {
 	csvData, err := batch.SummaryCSV(rows)
 	if err != nil {
 		return err
 	}
-	// summary.md last: until it is replaced it says the run is not finished.
-	if err := fileset.WriteFile(filepath.Join(bo.dir, fileset.SummaryCSV), csvData); err != nil {
-		return &jobfile.InputError{File: bo.dir, Msg: err.Error()}
+	if err := fileset.WriteFile(filepath.Join(dir, fileset.SummaryCSV), csvData); err != nil {
+		return &jobfile.InputError{File: dir, Msg: err.Error()}
 	}
-	if err := fileset.WriteFile(filepath.Join(bo.dir, fileset.SummaryMD), batch.SummaryMarkdown(rows, run)); err != nil {
-		return &jobfile.InputError{File: bo.dir, Msg: err.Error()}
+	if parts := batch.AllParts(rows); parts != nil {
+		data, err := batch.PartsCSV(parts)
+		if err != nil {
+			return err
+		}
+		if err := fileset.WriteFile(filepath.Join(dir, fileset.PartsCSV), data); err != nil {
+			return &jobfile.InputError{File: dir, Msg: err.Error()}
+		}
 	}
+	if err := fileset.WriteFile(filepath.Join(dir, fileset.SummaryMD), batch.SummaryMarkdown(rows, run)); err != nil {
+		return &jobfile.InputError{File: dir, Msg: err.Error()}
+	}
+	return nil
+}
 
-	showErrors(o.stderr, rows, c, bo.dir)
+// batchOutput writes what the batch did on stdout: the counts and where
+// the files went, or with --format json the whole summary.
+func batchOutput(out io.Writer, bo batchOptions, rows []batch.Row, c batch.Counts, run string) error {
+	if bo.format == "json" {
+		data, err := batch.SummaryJSON(rows, run)
+		if err != nil {
+			return err
+		}
+		_, err = out.Write(data)
+		return err
+	}
 	fmt.Fprintf(out, "batch: %s\n", c)
 	fmt.Fprintf(out, "wrote %d JSON and %d DXF files to %s, one folder per mark\n", c.JSON, c.DXF, bo.dir)
-	fmt.Fprintf(out, "summary: %s, %s\n", filepath.Join(bo.dir, "summary.csv"), filepath.Join(bo.dir, "summary.md"))
-	if code := batchExit(c); code != exitOK {
-		return exitError{code}
+	if parts := batch.AllParts(rows); parts != nil {
+		fmt.Fprintf(out, "parts list: %s (%d parts)\n", filepath.Join(bo.dir, fileset.PartsCSV), len(parts))
 	}
+	fmt.Fprintf(out, "summary: %s, %s\n", filepath.Join(bo.dir, fileset.SummaryCSV), filepath.Join(bo.dir, fileset.SummaryMD))
 	return nil
 }

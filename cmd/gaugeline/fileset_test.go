@@ -100,8 +100,8 @@ func TestKilledBatchLeavesWholeSets(t *testing.T) {
 			default:
 				t.Errorf("kill %d: %s has the stamp of neither run: %s", k, mark, stamp)
 			}
-			if got := outFiles(t, filepath.Join(out, mark)); len(got) != 5 {
-				t.Errorf("kill %d: %s holds %v, want the whole set of 5 files", k, mark, got)
+			if got := outFiles(t, filepath.Join(out, mark)); len(got) != 6 {
+				t.Errorf("kill %d: %s holds %v, want the whole set of 6 files", k, mark, got)
 			}
 		}
 		if runs["A"] && runs["B"] {
