@@ -21,6 +21,7 @@ import (
 	"gaugeline/detail/sheet"
 	"gaugeline/dxfout"
 	"gaugeline/fileset"
+	"gaugeline/ncout"
 )
 
 // NotAListError: batch was given one job file, not a folder or a list.
@@ -75,6 +76,7 @@ type Config struct {
 	Propose bool
 	Sheets  bool
 	CAM     dxfout.CAMFormat // with Sheets: the CAM files' DXF versions
+	NC1     bool             // with Sheets: a DSTV NC1 file per piece too (ncout)
 	Workers int
 	// Tool names the build in each set's stamp (fileset.Stamp).
 	Tool string
@@ -319,6 +321,13 @@ func jobFiles(cfg Config, job *jobfile.Job, row *Row) ([]fileset.File, error) {
 		return nil, err
 	}
 	files = append(files, dxf...)
+	if cfg.NC1 {
+		nc, err := ncout.Files(r, s)
+		if err != nil {
+			return nil, err
+		}
+		files = append(files, nc...)
+	}
 	if row.Parts = PartsOf(r, s, files); row.Parts != nil {
 		data, err := PartsCSV(row.Parts)
 		if err != nil {

@@ -11,6 +11,7 @@ type batchOptions struct {
 	propose    bool
 	sheets     bool
 	dxf        string // --dxf: CAM file versions (dxfout.ParseCAMFormat)
+	nc1        bool   // --nc1: DSTV NC1 files too
 	workers    int    // 0: one per CPU
 	template   string
 	sheetNames []string
@@ -47,6 +48,7 @@ func newBatchCmd(o *rootOptions) *cobra.Command {
 	cmd.Flags().BoolVar(&bo.propose, "propose", false, "propose a layout for each job instead of checking the one it gives")
 	cmd.Flags().BoolVar(&bo.sheets, "sheets", false, "also write the DXF cut sheet, CAM files and parts list of each passing job")
 	cmd.Flags().StringVar(&bo.dxf, "dxf", "2000", dxfFlagUsage+"; with --sheets")
+	cmd.Flags().BoolVar(&bo.nc1, "nc1", false, "with --sheets, also a DSTV NC1 file of each piece")
 	cmd.Flags().IntVarP(&bo.workers, "jobs", "j", 0, "jobs to run at once (default: one per CPU)")
 	cmd.Flags().StringVar(&bo.template, "template", "", "schedule: the job file that supplies what a row leaves empty")
 	cmd.Flags().StringArrayVar(&bo.sheetNames, "sheet", nil, "XLSX schedule: read only this sheet (repeatable; default: every sheet)")

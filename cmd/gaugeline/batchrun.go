@@ -102,6 +102,9 @@ func runBatch(ctx context.Context, o *rootOptions, bo batchOptions, arg string, 
 	if err != nil {
 		return usageError{err}
 	}
+	if bo.nc1 && !bo.sheets {
+		return usageError{errors.New("--nc1: NC1 files are written with --sheets only")}
+	}
 	if cam != dxfout.CAM2000 && !bo.sheets {
 		return usageError{fmt.Errorf("--dxf %s: CAM files are written with --sheets only", bo.dxf)}
 	}
@@ -117,7 +120,7 @@ func runBatch(ctx context.Context, o *rootOptions, bo batchOptions, arg string, 
 	if _, set := os.LookupEnv("GOGC"); !set {
 		defer debug.SetGCPercent(debug.SetGCPercent(batchGCPercent))
 	}
-	cfg := batch.Config{Out: bo.dir, Propose: bo.propose, Sheets: bo.sheets, CAM: cam, Workers: bo.workers,
+	cfg := batch.Config{Out: bo.dir, Propose: bo.propose, Sheets: bo.sheets, CAM: cam, NC1: bo.nc1, Workers: bo.workers,
 		Tool: toolVersion(), MaxCandidates: defaultMaxCandidates, LimitError: limitError}
 	if cfg.Workers == 0 {
 		cfg.Workers = runtime.NumCPU()
