@@ -67,14 +67,14 @@ func (e *Edition) tabulated(d units.Length, table string) (float64, error) {
 	return 0, &NotTabulatedError{Edition: e.String(), Table: e.table(table), Key: e.diameterKey(d)}
 }
 
-// diameterKey names a bolt diameter the way the system's tables do:
-// "M14", "d = 14.5 mm", "d = 1-3/4 in", "d = 0.8 in".
+// diameterKey names a bolt diameter the way the tables do: "M14" (in
+// either system), "d = 14.5 mm", "d = 1-3/4 in", "d = 0.8 in".
 func (e *Edition) diameterKey(d units.Length) string {
+	mm := d.Mm()
+	if n := math.Round(mm); n > 0 && math.Abs(mm-n) <= 1e-6 {
+		return "M" + strconv.Itoa(int(n)) // a metric bolt keeps its name in a US job too
+	}
 	if e.si() {
-		mm := d.Mm()
-		if n := math.Round(mm); n > 0 && math.Abs(mm-n) <= 1e-6 {
-			return "M" + strconv.Itoa(int(n))
-		}
 		return fmt.Sprintf("d = %g mm", mm)
 	}
 	return "d = " + units.FormatJob(d, units.US)

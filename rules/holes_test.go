@@ -100,7 +100,7 @@ func TestHoleNotTabulated(t *testing.T) {
 		{"M14", si22(t), mm(14), "Table J3.3M", "M14", "AISC 360-22 Table J3.3M"},
 		{"M12 under 360-16", si16(t), mm(12), "Table J3.3M", "M12", "AISC 360-16 Table J3.3M"},
 		{"M42 (only M36 is listed)", si22(t), mm(42), "Table J3.3M", "M42", "AISC 360-22 Table J3.3M"},
-		{"an SI bolt in a US job", us22(t), mm(20), "Table J3.3", "d = ", "AISC 360-22 Table J3.3"},
+		{"an SI bolt in a US job: named M20 (issue 16), not 0.787402 in", us22(t), mm(20), "Table J3.3", "M20", "AISC 360-22 Table J3.3"},
 	}
 	for _, tt := range tests {
 		t.Run(tt.name, func(t *testing.T) {
