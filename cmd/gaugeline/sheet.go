@@ -9,6 +9,7 @@ import (
 
 	"github.com/spf13/cobra"
 
+	"gaugeline/batch"
 	"gaugeline/detail"
 	"gaugeline/detail/jobfile"
 	"gaugeline/detail/sheet"
@@ -81,6 +82,16 @@ func runSheet(_ context.Context, o *rootOptions, so sheetOptions, path string, o
 			return err
 		}
 		files = append(files, nc...)
+	}
+	if !so.notForFabrication {
+		// the parts list, as batch writes it into each set
+		if parts := batch.PartsOf(r, s, files); parts != nil {
+			data, err := batch.PartsCSV(parts)
+			if err != nil {
+				return err
+			}
+			files = append(files, fileset.Stamped(fileset.File{Name: job.Mark + batch.PartsExt, Data: data}, job.Stamp))
+		}
 	}
 	unlock, err := lockOutput(so.dir, func(s string) { fmt.Fprintf(o.stderr, "gaugeline: note: %s\n", s) })
 	if err != nil {

@@ -16,9 +16,9 @@ func TestSheetNC1(t *testing.T) {
 		files []string
 	}{
 		{"jobs/us-brace-16ft.yaml", []string{"BR-16.dxf", "BR-16-member.cam.dxf", "BR-16-plate.cam.dxf",
-			"BR-16-member.nc1", "BR-16-plate.nc1"}},
+			"BR-16-member.nc1", "BR-16-plate.nc1", "BR-16.parts.csv"}},
 		{"jobs/si-double-angle.yaml", []string{"TD-21.b.dxf", "TD-21.b-member.cam.dxf", "TD-21.b-plate.cam.dxf",
-			"TD-21.b-member.nc1", "TD-21.b-plate.nc1"}}, // a mirror far end: the opposite hand is the same piece
+			"TD-21.b-member.nc1", "TD-21.b-plate.nc1", "TD-21.b.parts.csv"}}, // a mirror far end: the opposite hand is the same piece
 	} {
 		t.Run(filepath.Base(tt.job), func(t *testing.T) {
 			job, _ := filepath.Abs(filepath.Join(testdata, tt.job))

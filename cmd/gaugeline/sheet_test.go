@@ -51,8 +51,8 @@ func TestSheetCommand(t *testing.T) {
 		files []string // with --not-for-fabrication when code is 1
 		units string
 	}{
-		{"jobs/si-double-angle.yaml", 0, []string{"TD-21.b-member.cam.dxf", "TD-21.b-plate.cam.dxf", "TD-21.b.dxf"}, "4"},
-		{"jobs/si-slotted.yaml", 0, []string{"KB-40-member.cam.dxf", "KB-40-plate.cam.dxf", "KB-40.dxf"}, "4"},
+		{"jobs/si-double-angle.yaml", 0, []string{"TD-21.b-member.cam.dxf", "TD-21.b-plate.cam.dxf", "TD-21.b.parts.csv", "TD-21.b.dxf"}, "4"},
+		{"jobs/si-slotted.yaml", 0, []string{"KB-40-member.cam.dxf", "KB-40-plate.cam.dxf", "KB-40.parts.csv", "KB-40.dxf"}, "4"},
 		{"jobs/us-single-angle.yaml", 1, []string{"HB-7.dxf"}, "1"},
 		{"jobs/us-staggered-flat.yaml", 1, []string{"FT_03.dxf"}, "1"},
 		{"examples/aisc-d2.yaml", 1, []string{"AISC-D2.dxf"}, "1"}, // no plate
@@ -82,8 +82,8 @@ func TestSheetCommand(t *testing.T) {
 				t.Fatalf("wrote %v, want %v", names, want)
 			}
 			for _, n := range names {
-				if strings.HasSuffix(n, fileset.ManifestExt) {
-					continue
+				if strings.HasSuffix(n, fileset.ManifestExt) || strings.HasSuffix(n, ".parts.csv") {
+					continue // not DXF
 				}
 				data, err := os.ReadFile(filepath.Join(out, n))
 				if err != nil {
@@ -129,7 +129,7 @@ func TestSheetOfDemoJob(t *testing.T) {
 	if r := gaugeline(t, ".", "sheet", job, "-o", dir); r.code != 0 {
 		t.Fatalf("exit %d: %s", r.code, r.stderr)
 	}
-	if want := setOf("PR-VB2", "PR-VB2-member.cam.dxf", "PR-VB2-plate.cam.dxf", "PR-VB2.dxf"); !slices.Equal(outFiles(t, dir), want) {
+	if want := setOf("PR-VB2", "PR-VB2-member.cam.dxf", "PR-VB2-plate.cam.dxf", "PR-VB2.parts.csv", "PR-VB2.dxf"); !slices.Equal(outFiles(t, dir), want) {
 		t.Errorf("wrote %v, want %v", outFiles(t, dir), want)
 	}
 	// Asked not for fabrication, a passing job gets the stamped sheet alone.
