@@ -37,7 +37,7 @@ func TestSheetDXFR12(t *testing.T) {
 		t.Fatalf("--dxf r12: exit %d: %s", r.code, r.stderr)
 	}
 	names := r12Names("KB-40", "member", "plate")
-	if got, want := outFiles(t, r12), setOf("KB-40", names...); !slices.Equal(got, want) {
+	if got, want := outFiles(t, r12), setOf("KB-40", append(names, "KB-40.parts.csv")...); !slices.Equal(got, want) {
 		t.Fatalf("wrote %v, want %v", got, want)
 	}
 	manifest, err := os.ReadFile(filepath.Join(r12, "KB-40", "KB-40"+fileset.ManifestExt))
