@@ -48,6 +48,9 @@ type Job struct {
 	// mode, input hash); "" when nothing is stamped. The caller sets it;
 	// the JSON, the HTML report and every DXF of a file set carry it.
 	Stamp string
+	// ConnectorsChosen says propose chose member.connectors (the job left
+	// them to it): the written job gives them.
+	ConnectorsChosen bool
 
 	// Raw holds every scalar as written in the file, keyed by field path,
 	// so that a rewritten job can re-emit the user's own spelling.

@@ -58,6 +58,9 @@ func WriteJob(j *jobfile.Job, l Layout) ([]byte, error) {
 	if l.Lines > 1 {
 		set = append(set, bolt("gage2", f(l.Gage2), "!!str"))
 	}
+	if j.ConnectorsChosen {
+		set = append(set, jobfile.Setting{Block: "member", Key: "connectors", Value: strconv.Itoa(j.Member.Buckling.Connectors), Tag: "!!int"})
+	}
 	if j.Plate != nil {
 		if j.Plate.AutoThickness {
 			set = append(set, jobfile.Setting{Block: "plate", Key: "thickness", Value: l.thicknessValue(sys), Tag: "!!str"})
@@ -152,12 +155,15 @@ type jsonSearch struct {
 
 type jsonProposal struct {
 	detail.Document
-	Layout       jsonLayout        `json:"layout"`
-	Plate        *jsonPlateLayout  `json:"plate,omitempty"`
-	Bolts        int               `json:"bolts"`
-	Length       detail.JSONNum    `json:"length"`
-	GageSource   string            `json:"gage_source"`
-	GageNote     string            `json:"gage_note"`
+	Layout     jsonLayout       `json:"layout"`
+	Plate      *jsonPlateLayout `json:"plate,omitempty"`
+	Bolts      int              `json:"bolts"`
+	Length     detail.JSONNum   `json:"length"`
+	GageSource string           `json:"gage_source"`
+	GageNote   string           `json:"gage_note"`
+	// Connectors is member.connectors where propose chose them (two
+	// pieces back to back), else absent.
+	Connectors   *int              `json:"connectors,omitempty"`
 	Alternatives []jsonAlternative `json:"alternatives"`
 	Search       jsonSearch        `json:"search"`
 }
@@ -222,6 +228,10 @@ func (p *Proposal) JSON(mode SearchMode) ([]byte, error) {
 		d := jsonProposal{Document: p.Report.Document(), Layout: jl, Plate: jp, Bolts: p.Layout.Bolts(),
 			Length: lengthJSON(p.Length, sys), GageSource: p.GageSource, GageNote: p.GageNote, Alternatives: []jsonAlternative{},
 			Search: p.search(mode)}
+		if p.Job.ConnectorsChosen {
+			n := p.Job.Member.Buckling.Connectors
+			d.Connectors = &n
+		}
 		for _, a := range p.Alternatives {
 			al, ap := a.Layout.json(sys)
 			d.Alternatives = append(d.Alternatives, jsonAlternative{Layout: al, Plate: ap, Bolts: a.Layout.Bolts(),
@@ -293,6 +303,10 @@ func (p *Proposal) writeHead(b *strings.Builder, mode SearchMode, md bool) {
 	}
 	if jp != nil {
 		fmt.Fprintf(b, "plate:\n  thickness: %s\n  edge: %s\n", jp.Thickness, jp.Edge)
+	}
+	if p.Job.ConnectorsChosen {
+		fmt.Fprintf(b, "member:\n  connectors: %d   # intermediate connectors between the two pieces (%s)\n",
+			p.Job.Member.Buckling.Connectors, connectorRule(p))
 	}
 	if md {
 		b.WriteString("```\n")
@@ -387,4 +401,12 @@ func (p *Proposal) WriteMarkdown(w io.Writer, mode SearchMode) error {
 	}
 	_, err := fmt.Fprintf(w, "\n> %s\n", detail.Caution)
 	return err
+}
+
+// connectorRule names the rule the chosen connectors meet.
+func connectorRule(p *Proposal) string {
+	if p.Report != nil && p.Report.Design.Conn.Compression > 0 {
+		return "E6.2: a/ri at most 3/4 of the member's Lc/r"
+	}
+	return "D4: a/ri preferably at most 300"
 }

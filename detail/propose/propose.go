@@ -199,6 +199,7 @@ func (p *Proposal) Found() bool { return p.Report != nil }
 // *SearchLimitError; a job where nothing passes is a Proposal with
 // Blockers.
 func Propose(j *jobfile.Job, opt ProposeOptions) (*Proposal, error) {
+	j = withConnectors(j)
 	p, err := newProblem(j)
 	if err != nil {
 		return nil, err

@@ -138,3 +138,50 @@ func TestRemedyLargerChannel(t *testing.T) {
 		t.Fatalf("the remedy's job does not pass check (%v)", err)
 	}
 }
+
+// Two angles back to back that push, their connectors left to propose:
+// it lays out the fewest intermediate connectors that keep each angle's
+// a/ri within 3/4 of the pair's governing Lc/r (AISC 360-16 E6.2), writes
+// them into the job (member.connectors), and that job passes check; one
+// connector fewer fails connectors.spacing.
+func TestProposeChoosesConnectors(t *testing.T) {
+	j, err := jobfile.LoadJob("../../testdata/propose/us-double-angle-strut-connectors.yaml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	p, err := Propose(j, ProposeOptions{})
+	if err != nil || !p.Found() {
+		t.Fatalf("propose: %v, found %v", err, p != nil && p.Found())
+	}
+	n := p.Job.Member.Buckling.Connectors
+	if !p.Job.ConnectorsChosen || n < 1 {
+		t.Fatalf("connectors chosen %v, %d: want at least one", p.Job.ConnectorsChosen, n)
+	}
+	lj, err := jobfile.ParseJob("written.yaml", p.LayoutJob)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if lj.Member.Buckling.Connectors != n {
+		t.Errorf("written job has %d connectors, propose chose %d", lj.Member.Buckling.Connectors, n)
+	}
+	r, err := detail.CheckJob(lj)
+	if err != nil || !r.Pass {
+		t.Fatalf("the written job does not pass check (%v)", err)
+	}
+	lj.Member.Buckling.Connectors = n - 1
+	d, err := detail.Build(lj)
+	if err != nil {
+		t.Fatal(err)
+	}
+	fewer, err := detail.Check(d)
+	if err != nil {
+		t.Fatal(err)
+	}
+	failed := false
+	for _, f := range fewer.Findings {
+		failed = failed || (f.ID == "connectors.spacing" && !f.Pass)
+	}
+	if !failed {
+		t.Errorf("with %d connectors E6.2 still passes: propose did not choose the fewest", n-1)
+	}
+}
