@@ -13,6 +13,7 @@ import (
 
 	"github.com/spf13/cobra"
 
+	"gaugeline/batch"
 	"gaugeline/detail"
 	"gaugeline/detail/calc"
 	"gaugeline/detail/jobfile"
@@ -20,8 +21,10 @@ import (
 	"gaugeline/detail/propose"
 	"gaugeline/detail/qa"
 	"gaugeline/detail/sheet"
+	"gaugeline/detail/texttab"
 	"gaugeline/dxfout"
 	"gaugeline/fileset"
+	"gaugeline/ncout"
 	"gaugeline/rules/units"
 )
 
@@ -159,9 +162,25 @@ func demoWrite(r *detail.Report, jobYAML []byte, how, dir string, out io.Writer)
 	if err != nil {
 		return err
 	}
-	dxfs, err := dxfout.Files(s)
+	// the shop-floor files too: R12 beside each CAM file, DSTV NC1 and the
+	// parts list, as sheet --dxf r12 --nc1 writes them
+	dxfs, err := dxfout.FilesAs(s, dxfout.CAMWithR12)
 	if err != nil {
 		return err
+	}
+	if r.Pass {
+		nc, err := ncout.Files(r, s)
+		if err != nil {
+			return err
+		}
+		dxfs = append(dxfs, nc...)
+		if parts := batch.PartsOf(r, s, dxfs); parts != nil {
+			data, err := batch.PartsCSV(parts)
+			if err != nil {
+				return err
+			}
+			dxfs = append(dxfs, fileset.Stamped(fileset.File{Name: mark + batch.PartsExt, Data: data}, d.Job.Stamp))
+		}
 	}
 	files := append([]fileset.File{
 		fileset.Stamped(fileset.File{Name: mark + ".yaml", Data: jobYAML}, d.Job.Stamp),
@@ -182,7 +201,14 @@ func demoWrite(r *detail.Report, jobYAML []byte, how, dir string, out io.Writer)
 	for i, f := range files {
 		names[i] = f.Name
 	}
-	fmt.Fprintf(out, "  wrote    %s/: %s\n\n", mark, strings.Join(names, ", "))
+	for k, line := range texttab.Wrap(fmt.Sprintf("%s/: %s", mark, strings.Join(names, ", ")), texttab.Width-11) {
+		lead := "           "
+		if k == 0 {
+			lead = "  wrote    "
+		}
+		fmt.Fprintf(out, "%s%s\n", lead, line)
+	}
+	fmt.Fprintln(out)
 	return nil
 }
 
