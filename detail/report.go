@@ -366,8 +366,8 @@ func compressionCautions(d *Design) []string {
 	case st.BuiltUp:
 		m += fmt.Sprintf("; the two pieces by %s's modified slenderness with %d intermediate connectors (%s)", ed.Clause("E6"), st.Connectors, connectorKind(st))
 	}
-	if st.Kind == engine.StrutFlexural && conn.Member.Shape != engine.Flat {
-		m += "; torsional buckling of the doubly symmetric section is not examined"
+	if st.Kind == engine.StrutFlexural && st.BuiltUp {
+		m += "; torsional buckling of the doubly symmetric pair is not examined"
 	}
 	c = append(c, m+".")
 	if pl := conn.Plate; pl != nil {

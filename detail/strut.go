@@ -114,9 +114,13 @@ func (j job) rolledStrut(sh section.Shape, props section.ShapeProps) *engine.Str
 		s.SnugTight = !j.Member.Buckling.ConnectorTight
 		web.Count = 2
 		s.Elements = []engine.Element{flanges(4, sh.Bf), web}
-	default: // W: flexural about both axes (torsional buckling not examined)
+	default: // W: flexural about both axes, torsional (E4-4) with Cw = Iy·ho²/4
 		s.Kind = engine.StrutFlexural
 		s.Rx, s.Ry = props.Rx, props.Ry
+		ho := float64(sh.D - sh.Tf)
+		iy := float64(props.Area) * float64(props.Ry*props.Ry)
+		s.Cw = iy * ho * ho / 4
+		s.J = (2*float64(sh.Bf)*tf*tf*tf + float64(sh.D-2*sh.Tf)*tw*tw*tw) / 3
 		s.Elements = []engine.Element{flanges(4, sh.Bf/2), web}
 	}
 	return &s
