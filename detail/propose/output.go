@@ -176,16 +176,11 @@ type jsonBlocker struct {
 }
 
 type jsonRemedy struct {
-	Kind      string           `json:"kind"`
-	Change    string           `json:"change"`
-	Value     string           `json:"value"`
-	Member    string           `json:"member,omitempty"`
-	Layout    jsonLayout       `json:"layout"`
-	Plate     *jsonPlateLayout `json:"plate,omitempty"`
-	Bolts     int              `json:"bolts"`
-	Length    detail.JSONNum   `json:"length"`
-	Governing string           `json:"governing"`
-	Ratio     detail.JSONNum   `json:"ratio"`
+	Kind   string `json:"kind"`
+	Change string `json:"change"`
+	Value  string `json:"value"`
+	Member string `json:"member,omitempty"`
+	jsonAlternative
 }
 
 type jsonInfeasible struct {
@@ -248,8 +243,8 @@ func (p *Proposal) JSON(mode SearchMode) ([]byte, error) {
 		for _, r := range p.Remedies {
 			rl, rp := r.Layout.json(sys)
 			d.Remedies = append(d.Remedies, jsonRemedy{Kind: r.Kind.String(), Change: r.Change, Value: r.Value, Member: r.Member,
-				Layout: rl, Plate: rp, Bolts: r.Layout.Bolts(), Length: lengthJSON(r.Length, sys), Governing: r.Governing,
-				Ratio: detail.JSONNum(r.Ratio)})
+				jsonAlternative: jsonAlternative{Layout: rl, Plate: rp, Bolts: r.Layout.Bolts(), Length: lengthJSON(r.Length, sys),
+					Governing: r.Governing, Ratio: detail.JSONNum(r.Ratio)}})
 		}
 		doc = d
 	}

@@ -139,12 +139,7 @@ type Demand struct {
 // unfavourable choice, acting or not. The first combination reaching the
 // largest value is named, with the reversed loads it takes ("W reversed").
 func Demands(m rules.Method, l ServiceLoads, r Reverses) (tension, compression Demand) {
-	combos := lrfdCombinations
-	if m == rules.ASD {
-		combos = asdCombinations
-	}
-	var rev [nLoads]bool
-	rev[loadW], rev[loadE] = r.W, r.E
+	combos, rev := setup(m, r)
 	v := l.values()
 	prefix := "ASCE 7 " + m.String() + ": "
 	pick := func(sign float64) Demand {
@@ -180,12 +175,7 @@ type Row struct {
 // for LRFD, 2.4.1 for ASD) worked for the service loads, in the
 // standard's order: what Demands picks the governing ones from.
 func Table(m rules.Method, l ServiceLoads, r Reverses) []Row {
-	combos := lrfdCombinations
-	if m == rules.ASD {
-		combos = asdCombinations
-	}
-	var rev [nLoads]bool
-	rev[loadW], rev[loadE] = r.W, r.E
+	combos, rev := setup(m, r)
 	v := l.values()
 	rows := make([]Row, len(combos))
 	for i, c := range combos {
@@ -194,4 +184,15 @@ func Table(m rules.Method, l ServiceLoads, r Reverses) []Row {
 		rows[i] = Row{Name: c.name, Tension: max(t, 0), Compression: max(cp, 0), Reversed: reversed}
 	}
 	return rows
+}
+
+// setup is the method's combinations and which load types reverse.
+func setup(m rules.Method, r Reverses) ([]combination, [nLoads]bool) {
+	combos := lrfdCombinations
+	if m == rules.ASD {
+		combos = asdCombinations
+	}
+	var rev [nLoads]bool
+	rev[loadW], rev[loadE] = r.W, r.E
+	return combos, rev
 }
