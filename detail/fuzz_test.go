@@ -47,6 +47,17 @@ func FuzzParseJob(f *testing.F) {
 		}
 		checkFinite(t, "design", reflect.ValueOf(&d.Conn))
 		checkFinite(t, "design info", reflect.ValueOf(&d.Info))
+		// and the check of what it built never panics, nor gives a
+		// strength that is not a number
+		r, err := Check(d)
+		if err != nil {
+			return
+		}
+		for _, x := range r.Results {
+			if math.IsNaN(float64(x.Nominal)) || math.IsNaN(float64(x.Available)) || x.Nominal < 0 {
+				t.Fatalf("%s: Rn %v, available %v", x.ID, x.Nominal, x.Available)
+			}
+		}
 	})
 }
 
