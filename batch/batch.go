@@ -391,13 +391,19 @@ func (r Row) fields() []string {
 
 // SummaryCSV is summary.csv: a header, then one row per job.
 func SummaryCSV(rows []Row) ([]byte, error) {
+	lines := make([][]string, len(rows))
+	for i, r := range rows {
+		lines[i] = r.fields()
+	}
+	return csvOf(Header, lines)
+}
+
+// csvOf is a CSV file: the header line, then the lines.
+func csvOf(header []string, lines [][]string) ([]byte, error) {
 	var b bytes.Buffer
 	w := csv.NewWriter(&b)
-	w.Write(Header)
-	for _, r := range rows {
-		w.Write(r.fields())
-	}
-	w.Flush()
+	w.Write(header)
+	w.WriteAll(lines) // flushes
 	return b.Bytes(), w.Error()
 }
 

@@ -1,8 +1,6 @@
 package batch
 
 import (
-	"bytes"
-	"encoding/csv"
 	"math"
 	"strconv"
 	"strings"
@@ -83,14 +81,11 @@ func (p Part) fields() []string {
 
 // PartsCSV is a parts list: the header, then one line per part.
 func PartsCSV(parts []Part) ([]byte, error) {
-	var b bytes.Buffer
-	w := csv.NewWriter(&b)
-	w.Write(PartsHeader)
-	for _, p := range parts {
-		w.Write(p.fields())
+	lines := make([][]string, len(parts))
+	for i, p := range parts {
+		lines[i] = p.fields()
 	}
-	w.Flush()
-	return b.Bytes(), w.Error()
+	return csvOf(PartsHeader, lines)
 }
 
 // AllParts is the batch's parts list: every set's parts, in the rows'
