@@ -201,7 +201,7 @@ func diametersHint(ed *rules.Edition) string {
 
 // boltName writes a bolt diameter as a shop says it: "3/4 in", "M20".
 func boltName(d units.Length, sys units.System) string {
-	if sys == units.SI || Metric(d) {
+	if _, metric := units.MetricBolt(d); sys == units.SI || metric {
 		return fmt.Sprintf("M%g", d.Mm())
 	}
 	return units.FormatJob(d, units.US)
@@ -301,17 +301,6 @@ func (j job) buildFlat(mem *engine.Member, info *detailing.MemberInfo) {
 	mem.Strut = j.flatStrut(m.Width, m.Thickness)
 	info.Designation = "PL " + compact(m.Width, j.Units) + "x" + compact(m.Thickness, j.Units)
 	info.Rmin = units.Length(float64(min(m.Width, m.Thickness)) / math.Sqrt(12))
-}
-
-// sheetElement names a rolled section's connected element: "web" (a
-// channel's, between its flanges) or "flange".
-func sheetElement(m *engine.Member) string {
-	for _, j := range m.Junctions {
-		if j.Name == "flange" {
-			return "web"
-		}
-	}
-	return "flange"
 }
 
 // buildRolled sets the section of a rolled shape from the catalog
@@ -574,7 +563,7 @@ func (j job) buildHoles(ed *rules.Edition, d *Design) error {
 	room, part := m.ClearWidth(), "flat"
 	switch {
 	case len(m.Junctions) > 0:
-		part = "section's " + strings.ToLower(sheetElement(m)) + " between its junctions"
+		part = "section's " + strings.TrimSuffix(m.ConnectedElement(), "s") + " between its junctions"
 	case m.Heel():
 		part = "leg"
 	}

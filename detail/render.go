@@ -135,17 +135,10 @@ func lastX(hs []engine.Hole) units.Length {
 
 // BoltSize names a bolt diameter: 3/4" or M20.
 func BoltSize(d units.Length, sys units.System) string {
-	if sys == units.SI || Metric(d) {
+	if _, metric := units.MetricBolt(d); sys == units.SI || metric {
 		return fmt.Sprintf("M%g", math.Round(float64(d)))
 	}
 	return units.FormatLength(d, units.US, units.Shop)
-}
-
-// Metric reports whether a bolt diameter is a metric size (whole
-// millimetres; no inch size from 1/2 to 1-1/2 in is one): an M20 in a US
-// job prints as M20, not 0.787402 in.
-func Metric(d units.Length) bool {
-	return math.Abs(float64(d)-math.Round(float64(d))) < 1e-6
 }
 
 // VerdictReason says what decided the verdict, for the line after it: a

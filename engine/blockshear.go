@@ -283,12 +283,7 @@ func connectedName(m *Member) string {
 	if m.Pieces > 1 {
 		return PieceName(m.Shape) + "s"
 	}
-	for _, j := range m.Junctions {
-		if j.Name == "flange" {
-			return "web"
-		}
-	}
-	return "flange"
+	return m.ConnectedElement()
 }
 
 // PlateBlockShear is block shear of the plate, the weakest of the L-shaped

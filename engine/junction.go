@@ -39,6 +39,21 @@ func (j Junction) Offset(y units.Length, s int) units.Length {
 	return units.Length(s) * (y - j.At)
 }
 
+// ConnectedElement names the element of a rolled section the holes are
+// in, by the junctions on it: "web" (its edges join flanges), "flanges"
+// (a W's two, Apart) or "flange".
+func (m *Member) ConnectedElement() string {
+	for _, j := range m.Junctions {
+		if j.Name == "flange" {
+			return "web"
+		}
+	}
+	if Apart(m.Shape) {
+		return "flanges"
+	}
+	return "flange"
+}
+
 // TearOff is the block a rolled section has besides those in the plane of
 // its connected element (the AISC teaching model of a WT bolted through
 // its flange, aisc-org/aisc-model-viewer src/wt-plate/calculations.md,

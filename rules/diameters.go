@@ -70,12 +70,11 @@ func (e *Edition) tabulated(d units.Length, table string) (float64, error) {
 // diameterKey names a bolt diameter the way the tables do: "M14" (in
 // either system), "d = 14.5 mm", "d = 1-3/4 in", "d = 0.8 in".
 func (e *Edition) diameterKey(d units.Length) string {
-	mm := d.Mm()
-	if n := math.Round(mm); n > 0 && math.Abs(mm-n) <= 1e-6 {
-		return "M" + strconv.Itoa(int(n)) // a metric bolt keeps its name in a US job too
+	if n, ok := units.MetricBolt(d); ok {
+		return "M" + strconv.Itoa(n) // a metric bolt keeps its name in a US job too
 	}
 	if e.si() {
-		return fmt.Sprintf("d = %g mm", mm)
+		return fmt.Sprintf("d = %g mm", d.Mm())
 	}
 	return "d = " + units.FormatJob(d, units.US)
 }

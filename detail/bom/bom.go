@@ -412,8 +412,8 @@ func WeightText(w float64) string { return fmt.Sprintf("%.1f", w) }
 // BoltText names a bolt for the list: 3/4" A325 x 2-1/4", M20 A325M x 55.
 func (s BoltSet) BoltText(sys units.System) string {
 	size := units.FormatLength(s.D, units.US, units.Shop)
-	if mm := float64(s.D); sys == units.SI || math.Abs(mm-math.Round(mm)) < 1e-6 { // a metric bolt is an M bolt in any job
-		size = fmt.Sprintf("M%g", math.Round(mm))
+	if _, metric := units.MetricBolt(s.D); sys == units.SI || metric {
+		size = fmt.Sprintf("M%g", math.Round(float64(s.D)))
 	}
 	t := size + " " + s.Grade
 	if s.Length > 0 {

@@ -801,17 +801,7 @@ func (l sheetLayout) holeText(h engine.HoleShape) string {
 
 // ConnectedElement is what the member view shows of a rolled section:
 // "FLANGE", "FLANGES" or "WEB".
-func ConnectedElement(m *engine.Member) string {
-	for _, j := range m.Junctions {
-		if j.Name == "flange" {
-			return "WEB"
-		}
-	}
-	if engine.Apart(m.Shape) {
-		return "FLANGES"
-	}
-	return "FLANGE"
-}
+func ConnectedElement(m *engine.Member) string { return strings.ToUpper(m.ConnectedElement()) }
 
 // PiecesNote is the note over the view of a member of two pieces.
 func PiecesNote(m *engine.Member) string {

@@ -100,6 +100,14 @@ func (l Length) In() float64 { return float64(l / Inch) }
 // Mm returns the length in millimetres.
 func (l Length) Mm() float64 { return float64(l) }
 
+// MetricBolt reports whether a bolt diameter is a metric size, whole
+// millimetres (no inch size from 1/2 to 1-1/2 in is one), and which: an
+// M20 keeps its name in a US job.
+func MetricBolt(d Length) (mm int, ok bool) {
+	n := math.Round(float64(d))
+	return int(n), n > 0 && math.Abs(float64(d)-n) <= 1e-6
+}
+
 // Kip returns the force in kips.
 func (f Force) Kip() float64 { return float64(f / Kip) }
 
