@@ -242,24 +242,31 @@ func shearLagWorking(m Member, sys units.System, Ag, u Value, sl ShearLag, xbar,
 	} else {
 		steps = append(steps, Step{Then: working.Words("U (case 2): one row of bolts, no length of connection")})
 	}
-	if u8 != nil {
-		terms = append(terms, working.Of(Value{Sym: "U case 8", V: sl.U8}))
-		values = append(values, working.Of(*u8))
-		where += "; case 8 for angles is 0.80 with 4 or more bolts in a line, 0.60 with 3"
-		if sl.U8 > 0 {
-			steps = append(steps, Step{Value: *u8})
-		} else {
-			steps = append(steps, Step{Then: working.Words("U (case 8) does not apply: fewer than 3 bolts in a line")})
+	// the fixed-value cases the shape names: 8 (angles), 7 (W and WT)
+	for _, c := range []struct {
+		v            *Value
+		u            float64
+		sym, words   string
+		then, notApp string
+	}{
+		{u8, sl.U8, "U case 8", "; case 8 for angles is 0.80 with 4 or more bolts in a line, 0.60 with 3", "",
+			"U (case 8) does not apply: fewer than 3 bolts in a line"},
+		{u7, sl.U7, "U case 7", "; case 7 for W shapes and the tees cut from them, by the flanges with 3 or more bolts in a line, is 0.90 with bf ≥ 2/3·d (d of the W), else 0.85",
+			case7Words(m, sys), "U (case 7) does not apply: fewer than 3 bolts in a line"},
+	} {
+		if c.v == nil {
+			continue
 		}
-	}
-	if u7 != nil {
-		terms = append(terms, working.Of(Value{Sym: "U case 7", V: sl.U7}))
-		values = append(values, working.Of(*u7))
-		where += "; case 7 for W shapes and the tees cut from them, by the flanges with 3 or more bolts in a line, is 0.90 with bf ≥ 2/3·d (d of the W), else 0.85"
-		if sl.U7 > 0 {
-			steps = append(steps, Step{Value: *u7, Then: working.Words(case7Words(m, sys))})
-		} else {
-			steps = append(steps, Step{Then: working.Words("U (case 7) does not apply: fewer than 3 bolts in a line")})
+		terms = append(terms, working.Of(Value{Sym: c.sym, V: c.u}))
+		values = append(values, working.Of(*c.v))
+		where += c.words
+		switch {
+		case c.u > 0 && c.then != "":
+			steps = append(steps, Step{Value: *c.v, Then: working.Words(c.then)})
+		case c.u > 0:
+			steps = append(steps, Step{Value: *c.v})
+		default:
+			steps = append(steps, Step{Then: working.Words(c.notApp)})
 		}
 	}
 	terms = append(terms, working.Of(Value{Sym: "U bound", V: sl.Ucon}))
