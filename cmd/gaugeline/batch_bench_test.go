@@ -285,7 +285,7 @@ func BenchmarkBatch(b *testing.B) {
 		b.Run(bb.name, func(b *testing.B) {
 			src := writeBenchJobs(b, n, bb.job)
 			o := &rootOptions{stdout: io.Discard, stderr: io.Discard}
-			bo := batchOptions{propose: bb.args[0] == "--propose", sheets: true}
+			bo := batchOptions{propose: bb.args[0] == "--propose", sheets: true, dxf: "2000", format: "text"}
 			var summary strings.Builder
 			runtime.GC()
 			var cpu time.Duration
