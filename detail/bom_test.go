@@ -44,9 +44,9 @@ func TestAngleWeightsAgainstTheTables(t *testing.T) {
 		perUnit   float64 // lb/ft or kg/m
 		source    string
 	}{
-		{"us", "L4x4x1/2", 12.8, "AISC Manual Table 1-7, from memory"},
-		{"us", "L6x6x1/2", 19.6, "AISC Manual Table 1-7, from memory"},
-		{"us", "L3-1/2x3-1/2x3/8", 8.5, "AISC Manual Table 1-7, from memory"},
+		{"us", "L4x4x1/2", 12.8, "AISC Manual Table 1-7 (AISC Shapes Database v15.0, read)"},
+		{"us", "L6x6x1/2", 19.6, "AISC Manual Table 1-7 (AISC Shapes Database v15.0, read)"},
+		{"us", "L3-1/2x3-1/2x3/8", 8.5, "AISC Manual Table 1-7 (AISC Shapes Database v15.0, read)"},
 		{"si", "L100x100x10", 15.0, "EN 10056-1 tables (e.g. the Blue Book), from memory"},
 	} {
 		length, per := "10 ft", 10.0

@@ -42,12 +42,12 @@ func TestDesignGuide29Example51(t *testing.T) {
 			t.Errorf("gusset: case %q, Fcr %g, want the compression case at Fy (KL/r ≤ 25, J4.4(a))", pc.Case, value(t, pc, "Fcr"))
 		}
 	}
-	// The brace in tension: the catalog's L8x6x1 takes its area from the
-	// nominal dimensions, 13.0 in² a piece, 0.8 % under the Design Guide's
-	// 26.2 in² for the pair; yielding, An and rupture follow it (1.2 %).
+	// The brace in tension: the catalog's L8x6x1 carries the AISC Shapes
+	// Database's 13.1 in² a piece, the Design Guide's 26.2 in² for the
+	// pair; yielding, An, Ae and rupture follow it.
 	_, rs := checkExample(t, "../testdata/examples/dg29-5-1.yaml", rules.LRFD)
 	rup := rs["member.rupture"]
-	within(t, 0.012, []published{
+	within(t, 0.005, []published{
 		{"brace yielding", rs["member.yield"].Available.Kip(), 849, src},
 		{"An", value(t, rup, "An") / in2, 22.2, src},
 		{"Ae", value(t, rup, "Ae") / in2, 20.2, src},
@@ -59,24 +59,26 @@ func TestDesignGuide29Example51(t *testing.T) {
 // A single angle L5x3x1/2, Fy 50 ksi, 5 ft, through its long leg, by E5:
 // φPn = 52.8 kips as a third-party test (co1emi11er2/AISCSteel.jl) quotes
 // AISC Design Examples "Example E.14A" (AISC's text not read). The
-// catalog's ra from the nominal dimensions is 0.829 in against the 0.824
-// in the quoted result implies, which moves φPn by 0.6 %: compared at 1 %.
-// The steps are checked exactly against E5-1 and E3-3 with gaugeline's own
-// ra (hand calculation).
+// catalog's ra is the AISC Shapes Database's ry = 0.824 in and Ag its
+// 3.75 in²; the ASD strength and the steps are checked by hand from those
+// published inputs (E5-1, E3-4, E3-3, E1).
 func TestSingleAngleE5(t *testing.T) {
 	const src = "AISC Design Examples Example E.14A as quoted by co1emi11er2/AISCSteel.jl"
+	const hand = "AISC 360-16 E5-1, E3-3, E1 by hand from the AISC Shapes Database's Ag = 3.75 in², ry = 0.824 in"
 	_, rs := checkExample(t, "../testdata/examples/e14a-l5x3.yaml", rules.LRFD)
 	mc := rs["member.compression"]
-	within(t, 0.01, []published{{"φPn", mc.Available.Kip(), 52.8, src}})
-	ra := value(t, mc, "ra") / float64(units.Inch)
-	lcr := 72 + 0.75*60/ra
+	within(t, 0.005, []published{{"φPn", mc.Available.Kip(), 52.8, src}})
+	lcr := 72 + 0.75*60/0.824 // L/ra = 72.8 ≤ 80
 	fe := math.Pi * math.Pi * 29000 / (lcr * lcr)
-	fcr := 0.877 * fe // Fy/Fe = 50/17.9 > 2.25
-	within(t, 1e-9, []published{
-		{"Lc/r (E5-1)", value(t, mc, "Lc_r"), lcr, "AISC 360-16 Eq. E5-1, hand calculation"},
-		{"Fcr (E3-3)", value(t, mc, "Fcr") / float64(units.Ksi), fcr, "AISC 360-16 Eq. E3-3, hand calculation"},
-		{"φPn", mc.Available.Kip(), 0.9 * fcr * value(t, mc, "Ag") / in2, "AISC 360-16 E1, E3"},
+	fcr := 0.877 * fe // 4.71√(E/Fy) = 113 < Lc/r
+	within(t, 1e-3, []published{
+		{"ra", value(t, mc, "ra") / float64(units.Inch), 0.824, hand},
+		{"Lc/r (E5-1)", value(t, mc, "Lc_r"), lcr, hand},
+		{"Fcr (E3-3)", value(t, mc, "Fcr") / float64(units.Ksi), fcr, hand},
+		{"φPn", mc.Available.Kip(), 0.9 * fcr * 3.75, hand},
 	})
+	_, rs = checkExample(t, "../testdata/examples/e14a-l5x3.yaml", rules.ASD)
+	within(t, 1e-3, []published{{"Pn/Ω", rs["member.compression"].Available.Kip(), fcr * 3.75 / 1.67, hand}})
 	if !strings.Contains(mc.Note, "E5") || mc.Case != "compression" {
 		t.Errorf("note %q, case %q: want E5's effective slenderness in the compression case", mc.Note, mc.Case)
 	}

@@ -313,8 +313,8 @@ func TestProfileHeader(t *testing.T) {
 		// A W shape's designation is its nominal weight: 21 lb/ft (AISC
 		// Manual Table 1-1); the area of our geometry is within 1 %.
 		{"aisc-d1-w8x21.yaml", "I", "W8x21", 21 * lbPerFt, 0.01, "AISC Manual Table 1-1, W8x21: 21 lb/ft"},
-		// L4x4x1/2: 12.8 lb/ft (AISC Manual Table 1-7, from memory).
-		{"us-brace-16ft.yaml", "L", "L4x4x1/2", 12.8 * lbPerFt, 0.01, "AISC Manual Table 1-7, from memory"},
+		// L4x4x1/2: 12.8 lb/ft (AISC Manual Table 1-7; AISC Shapes Database v15.0, read).
+		{"us-brace-16ft.yaml", "L", "L4x4x1/2", 12.8 * lbPerFt, 0.01, "AISC Manual Table 1-7 (AISC Shapes Database v15.0, read)"},
 		// L120x80x10: 15.0 kg/m (EN 10056-1's table, from memory).
 		{"si-slotted.yaml", "L", "L120x80x10", 15.0, 0.01, "EN 10056-1, from memory"},
 	} {

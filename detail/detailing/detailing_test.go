@@ -403,13 +403,13 @@ func TestDetailing(t *testing.T) {
 			conn: l4x4(t, us22, angle(in(2.5))),
 			info: MemberInfo{Designation: "L4x4x1/2", K: in(7.0 / 8), Length: in(144), Rmin: in(0.776)},
 			want: []want{
-				// 2.5 − 13/32 = 2.09375 ≥ k = 7/8 (AISC Manual Table 1-7, from memory).
+				// 2.5 − 13/32 = 2.09375 ≥ k = 7/8 (AISC Manual Table 1-7; AISC Shapes Database v15.0, read).
 				{id: "gage.workable", where: "H1 to fillet (k)", measured: 2.5 - 13.0/32, limit: 7.0 / 8, pass: true},
 				// 2.5 − 1/2 = 2 ≥ C1 = 1-1/4 for a 3/4 in bolt (AISC Manual Table 8-4, LRFD-era).
 				{id: "gage.workable", where: "H1 to outstanding leg (tightening clearance C1)", measured: 2, limit: 1.25, pass: true},
 				{id: "edge.min", where: "H1 to member toe", measured: 1.5, limit: 1, pass: true},
 				{id: "edge.max", where: "H1 to member toe", measured: 1.5, limit: 6, pass: true},
-				// L/r = 144/0.776 = 185.6 (rz of L4x4x1/2, AISC Manual Table 1-7, from memory).
+				// L/r = 144/0.776 = 185.6 (rz of L4x4x1/2, AISC Manual Table 1-7; AISC Shapes Database v15.0, read).
 				{id: "slenderness", where: "L4x4x1/2 L/r", measured: 185.6, limit: 300, pass: true, advisory: true, tol: 0.05},
 			},
 			src: "common practice, no source (fillet); AISC Manual Table 8-4 (LRFD-era), C1; AISC 360-22 D1 User Note: L/r ≤ 300",
@@ -423,7 +423,7 @@ func TestDetailing(t *testing.T) {
 				{id: "gage.workable", where: "H1 to outstanding leg (tightening clearance C1)", measured: 0.75, limit: 1.25, pass: false},
 				{id: "slenderness", where: "member L/r", absent: true},
 			},
-			src: "common practice, no source (fillet); C1 = 1-1/4 in for 3/4 in (AISC Manual Table 8-4, LRFD-era); k = 7/8 in for L4x4x1/2 (AISC Manual Table 1-7, from memory)",
+			src: "common practice, no source (fillet); C1 = 1-1/4 in for 3/4 in (AISC Manual Table 8-4, LRFD-era); k = 7/8 in for L4x4x1/2 (AISC Shapes Database v15.0, read)",
 		},
 		{
 			// By hand from the table: t = 1/2, C1(3/4 in) = 1-1/4, so the

@@ -18,6 +18,8 @@ type Angle struct {
 	R1     units.Length // root fillet radius
 	R2     units.Length // toe radius
 	K      units.Length // detailing k: heel to the end of the fillet on the leg's inner face
+
+	tab tabulated // the published properties, for a US catalog angle (zero otherwise)
 }
 
 // Props are the section properties of one angle; see the package comment
@@ -70,13 +72,46 @@ func mm(l units.Length) string {
 // other leg (usually the short one). Name and the radii are unchanged.
 func (a Angle) Swapped() Angle {
 	a.A, a.B = a.B, a.A
+	a.tab.xbar, a.tab.ybar = a.tab.ybar, a.tab.xbar
+	a.tab.rx, a.tab.ry = a.tab.ry, a.tab.rx
 	return a
 }
 
-// Properties computes the section properties from the geometry; see the
-// package comment. It panics on an angle that is not a valid shape (a
-// programmer's mistake: catalog and Custom angles are valid).
+// Tabulated reports whether Properties are the published ones (a US
+// catalog angle: AISC Shapes Database v15.0) rather than the geometry's.
+func (a Angle) Tabulated() bool { return a.tab.area > 0 }
+
+// Properties are the section properties: the published ones for a US
+// catalog angle (see angle_table.go; Iaa, Ibb and Imin are the area times
+// the radius squared), else the geometry's (Geometric). It panics on an
+// angle that is not a valid shape (a programmer's mistake: catalog and
+// Custom angles are valid).
 func (a Angle) Properties() Props {
+	if !a.Tabulated() {
+		return a.Geometric()
+	}
+	if err := a.check(); err != nil {
+		panic("section: " + err.Error())
+	}
+	in := float64(units.Inch)
+	t := a.tab
+	area := t.area * in * in
+	return Props{
+		Area: units.Area(area),
+		Xbar: units.Length(t.xbar * in),
+		Ybar: units.Length(t.ybar * in),
+		// leg A is the database's vertical leg: the axis parallel to it
+		// is y (ry), the one parallel to leg B is x (rx)
+		Iaa:  area * t.ry * t.ry * in * in,
+		Ibb:  area * t.rx * t.rx * in * in,
+		Imin: area * t.rz * t.rz * in * in,
+		Rmin: units.Length(t.rz * in),
+	}
+}
+
+// Geometric computes the section properties from the geometry; see the
+// package comment. It panics on an angle that is not a valid shape.
+func (a Angle) Geometric() Props {
 	if err := a.check(); err != nil {
 		panic("section: " + err.Error())
 	}

@@ -53,7 +53,7 @@ func TestBoundsPublishedValues(t *testing.T) {
 	}
 	in, in2 := float64(units.Inch), float64(units.SquareInch)
 	// AISC Manual Table 1-7, L4x4x1/2: A = 3.75 in², x̄ = 1.18 in,
-	// rz = 0.776 in (from memory; see the package comment).
+	// rz = 0.776 in (AISC Shapes Database v15.0, read).
 	checkBounds(t, "L4x4x1/2 (AISC)", us, Props{Area: units.Area(3.75 * in2), Xbar: units.Length(1.18 * in), Rmin: units.Length(0.776 * in)})
 	si, err := Lookup("L100x100x10", units.SI)
 	if err != nil {

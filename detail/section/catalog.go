@@ -13,34 +13,35 @@ import (
 // sixteenths of an inch.
 type usFamily struct {
 	a, b int   // legs, long leg first
-	kOff int   // kdet − t (from memory; see the package comment)
 	t    []int // thicknesses, in table order
 }
 
-// usFamilies are the common AISC angles (AISC Manual Table 1-7, sizes and
-// thicknesses from memory), in table order.
+// usFamilies are the common AISC angles, in table order: the sizes and
+// thicknesses of AISC Manual Table 1-7 as the AISC Shapes Database v15.0
+// lists them (read; L12, L10, L2-1/2x2, L2-1/2x1-1/2 and L2x2x1/8 are
+// not carried). Each has a row of usTable (kdet and the properties).
 var usFamilies = []usFamily{
-	{128, 128, 10, []int{18, 16, 14, 12, 10, 9, 8}},
-	{128, 96, 10, []int{16, 14, 12, 10, 9, 8, 7}},
-	{128, 64, 10, []int{16, 14, 12, 10, 9, 8, 7}},
-	{112, 64, 8, []int{12, 10, 8, 7, 6}},
-	{96, 96, 8, []int{16, 14, 12, 10, 9, 8, 7, 6, 5}},
-	{96, 64, 8, []int{14, 12, 10, 9, 8, 7, 6, 5}},
-	{96, 56, 8, []int{8, 6, 5}},
-	{80, 80, 6, []int{14, 12, 10, 8, 7, 6, 5}},
-	{80, 56, 6, []int{12, 10, 8, 6, 5, 4}},
-	{80, 48, 6, []int{8, 7, 6, 5, 4}},
-	{64, 64, 6, []int{12, 10, 8, 7, 6, 5, 4}},
-	{64, 56, 6, []int{8, 6, 5, 4}},
-	{64, 48, 6, []int{10, 8, 6, 5, 4}},
-	{56, 56, 6, []int{8, 7, 6, 5, 4}},
-	{56, 48, 6, []int{8, 7, 6, 5, 4}},
-	{56, 40, 6, []int{8, 6, 5, 4}},
-	{48, 48, 6, []int{8, 7, 6, 5, 4, 3}},
-	{48, 40, 6, []int{8, 7, 6, 5, 4, 3}},
-	{48, 32, 6, []int{8, 6, 5, 4, 3}},
-	{40, 40, 4, []int{8, 6, 5, 4, 3}},
-	{32, 32, 4, []int{6, 5, 4, 3, 2}},
+	{128, 128, []int{18, 16, 14, 12, 10, 9, 8}},
+	{128, 96, []int{16, 14, 12, 10, 9, 8, 7}},
+	{128, 64, []int{16, 14, 12, 10, 9, 8, 7}},
+	{112, 64, []int{12, 10, 8, 7, 6}},
+	{96, 96, []int{16, 14, 12, 10, 9, 8, 7, 6, 5}},
+	{96, 64, []int{14, 12, 10, 9, 8, 7, 6, 5}},
+	{96, 56, []int{8, 6, 5}},
+	{80, 80, []int{14, 12, 10, 8, 7, 6, 5}},
+	{80, 56, []int{12, 10, 8, 6, 5, 4}},
+	{80, 48, []int{8, 7, 6, 5, 4}},
+	{64, 64, []int{12, 10, 8, 7, 6, 5, 4}},
+	{64, 56, []int{8, 6, 5, 4}},
+	{64, 48, []int{10, 8, 6, 5, 4}},
+	{56, 56, []int{8, 7, 6, 5, 4}},
+	{56, 48, []int{8, 7, 6, 5, 4}},
+	{56, 40, []int{8, 6, 5, 4}},
+	{48, 48, []int{8, 7, 6, 5, 4, 3}},
+	{48, 40, []int{8, 7, 6, 5, 4, 3}},
+	{48, 32, []int{8, 6, 5, 4, 3}},
+	{40, 40, []int{8, 6, 5, 4, 3}},
+	{32, 32, []int{6, 5, 4, 3, 2}},
 }
 
 // siFamily is one leg pair of EN 10056-1, dimensions in millimetres.
@@ -113,10 +114,16 @@ func catalog(sys units.System) []family {
 			legs := "L" + inches(f.a) + "x" + inches(f.b)
 			fam := family{legs: legs, a: sixteenths(f.a), b: sixteenths(f.b)}
 			for _, t := range f.t {
+				name := legs + "x" + inches(t)
+				tab, ok := usTable[strings.ToUpper(name)]
+				if !ok {
+					panic("section: no published properties for " + name)
+				}
 				fam.angles = append(fam.angles, Angle{
-					Name: legs + "x" + inches(t), System: units.US,
+					Name: name, System: units.US,
 					A: fam.a, B: fam.b, T: sixteenths(t),
-					K: sixteenths(t + f.kOff),
+					K:   units.Length(tab.kdet) * units.Inch,
+					tab: tab,
 				})
 			}
 			fs = append(fs, fam)

@@ -24,9 +24,9 @@ func ExampleLookup() {
 	_, err = section.Lookup("L4x4x9/16", units.US)
 	fmt.Println(err)
 	// Output:
-	// L6x4x1/2: A = 4.75 in2, rz = 0.870 in
-	// 6-in leg bolted: x̄ = 0.987 in
-	// 4-in leg bolted: x̄ = 1.987 in
+	// L6x4x1/2: A = 4.75 in2, rz = 0.864 in
+	// 6-in leg bolted: x̄ = 0.981 in
+	// 4-in leg bolted: x̄ = 1.980 in
 	// section: no angle "L4x4x9/16" in the us catalog; nearby sizes: L4x4x3/4, L4x4x5/8, L4x4x1/2, L4x4x7/16, L4x4x3/8, L4x4x5/16, L4x4x1/4
 }
 
