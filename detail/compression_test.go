@@ -98,3 +98,21 @@ func TestWShapeColumnManualTable41(t *testing.T) {
 		t.Errorf("%s: Fez %g, Fe %g; want flexural buckling to govern", mc.Note, value(t, mc, "Fez"), value(t, mc, "Fe"))
 	}
 }
+
+// Two angles back to back in compression: E4's flexural constant H = 1 −
+// yo²/r̄o² from the catalog's published single-angle values (shear centre
+// at the outstanding legs' mid-thickness, yo = ȳ − t/2) against the AISC
+// Shapes Database v15.0's 2L4X4X1/2X3/8 row, H = 0.848, and the pair's
+// Lc/ry with its ry = 1.83 in (before E6's modification: 96/1.83).
+func TestDoubleAngleFlexuralConstant(t *testing.T) {
+	const src = "AISC Shapes Database v15.0, 2L4X4X1/2X3/8 (H 0.848, ry 1.83 in)"
+	_, rs := checkExample(t, "../testdata/examples/db-2l4x4x1-2.yaml", rules.LRFD)
+	mc := rs["member.compression"]
+	within(t, 0.005, []published{
+		{"H", value(t, mc, "H"), 0.848, src},
+		{"Lc/rx", value(t, mc, "Lc_rx"), 96 / 1.21, src + "; rx 1.21 in"},
+	})
+	if ly := value(t, mc, "Lc_ry"); ly < 96/1.83*(1-0.005) {
+		t.Errorf("Lc/ry = %.1f: E6 may only raise the pair's 96/1.83 = %.1f", ly, 96/1.83)
+	}
+}
