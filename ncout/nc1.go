@@ -8,7 +8,8 @@ import (
 	"gaugeline/fileset"
 )
 
-// Face is one of the standard's face letters (from memory).
+// Face is one of the standard's face letters (as tluijken/dstv's
+// src/part_face.rs reads them: v front, o top, u bottom, h behind).
 type Face byte
 
 const (
@@ -57,10 +58,11 @@ type Piece struct {
 	Comments []string
 }
 
-// HeaderLines is the number of data lines of the ST block (from memory).
+// HeaderLines is the number of data lines of the ST block (both open
+// readers read 24).
 const HeaderLines = 24
 
-// Comment starts a comment line (from memory).
+// Comment starts a comment line (both open readers skip "**" lines).
 const Comment = "**"
 
 // StampComment starts the comment line that carries the run stamp: the
@@ -130,7 +132,12 @@ func num(v float64) string {
 	return s
 }
 
-// text is a text field: one line of printable ASCII, "-" when empty.
+// TextMax is the longest text field a reader takes: 80 characters
+// (Baseflow/DSTV.Net's limit, "according to specification").
+const TextMax = 80
+
+// text is a text field: one line of printable ASCII, at most TextMax
+// characters, "-" when empty.
 func text(s string) string {
 	var b strings.Builder
 	for _, r := range oneLine(s) {
@@ -139,7 +146,11 @@ func text(s string) string {
 		}
 		b.WriteRune(r)
 	}
-	if t := strings.TrimSpace(b.String()); t != "" {
+	t := strings.TrimSpace(b.String())
+	if len(t) > TextMax {
+		t = strings.TrimSpace(t[:TextMax])
+	}
+	if t != "" {
 		return t
 	}
 	return "-"

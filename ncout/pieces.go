@@ -23,6 +23,11 @@ const Ext = ".nc1"
 // is the density every steel weight table is computed with).
 const density = 7850
 
+// plateWeight is the weight field of a piece of profile code B (a plate
+// or a flat bar) of thickness t mm: kg per square metre, as the NC1 files
+// other programs export write it (doc.go).
+func plateWeight(t float64) float64 { return t * 1e-3 * density }
+
 // Files writes the NC1 file of each piece of the sheet: the member
 // (MARK-member.nc1, and MARK-member-opp.nc1 for a pair's opposite hand
 // where it differs), then each plate (MARK-plate.nc1, MARK-far-plate.nc1),
@@ -101,7 +106,7 @@ func platePiece(r *detail.Report, s *sheet.Sheet, p *sheet.Part, grade string) P
 	pc.Code = "B"
 	pc.Length = (hi.X - lo.X) * k
 	pc.Height, pc.FlangeWidth, pc.FlangeT, pc.WebT = w, t, t, t
-	pc.Weight = w * t * 1e-6 * density
+	pc.Weight = plateWeight(t)
 	pc.Paint = 2 * (w + t) / 1000
 	for _, q := range p.Contour {
 		pc.Contour = append(pc.Contour, Point{X: (q.X - lo.X) * k, Y: (q.Y - lo.Y) * k})
@@ -207,7 +212,8 @@ func memberPieces(r *detail.Report, s *sheet.Sheet, p *sheet.Part) ([]Piece, err
 	pc.Length, pc.Height, pc.FlangeWidth = length, prof.height, prof.width
 	pc.FlangeT, pc.WebT, pc.Radius = prof.tf, prof.tw, prof.r
 	pc.Weight, pc.Paint = prof.area*1e-6*density, prof.paint
-	if prof.code == "B" { // a flat bar: its contour too
+	if prof.code == "B" { // a flat bar: its contour too, its weight per m² like a plate's
+		pc.Weight = plateWeight(prof.width)
 		pc.Contour = []Point{{0, 0}, {length, 0}, {length, prof.height}, {0, prof.height}}
 	}
 	for _, f := range prof.faces {

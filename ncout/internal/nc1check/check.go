@@ -1,7 +1,7 @@
 // Package nc1check reads a DSTV NC1 file back and checks it against the
-// standard's layout as package ncout writes it (doc.go there; the layout
-// is from memory of the standard's 7th edition): the blocks ST, AK, BO,
-// EN in that order, each at most once, ST first and EN last; comments
+// standard's layout as package ncout writes it (doc.go there: what of it
+// two open-source readers confirm, what is still from memory): the blocks
+// ST, AK, BO, EN in that order, each at most once, ST first and EN last; comments
 // ("**") only inside blocks; every data line indented two blanks; the ST
 // block's 24 fields with their kinds (text, a whole quantity, a profile
 // code, twelve numbers, four texts); each AK line a face and three
@@ -40,8 +40,9 @@ type Hole struct {
 	Depth, Ex, Ey, Angle float64
 }
 
-// Codes are the profile codes of the standard (from memory): I, L, U, B
-// (plate or flat), RU (round bar), RO (tube), M (rectangular tube), C
+// Codes are the profile codes of the standard, as tluijken/dstv's
+// src/header.rs and Baseflow/DSTV.Net's Enums/CodeProfile.cs list them:
+// I, L, U, B (plate or flat), RU (round bar), RO (tube), M (rectangular tube), C
 // (cold-formed C), T, SO (special).
 var Codes = []string{"I", "L", "U", "B", "RU", "RO", "M", "C", "T", "SO"}
 
