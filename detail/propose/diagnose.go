@@ -56,9 +56,16 @@ func (p *problem) diagnose(out *Proposal) {
 // state that fails in all of them fails in every candidate; the numbers
 // come from the layout that does best in it.
 func (p *problem) explain(out *Proposal) {
-	corners, maxBolts, ok := p.corners()
-	if !ok {
-		return
+	var corners []*cand
+	var maxBolts int
+	var allFail map[string]bool // nil: what fails in every corner
+	if p.outline {
+		corners, maxBolts, allFail = p.outlineCorners()
+	} else {
+		var ok bool
+		if corners, maxBolts, ok = p.corners(); !ok {
+			return
+		}
 	}
 	if len(corners) == 0 {
 		b := Blocker{ID: "fit", Text: "no candidate fits: every layout puts a hole off the member or the plate",
@@ -66,7 +73,7 @@ func (p *problem) explain(out *Proposal) {
 		out.Blockers, out.Summary = []Blocker{b}, b.Text+": "+b.Lift
 		return
 	}
-	out.Blockers = append(p.limitBlockers(corners, maxBolts), findingBlockers(corners)...)
+	out.Blockers = append(p.limitBlockers(corners, maxBolts), findingBlockers(corners, allFail)...)
 	if len(out.Blockers) == 0 {
 		out.Summary = p.closestSummary(corners)
 		return
@@ -139,8 +146,9 @@ func (p *problem) limitBlockers(corners []*cand, maxBolts int) []Blocker {
 }
 
 // findingBlockers are the non-advisory detailing rules that fail in every
-// corner, by id, each with where it fails in the first corner.
-func findingBlockers(corners []*cand) []Blocker {
+// corner, by id, each with where it fails in the first corner; of those,
+// only the ones in allFail when it is not nil (outlineCorners).
+func findingBlockers(corners []*cand, allFail map[string]bool) []Blocker {
 	var failsAll map[string]*detailing.Finding
 	for n, c := range corners {
 		failing := map[string]*detailing.Finding{}
@@ -162,7 +170,9 @@ func findingBlockers(corners []*cand) []Blocker {
 	}
 	var ids []string
 	for id := range failsAll {
-		ids = append(ids, id)
+		if allFail == nil || allFail[id] {
+			ids = append(ids, id)
+		}
 	}
 	slices.Sort(ids)
 	var out []Blocker

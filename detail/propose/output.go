@@ -28,7 +28,10 @@ func (l Layout) Describe(sys units.System) string {
 		s += ", pitch " + units.FormatJob(l.Pitch, sys)
 	}
 	s += ", end " + units.FormatJob(l.End, sys) + ", gage " + units.FormatJob(l.Gage, sys)
-	if l.PlateThickness > 0 {
+	switch {
+	case l.Outline:
+		s += fmt.Sprintf(", plate %s on its outline (last bolt %s from the free edge)", units.FormatJob(l.PlateThickness, sys), units.FormatJob(l.PlateEdge, sys))
+	case l.PlateThickness > 0:
 		s += fmt.Sprintf(", plate %s with edge %s", units.FormatJob(l.PlateThickness, sys), units.FormatJob(l.PlateEdge, sys))
 	}
 	return s
@@ -65,7 +68,9 @@ func WriteJob(j *jobfile.Job, l Layout) ([]byte, error) {
 		if j.Plate.AutoThickness {
 			set = append(set, jobfile.Setting{Block: "plate", Key: "thickness", Value: l.thicknessValue(sys), Tag: "!!str"})
 		}
-		set = append(set, jobfile.Setting{Block: "plate", Key: "edge", Value: f(l.PlateEdge), Tag: "!!str", Free: true})
+		if !l.Outline { // an outline has no edge key: its free edge is drawn
+			set = append(set, jobfile.Setting{Block: "plate", Key: "edge", Value: f(l.PlateEdge), Tag: "!!str", Free: true})
+		}
 	}
 	return j.Rewrite(set)
 }
@@ -104,6 +109,8 @@ type jsonLayout struct {
 type jsonPlateLayout struct {
 	Thickness string `json:"thickness"`
 	Edge      string `json:"edge"`
+	// Outline: the plate is the job's outline, the edge measured on it.
+	Outline bool `json:"outline,omitempty"`
 }
 
 // json is the layout's JSON: the bolts block and the plate (nil without
@@ -123,6 +130,9 @@ func (l Layout) json(sys units.System) (jsonLayout, *jsonPlateLayout) {
 	}
 	if l.PlateThickness == 0 {
 		return jl, nil
+	}
+	if l.Outline { // measured, not a job key: for people
+		return jl, &jsonPlateLayout{Thickness: l.thicknessValue(sys), Edge: units.FormatJob(l.PlateEdge, sys), Outline: true}
 	}
 	return jl, &jsonPlateLayout{Thickness: l.thicknessValue(sys), Edge: f(l.PlateEdge)}
 }
@@ -201,7 +211,7 @@ type jsonInfeasible struct {
 // search is the JSON of how the search went.
 func (p *Proposal) search(mode SearchMode) jsonSearch {
 	m := "pruned"
-	if mode == Exhaustive {
+	if mode == Exhaustive || p.Outline {
 		m = "exhaustive"
 	}
 	var prefer []string
@@ -268,7 +278,11 @@ func (p *Proposal) writeHead(b *strings.Builder, mode SearchMode, md bool) {
 	} else {
 		fmt.Fprintf(b, "%s — proposed layout\n", p.Job.Mark)
 	}
-	fmt.Fprintf(b, "objective: %s; %s search checked %d of %d candidates\n", obj, s.Mode, p.Evaluated, p.Space)
+	how := s.Mode + " search checked"
+	if p.Outline {
+		how = "the plate is the job's outline, so every candidate was checked:"
+	}
+	fmt.Fprintf(b, "objective: %s; %s %d of %d candidates\n", obj, how, p.Evaluated, p.Space)
 	if !p.Found() {
 		fmt.Fprintf(b, "\nno layout passes: %s\n", p.Summary)
 		for _, bl := range p.Blockers[min(1, len(p.Blockers)):] {
@@ -296,7 +310,10 @@ func (p *Proposal) writeHead(b *strings.Builder, mode SearchMode, md bool) {
 	if jl.Stagger != "" {
 		fmt.Fprintf(b, "  stagger: %s\n", jl.Stagger)
 	}
-	if jp != nil {
+	switch {
+	case jp != nil && jp.Outline:
+		fmt.Fprintf(b, "plate:\n  thickness: %s   # on the job's outline: the last bolt %s from its free edge\n", jp.Thickness, jp.Edge)
+	case jp != nil:
 		fmt.Fprintf(b, "plate:\n  thickness: %s\n  edge: %s\n", jp.Thickness, jp.Edge)
 	}
 	if p.Job.ConnectorsChosen {

@@ -54,6 +54,13 @@ type problem struct {
 	checks, limit int
 	stopped       bool
 	progress      func(done, total int) // pruned search only
+
+	// outline: the plate is the job's plate.outline, fixed in the
+	// member's frame. Its free edge does not move with the bolt group,
+	// so more pitch or end brings the last bolt nearer to it: the pruned
+	// search's monotonicity does not hold, and every candidate is checked
+	// (outline.go).
+	outline bool
 }
 
 // group is one arrangement: diameter, grade, plate thickness, lines and
@@ -102,14 +109,8 @@ func newProblem(j *jobfile.Job) (*problem, error) {
 		return nil, j.FieldError("holes", "propose lays out the bolts itself; explicit holes leave nothing to choose",
 			"remove the holes list, or run gaugeline check")
 	}
-	if j.Plate != nil && j.Plate.Outline != nil {
-		// The search moves the plate's free edge with the bolt group; a
-		// fixed outline has none to move (not searched yet).
-		return nil, j.FieldError("plate.outline", "propose lays out the bolts on the rectangle of plate.width and plate.edge; it does not search a fixed outline",
-			"give the rectangle to propose a layout, then check it on the outline with gaugeline check")
-	}
 	p := &problem{job: j, build: bld, ed: ed, step: j.Stock.Step, obj: orderOf(j.Stock), snapped: map[int]units.Length{},
-		grids: map[[2]int][]units.Length{}}
+		grids: map[[2]int][]units.Length{}, outline: j.Plate != nil && j.Plate.Outline != nil}
 	diams, err := stockDiameters(j)
 	if err != nil {
 		return nil, err
@@ -388,7 +389,7 @@ func (p *problem) ranges(g *group) {
 		g.end = p.grid(p.gridUp(p.minEdgeTo(g, g.shape, false)), min(p.gridDown(ed.MaxEdge(m.T)), four))
 	}
 	switch {
-	case c.Plate == nil:
+	case c.Plate == nil, p.outline: // an outline's free edge is where the job draws it
 		g.edge = []units.Length{0}
 	case j.Plate.Edge > 0:
 		g.edge = []units.Length{j.Plate.Edge}

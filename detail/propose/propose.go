@@ -107,10 +107,15 @@ type SearchLimitError struct {
 	// for the exhaustive search, refused before it starts.
 	Checked int
 	Limit   int
+	// Outline: the job's plate.outline made the search exhaustive.
+	Outline bool
 }
 
 func (e *SearchLimitError) Error() string {
-	if e.Mode == Exhaustive {
+	switch {
+	case e.Outline:
+		return fmt.Sprintf("%s: a plate outline is searched candidate by candidate, and this one has %d candidates, more than the limit of %d", e.File, e.Space, e.Limit)
+	case e.Mode == Exhaustive:
 		return fmt.Sprintf("%s: the exhaustive search has %d candidates, more than the limit of %d", e.File, e.Space, e.Limit)
 	}
 	return fmt.Sprintf("%s: the pruned search stopped at the limit of %d candidates checked, unfinished (the space has %d)", e.File, e.Limit, e.Space)
@@ -132,6 +137,10 @@ type Layout struct {
 	Stagger        units.Length // as the job fixes it; 0 otherwise
 	PlateThickness units.Length // 0 without a plate
 	PlateEdge      units.Length // 0 without a plate
+	// Outline: the plate is the job's plate.outline; PlateEdge is then
+	// measured, the last bolt to the outline's free edge (greatest x),
+	// and not written into the job.
+	Outline bool
 
 	// spellings from the job file for the values chosen from the stock
 	diameterText, thicknessText string
@@ -174,6 +183,10 @@ type Proposal struct {
 	GageSource, GageNote string
 	Alternatives         []Alternative
 
+	// Outline: the plate is the job's plate.outline, and the search
+	// checked every candidate (outline.go).
+	Outline bool
+
 	Space     int // candidates in the space
 	Evaluated int // candidates fully checked to find the choice
 	// AltEvaluated and DiagEvaluated are further checks for the
@@ -204,9 +217,12 @@ func Propose(j *jobfile.Job, opt ProposeOptions) (*Proposal, error) {
 	if err != nil {
 		return nil, err
 	}
-	out := &Proposal{Job: j, Space: p.space()}
+	out := &Proposal{Job: j, Space: p.space(), Outline: p.outline}
+	if p.outline {
+		opt.Mode = Exhaustive // outline.go
+	}
 	if opt.MaxCandidates > 0 && opt.Mode == Exhaustive && out.Space > opt.MaxCandidates {
-		return nil, &SearchLimitError{File: j.File, Mode: Exhaustive, Space: out.Space, Limit: opt.MaxCandidates}
+		return nil, &SearchLimitError{File: j.File, Mode: Exhaustive, Space: out.Space, Limit: opt.MaxCandidates, Outline: p.outline}
 	}
 	if opt.Mode == Pruned {
 		// (the exhaustive search's diagnosis checks fewer than the space)
@@ -341,12 +357,16 @@ func firstN(cs []*cand, n int) []*cand {
 // layout is candidate c as a Layout, with the job's spellings.
 func (p *problem) layout(c *cand) Layout {
 	g := c.g
-	return Layout{
+	l := Layout{
 		Diameter: g.d, Grade: p.grades[g.gi], Lines: g.lines, PerLine: g.perLine,
 		Pitch: g.pitch[c.i], End: g.end[c.j], Gage: c.g1, Gage2: g.gage2[c.g2i], Stagger: g.stag,
 		PlateThickness: g.tp, PlateEdge: g.edge[c.k],
 		diameterText: p.diams[g.di].text, thicknessText: p.thick[g.ti].text,
 	}
+	if p.outline && c.rep != nil {
+		l.Outline, l.PlateEdge = true, outlineEdge(c.rep.Design)
+	}
+	return l
 }
 
 // alternatives picks n layouts besides the choice tops[0]: the best of

@@ -177,7 +177,15 @@ func bestInStock(j *jobfile.Job, limit int) (*Proposal, int, error) {
 	if p.yieldBlocker() != nil {
 		return nil, 0, nil
 	}
-	tops, _ := p.prunedTops(out, 0, nil)
+	var tops []*cand
+	switch {
+	case p.outline && out.Space > limit:
+		return nil, 0, nil
+	case p.outline:
+		tops, _ = p.exhaustive(out.Space, nil)
+	default:
+		tops, _ = p.prunedTops(out, 0, nil)
+	}
 	if p.stopped || len(tops) == 0 {
 		return nil, p.evals, nil
 	}
