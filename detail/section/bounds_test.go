@@ -60,7 +60,7 @@ func TestBoundsPublishedValues(t *testing.T) {
 		t.Fatal(err)
 	}
 	// EN 10056-1, L100x100x10: A = 19.2 cm², e = 2.82 cm, iv = 1.95 cm
-	// (from memory).
+	// (SCI Blue Book, read; see blueBook in en10056_test.go).
 	checkBounds(t, "L100x100x10 (EN 10056-1)", si, Props{Area: 1920, Xbar: 28.2, Rmin: 19.5})
 
 	b := us.Bounds()

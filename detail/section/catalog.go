@@ -51,8 +51,13 @@ type siFamily struct {
 	t      []float64
 }
 
-// siFamilies are the EN 10056-1 equal and unequal angles (sizes,
-// thicknesses and radii from memory), in the standard's order.
+// siFamilies are the EN 10056-1 equal and unequal angles, in the order of
+// the tables read (equal, then unequal; small sizes first). Legs,
+// thicknesses and the radii r1, r2 are read from two section tables of
+// BS EN 10056-1 angles, the SCI "Blue Book" and ArcelorMittal's sections
+// catalogue (docs/sources/shapes.md, "EN 10056-1 angles"; every row is
+// checked against them in en10056_test.go), except where a row says
+// otherwise. The standard's own text was not read.
 var siFamilies = []siFamily{
 	{40, 40, 6, 3, []float64{4, 5}},
 	{45, 45, 7, 3.5, []float64{4.5}},
@@ -73,17 +78,17 @@ var siFamilies = []siFamily{
 
 	{60, 40, 6, 3, []float64{5, 6}},
 	{65, 50, 6, 3, []float64{5}},
-	{70, 50, 6, 3, []float64{6}},
+	{70, 50, 7, 3.5, []float64{6}}, // r1 7, r2 3.5 (Blue Book); 6, 3 before
 	{75, 50, 7, 3.5, []float64{6, 8}},
 	{80, 40, 7, 3.5, []float64{6, 8}},
 	{80, 60, 8, 4, []float64{7}},
-	{100, 50, 9, 4.5, []float64{6, 8}},
+	{100, 50, 8, 4, []float64{6, 8}}, // r1 8, r2 4 (Blue Book); 9, 4.5 before
 	{100, 65, 10, 5, []float64{7, 8, 10}},
 	{100, 75, 10, 5, []float64{8, 10, 12}},
 	{120, 80, 11, 5.5, []float64{8, 10, 12}},
 	{125, 75, 11, 5.5, []float64{8, 10, 12}},
-	{135, 65, 11, 5.5, []float64{8, 10}},
-	{150, 75, 11, 5.5, []float64{9, 10, 12, 15}},
+	{135, 65, 11, 5.5, []float64{8, 10}},       // not in either table read: size and radii from memory
+	{150, 75, 12, 6, []float64{9, 10, 12, 15}}, // r1 12, r2 6 (Blue Book; 11, 5.5 before); t = 9 not in the tables read, from memory
 	{150, 90, 12, 6, []float64{10, 12, 15}},
 	{150, 100, 12, 6, []float64{10, 12}},
 	{200, 100, 15, 7.5, []float64{10, 12, 15}},

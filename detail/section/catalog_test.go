@@ -44,7 +44,7 @@ func TestLookupSpellings(t *testing.T) {
 }
 
 // Dimensions come out exact: US tables are stored in sixteenths of an inch
-// and the SI radii and K follow EN 10056-1 (K = t + r1).
+// and the SI radii are the published ones, K = t + r1.
 func TestLookupDimensions(t *testing.T) {
 	a, err := Lookup("L4x4x1/2", units.US)
 	require.NoError(t, err)
@@ -55,7 +55,7 @@ func TestLookupDimensions(t *testing.T) {
 	a, err = Lookup("L100x100x10", units.SI)
 	require.NoError(t, err)
 	assert.Equal(t, Angle{Name: "L100x100x10", System: units.SI, A: 100, B: 100, T: 10,
-		R1: 12, R2: 6, K: 22}, a, "r1 12, r2 6: EN 10056-1, from memory")
+		R1: 12, R2: 6, K: 22}, a, "r1 12, r2 6: "+blueBook)
 }
 
 func TestLookupUnknown(t *testing.T) {

@@ -34,7 +34,12 @@
 //     as a check on every row: the two agree within 1.7 % in A, 2.3 % in
 //     x̄ and ȳ, 1.5 % in rx and ry and 2.6 % in rz.
 //   - SI: EN 10056-1 equal and unequal angles with their root and toe radii
-//     r1, r2 (from memory); K = T + R1.
+//     r1, r2, read from two section tables of the standard's angles (the
+//     SCI Blue Book; ArcelorMittal's catalogue for the sizes it lacks);
+//     K = T + R1. Properties are the geometry's (radii included); against
+//     every published row (en10056_test.go) they agree within 0.6 % in A,
+//     e (ey, ez) and iv. L135x65x8, L135x65x10 and L150x75x9 are in neither
+//     table and stay from memory.
 //
 // Catalog order is the order of the source table: AISC lists large sizes
 // and thick plates first, EN 10056-1 small first.
