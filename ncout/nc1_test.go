@@ -315,8 +315,10 @@ func TestProfileHeader(t *testing.T) {
 		{"aisc-d1-w8x21.yaml", "I", "W8x21", 21 * lbPerFt, 0.01, "AISC Manual Table 1-1, W8x21: 21 lb/ft"},
 		// L4x4x1/2: 12.8 lb/ft (AISC Manual Table 1-7; AISC Shapes Database v15.0, read).
 		{"us-brace-16ft.yaml", "L", "L4x4x1/2", 12.8 * lbPerFt, 0.01, "AISC Manual Table 1-7 (AISC Shapes Database v15.0, read)"},
-		// L120x80x10: 15.0 kg/m (EN 10056-1's table, from memory).
-		{"si-slotted.yaml", "L", "L120x80x10", 15.0, 0.01, "EN 10056-1, from memory"},
+		// L120x80x10: area 19.1 cm² (ArcelorMittal's angle table, read in
+		// a text copy: docs/sources/shapes.md, "EN 10056-1 angles") × 7850
+		// kg/m³ = 14.99 kg/m.
+		{"si-slotted.yaml", "L", "L120x80x10", 19.1e-4 * 7850, 0.01, "ArcelorMittal angle table, A = 19.1 cm² (read)"},
 	} {
 		w := jobFiles(t, c.job)
 		nc := parse(t, w.files[0])
