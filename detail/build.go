@@ -38,6 +38,9 @@ func Build(jf *jobfile.Job) (*Design, error) {
 	if err := j.buildMember(ed, d); err != nil {
 		return nil, err
 	}
+	if err := j.buildMemberB(ed, d); err != nil {
+		return nil, err
+	}
 	if err := j.buildBolt(ed, &d.Conn); err != nil {
 		return nil, err
 	}
@@ -98,6 +101,9 @@ func (b *Builder) Template(tp units.Length) (*Design, error) {
 	jj := job{&jf}
 	des := jj.newDesign(ed)
 	if err := jj.buildMember(ed, des); err != nil {
+		return nil, err
+	}
+	if err := jj.buildMemberB(ed, des); err != nil {
 		return nil, err
 	}
 	if jj.Plate != nil {
@@ -290,6 +296,32 @@ func (j job) buildMember(ed *rules.Edition, d *Design) error {
 	mem.Fy, mem.Fu = st.Fy, st.Fu
 	info.Grade = st.Name
 	info.Weathering = st.Weathering
+	return nil
+}
+
+// buildMemberB resolves a splice's member_b (its own section) into
+// d.Conn.MemberB and d.InfoB, as buildMember does the member's; nothing
+// without member_b.
+func (j job) buildMemberB(ed *rules.Edition, d *Design) error {
+	v := j.MemberBView()
+	if v == nil {
+		return nil
+	}
+	b := &Design{Job: v}
+	if err := (job{v}).buildMember(ed, b); err != nil {
+		return err
+	}
+	a, mb := &d.Conn.Member, b.Conn.Member
+	if pl := j.Plate; pl != nil && pl.Count == 2 && math.Abs(float64(mb.T-a.T)) > eps {
+		field := "member.size"
+		if v.Given("member.thickness") {
+			field = "member.thickness"
+		}
+		return v.FieldError(field, fmt.Sprintf("member B's connected part is %s thick and the member's %s: between two splice plates the thinner needs fillers, which are not modelled",
+			units.FormatJob(mb.T, j.Units), units.FormatJob(a.T, j.Units)),
+			"splice members of one thickness between two plates, or use one splice plate (plate.count: 1)")
+	}
+	d.Conn.MemberB, d.InfoB = &mb, &b.Info
 	return nil
 }
 
@@ -624,6 +656,10 @@ func (j job) buildHoles(ed *rules.Edition, d *Design) error {
 		return j.FieldError(yField, fmt.Sprintf("hole %s at y = %s runs off the %s, which is %s wide",
 			h.ID, units.FormatJob(h.Y, j.Units), part, units.FormatJob(w, j.Units)),
 			"y is measured from the heel (angles) or one edge (flats)")
+	case fitOffB:
+		return j.FieldError(yField, fmt.Sprintf("hole %s at y = %s runs off member B's %s, which is %s wide",
+			h.ID, units.FormatJob(h.Y, j.Units), part, units.FormatJob(d.Conn.MemberB.Width, j.Units)),
+			"member B takes the member's bolt group, mirrored about the joint: its connected part must hold it")
 	}
 	return j.FieldError(xField, fmt.Sprintf("hole %s has the same centre as %s", h.ID, d.Conn.Holes[f.other].ID), "")
 }
@@ -685,6 +721,7 @@ const (
 	fitPastEnd        // past the member's end
 	fitOffLow         // off the leg or flat at y = 0
 	fitOffHigh        // off the leg or flat at its width
+	fitOffB           // off a splice's member B (its own section) at its width
 	fitSame           // at the centre of an earlier hole
 )
 
@@ -729,6 +766,8 @@ func (d *Design) PlaceHoles(holes []engine.Hole, shape engine.HoleShape, plate *
 			return HoleFit{how: fitOffLow, hole: i}
 		case h.Y+dy/2 > w+eps:
 			return HoleFit{how: fitOffHigh, hole: i}
+		case d.Conn.MemberB != nil && h.Y+dy/2 > d.Conn.MemberB.Width+eps:
+			return HoleFit{how: fitOffB, hole: i}
 		}
 		for k := range i {
 			o := &holes[k]

@@ -66,6 +66,10 @@ func (d *Design) Summary() [][2]string {
 		member = fmt.Sprintf("%s %s, %s", m.Shape, d.Info.Designation, d.Info.Grade)
 	}
 	rows := [][2]string{{"member", member}}
+	if b := c.MemberB; b != nil {
+		rows = append(rows, [2]string{"member B", fmt.Sprintf("%s %s, %s (Fy %s, Fu %s), beyond the joint", b.Shape, d.InfoB.Designation, d.InfoB.Grade,
+			p.value(float64(b.Fy), units.DimStress), p.value(float64(b.Fu), units.DimStress))})
+	}
 	if pl := c.Plate; pl != nil {
 		rows = append(rows, [2]string{"plate", p.plateRow(d)})
 	}

@@ -41,13 +41,32 @@ func Check(d *Design) (*Report, error) {
 	if err != nil {
 		return nil, err
 	}
-	r := &Report{Design: d, Results: rs, Findings: detailing.Check(&d.Conn, d.Info), Governing: engine.Governing(rs)}
+	r := &Report{Design: d, Results: rs, Findings: findings(d), Governing: engine.Governing(rs)}
 	r.Pass = detailing.Passes(r.Findings)
 	for _, x := range rs {
 		r.Pass = r.Pass && x.Pass
 	}
 	r.Cautions = cautions(d)
 	return r, nil
+}
+
+// findings are the design's detailing findings: the member's and the
+// plate's, then a splice's member B's (its own section) where they differ
+// from the member's, each where-text led by "member B: ".
+func findings(d *Design) []detailing.Finding {
+	fs := detailing.Check(&d.Conn, d.Info)
+	b := d.Conn.MemberBSide()
+	if b == nil || d.InfoB == nil {
+		return fs
+	}
+	own := len(fs)
+	for _, f := range detailing.Check(b, *d.InfoB) {
+		if !slices.Contains(fs[:own], f) {
+			f.Where = "member B: " + f.Where
+			fs = append(fs, f)
+		}
+	}
+	return fs
 }
 
 // CheckFile loads a job file, builds it and checks it (CheckJob, both
@@ -110,7 +129,7 @@ func cautions(d *Design) []string {
 			"its side edges are free edges for block shear.")
 	}
 	if pl := d.Conn.Plate; pl != nil && pl.Kind == engine.Splice {
-		c = append(c, spliceCaution(pl))
+		c = append(c, spliceCaution(pl, d))
 	}
 	c = append(c, "Block shear uses Ubs = 1.0 (uniform tension stress); a block that tears out k of the n bolts "+
 		"is compared with k/n of the force, the bolts sharing it equally.")
@@ -228,6 +247,9 @@ type Document struct {
 	LimitStates            []jsonLimit   `json:"limit_states"`
 	Detailing              []jsonFinding `json:"detailing"`
 	Holes                  []jsonHole    `json:"holes"`
+	// MemberB is a splice's member beyond the joint where member_b gives
+	// it a section of its own (its limit states are member_b.*).
+	MemberB *jsonMemberB `json:"member_b,omitempty"`
 	// Ends and GoverningEnd are there where the far end is a connection of
 	// its own (ends.go): each end's results; the fields above are the
 	// governing end's, verdict and failing the whole member's.
@@ -235,6 +257,13 @@ type Document struct {
 	GoverningEnd string    `json:"governing_end,omitempty"`
 	Cautions     []string  `json:"cautions"`
 	Stamp        string    `json:"stamp,omitempty"` // Job.Stamp: the run that wrote the file set
+}
+
+// jsonMemberB is member B's section and steel.
+type jsonMemberB struct {
+	Designation string  `json:"designation"`
+	Grade       string  `json:"grade"`
+	Area        JSONNum `json:"area"`
 }
 
 // Document converts the report to the JSON contract of SPEC §9, every
@@ -272,6 +301,10 @@ func (r *Report) endDocument() Document {
 	if d.Conn.Compression > 0 {
 		c := force(d.Conn.Compression)
 		doc.Compression, doc.CompressionCombination = &c, d.CompressionCombination
+	}
+	if b := d.Conn.MemberB; b != nil {
+		doc.MemberB = &jsonMemberB{Designation: d.InfoB.Designation, Grade: d.InfoB.Grade,
+			Area: JSONNum(sys.ToJob(float64(b.Ag), units.DimArea))}
 	}
 	for _, x := range r.Results {
 		l := jsonLimit{ID: x.ID, Clause: x.Clause, Nominal: force(x.Nominal), Available: force(x.Available),
@@ -323,11 +356,18 @@ func (r *Report) JSON() ([]byte, error) {
 }
 
 // spliceCaution says what a splice's check assumes: member B is member A
-// again, mirrored, so one set of results holds for both.
-func spliceCaution(pl *engine.Plate) string {
+// again, mirrored, so one set of results holds for both; or member_b's own
+// section, checked apart.
+func spliceCaution(pl *engine.Plate, d *Design) string {
 	s := "Splice: the job describes one member; the member beyond the joint is taken as the same section with the same bolt group, " +
 		"mirrored about the joint, so the member's results (at its end) and the plate's bearing and block shear hold for both members. " +
 		"The splice plate's net section is the worst path across both groups."
+	if d.Conn.MemberB != nil {
+		s = "Splice: member B, beyond the joint, is " + d.InfoB.Designation + " (member_b) with the member's bolt group mirrored about the joint; " +
+			"its own limit states (member_b.*, and the bolt group with its bearing) and its detailing where it differs from the member's are checked " +
+			"on its section; the plate's bearing and block shear at its group are those at the member's (the mirror image). " +
+			"The splice plate's net section is the worst path across both groups."
+	}
 	if pl.Plates() == 2 {
 		s += " Two splice plates, one each side: the bolts act in two shear planes and the plates' limit states take both plates together (2·t)."
 	}

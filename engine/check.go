@@ -5,7 +5,8 @@ import "gaugeline/rules"
 // Check computes every limit state of the connection, in a stable order:
 // the member's (member.combined last, for a flat bar whose eccentric bolt
 // group is provided for), the plate's (when there is one), then the
-// bolts'. A
+// bolts', the compression case's, and a splice's member B's where it has
+// one of its own (member_b.*). A
 // failing limit state is a result; the error reports a lookup the edition
 // cannot answer (e.g. the pretension of a bolt grade that has none).
 func Check(c *Connection) ([]Result, error) {
@@ -34,6 +35,7 @@ func Check(c *Connection) ([]Result, error) {
 	if c.Compression > 0 && c.Member.Strut != nil {
 		out = append(out, compressionChecks(c)...)
 	}
+	out = append(out, memberBChecks(c, plateShares)...)
 	return out, nil
 }
 

@@ -157,6 +157,9 @@ type Connection struct {
 	Edition Code // the standard and edition checked to
 	Method  rules.Method
 	Member  Member
+	// MemberB is a splice's member beyond the joint where it differs from
+	// Member (splice.go); nil: Member mirrored about the joint.
+	MemberB *Member
 	Plate   *Plate // nil: the member alone is checked
 	Bolt    Bolt
 	Holes   []Hole

@@ -255,6 +255,15 @@ func BoltList(mb Member) []BoltSet {
 		// joint is the next member's near end (as the splice plates)
 		near.End = "near end's joint (both members)"
 		out = []BoltSet{near}
+		if b := mb.Near.Conn.MemberBSide(); b != nil {
+			// member_b: its group's grip is its own
+			nb := boltSet(b, mb.Units)
+			if nb.End = near.End; nb != near {
+				near.Each, nb.Each = near.Each/2, nb.Each/2
+				near.End, nb.End = "near end's joint, the member's group", "near end's joint, member B's group"
+				out = []BoltSet{near, nb}
+			}
+		}
 	case mb.Mirror:
 		near.End, near.Each = "each end", 2*near.Each
 		out = []BoltSet{near}

@@ -41,10 +41,10 @@ type PlateBucklingSpec struct {
 var memberBucklingKeys = []string{"k", "truss", "connectors", "connector"}
 
 // parseMemberBuckling reads member.k, truss, connectors and connector.
-func (p *parser) parseMemberBuckling(b *block) (err error) {
-	mb := &p.job.Member.Buckling
+func (p *parser) parseMemberBuckling(b *block, m *MemberSpec) (err error) {
+	mb := &m.Buckling
 	if b.has("k") {
-		if mb.K, err = p.factor(b.vals["k"], "member.k"); err != nil {
+		if mb.K, err = p.factor(b.vals["k"], b.sub("k")); err != nil {
 			return err
 		}
 	}
@@ -54,18 +54,18 @@ func (p *parser) parseMemberBuckling(b *block) (err error) {
 		case "space":
 			mb.Space = true
 		default:
-			return p.errAt(v, "member.truss", fmt.Sprintf("unknown truss %q (want planar or space)", v.Value),
+			return p.errAt(v, b.sub("truss"), fmt.Sprintf("unknown truss %q (want planar or space)", v.Value),
 				"planar: an individual member or a web member of a planar truss (E5(a)); space: of a box or space truss (E5(b))")
 		}
 	}
-	pairs := p.job.Member.Shape != nil && p.job.Member.Shape.Pieces() == 2
+	pairs := m.Shape != nil && m.Shape.Pieces() == 2
 	for _, k := range []string{"connectors", "connector"} {
 		if b.has(k) && !pairs {
 			return p.errAt(b.vals[k], b.sub(k), k+" is for two pieces back to back (double angles, double channels)", "remove it")
 		}
 	}
 	if b.has("connectors") {
-		if mb.Connectors, err = p.integer(b.vals["connectors"], "member.connectors", 0, 50); err != nil {
+		if mb.Connectors, err = p.integer(b.vals["connectors"], b.sub("connectors"), 0, 50); err != nil {
 			return err
 		}
 	}
@@ -75,7 +75,7 @@ func (p *parser) parseMemberBuckling(b *block) (err error) {
 		case "welded", "pretensioned":
 			mb.ConnectorTight = true
 		default:
-			return p.errAt(v, "member.connector", fmt.Sprintf("unknown connector %q (want snug-tight, pretensioned or welded)", v.Value), "")
+			return p.errAt(v, b.sub("connector"), fmt.Sprintf("unknown connector %q (want snug-tight, pretensioned or welded)", v.Value), "")
 		}
 	}
 	return nil
@@ -142,6 +142,11 @@ func (p *parser) checkCompression() error {
 		return &InputError{File: j.File, Line: j.Line("member"), Field: "member.length",
 			Msg:  "is required when the member is in compression (load.compression, or a load combination that pushes): its buckling length",
 			Hint: "give the member's length between the ends' work points, e.g. length: 12 ft; member.k sets the effective length factor (default 1.0)"}
+	}
+	if j.MemberB != nil && j.MemberB.Length == 0 {
+		return &InputError{File: j.File, Line: j.Line("member_b"), Field: "member_b.length",
+			Msg:  "is required when the members are in compression: member B buckles over its own length",
+			Hint: "give member B's length between its work points, e.g. length: 12 ft"}
 	}
 	if pl := j.Plate; pl != nil && pl.Kind == engine.Gusset && pl.Outline == nil && pl.Length == 0 {
 		return &InputError{File: j.File, Line: j.Line("plate"), Field: "plate.length",

@@ -31,8 +31,11 @@ type Job struct {
 
 	Load   Load
 	Member MemberSpec
-	Plate  *PlateSpec // nil: the member alone is checked
-	Bolts  BoltSpec
+	// MemberB is member_b: a splice's member beyond the joint where it
+	// differs from the member (memberb.go); nil: the member mirrored.
+	MemberB *MemberSpec
+	Plate   *PlateSpec // nil: the member alone is checked
+	Bolts   BoltSpec
 	// Holes are explicit hole centres in the order given; nil when the
 	// pattern in Bolts generates them.
 	Holes     []HoleCentre
@@ -57,7 +60,9 @@ type Job struct {
 	Raw map[string]string
 
 	lines map[string]int // field path → 1-based line
-	root  *yaml.Node     // the document node, kept for writing back
+	// memberB marks a MemberBView: member B in the member's place.
+	memberB bool
+	root    *yaml.Node // the document node, kept for writing back
 }
 
 // Load is the tension demand: the required strength, or service loads the
@@ -309,7 +314,7 @@ func parentPath(p string) string {
 // FieldError is an InputError at the field path, on the line the job
 // recorded.
 func (j *Job) FieldError(path, msg, hint string) *InputError {
-	return &InputError{File: j.File, Line: j.Line(path), Field: path, Msg: msg, Hint: hint}
+	return &InputError{File: j.File, Line: j.Line(path), Field: j.fieldName(path), Msg: msg, Hint: hint}
 }
 
 // MaxJobSize is the largest job file read.

@@ -94,7 +94,7 @@ func yamlErr(file string, err error) *InputError {
 // starts with '.' (a hidden file) or '-' (read as an option by shell tools).
 var markPattern = regexp.MustCompile(`^[A-Za-z0-9_][A-Za-z0-9._-]{0,39}$`)
 
-var rootKeys = []string{"mark", "units", "standard", "method", "quantity", "seismic_system", "load", "member", "plate", "bolts", "holes", "stock", "tolerance", "project"}
+var rootKeys = []string{"mark", "units", "standard", "method", "quantity", "seismic_system", "load", "member", "member_b", "plate", "bolts", "holes", "stock", "tolerance", "project"}
 
 // parseRoot reads the job's root mapping: its scalars, then its blocks.
 func (p *parser) parseRoot(root *yaml.Node) error {
@@ -179,6 +179,11 @@ func (p *parser) parseBlocks(b *block) error {
 	}
 	if n := b.vals["plate"]; n != nil {
 		if err := p.parsePlate(n); err != nil {
+			return err
+		}
+	}
+	if n := b.vals["member_b"]; n != nil {
+		if err := p.parseMemberB(n); err != nil {
 			return err
 		}
 	}

@@ -42,8 +42,30 @@ func (p *parser) parseMember(n *yaml.Node) error {
 	if m.Shape, err = enum(p, b.vals["shape"], "member.shape", parseShape); err != nil {
 		return err
 	}
+	if err := p.parseSection(b, m); err != nil {
+		return err
+	}
+	if v := b.vals["eccentricity"]; v != nil {
+		if !m.Shape.CentredGroup() {
+			return p.errAt(v, "member.eccentricity", "eccentricity is for flat bars",
+				"J1.7 does not require the bolt group of a single- or double-angle end to lie on the member's gravity axis; remove the key")
+		}
+		if m.Eccentricity, err = enum(p, v, "member.eccentricity", parseEccentricity); err != nil {
+			return err
+		}
+	}
+	if err := p.parseMemberRest(b, m); err != nil {
+		return err
+	}
+	return p.parseFarEndKind(b.vals["far_end"])
+}
+
+// parseSection reads the section of member m from block b: a catalog
+// size, legs and thickness, or a flat's width and thickness (m.Shape set).
+func (p *parser) parseSection(b *block, m *MemberSpec) error {
+	var err error
 	if fam := RolledFamily(m.Shape); fam != "" {
-		if err := p.parseRolledSection(b, fam); err != nil {
+		if err := p.parseRolledSection(b, m, fam); err != nil {
 			return err
 		}
 	} else if low, _ := m.Shape.FreeEdges(); low { // a bar, given by width and thickness
@@ -61,36 +83,39 @@ func (p *parser) parseMember(n *yaml.Node) error {
 				return p.missing(b, b.sub(k), "is required for a flat bar", "a flat bar is given by width and thickness")
 			}
 		}
-		if m.Width, err = p.length(b.vals["width"], "member.width", positive); err != nil {
+		if m.Width, err = p.length(b.vals["width"], b.sub("width"), positive); err != nil {
 			return err
 		}
-		if m.Thickness, err = p.length(b.vals["thickness"], "member.thickness", positive); err != nil {
+		if m.Thickness, err = p.length(b.vals["thickness"], b.sub("thickness"), positive); err != nil {
 			return err
 		}
-	} else {
-		if err := p.parseAngleSection(b); err != nil {
-			return err
-		}
+		return nil
 	}
-	if v := b.vals["eccentricity"]; v != nil {
-		if !m.Shape.CentredGroup() {
-			return p.errAt(v, "member.eccentricity", "eccentricity is for flat bars",
-				"J1.7 does not require the bolt group of a single- or double-angle end to lie on the member's gravity axis; remove the key")
-		}
-		if m.Eccentricity, err = enum(p, v, "member.eccentricity", parseEccentricity); err != nil {
+	return p.parseAngleSection(b, m)
+}
+
+// parseMemberRest reads what follows the section in block b: the steel,
+// length, property overrides and buckling keys of member m.
+func (p *parser) parseMemberRest(b *block, m *MemberSpec) error {
+	return p.parseMemberRestSteel(b, m, true)
+}
+
+// parseMemberRestSteel is parseMemberRest, the steel read only when
+// steel is set (else m keeps the steel it has).
+func (p *parser) parseMemberRestSteel(b *block, m *MemberSpec, steel bool) error {
+	var err error
+	if steel {
+		if m.Steel, err = p.parseSteel(b); err != nil {
 			return err
 		}
-	}
-	if m.Steel, err = p.parseSteel(b); err != nil {
-		return err
 	}
 	if b.has("length") {
-		if m.Length, err = p.length(b.vals["length"], "member.length", positive); err != nil {
+		if m.Length, err = p.length(b.vals["length"], b.sub("length"), positive); err != nil {
 			return err
 		}
 	}
 	if b.has("area") {
-		if m.Area, err = p.area(b.vals["area"], "member.area"); err != nil {
+		if m.Area, err = p.area(b.vals["area"], b.sub("area")); err != nil {
 			return err
 		}
 	}
@@ -108,10 +133,7 @@ func (p *parser) parseMember(n *yaml.Node) error {
 	if m.Hole, err = p.parsePlyHole(b); err != nil {
 		return err
 	}
-	if err := p.parseMemberBuckling(b); err != nil {
-		return err
-	}
-	return p.parseFarEndKind(b.vals["far_end"])
+	return p.parseMemberBuckling(b, m)
 }
 
 // parsePlyHole reads a ply's own hole and slot keys of block b.
@@ -175,8 +197,7 @@ func example(s engine.Shape) string {
 
 // parseRolledSection reads the size of a WT, channel or W shape: a
 // catalog designation, nothing else describes the section.
-func (p *parser) parseRolledSection(b *block, fam string) error {
-	m := &p.job.Member
+func (p *parser) parseRolledSection(b *block, m *MemberSpec, fam string) error {
 	for _, k := range []string{"legs", "thickness", "width", "area", "xbar", "rmin", "gap"} {
 		if k == "gap" && m.Shape.Pieces() == 2 && !engine.Apart(m.Shape) {
 			continue // the plate between the pieces, as for double angles
@@ -187,56 +208,55 @@ func (p *parser) parseRolledSection(b *block, fam string) error {
 		}
 	}
 	if !b.has("size") {
-		return p.missing(b, "member.size", "is required for a "+m.Shape.String()+" member", "size: "+example(m.Shape))
+		return p.missing(b, b.sub("size"), "is required for a "+m.Shape.String()+" member", "size: "+example(m.Shape))
 	}
 	var err error
-	m.Size, err = p.word(b.vals["size"], "member.size")
+	m.Size, err = p.word(b.vals["size"], b.sub("size"))
 	return err
 }
 
 // parseAngleSection reads size, or legs and thickness, of a single or
 // double angle.
-func (p *parser) parseAngleSection(b *block) error {
-	m := &p.job.Member
+func (p *parser) parseAngleSection(b *block, m *MemberSpec) error {
 	var err error
 	if b.has("width") {
-		return p.errAt(b.vals["width"], "member.width", "width is for flat bars",
+		return p.errAt(b.vals["width"], b.sub("width"), "width is for flat bars",
 			"an angle is given by size (e.g. L4x4x1/2), or legs: [4 in, 4 in] and thickness")
 	}
 	if m.Shape.Pieces() == 1 && b.has("gap") {
-		return p.errAt(b.vals["gap"], "member.gap", "gap is for double angles only", "")
+		return p.errAt(b.vals["gap"], b.sub("gap"), "gap is for double angles only", "")
 	}
 	switch {
 	case b.has("size") && b.has("legs"):
-		return p.errAt(b.vals["legs"], "member.legs", "give either size or legs, not both", "")
+		return p.errAt(b.vals["legs"], b.sub("legs"), "give either size or legs, not both", "")
 	case b.has("size"):
 		if b.has("thickness") {
-			return p.errAt(b.vals["thickness"], "member.thickness", "the thickness is part of size", "remove thickness, or give legs instead of size")
+			return p.errAt(b.vals["thickness"], b.sub("thickness"), "the thickness is part of size", "remove thickness, or give legs instead of size")
 		}
-		if m.Size, err = p.word(b.vals["size"], "member.size"); err != nil {
+		if m.Size, err = p.word(b.vals["size"], b.sub("size")); err != nil {
 			return err
 		}
 	case b.has("legs"):
 		if !b.has("thickness") {
-			return p.errAt(b.vals["legs"], "member.thickness", "is required with legs", "thickness: 1/2 in")
+			return p.errAt(b.vals["legs"], b.sub("thickness"), "is required with legs", "thickness: 1/2 in")
 		}
 		n := b.vals["legs"]
 		if n.Kind != yaml.SequenceNode || len(n.Content) != 2 {
-			return p.errAt(n, "member.legs", "want two legs, connected leg first, e.g. [4 in, 3 in]", "")
+			return p.errAt(n, b.sub("legs"), "want two legs, connected leg first, e.g. [4 in, 3 in]", "")
 		}
 		for i, c := range n.Content {
-			if m.Legs[i], err = p.length(c, fmt.Sprintf("member.legs[%d]", i), positive); err != nil {
+			if m.Legs[i], err = p.length(c, fmt.Sprintf("%s[%d]", b.sub("legs"), i), positive); err != nil {
 				return err
 			}
 		}
-		if m.Thickness, err = p.length(b.vals["thickness"], "member.thickness", positive); err != nil {
+		if m.Thickness, err = p.length(b.vals["thickness"], b.sub("thickness"), positive); err != nil {
 			return err
 		}
 		if m.Thickness >= min(m.Legs[0], m.Legs[1]) {
-			return p.errAt(b.vals["thickness"], "member.thickness", "is not less than the shorter leg", "")
+			return p.errAt(b.vals["thickness"], b.sub("thickness"), "is not less than the shorter leg", "")
 		}
 	default:
-		return p.missing(b, "member.size", "an angle needs size, or legs and thickness",
+		return p.missing(b, b.sub("size"), "an angle needs size, or legs and thickness",
 			"size: L4x4x1/2 (us) or L100x100x10 (si)")
 	}
 	return nil

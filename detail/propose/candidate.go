@@ -68,7 +68,7 @@ func (p *problem) newCand(g *group, g2i int, g1 units.Length, i, j, k int) *cand
 func (p *problem) design(c *cand) (*detail.Design, bool) {
 	g := c.g
 	t := g.tmpl
-	d := &detail.Design{Job: p.job, Conn: t.Conn, Info: t.Info, Combination: t.Combination}
+	d := &detail.Design{Job: p.job, Conn: t.Conn, Info: t.Info, InfoB: t.InfoB, Combination: t.Combination}
 	pat := detail.Pattern{Lines: g.lines, PerLine: g.perLine, Pitch: g.pitch[c.i], End: g.end[c.j],
 		Gage: c.g1, Gage2: g.gage2[c.g2i], Stagger: g.stag}
 	if !d.PlaceHoles(pat.Centres(make([]engine.Hole, 0, g.nT)), g.shape, g.plate).OK() {

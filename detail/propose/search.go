@@ -405,9 +405,13 @@ func failsAtEveryGage(r *detail.Report) bool {
 // gageDependent: a limit state whose ratio depends on where the gage
 // lines sit across the member: member block shear (its blocks reach the
 // member's edges) and a flat's combined check (its moment arm is the
-// group's offset from the bar's centre line).
+// group's offset from the bar's centre line); a splice's member B's too.
 func gageDependent(id string) bool {
-	return id == "member.block-shear" || id == "member.combined"
+	switch id {
+	case "member.block-shear", "member.combined", "member_b.block-shear", "member_b.combined":
+		return true
+	}
+	return false
 }
 
 // isGageFinding: a detailing finding that depends on where the gage

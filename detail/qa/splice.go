@@ -107,10 +107,19 @@ func (ab *AsBuilt) checkSplice() error {
 		}
 		a = append(a, h)
 	}
+	da, db := ab.Design, ab.Design
+	if bs := ab.Design.Conn.MemberBSide(); bs != nil {
+		// member_b: each group is checked with its own member in the
+		// member's place, member B's results named as in the design's
+		a, b := *ab.Design, *ab.Design
+		a.Conn.MemberB, a.InfoB = nil, nil
+		b.Conn, b.Info, b.InfoB = *bs, *ab.Design.InfoB, nil
+		da, db = &a, &b
+	}
 	if len(a) == 0 {
 		ab.Report = ab.unchecked("member A's holes")
 	} else {
-		r, err := ab.checkBuilt(ab.Design, a)
+		r, err := ab.checkBuilt(da, a)
 		if err != nil {
 			return err
 		}
@@ -119,8 +128,13 @@ func (ab *AsBuilt) checkSplice() error {
 	if len(b) == 0 {
 		return nil
 	}
-	var err error
-	sp.BReport, err = ab.checkBuilt(ab.Design, b)
+	br, err := ab.checkBuilt(db, b)
+	if err == nil && db != da {
+		for i := range br.Results {
+			br.Results[i].ID = engine.MemberBID(br.Results[i].ID)
+		}
+	}
+	sp.BReport = br
 	return err
 }
 

@@ -906,6 +906,10 @@ func (l sheetLayout) titleBlock(s *Sheet, r *detail.Report, top float64) {
 		fields[at+3][1] += ", plate " + d.Info.PlateGrade
 		fields[at+4][1] += ", plate " + l.limit(l.len(c.Plate.T))
 	}
+	if b := c.MemberB; b != nil { // a splice's member beyond the joint, of its own section
+		fields = slices.Insert(fields, at+3, [2]string{"MEMBER B", fmt.Sprintf("%s %s, %s thick, beyond the splice joint (its own piece)",
+			d.InfoB.Designation, d.InfoB.Grade, l.limit(l.len(b.T)))})
+	}
 	bolts := len(c.Holes)
 	if engine.Apart(c.Member.Shape) {
 		bolts *= c.Member.Pieces // the holes are one flange's; each flange has them
