@@ -82,6 +82,7 @@ func drawProposeJobOf(t *rapid.T, shapes []string, fixGage bool) string {
 	// a member that pushes too (load reversal): then its length and the
 	// gusset's back edge (plate.length) are given
 	pushes := shape != "flat" && rapid.IntRange(0, 3).Draw(t, "pushes") == 0 // a flat bar in compression is too slender to say much
+	angleSize, splice := "", false // a catalog angle's size; a splice plate (member_b)
 	w("load:")
 	if rapid.IntRange(0, 3).Draw(t, "service") == 0 {
 		w("  dead: %s", force(float64(rapid.IntRange(5, 30).Draw(t, "dead"))))
@@ -126,7 +127,8 @@ func drawProposeJobOf(t *rapid.T, shapes []string, fixGage bool) string {
 				sizes = append(sizes, n)
 			}
 		}
-		w("  size: %s", rapid.SampledFrom(sizes).Draw(t, "size"))
+		angleSize = rapid.SampledFrom(sizes).Draw(t, "size")
+		w("  size: %s", angleSize)
 	}
 	w("  grade: %s", rapid.SampledFrom([]string{"A36", "A572-50", "A588"}).Draw(t, "grade"))
 	if holeKind == 3 && !longInPlate {
@@ -138,6 +140,7 @@ func drawProposeJobOf(t *rapid.T, shapes []string, fixGage bool) string {
 		w("plate:")
 		kind := rapid.SampledFrom([]string{"gusset", "splice"}).Draw(t, "kind")
 		w("  kind: %s", kind)
+		splice = kind == "splice"
 		tps := []float64{3.0 / 8, 1.0 / 2, 5.0 / 8, 3.0 / 4}
 		if !us {
 			tps = []float64{10, 12, 16, 20}
@@ -247,6 +250,21 @@ func drawProposeJobOf(t *rapid.T, shapes []string, fixGage bool) string {
 		all := []string{"usual-gage", "short-connection", "fewest-bolts", "thinnest-plate"}
 		pr := rapid.Permutation(all).Draw(t, "preferOrder")
 		tail += "  prefer: [" + strings.Join(pr[:rapid.IntRange(1, 4).Draw(t, "preferN")], ", ") + "]\n"
+	}
+	if splice && angleSize != "" && rapid.IntRange(0, 2).Draw(t, "memberB") == 0 {
+		// member B beyond the joint: another thickness of the same legs
+		a, _ := section.Lookup(angleSize, sys)
+		var others []string
+		for _, n := range section.Names(sys) {
+			o, _ := section.Lookup(n, sys)
+			if o.A == a.A && o.B == a.B {
+				others = append(others, n)
+			}
+		}
+		tail += "member_b:\n  size: " + rapid.SampledFrom(others).Draw(t, "memberBSize") + "\n"
+		if pushes {
+			tail += "  length: " + in(map[bool]float64{true: 120, false: 3000}[us]) + "\n"
+		}
 	}
 	b.WriteString(tail)
 	return b.String()
