@@ -82,7 +82,7 @@ func drawProposeJobOf(t *rapid.T, shapes []string, fixGage bool) string {
 	// a member that pushes too (load reversal): then its length and the
 	// gusset's back edge (plate.length) are given
 	pushes := shape != "flat" && rapid.IntRange(0, 3).Draw(t, "pushes") == 0 // a flat bar in compression is too slender to say much
-	angleSize, splice := "", false // a catalog angle's size; a splice plate (member_b)
+	angleSize, splice := "", false                                           // a catalog angle's size; a splice plate (member_b)
 	w("load:")
 	if rapid.IntRange(0, 3).Draw(t, "service") == 0 {
 		w("  dead: %s", force(float64(rapid.IntRange(5, 30).Draw(t, "dead"))))
