@@ -26,8 +26,8 @@ func (p *parser) parseMemberB(n *yaml.Node) error {
 	}
 	j := p.job
 	if j.Plate == nil || j.Plate.Kind != engine.Splice {
-		return p.errAt(n, "member_b", "is for a splice: the member beyond the joint",
-			"give plate.kind: splice, or remove member_b")
+		return &InputError{File: j.File, Line: j.Line("member_b"), Field: "member_b", Msg: "is for a splice: the member beyond the joint",
+			Hint: "give plate.kind: splice, or remove member_b"}
 	}
 	m := &MemberSpec{Shape: j.Member.Shape}
 	if v := b.vals["shape"]; v != nil {
