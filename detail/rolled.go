@@ -26,9 +26,19 @@ var rolledSections = map[engine.Shape]rolledPlace{
 	engine.Wide:          placeWide,
 }
 
-// k1 is the web's centre line to the toe of the fillet across a flange,
-// taken from the catalog's geometry: tw/2 + (kdes − tf).
-func k1(sh section.Shape) units.Length { return sh.Tw/2 + sh.K - sh.Tf }
+// k1 is the web's centre line to the toe of the fillet across a flange:
+// the catalog's published k1 (AISC Shapes Database v15.0, Shape.K1). A
+// shape without one falls back on the fillet of the catalog's geometry,
+// tw/2 + (kdes − tf), which runs short of the published toe (W8x21: 0.425
+// against 0.5625 in) and so is unconservative for gage.workable; every W
+// and WT row of the catalog has its k1, so the fallback is for a row
+// added without it.
+func k1(sh section.Shape) units.Length {
+	if sh.K1 > 0 {
+		return sh.K1
+	}
+	return sh.Tw/2 + sh.K - sh.Tf
+}
 
 // placeTee: the flange connected, ȳ from its outer face, the stem on its
 // centre line, case 7 with the depth of the W the tee is cut from.

@@ -10,7 +10,9 @@ import (
 	"strings"
 	"testing"
 
+	"gaugeline/detail/detailing"
 	"gaugeline/detail/jobfile"
+	"gaugeline/detail/section"
 
 	"gaugeline/engine"
 	"gaugeline/rules"
@@ -299,5 +301,84 @@ func TestAddedRolledShape(t *testing.T) {
 		if g.ID != w.ID || g.Available != w.Available || g.Note != w.Note {
 			t.Errorf("result %d: %s %v %q, the WT gives %s %v %q", i, g.ID, g.Available, g.Note, w.ID, w.Available, w.Note)
 		}
+	}
+}
+
+// gage.workable across a W's or WT's flange measures from the hole's edge
+// to the toe of the web's (stem's) fillet at the published k1 from the web
+// centre line: |y − bf/2| − dh/2 ≥ k1 (common practice). The holes are
+// standard holes, 13/16 in for a 3/4 in bolt and 1-1/8 in for a 1 in bolt
+// (AISC 360 Table J3.3); k1 as read in the AISC Shapes Database v15.0
+// (ambaker1/aisc-csv v15.0/Shapes-US.csv, column k1), a WT's the k1 of
+// the W it is cut from (the database leaves the WT rows' blank). The
+// third job's gage lies between the geometry's toe, tw/2 + kdes − tf =
+// 0.425 in, and the published 0.5625 in: it fails at the published toe.
+func TestGageWorkableAtPublishedK1(t *testing.T) {
+	const k1Src = "AISC Shapes Database v15.0, ambaker1/aisc-csv v15.0/Shapes-US.csv, column k1 (read)"
+	tight := func(t *testing.T) *Report {
+		// D.1's W8x21 with its two lines 1-3/4 in apart astride the web
+		j, err := jobfile.LoadJob("../testdata/examples/aisc-d1-w8x21.yaml")
+		if err != nil {
+			t.Fatal(err)
+		}
+		j.Bolts.Gage2 = 1.75 * units.Inch
+		j.Bolts.Gage = (5.27*units.Inch - j.Bolts.Gage2) / 2 // from the flange tip, bf 5.27 in
+		r, err := Check(mustBuild(t, j))
+		if err != nil {
+			t.Fatal(err)
+		}
+		return r
+	}
+	for _, tc := range []struct {
+		name         string
+		report       func(t *testing.T) *Report
+		where        string
+		measured, k1 float64 // in
+		pass         bool
+		src          string
+	}{
+		{"W8x21 at its workable gage 2-3/4 in", func(t *testing.T) *Report { return checkedJob(t, "../testdata/examples/aisc-d1-w8x21.yaml") },
+			"H1 to the web's fillet (k1)", 2.75/2 - 13.0/32, 0.5625, true, k1Src + ", row W8X21"},
+		{"WT8x25 at its workable gage 3-1/2 in", func(t *testing.T) *Report { return checkedJob(t, "../testdata/examples/aisc-model-wt8x25.yaml") },
+			"H1 to the stem's fillet (k1)", 3.5/2 - 1.125/2, 0.8125, true, k1Src + ", row W16X50 (WT8x25 is cut from it)"},
+		{"W8x21, lines 1-3/4 in apart", tight,
+			"H1 to the web's fillet (k1)", 1.75/2 - 13.0/32, 0.5625, false, k1Src + ", row W8X21"},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			r := tc.report(t)
+			var got *detailing.Finding
+			for i, f := range r.Findings {
+				if f.ID == "gage.workable" && f.Where == tc.where {
+					got = &r.Findings[i]
+					break
+				}
+			}
+			if got == nil {
+				t.Fatalf("no gage.workable finding %q", tc.where)
+			}
+			if m := units.Length(got.Measured).In(); math.Abs(m-tc.measured) > 1e-9 {
+				t.Errorf("measured %.5f in, want %.5f (hole edge to the web centre line less k1's toe: %s)", m, tc.measured, tc.src)
+			}
+			if l := units.Length(got.Limit).In(); math.Abs(l-tc.k1) > 1e-9 {
+				t.Errorf("limit %.5f in, want k1 %.5f (%s)", l, tc.k1, tc.src)
+			}
+			if got.Pass != tc.pass {
+				t.Errorf("pass %v, want %v: %.5f in against k1 %.5f (%s)", got.Pass, tc.pass, tc.measured, tc.k1, tc.src)
+			}
+		})
+	}
+}
+
+// A W or WT row without a published k1 falls back on the geometry's toe,
+// tw/2 + (kdes − tf): for W8x21's tw 0.250, kdes 0.700 and tf 0.400 in
+// (AISC Shapes Database v15.0) 0.425 in, my arithmetic.
+func TestK1FallbackWithoutPublished(t *testing.T) {
+	sh, err := section.LookupW("W8x21")
+	if err != nil {
+		t.Fatal(err)
+	}
+	sh.K1 = 0
+	if got := k1(sh).In(); math.Abs(got-0.425) > 1e-9 {
+		t.Errorf("k1 without a published value %.5f in, want tw/2 + kdes − tf = 0.425 (my arithmetic)", got)
 	}
 }

@@ -46,7 +46,9 @@
 //
 // Rolled shapes (shapes.go; LookupW, LookupWT, LookupC): a small US catalog
 // of W, WT, C and MC sizes by their nominal dimensions d, bf, tw, tf and
-// kdes, read from the AISC Shapes Database v15.0. No SI sizes yet.
+// kdes, and for W and WT the detailing k1 (Shape.K1, a WT's that of the W
+// it is cut from), read from the AISC Shapes Database v15.0. No SI sizes
+// yet.
 //
 //   - Axes: x across the flanges, y along the web (stem). Ix and Iy are
 //     about the centroidal axes parallel to x and y; Rx, Ry their radii.

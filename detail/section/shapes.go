@@ -55,7 +55,14 @@ type Shape struct {
 	Tw     units.Length // web (stem) thickness
 	Tf     units.Length // flange thickness (channels: average)
 	K      units.Length // kdes, flange outer face to the end of the fillet on the web
-	Slope  float64      // inner flange slope, rise over run (0: parallel faces)
+	// K1 is the detailing dimension k1 of a W or WT: the web's (stem's)
+	// centre line to the toe of the web-to-flange fillet across the
+	// flange, the AISC Shapes Database v15.0 column k1 (in sixteenths).
+	// The database leaves it blank on its WT rows; a WT carries the k1 of
+	// the W it is cut from (same flange, web and fillet). Zero for
+	// channels, which have none.
+	K1    units.Length
+	Slope float64 // inner flange slope, rise over run (0: parallel faces)
 
 	// Tabulated values carried instead of the geometry's, where the
 	// geometry of the package comment misses the table (zero: computed).
@@ -84,44 +91,50 @@ type ShapeProps struct {
 
 // usShape is one catalog row, dimensions in inches as the AISC Shapes
 // Database v15.0 prints them (file aisc-shapes-database-v15.0.csv in
-// repository jonsadka/steel-explorer).
+// repository jonsadka/steel-explorer; d, bf, tw, tf, kdes and k1 also
+// read in its text copy v15.0/Shapes-US.csv in repository
+// ambaker1/aisc-csv).
 type usShape struct {
 	name             string
 	fam              Family
 	d, bf, tw, tf, k float64 // in; k is kdes
+	k1               float64 // in, detailing k1 of W and WT (0: none, channels)
 	xbarTab, ryTab   float64 // in, carried tabulated values (0: none)
 	g                float64 // in, workable flange gage of W and WT (WGi; 0: none)
 	si               string  // the metric designation: depth in mm × mass in kg/m
 }
 
-// usShapes is the catalog; the last columns are the workable flange gage
-// (WGi) of the database, W12x72's the 5-1/2 in its teaching model lays out,
-// and the metric designation (from memory: the nominal depth in mm and the
+// usShapes is the catalog; after kdes comes k1 (the database's column k1
+// for a W; for a WT, which the database leaves blank, that of the W it is
+// cut from: WT4x10.5 W8x21, WT6x20 W12x40, WT6x25 W12x50, WT6x36 W12x72,
+// WT8x25 W16x50), then the workable flange gage (WGi) of the database and
+// the metric designation (from memory: the nominal depth in mm and the
 // mass per metre).
 // W12x72 is the shape of the AISC wf-truss
 // teaching model (aisc-org/aisc-model-viewer, src/wf-truss/calculations.md:
-// d 12.3, bf 12.0, tw 0.430, tf 0.670); its kdes is that of WT6x36, the tee
-// cut from it. The MC rows carry the tabulated x̄ and ry: modelled with
+// d 12.3, bf 12.0, tw 0.430, tf 0.670, gage 5-1/2 in); the database's
+// W12X72 row prints the same, with kdes 1.27 (that of WT6x36, the tee cut
+// from it). The MC rows carry the tabulated x̄ and ry: modelled with
 // parallel flanges (their slope is not published in a source read) the
 // geometry puts both 4 to 6 % high.
 var usShapes = []usShape{
-	{"W8x21", FamilyW, 8.28, 5.27, 0.250, 0.400, 0.700, 0, 0, 2.75, "W200x31.3"},
-	{"W8x24", FamilyW, 7.93, 6.50, 0.245, 0.400, 0.794, 0, 0, 4, "W200x35.9"},
-	{"W10x33", FamilyW, 9.73, 7.96, 0.290, 0.435, 0.935, 0, 0, 5.5, "W250x49.1"},
-	{"W12x40", FamilyW, 11.9, 8.01, 0.295, 0.515, 1.02, 0, 0, 5.5, "W310x60"},
-	{"W12x72", FamilyW, 12.3, 12.0, 0.430, 0.670, 1.27, 0, 0, 5.5, "W310x107"},
-	{"WT4x10.5", FamilyWT, 4.14, 5.27, 0.250, 0.400, 0.700, 0, 0, 2.75, "WT100x15.5"},
-	{"WT6x20", FamilyWT, 5.97, 8.01, 0.295, 0.515, 1.02, 0, 0, 5.5, "WT155x30"},
-	{"WT6x25", FamilyWT, 6.10, 8.08, 0.370, 0.640, 1.14, 0, 0, 5.5, "WT155x37"},
-	{"WT6x36", FamilyWT, 6.13, 12.0, 0.430, 0.670, 1.27, 0, 0, 5.5, "WT155x53.5"},
-	{"WT8x25", FamilyWT, 8.13, 7.07, 0.380, 0.630, 1.03, 0, 0, 3.5, "WT205x37"},
-	{"C8x11.5", FamilyC, 8.00, 2.26, 0.220, 0.390, 0.938, 0, 0, 0, "C200x17.1"},
-	{"C9x20", FamilyC, 9.00, 2.65, 0.448, 0.413, 1.00, 0, 0, 0, "C230x30"},
-	{"C10x15.3", FamilyC, 10.0, 2.60, 0.240, 0.436, 1.00, 0, 0, 0, "C250x22.8"},
-	{"C12x25", FamilyC, 12.0, 3.05, 0.387, 0.501, 1.13, 0, 0, 0, "C310x37"},
-	{"MC6x12", FamilyMC, 6.00, 2.50, 0.310, 0.375, 0.875, 0.704, 0.724, 0, "MC150x17.9"},
-	{"MC8x18.7", FamilyMC, 8.00, 2.98, 0.353, 0.500, 1.13, 0.849, 0.868, 0, "MC200x27.8"},
-	{"MC10x22", FamilyMC, 10.0, 3.32, 0.290, 0.575, 1.31, 0.990, 0.997, 0, "MC250x33"},
+	{"W8x21", FamilyW, 8.28, 5.27, 0.250, 0.400, 0.700, 0.5625, 0, 0, 2.75, "W200x31.3"},
+	{"W8x24", FamilyW, 7.93, 6.50, 0.245, 0.400, 0.794, 0.5625, 0, 0, 4, "W200x35.9"},
+	{"W10x33", FamilyW, 9.73, 7.96, 0.290, 0.435, 0.935, 0.75, 0, 0, 5.5, "W250x49.1"},
+	{"W12x40", FamilyW, 11.9, 8.01, 0.295, 0.515, 1.02, 0.875, 0, 0, 5.5, "W310x60"},
+	{"W12x72", FamilyW, 12.3, 12.0, 0.430, 0.670, 1.27, 1.0625, 0, 0, 5.5, "W310x107"},
+	{"WT4x10.5", FamilyWT, 4.14, 5.27, 0.250, 0.400, 0.700, 0.5625, 0, 0, 2.75, "WT100x15.5"},
+	{"WT6x20", FamilyWT, 5.97, 8.01, 0.295, 0.515, 1.02, 0.875, 0, 0, 5.5, "WT155x30"},
+	{"WT6x25", FamilyWT, 6.10, 8.08, 0.370, 0.640, 1.14, 0.9375, 0, 0, 5.5, "WT155x37"},
+	{"WT6x36", FamilyWT, 6.13, 12.0, 0.430, 0.670, 1.27, 1.0625, 0, 0, 5.5, "WT155x53.5"},
+	{"WT8x25", FamilyWT, 8.13, 7.07, 0.380, 0.630, 1.03, 0.8125, 0, 0, 3.5, "WT205x37"},
+	{"C8x11.5", FamilyC, 8.00, 2.26, 0.220, 0.390, 0.938, 0, 0, 0, 0, "C200x17.1"},
+	{"C9x20", FamilyC, 9.00, 2.65, 0.448, 0.413, 1.00, 0, 0, 0, 0, "C230x30"},
+	{"C10x15.3", FamilyC, 10.0, 2.60, 0.240, 0.436, 1.00, 0, 0, 0, 0, "C250x22.8"},
+	{"C12x25", FamilyC, 12.0, 3.05, 0.387, 0.501, 1.13, 0, 0, 0, 0, "C310x37"},
+	{"MC6x12", FamilyMC, 6.00, 2.50, 0.310, 0.375, 0.875, 0, 0.704, 0.724, 0, "MC150x17.9"},
+	{"MC8x18.7", FamilyMC, 8.00, 2.98, 0.353, 0.500, 1.13, 0, 0.849, 0.868, 0, "MC200x27.8"},
+	{"MC10x22", FamilyMC, 10.0, 3.32, 0.290, 0.575, 1.31, 0, 0.990, 0.997, 0, "MC250x33"},
 }
 
 // shape builds the Shape of a catalog row.
@@ -129,7 +142,7 @@ func (s usShape) shape() Shape {
 	in := func(v float64) units.Length { return units.Length(v) * units.Inch }
 	sh := Shape{
 		Name: s.name, Metric: s.si, Family: s.fam,
-		D: in(s.d), Bf: in(s.bf), Tw: in(s.tw), Tf: in(s.tf), K: in(s.k),
+		D: in(s.d), Bf: in(s.bf), Tw: in(s.tw), Tf: in(s.tf), K: in(s.k), K1: in(s.k1),
 		XbarTab: in(s.xbarTab), RyTab: in(s.ryTab), G: in(s.g),
 	}
 	if s.fam == FamilyC {

@@ -349,3 +349,103 @@ func TestMetricDesignations(t *testing.T) {
 		}
 	}
 }
+
+// k1Src is where the k1 values and the rows' other dimensions below were
+// read: the AISC Shapes Database v15.0 in its text copy v15.0/Shapes-US.csv
+// (repository ambaker1/aisc-csv), columns d, bf, tw, tf, kdes and k1.
+const k1Src = "AISC Shapes Database v15.0, ambaker1/aisc-csv v15.0/Shapes-US.csv, column k1 (read)"
+
+// dbRow is one row of the database as read, in inches; k1 0 where the
+// database leaves it blank (every WT row; the WT4X10.5 row was also read
+// blank in jonsadka/steel-explorer aisc-shapes-database-v15.0.csv).
+type dbRow struct{ d, bf, tw, tf, kdes, k1 float64 }
+
+var k1Rows = map[string]dbRow{
+	"W8X21":    {8.28, 5.27, 0.25, 0.4, 0.7, 0.5625},
+	"W8X24":    {7.93, 6.5, 0.245, 0.4, 0.794, 0.5625},
+	"W10X33":   {9.73, 7.96, 0.29, 0.435, 0.935, 0.75},
+	"W12X40":   {11.9, 8.01, 0.295, 0.515, 1.02, 0.875},
+	"W12X50":   {12.2, 8.08, 0.37, 0.64, 1.14, 0.9375},
+	"W12X72":   {12.3, 12, 0.43, 0.67, 1.27, 1.0625},
+	"W16X50":   {16.3, 7.07, 0.38, 0.63, 1.03, 0.8125},
+	"WT4X10.5": {4.14, 5.27, 0.25, 0.4, 0.7, 0},
+	"WT6X20":   {5.97, 8.01, 0.295, 0.515, 1.02, 0},
+	"WT6X25":   {6.1, 8.08, 0.37, 0.64, 1.14, 0},
+	"WT6X36":   {6.13, 12, 0.43, 0.67, 1.27, 0},
+	"WT8X25":   {8.13, 7.07, 0.38, 0.63, 1.03, 0},
+}
+
+// Every W and WT row's K1 is the published k1: a W's from its own row, a
+// WT's (blank in the database) from the row of the W it is cut from, whose
+// flange, web and kdes, so its fillet, are the WT's. The row's d, bf, tw,
+// tf and kdes are the catalog's too. Exact: the database prints k1 in
+// sixteenths and the catalog stores the read decimals.
+func TestShapeK1Published(t *testing.T) {
+	tests := []struct {
+		name, row string
+		cutFrom   string // the W a WT is cut from ("" for a W)
+	}{
+		{"W8x21", "W8X21", ""},
+		{"W8x24", "W8X24", ""},
+		{"W10x33", "W10X33", ""},
+		{"W12x40", "W12X40", ""},
+		{"W12x72", "W12X72", ""},
+		{"WT4x10.5", "WT4X10.5", "W8X21"},
+		{"WT6x20", "WT6X20", "W12X40"},
+		{"WT6x25", "WT6X25", "W12X50"},
+		{"WT6x36", "WT6X36", "W12X72"},
+		{"WT8x25", "WT8X25", "W16X50"},
+	}
+	const exact = 1e-9 // in
+	seen := map[string]bool{}
+	for _, tc := range tests {
+		seen[tc.name] = true
+		t.Run(tc.name, func(t *testing.T) {
+			family := "W"
+			if tc.cutFrom != "" {
+				family = "WT"
+			}
+			s, err := LookupIn(family, tc.name)
+			require.NoError(t, err)
+			r := k1Rows[tc.row]
+			src := k1Src + ", row " + tc.row
+			for _, c := range []struct {
+				what      string
+				got, want float64
+			}{
+				{"d", s.D.In(), r.d}, {"bf", s.Bf.In(), r.bf}, {"tw", s.Tw.In(), r.tw},
+				{"tf", s.Tf.In(), r.tf}, {"kdes", s.K.In(), r.kdes},
+			} {
+				assert.InDelta(t, c.want, c.got, exact, "%s (%s)", c.what, src)
+			}
+			want, from := r.k1, src
+			if tc.cutFrom != "" {
+				assert.Zero(t, r.k1, "the database's WT rows leave k1 blank (%s)", src)
+				w := k1Rows[tc.cutFrom]
+				from = k1Src + ", row " + tc.cutFrom + ", the W the tee is cut from (the " + tc.row + " row's k1 is blank)"
+				for _, c := range []struct {
+					what      string
+					got, want float64
+				}{{"bf", w.bf, r.bf}, {"tw", w.tw, r.tw}, {"tf", w.tf, r.tf}, {"kdes", w.kdes, r.kdes}} {
+					assert.InDelta(t, c.want, c.got, exact, "%s of %s against %s's: the same fillet (%s)", c.what, tc.cutFrom, tc.row, k1Src)
+				}
+				want = w.k1
+			}
+			require.NotZero(t, want, "no published k1 (%s)", from)
+			assert.InDelta(t, want, s.K1.In(), exact, "k1 (%s)", from)
+			// the geometry's fillet toe, tw/2 + kdes − tf, falls short of it
+			approx := s.Tw/2 + s.K - s.Tf
+			assert.Less(t, approx.In(), s.K1.In(), "tw/2 + kdes − tf against the published k1 (%s)", from)
+		})
+	}
+	for _, f := range []Family{FamilyW, FamilyWT} {
+		for _, n := range ShapeNames(f) {
+			assert.True(t, seen[n], "%s has no published k1 checked here", n)
+		}
+	}
+	for _, n := range ShapeNamesIn("C or MC") {
+		s, err := LookupC(n)
+		require.NoError(t, err)
+		assert.Zero(t, s.K1, "%s: a channel has no k1", n)
+	}
+}
