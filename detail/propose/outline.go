@@ -4,6 +4,8 @@ import (
 	"math"
 
 	"gaugeline/detail"
+	"gaugeline/detail/jobfile"
+	"gaugeline/engine"
 	"gaugeline/rules/units"
 )
 
@@ -15,7 +17,23 @@ import (
 // candidate by candidate (the exhaustive enumeration, whatever the mode;
 // the plate edge is not a dimension of the space). The same holds for
 // the diagnosis of a job where nothing passes: every candidate is
-// checked, and only those that carry an answer are kept.
+// checked, and only those that carry an answer are kept. A splice plate
+// in compression is searched the same way (enumerateReason).
+
+// enumerateReason says why a job's candidates are all checked, or "":
+// a fixed outline (above), or a splice plate in compression, whose
+// buckling length (engine.BucklingLengths: the clear length between the
+// two groups, 2·end + gap) grows with the end distance, so more end can
+// lower plate.compression.
+func enumerateReason(j *jobfile.Job, outline bool) string {
+	switch {
+	case outline:
+		return "the plate is the job's outline"
+	case j.Plate != nil && j.Plate.Kind == engine.Splice && j.Pushes():
+		return "a splice plate in compression buckles over the length between the groups, which grows with the end distance"
+	}
+	return ""
+}
 
 // outlineEdge is the distance from the last bolt to the outline's free
 // edge (its greatest x), for people: the job file has no such key.

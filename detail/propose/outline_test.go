@@ -166,3 +166,50 @@ func TestProposeOutlineLimit(t *testing.T) {
 		t.Fatalf("error %v, want a search limit naming the outline", err)
 	}
 }
+
+// A splice plate in compression buckles over the clear length between the
+// two groups, 2·end + gap (engine.BucklingLengths), so a longer end lowers
+// plate.compression: the pruned search's monotonicity fails and such a
+// job is searched candidate by candidate. (Found by
+// TestProposeFastEqualsExhaustive: the pruned search missed a shorter
+// passing layout of this splice.)
+func TestSpliceCompressionBreaksMonotonicity(t *testing.T) {
+	const src = `mark: SC-1
+load: {required: 10 kip, compression: 33 kip}
+member: {shape: angle, length: 72 in, size: L6x6x7/8, grade: A588}
+plate: {kind: splice, thickness: 3/8 in, grade: A36, width: 12 in, edge: 1 in}
+bolts: {diameter: 3/4 in, grade: A490, threads: included, joint: pretensioned, deformation: not-considered,
+  per_line: 2, pitch: 2-1/2 in, end: END, gage: 3-1/2 in}
+`
+	ratio := func(end string) float64 {
+		t.Helper()
+		j, err := jobfile.ParseJob("sc.yaml", []byte(strings.Replace(src, "END", end, 1)))
+		if err != nil {
+			t.Fatal(err)
+		}
+		r, err := detail.CheckJob(j)
+		if err != nil {
+			t.Fatal(err)
+		}
+		x, ok := resultOf(r, "plate.compression")
+		if !ok {
+			t.Fatal("no plate.compression")
+		}
+		return x.Ratio
+	}
+	if short, long := ratio("1 in"), ratio("2 in"); long <= short {
+		t.Errorf("plate.compression ratio %.4f at end 1 in, %.4f at 2 in; want it to grow with the end", short, long)
+	}
+	j, err := jobfile.ParseJob("sc.yaml", []byte(strings.Replace(strings.Replace(src, "end: END, ", "", 1),
+		"diameter: 3/4 in, grade: A490,", "", 1)+"stock: {diameters: [3/4 in], grades: [A490], max_lines: 1, max_per_line: 3, step: 1/2 in}\n"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	p, err := Propose(j, ProposeOptions{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if p.Enumerated == "" || !strings.Contains(p.Enumerated, "splice plate in compression") {
+		t.Errorf("propose on a splice in compression: enumerated %q", p.Enumerated)
+	}
+}

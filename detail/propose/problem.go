@@ -61,6 +61,9 @@ type problem struct {
 	// search's monotonicity does not hold, and every candidate is checked
 	// (outline.go).
 	outline bool
+	// enumerate, when not "", says why every candidate is checked: the
+	// pruned search's monotonicity does not hold for the job (outline.go).
+	enumerate string
 }
 
 // group is one arrangement: diameter, grade, plate thickness, lines and
@@ -111,6 +114,7 @@ func newProblem(j *jobfile.Job) (*problem, error) {
 	}
 	p := &problem{job: j, build: bld, ed: ed, step: j.Stock.Step, obj: orderOf(j.Stock), snapped: map[int]units.Length{},
 		grids: map[[2]int][]units.Length{}, outline: j.Plate != nil && j.Plate.Outline != nil}
+	p.enumerate = enumerateReason(j, p.outline)
 	diams, err := stockDiameters(j)
 	if err != nil {
 		return nil, err

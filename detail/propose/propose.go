@@ -39,7 +39,11 @@ import (
 //     limit and the stagger is not larger than the pitch. Feasibility is
 //     then an up-set of the (pitch, end, edge) grid: one failing layout
 //     rules out every smaller one, one passing layout admits every larger
-//     one, and the shortest passing layouts lie on its staircase.
+//     one, and the shortest passing layouts lie on its staircase. Two
+//     kinds of job break it and are searched candidate by candidate
+//     (outline.go): a fixed plate outline, and a splice plate in
+//     compression, whose buckling length between the groups grows with
+//     the end distance.
 //   - Gage: where the gage lines sit across the member matters only to
 //     member block shear (its blocks reach the toe or the bar's edges),
 //     to a flat's eccentricity (J1.7: the eccentricity rule and
@@ -107,14 +111,18 @@ type SearchLimitError struct {
 	// for the exhaustive search, refused before it starts.
 	Checked int
 	Limit   int
-	// Outline: the job's plate.outline made the search exhaustive.
+	// Outline: the job's plate.outline made the search exhaustive;
+	// Reason says why it was made exhaustive ("" when it was asked for).
 	Outline bool
+	Reason  string
 }
 
 func (e *SearchLimitError) Error() string {
 	switch {
 	case e.Outline:
 		return fmt.Sprintf("%s: a plate outline is searched candidate by candidate, and this one has %d candidates, more than the limit of %d", e.File, e.Space, e.Limit)
+	case e.Reason != "":
+		return fmt.Sprintf("%s: %s, so the search checks every candidate, and this one has %d, more than the limit of %d", e.File, e.Reason, e.Space, e.Limit)
 	case e.Mode == Exhaustive:
 		return fmt.Sprintf("%s: the exhaustive search has %d candidates, more than the limit of %d", e.File, e.Space, e.Limit)
 	}
@@ -184,8 +192,10 @@ type Proposal struct {
 	Alternatives         []Alternative
 
 	// Outline: the plate is the job's plate.outline, and the search
-	// checked every candidate (outline.go).
-	Outline bool
+	// checked every candidate (outline.go); Enumerated says why every
+	// candidate was checked where the job made it so ("" otherwise).
+	Outline    bool
+	Enumerated string
 
 	Space     int // candidates in the space
 	Evaluated int // candidates fully checked to find the choice
@@ -217,12 +227,12 @@ func Propose(j *jobfile.Job, opt ProposeOptions) (*Proposal, error) {
 	if err != nil {
 		return nil, err
 	}
-	out := &Proposal{Job: j, Space: p.space(), Outline: p.outline}
-	if p.outline {
+	out := &Proposal{Job: j, Space: p.space(), Outline: p.outline, Enumerated: p.enumerate}
+	if p.enumerate != "" {
 		opt.Mode = Exhaustive // outline.go
 	}
 	if opt.MaxCandidates > 0 && opt.Mode == Exhaustive && out.Space > opt.MaxCandidates {
-		return nil, &SearchLimitError{File: j.File, Mode: Exhaustive, Space: out.Space, Limit: opt.MaxCandidates, Outline: p.outline}
+		return nil, &SearchLimitError{File: j.File, Mode: Exhaustive, Space: out.Space, Limit: opt.MaxCandidates, Outline: p.outline, Reason: p.enumerate}
 	}
 	if opt.Mode == Pruned {
 		// (the exhaustive search's diagnosis checks fewer than the space)

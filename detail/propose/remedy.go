@@ -179,9 +179,9 @@ func bestInStock(j *jobfile.Job, limit int) (*Proposal, int, error) {
 	}
 	var tops []*cand
 	switch {
-	case p.outline && out.Space > limit:
+	case p.enumerate != "" && out.Space > limit:
 		return nil, 0, nil
-	case p.outline:
+	case p.enumerate != "":
 		tops, _ = p.exhaustive(out.Space, nil)
 	default:
 		tops, _ = p.prunedTops(out, 0, nil)
