@@ -5,7 +5,6 @@ import (
 
 	"gaugeline/detail"
 	"gaugeline/detail/jobfile"
-	"gaugeline/engine"
 	"gaugeline/rules/units"
 )
 
@@ -17,20 +16,15 @@ import (
 // candidate by candidate (the exhaustive enumeration, whatever the mode;
 // the plate edge is not a dimension of the space). The same holds for
 // the diagnosis of a job where nothing passes: every candidate is
-// checked, and only those that carry an answer are kept. A splice plate
-// in compression is searched the same way (enumerateReason).
+// checked, and only those that carry an answer are kept.
 
 // enumerateReason says why a job's candidates are all checked, or "":
-// a fixed outline (above), or a splice plate in compression, whose
-// buckling length (engine.BucklingLengths: the clear length between the
-// two groups, 2·end + gap) grows with the end distance, so more end can
-// lower plate.compression.
-func enumerateReason(j *jobfile.Job, outline bool) string {
-	switch {
-	case outline:
+// a fixed outline (above). (A splice plate in compression, whose buckling
+// length between the groups, 2·end + gap, grows with the end distance, is
+// searched with a group per end distance instead: problem.byEnd.)
+func enumerateReason(_ *jobfile.Job, outline bool) string {
+	if outline {
 		return "the plate is the job's outline"
-	case j.Plate != nil && j.Plate.Kind == engine.Splice && j.Pushes():
-		return "a splice plate in compression buckles over the length between the groups, which grows with the end distance"
 	}
 	return ""
 }

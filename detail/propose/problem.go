@@ -2,6 +2,7 @@ package propose
 
 import (
 	"fmt"
+	"maps"
 	"math"
 	"strings"
 
@@ -64,6 +65,10 @@ type problem struct {
 	// enumerate, when not "", says why every candidate is checked: the
 	// pruned search's monotonicity does not hold for the job (outline.go).
 	enumerate string
+	// splitEnds: more end can lower a strength (a splice plate in
+	// compression buckles over 2·end + gap between the groups), so each
+	// end distance is a group of its own (byEnd).
+	splitEnds bool
 }
 
 // group is one arrangement: diameter, grade, plate thickness, lines and
@@ -115,6 +120,7 @@ func newProblem(j *jobfile.Job) (*problem, error) {
 	p := &problem{job: j, build: bld, ed: ed, step: j.Stock.Step, obj: orderOf(j.Stock), snapped: map[int]units.Length{},
 		grids: map[[2]int][]units.Length{}, outline: j.Plate != nil && j.Plate.Outline != nil}
 	p.enumerate = enumerateReason(j, p.outline)
+	p.splitEnds = j.Plate != nil && j.Plate.Kind == engine.Splice && j.Pushes()
 	diams, err := stockDiameters(j)
 	if err != nil {
 		return nil, err
@@ -256,13 +262,32 @@ func (p *problem) addGroups(diams []option[units.Length], grades []string, thick
 						p.setUsual(g)
 						p.ranges(g)
 						g.viable = g.fits && b.pass(n*l)
-						p.groups = append(p.groups, g)
+						p.groups = append(p.groups, p.byEnd(g)...)
 					}
 				}
 			}
 		}
 	}
 	return nil
+}
+
+// byEnd is group g, or where more end can lower a strength (a splice
+// plate in compression: splitEnds) one group per end distance, each
+// monotone in pitch and edge alone; the search and the enumeration then
+// see the same groups.
+func (p *problem) byEnd(g *group) []*group {
+	if !p.splitEnds || len(g.end) < 2 {
+		return []*group{g}
+	}
+	out := make([]*group, len(g.end))
+	for j, e := range g.end {
+		c := *g
+		c.idx = len(p.groups) + j
+		c.end = []units.Length{e}
+		c.gages = maps.Clone(g.gages)
+		out[j] = &c
+	}
+	return out
 }
 
 // maxGridValues bounds the values of one searched range: a finer step is

@@ -40,10 +40,10 @@ import (
 //     then an up-set of the (pitch, end, edge) grid: one failing layout
 //     rules out every smaller one, one passing layout admits every larger
 //     one, and the shortest passing layouts lie on its staircase. Two
-//     kinds of job break it and are searched candidate by candidate
-//     (outline.go): a fixed plate outline, and a splice plate in
-//     compression, whose buckling length between the groups grows with
-//     the end distance.
+//     kinds of job break it: a fixed plate outline, searched candidate by
+//     candidate (outline.go), and a splice plate in compression, whose
+//     buckling length between the groups grows with the end distance,
+//     searched with a group per end distance (problem.byEnd).
 //   - Gage: where the gage lines sit across the member matters only to
 //     member block shear (its blocks reach the toe or the bar's edges),
 //     to a flat's eccentricity (J1.7: the eccentricity rule and
