@@ -217,7 +217,10 @@ func handChain(rt *rapid.T, ph []netsection.PathHole, lines [][]int, from, to in
 
 // TestPropertyMonotone: more end distance, more pitch or one more bolt in
 // every line never lowers any strength nor raises any ratio (within the
-// long-joint limit).
+// long-joint limit). drawParams draws no splice plate in compression: its
+// buckling length between the groups, 2·end + gap, grows with the end, so
+// there more end lowers plate.compression (the layout search takes each
+// end apart: detail/propose, problem.byEnd).
 func TestPropertyMonotone(t *testing.T) {
 	rapid.Check(t, func(rt *rapid.T) {
 		p := drawParams(rt)
