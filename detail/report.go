@@ -407,7 +407,7 @@ func compressionCautions(d *Design) []string {
 		m += fmt.Sprintf("; the two pieces by %s's modified slenderness with %d intermediate connectors (%s)", ed.Clause("E6"), st.Connectors, connectorKind(st))
 	}
 	if st.Kind == engine.StrutFlexural && st.BuiltUp {
-		m += "; torsional buckling of the doubly symmetric pair is not examined"
+		m += "; the doubly symmetric pair's torsional buckling (" + ed.Clause("E4") + ") takes the two pieces as one section (J of both, Cw = Iy·ho²/4 with the pair's Iy), which their connectors must make them"
 	}
 	c = append(c, m+".")
 	if pl := conn.Plate; pl != nil {

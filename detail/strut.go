@@ -105,11 +105,17 @@ func (j job) rolledStrut(sh section.Shape, props section.ShapeProps) *engine.Str
 	case engine.DoubleChannel:
 		// two channels back to back: flexural about the strong axis, and
 		// about the axis in the plate's mid-plane with E6 between the
-		// connectors (the torsional mode of the doubly symmetric pair is
-		// not examined)
+		// connectors; and the doubly symmetric pair's torsional buckling
+		// (E4-4), the pair taken as one section by its connectors: J of
+		// both channels, Cw = Iy·ho²/4 with the pair's Iy about the plate's
+		// mid-plane, as for a W (the flanges of both channels on each side
+		// forming one flange; the webs, on the axis, add little)
 		off := float64(props.Xbar + j.gap()/2)
 		s.Kind = engine.StrutFlexural
 		s.Rx, s.Ry = props.Rx, units.Length(math.Sqrt(float64(props.Ry*props.Ry)+off*off))
+		ho := float64(sh.D - sh.Tf)
+		s.Cw = 2 * float64(props.Area) * float64(s.Ry*s.Ry) * ho * ho / 4
+		s.J = 2 * (2*float64(sh.Bf)*tf*tf*tf + ho*tw*tw*tw) / 3 // each channel's, as above
 		s.BuiltUp, s.Connectors, s.Ri, s.Ki = true, j.Member.Buckling.Connectors, props.Ry, 0.75
 		s.SnugTight = !j.Member.Buckling.ConnectorTight
 		web.Count = 2

@@ -177,9 +177,10 @@ func memberBuckling(c *Connection) buckling {
 	b.Fe = ElasticBucklingStress(E, b.lcr)
 	b.extra = append(b.extra, Value{Name: "Lc_rx", Sym: "Lc/rx", V: lx, What: "slenderness about x"},
 		Value{Name: "Lc_ry", Sym: "Lc/ry", V: ly, What: "slenderness about y (E6-modified for two pieces)"})
-	if col.J > 0 && !col.BuiltUp {
-		// doubly symmetric: torsional buckling about the shear centre,
-		// the centroid (E4-4: r̄o² = rx² + ry², H = 1)
+	if col.J > 0 {
+		// doubly symmetric (a W, or two channels back to back taken as
+		// one section): torsional buckling about the shear centre, the
+		// centroid (E4-4: r̄o² = rx² + ry², H = 1; ry unmodified by E6)
 		ro2 := float64(col.Rx*col.Rx) + float64(col.Ry*col.Ry)
 		Fez := TorsionalStress(E, G, col.Cw, col.J, Lc, m.Ag, ro2)
 		b.extra = append(b.extra, Value{Name: "Fez", V: float64(Fez), Dim: units.DimStress, What: "torsional buckling stress (E4-4)"})
