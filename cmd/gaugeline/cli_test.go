@@ -222,7 +222,7 @@ func TestGoodJobs(t *testing.T) {
 func TestDemoAndRules(t *testing.T) {
 	out := t.TempDir()
 	r := gaugeline(t, ".", "demo", "-o", out)
-	if r.code != 0 || strings.Count(r.stdout, "check    PASS") != 7 || !strings.Contains(r.stdout, "engineer of record") {
+	if r.code != 0 || strings.Count(r.stdout, "check    PASS") != 8 || !strings.Contains(r.stdout, "engineer of record") {
 		t.Errorf("demo: exit %d\n%s%s", r.code, r.stdout, r.stderr)
 	}
 	// The invented measurements put one hole 0.09 in off: past the 1/16 in
@@ -230,7 +230,7 @@ func TestDemoAndRules(t *testing.T) {
 	if !strings.Contains(r.stdout, "verdict REVIEW") {
 		t.Errorf("demo QA verdict is not review:\n%s", r.stdout)
 	}
-	for _, mark := range []string{"PR-VB2", "PR-HS5", "PR-KT1", "PR-DB4", "PR-TS5", "PR-TC7", "PR-KB3"} {
+	for _, mark := range []string{"PR-VB2", "PR-HS5", "PR-KT1", "PR-DB4", "PR-TS5", "PR-TC7", "PR-KB3", "PR-CS8"} {
 		for _, ext := range []string{".yaml", ".json", ".html", ".dxf", "-member.cam.dxf", "-plate.cam.dxf"} {
 			f := mark + ext
 			if _, err := os.Stat(filepath.Join(out, mark, f)); err != nil || !strings.Contains(r.stdout, f) {

@@ -194,7 +194,11 @@ func demoWrite(r *detail.Report, jobYAML []byte, how, dir string, out io.Writer)
 	if c := d.Conn.Compression; c > 0 {
 		demand += fmt.Sprintf(" tension, %.1f %s compression", d.Job.Units.ToJob(float64(c), units.DimForce), d.Job.Units.Labels().Force)
 	}
-	fmt.Fprintf(out, "%s  %s %s, %s\n", mark, d.Conn.Member.Shape, d.Info.Designation, demand)
+	member := d.Info.Designation
+	if d.InfoB != nil {
+		member += " spliced to " + d.InfoB.Designation
+	}
+	fmt.Fprintf(out, "%s  %s %s, %s\n", mark, d.Conn.Member.Shape, member, demand)
 	fmt.Fprintf(out, "  %s\n", how)
 	fmt.Fprintf(out, "  check    %s, %s\n", strings.ToUpper(r.Verdict()), r.VerdictReason())
 	names := make([]string, len(files))
