@@ -231,6 +231,9 @@ func (p *problem) lift(x engine.Result, c *cand, maxBolts int) (text, lift strin
 		lift = "choose a thicker plate or a stronger plate grade"
 		if x.ID == "plate.yield" || x.ID == "plate.rupture" {
 			lift = "choose a thicker or wider plate, or a stronger plate grade"
+			if p.outline {
+				lift = "choose a thicker plate or a stronger plate grade, or draw the outline wider across the Whitmore section"
+			}
 		}
 	case "bolts.shear", "bolts.slip":
 		per := x.Available / units.Force(max(val("n"), 1))
