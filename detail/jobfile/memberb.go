@@ -73,9 +73,6 @@ func (j *Job) MemberBView() *Job {
 	return &v
 }
 
-// IsMemberBView reports whether j is a MemberBView.
-func (j *Job) IsMemberBView() bool { return j.memberB }
-
 // rekey is m with member_b's keys under member and the member's dropped.
 func rekey[V any](m map[string]V) map[string]V {
 	out := make(map[string]V, len(m))

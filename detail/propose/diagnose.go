@@ -59,7 +59,7 @@ func (p *problem) explain(out *Proposal) {
 	var corners []*cand
 	var maxBolts int
 	var allFail map[string]bool // nil: what fails in every corner
-	if p.enumerate != "" {
+	if p.outline {
 		corners, maxBolts, allFail = p.outlineCorners()
 	} else {
 		var ok bool

@@ -4,7 +4,6 @@ import (
 	"math"
 
 	"gaugeline/detail"
-	"gaugeline/detail/jobfile"
 	"gaugeline/rules/units"
 )
 
@@ -17,17 +16,6 @@ import (
 // the plate edge is not a dimension of the space). The same holds for
 // the diagnosis of a job where nothing passes: every candidate is
 // checked, and only those that carry an answer are kept.
-
-// enumerateReason says why a job's candidates are all checked, or "":
-// a fixed outline (above). (A splice plate in compression, whose buckling
-// length between the groups, 2·end + gap, grows with the end distance, is
-// searched with a group per end distance instead: problem.byEnd.)
-func enumerateReason(_ *jobfile.Job, outline bool) string {
-	if outline {
-		return "the plate is the job's outline"
-	}
-	return ""
-}
 
 // outlineEdge is the distance from the last bolt to the outline's free
 // edge (its greatest x), for people: the job file has no such key.

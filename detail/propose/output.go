@@ -211,7 +211,7 @@ type jsonInfeasible struct {
 // search is the JSON of how the search went.
 func (p *Proposal) search(mode SearchMode) jsonSearch {
 	m := "pruned"
-	if mode == Exhaustive || p.Enumerated != "" {
+	if mode == Exhaustive || p.Outline {
 		m = "exhaustive"
 	}
 	var prefer []string
@@ -279,8 +279,8 @@ func (p *Proposal) writeHead(b *strings.Builder, mode SearchMode, md bool) {
 		fmt.Fprintf(b, "%s — proposed layout\n", p.Job.Mark)
 	}
 	how := s.Mode + " search checked"
-	if p.Enumerated != "" {
-		how = p.Enumerated + ", so every candidate was checked:"
+	if p.Outline {
+		how = "the plate is the job's outline, so every candidate was checked:"
 	}
 	fmt.Fprintf(b, "objective: %s; %s %d of %d candidates\n", obj, how, p.Evaluated, p.Space)
 	if !p.Found() {

@@ -62,9 +62,6 @@ type problem struct {
 	// search's monotonicity does not hold, and every candidate is checked
 	// (outline.go).
 	outline bool
-	// enumerate, when not "", says why every candidate is checked: the
-	// pruned search's monotonicity does not hold for the job (outline.go).
-	enumerate string
 	// splitEnds: more end can lower a strength (a splice plate in
 	// compression buckles over 2·end + gap between the groups), so each
 	// end distance is a group of its own (byEnd).
@@ -119,7 +116,6 @@ func newProblem(j *jobfile.Job) (*problem, error) {
 	}
 	p := &problem{job: j, build: bld, ed: ed, step: j.Stock.Step, obj: orderOf(j.Stock), snapped: map[int]units.Length{},
 		grids: map[[2]int][]units.Length{}, outline: j.Plate != nil && j.Plate.Outline != nil}
-	p.enumerate = enumerateReason(j, p.outline)
 	p.splitEnds = j.Plate != nil && j.Plate.Kind == engine.Splice && j.Pushes()
 	diams, err := stockDiameters(j)
 	if err != nil {

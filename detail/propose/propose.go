@@ -111,18 +111,14 @@ type SearchLimitError struct {
 	// for the exhaustive search, refused before it starts.
 	Checked int
 	Limit   int
-	// Outline: the job's plate.outline made the search exhaustive;
-	// Reason says why it was made exhaustive ("" when it was asked for).
+	// Outline: the job's plate.outline made the search exhaustive.
 	Outline bool
-	Reason  string
 }
 
 func (e *SearchLimitError) Error() string {
 	switch {
 	case e.Outline:
 		return fmt.Sprintf("%s: a plate outline is searched candidate by candidate, and this one has %d candidates, more than the limit of %d", e.File, e.Space, e.Limit)
-	case e.Reason != "":
-		return fmt.Sprintf("%s: %s, so the search checks every candidate, and this one has %d, more than the limit of %d", e.File, e.Reason, e.Space, e.Limit)
 	case e.Mode == Exhaustive:
 		return fmt.Sprintf("%s: the exhaustive search has %d candidates, more than the limit of %d", e.File, e.Space, e.Limit)
 	}
@@ -192,10 +188,8 @@ type Proposal struct {
 	Alternatives         []Alternative
 
 	// Outline: the plate is the job's plate.outline, and the search
-	// checked every candidate (outline.go); Enumerated says why every
-	// candidate was checked where the job made it so ("" otherwise).
-	Outline    bool
-	Enumerated string
+	// checked every candidate (outline.go).
+	Outline bool
 
 	Space     int // candidates in the space
 	Evaluated int // candidates fully checked to find the choice
@@ -227,12 +221,12 @@ func Propose(j *jobfile.Job, opt ProposeOptions) (*Proposal, error) {
 	if err != nil {
 		return nil, err
 	}
-	out := &Proposal{Job: j, Space: p.space(), Outline: p.outline, Enumerated: p.enumerate}
-	if p.enumerate != "" {
+	out := &Proposal{Job: j, Space: p.space(), Outline: p.outline}
+	if p.outline {
 		opt.Mode = Exhaustive // outline.go
 	}
 	if opt.MaxCandidates > 0 && opt.Mode == Exhaustive && out.Space > opt.MaxCandidates {
-		return nil, &SearchLimitError{File: j.File, Mode: Exhaustive, Space: out.Space, Limit: opt.MaxCandidates, Outline: p.outline, Reason: p.enumerate}
+		return nil, &SearchLimitError{File: j.File, Mode: Exhaustive, Space: out.Space, Limit: opt.MaxCandidates, Outline: p.outline}
 	}
 	if opt.Mode == Pruned {
 		// (the exhaustive search's diagnosis checks fewer than the space)

@@ -179,9 +179,9 @@ func bestInStock(j *jobfile.Job, limit int) (*Proposal, int, error) {
 	}
 	var tops []*cand
 	switch {
-	case p.enumerate != "" && out.Space > limit:
+	case p.outline && out.Space > limit:
 		return nil, 0, nil
-	case p.enumerate != "":
+	case p.outline:
 		tops, _ = p.exhaustive(out.Space, nil)
 	default:
 		tops, _ = p.prunedTops(out, 0, nil)
