@@ -11,12 +11,7 @@ import "gaugeline/rules"
 // cannot answer (e.g. the pretension of a bolt grade that has none).
 func Check(c *Connection) ([]Result, error) {
 	out := make([]Result, 0, 12) // every limit state a connection can have
-	out = append(out, MemberYield(c), MemberRupture(c), MemberBlockShear(c))
-	mb := MemberBearing(c)
-	out = append(out, mb)
-	if needsCombined(c) {
-		out = append(out, MemberCombined(c))
-	}
+	out, mb := memberChecks(c, out)
 	var plateShares []BoltShare
 	if c.Plate != nil {
 		pb := PlateBearing(c)
@@ -37,6 +32,18 @@ func Check(c *Connection) ([]Result, error) {
 	}
 	out = append(out, memberBChecks(c, plateShares)...)
 	return out, nil
+}
+
+// memberChecks appends the member's own limit states to out: yielding,
+// rupture, block shear, bearing (returned too, for the bolt group) and a
+// flat's combined check where it applies.
+func memberChecks(c *Connection, out []Result) ([]Result, Result) {
+	mb := MemberBearing(c)
+	out = append(out, MemberYield(c), MemberRupture(c), MemberBlockShear(c), mb)
+	if needsCombined(c) {
+		out = append(out, MemberCombined(c))
+	}
+	return out, mb
 }
 
 // Governing returns the index of the result with the highest ratio; ties

@@ -56,11 +56,7 @@ func memberBChecks(c *Connection, plateShares []BoltShare) []Result {
 	if b == nil {
 		return nil
 	}
-	mb := MemberBearing(b)
-	out := []Result{MemberYield(b), MemberRupture(b), MemberBlockShear(b), mb}
-	if needsCombined(b) {
-		out = append(out, MemberCombined(b))
-	}
+	out, mb := memberChecks(b, nil)
 	out = append(out, BoltGroup(b, mb.PerBolt, plateShares))
 	if b.Compression > 0 && b.Member.Strut != nil {
 		var plate []BoltShare
