@@ -86,26 +86,44 @@ func (p *problem) explain(out *Proposal) {
 // group whose holes fit, and returns those that could be built and the
 // most bolts of any group; false when the search stopped at its limit.
 func (p *problem) corners() (corners []*cand, maxBolts int, ok bool) {
+	maxBolts = p.eachFittingGage(func(g *group, g2i int, g1 units.Length) bool {
+		if p.stopped {
+			return false
+		}
+		for _, seg := range g.segments {
+			c := p.newCand(g, g2i, g1, seg[1], len(g.end)-1, len(g.edge)-1)
+			if p.eval(c) {
+				corners = append(corners, c)
+			}
+		}
+		return true
+	})
+	if p.stopped {
+		return nil, 0, false
+	}
+	return corners, maxBolts, true
+}
+
+// eachFittingGage calls f with every gage2 index and first gage of every
+// group whose holes fit, in order, until f returns false; it returns the
+// most bolts of any group.
+func (p *problem) eachFittingGage(f func(g *group, g2i int, g1 units.Length) bool) (maxBolts int) {
 	for _, g := range p.groups {
 		maxBolts = max(maxBolts, g.nT)
+	}
+	for _, g := range p.groups {
 		if !g.fits {
 			continue
 		}
 		for g2i := range g.gage2 {
 			for _, g1 := range p.gagesFor(g, g2i) {
-				if p.stopped {
-					return nil, 0, false
-				}
-				for _, seg := range g.segments {
-					c := p.newCand(g, g2i, g1, seg[1], len(g.end)-1, len(g.edge)-1)
-					if p.eval(c) {
-						corners = append(corners, c)
-					}
+				if !f(g, g2i, g1) {
+					return maxBolts
 				}
 			}
 		}
 	}
-	return corners, maxBolts, true
+	return maxBolts
 }
 
 // limitBlockers are the limit states that fail in every corner, each with

@@ -39,50 +39,43 @@ func (p *problem) outlineCorners() (kept []*cand, maxBolts int, allFail map[stri
 	bestRatio := map[string]float64{}
 	var ids []string // limit states in the order first seen
 	var first, closest *cand
-	for _, g := range p.groups {
-		maxBolts = max(maxBolts, g.nT)
-		if !g.fits {
-			continue
-		}
-		for g2i := range g.gage2 {
-			for _, g1 := range p.gagesFor(g, g2i) {
-				for i := range g.pitch {
-					for j := range g.end {
-						c := p.newCand(g, g2i, g1, i, j, 0)
-						if !p.eval(c) {
-							continue
-						}
-						failing := map[string]bool{}
-						for _, f := range c.rep.Findings {
-							if !f.Pass && !f.Advisory {
-								failing[f.ID] = true
-							}
-						}
-						if first == nil {
-							first, allFail = c, failing
-						}
-						for id := range allFail {
-							if !failing[id] {
-								delete(allFail, id)
-							}
-						}
-						for _, x := range c.rep.Results {
-							r, seen := bestRatio[x.ID]
-							if !seen {
-								ids = append(ids, x.ID)
-							}
-							if !seen || x.Ratio < r {
-								best[x.ID], bestRatio[x.ID] = c, x.Ratio
-							}
-						}
-						if closest == nil || c.rep.GoverningResult().Ratio < closest.rep.GoverningResult().Ratio {
-							closest = c
-						}
+	maxBolts = p.eachFittingGage(func(g *group, g2i int, g1 units.Length) bool {
+		for i := range g.pitch {
+			for j := range g.end {
+				c := p.newCand(g, g2i, g1, i, j, 0)
+				if !p.eval(c) {
+					continue
+				}
+				failing := map[string]bool{}
+				for _, f := range c.rep.Findings {
+					if !f.Pass && !f.Advisory {
+						failing[f.ID] = true
 					}
+				}
+				if first == nil {
+					first, allFail = c, failing
+				}
+				for id := range allFail {
+					if !failing[id] {
+						delete(allFail, id)
+					}
+				}
+				for _, x := range c.rep.Results {
+					r, seen := bestRatio[x.ID]
+					if !seen {
+						ids = append(ids, x.ID)
+					}
+					if !seen || x.Ratio < r {
+						best[x.ID], bestRatio[x.ID] = c, x.Ratio
+					}
+				}
+				if closest == nil || c.rep.GoverningResult().Ratio < closest.rep.GoverningResult().Ratio {
+					closest = c
 				}
 			}
 		}
-	}
+		return true
+	})
 	if first == nil {
 		return nil, maxBolts, nil
 	}
