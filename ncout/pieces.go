@@ -213,7 +213,7 @@ func memberPieces(r *detail.Report, s *sheet.Sheet, p *sheet.Part) ([]Piece, err
 	pc.FlangeT, pc.WebT, pc.Radius = prof.tf, prof.tw, prof.r
 	pc.Weight, pc.Paint = prof.area*1e-6*density, prof.paint
 	if prof.code == "B" { // a flat bar: its contour too, its weight per m² like a plate's
-		pc.Weight = plateWeight(prof.width)
+		pc.Weight = plateWeight(prof.tf)
 		pc.Contour = []Point{{0, 0}, {length, 0}, {length, prof.height}, {0, prof.height}}
 	}
 	for _, f := range prof.faces {

@@ -43,12 +43,11 @@ func (p *parser) parseMemberB(n *yaml.Node) error {
 	if err := p.parseSection(b, m); err != nil {
 		return err
 	}
-	if !b.has("grade") && !b.has("fy") && !b.has("fu") {
+	ownSteel := b.has("grade") || b.has("fy") || b.has("fu")
+	if !ownSteel {
 		m.Steel = j.Member.Steel // member B's steel is the member's unless given
-		if err := p.parseMemberRestSteel(b, m, false); err != nil {
-			return err
-		}
-	} else if err := p.parseMemberRestSteel(b, m, true); err != nil {
+	}
+	if err := p.parseMemberRestSteel(b, m, ownSteel); err != nil {
 		return err
 	}
 	j.MemberB = m
